@@ -1,0 +1,11 @@
+import { StrictMode } from 'react';
+import { createRoot } from 'react-dom/client';
+import { App } from './views/App.tsx';
+
+const container = document.getElementById('root');
+if (!container) throw new Error('Polewright: the page has no #root element.');
+createRoot(container).render(
+  <StrictMode>
+    <App />
+  </StrictMode>,
+);
