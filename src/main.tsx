@@ -1,3 +1,4 @@
+import './views/theme.css';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { App } from './views/App.tsx';

@@ -1,0 +1,33 @@
+#!/usr/bin/env python3
+"""Times numpy.roots for bench/roots.ts on the polynomials it wrote to a JSON file.
+
+Usage: python3 bench/numpy_roots.py POLYS.json, then one request per line on standard input:
+"INDEX INNER" runs numpy.roots INNER times on polynomial INDEX and answers one line with the mean seconds
+per call; "quit" ends. A long-lived process lets the caller interleave our runs with numpy's.
+"""
+import json
+import sys
+import time
+
+import numpy as np
+
+
+def main():
+    with open(sys.argv[1], encoding="utf8") as f:
+        polys = [np.asarray(p, dtype=float) for p in json.load(f)]
+    np.roots(polys[0])  # warm up LAPACK and numpy's dispatch
+    print(f"ready numpy {np.__version__}", flush=True)
+    for line in sys.stdin:
+        parts = line.split()
+        if not parts or parts[0] == "quit":
+            break
+        p = polys[int(parts[0])]
+        inner = int(parts[1])
+        t0 = time.perf_counter()
+        for _ in range(inner):
+            np.roots(p)
+        print(repr((time.perf_counter() - t0) / inner), flush=True)
+
+
+if __name__ == "__main__":
+    main()

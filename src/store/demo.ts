@@ -1,0 +1,29 @@
+/** The design shown on first open: an invented scenario (see the README), built from hertz. */
+import type { Root } from '../core/types.ts';
+import type { Design } from './design.ts';
+
+/** A conjugate pair at frequency f (Hz) and radius r, stored once. */
+function pairAt(f: number, r: number, fs: number, multiplicity = 1): Root {
+  const w = (2 * Math.PI * f) / fs;
+  return { re: r * Math.cos(w), im: r * Math.sin(w), multiplicity };
+}
+
+/**
+ * Hopper scale: a load-cell channel sampled at 2 kHz picks up 50 Hz mains hum and its 3rd and 5th
+ * harmonics. Zero pairs sit on the unit circle at 50, 150 and 250 Hz; pole pairs just inside them set a
+ * −3 dB width of about 4 Hz ((1 − r)·fs/π ≈ 4 Hz); the gain is set for 0 dB at DC.
+ */
+export function demoDesign(): Design {
+  const fs = 2000;
+  const r = 1 - (4 * Math.PI) / fs;
+  const hum = [50, 150, 250];
+  return {
+    sampleRate: fs,
+    zeros: hum.map((f) => pairAt(f, 1, fs)),
+    poles: hum.map((f) => pairAt(f, r, fs)),
+    gainRule: { kind: 'dc' },
+    name: 'Hopper scale: 50 Hz hum notches',
+    note:
+      'Load-cell bridge on a grain-hopper weighing station, sampled at 2 kHz. Mains hum at 50 Hz and its 3rd and 5th harmonics must drop by at least 40 dB while the weight reading below 20 Hz droops by less than 0.1 dB.',
+  };
+}

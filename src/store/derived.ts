@@ -1,0 +1,122 @@
+/**
+ * Derived data: everything the views draw, computed from the design by the engine and memoised on the
+ * identity of its inputs (the design is immutable, so a new object means a change).
+ */
+import type { Zpk, TransferFunction, Section } from '../core/types.ts';
+import { zpkToTf, zpkToSections } from '../core/system.ts';
+import { responseZpk, frequencyGrid, evalZpkAt, type FrequencyResponse } from '../core/response.ts';
+import { stabilityOfZpk, type Stability } from '../core/stability.ts';
+import { rootReadouts, type RootReadout } from '../core/readouts.ts';
+import { filterSections } from '../core/time.ts';
+import { makeImpulse, makeStep, makeSine, makeWhiteNoise } from '../core/signals.ts';
+import { closedFormResponse, type ClosedForm } from '../core/closedForm.ts';
+import type { Design, GainRule } from './design.ts';
+import type { ViewSettings } from './view.ts';
+import type { WorkbenchState } from './store.ts';
+import { memoLast } from './memo.ts';
+
+/** Grid used to find the peak for the 'peak' gain rule. */
+export const PEAK_SEARCH_POINTS = 8192;
+/** Highest order for which the closed-form time response is listed (partial fractions grow ill-conditioned). */
+export const CLOSED_FORM_MAX_ORDER = 24;
+/** Lowest frequency of a log frequency axis, as a fraction of the sample rate. */
+export const LOG_AXIS_MIN_FRACTION = 1e-4;
+
+export interface ResolvedGain {
+  gain: number;
+  /** Why the rule could not be met, when it could not (the gain then falls back to 1). */
+  problem: string | null;
+}
+
+/** The gain k that a gain rule asks for, given the roots. */
+export function resolveGain(design: Design): ResolvedGain {
+  const rule: GainRule = design.gainRule;
+  if (rule.kind === 'fixed') return { gain: rule.value, problem: null };
+  const unit: Zpk = { zeros: design.zeros, poles: design.poles, gain: 1 };
+  let mag: number;
+  let where: string;
+  if (rule.kind === 'peak') {
+    const r = responseZpk(unit, frequencyGrid(PEAK_SEARCH_POINTS));
+    mag = 0;
+    for (let i = 0; i < r.magnitude.length; i++) if (r.magnitude[i]! > mag) mag = r.magnitude[i]!;
+    where = 'the peak';
+  } else {
+    const omega =
+      rule.kind === 'dc' ? 0 : rule.kind === 'nyquist' ? Math.PI : (2 * Math.PI * rule.hz) / design.sampleRate;
+    const h = evalZpkAt(unit, Math.cos(omega), Math.sin(omega));
+    mag = Math.hypot(h.re, h.im);
+    where = rule.kind === 'dc' ? 'DC' : rule.kind === 'nyquist' ? 'Nyquist' : `${rule.hz} Hz`;
+  }
+  if (!(mag > 0) || !Number.isFinite(mag)) {
+    return {
+      gain: 1,
+      problem: `|H| is ${mag === 0 ? 'zero' : 'infinite'} at ${where}, so 0 dB there is impossible; gain set to 1`,
+    };
+  }
+  return { gain: 1 / mag, problem: null };
+}
+
+const gainOf = memoLast(resolveGain);
+const zpkOf = memoLast((design: Design): Zpk => ({
+  zeros: design.zeros,
+  poles: design.poles,
+  gain: gainOf(design).gain,
+}));
+const tfOf = memoLast((design: Design, zpk: Zpk): TransferFunction =>
+  design.typed ? { b: design.typed.b, a: design.typed.a } : zpkToTf(zpk),
+);
+const sectionsOf = memoLast((zpk: Zpk): Section[] => zpkToSections(zpk));
+const gridOf = memoLast((points: number, axis: ViewSettings['frequencyAxis']) =>
+  frequencyGrid(points, axis === 'log' ? { log: true, fMin: LOG_AXIS_MIN_FRACTION } : {}),
+);
+const responseOf = memoLast((zpk: Zpk, omega: Float64Array) => responseZpk(zpk, omega));
+const stabilityOf = memoLast(stabilityOfZpk);
+const readoutsOf = memoLast((zpk: Zpk, fs: number) => rootReadouts(zpk, fs));
+
+/** The time-view input signal for the current settings. */
+function timeInput(view: ViewSettings, fs: number): Float64Array {
+  const n = view.timeSamples;
+  switch (view.timeInput) {
+    case 'impulse':
+      return makeImpulse(n);
+    case 'step':
+      return makeStep(n);
+    case 'sine':
+      return makeSine((2 * Math.PI * view.sineHz) / fs, n);
+    case 'noise':
+      return makeWhiteNoise(n, view.noiseSeed);
+  }
+}
+const inputOf = memoLast(
+  (kind: ViewSettings['timeInput'], n: number, sineHz: number, seed: number, fs: number) =>
+    timeInput({ timeInput: kind, timeSamples: n, sineHz, noiseSeed: seed } as ViewSettings, fs),
+);
+const outputOf = memoLast((sections: Section[], input: Float64Array) => filterSections(sections, input));
+const closedFormOf = memoLast(
+  (tf: TransferFunction, order: number, kind: ViewSettings['timeInput'], sineHz: number, fs: number): ClosedForm | null => {
+    if (order > CLOSED_FORM_MAX_ORDER || kind === 'noise') return null;
+    if (kind === 'sine') return closedFormResponse(tf, { kind: 'sine', omega: (2 * Math.PI * sineHz) / fs });
+    return closedFormResponse(tf, { kind });
+  },
+);
+
+/** Selectors: call with the store state; each returns the same object until its inputs change. */
+export const selectGain = (s: WorkbenchState): ResolvedGain => gainOf(s.design);
+export const selectZpk = (s: WorkbenchState): Zpk => zpkOf(s.design);
+export const selectTf = (s: WorkbenchState): TransferFunction => tfOf(s.design, zpkOf(s.design));
+export const selectSections = (s: WorkbenchState): Section[] => sectionsOf(zpkOf(s.design));
+export const selectResponse = (s: WorkbenchState): FrequencyResponse =>
+  responseOf(zpkOf(s.design), gridOf(s.view.responsePoints, s.view.frequencyAxis));
+export const selectStability = (s: WorkbenchState): Stability => stabilityOf(zpkOf(s.design));
+export const selectReadouts = (s: WorkbenchState): RootReadout[] => readoutsOf(zpkOf(s.design), s.design.sampleRate);
+export const selectTimeInput = (s: WorkbenchState): Float64Array =>
+  inputOf(s.view.timeInput, s.view.timeSamples, s.view.sineHz, s.view.noiseSeed, s.design.sampleRate);
+export const selectTimeOutput = (s: WorkbenchState): Float64Array =>
+  outputOf(selectSections(s), selectTimeInput(s));
+/** Number of poles (with conjugates and multiplicity) or zeros, whichever is larger. */
+export const selectOrder = (s: WorkbenchState): number => {
+  const count = (rs: Design['zeros']) => rs.reduce((n, r) => n + r.multiplicity * (r.im === 0 ? 1 : 2), 0);
+  return Math.max(count(s.design.zeros), count(s.design.poles));
+};
+export const selectClosedForm = (s: WorkbenchState): ClosedForm | null =>
+  closedFormOf(selectTf(s), selectOrder(s), s.view.timeInput, s.view.sineHz, s.design.sampleRate);

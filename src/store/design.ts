@@ -1,0 +1,65 @@
+/**
+ * The design: the source of truth of the workbench. Roots are stored once (a complex root with im > 0
+ * implies its conjugate), coefficients a user typed are kept exactly until a root is edited.
+ */
+import type { Root } from '../core/types.ts';
+
+/** How the overall gain k is set: a fixed number, or chosen so that |H| = 1 (0 dB) at a place. */
+export type GainRule =
+  | { kind: 'fixed'; value: number }
+  | { kind: 'dc' }
+  | { kind: 'nyquist' }
+  | { kind: 'frequency'; hz: number }
+  | { kind: 'peak' };
+
+/** Coefficients exactly as the user typed them, with the text they came from. */
+export interface TypedCoefficients {
+  b: number[];
+  a: number[];
+  text: string;
+}
+
+export interface Design {
+  /** Sample rate in Hz. */
+  sampleRate: number;
+  zeros: Root[];
+  poles: Root[];
+  gainRule: GainRule;
+  /** Present while the design is exactly what the user typed; dropped on the first root edit. */
+  typed?: TypedCoefficients;
+  /** A short title shown on the page, e.g. the scenario the design belongs to. */
+  name: string;
+  /** Free text about the design (shown as text, never as markup). */
+  note: string;
+}
+
+export type RootKind = 'zero' | 'pole';
+
+/** Identifies one stored root (its conjugate mirror, if any, goes with it). */
+export interface RootRef {
+  kind: RootKind;
+  index: number;
+}
+
+/** Returns the design's zeros or poles array. */
+export function rootsOf(design: Design, kind: RootKind): Root[] {
+  return kind === 'zero' ? design.zeros : design.poles;
+}
+
+/** A copy of the design with one root list replaced and typed coefficients released. */
+export function withRoots(design: Design, kind: RootKind, roots: Root[]): Design {
+  const { typed: _typed, ...rest } = design;
+  return kind === 'zero' ? { ...rest, zeros: roots } : { ...rest, poles: roots };
+}
+
+/** An empty design: no roots, gain 1, at the given sample rate. */
+export function emptyDesign(sampleRate = 1000): Design {
+  return {
+    sampleRate,
+    zeros: [],
+    poles: [],
+    gainRule: { kind: 'fixed', value: 1 },
+    name: 'Empty design',
+    note: '',
+  };
+}

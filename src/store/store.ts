@@ -1,0 +1,135 @@
+/**
+ * The workbench store (zustand, framework-free). The design is the source of truth; every change goes
+ * through a named action with an undo policy: 'record' pushes one undo step, 'gesture' edits inside a
+ * gesture (a drag) and leaves the single step to endGesture, 'none' does not touch history.
+ */
+import { createStore, type StoreApi } from 'zustand/vanilla';
+import type { Root } from '../core/types.ts';
+import { demoDesign } from './demo.ts';
+import { emptyDesign, type Design, type GainRule, type RootRef, type TypedCoefficients } from './design.ts';
+import { closeGesture, emptyHistory, recordEdit, type History } from './history.ts';
+import * as edits from './rootEdits.ts';
+import { defaultView, type ViewSettings, type ViewState } from './view.ts';
+
+export interface DesignActions {
+  moveRoot(ref: RootRef, re: number, im: number): void;
+  addRoot(kind: RootRef['kind'], root: Root): void;
+  deleteRoot(ref: RootRef): void;
+  setMultiplicity(ref: RootRef, multiplicity: number): void;
+  splitRoot(ref: RootRef): void;
+  joinPair(ref: RootRef): void;
+  setGainRule(rule: GainRule): void;
+  setSampleRate(hz: number): void;
+  /** Replaces the roots and gain by a system the user typed, keeping the typed coefficients. */
+  loadTyped(zeros: Root[], poles: Root[], gain: number, typed: TypedCoefficients): void;
+  /** Replaces the whole design (demo, empty, opened file or link); one undo step. */
+  replaceDesign(design: Design): void;
+  setName(name: string): void;
+}
+
+export interface HistoryActions {
+  beginGesture(): void;
+  endGesture(): void;
+  undo(): void;
+  redo(): void;
+}
+
+export interface ViewActions {
+  select(ref: RootRef | null): void;
+  setView(patch: Partial<ViewSettings>): void;
+  setDragging(dragging: boolean): void;
+}
+
+export interface WorkbenchState extends ViewState, DesignActions, HistoryActions, ViewActions {
+  design: Design;
+  history: History;
+}
+
+export type WorkbenchStore = StoreApi<WorkbenchState>;
+
+/** Largest sample rate accepted, Hz. */
+export const MAX_SAMPLE_RATE = 1e9;
+
+/** Creates a store holding the given design (the demo design by default). */
+export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchStore {
+  return createStore<WorkbenchState>()((set, get) => {
+    /** Applies a pure edit; records one undo step unless inside a gesture. */
+    const edit = (fn: (d: Design) => Design) => {
+      const { design, history } = get();
+      const next = fn(design);
+      if (next === design) return;
+      set({ design: next, history: recordEdit(history, design) });
+    };
+    return {
+      design: initial,
+      history: emptyHistory,
+      view: defaultView,
+      selection: null,
+      dragging: false,
+
+      moveRoot: (ref, re, im) => edit((d) => edits.moveRoot(d, ref, re, im)),
+      addRoot: (kind, root) => {
+        edit((d) => edits.addRoot(d, kind, root));
+        const n = kind === 'zero' ? get().design.zeros.length : get().design.poles.length;
+        set({ selection: { kind, index: n - 1 } });
+      },
+      deleteRoot: (ref) => {
+        edit((d) => edits.deleteRoot(d, ref));
+        set({ selection: null });
+      },
+      setMultiplicity: (ref, m) => edit((d) => edits.setMultiplicity(d, ref, m)),
+      splitRoot: (ref) => edit((d) => edits.splitRoot(d, ref)),
+      joinPair: (ref) => edit((d) => edits.joinPair(d, ref)),
+      setGainRule: (rule) => edit((d) => ({ ...d, gainRule: rule })),
+      setSampleRate: (hz) => {
+        if (!(hz > 0 && hz <= MAX_SAMPLE_RATE)) return;
+        edit((d) => (d.sampleRate === hz ? d : { ...d, sampleRate: hz }));
+      },
+      loadTyped: (zeros, poles, gain, typed) => {
+        edit((d) => ({ ...d, zeros, poles, gainRule: { kind: 'fixed', value: gain }, typed }));
+        set({ selection: null });
+      },
+      replaceDesign: (design) => {
+        edit(() => design);
+        set({ selection: null });
+      },
+      setName: (name) => edit((d) => (d.name === name ? d : { ...d, name })),
+
+      beginGesture: () => {
+        const { history, design } = get();
+        if (!history.gestureStart) set({ history: { ...history, gestureStart: design } });
+      },
+      endGesture: () => set({ history: closeGesture(get().history, get().design) }),
+      undo: () => {
+        const { history, design } = get();
+        const h = history.gestureStart ? closeGesture(history, design) : history;
+        const prev = h.past[h.past.length - 1];
+        if (!prev) return;
+        set({
+          design: prev,
+          history: { past: h.past.slice(0, -1), future: [design, ...h.future], gestureStart: null },
+          selection: null,
+        });
+      },
+      redo: () => {
+        const { history, design } = get();
+        const next = history.future[0];
+        if (!next) return;
+        set({
+          design: next,
+          history: { past: [...history.past, design], future: history.future.slice(1), gestureStart: null },
+          selection: null,
+        });
+      },
+
+      select: (ref) => set({ selection: ref }),
+      setView: (patch) => set({ view: { ...get().view, ...patch } }),
+      setDragging: (dragging) => set({ dragging }),
+    };
+  });
+}
+
+/** A store with the empty design, for "start empty". */
+export function createEmptyStore(): WorkbenchStore {
+  return createWorkbenchStore(emptyDesign());
+}
