@@ -1,9 +1,54 @@
-/** Command-line entry point: returns the process exit code. */
+/** The `polewright` command line: a thin front end on the engine. */
+import { UsageError } from './args.ts';
+import { runAnalyze } from './commands/analyze.ts';
+import { runResponse } from './commands/response.ts';
+import { runSimulate } from './commands/simulate.ts';
+
 export interface CliIo {
   stdout: (s: string) => void;
   stderr: (s: string) => void;
 }
+
+const COMMANDS: Record<string, (argv: string[], io: CliIo) => number> = {
+  analyze: runAnalyze,
+  response: runResponse,
+  simulate: runSimulate,
+};
+
+export const USAGE = `polewright — digital filter analysis on the command line
+
+usage:
+  polewright analyze  <design> [--json]
+  polewright response <design> [--points N] [--log] [--json]
+  polewright simulate <design> [--input impulse|step|sine:<Hz>|<file.csv>] [--samples N] [--json]
+
+<design> is a design file saved from the workbench, or one of:
+  --b "1,0,-1" --a "1,-1.6,0.64"      coefficients of z^0, z^-1, z^-2, ...
+  --eq "y[n] = 1.6y[n-1] - 0.64y[n-2] + x[n] - x[n-2]"
+  --tf "(z^2 - 1)/(z^2 - 1.6z + 0.64)"
+plus --fs <Hz> (sample rate; default 1, or the file's).
+`;
+
+/** Runs the command line; returns the process exit code (0 ok, 1 failed, 2 usage error). */
 export async function main(argv: string[], io: CliIo): Promise<number> {
-  io.stdout(`polewright: ${argv.join(' ')}\n`);
-  return 0;
+  const [command, ...rest] = argv;
+  if (command === undefined || command === '--help' || command === '-h' || command === 'help') {
+    io.stdout(USAGE);
+    return command === undefined ? 2 : 0;
+  }
+  const run = COMMANDS[command];
+  if (!run) {
+    io.stderr(`polewright: unknown command "${command}". Commands: ${Object.keys(COMMANDS).join(', ')}.\n`);
+    return 2;
+  }
+  try {
+    return run(rest, io);
+  } catch (e) {
+    if (e instanceof UsageError) {
+      io.stderr(`polewright ${command}: ${e.message}\n`);
+      return 2;
+    }
+    io.stderr(`polewright ${command}: internal error: ${(e as Error).message}\n`);
+    return 1;
+  }
 }

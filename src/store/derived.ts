@@ -4,59 +4,24 @@
  */
 import type { Zpk, TransferFunction, Section } from '../core/types.ts';
 import { zpkToTf, zpkToSections } from '../core/system.ts';
-import { responseZpk, frequencyGrid, evalZpkAt, type FrequencyResponse } from '../core/response.ts';
+import { responseZpk, frequencyGrid, type FrequencyResponse } from '../core/response.ts';
+import { resolveGain, type ResolvedGain } from '../core/gainRule.ts';
 import { stabilityOfZpk, type Stability } from '../core/stability.ts';
 import { rootReadouts, type RootReadout } from '../core/readouts.ts';
 import { filterSections } from '../core/time.ts';
 import { makeImpulse, makeStep, makeSine, makeWhiteNoise } from '../core/signals.ts';
 import { closedFormResponse, type ClosedForm } from '../core/closedForm.ts';
-import type { Design, GainRule } from './design.ts';
+import type { Design } from './design.ts';
 import type { ViewSettings } from './view.ts';
 import type { WorkbenchState } from './store.ts';
 import { memoLast } from './memo.ts';
 
-/** Grid used to find the peak for the 'peak' gain rule. */
-export const PEAK_SEARCH_POINTS = 8192;
 /** Highest order for which the closed-form time response is listed (partial fractions grow ill-conditioned). */
 export const CLOSED_FORM_MAX_ORDER = 24;
 /** Lowest frequency of a log frequency axis, as a fraction of the sample rate. */
 export const LOG_AXIS_MIN_FRACTION = 1e-4;
 
-export interface ResolvedGain {
-  gain: number;
-  /** Why the rule could not be met, when it could not (the gain then falls back to 1). */
-  problem: string | null;
-}
-
-/** The gain k that a gain rule asks for, given the roots. */
-export function resolveGain(design: Design): ResolvedGain {
-  const rule: GainRule = design.gainRule;
-  if (rule.kind === 'fixed') return { gain: rule.value, problem: null };
-  const unit: Zpk = { zeros: design.zeros, poles: design.poles, gain: 1 };
-  let mag: number;
-  let where: string;
-  if (rule.kind === 'peak') {
-    const r = responseZpk(unit, frequencyGrid(PEAK_SEARCH_POINTS));
-    mag = 0;
-    for (let i = 0; i < r.magnitude.length; i++) if (r.magnitude[i]! > mag) mag = r.magnitude[i]!;
-    where = 'the peak';
-  } else {
-    const omega =
-      rule.kind === 'dc' ? 0 : rule.kind === 'nyquist' ? Math.PI : (2 * Math.PI * rule.hz) / design.sampleRate;
-    const h = evalZpkAt(unit, Math.cos(omega), Math.sin(omega));
-    mag = Math.hypot(h.re, h.im);
-    where = rule.kind === 'dc' ? 'DC' : rule.kind === 'nyquist' ? 'Nyquist' : `${rule.hz} Hz`;
-  }
-  if (!(mag > 0) || !Number.isFinite(mag)) {
-    return {
-      gain: 1,
-      problem: `|H| is ${mag === 0 ? 'zero' : 'infinite'} at ${where}, so 0 dB there is impossible; gain set to 1`,
-    };
-  }
-  return { gain: 1 / mag, problem: null };
-}
-
-const gainOf = memoLast(resolveGain);
+const gainOf = memoLast((d: Design) => resolveGain(d.zeros, d.poles, d.gainRule, d.sampleRate));
 const zpkOf = memoLast((design: Design): Zpk => ({
   zeros: design.zeros,
   poles: design.poles,

@@ -3,14 +3,9 @@
  * implies its conjugate), coefficients a user typed are kept exactly until a root is edited.
  */
 import type { Root } from '../core/types.ts';
+import type { GainRule } from '../core/gainRule.ts';
 
-/** How the overall gain k is set: a fixed number, or chosen so that |H| = 1 (0 dB) at a place. */
-export type GainRule =
-  | { kind: 'fixed'; value: number }
-  | { kind: 'dc' }
-  | { kind: 'nyquist' }
-  | { kind: 'frequency'; hz: number }
-  | { kind: 'peak' };
+export type { GainRule } from '../core/gainRule.ts';
 
 /** Coefficients exactly as the user typed them, with the text they came from. */
 export interface TypedCoefficients {

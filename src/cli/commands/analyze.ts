@@ -1,0 +1,75 @@
+/** `polewright analyze`: roots, gain, coefficients, sections, stability and per-root read-outs. */
+import type { TransferFunction } from '../../core/types.ts';
+import { expandRoots, zpkToTf, zpkToSections } from '../../core/system.ts';
+import { stabilityOfZpk } from '../../core/stability.ts';
+import { rootReadouts } from '../../core/readouts.ts';
+import { parseArgs } from '../args.ts';
+import { DESIGN_FLAGS, readDesign, type CliDesign } from '../designInput.ts';
+import { toJson } from '../json.ts';
+import type { CliIo } from '../main.ts';
+
+/** b and a scaled so that a[0] = 1 (the typed coefficients when the design came as coefficients). */
+export function normalisedTf(d: CliDesign): TransferFunction {
+  const tf = d.typed ?? zpkToTf(d.zpk);
+  const a0 = tf.a[0] ?? 1;
+  return { b: tf.b.map((v) => v / a0), a: tf.a.map((v) => v / a0) };
+}
+
+/** The analysis object printed by `analyze --json`. */
+export function analysis(d: CliDesign) {
+  const stability = stabilityOfZpk(d.zpk);
+  const { b, a } = normalisedTf(d);
+  return {
+    sampleRate: d.sampleRate,
+    zeros: expandRoots(d.zpk.zeros),
+    poles: expandRoots(d.zpk.poles),
+    gain: d.zpk.gain,
+    b,
+    a,
+    sections: zpkToSections(d.zpk),
+    stability: {
+      verdict: stability.verdict,
+      maxPoleRadius: stability.maxPoleRadius,
+      reason: stability.reason,
+      responsible: stability.responsible,
+    },
+    readouts: rootReadouts(d.zpk, d.sampleRate),
+  };
+}
+
+const fmt = (x: number) => (Number.isFinite(x) ? String(Number(x.toPrecision(10))) : String(x));
+const fmtRoot = (r: { re: number; im: number; multiplicity: number }) =>
+  `${fmt(r.re)}${r.im === 0 ? '' : `${r.im < 0 ? ' - ' : ' + '}${fmt(Math.abs(r.im))}j`}${r.multiplicity > 1 ? `  (×${r.multiplicity})` : ''}`;
+
+/** Runs `analyze`; returns the exit code. */
+export function runAnalyze(argv: string[], io: CliIo): number {
+  const args = parseArgs(argv, DESIGN_FLAGS, ['json']);
+  const d = readDesign(args);
+  const out = analysis(d);
+  if (args.switches.has('json')) {
+    io.stdout(toJson(out));
+    return 0;
+  }
+  const lines: string[] = [];
+  lines.push(`design: ${d.source}, sample rate ${fmt(d.sampleRate)} Hz`);
+  lines.push(`stability: ${out.stability.verdict.toUpperCase()} — ${out.stability.reason}`);
+  lines.push(`largest pole radius: ${fmt(out.stability.maxPoleRadius)}`);
+  lines.push(`gain k: ${fmt(out.gain)}`);
+  lines.push(`zeros (${out.zeros.length}):`, ...out.zeros.map((r) => `  ${fmtRoot(r)}`));
+  lines.push(`poles (${out.poles.length}):`, ...out.poles.map((r) => `  ${fmtRoot(r)}`));
+  lines.push(`b: ${out.b.map(fmt).join(', ')}`);
+  lines.push(`a: ${out.a.map(fmt).join(', ')}`);
+  lines.push('second-order sections [b0 b1 b2 a0 a1 a2]:', ...out.sections.map((s) => `  ${s.map(fmt).join('  ')}`));
+  lines.push('roots:');
+  for (const r of out.readouts) {
+    const parts = [`${r.kind} ${fmtRoot(r.root)}`, `${fmt(r.frequencyHz)} Hz`, `radius ${fmt(r.radius)}`];
+    if (r.q !== undefined) parts.push(`Q ${fmt(r.q)}`);
+    if (r.bandwidthHz !== undefined) parts.push(`bandwidth ${fmt(r.bandwidthHz)} Hz`);
+    if (r.timeConstantSeconds !== undefined) parts.push(`tau ${fmt(r.timeConstantSeconds)} s`);
+    if (r.decay40dBSeconds !== undefined) parts.push(`40 dB decay ${fmt(r.decay40dBSeconds)} s`);
+    if (r.notchDepthDb !== undefined) parts.push(`notch ${fmt(r.notchDepthDb)} dB`);
+    lines.push(`  ${parts.join(', ')}`);
+  }
+  io.stdout(lines.join('\n') + '\n');
+  return 0;
+}

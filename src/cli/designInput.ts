@@ -1,0 +1,93 @@
+/** Resolves the design a command works on: a design file, or coefficients/equation/H(z) given as flags. */
+import { readFileSync } from 'node:fs';
+import type { TransferFunction, Zpk } from '../core/types.ts';
+import { parseCoefficients, parseDifferenceEquation, parseRational } from '../core/parse/index.ts';
+import { tfToZpk, compressRoots } from '../core/system.ts';
+import { resolveGain } from '../core/gainRule.ts';
+import { readDesignFile } from '../share/designFile.ts';
+import { UsageError, numberFlag, type ParsedArgs } from './args.ts';
+
+/** Flags every design-taking command accepts. */
+export const DESIGN_FLAGS = ['b', 'a', 'eq', 'tf', 'fs'] as const;
+
+export interface CliDesign {
+  /** Stored roots (complex roots once, im > 0) and the resolved gain. */
+  zpk: Zpk;
+  /** Coefficients exactly as given, when the design came as coefficients, an equation or H(z). */
+  typed: TransferFunction | null;
+  sampleRate: number;
+  /** Where the design came from, for messages. */
+  source: string;
+}
+
+function fromTf(tf: TransferFunction, fs: number, source: string): CliDesign {
+  const zpk = tfToZpk(tf);
+  return {
+    zpk: { zeros: compressRoots(zpk.zeros), poles: compressRoots(zpk.poles), gain: zpk.gain },
+    typed: tf,
+    sampleRate: fs,
+    source,
+  };
+}
+
+/** Turns a parse failure into a usage error that quotes the input and marks the place. */
+function parseFailure(flag: string, text: string, error: { message: string; position?: number }): UsageError {
+  const mark = error.position !== undefined ? `\n  ${text}\n  ${' '.repeat(error.position)}^` : '';
+  return new UsageError(`--${flag}: ${error.message}${mark}`);
+}
+
+/** Reads the design from the positional file argument or from the flags. */
+export function readDesign(args: ParsedArgs): CliDesign {
+  const fsGiven = args.flags.has('fs');
+  const fs = numberFlag(args, 'fs', 1);
+  if (!(fs > 0)) throw new UsageError(`--fs must be a positive sample rate in Hz; got "${args.flags.get('fs')}".`);
+  const file = args.positionals[0];
+  const given = ['eq', 'tf', 'b'].filter((f) => args.flags.has(f));
+  if (file !== undefined && given.length > 0) {
+    throw new UsageError(`Give the design either as a file (${file}) or with --${given[0]}, not both.`);
+  }
+  if (given.length > 1) throw new UsageError(`Give the design one way only; got --${given.join(' and --')}.`);
+  if (file !== undefined) {
+    let text: string;
+    try {
+      text = readFileSync(file, 'utf8');
+    } catch (e) {
+      throw new UsageError(`Cannot read the design file ${file}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}`);
+    }
+    const read = readDesignFile(text);
+    if (!read.ok) throw new UsageError(`${file}: ${read.message}`);
+    const d = read.design;
+    const sampleRate = fsGiven ? fs : d.sampleRate;
+    const { gain } = resolveGain(d.zeros, d.poles, d.gainRule, sampleRate);
+    return {
+      zpk: { zeros: d.zeros, poles: d.poles, gain },
+      typed: d.typed ? { b: d.typed.b, a: d.typed.a } : null,
+      sampleRate,
+      source: file,
+    };
+  }
+  const eq = args.flags.get('eq');
+  if (eq !== undefined) {
+    const r = parseDifferenceEquation(eq);
+    if (!r.ok) throw parseFailure('eq', eq, r.error);
+    return fromTf(r.value, fs, '--eq');
+  }
+  const tf = args.flags.get('tf');
+  if (tf !== undefined) {
+    const r = parseRational(tf);
+    if (!r.ok) throw parseFailure('tf', tf, r.error);
+    return fromTf(r.value, fs, '--tf');
+  }
+  const b = args.flags.get('b');
+  if (b !== undefined) {
+    const a = args.flags.get('a') ?? '1';
+    const text = `b = [${b}]; a = [${a}]`;
+    const r = parseCoefficients(text);
+    if (!r.ok) throw parseFailure('b/--a', text, r.error);
+    return fromTf(r.value, fs, '--b/--a');
+  }
+  if (args.flags.has('a')) throw new UsageError('--a was given without --b (the numerator).');
+  throw new UsageError(
+    'No design given. Pass a design file, or --b "1,-2,1" --a "1,-1.6,0.64", or --eq "<difference equation>", or --tf "<H(z)>".',
+  );
+}
