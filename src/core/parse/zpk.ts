@@ -1,0 +1,26 @@
+/** Expansion of typed zeros/poles/gain into b/a arrays in powers of z^-1. */
+import { polyFromRoots } from '../poly.ts';
+import type { TransferFunction, Zpk } from '../types.ts';
+import { checkTransferFunction } from './check.ts';
+import { fail } from './errors.ts';
+
+/**
+ * b, a in powers of z^-1 for H(z) = k·Π(z−zᵢ)/Π(z−pᵢ): both polynomials in z are divided by z^max(M, N), so
+ * the shorter one gets leading zeros (a delay) — fails when there are more zeros than poles (not causal).
+ */
+export function zpkToTransferFunction(zpk: Zpk): TransferFunction {
+  const num = polyFromRoots(zpk.zeros);
+  const den = polyFromRoots(zpk.poles);
+  const m = num.length - 1;
+  const n = den.length - 1;
+  if (m > n) {
+    fail(
+      `H(z) is not causal: ${m} zeros but only ${n} poles (add ${m - n} pole${m - n > 1 ? 's' : ''} at 0 to delay it)`,
+      0,
+      'at most as many zeros as poles, counting conjugates and repeats',
+    );
+  }
+  const b = [...new Array<number>(n - m).fill(0), ...Array.from(num, (v) => v * zpk.gain)];
+  const a = [...Array.from(den)];
+  return checkTransferFunction({ b, a }, 0);
+}
