@@ -67,8 +67,8 @@ function complexFrom(tokens: readonly Token[], s: Span): C {
 function polar(tokens: readonly Token[], mag: Span, angle: Span): C {
   const r = complexFrom(tokens, mag);
   if (r.im !== 0) fail('the radius of a polar root must be real', tokens[mag.from]!.pos, 'a real radius');
-  let { from, to } = angle;
-  if (isOp(tokens[from], '±')) from++;
+  const to = angle.to;
+  const from = isOp(tokens[angle.from], '±') ? angle.from + 1 : angle.from;
   const unit = tokens[to - 1];
   let scale = 0;
   if (isOp(unit, '°') || (unit?.kind === 'id' && unit.text === 'deg')) scale = Math.PI / 180;
@@ -87,7 +87,8 @@ function polar(tokens: readonly Token[], mag: Span, angle: Span): C {
 
 /** The roots one list item stands for (before merging), each with the item's repeat count. */
 function readItem(tokens: readonly Token[], item: Span): Root[] {
-  let { from, to } = item;
+  const from = item.from;
+  let to = item.to;
   let multiplicity = 1;
   const mark = tokens[to - 2];
   if (to - from >= 3 && mark?.kind === 'id' && (mark.text === 'x' || mark.text === 'X')) {
