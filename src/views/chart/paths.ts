@@ -1,0 +1,135 @@
+/**
+ * SVG path strings built from pixel arrays in one pass: a polyline that clips to a band, breaks at gaps and
+ * jumps and thins dense data per pixel column; stems and dots as ONE path each (thousands of samples must
+ * redraw within a frame, which separate elements would not).
+ */
+
+/** Pixels beyond the plot edge that a clipped point is drawn at, so clipped segments leave the plot. */
+export const CLIP_OVERSHOOT_PX = 2;
+
+export interface LineOptions {
+  /** Top and bottom of the plot in pixels (top < bottom); y is clamped just beyond them (±∞ included). */
+  top: number;
+  bottom: number;
+  /** Start a new sub-path when consecutive points differ by more than this many pixels vertically. */
+  maxJumpPx?: number;
+  /** Keep at most the first, lowest, highest and last point per pixel column (x must be increasing). */
+  thin?: boolean;
+}
+
+const r1 = (v: number) => Math.round(v * 10) / 10;
+
+/**
+ * A polyline through (px[i], py[i]). NaN in x or y breaks the line. With `thin`, points sharing a pixel
+ * column are reduced to first/min/max/last, which draws the same picture (M4 aggregation, Jugel et al.,
+ * VLDB 2014) — a deep narrow notch survives, unlike plain decimation.
+ */
+export function linePath(px: ArrayLike<number>, py: ArrayLike<number>, o: LineOptions): string {
+  const lo = o.top - CLIP_OVERSHOOT_PX;
+  const hi = o.bottom + CLIP_OVERSHOOT_PX;
+  const jump = o.maxJumpPx ?? Infinity;
+  const parts: string[] = [];
+  let penDown = false;
+  let lastY = NaN;
+  const emit = (x: number, y: number) => {
+    parts.push(`${penDown ? 'L' : 'M'}${r1(x)} ${r1(y)}`);
+    penDown = true;
+  };
+  // Column state for thinning: first, last and extreme points (by index) of the current pixel column.
+  let col = NaN;
+  let count = 0;
+  let fi = 0;
+  let li = 0;
+  let mini = 0;
+  let maxi = 0;
+  const ys: number[] = [];
+  const xs: number[] = [];
+  const flush = () => {
+    if (count === 0) return;
+    const order = mini < maxi ? [fi, mini, maxi, li] : [fi, maxi, mini, li];
+    let prev = -1;
+    for (const k of order) {
+      if (k === prev) continue;
+      if (k > prev) emit(xs[k - fi]!, ys[k - fi]!);
+      prev = Math.max(prev, k);
+    }
+    count = 0;
+    xs.length = 0;
+    ys.length = 0;
+  };
+  for (let i = 0; i < px.length; i++) {
+    const x = px[i]!;
+    const raw = py[i]!;
+    if (Number.isNaN(x) || Number.isNaN(raw)) {
+      flush();
+      penDown = false;
+      lastY = NaN;
+      continue;
+    }
+    const y = raw < lo ? lo : raw > hi ? hi : raw;
+    if (Math.abs(y - lastY) > jump) {
+      flush();
+      penDown = false;
+    }
+    lastY = y;
+    if (!o.thin) {
+      emit(x, y);
+      continue;
+    }
+    const c = Math.round(x);
+    if (count === 0 || c !== col) {
+      flush();
+      col = c;
+      fi = mini = maxi = i;
+    } else {
+      if (y < ys[mini - fi]!) mini = i;
+      if (y > ys[maxi - fi]!) maxi = i;
+    }
+    xs.push(x);
+    ys.push(y);
+    li = i;
+    count++;
+  }
+  flush();
+  return parts.join('');
+}
+
+/** Vertical stems from the baseline y0 to each (px[i], py[i]), clamped to [top, bottom], as one path. */
+export function stemsPath(
+  px: ArrayLike<number>,
+  py: ArrayLike<number>,
+  y0: number,
+  top: number,
+  bottom: number,
+): string {
+  const lo = top - CLIP_OVERSHOOT_PX;
+  const hi = bottom + CLIP_OVERSHOOT_PX;
+  const parts: string[] = [];
+  for (let i = 0; i < px.length; i++) {
+    const x = px[i]!;
+    const raw = py[i]!;
+    if (Number.isNaN(x) || Number.isNaN(raw)) continue;
+    const y = raw < lo ? lo : raw > hi ? hi : raw;
+    parts.push(`M${r1(x)} ${r1(y0)}V${r1(y)}`);
+  }
+  return parts.join('');
+}
+
+/** Small circles of radius r at each point, as one path (two arcs per circle); clipped points are left out. */
+export function dotsPath(
+  px: ArrayLike<number>,
+  py: ArrayLike<number>,
+  r: number,
+  top: number,
+  bottom: number,
+): string {
+  const parts: string[] = [];
+  const d = r1(2 * r);
+  for (let i = 0; i < px.length; i++) {
+    const x = px[i]!;
+    const y = py[i]!;
+    if (Number.isNaN(x) || !(y >= top && y <= bottom)) continue;
+    parts.push(`M${r1(x - r)} ${r1(y)}a${r} ${r} 0 1 0 ${d} 0a${r} ${r} 0 1 0 ${-d} 0`);
+  }
+  return parts.join('');
+}
