@@ -1,13 +1,24 @@
 /**
- * Polynomial roots by the Aberth–Ehrlich simultaneous iteration (Aberth 1973, Ehrlich 1967), started from
- * the Newton-polygon circles of Bini (1996), with a final Newton polish. Works on Float64Arrays.
+ * All roots of a real polynomial: the Aberth–Ehrlich simultaneous iteration from Bini's starting points
+ * (roots/aberth.ts, roots/start.ts), exact conjugate symmetry (roots/conjugate.ts) and verified merging of
+ * repeated roots (roots/multiplicity.ts). Degrees 1 and 2 are solved in closed form.
  */
 import type { Root } from './types.ts';
 import type { Poly } from './poly.ts';
+import { aberthIterate } from './roots/aberth.ts';
+import { startingPoints } from './roots/start.ts';
+import { symmetrizeConjugates } from './roots/conjugate.ts';
+import { groupMultipleRoots } from './roots/multiplicity.ts';
+
+export { rootsBackwardError } from './roots/backwardError.ts';
 
 /** Outcome of a root search: every finite root listed (conjugates included), with diagnostics. */
 export interface RootsResult {
-  /** Real parts of all finite roots (length = degree after removing leading zero coefficients). */
+  /**
+   * Real parts of all finite roots (length = degree after removing leading zero coefficients), each the
+   * individual approximation with the smallest backward error; members of a repeated root stay separate
+   * here (spread by about ε^(1/m)) and are merged, with a refined value, in `grouped`.
+   */
   re: Float64Array;
   /** Imaginary parts; for real input, complex roots come in exactly conjugate pairs. */
   im: Float64Array;
@@ -15,198 +26,77 @@ export interface RootsResult {
   grouped: Root[];
   /** Number of roots at infinity (leading zero coefficients of the descending-order input). */
   atInfinity: number;
+  /** True when every coefficient is zero: every number is a root, and none is listed. */
+  zeroPolynomial: boolean;
   /** Whether every root met the stopping test within the iteration limit. */
   converged: boolean;
-  /** Iterations used. */
+  /** Sweeps of the simultaneous iteration used (0 for closed forms). */
   iterations: number;
 }
 
 export interface RootsOptions {
-  /** Iteration limit for the simultaneous iteration. */
+  /** Limit on sweeps of the simultaneous iteration (default {@link DEFAULT_MAX_ITERATIONS}). */
   maxIterations?: number;
 }
 
-/** Finds all roots of a real polynomial given in descending powers. */
+/** Default sweep limit; Aberth–Ehrlich from Bini's starts typically needs 10–40 sweeps even at degree 1000. */
+export const DEFAULT_MAX_ITERATIONS = 500;
+
+/** Finds all roots of a real polynomial given in descending powers (coefficients must be finite). */
 export function findRoots(p: Poly, options: RootsOptions = {}): RootsResult {
-  const maxIterations = options.maxIterations ?? 500;
+  for (let k = 0; k < p.length; k++) {
+    if (!Number.isFinite(p[k]!)) {
+      throw new RangeError(`findRoots: coefficient ${k} is ${p[k]}; only finite numbers are accepted`);
+    }
+  }
   let lead = 0;
   while (lead < p.length && p[lead] === 0) lead++;
+  if (lead === p.length) return emptyResult(0, true);
   let tail = p.length - 1;
-  while (tail >= lead && p[tail] === 0) tail--;
-  const atInfinity = lead === p.length ? 0 : lead;
-  if (tail < lead) {
-    return {
-      re: new Float64Array(0),
-      im: new Float64Array(0),
-      grouped: [],
-      atInfinity: 0,
-      converged: true,
-      iterations: 0,
-    };
-  }
-  const originCount = p.length - 1 - tail;
-  const c = Float64Array.from({ length: tail - lead + 1 }, (_, i) => p[lead + i]! / p[lead]!);
-  const n = c.length - 1;
-  const zr = new Float64Array(n);
-  const zi = new Float64Array(n);
-  initialGuesses(c, zr, zi);
-  const done = new Uint8Array(n);
+  while (p[tail] === 0) tail--;
+  const origin = p.length - 1 - tail;
+  const n = tail - lead;
+  const c = new Float64Array(n + 1);
+  for (let k = 0; k <= n; k++) c[k] = p[lead + k]! / p[lead]!;
+  const re = new Float64Array(n + origin);
+  const im = new Float64Array(n + origin);
+  let converged = true;
   let iterations = 0;
-  let remaining = n;
-  const absC = c.map(Math.abs);
-  while (remaining > 0 && iterations < maxIterations) {
-    iterations++;
-    for (let i = 0; i < n; i++) {
-      if (done[i]) continue;
-      const x = zr[i]!;
-      const y = zi[i]!;
-      // p and p' at z by Horner, plus the running bound of the rounding error of p(z).
-      let pr = c[0]!,
-        pi = 0,
-        dr = 0,
-        di = 0,
-        bound = absC[0]!;
-      const mod = Math.hypot(x, y);
-      for (let k = 1; k <= n; k++) {
-        const tdr = dr * x - di * y + pr;
-        di = dr * y + di * x + pi;
-        dr = tdr;
-        const tpr = pr * x - pi * y + c[k]!;
-        pi = pr * y + pi * x;
-        pr = tpr;
-        bound = bound * mod + absC[k]!;
-      }
-      if (Math.hypot(pr, pi) <= 4 * n * Number.EPSILON * bound) {
-        done[i] = 1;
-        remaining--;
-        continue;
-      }
-      // Newton ratio N = p/p'.
-      const den = dr * dr + di * di;
-      const nr = (pr * dr + pi * di) / den;
-      const ni = (pi * dr - pr * di) / den;
-      // Aberth sum S = sum_{j != i} 1/(z_i - z_j).
-      let sr = 0,
-        si = 0;
-      for (let j = 0; j < n; j++) {
-        if (j === i) continue;
-        const ur = x - zr[j]!;
-        const ui = y - zi[j]!;
-        const ud = ur * ur + ui * ui;
-        sr += ur / ud;
-        si -= ui / ud;
-      }
-      // w = N / (1 - N S)
-      const qr = 1 - (nr * sr - ni * si);
-      const qi = -(nr * si + ni * sr);
-      const qd = qr * qr + qi * qi;
-      zr[i] = x - (nr * qr + ni * qi) / qd;
-      zi[i] = y - (ni * qr - nr * qi) / qd;
-    }
+  if (n === 1) re[0] = -c[1]!;
+  else if (n === 2) quadratic(c[1]!, c[2]!, re, im);
+  else if (n > 2) {
+    const zr = re.subarray(0, n);
+    const zi = im.subarray(0, n);
+    startingPoints(c, zr, zi);
+    ({ converged, iterations } = aberthIterate(c, zr, zi, options.maxIterations ?? DEFAULT_MAX_ITERATIONS));
   }
-  const re = new Float64Array(n + originCount);
-  const im = new Float64Array(n + originCount);
-  re.set(zr);
-  im.set(zi);
-  symmetrize(re, im, n);
-  return { re, im, grouped: groupRoots(re, im), atInfinity, converged: remaining === 0, iterations };
+  const mate = symmetrizeConjugates(c, re.subarray(0, n), im.subarray(0, n));
+  const grouped = n > 0 ? groupMultipleRoots(c, re.subarray(0, n), im.subarray(0, n), mate) : [];
+  if (origin > 0) grouped.push({ re: 0, im: 0, multiplicity: origin });
+  return { re, im, grouped, atInfinity: lead, zeroPolynomial: false, converged, iterations };
 }
 
-/** Bini's starting points: circles whose radii come from the upper convex hull of (k, log|c_k|). */
-function initialGuesses(c: Float64Array, zr: Float64Array, zi: Float64Array): void {
-  const n = c.length - 1;
-  // Ascending index k = power; c is descending so coefficient of x^k is c[n-k].
-  const pts: number[] = [];
-  const logs = new Float64Array(n + 1);
-  for (let k = 0; k <= n; k++) {
-    const v = Math.abs(c[n - k]!);
-    logs[k] = v > 0 ? Math.log(v) : -Infinity;
-  }
-  for (let k = 0; k <= n; k++) {
-    if (logs[k] === -Infinity) continue;
-    while (pts.length >= 2) {
-      const a = pts[pts.length - 2]!;
-      const b = pts[pts.length - 1]!;
-      const cross = (b - a) * (logs[k]! - logs[a]!) - (k - a) * (logs[b]! - logs[a]!);
-      if (cross >= 0) pts.pop();
-      else break;
-    }
-    pts.push(k);
-  }
-  let idx = 0;
-  const sigma = 0.7;
-  for (let s = 0; s + 1 < pts.length; s++) {
-    const k0 = pts[s]!;
-    const k1 = pts[s + 1]!;
-    const m = k1 - k0;
-    const radius = Math.exp((logs[k0]! - logs[k1]!) / m);
-    for (let j = 0; j < m; j++) {
-      const ang = (2 * Math.PI * j) / m + (2 * Math.PI * k1) / n + sigma;
-      zr[idx] = radius * Math.cos(ang);
-      zi[idx] = radius * Math.sin(ang);
-      idx++;
-    }
-  }
+function emptyResult(atInfinity: number, zeroPolynomial: boolean): RootsResult {
+  const re = new Float64Array(0);
+  const im = new Float64Array(0);
+  return { re, im, grouped: [], atInfinity, zeroPolynomial, converged: true, iterations: 0 };
 }
 
-/** Makes the root set exactly conjugate-symmetric (real input): pairs each upper root with its lower mate. */
-function symmetrize(re: Float64Array, im: Float64Array, n: number): void {
-  const used = new Uint8Array(n);
-  const tol = 1e-10;
-  for (let i = 0; i < n; i++) {
-    if (used[i]) continue;
-    used[i] = 1;
-    const scale = Math.max(1, Math.hypot(re[i]!, im[i]!));
-    let best = -1;
-    let bestDist = Infinity;
-    for (let j = 0; j < n; j++) {
-      if (used[j]) continue;
-      const d = Math.hypot(re[j]! - re[i]!, im[j]! + im[i]!);
-      if (d < bestDist) {
-        bestDist = d;
-        best = j;
-      }
-    }
-    if (Math.abs(im[i]!) <= tol * scale && (best < 0 || Math.abs(im[i]!) < bestDist / 2)) {
-      im[i] = 0;
-      continue;
-    }
-    if (best >= 0) {
-      used[best] = 1;
-      const r = (re[i]! + re[best]!) / 2;
-      const m = (Math.abs(im[i]!) + Math.abs(im[best]!)) / 2;
-      re[i] = r;
-      re[best] = r;
-      im[i] = m;
-      im[best] = -m;
-    } else {
-      im[i] = 0;
-    }
+/** Roots of x² + b·x + c without cancellation: the larger-magnitude root first, the other from c / root. */
+function quadratic(b: number, c: number, re: Float64Array, im: Float64Array): void {
+  const h = -b / 2 + 0; // + 0 turns -0 into 0
+  // Scale by s so that h² and c cannot overflow or underflow.
+  const s = Math.max(Math.abs(h), Math.sqrt(Math.abs(c)));
+  const hs = h / s;
+  const disc = hs * hs - c / s / s;
+  if (disc < 0) {
+    re[0] = h;
+    re[1] = h;
+    im[0] = s * Math.sqrt(-disc);
+    im[1] = -im[0];
+    return;
   }
-}
-
-/** Groups numerically coincident roots into one root with a multiplicity. */
-export function groupRoots(re: Float64Array, im: Float64Array): Root[] {
-  const n = re.length;
-  const used = new Uint8Array(n);
-  const out: Root[] = [];
-  for (let i = 0; i < n; i++) {
-    if (used[i]) continue;
-    used[i] = 1;
-    let sr = re[i]!;
-    let si = im[i]!;
-    let m = 1;
-    const tol = 1e-6 * Math.max(1, Math.hypot(re[i]!, im[i]!));
-    for (let j = i + 1; j < n; j++) {
-      if (used[j]) continue;
-      if (Math.hypot(re[j]! - re[i]!, im[j]! - im[i]!) < tol) {
-        used[j] = 1;
-        sr += re[j]!;
-        si += im[j]!;
-        m++;
-      }
-    }
-    out.push({ re: sr / m, im: si / m, multiplicity: m });
-  }
-  return out;
+  const big = h + Math.sign(h || 1) * s * Math.sqrt(disc);
+  re[0] = big;
+  re[1] = big === 0 ? 0 : c / big;
 }

@@ -1,0 +1,174 @@
+/**
+ * Benchmark of findRoots against numpy.roots on four families of real polynomials (random, FIR low-pass,
+ * clustered Butterworth denominators, repeated roots) at degrees 8…1024. numpy is timed by
+ * bench/numpy_roots.py in a long-lived python3 process on exactly the same coefficients, and its
+ * measurements are interleaved with ours because the machine is shared and noisy; figures are medians.
+ * Run standalone with `npx tsx bench/roots.ts`.
+ */
+import { spawn } from 'node:child_process';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { createInterface } from 'node:readline';
+import { fileURLToPath, pathToFileURL } from 'node:url';
+import { findRoots, rootsBackwardError } from '../src/core/roots.ts';
+import { polyFromRoots } from '../src/core/poly.ts';
+import type { Root } from '../src/core/types.ts';
+
+const DEGREES = [8, 16, 32, 64, 128, 256, 512, 1024];
+/** Wall time aimed at for one measurement (a batch of calls), in milliseconds. */
+const TARGET_MS = 4;
+
+/** Seeded uniform generator on [0, 1) (mulberry32). */
+function uniform(seed: number): () => number {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+function randomPoly(n: number): Float64Array {
+  const u = uniform(1000 + n);
+  return Float64Array.from(
+    { length: n + 1 },
+    () => Math.sqrt(-2 * Math.log(1 - u())) * Math.cos(2 * Math.PI * u()),
+  );
+}
+
+/** Windowed-sinc (Hamming) low-pass with n + 1 taps, cutoff 0.3 of Nyquist, unit gain at DC. */
+function firLowPass(n: number): Float64Array {
+  const cutoff = 0.3;
+  const h = Float64Array.from({ length: n + 1 }, (_, k) => {
+    const t = k - n / 2;
+    const sinc = t === 0 ? cutoff : Math.sin(Math.PI * cutoff * t) / (Math.PI * t);
+    return sinc * (0.54 - 0.46 * Math.cos((2 * Math.PI * k) / n));
+  });
+  const sum = h.reduce((s, v) => s + v, 0);
+  return h.map((v) => v / sum);
+}
+
+/** Denominator of an order-n digital Butterworth low-pass, cutoff 0.2 of Nyquist, by the bilinear transform. */
+function butterworth(n: number): Float64Array {
+  const wc = Math.tan((Math.PI * 0.2) / 2);
+  const poles: Root[] = [];
+  for (let k = 0; k < n; k++) {
+    const th = (Math.PI * (2 * k + n + 1)) / (2 * n);
+    const sr = wc * Math.cos(th);
+    const si = wc * Math.sin(th);
+    if (si < -1e-12) continue;
+    // z = (1 + s) / (1 - s)
+    const dr = 1 - sr;
+    const dd = dr * dr + si * si;
+    const zr = ((1 + sr) * dr - si * si) / dd;
+    const zi = (si * dr + (1 + sr) * si) / dd;
+    poles.push({ re: zr, im: Math.abs(zi) < 1e-12 ? 0 : zi, multiplicity: 1 });
+  }
+  return polyFromRoots(poles);
+}
+
+/** n/4 seeded conjugate pairs, each a double root, moduli 0.3…1.2. */
+function repeatedRoots(n: number): Float64Array {
+  const u = uniform(5000 + n);
+  const roots: Root[] = [];
+  for (let k = 0; k < n / 4; k++) {
+    const r = 0.3 + 0.9 * u();
+    const a = 0.1 + (Math.PI - 0.2) * u();
+    roots.push({ re: r * Math.cos(a), im: r * Math.sin(a), multiplicity: 2 });
+  }
+  return polyFromRoots(roots);
+}
+
+const FAMILIES: [string, (n: number) => Float64Array][] = [
+  ['random', randomPoly],
+  ['FIR low-pass', firLowPass],
+  ['Butterworth', butterworth],
+  ['repeated', repeatedRoots],
+];
+
+function median(xs: number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  const m = s.length >> 1;
+  return s.length % 2 ? s[m]! : (s[m - 1]! + s[m]!) / 2;
+}
+
+/** Mean milliseconds per findRoots call over a batch of `inner` calls. */
+function timeOurs(p: Float64Array, inner: number): number {
+  const t0 = performance.now();
+  for (let k = 0; k < inner; k++) findRoots(p);
+  return (performance.now() - t0) / inner;
+}
+
+/** A python3 process answering "index inner" with numpy.roots' mean seconds per call. */
+async function startNumpy(
+  file: string,
+): Promise<{ version: string; time: (i: number, inner: number) => Promise<number>; stop: () => void }> {
+  const script = join(fileURLToPath(new URL('.', import.meta.url)), 'numpy_roots.py');
+  const child = spawn('python3', [script, file], { stdio: ['pipe', 'pipe', 'inherit'] });
+  const lines = createInterface({ input: child.stdout })[Symbol.asyncIterator]();
+  const next = async (): Promise<string> => {
+    const r = await lines.next();
+    if (r.done) throw new Error('bench: numpy_roots.py ended early (is python3 with numpy installed?)');
+    return r.value;
+  };
+  const version = (await next()).replace('ready ', '');
+  return {
+    version,
+    time: async (i, inner) => {
+      child.stdin.write(`${i} ${inner}\n`);
+      return 1000 * Number(await next());
+    },
+    stop: () => {
+      child.stdin.end('quit\n');
+    },
+  };
+}
+
+/** Runs the benchmark and returns a markdown table of median times, backward errors and time ratios. */
+export async function benchRoots(): Promise<string> {
+  const cases = FAMILIES.flatMap(([name, make]) => DEGREES.map((n) => ({ name, n, p: make(n) })));
+  const dir = mkdtempSync(join(tmpdir(), 'polewright-roots-'));
+  const file = join(dir, 'polys.json');
+  writeFileSync(file, JSON.stringify(cases.map((c) => Array.from(c.p))));
+  const numpy = await startNumpy(file);
+  const rows: string[] = [];
+  try {
+    for (const [i, { name, n, p }] of cases.entries()) {
+      const res = findRoots(p);
+      const berr = rootsBackwardError(p, res.re, res.im);
+      const oursOnce = Math.max(timeOurs(p, 1), timeOurs(p, 1));
+      const numpyOnce = await numpy.time(i, 1);
+      const innerOurs = Math.max(1, Math.round(TARGET_MS / oursOnce));
+      const innerNumpy = Math.max(1, Math.round(TARGET_MS / numpyOnce));
+      const rounds = n >= 1024 ? 5 : n >= 512 ? 7 : 11;
+      const ours: number[] = [];
+      const theirs: number[] = [];
+      for (let r = 0; r < rounds; r++) {
+        ours.push(timeOurs(p, innerOurs));
+        theirs.push(await numpy.time(i, innerNumpy));
+      }
+      const mo = median(ours);
+      const mn = median(theirs);
+      rows.push(
+        `| ${name} | ${n} | ${mo.toFixed(3)} | ${berr.toExponential(1)} | ${res.iterations}${res.converged ? '' : ' (not converged)'} | ${mn.toFixed(3)} | ${(mo / mn).toFixed(2)} |`,
+      );
+    }
+  } finally {
+    numpy.stop();
+    rmSync(dir, { recursive: true, force: true });
+  }
+  return [
+    `findRoots vs numpy.roots (${numpy.version}), Node ${process.version}; median ms per call`,
+    '',
+    '| family | degree | ours (ms) | backward error | sweeps | numpy (ms) | ours / numpy |',
+    '| --- | ---: | ---: | ---: | ---: | ---: | ---: |',
+    ...rows,
+  ].join('\n');
+}
+
+if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
+  console.log(await benchRoots());
+}

@@ -1,0 +1,138 @@
+/**
+ * Exact conjugate symmetry for the roots of a real polynomial. Each root above the real axis is paired
+ * with the nearest unused root below it; a pair is accepted at once when its mismatch is smaller than either
+ * imaginary part (so two drifted real roots are not glued into a fake pair). The member with the smaller
+ * residual |p(z)| / Σ|c_k||z|^k is kept and the other becomes its exact conjugate, so pairing never raises
+ * the backward error, even inside a badly conditioned cluster where the pairing is ambiguous. Real roots
+ * that drifted off the axis move onto it and take a few real Newton steps.
+ */
+import { relativeResidual } from './horner.ts';
+
+/** Real Newton steps for a root projected onto the real axis. */
+const REAL_NEWTON_STEPS = 4;
+
+/**
+ * Makes (re, im), the roots of the real polynomial c (descending), exactly conjugate-symmetric in place;
+ * returns mate[i] = index of i's conjugate, or -1 for a real root.
+ */
+export function symmetrizeConjugates(c: Float64Array, re: Float64Array, im: Float64Array): Int32Array {
+  const n = re.length;
+  const mate = new Int32Array(n).fill(-1);
+  const lower: number[] = [];
+  const upper: number[] = [];
+  for (let i = 0; i < n; i++) {
+    if (im[i]! < 0) lower.push(i);
+    else if (im[i]! > 0) upper.push(i);
+  }
+  lower.sort((a, b) => re[a]! - re[b]!);
+  upper.sort((a, b) => im[b]! - im[a]!); // most clearly complex roots choose first
+  const lowRe = Float64Array.from(lower, (j) => re[j]!);
+  const used = new Uint8Array(lower.length);
+  for (const i of upper) {
+    const k = nearestMirror(re[i]!, -im[i]!, lowRe, lower, im, used);
+    if (k < 0) break;
+    const j = lower[k]!;
+    if (Math.hypot(re[j]! - re[i]!, im[j]! + im[i]!) > Math.min(im[i]!, -im[j]!)) continue;
+    used[k] = 1;
+    pairUp(c, re, im, mate, i, j);
+  }
+  // Roots still unpaired only occur in badly conditioned clusters, where Aberth's answers are not symmetric
+  // (even the counts above and below the axis may differ). Reflecting a root does not change its residual,
+  // so all move above the axis and pair by nearness; an odd one out goes to the real axis.
+  const rest: number[] = [];
+  for (let i = 0; i < n; i++) {
+    if (mate[i] !== -1 || im[i] === 0) continue;
+    im[i] = Math.abs(im[i]!);
+    rest.push(i);
+  }
+  for (let a = 0; a < rest.length; a++) {
+    const i = rest[a]!;
+    if (mate[i] !== -1) continue;
+    let best = -1;
+    let bestDist = Infinity;
+    for (let b = a + 1; b < rest.length; b++) {
+      const j = rest[b]!;
+      const d = Math.hypot(re[j]! - re[i]!, im[j]! - im[i]!);
+      if (mate[j] === -1 && d < bestDist) [best, bestDist] = [j, d];
+    }
+    if (best < 0) {
+      im[i] = 0;
+      re[i] = realNewton(c, re[i]!);
+    } else {
+      im[best] = -im[best]!;
+      pairUp(c, re, im, mate, i, best);
+    }
+  }
+  return mate;
+}
+
+/** Makes i (above the axis) and j (below) an exact conjugate pair, keeping the one with the smaller residual. */
+function pairUp(
+  c: Float64Array,
+  re: Float64Array,
+  im: Float64Array,
+  mate: Int32Array,
+  i: number,
+  j: number,
+): void {
+  const keepI = relativeResidual(c, re[i]!, im[i]!) <= relativeResidual(c, re[j]!, im[j]!);
+  const r = keepI ? re[i]! : re[j]!;
+  const m = keepI ? im[i]! : -im[j]!;
+  re[i] = r;
+  re[j] = r;
+  im[i] = m;
+  im[j] = -m;
+  mate[i] = j;
+  mate[j] = i;
+}
+
+/** Position in lower (sorted by real part) of the unused root nearest to x + i·y, or -1. */
+function nearestMirror(
+  x: number,
+  y: number,
+  lowRe: Float64Array,
+  lower: number[],
+  im: Float64Array,
+  used: Uint8Array,
+): number {
+  let lo = 0;
+  let hi = lower.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (lowRe[mid]! < x) lo = mid + 1;
+    else hi = mid;
+  }
+  let best = -1;
+  let bestDist = Infinity;
+  for (let k = lo; k < lower.length && lowRe[k]! - x < bestDist; k++) {
+    if (used[k]) continue;
+    const d = Math.hypot(lowRe[k]! - x, im[lower[k]!]! - y);
+    if (d < bestDist) [best, bestDist] = [k, d];
+  }
+  for (let k = lo - 1; k >= 0 && x - lowRe[k]! < bestDist; k--) {
+    if (used[k]) continue;
+    const d = Math.hypot(lowRe[k]! - x, im[lower[k]!]! - y);
+    if (d < bestDist) [best, bestDist] = [k, d];
+  }
+  return best;
+}
+
+/** A few Newton steps on the real axis from x, kept only while they lower the residual. */
+function realNewton(c: Float64Array, x: number): number {
+  let best = x;
+  let bestRes = relativeResidual(c, x, 0);
+  for (let s = 0; s < REAL_NEWTON_STEPS && bestRes > 0; s++) {
+    let p = 0;
+    let d = 0;
+    for (let k = 0; k < c.length; k++) {
+      d = d * best + p;
+      p = p * best + c[k]!;
+    }
+    const next = best - p / d;
+    const res = relativeResidual(c, next, 0);
+    if (!(res < bestRes)) break;
+    best = next;
+    bestRes = res;
+  }
+  return best;
+}

@@ -1,0 +1,160 @@
+/**
+ * Recognises repeated roots among the approximations of a simultaneous iteration. A root of multiplicity m
+ * comes out of Aberth–Ehrlich as m approximations spread over a radius of about ε^(1/m); here such a
+ * cluster becomes one root of multiplicity m whose value is the cluster centroid refined by Newton's method
+ * on p^(m−1), where the root is simple (the classical deflation-free multiple-root refinement, see e.g.
+ * Z. Zeng, "Computing multiple roots of inexact polynomials", Math. Comp. 74, 2005). A cluster is merged
+ * only after verification: p, p', …, p^(m−2) must vanish at the refined value to within rounding, so
+ * distinct roots that are merely close (farther apart than working precision can blur) stay separate.
+ */
+import type { Root } from '../types.ts';
+import { logDerivative, relativeResidual } from './horner.ts';
+
+/**
+ * Cluster radii tried, relative to the root modulus, largest first. An m-fold root spreads over about
+ * ε^(1/m)·(condition), e.g. 1e-8 for m = 2 and 1e-4 for m = 4; the largest radius admits m ≈ 6.
+ */
+export const CLUSTER_RADII = [3e-2, 1e-2, 3e-3, 1e-3, 3e-4, 1e-4, 3e-5, 1e-5, 1e-6, 1e-7];
+
+/**
+ * A merged root must make p, …, p^(m−2) vanish to within this many (degree · ε) of Σ|coefficients||z|^k:
+ * the rounding error of Horner's rule plus that of coefficients formed by multiplying out factors.
+ */
+export const MULTIPLICITY_RESIDUAL_PER_DEGREE = 64;
+
+/** Newton steps allowed when refining a cluster centre on p^(m−1). */
+const REFINE_STEPS = 12;
+
+/**
+ * Returns the roots (re, im) grouped: each verified cluster once, with its refined value and multiplicity,
+ * every other root once with multiplicity 1; conjugates listed separately. c: descending coefficients of
+ * the polynomial whose roots these are; mate: conjugate index from symmetrizeConjugates (-1 if real).
+ */
+export function groupMultipleRoots(
+  c: Float64Array,
+  re: Float64Array,
+  im: Float64Array,
+  mate: Int32Array,
+): Root[] {
+  const n = re.length;
+  const group = new Int32Array(n).fill(-1);
+  const roots: Root[] = [];
+  const neighbours = closePairs(re, im, 2 * CLUSTER_RADII[0]!);
+  const tol = MULTIPLICITY_RESIDUAL_PER_DEGREE * Math.max(1, c.length - 1) * Number.EPSILON;
+  const derivs: Float64Array[] = [c];
+  const failedSize = new Int32Array(n);
+  for (const rho of CLUSTER_RADII) {
+    for (let i = 0; i < n; i++) {
+      if (group[i]! >= 0 || im[i]! < 0 || neighbours[i]!.length === 0) continue;
+      const mod = Math.hypot(re[i]!, im[i]!);
+      const real = im[i]! <= rho * mod;
+      const cx = re[i]!;
+      const cy = real ? 0 : im[i]!;
+      const members = [i];
+      if (real && mate[i]! >= 0) members.push(mate[i]!);
+      for (const j of neighbours[i]!) {
+        if (group[j]! >= 0 || j === mate[i]) continue;
+        if (Math.hypot(re[j]! - cx, im[j]! - cy) <= rho * mod) members.push(j);
+      }
+      const m = members.length;
+      if (m < 2 || m === failedSize[i]) continue;
+      if (real && members.some((k) => mate[k]! >= 0 && !members.includes(mate[k]!))) continue;
+      const centre = verifiedCentre(c, derivs, re, im, members, real, rho * mod, tol);
+      if (!centre) {
+        failedSize[i] = m;
+        continue;
+      }
+      const id = roots.length;
+      roots.push({ re: centre[0], im: centre[1], multiplicity: m });
+      if (!real) roots.push({ re: centre[0], im: -centre[1], multiplicity: m });
+      for (const k of members) {
+        group[k] = id;
+        if (!real) group[mate[k]!] = id + 1;
+      }
+    }
+  }
+  const out: Root[] = [];
+  const listed = new Uint8Array(roots.length);
+  for (let i = 0; i < n; i++) {
+    const id = group[i]!;
+    if (id < 0) out.push({ re: re[i]!, im: im[i]!, multiplicity: 1 });
+    else if (!listed[id]) {
+      listed[id] = 1;
+      out.push(roots[id]!);
+    }
+  }
+  return out;
+}
+
+/** For each root, the indices of the other roots within relative distance r (sweep over real parts). */
+function closePairs(re: Float64Array, im: Float64Array, r: number): number[][] {
+  const n = re.length;
+  const order = Array.from({ length: n }, (_, i) => i).sort((a, b) => re[a]! - re[b]!);
+  const out: number[][] = Array.from({ length: n }, () => []);
+  for (let a = 0; a < n; a++) {
+    const i = order[a]!;
+    const mi = Math.hypot(re[i]!, im[i]!);
+    const reach = (r * mi) / (1 - r);
+    for (let b = a + 1; b < n; b++) {
+      const j = order[b]!;
+      if (re[j]! - re[i]! > reach) break;
+      const d = Math.hypot(re[j]! - re[i]!, im[j]! - im[i]!);
+      if (d <= r * Math.max(mi, Math.hypot(re[j]!, im[j]!))) {
+        out[i]!.push(j);
+        out[j]!.push(i);
+      }
+    }
+  }
+  return out;
+}
+
+/** Refined centre [re, im] of a cluster if it passes as one m-fold root, else undefined. */
+function verifiedCentre(
+  c: Float64Array,
+  derivs: Float64Array[],
+  re: Float64Array,
+  im: Float64Array,
+  members: number[],
+  real: boolean,
+  radius: number,
+  tol: number,
+): [number, number] | undefined {
+  const m = members.length;
+  let x0 = 0;
+  let y0 = 0;
+  for (const k of members) {
+    x0 += re[k]!;
+    y0 += im[k]!;
+  }
+  x0 /= m;
+  y0 = real ? 0 : y0 / m;
+  if (m > c.length - 1) return undefined;
+  while (derivs.length <= m) derivs.push(derivative(derivs[derivs.length - 1]!));
+  const f = derivs[m - 1]!;
+  const absF = f.map(Math.abs);
+  const g = new Float64Array(3);
+  let x = x0;
+  let y = y0;
+  for (let s = 0; s < REFINE_STEPS; s++) {
+    logDerivative(f, absF, x, y, g);
+    if (g[2] === 0) break;
+    const gd = g[0]! * g[0]! + g[1]! * g[1]!;
+    const dx = g[0]! / gd;
+    const dy = -g[1]! / gd;
+    if (!Number.isFinite(dx) || !Number.isFinite(dy)) break;
+    x -= dx;
+    y -= dy;
+    if (Math.hypot(dx, dy) <= 2 * Number.EPSILON * Math.hypot(x, y)) break;
+  }
+  if (!(Math.hypot(x - x0, y - y0) <= radius)) return undefined;
+  if (real) y = 0;
+  for (let j = 0; j < m - 1; j++) if (!(relativeResidual(derivs[j]!, x, y) <= tol)) return undefined;
+  return [x, y];
+}
+
+function derivative(p: Float64Array): Float64Array {
+  const n = p.length - 1;
+  const out = new Float64Array(Math.max(n, 1));
+  for (let i = 0; i < n; i++) out[i] = p[i]! * (n - i);
+  return out;
+}
