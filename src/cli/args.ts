@@ -12,7 +12,11 @@ export interface ParsedArgs {
  * Splits argv by the command's accepted flags (which take a value) and switches (which do not). An unknown
  * `--name` is an error that lists what the command accepts.
  */
-export function parseArgs(argv: string[], valueFlags: readonly string[], switchFlags: readonly string[]): ParsedArgs {
+export function parseArgs(
+  argv: string[],
+  valueFlags: readonly string[],
+  switchFlags: readonly string[],
+): ParsedArgs {
   const positionals: string[] = [];
   const flags = new Map<string, string>();
   const switches = new Set<string>();
@@ -56,6 +60,7 @@ export function numberFlag(args: ParsedArgs, name: string, fallback: number): nu
   const raw = args.flags.get(name);
   if (raw === undefined) return fallback;
   const v = Number(raw.trim());
-  if (raw.trim() === '' || !Number.isFinite(v)) throw new UsageError(`--${name} must be a number; got "${raw}".`);
+  if (raw.trim() === '' || !Number.isFinite(v))
+    throw new UsageError(`--${name} must be a number; got "${raw}".`);
   return v;
 }

@@ -1,7 +1,7 @@
 /** Resolves the design a command works on: a design file, or coefficients/equation/H(z) given as flags. */
 import { readFileSync } from 'node:fs';
 import type { TransferFunction, Zpk } from '../core/types.ts';
-import { parseCoefficients, parseDifferenceEquation, parseRational } from '../core/parse/index.ts';
+import { parseCoefficients, parseDifferenceEquation, parseSystem } from '../core/parse/index.ts';
 import { tfToZpk, compressRoots } from '../core/system.ts';
 import { resolveGain } from '../core/gainRule.ts';
 import { readDesignFile } from '../share/designFile.ts';
@@ -18,15 +18,18 @@ export interface CliDesign {
   sampleRate: number;
   /** Where the design came from, for messages. */
   source: string;
+  /** Things the user should know about how the input was read. */
+  notes: string[];
 }
 
-function fromTf(tf: TransferFunction, fs: number, source: string): CliDesign {
+function fromTf(tf: TransferFunction, fs: number, source: string, notes: string[] = []): CliDesign {
   const zpk = tfToZpk(tf);
   return {
     zpk: { zeros: compressRoots(zpk.zeros), poles: compressRoots(zpk.poles), gain: zpk.gain },
     typed: tf,
     sampleRate: fs,
     source,
+    notes,
   };
 }
 
@@ -40,7 +43,8 @@ function parseFailure(flag: string, text: string, error: { message: string; posi
 export function readDesign(args: ParsedArgs): CliDesign {
   const fsGiven = args.flags.has('fs');
   const fs = numberFlag(args, 'fs', 1);
-  if (!(fs > 0)) throw new UsageError(`--fs must be a positive sample rate in Hz; got "${args.flags.get('fs')}".`);
+  if (!(fs > 0))
+    throw new UsageError(`--fs must be a positive sample rate in Hz; got "${args.flags.get('fs')}".`);
   const file = args.positionals[0];
   const given = ['eq', 'tf', 'b'].filter((f) => args.flags.has(f));
   if (file !== undefined && given.length > 0) {
@@ -52,7 +56,9 @@ export function readDesign(args: ParsedArgs): CliDesign {
     try {
       text = readFileSync(file, 'utf8');
     } catch (e) {
-      throw new UsageError(`Cannot read the design file ${file}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}`);
+      throw new UsageError(
+        `Cannot read the design file ${file}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}`,
+      );
     }
     const read = readDesignFile(text);
     if (!read.ok) throw new UsageError(`${file}: ${read.message}`);
@@ -64,6 +70,7 @@ export function readDesign(args: ParsedArgs): CliDesign {
       typed: d.typed ? { b: d.typed.b, a: d.typed.a } : null,
       sampleRate,
       source: file,
+      notes: [],
     };
   }
   const eq = args.flags.get('eq');
@@ -74,9 +81,14 @@ export function readDesign(args: ParsedArgs): CliDesign {
   }
   const tf = args.flags.get('tf');
   if (tf !== undefined) {
-    const r = parseRational(tf);
+    const r = parseSystem(tf);
     if (!r.ok) throw parseFailure('tf', tf, r.error);
-    return fromTf(r.value, fs, '--tf');
+    if (r.value.form !== 'rational') {
+      throw new UsageError(
+        `--tf expects H(z) in z or z^-1; this reads as ${r.value.detail} (use --eq or --b/--a).`,
+      );
+    }
+    return fromTf(r.value.tf, fs, '--tf', r.value.notes);
   }
   const b = args.flags.get('b');
   if (b !== undefined) {

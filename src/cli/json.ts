@@ -4,7 +4,8 @@
 export function toJson(value: unknown): string {
   return (
     JSON.stringify(value, (_key, v: unknown) => {
-      if (ArrayBuffer.isView(v) && !(v instanceof DataView)) return Array.from(v as unknown as ArrayLike<number>);
+      if (ArrayBuffer.isView(v) && !(v instanceof DataView))
+        return Array.from(v as unknown as ArrayLike<number>);
       if (typeof v === 'number' && !Number.isFinite(v)) return String(v);
       return v;
     }) + '\n'

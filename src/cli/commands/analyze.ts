@@ -45,6 +45,7 @@ const fmtRoot = (r: { re: number; im: number; multiplicity: number }) =>
 export function runAnalyze(argv: string[], io: CliIo): number {
   const args = parseArgs(argv, DESIGN_FLAGS, ['json']);
   const d = readDesign(args);
+  for (const note of d.notes) io.stderr(`note: ${note}\n`);
   const out = analysis(d);
   if (args.switches.has('json')) {
     io.stdout(toJson(out));
@@ -59,7 +60,10 @@ export function runAnalyze(argv: string[], io: CliIo): number {
   lines.push(`poles (${out.poles.length}):`, ...out.poles.map((r) => `  ${fmtRoot(r)}`));
   lines.push(`b: ${out.b.map(fmt).join(', ')}`);
   lines.push(`a: ${out.a.map(fmt).join(', ')}`);
-  lines.push('second-order sections [b0 b1 b2 a0 a1 a2]:', ...out.sections.map((s) => `  ${s.map(fmt).join('  ')}`));
+  lines.push(
+    'second-order sections [b0 b1 b2 a0 a1 a2]:',
+    ...out.sections.map((s) => `  ${s.map(fmt).join('  ')}`),
+  );
   lines.push('roots:');
   for (const r of out.readouts) {
     const parts = [`${r.kind} ${fmtRoot(r.root)}`, `${fmt(r.frequencyHz)} Hz`, `radius ${fmt(r.radius)}`];

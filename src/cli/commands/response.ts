@@ -14,6 +14,7 @@ export const LOG_GRID_MIN_FRACTION = 1e-4;
 export function runResponse(argv: string[], io: CliIo): number {
   const args = parseArgs(argv, [...DESIGN_FLAGS, 'points'], ['json', 'log']);
   const d = readDesign(args);
+  for (const note of d.notes) io.stderr(`note: ${note}\n`);
   const points = intFlag(args, 'points', 512, 2, MAX_RESPONSE_POINTS);
   const log = args.switches.has('log');
   const omega = frequencyGrid(points, log ? { log: true, fMin: LOG_GRID_MIN_FRACTION } : {});

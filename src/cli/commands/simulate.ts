@@ -17,7 +17,9 @@ export function readCsvColumn(path: string): Float64Array {
   try {
     text = readFileSync(path, 'utf8');
   } catch (e) {
-    throw new UsageError(`Cannot read the input file ${path}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}`);
+    throw new UsageError(
+      `Cannot read the input file ${path}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}`,
+    );
   }
   const values: number[] = [];
   const lines = text.split(/\r?\n/);
@@ -28,7 +30,9 @@ export function readCsvColumn(path: string): Float64Array {
     const v = Number(cell);
     if (cell === '' || !Number.isFinite(v)) {
       if (values.length === 0 && i === lines.findIndex((l) => l.trim() !== '')) continue; // header
-      throw new UsageError(`${path}, line ${i + 1}: "${cell}" is not a number (expected one sample per line).`);
+      throw new UsageError(
+        `${path}, line ${i + 1}: "${cell}" is not a number (expected one sample per line).`,
+      );
     }
     values.push(v);
     if (values.length > MAX_SIMULATE_SAMPLES) {
@@ -47,7 +51,8 @@ function inputSignal(spec: string, n: number | null, fs: number): Float64Array {
   const sine = /^sine:(.+)$/.exec(spec);
   if (sine) {
     const hz = Number(sine[1]);
-    if (!Number.isFinite(hz) || hz < 0) throw new UsageError(`--input sine:<Hz> needs a frequency in Hz; got "${sine[1]}".`);
+    if (!Number.isFinite(hz) || hz < 0)
+      throw new UsageError(`--input sine:<Hz> needs a frequency in Hz; got "${sine[1]}".`);
     return makeSine((2 * Math.PI * hz) / fs, count);
   }
   const samples = readCsvColumn(spec);
@@ -58,6 +63,7 @@ function inputSignal(spec: string, n: number | null, fs: number): Float64Array {
 export function runSimulate(argv: string[], io: CliIo): number {
   const args = parseArgs(argv, [...DESIGN_FLAGS, 'input', 'samples'], ['json']);
   const d = readDesign(args);
+  for (const note of d.notes) io.stderr(`note: ${note}\n`);
   const spec = args.flags.get('input') ?? 'impulse';
   const n = args.flags.has('samples') ? intFlag(args, 'samples', 64, 1, MAX_SIMULATE_SAMPLES) : null;
   const x = inputSignal(spec, n, d.sampleRate);

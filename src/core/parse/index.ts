@@ -8,16 +8,16 @@ import type { Result, TransferFunction, Zpk } from '../types.ts';
 import { coefficientsFromText } from './coefficients.ts';
 import { equationFromText } from './equation.ts';
 import { guard } from './errors.ts';
-import { ratioFromText, ratioToTransferFunction, ratioVariable } from './rational.ts';
+import { ratioExcess, ratioFromText, ratioToTransferFunction, ratioVariable } from './rational.ts';
 import { zpkFromText } from './roots.ts';
-import { zpkToTransferFunction } from './zpk.ts';
+import { withOriginPoles, zpkExcess, zpkToTransferFunction } from './zpk.ts';
 
 export { parseCoefficients } from './coefficients.ts';
 export { parseDifferenceEquation } from './equation.ts';
 export { parseRational } from './rational.ts';
 export { parseRoots, ROOTS_SYNTAX } from './roots.ts';
 export { parseNumber } from './scalar.ts';
-export { zpkToTransferFunction } from './zpk.ts';
+export { zpkToTransferFunction, zpkExcess, withOriginPoles } from './zpk.ts';
 
 export type EntryForm = 'equation' | 'rational' | 'coefficients' | 'roots';
 
@@ -30,6 +30,18 @@ export interface ParsedSystem {
   tf: TransferFunction;
   /** Present when the input was given as roots. */
   zpk?: Zpk;
+  /** Things the user should know about how the input was read (e.g. a delay added to make it causal). */
+  notes: string[];
+}
+
+/** The note for an improper H(z) that was delayed by `excess` samples. */
+function delayNote(excess: number): string[] {
+  if (excess === 0) return [];
+  const s = excess > 1 ? 's' : '';
+  return [
+    `H(z) as typed has ${excess} more zero${s} than poles, which no causal filter realises; ` +
+      `${excess} pole${s} at the origin ${excess > 1 ? 'were' : 'was'} added (a delay of ${excess} sample${s}). The magnitude is unchanged.`,
+  ];
 }
 
 const ROOT_LABEL = /(?:^|[\s;,])(?:zeros?|poles?|gain|[zpk])\s*[:=]/i;
@@ -49,21 +61,29 @@ export function parseSystem(text: string): Result<ParsedSystem> {
   return guard(text, (): ParsedSystem => {
     switch (detectForm(text)) {
       case 'roots': {
-        const zpk = zpkFromText(text);
-        return { form: 'roots', detail: 'zeros, poles and gain', tf: zpkToTransferFunction(zpk), zpk };
+        const typed = zpkFromText(text);
+        const excess = zpkExcess(typed);
+        const zpk = withOriginPoles(typed, excess);
+        const tf = zpkToTransferFunction(zpk);
+        return { form: 'roots', detail: 'zeros, poles and gain', tf, zpk, notes: delayNote(excess) };
       }
       case 'equation': {
         const eq = equationFromText(text);
-        return { form: 'equation', detail: `difference equation, ${eq.form}`, tf: eq.tf };
+        return { form: 'equation', detail: `difference equation, ${eq.form}`, tf: eq.tf, notes: [] };
       }
       case 'rational': {
         const ratio = ratioFromText(text);
-        return { form: 'rational', detail: ratioVariable(ratio), tf: ratioToTransferFunction(ratio) };
+        return {
+          form: 'rational',
+          detail: ratioVariable(ratio),
+          tf: ratioToTransferFunction(ratio),
+          notes: delayNote(ratioExcess(ratio)),
+        };
       }
       case 'coefficients': {
         const tf = coefficientsFromText(text);
         const detail = tf.a.length === 1 ? 'coefficient list b (FIR)' : 'coefficient lists b and a';
-        return { form: 'coefficients', detail, tf };
+        return { form: 'coefficients', detail, tf, notes: [] };
       }
     }
   });

@@ -110,18 +110,20 @@ function toDescending(p: Laurent, top: number): number[] {
   return out;
 }
 
-/** b, a in powers of z^-1 for num/den, both multiplied by the same power of z so the newest term is z^0. */
+/** How many more powers of z the numerator reaches than the denominator (0 for a causal H(z)). */
+export function ratioExcess(r: Ratio): number {
+  return Math.max(0, highPower(r.num) - highPower(r.den));
+}
+
+/**
+ * b, a in powers of z^-1 for num/den, both multiplied by the same power of z so the newest term is z^0.
+ * An improper H(z) (numerator of higher degree: more zeros than poles, not causal) is delayed by its excess,
+ * i.e. z^-excess·H(z) — poles at the origin are added so a causal filter can realise it; parseSystem says so.
+ */
 export function ratioToTransferFunction(r: Ratio): TransferFunction {
   if (isZero(r.num)) fail('the numerator is zero, so H(z) = 0', 0, 'a nonzero numerator');
   const top = Math.max(highPower(r.num), highPower(r.den));
-  const tf = { b: toDescending(r.num, top), a: toDescending(r.den, top) };
-  if (tf.a[0] === 0) {
-    fail(
-      `H(z) is not causal: the numerator reaches z^${highPower(r.num)} but the denominator only z^${highPower(r.den)}`,
-      0,
-      'a numerator whose highest power of z is at most that of the denominator',
-    );
-  }
+  const tf = { b: toDescending(r.num, top), a: toDescending(r.den, top - ratioExcess(r)) };
   return checkTransferFunction(tf, 0);
 }
 

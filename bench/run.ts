@@ -1,0 +1,18 @@
+/** `npm run bench`: every benchmark, printed as the markdown kept in bench/README.md. */
+import { benchResponse, benchDragRecompute } from './engine.ts';
+
+const parts: string[] = [`# Benchmark run ${new Date().toISOString()}`, ''];
+const only = process.argv.slice(2);
+const want = (name: string) => only.length === 0 || only.includes(name);
+
+if (want('roots')) {
+  const { benchRoots } = await import('./roots.ts');
+  parts.push('## Root finding (ours vs numpy.roots)', '', await benchRoots(), '');
+}
+if (want('response')) parts.push('## Frequency response', '', benchResponse(), '');
+if (want('recompute')) parts.push('## Drag-step recompute (engine)', '', benchDragRecompute(), '');
+if (want('drag')) {
+  const { benchDrag } = await import('./drag.ts');
+  parts.push('## Scripted drag in headless Chromium', '', await benchDrag(), '');
+}
+console.log(parts.join('\n'));
