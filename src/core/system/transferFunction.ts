@@ -9,7 +9,7 @@
 import type { Root, TransferFunction, Zpk } from '../types.ts';
 import { polyFromRoots } from '../poly.ts';
 import { findRoots } from '../roots.ts';
-import { compressRoots, rootCount } from './rootList.ts';
+import { rootCount } from './rootList.ts';
 
 /**
  * b/a (a[0] = 1) of the zpk. With more zeros than poles H is not causal; the arrays then describe the causal
@@ -24,12 +24,13 @@ export function zpkToTf(zpk: Zpk): TransferFunction {
   return { b, a: Array.from(den) };
 }
 
-/** Roots of a polynomial given in descending powers, in the stored form (im >= 0, multiplicities merged). */
+/**
+ * Roots of a polynomial given in descending powers, in the stored form (im >= 0, multiplicities merged).
+ * Uses the root finder's verified, refined grouping of repeated roots: the centre of a raw cluster can sit
+ * ~1e-8 off a double root, enough to move a double pole on the circle off it.
+ */
 export function polyRoots(p: ArrayLike<number>): Root[] {
-  const found = findRoots(p);
-  const all: Root[] = [];
-  for (let i = 0; i < found.re.length; i++) all.push({ re: found.re[i]!, im: found.im[i]!, multiplicity: 1 });
-  return compressRoots(all);
+  return findRoots(p).grouped.filter((r) => r.im >= 0);
 }
 
 function firstNonZero(p: readonly number[]): number {

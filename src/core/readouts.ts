@@ -1,0 +1,76 @@
+/** Per-root read-outs in the trade's units: frequency, radius, decay, Q and bandwidth, notch depth. */
+import type { Root, Zpk } from './types.ts';
+import { responseAt } from './response/pointValue.ts';
+
+/** What one stored root (a conjugate pair counts once) means at the design's sample rate. */
+export interface RootReadout {
+  root: Root;
+  kind: 'pole' | 'zero';
+  /** Angle expressed as a frequency, Hz, in [0, fs/2]. */
+  frequencyHz: number;
+  radius: number;
+  /** Angle in radians per sample, in [0, π]. */
+  angleRad: number;
+  /** Poles inside the circle: τ = −1/ln r, samples for the envelope to fall by 1/e. */
+  timeConstantSamples?: number;
+  timeConstantSeconds?: number;
+  /** Poles inside the circle: time for the envelope to fall by 40 dB, ln(100)·τ / fs. */
+  decay40dBSeconds?: number;
+  /** Complex poles inside the circle: f0 / bandwidth. */
+  q?: number;
+  /** Complex poles inside the circle: −3 dB bandwidth estimate (1 − r)·fs/π, Hz. */
+  bandwidthHz?: number;
+  /** Zeros within NOTCH_RADIUS_BAND of the circle: |H| in dB at the zero's angle. */
+  notchDepthDb?: number;
+  notchFrequencyHz?: number;
+}
+
+/**
+ * Zeros with | |z| − 1 | <= 0.05 are read out as notches. A display choice, not numerics: farther from the
+ * circle a zero shapes the response without a dip worth naming.
+ */
+export const NOTCH_RADIUS_BAND = 0.05;
+
+/**
+ * Read-outs for every stored pole, then every stored zero, at sample rate fs (Hz). The bandwidth uses the
+ * narrow-resonance approximation: a pole at radius r gives a −3 dB width of 2(1 − r) rad/sample, i.e.
+ * (1 − r)·fs/π Hz; accurate when 1 − r is small and the pole is well away from 0 and fs/2.
+ */
+export function rootReadouts(zpk: Zpk, fs: number): RootReadout[] {
+  const out: RootReadout[] = [];
+  for (const p of zpk.poles) {
+    const r = base(p, 'pole', fs);
+    if (r.radius < 1) {
+      const tau = r.radius === 0 ? 0 : -1 / Math.log(r.radius);
+      r.timeConstantSamples = tau;
+      r.timeConstantSeconds = tau / fs;
+      r.decay40dBSeconds = (Math.log(100) * tau) / fs;
+      if (p.im > 0) {
+        r.bandwidthHz = ((1 - r.radius) * fs) / Math.PI;
+        r.q = r.frequencyHz / r.bandwidthHz;
+      }
+    }
+    out.push(r);
+  }
+  for (const z of zpk.zeros) {
+    const r = base(z, 'zero', fs);
+    if (Math.abs(r.radius - 1) <= NOTCH_RADIUS_BAND) {
+      const h = responseAt(zpk, r.angleRad);
+      r.notchFrequencyHz = r.frequencyHz;
+      r.notchDepthDb = 20 * Math.log10(Math.hypot(h.re, h.im));
+    }
+    out.push(r);
+  }
+  return out;
+}
+
+function base(root: Root, kind: 'pole' | 'zero', fs: number): RootReadout {
+  const angleRad = Math.abs(Math.atan2(root.im, root.re));
+  return {
+    root,
+    kind,
+    frequencyHz: (angleRad * fs) / (2 * Math.PI),
+    radius: Math.hypot(root.re, root.im),
+    angleRad,
+  };
+}

@@ -1,0 +1,71 @@
+import { describe, it, expect } from 'vitest';
+import { rootReadouts } from '../../src/core/readouts.ts';
+import { responseZpk } from '../../src/core/response.ts';
+import type { Zpk } from '../../src/core/types.ts';
+import { expectClose } from '../helpers/expectClose.ts';
+
+const fs = 48000;
+
+describe('rootReadouts', () => {
+  const t = (2 * Math.PI * 1000) / fs;
+  const resonator: Zpk = {
+    zeros: [],
+    poles: [{ re: 0.99 * Math.cos(t), im: 0.99 * Math.sin(t), multiplicity: 1 }],
+    gain: 1,
+  };
+  it('pole pair: frequency, radius, time constant, 40 dB decay, bandwidth and Q', () => {
+    const [r] = rootReadouts(resonator, fs);
+    expect(r!.kind).toBe('pole');
+    expectClose(r!.frequencyHz, 1000, { rel: 1e-12 });
+    expectClose(r!.radius, 0.99, { rel: 1e-15 });
+    // common practice: tau = -1/ln r samples; 40 dB = amplitude / 100
+    expectClose(r!.timeConstantSamples!, 99.4991624, { rel: 1e-8 });
+    expectClose(r!.timeConstantSeconds!, 99.4991624 / fs, { rel: 1e-8 });
+    expectClose(r!.decay40dBSeconds!, (Math.log(100) * 99.4991624) / fs, { rel: 1e-8 });
+    expectClose(r!.bandwidthHz!, (0.01 * fs) / Math.PI, { rel: 1e-12 });
+    expectClose(r!.q!, 1000 / ((0.01 * fs) / Math.PI), { rel: 1e-12 });
+  });
+  it('the bandwidth estimate is within 2% of the measured -3 dB width of the resonance', () => {
+    const grid = Float64Array.from({ length: 40001 }, (_, i) => t - 0.04 + (0.08 * i) / 40000);
+    const h = responseZpk(resonator, grid);
+    const peak = Math.max(...h.magnitude);
+    const above = grid.filter((_, i) => h.magnitude[i]! >= peak / Math.SQRT2);
+    const measuredHz = ((above[above.length - 1]! - above[0]!) * fs) / (2 * Math.PI);
+    const [r] = rootReadouts(resonator, fs);
+    expectClose(r!.bandwidthHz!, measuredHz, { rel: 0.02 });
+  });
+  it('real pole: time constant but no Q; pole at the origin decays at once; pole outside has no decay', () => {
+    const out = rootReadouts(
+      {
+        zeros: [],
+        poles: [
+          { re: 0.5, im: 0, multiplicity: 1 },
+          { re: 0, im: 0, multiplicity: 1 },
+          { re: -1.2, im: 0, multiplicity: 1 },
+        ],
+        gain: 1,
+      },
+      fs,
+    );
+    expectClose(out[0]!.timeConstantSamples!, 1 / Math.LN2, { rel: 1e-15 });
+    expect(out[0]!.q).toBeUndefined();
+    expect(out[1]!.timeConstantSamples).toBe(0);
+    expect(out[2]!.timeConstantSamples).toBeUndefined();
+    expectClose(out[2]!.frequencyHz, fs / 2, { rel: 1e-15 });
+  });
+  it('zero near the circle: notch frequency and depth from the full response', () => {
+    const th = (2 * Math.PI * 50) / fs;
+    const zpk: Zpk = {
+      zeros: [{ re: 0.98 * Math.cos(th), im: 0.98 * Math.sin(th), multiplicity: 1 }],
+      poles: [],
+      gain: 2,
+    };
+    const z = rootReadouts(zpk, fs)[0]!;
+    expectClose(z.notchFrequencyHz!, 50, { rel: 1e-12 });
+    // common practice: |H(e^{iθ})| = k·(1 − r)·|1 − r·e^{−2iθ}|
+    const far = Math.hypot(1 - 0.98 * Math.cos(2 * th), 0.98 * Math.sin(2 * th));
+    expectClose(z.notchDepthDb!, 20 * Math.log10(2 * 0.02 * far), { abs: 1e-9 });
+    const away = rootReadouts({ zeros: [{ re: 0.5, im: 0.2, multiplicity: 1 }], poles: [], gain: 1 }, fs)[0]!;
+    expect(away.notchDepthDb).toBeUndefined();
+  });
+});
