@@ -5,11 +5,24 @@
  * B(x)·(1 − p x)^m / A(x) about x = 1/p (x = z^-1), computed as a product of the other poles' factors — the
  * derivative formula for repeated poles, evaluated without forming derivatives of A.
  */
-import type { Root, TransferFunction } from './types.ts';
+import type { Root, TransferFunction, Zpk } from './types.ts';
+import { polyMul } from './poly.ts';
+import { zpkToTf } from './system/transferFunction.ts';
+import { expandRoots, rootCount } from './system/rootList.ts';
 import type { Poly } from './poly.ts';
-import { findRoots } from './roots.ts';
+import { findPoleGroups } from './time/poleSearch.ts';
 import { mergeRepeatedPoles } from './time/repeatedPoles.ts';
 import { taylorAt } from './time/taylor.ts';
+import { factorSeries, seriesDiv, seriesMulInPlace, type Series } from './time/series.ts';
+
+/** First m Taylor coefficients of the numerator N(x), x = z^-1, about the complex point x0. */
+export type NumeratorSeries = (x0r: number, x0i: number, m: number) => Series;
+
+/** Numerator series of a polynomial b in powers of z^-1 (b[k] multiplies x^k). */
+export function polynomialNumerator(b: Poly): NumeratorSeries {
+  const descending = Array.from(b).reverse();
+  return (x0r, x0i, m) => taylorAt(descending, x0r, x0i, m);
+}
 
 /** A complex number as a plain pair. */
 export interface Complex {
@@ -33,8 +46,8 @@ export interface PartialFractions {
 /** Partial-fraction expansion of H(z) in powers of z^-1 (scipy.signal.residuez convention). */
 export function partialFractions(tf: TransferFunction): PartialFractions {
   const { b, a } = normalizeTf(tf);
-  const roots = findRoots(a);
-  return expandOverPoles(b, a, mergeRepeatedPoles(a, roots.grouped), roots.converged);
+  const poles = findPoleGroups(a);
+  return expandOverPoles(b, a, mergeRepeatedPoles(a, poles.groups), poles.converged);
 }
 
 /**
@@ -61,13 +74,15 @@ function trimTrailingZeros(p: readonly number[] | Float64Array): Float64Array {
 
 /**
  * Expansion of b/a over the given pole groups (conjugates listed separately, multiplicities summing to the
- * degree of a). a must be monic (a[0] = 1) with a nonzero last coefficient.
+ * degree of a). a must be monic (a[0] = 1) with a nonzero last coefficient. The residues use `numerator`, by
+ * default b's own series; a factored numerator gives more accurate residues at high order.
  */
 export function expandOverPoles(
   b: Poly,
   a: Poly,
   groups: readonly Root[],
   converged: boolean,
+  numerator: NumeratorSeries = polynomialNumerator(b),
 ): PartialFractions {
   const sorted = [...groups].sort(
     (p, q) => Math.hypot(p.re, p.im) - Math.hypot(q.re, q.im) || p.re - q.re || p.im - q.im,
@@ -80,7 +95,9 @@ export function expandOverPoles(
         ? sorted.find((h) => h.re === g.re && h.im === -g.im && h.multiplicity === g.multiplicity)
         : undefined;
     const mirrored = mirror && byGroup.get(mirror);
-    const residues = mirrored ? mirrored.map((r) => ({ re: r.re, im: -r.im })) : residuesAt(b, g, sorted);
+    const residues = mirrored
+      ? mirrored.map((r) => ({ re: r.re, im: -r.im }))
+      : residuesAt(numerator, g, sorted);
     byGroup.set(g, residues);
     residues.forEach((r, k) => {
       out.residues.push(r);
@@ -88,6 +105,8 @@ export function expandOverPoles(
       out.powers.push(k + 1);
     });
   }
+  // Coincident groups the merge could not reconcile give infinite residues: report, do not hide.
+  out.converged = converged && out.residues.every((r) => Number.isFinite(r.re) && Number.isFinite(r.im));
   return out;
 }
 
@@ -107,52 +126,18 @@ function directTerms(b: Poly, a: Poly): number[] {
   return q;
 }
 
-/** Residues r_1..r_m of the m-fold pole g: coefficients of (1 − p x)^(m−k) in B(x)(1 − p x)^m / A(x). */
-function residuesAt(b: Poly, g: Root, all: readonly Root[]): Complex[] {
+/**
+ * Residues r_1..r_m of the m-fold pole g: coefficients of (1 − p x)^(m−k) in N(x)(1 − p x)^m / A(x), from
+ * the numerator's series about x0 = 1/p (x = z^-1) and the other poles' factors.
+ */
+function residuesAt(numerator: NumeratorSeries, g: Root, all: readonly Root[]): Complex[] {
   const m = g.multiplicity;
-  // x0 = 1/p; expansions in t = x − x0, and 1 − p x = −p t.
   const pm = g.re * g.re + g.im * g.im;
   const x0r = g.re / pm;
   const x0i = -g.im / pm;
-  // B has b[k] at x^k: reversed, it is a descending polynomial in x.
-  const [numR, numI] = taylorAt(Array.from(b).reverse(), x0r, x0i, m);
-  const denR = new Float64Array(m);
-  const denI = new Float64Array(m);
-  denR[0] = 1;
-  for (const h of all) {
-    if (h === g) continue;
-    // Factor (1 − q x) = (1 − q x0) − q t, raised to its multiplicity.
-    const cr = 1 - (h.re * x0r - h.im * x0i);
-    const ci = -(h.re * x0i + h.im * x0r);
-    for (let rep = 0; rep < h.multiplicity; rep++) {
-      for (let j = m - 1; j >= 0; j--) {
-        let r = denR[j]! * cr - denI[j]! * ci;
-        let i = denR[j]! * ci + denI[j]! * cr;
-        if (j > 0) {
-          r -= denR[j - 1]! * h.re - denI[j - 1]! * h.im;
-          i -= denR[j - 1]! * h.im + denI[j - 1]! * h.re;
-        }
-        denR[j] = r;
-        denI[j] = i;
-      }
-    }
-  }
-  // Series quotient g(t) = num / den, then coefficient of u^j = g_j · (−1/p)^j with u = 1 − p x.
-  const gR = new Float64Array(m);
-  const gI = new Float64Array(m);
-  const d0 = denR[0]! * denR[0]! + denI[0]! * denI[0]!;
-  for (let j = 0; j < m; j++) {
-    let r = numR[j]!;
-    let i = numI[j]!;
-    for (let k = 1; k <= j; k++) {
-      r -= gR[j - k]! * denR[k]! - gI[j - k]! * denI[k]!;
-      i -= gR[j - k]! * denI[k]! + gI[j - k]! * denR[k]!;
-    }
-    gR[j] = (r * denR[0]! + i * denI[0]!) / d0;
-    gI[j] = (i * denR[0]! - r * denI[0]!) / d0;
-  }
+  // In t = x − x0 the factor 1 − p x is −p t, so u = 1 − p x gives coefficient of u^j = g_j · (−1/p)^j.
+  const [gR, gI] = seriesDiv(numerator(x0r, x0i, m), factorSeries(all, x0r, x0i, m, g));
   const residues: Complex[] = new Array<Complex>(m);
-  // w = −1/p = −x0
   let wr = 1;
   let wi = 0;
   for (let j = 0; j < m; j++) {
@@ -162,4 +147,59 @@ function residuesAt(b: Poly, g: Root, all: readonly Root[]): Complex[] {
     wr = t;
   }
   return residues;
+}
+
+/**
+ * Two poles of a zeros/poles/gain description closer than this (relative to max(1, |p|)) are one repeated
+ * pole: they can only be that close by intent (a cosine input at a pole's frequency, a pole placed twice),
+ * since the positions are exact numbers rather than computed roots.
+ */
+export const COINCIDENT_POLE_TOLERANCE = 1e-9;
+
+/** A rational factor b/a in powers of z^-1 multiplying H(z), with its poles listed (conjugates included). */
+export interface RationalFactor {
+  b: readonly number[];
+  a: readonly number[];
+  poles: readonly Root[];
+}
+
+const UNIT: RationalFactor = { b: [1], a: [1], poles: [] };
+
+/**
+ * Partial fractions of H(z)·F(z) for H given by zeros, poles and gain (b/a aligned as zpkToTf, so a pole
+ * excess shows as a delay). The poles are used as given, not recomputed from coefficients, so high-order
+ * and repeated poles keep full accuracy.
+ */
+export function partialFractionsZpk(zpk: Zpk, factor: RationalFactor = UNIT): PartialFractions {
+  const tf = zpkToTf(zpk);
+  const { b, a } = normalizeTf({
+    b: Array.from(polyMul(tf.b, factor.b)),
+    a: Array.from(polyMul(tf.a, factor.a)),
+  });
+  const zeros = expandRoots(zpk.zeros);
+  const poles = expandRoots(zpk.poles);
+  const delay = Math.max(0, rootCount(zpk.poles) - rootCount(zpk.zeros));
+  const groups: Root[] = [];
+  for (const p of [...poles, ...factor.poles]) {
+    // Poles at the origin are the delay already folded into b.
+    if (p.re === 0 && p.im === 0) continue;
+    const reach = COINCIDENT_POLE_TOLERANCE * Math.max(1, Math.hypot(p.re, p.im));
+    const same = groups.find((g) => Math.hypot(g.re - p.re, g.im - p.im) <= reach);
+    if (same) same.multiplicity += p.multiplicity;
+    else groups.push({ ...p });
+  }
+  const factorNumerator = polynomialNumerator(factor.b);
+  const numerator: NumeratorSeries = (x0r, x0i, m) => {
+    // N(x) = k · x^delay · Π(1 − zᵢ x) · b_F(x)
+    const s = factorSeries(zeros, x0r, x0i, m);
+    seriesMulInPlace(s, factorNumerator(x0r, x0i, m));
+    const shift: Series = [Float64Array.of(x0r, 1), Float64Array.of(x0i, 0)];
+    for (let k = 0; k < delay; k++) seriesMulInPlace(s, shift);
+    for (let j = 0; j < m; j++) {
+      s[0][j]! *= zpk.gain;
+      s[1][j]! *= zpk.gain;
+    }
+    return s;
+  };
+  return expandOverPoles(b, a, groups, true, numerator);
 }
