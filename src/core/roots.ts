@@ -1,12 +1,14 @@
 /**
  * All roots of a real polynomial: the Aberth–Ehrlich simultaneous iteration from Bini's starting points
- * (roots/aberth.ts, roots/start.ts), exact conjugate symmetry (roots/conjugate.ts) and verified merging of
+ * (roots/aberth.ts, roots/start.ts), a compensated-arithmetic polish of badly conditioned roots
+ * (roots/polish.ts), exact conjugate symmetry (roots/conjugate.ts) and verified merging of
  * repeated roots (roots/multiplicity.ts). Degrees 1 and 2 are solved in closed form.
  */
 import type { Root } from './types.ts';
 import type { Poly } from './poly.ts';
 import { aberthIterate } from './roots/aberth.ts';
 import { startingPoints } from './roots/start.ts';
+import { polishIllConditioned } from './roots/polish.ts';
 import { symmetrizeConjugates } from './roots/conjugate.ts';
 import { groupMultipleRoots } from './roots/multiplicity.ts';
 
@@ -69,6 +71,7 @@ export function findRoots(p: Poly, options: RootsOptions = {}): RootsResult {
     const zi = im.subarray(0, n);
     startingPoints(c, zr, zi);
     ({ converged, iterations } = aberthIterate(c, zr, zi, options.maxIterations ?? DEFAULT_MAX_ITERATIONS));
+    if (converged) iterations += polishIllConditioned(c, zr, zi);
   }
   const mate = symmetrizeConjugates(c, re.subarray(0, n), im.subarray(0, n));
   const grouped = n > 0 ? groupMultipleRoots(c, re.subarray(0, n), im.subarray(0, n), mate) : [];

@@ -3,10 +3,10 @@
  * with the nearest unused root below it; a pair is accepted at once when its mismatch is smaller than either
  * imaginary part (so two drifted real roots are not glued into a fake pair). The member with the smaller
  * residual |p(z)| / Σ|c_k||z|^k is kept and the other becomes its exact conjugate, so pairing never raises
- * the backward error, even inside a badly conditioned cluster where the pairing is ambiguous. Real roots
- * that drifted off the axis move onto it and take a few real Newton steps.
+ * the backward error, even inside a badly conditioned cluster where the pairing is ambiguous.
  */
 import { relativeResidual } from './horner.ts';
+import { ABERTH_STOP_PER_DEGREE } from './aberth.ts';
 
 /** Real Newton steps for a root projected onto the real axis. */
 const REAL_NEWTON_STEPS = 4;
@@ -36,12 +36,20 @@ export function symmetrizeConjugates(c: Float64Array, re: Float64Array, im: Floa
     used[k] = 1;
     pairUp(c, re, im, mate, i, j);
   }
-  // Roots still unpaired only occur in badly conditioned clusters, where Aberth's answers are not symmetric
-  // (even the counts above and below the axis may differ). Reflecting a root does not change its residual,
-  // so all move above the axis and pair by nearness; an odd one out goes to the real axis.
+  // A root left unpaired is a real root that drifted off the axis if its real Newton polish has a residual
+  // no worse than before (or at rounding level). The rest only occur in badly conditioned clusters, where
+  // Aberth's answers are not symmetric (even the counts above and below the axis may differ): reflecting a
+  // root does not change its residual, so they all move above the axis and pair by nearness.
+  const rounding = ABERTH_STOP_PER_DEGREE * (c.length - 1) * Number.EPSILON;
   const rest: number[] = [];
   for (let i = 0; i < n; i++) {
     if (mate[i] !== -1 || im[i] === 0) continue;
+    const x = realNewton(c, re[i]!);
+    if (relativeResidual(c, x, 0) <= Math.max(rounding, relativeResidual(c, re[i]!, im[i]!))) {
+      re[i] = x;
+      im[i] = 0;
+      continue;
+    }
     im[i] = Math.abs(im[i]!);
     rest.push(i);
   }
