@@ -94,24 +94,52 @@ export function linePath(px: ArrayLike<number>, py: ArrayLike<number>, o: LineOp
   return parts.join('');
 }
 
-/** Vertical stems from the baseline y0 to each (px[i], py[i]), clamped to [top, bottom], as one path. */
+/**
+ * Vertical stems from the baseline y0 to each (px[i], py[i]), clamped to [top, bottom], as one path. With
+ * `thin` (x increasing), the stems sharing a pixel column become one segment covering them all.
+ */
 export function stemsPath(
   px: ArrayLike<number>,
   py: ArrayLike<number>,
   y0: number,
   top: number,
   bottom: number,
+  thin = false,
 ): string {
   const lo = top - CLIP_OVERSHOOT_PX;
   const hi = bottom + CLIP_OVERSHOOT_PX;
+  const base = r1(y0);
   const parts: string[] = [];
+  let col = NaN;
+  let cx = 0;
+  let cMin = 0;
+  let cMax = 0;
+  const flush = () => {
+    if (!Number.isNaN(col)) parts.push(`M${r1(cx)} ${r1(cMin)}V${r1(cMax)}`);
+    col = NaN;
+  };
   for (let i = 0; i < px.length; i++) {
     const x = px[i]!;
     const raw = py[i]!;
     if (Number.isNaN(x) || Number.isNaN(raw)) continue;
     const y = raw < lo ? lo : raw > hi ? hi : raw;
-    parts.push(`M${r1(x)} ${r1(y0)}V${r1(y)}`);
+    if (!thin) {
+      parts.push(`M${r1(x)} ${base}V${r1(y)}`);
+      continue;
+    }
+    const c = Math.round(x);
+    if (c !== col) {
+      flush();
+      col = c;
+      cx = c;
+      cMin = Math.min(y0, y);
+      cMax = Math.max(y0, y);
+    } else {
+      if (y < cMin) cMin = y;
+      if (y > cMax) cMax = y;
+    }
   }
+  flush();
   return parts.join('');
 }
 

@@ -79,3 +79,29 @@ export function settleRange(current: Range | null, data: Range, wanted: Range, h
   if (w1 - w0 < SHRINK_BELOW_FRACTION * (c1 - c0)) return wanted;
   return current;
 }
+
+/**
+ * [lo, hi] widened to at least minSpan and rounded outwards to the smallest step from `steps` that cuts it
+ * into at most `count` parts (e.g. multiples of 90° for a phase axis); niceRange beyond the largest step.
+ */
+export function steppedRange(
+  lo: number,
+  hi: number,
+  minSpan: number,
+  steps: readonly number[],
+  count = 4,
+): Range {
+  let a = lo;
+  let b = hi;
+  if (b - a < minSpan) {
+    const mid = (a + b) / 2;
+    a = mid - minSpan / 2;
+    b = mid + minSpan / 2;
+  }
+  for (const s of steps) {
+    const r0 = Math.floor(a / s) * s;
+    const r1 = Math.ceil(b / s) * s;
+    if ((r1 - r0) / s <= count) return [r0, r1];
+  }
+  return niceRange(a, b, 0, count);
+}

@@ -63,3 +63,20 @@ export function formatHzTick(hz: number): string {
   if (a >= 1e3) return `${formatNumber(hz / 1e3, 3)}k`;
   return formatNumber(hz, 3);
 }
+
+/** Steps that read well for angles in degrees (multiples of 15° up to whole turns and beyond). */
+export const DEGREE_STEPS = [15, 30, 45, 90, 180, 360, 720, 1440, 2880, 5760, 11520] as const;
+
+/**
+ * About `count` ticks on [lo, hi] at the smallest step from `steps` that gives no more than `count + 1`
+ * ticks, e.g. degrees on a phase axis; falls back to linearTicks beyond the largest step.
+ */
+export function stepTicks(lo: number, hi: number, count: number, steps: readonly number[]): Tick[] {
+  if (!(Number.isFinite(lo) && Number.isFinite(hi)) || lo >= hi) return [];
+  const step = steps.find((s) => Math.floor(hi / s) - Math.ceil(lo / s) + 1 <= Math.max(2, count) + 1);
+  if (step === undefined) return linearTicks(lo, hi, count);
+  const ticks: Tick[] = [];
+  for (let k = Math.ceil(lo / step); k * step <= hi; k++)
+    ticks.push({ value: k * step, label: formatTickValue(k * step, step) });
+  return ticks;
+}

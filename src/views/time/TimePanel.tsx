@@ -1,4 +1,43 @@
-/** The time panel (placeholder until the time view lands). */
+/** The time view: input and output of the current system, the slowest pole's envelope and the closed form. */
+import { useRef, useState } from 'react';
+import { useWorkbench } from '../../store/useWorkbench.ts';
+import { useElementSize } from '../chart/useElementSize.ts';
+import { ClosedFormList } from './ClosedFormList.tsx';
+import { TimeChart } from './TimeChart.tsx';
+import { TimeControls } from './TimeControls.tsx';
+import { TimeReadout } from './TimeReadout.tsx';
+import { useEnvelope } from './useEnvelope.ts';
+import '../chart/chart.css';
+import './time.css';
+
 export function TimePanel() {
-  return <section aria-label="time response" className="pw-panel" />;
+  const box = useRef<HTMLDivElement>(null);
+  const { width, height } = useElementSize(box);
+  const [cursor, setCursor] = useState<number | null>(null);
+  const samples = useWorkbench((s) => s.view.timeSamples);
+  const envelope = useEnvelope();
+  const shown = cursor !== null && cursor < samples ? cursor : null;
+  return (
+    <section aria-label="time response" className="pw-panel pw-time">
+      <header className="pw-time-head">
+        <h2>Time</h2>
+        <TimeControls />
+      </header>
+      <div className="pw-time-body">
+        <div className="pw-time-main">
+          <TimeReadout cursor={shown} envelope={envelope} />
+          <div className="pw-chart-box" ref={box}>
+            <TimeChart
+              width={width}
+              height={height}
+              cursor={shown}
+              onCursor={setCursor}
+              envelope={envelope}
+            />
+          </div>
+        </div>
+        <ClosedFormList />
+      </div>
+    </section>
+  );
 }

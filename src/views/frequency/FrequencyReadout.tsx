@@ -1,0 +1,51 @@
+/** The cross-hair read-out: exact values at the cross-hair frequency, in every unit the plots offer. */
+import { formatDb, formatHz, formatNumber } from '../shared/format.ts';
+import type { FrequencyReading } from './readAt.ts';
+import { DEG_PER_RAD } from './series.ts';
+
+export interface FrequencyReadoutProps {
+  reading: FrequencyReading | null;
+  phaseMode: 'wrapped' | 'unwrapped';
+}
+
+/** One labelled value; the test id lets end-to-end tests read the number. */
+function Item({ label, id, children }: { label: string; id: string; children: string }) {
+  return (
+    <span className="pw-readout-item">
+      <span className="pw-readout-label">{label}</span>
+      <span className="pw-readout-value" data-testid={`freq-read-${id}`}>
+        {children}
+      </span>
+    </span>
+  );
+}
+
+export function FrequencyReadout({ reading, phaseMode }: FrequencyReadoutProps) {
+  if (!reading) {
+    return (
+      <div className="pw-readout pw-readout-hint" aria-live="off">
+        Point at the plots (or focus them and use the arrow keys) to read exact values.
+      </div>
+    );
+  }
+  const ph = phaseMode === 'wrapped' ? reading.phase : reading.phaseUnwrapped;
+  return (
+    <div className="pw-readout" aria-label="Values at the cross-hair">
+      <Item label="f" id="hz">
+        {formatHz(reading.hz, 5)}
+      </Item>
+      <Item label="|H|" id="db">
+        {formatDb(reading.magnitudeDb, 4)}
+      </Item>
+      <Item label="=" id="linear">
+        {formatNumber(reading.magnitude, 4)}
+      </Item>
+      <Item label="phase" id="phase">
+        {`${formatNumber(ph * DEG_PER_RAD, 4)}° (${formatNumber(ph, 4)} rad)`}
+      </Item>
+      <Item label="delay" id="delay">
+        {`${formatNumber(reading.groupDelay, 4)} samples (${formatNumber(reading.groupDelayMs, 4)} ms)`}
+      </Item>
+    </div>
+  );
+}

@@ -1,0 +1,58 @@
+/** Moving the frequency cross-hair by keyboard: steps that feel even on a linear or a log axis. */
+import type { Range } from '../chart/range.ts';
+
+/** Arrow-key steps across the whole axis; Shift (or Page Up/Down) moves ten of them. */
+export const CURSOR_STEPS_PER_AXIS = 400;
+export const CURSOR_BIG_STEP = 10;
+
+/** Keys that move the cross-hair and how far, in small steps; null for any other key. */
+export function cursorStepsForKey(key: string, shift: boolean): number | 'start' | 'end' | null {
+  const big = shift ? CURSOR_BIG_STEP : 1;
+  switch (key) {
+    case 'ArrowRight':
+    case 'ArrowUp':
+      return big;
+    case 'ArrowLeft':
+    case 'ArrowDown':
+      return -big;
+    case 'PageUp':
+      return CURSOR_BIG_STEP;
+    case 'PageDown':
+      return -CURSOR_BIG_STEP;
+    case 'Home':
+      return 'start';
+    case 'End':
+      return 'end';
+    default:
+      return null;
+  }
+}
+
+/**
+ * The cross-hair frequency (Hz) after `steps` small steps from hz within domain [lo, hi]: equal steps in Hz on
+ * a linear axis, equal ratios on a log axis, so a step is the same distance on screen either way.
+ */
+export function stepHz(
+  hz: number,
+  domain: Range,
+  axis: 'linear' | 'log',
+  steps: number | 'start' | 'end',
+): number {
+  const [lo, hi] = domain;
+  if (steps === 'start') return lo;
+  if (steps === 'end') return hi;
+  let next: number;
+  if (axis === 'log') {
+    const from = hz > 0 ? hz : lo;
+    next = from * Math.pow(hi / lo, steps / CURSOR_STEPS_PER_AXIS);
+  } else {
+    next = hz + (steps * (hi - lo)) / CURSOR_STEPS_PER_AXIS;
+  }
+  return Math.min(hi, Math.max(lo, next));
+}
+
+/** Where the cross-hair starts when the plot gets keyboard focus: the middle of the axis on screen. */
+export function startHz(domain: Range, axis: 'linear' | 'log'): number {
+  const [lo, hi] = domain;
+  return axis === 'log' ? Math.sqrt(lo * hi) : (lo + hi) / 2;
+}

@@ -1,0 +1,18 @@
+/** The selected root's frequency in Hz (its angle on the plane at the design's sample rate), or null. */
+import { useMemo } from 'react';
+import { rootsOf } from '../../store/design.ts';
+import { useWorkbench } from '../../store/useWorkbench.ts';
+
+export function useSelectedRootHz(): { hz: number; kind: 'zero' | 'pole' } | null {
+  const kind = useWorkbench((s) => s.selection?.kind ?? null);
+  // The stored Root object itself: stable until that root is edited, so this re-renders only when needed.
+  const root = useWorkbench((s) =>
+    s.selection ? (rootsOf(s.design, s.selection.kind)[s.selection.index] ?? null) : null,
+  );
+  const fs = useWorkbench((s) => s.design.sampleRate);
+  return useMemo(() => {
+    if (!root || !kind) return null;
+    const angle = Math.atan2(root.im, root.re);
+    return { hz: (Math.abs(angle) * fs) / (2 * Math.PI), kind };
+  }, [root, kind, fs]);
+}

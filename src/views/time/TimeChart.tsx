@@ -1,0 +1,245 @@
+/**
+ * The time plot: input (faint) and output (bold) against the sample index, seconds on a second axis, the
+ * slowest pole's decay envelope dashed, and a cross-hair that reads one sample (pointer or arrow keys).
+ */
+import { useId, useMemo, type KeyboardEvent, type PointerEvent } from 'react';
+import { selectTimeInput, selectTimeOutput } from '../../store/derived.ts';
+import { useWorkbench } from '../../store/useWorkbench.ts';
+import { Axis } from '../chart/Axis.tsx';
+import { Grid } from '../chart/Grid.tsx';
+import { fromPixel, toPixel, toPixels, type AxisMap } from '../chart/pixels.ts';
+import { finiteExtent, niceRange, type Range } from '../chart/range.ts';
+import { linearTicks } from '../chart/ticks.ts';
+import { useSettledRange } from '../chart/useSettledRange.ts';
+import { samplePaths } from './samplePaths.ts';
+import { timeLayout, timeUnit } from './layout.ts';
+import type { EnvelopeResult } from './useEnvelope.ts';
+
+export interface TimeChartProps {
+  width: number;
+  height: number;
+  cursor: number | null;
+  onCursor: (n: number | null) => void;
+  envelope: EnvelopeResult;
+}
+
+const PX_PER_X_TICK = 70;
+const PX_PER_Y_TICK = 32;
+
+/** y range of input and output together, never thinner than 0.2 so a silent output still has an axis. */
+function valueRange(x: Float64Array, y: Float64Array): Range {
+  const a = finiteExtent(x) ?? [0, 0];
+  const b = finiteExtent(y) ?? [0, 0];
+  return [Math.min(a[0], b[0], 0), Math.max(a[1], b[1], 0)];
+}
+
+export function TimeChart({ width, height, cursor, onCursor, envelope }: TimeChartProps) {
+  const x = useWorkbench(selectTimeInput);
+  const y = useWorkbench(selectTimeOutput);
+  const fs = useWorkbench((s) => s.design.sampleRate);
+  const style = useWorkbench((s) => s.view.timeStyle);
+  const kind = useWorkbench((s) => s.view.timeInput);
+  const hold = useWorkbench((s) => s.view.holdScale);
+  const clipId = `pw-clip-${useId().replace(/:/g, '')}`;
+  const n = y.length;
+
+  const rect = useMemo(() => timeLayout(width, height), [width, height]);
+  const xMap = useMemo<AxisMap>(
+    () => ({ kind: 'linear', d0: -0.5, d1: n - 0.5, p0: rect.left, p1: rect.right }),
+    [n, rect.left, rect.right],
+  );
+  const xTicks = useMemo(
+    () =>
+      linearTicks(0, n - 1, Math.max(2, (rect.right - rect.left) / PX_PER_X_TICK)).filter((t) =>
+        Number.isInteger(t.value),
+      ),
+    [n, rect.left, rect.right],
+  );
+  const seconds = useMemo(() => {
+    const { unit, factor } = timeUnit(n / fs);
+    const k = factor / fs;
+    const map: AxisMap = { kind: 'linear', d0: -0.5 * k, d1: (n - 0.5) * k, p0: rect.left, p1: rect.right };
+    const ticks = linearTicks(0, (n - 1) * k, Math.max(2, (rect.right - rect.left) / PX_PER_X_TICK));
+    return { unit, map, ticks };
+  }, [n, fs, rect.left, rect.right]);
+
+  const data = useMemo(() => valueRange(x, y), [x, y]);
+  const wanted = useMemo(() => niceRange(data[0], data[1], 0.2, 5), [data]);
+  const range = useSettledRange(kind, data, wanted, hold);
+  const yMap = useMemo<AxisMap>(
+    () => ({ kind: 'linear', d0: range[0], d1: range[1], p0: rect.bottom, p1: rect.top }),
+    [range, rect],
+  );
+  const yTicks = useMemo(
+    () => linearTicks(range[0], range[1], Math.max(2, (rect.bottom - rect.top) / PX_PER_Y_TICK)),
+    [range, rect],
+  );
+
+  const px = useMemo(
+    () =>
+      toPixels(
+        xMap,
+        Float64Array.from({ length: n }, (_, i) => i),
+      ),
+    [xMap, n],
+  );
+  const inputPaths = useMemo(
+    () => samplePaths(px, toPixels(yMap, x), toPixel(yMap, 0), rect, style),
+    [px, yMap, x, rect, style],
+  );
+  const outputPaths = useMemo(
+    () => samplePaths(px, toPixels(yMap, y), toPixel(yMap, 0), rect, style),
+    [px, yMap, y, rect, style],
+  );
+  const envelopePaths = useMemo(() => {
+    if (!envelope.shown) return null;
+    const up = new Float64Array(n);
+    const down = new Float64Array(n);
+    for (let i = 0; i < n; i++) {
+      up[i] = envelope.centre + envelope.values[i]!;
+      down[i] = envelope.centre - envelope.values[i]!;
+    }
+    const a = samplePaths(px, toPixels(yMap, up), 0, rect, 'line');
+    const b = samplePaths(px, toPixels(yMap, down), 0, rect, 'line');
+    return a.line + b.line;
+  }, [envelope, n, px, yMap, rect]);
+
+  const pointerSample = (e: PointerEvent<SVGRectElement>) => {
+    const box = e.currentTarget.ownerSVGElement?.getBoundingClientRect();
+    if (!box) return null;
+    return Math.min(n - 1, Math.max(0, Math.round(fromPixel(xMap, e.clientX - box.left))));
+  };
+  const onKeyDown = (e: KeyboardEvent<SVGRectElement>) => {
+    const step = e.shiftKey ? 10 : 1;
+    const from = cursor ?? 0;
+    const moves: Record<string, number> = {
+      ArrowRight: from + step,
+      ArrowUp: from + step,
+      ArrowLeft: from - step,
+      ArrowDown: from - step,
+      PageUp: from + Math.max(10, Math.round(n / 20)),
+      PageDown: from - Math.max(10, Math.round(n / 20)),
+      Home: 0,
+      End: n - 1,
+    };
+    if (e.key === 'Escape') return onCursor(null);
+    const to = moves[e.key];
+    if (to === undefined) return;
+    e.preventDefault();
+    onCursor(Math.min(n - 1, Math.max(0, to)));
+  };
+
+  if (width < 80 || height < 60 || n === 0) return <svg width={width} height={height} />;
+  const cx = cursor === null ? NaN : toPixel(xMap, cursor);
+  const zeroY = toPixel(yMap, 0);
+  return (
+    <svg
+      className="pw-chart"
+      width={width}
+      height={height}
+      role="group"
+      aria-label="Input and output against time"
+    >
+      <clipPath id={clipId}>
+        <rect
+          x={rect.left}
+          y={rect.top - 1}
+          width={rect.right - rect.left}
+          height={rect.bottom - rect.top + 2}
+        />
+      </clipPath>
+      <rect
+        className="pw-plot-bg"
+        x={rect.left}
+        y={rect.top}
+        width={rect.right - rect.left}
+        height={rect.bottom - rect.top}
+      />
+      <Grid x={{ map: xMap, ticks: xTicks }} y={{ map: yMap, ticks: yTicks }} {...rect} />
+      {zeroY >= rect.top && zeroY <= rect.bottom ? (
+        <path className="pw-time-baseline" d={`M${rect.left} ${Math.round(zeroY) + 0.5}H${rect.right}`} />
+      ) : null}
+      <g clipPath={`url(#${clipId})`}>
+        <g className="pw-time-input" data-testid="time-input-trace">
+          <path d={inputPaths.line} />
+          {inputPaths.dots ? <path className="pw-dots" d={inputPaths.dots} /> : null}
+        </g>
+        <g className="pw-time-output" data-testid="time-output-trace" data-style={style}>
+          <path d={outputPaths.line} />
+          {outputPaths.dots ? <path className="pw-dots" d={outputPaths.dots} /> : null}
+        </g>
+        {envelopePaths ? (
+          <path className="pw-time-envelope" data-testid="time-envelope" d={envelopePaths} />
+        ) : null}
+      </g>
+      <Axis side="left" map={yMap} ticks={yTicks} at={rect.left} title="Amplitude" />
+      <Axis side="bottom" map={xMap} ticks={xTicks} at={rect.bottom} title="Sample n" />
+      <Axis
+        side="top"
+        map={seconds.map}
+        ticks={seconds.ticks}
+        at={rect.top}
+        title={`Time (${seconds.unit})`}
+      />
+      {cursor !== null ? (
+        <g aria-hidden="true">
+          <path className="pw-crosshair" d={`M${Math.round(cx) + 0.5} ${rect.top}V${rect.bottom}`} />
+          <circle
+            className="pw-crosshair-dot"
+            cx={cx}
+            cy={clampY(toPixel(yMap, x[cursor] ?? 0), rect)}
+            r={3}
+            fill="var(--pw-input)"
+          />
+          <circle
+            className="pw-crosshair-dot"
+            cx={cx}
+            cy={clampY(toPixel(yMap, y[cursor] ?? 0), rect)}
+            r={3.5}
+            fill="var(--pw-output)"
+          />
+        </g>
+      ) : null}
+      <rect
+        className="pw-plot-area"
+        x={rect.left}
+        y={rect.top}
+        width={rect.right - rect.left}
+        height={rect.bottom - rect.top}
+        fill="transparent"
+        tabIndex={0}
+        role="slider"
+        aria-label="Sample under the cross-hair"
+        aria-valuemin={0}
+        aria-valuemax={n - 1}
+        aria-valuenow={cursor ?? undefined}
+        aria-valuetext={cursor === null ? 'off' : `sample ${cursor}`}
+        onPointerMove={(e) => onCursor(pointerSample(e))}
+        onPointerDown={(e) => {
+          e.currentTarget.focus();
+          onCursor(pointerSample(e));
+        }}
+        onPointerLeave={(e) => {
+          if (document.activeElement !== e.currentTarget) onCursor(null);
+        }}
+        onFocus={() => {
+          if (cursor === null) onCursor(0);
+        }}
+        onBlur={() => onCursor(null)}
+        onKeyDown={onKeyDown}
+      />
+      <rect
+        className="pw-focus-ring"
+        x={rect.left - 2}
+        y={rect.top - 2}
+        width={rect.right - rect.left + 4}
+        height={rect.bottom - rect.top + 4}
+        rx={3}
+      />
+    </svg>
+  );
+}
+
+function clampY(y: number, rect: { top: number; bottom: number }): number {
+  return Math.min(rect.bottom, Math.max(rect.top, y));
+}
