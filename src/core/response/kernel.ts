@@ -11,9 +11,13 @@
  *   for the whole sum at such an ω and agrees elsewhere.
  * - arg f, continuous in ω: for ρ <= 1, arg f = ω + arg(e^{−iω}f) where Re(e^{−iω}f) = (|f|² + 1 − ρ²)/2 >= 0;
  *   for ρ > 1, arg f = θ − π + arg(−c̄·f) where Re(−c̄·f) = (|f|² + ρ² − 1)/2 > 0. Neither reduced number
- *   crosses the negative real axis, so summing their atan2 values gives the unwrapped phase exactly, however
- *   close a pole is to the circle or however coarse the grid. At a root exactly on the circle the reduced
- *   number is 0 and atan2(0, 0) = 0 puts the phase halfway across its π jump.
+ *   crosses the negative real axis (|arg| < π/2), so the sum of their args is the unwrapped phase exactly,
+ *   however close a pole is to the circle or however coarse the grid. At a root exactly on the circle the
+ *   reduced number is 0; it is given arg 0, which puts the phase halfway across its π jump.
+ * - The sum of args is kept without one atan2 per root: the reduced numbers are multiplied into a running
+ *   product (renormalised each step) while a winding count records every time the principal arg of the
+ *   product wraps (both factors in the closed upper half-plane but the product not, or the reverse); one
+ *   atan2 per frequency then gives sum = atan2(product) + 2π·winding.
  */
 import type { Root } from '../types.ts';
 
@@ -31,6 +35,10 @@ export interface KernelState {
   magnitude: Float64Array;
   phase: Float64Array;
   groupDelay: Float64Array;
+  /** Running product of the reduced numbers (unit 1-norm) and the number of 2π wraps of its arg. */
+  qre: Float64Array;
+  qim: Float64Array;
+  winding: Float64Array;
 }
 
 /** Fresh kernel state for a frequency array: |H| = 1, phase 0, group delay 0. */
@@ -42,6 +50,9 @@ export function kernelState(omega: ArrayLike<number>): KernelState {
     magnitude: new Float64Array(n).fill(1),
     phase: new Float64Array(n),
     groupDelay: new Float64Array(n),
+    qre: new Float64Array(n).fill(1),
+    qim: new Float64Array(n),
+    winding: new Float64Array(n),
   };
   for (let i = 0; i < n; i++) {
     s.cos[i] = Math.cos(omega[i]!);
@@ -104,9 +115,39 @@ export function accumulateRoot(st: KernelState, omega: ArrayLike<number>, root: 
       br = -(x * dx - y * d2);
       bi = -(x * d2 + y * dx);
     }
-    const arg = Math.atan2(ar * bi + ai * br, ar * br - ai * bi) + (inside ? 2 * omega[i]! : 0);
-    phase[i]! += ms * arg;
-    groupDelay[i]! += gdSign * (h === 0 ? 1 : 1 + (h / 2) * (1 / f2a + 1 / f2b));
+    // A factor that is exactly 0 (root exactly at e^{iω}) takes arg 0, the midpoint of its jump, without
+    // hiding its conjugate's arg.
+    if (ar === 0 && ai === 0) ar = 1;
+    if (br === 0 && bi === 0) br = 1;
+    const wi = ar * bi + ai * br;
+    rotate(st, i, ar * br - ai * bi, sign > 0 ? wi : -wi, m);
+    if (inside) phase[i]! += 2 * ms * omega[i]!;
+    groupDelay[i]! += gdSign * (h === 0 ? 1 : 1 + (h * (f2a + f2b)) / (2 * p2));
   }
   return 0;
+}
+
+const upper = (re: number, im: number) => im > 0 || (im === 0 && re < 0);
+
+/** Multiplies w = wr + i·wi (|arg w| < π) into the running product at sample i, m times, counting wraps. */
+function rotate(st: KernelState, i: number, wr: number, wi: number, m: number): void {
+  const wUp = upper(wr, wi);
+  for (let k = 0; k < m; k++) {
+    const qr = st.qre[i]!;
+    const qi = st.qim[i]!;
+    const pr = qr * wr - qi * wi;
+    const pi = qr * wi + qi * wr;
+    const qUp = upper(qr, qi);
+    if (qUp === wUp && upper(pr, pi) !== qUp) st.winding[i]! += qUp ? 1 : -1;
+    const scale = 1 / (Math.abs(pr) + Math.abs(pi));
+    st.qre[i] = pr * scale;
+    st.qim[i] = pi * scale;
+  }
+}
+
+/** Adds the arg of the running product (atan2 with −0 read as +0, matching `upper`) and its wraps to the phase. */
+export function finishPhase(st: KernelState): void {
+  for (let i = 0; i < st.phase.length; i++) {
+    st.phase[i]! += Math.atan2(st.qim[i]! + 0, st.qre[i]! + 0) + 2 * Math.PI * st.winding[i]!;
+  }
 }

@@ -1,6 +1,6 @@
 /** Frequency response of a zeros/poles/gain system, evaluated from the product form. */
 import type { Zpk } from '../types.ts';
-import { accumulateRoot, kernelState } from './kernel.ts';
+import { accumulateRoot, finishPhase, kernelState } from './kernel.ts';
 
 /** Complex response and its read-outs at each frequency of `omega` (radians per sample). */
 export interface FrequencyResponse {
@@ -34,6 +34,7 @@ function accumulate(zpk: Zpk, omega: ArrayLike<number>) {
   let offset = zpk.gain < 0 ? Math.PI : 0;
   for (const z of zpk.zeros) offset += accumulateRoot(st, omega, z, 1);
   for (const p of zpk.poles) offset += accumulateRoot(st, omega, p, -1);
+  finishPhase(st);
   return { st, offset };
 }
 
