@@ -1,0 +1,46 @@
+/** The stability verdict as a banner no one can miss: green stable, amber marginal, red unstable. */
+import { selectStability } from '../../store/derived.ts';
+import { useWorkbench } from '../../store/useWorkbench.ts';
+import { formatNumber } from '../shared/format.ts';
+import { positionText } from './rootRows.ts';
+
+const TITLE = { stable: 'Stable', marginal: 'Marginally stable', unstable: 'Unstable' } as const;
+const ICON = { stable: '✓', marginal: '!', unstable: '✕' } as const;
+
+/** The engine's reason as a sentence: capital first letter, full stop. */
+function sentence(reason: string): string {
+  const t = reason.charAt(0).toUpperCase() + reason.slice(1);
+  return t.endsWith('.') ? t : `${t}.`;
+}
+
+export function StabilityBanner() {
+  const s = useWorkbench(selectStability);
+  const hasPoles = useWorkbench((st) => st.design.poles.length > 0);
+  const verdict = s.verdict;
+  return (
+    <div
+      className={`pw-stability pw-stability-${verdict}`}
+      role="status"
+      aria-live="polite"
+      data-testid="stability"
+    >
+      <span className="pw-stability-icon" aria-hidden="true">
+        {ICON[verdict]}
+      </span>
+      <div>
+        <strong className="pw-stability-title">{TITLE[verdict]}</strong>
+        <span className="pw-stability-radius">
+          {hasPoles ? ` · largest pole radius ${formatNumber(s.maxPoleRadius, 6)}` : ' · no poles (FIR)'}
+        </span>
+        {verdict !== 'stable' && (
+          <p className="pw-stability-reason">
+            {sentence(s.reason)}
+            {s.responsible.length > 2 && (
+              <> All of them: {s.responsible.map((p) => positionText(p.re, p.im, 5)).join(', ')}.</>
+            )}
+          </p>
+        )}
+      </div>
+    </div>
+  );
+}

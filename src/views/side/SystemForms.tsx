@@ -1,0 +1,54 @@
+/** The current system in every form, each with Copy and a button that puts it in the entry box. */
+import { useMemo, useState } from 'react';
+import { selectTf, selectZpk } from '../../store/derived.ts';
+import { useWorkbench } from '../../store/useWorkbench.ts';
+import { CopyButton } from '../shared/CopyButton.tsx';
+import { systemForms } from './systemForms.ts';
+
+const DIGIT_CHOICES = { '6': 6, '10': 10, all: undefined } as const;
+type DigitChoice = keyof typeof DIGIT_CHOICES;
+
+export function SystemForms({ onEdit }: { onEdit: (text: string) => void }) {
+  const tf = useWorkbench(selectTf);
+  const zpk = useWorkbench(selectZpk);
+  const [digits, setDigits] = useState<DigitChoice>('6');
+  const forms = useMemo(() => systemForms(tf, zpk, DIGIT_CHOICES[digits]), [tf, zpk, digits]);
+  return (
+    <section className="pw-side-section" aria-labelledby="pw-forms-h" data-testid="system-forms">
+      <div className="pw-section-head">
+        <h2 id="pw-forms-h">Written out</h2>
+        <label className="pw-hint">
+          digits{' '}
+          <select value={digits} onChange={(e) => setDigits(e.target.value as DigitChoice)}>
+            <option value="6">6</option>
+            <option value="10">10</option>
+            <option value="all">all (exact)</option>
+          </select>
+        </label>
+      </div>
+      <dl className="pw-forms">
+        {forms.map((f) => (
+          <div key={f.label} className="pw-form">
+            <dt>
+              {f.label}
+              <span className="pw-form-actions">
+                <button
+                  type="button"
+                  aria-label={`Edit ${f.label}`}
+                  title="Put this text in the entry box"
+                  onClick={() => onEdit(f.text)}
+                >
+                  Edit
+                </button>
+                <CopyButton text={f.text} label={f.label} />
+              </span>
+            </dt>
+            <dd>
+              <code>{f.text}</code>
+            </dd>
+          </div>
+        ))}
+      </dl>
+    </section>
+  );
+}

@@ -1,0 +1,84 @@
+/**
+ * The system entry: one text box for every form the parser reads. Apply (button or Ctrl/Cmd+Enter) loads
+ * the system as one undo step; a parse error is shown in place and the design and the text stay as they were.
+ */
+import { useId, useRef, useState } from 'react';
+import type { InputError } from '../../../core/types.ts';
+import { workbenchStore } from '../../../store/useWorkbench.ts';
+import { ExampleChips } from './ExampleChips.tsx';
+import { ParseErrorView } from './ParseErrorView.tsx';
+import { readEntry } from './readEntry.ts';
+
+export function SystemEntry({ text, setText }: { text: string; setText: (t: string) => void }) {
+  const [error, setError] = useState<{ text: string; error: InputError } | null>(null);
+  const [readAs, setReadAs] = useState<string | null>(null);
+  const area = useRef<HTMLTextAreaElement>(null);
+  const id = useId();
+
+  const apply = () => {
+    const r = readEntry(text);
+    if (!r.ok) {
+      setError({ text, error: r.error });
+      const el = area.current;
+      const p = Math.min(r.error.position ?? 0, text.length);
+      if (el) {
+        el.focus();
+        el.setSelectionRange(p, Math.min(p + 1, text.length));
+      }
+      return;
+    }
+    const { zeros, poles, gain, typed, detail } = r.value;
+    workbenchStore.getState().loadTyped(zeros, poles, gain, typed);
+    setError(null);
+    setReadAs(detail);
+  };
+
+  return (
+    <section className="pw-side-section" aria-labelledby={`${id}-h`}>
+      <h2 id={`${id}-h`}>System</h2>
+      <label htmlFor={id} id={`${id}-hint`} className="pw-hint">
+        Difference equation, H(z) in z or z⁻¹, coefficient lists b and a, or zeros/poles/gain
+      </label>
+      <textarea
+        id={id}
+        ref={area}
+        className={error ? 'pw-entry pw-invalid' : 'pw-entry'}
+        aria-label="System text"
+        rows={3}
+        spellCheck={false}
+        autoCapitalize="off"
+        autoCorrect="off"
+        placeholder="y[n] = 1.6 y[n-1] - 0.64 y[n-2] + x[n] - x[n-2]"
+        value={text}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={error ? `${id}-hint ${id}-err` : `${id}-hint`}
+        onChange={(e) => setText(e.target.value)}
+        onKeyDown={(e) => {
+          if (e.key === 'Enter' && (e.ctrlKey || e.metaKey)) {
+            e.preventDefault();
+            apply();
+          }
+        }}
+      />
+      <div className="pw-entry-bar">
+        <button type="button" className="pw-primary" onClick={apply} disabled={!text.trim()}>
+          Apply
+        </button>
+        <span className="pw-hint">Ctrl/⌘+Enter</span>
+        {readAs && !error && (
+          <span className="pw-read-as" data-testid="read-as">
+            read as: {readAs}
+          </span>
+        )}
+      </div>
+      {error && <ParseErrorView id={`${id}-err`} text={error.text} error={error.error} />}
+      <ExampleChips
+        onPick={(t) => {
+          setText(t);
+          setError(null);
+          area.current?.focus();
+        }}
+      />
+    </section>
+  );
+}
