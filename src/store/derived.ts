@@ -10,7 +10,7 @@ import { stabilityOfZpk, type Stability } from '../core/stability.ts';
 import { rootReadouts, type RootReadout } from '../core/readouts.ts';
 import { filterSections } from '../core/time.ts';
 import { makeImpulse, makeStep, makeSine, makeWhiteNoise } from '../core/signals.ts';
-import { closedFormResponse, type ClosedForm } from '../core/closedForm.ts';
+import { closedFormResponseZpk, type ClosedForm } from '../core/closedForm.ts';
 import type { Design } from './design.ts';
 import type { ViewSettings } from './view.ts';
 import type { WorkbenchState } from './store.ts';
@@ -32,7 +32,7 @@ const tfOf = memoLast((design: Design, zpk: Zpk): TransferFunction =>
 );
 const sectionsOf = memoLast((zpk: Zpk): Section[] => zpkToSections(zpk));
 const gridOf = memoLast((points: number, axis: ViewSettings['frequencyAxis']) =>
-  frequencyGrid(points, axis === 'log' ? { log: true, fMin: LOG_AXIS_MIN_FRACTION } : {}),
+  frequencyGrid(points, axis === 'log' ? { log: true, fMin: 2 * Math.PI * LOG_AXIS_MIN_FRACTION } : {}),
 );
 const responseOf = memoLast((zpk: Zpk, omega: Float64Array) => responseZpk(zpk, omega));
 const stabilityOf = memoLast(stabilityOfZpk);
@@ -58,10 +58,17 @@ const inputOf = memoLast(
 );
 const outputOf = memoLast((sections: Section[], input: Float64Array) => filterSections(sections, input));
 const closedFormOf = memoLast(
-  (tf: TransferFunction, order: number, kind: ViewSettings['timeInput'], sineHz: number, fs: number): ClosedForm | null => {
+  (
+    zpk: Zpk,
+    order: number,
+    kind: ViewSettings['timeInput'],
+    sineHz: number,
+    fs: number,
+  ): ClosedForm | null => {
     if (order > CLOSED_FORM_MAX_ORDER || kind === 'noise') return null;
-    if (kind === 'sine') return closedFormResponse(tf, { kind: 'sine', omega: (2 * Math.PI * sineHz) / fs });
-    return closedFormResponse(tf, { kind });
+    if (kind === 'sine')
+      return closedFormResponseZpk(zpk, { kind: 'sine', omega: (2 * Math.PI * sineHz) / fs });
+    return closedFormResponseZpk(zpk, { kind });
   },
 );
 
@@ -73,7 +80,8 @@ export const selectSections = (s: WorkbenchState): Section[] => sectionsOf(zpkOf
 export const selectResponse = (s: WorkbenchState): FrequencyResponse =>
   responseOf(zpkOf(s.design), gridOf(s.view.responsePoints, s.view.frequencyAxis));
 export const selectStability = (s: WorkbenchState): Stability => stabilityOf(zpkOf(s.design));
-export const selectReadouts = (s: WorkbenchState): RootReadout[] => readoutsOf(zpkOf(s.design), s.design.sampleRate);
+export const selectReadouts = (s: WorkbenchState): RootReadout[] =>
+  readoutsOf(zpkOf(s.design), s.design.sampleRate);
 export const selectTimeInput = (s: WorkbenchState): Float64Array =>
   inputOf(s.view.timeInput, s.view.timeSamples, s.view.sineHz, s.view.noiseSeed, s.design.sampleRate);
 export const selectTimeOutput = (s: WorkbenchState): Float64Array =>
@@ -84,4 +92,4 @@ export const selectOrder = (s: WorkbenchState): number => {
   return Math.max(count(s.design.zeros), count(s.design.poles));
 };
 export const selectClosedForm = (s: WorkbenchState): ClosedForm | null =>
-  closedFormOf(selectTf(s), selectOrder(s), s.view.timeInput, s.view.sineHz, s.design.sampleRate);
+  closedFormOf(selectZpk(s), selectOrder(s), s.view.timeInput, s.view.sineHz, s.design.sampleRate);

@@ -17,7 +17,7 @@ export function runResponse(argv: string[], io: CliIo): number {
   for (const note of d.notes) io.stderr(`note: ${note}\n`);
   const points = intFlag(args, 'points', 512, 2, MAX_RESPONSE_POINTS);
   const log = args.switches.has('log');
-  const omega = frequencyGrid(points, log ? { log: true, fMin: LOG_GRID_MIN_FRACTION } : {});
+  const omega = frequencyGrid(points, log ? { log: true, fMin: 2 * Math.PI * LOG_GRID_MIN_FRACTION } : {});
   const r = responseZpk(d.zpk, omega);
   const frequencies = Array.from(omega, (w) => (w * d.sampleRate) / (2 * Math.PI));
   if (args.switches.has('json')) {
