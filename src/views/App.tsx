@@ -4,6 +4,7 @@ import { useEffect } from 'react';
 import { workbenchStore } from '../store/useWorkbench.ts';
 import { FrequencyPanel } from './frequency/FrequencyPanel.tsx';
 import { ZPlanePanel } from './plane/ZPlanePanel.tsx';
+import { PanelBoundary } from './shared/PanelBoundary.tsx';
 import { installTestProbe } from './shared/testProbe.ts';
 import { Caution } from './shell/Caution.tsx';
 import { Header } from './shell/Header.tsx';
@@ -21,16 +22,24 @@ export function App() {
       <ScenarioNote />
       <main className="pw-grid">
         <div className="pw-area pw-area-plane">
-          <ZPlanePanel />
+          <PanelBoundary name="z-plane">
+            <ZPlanePanel />
+          </PanelBoundary>
         </div>
         <div className="pw-area pw-area-frequency">
-          <FrequencyPanel />
+          <PanelBoundary name="frequency view">
+            <FrequencyPanel />
+          </PanelBoundary>
         </div>
         <div className="pw-area pw-area-time">
-          <TimePanel />
+          <PanelBoundary name="time view">
+            <TimePanel />
+          </PanelBoundary>
         </div>
         <aside className="pw-area pw-area-side" aria-label="System and checks">
-          <SideColumn />
+          <PanelBoundary name="side column">
+            <SideColumn />
+          </PanelBoundary>
         </aside>
       </main>
       <Caution />

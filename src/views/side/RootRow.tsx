@@ -41,8 +41,10 @@ export const RootRow = memo(function RootRow({ row, selected, onSelect }: Props)
       <td>{formatNumber(r.radius, 5)}</td>
       {pole ? (
         <>
-          <td>{r.q !== undefined ? formatNumber(r.q, 3) : dash}</td>
-          <td>{r.bandwidthHz !== undefined ? formatHz(r.bandwidthHz, 3) : dash}</td>
+          <td>
+            {r.q !== undefined ? formatNumber(r.q, 3) : dash}
+            {r.bandwidthHz !== undefined && <span className="pw-sub">{formatHz(r.bandwidthHz, 3)}</span>}
+          </td>
           <td>
             {r.timeConstantSeconds !== undefined ? (
               <>
@@ -55,14 +57,12 @@ export const RootRow = memo(function RootRow({ row, selected, onSelect }: Props)
           </td>
         </>
       ) : (
-        <td colSpan={3} className="pw-notch">
-          {r.notchDepthDb !== undefined ? (
-            <>
-              notch at {formatHz(r.notchFrequencyHz ?? r.frequencyHz)}, {formatDb(r.notchDepthDb, 3)}
-            </>
-          ) : (
-            dash
-          )}
+        <td
+          colSpan={2}
+          className="pw-notch"
+          title={r.notchFrequencyHz !== undefined ? `Notch at ${formatHz(r.notchFrequencyHz)}` : undefined}
+        >
+          {r.notchDepthDb !== undefined ? <>notch {formatDb(r.notchDepthDb, 3)}</> : dash}
         </td>
       )}
     </tr>

@@ -30,11 +30,11 @@ export function RootTable() {
                 <th scope="col" title="Distance from the origin">
                   r
                 </th>
-                <th scope="col" title="Quality factor: frequency over −3 dB bandwidth">
-                  Q
-                </th>
-                <th scope="col" title="−3 dB bandwidth estimate, (1 − r)·fs/π">
-                  BW
+                <th
+                  scope="col"
+                  title="Quality factor (frequency over −3 dB bandwidth), and below it the −3 dB bandwidth estimate (1 − r)·fs/π"
+                >
+                  Q / BW
                 </th>
                 <th scope="col" title="Time constant τ, and below it the time to fall by 40 dB">
                   τ / 40 dB

@@ -16,9 +16,14 @@ export function ParseErrorView({ id, text, error }: { id: string; text: string; 
   const at = lineText.slice(column, column + 1);
   const after = lineText.slice(column + 1, to) + (to < lineText.length ? '…' : '');
   const multiLine = text.includes('\n');
+  const message = error.message.replace(COLUMN_SUFFIX, '');
+  // The message usually names what was expected already; repeat it only when it does not.
+  const bare = (t: string) => t.replace(/['"]/g, '');
+  const expected =
+    error.expected && !bare(message).includes(bare(error.expected)) ? ` — expected ${error.expected}` : '';
   return (
     <div id={id} className="pw-parse-error" role="alert">
-      <p className="pw-parse-message">{error.message.replace(COLUMN_SUFFIX, '')}</p>
+      <p className="pw-parse-message">{message}</p>
       <pre className="pw-parse-line" aria-label={`Error at line ${line}, column ${column + 1}`}>
         <span>{before}</span>
         <mark data-testid="parse-error-mark">{at || ' '}</mark>
@@ -28,7 +33,7 @@ export function ParseErrorView({ id, text, error }: { id: string; text: string; 
       </pre>
       <p className="pw-parse-where">
         {multiLine ? `Line ${line}, column ${column + 1}` : `Column ${column + 1}`}
-        {error.expected ? ` — expected ${error.expected}` : ''}
+        {expected}
       </p>
     </div>
   );
