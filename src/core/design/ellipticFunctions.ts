@@ -70,13 +70,12 @@ export function jacobiElliptic(u: number, m: number, mc = 1 - m): JacobiValues {
   }
   const n = a.length - 1;
   let phi = 2 ** n * a[n]! * u;
-  let previous = phi;
   for (let i = n; i >= 1; i--) {
-    previous = phi;
     phi = (phi + Math.asin((c[i]! / a[i]!) * Math.sin(phi))) / 2;
   }
   const cn = Math.cos(phi);
-  return { sn: Math.sin(phi), cn, dn: n === 0 ? 1 : cn / Math.cos(previous - phi) };
+  // dn² = 1 − m·sn² = mc + m·cn², free of the 0/0 that cos φ0 / cos(φ1 − φ0) (A&S 16.4.3) meets at u = K.
+  return { sn: Math.sin(phi), cn, dn: Math.sqrt(mc + m * cn * cn) };
 }
 
 /** Sums of the Jacobi theta series at nome q: θ₂/(2q^¼) core, θ₃ and θ₄ (terms summed until negligible). */
