@@ -82,6 +82,12 @@ test('Ctrl+Enter applies; the banner turns red for an unstable system and names 
   await expect(stabilityBanner(page)).toContainText('Unstable');
   await expect(stabilityBanner(page)).toContainText('1.095');
   await expect(stabilityBanner(page)).toHaveClass(/unstable/);
+  await expect(stabilityBanner(page).getByRole('status')).toHaveText('Unstable');
+  // Poles at ±j, simple and on the circle: marginal (amber).
+  await entryBox(page).fill('y[n] = -y[n-2] + x[n]');
+  await entryBox(page).press('Control+Enter');
+  await expect(stabilityBanner(page)).toHaveClass(/marginal/);
+  await expect(stabilityBanner(page)).toContainText('unit circle');
 });
 
 test('the example chips put text in the box and it applies', async ({ page }) => {

@@ -26,9 +26,13 @@ test('undo restores the previous design exactly and redo re-applies it', async (
   await applySystem(page, 'y[n] = 0.5 y[n-1] + x[n]');
   const typed = await readDesign(page);
   expect(typed).not.toEqual(demo);
+  // The scenario described the demo's roots, so it makes way for the typed system.
+  await expect(page.getByRole('textbox', { name: 'Design name' })).toHaveValue('Typed system');
+  await expect(page.getByLabel('About this design')).toHaveCount(0);
 
   await page.getByRole('button', { name: 'Undo' }).click();
   expect(await readDesign(page)).toEqual(demo);
+  await expect(page.getByLabel('About this design')).toContainText('grain-hopper');
   await page.getByRole('button', { name: 'Redo' }).click();
   expect(await readDesign(page)).toEqual(typed);
 

@@ -20,8 +20,17 @@ export interface DesignActions {
   joinPair(ref: RootRef): void;
   setGainRule(rule: GainRule): void;
   setSampleRate(hz: number): void;
-  /** Replaces the roots and gain by a system the user typed, keeping the typed coefficients. */
-  loadTyped(zeros: Root[], poles: Root[], gain: number, typed: TypedCoefficients): void;
+  /**
+   * Replaces the roots and gain by a system the user typed, keeping the typed coefficients; `about`
+   * optionally replaces the name and note in the same undo step (the old note described other roots).
+   */
+  loadTyped(
+    zeros: Root[],
+    poles: Root[],
+    gain: number,
+    typed: TypedCoefficients,
+    about?: { name?: string; note?: string },
+  ): void;
   /** Replaces the whole design (demo, empty, opened file or link); one undo step. */
   replaceDesign(design: Design): void;
   setName(name: string): void;
@@ -85,8 +94,8 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
         if (!(hz > 0 && hz <= MAX_SAMPLE_RATE)) return;
         edit((d) => (d.sampleRate === hz ? d : { ...d, sampleRate: hz }));
       },
-      loadTyped: (zeros, poles, gain, typed) => {
-        edit((d) => ({ ...d, zeros, poles, gainRule: { kind: 'fixed', value: gain }, typed }));
+      loadTyped: (zeros, poles, gain, typed, about) => {
+        edit((d) => ({ ...d, ...about, zeros, poles, gainRule: { kind: 'fixed', value: gain }, typed }));
         set({ selection: null });
       },
       replaceDesign: (design) => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { locate, readEntry } from '../../src/views/side/entry/readEntry.ts';
+import { locate, readEntry, typedAbout, TYPED_NAME } from '../../src/views/side/entry/readEntry.ts';
 import { ENTRY_EXAMPLES } from '../../src/views/side/entry/examples.ts';
 import { expectClose } from '../helpers/expectClose.ts';
 
@@ -44,5 +44,13 @@ describe('locate', () => {
     expect(locate('ab\ncde\nf', 4)).toEqual({ line: 2, lineText: 'cde', column: 1 });
     expect(locate('abc', 3)).toEqual({ line: 1, lineText: 'abc', column: 3 });
     expect(locate('ab\n', 3)).toEqual({ line: 2, lineText: '', column: 0 });
+  });
+});
+
+describe('typedAbout', () => {
+  it('drops a scenario note and its name, keeps a name the user chose', () => {
+    expect(typedAbout({ name: 'Hopper scale', note: 'Load cell…' })).toEqual({ name: TYPED_NAME, note: '' });
+    expect(typedAbout({ name: 'My loop filter', note: '' })).toEqual({});
+    expect(typedAbout({ name: 'Empty design', note: '' })).toEqual({ name: TYPED_NAME });
   });
 });

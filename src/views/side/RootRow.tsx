@@ -52,7 +52,9 @@ export const RootRow = memo(function RootRow({ row, selected, onSelect }: Props)
                 <span className="pw-sub">{formatSeconds(r.decay40dBSeconds ?? NaN)}</span>
               </>
             ) : (
-              <span className="pw-no-decay">{r.radius > 1 ? 'grows' : 'no decay'}</span>
+              <span className={r.radius > 1 ? 'pw-grows' : 'pw-sustained'}>
+                {r.radius > 1 ? 'grows' : 'no decay'}
+              </span>
             )}
           </td>
         </>

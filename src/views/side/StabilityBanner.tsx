@@ -18,17 +18,15 @@ export function StabilityBanner() {
   const hasPoles = useWorkbench((st) => st.design.poles.length > 0);
   const verdict = s.verdict;
   return (
-    <div
-      className={`pw-stability pw-stability-${verdict}`}
-      role="status"
-      aria-live="polite"
-      data-testid="stability"
-    >
+    <div className={`pw-stability pw-stability-${verdict}`} data-testid="stability">
       <span className="pw-stability-icon" aria-hidden="true">
         {ICON[verdict]}
       </span>
       <div>
-        <strong className="pw-stability-title">{TITLE[verdict]}</strong>
+        {/* Only the verdict is live: the radius changes on every pointer move while dragging. */}
+        <strong className="pw-stability-title" role="status" aria-live="polite" aria-atomic="true">
+          {TITLE[verdict]}
+        </strong>
         <span className="pw-stability-radius">
           {hasPoles ? ` · largest pole radius ${formatNumber(s.maxPoleRadius, 6)}` : ' · no poles (FIR)'}
         </span>

@@ -7,7 +7,7 @@ import type { InputError } from '../../../core/types.ts';
 import { workbenchStore } from '../../../store/useWorkbench.ts';
 import { ExampleChips } from './ExampleChips.tsx';
 import { ParseErrorView } from './ParseErrorView.tsx';
-import { readEntry } from './readEntry.ts';
+import { readEntry, typedAbout } from './readEntry.ts';
 
 export function SystemEntry({ text, setText }: { text: string; setText: (t: string) => void }) {
   const [error, setError] = useState<{ text: string; error: InputError } | null>(null);
@@ -28,7 +28,8 @@ export function SystemEntry({ text, setText }: { text: string; setText: (t: stri
       return;
     }
     const { zeros, poles, gain, typed, detail } = r.value;
-    workbenchStore.getState().loadTyped(zeros, poles, gain, typed);
+    const store = workbenchStore.getState();
+    store.loadTyped(zeros, poles, gain, typed, typedAbout(store.design));
     setError(null);
     setReadAs(detail);
   };

@@ -5,7 +5,7 @@
 import { parseSystem } from '../../../core/parse/index.ts';
 import { compressRoots, tfToZpk } from '../../../core/system.ts';
 import type { InputError, Root, Zpk } from '../../../core/types.ts';
-import type { TypedCoefficients } from '../../../store/design.ts';
+import { emptyDesign, type Design, type TypedCoefficients } from '../../../store/design.ts';
 
 export interface EntryReading {
   zeros: Root[];
@@ -53,4 +53,16 @@ export function locate(text: string, position: number): { line: number; lineText
   const end = endAt < 0 ? text.length : endAt;
   const line = text.slice(0, start).split('\n').length;
   return { line, lineText: text.slice(start, end), column: p - start };
+}
+
+/** The name a typed system takes over from a scenario's or the empty design's name. */
+export const TYPED_NAME = 'Typed system';
+
+/**
+ * Name and note for a design replaced by typed text: a scenario's note described other roots, so it goes
+ * and the name with it; a name the user chose (a design without a note) stays.
+ */
+export function typedAbout(design: Pick<Design, 'name' | 'note'>): { name?: string; note?: string } {
+  if (design.note) return { name: TYPED_NAME, note: '' };
+  return design.name === emptyDesign().name ? { name: TYPED_NAME } : {};
 }
