@@ -111,4 +111,15 @@ test('the current system is shown in every form, each copyable', async ({ page, 
   await expect(copy).toHaveText('Copied');
   const clip = await page.evaluate(() => navigator.clipboard.readText());
   expect(clip).toContain('y[n]');
+
+  // "Edit" puts a form in the entry box, focused; applying it gives back the same system.
+  const before = await readDesign(page);
+  await page.getByRole('combobox', { name: 'digits' }).selectOption('all');
+  await forms.getByRole('button', { name: 'Edit H(z) in z', exact: true }).click();
+  await expect(entryBox(page)).toBeFocused();
+  await expect(entryBox(page)).toHaveValue(/^H\(z\) = /);
+  await page.getByRole('button', { name: 'Apply' }).click();
+  const after = await readDesign(page);
+  expect(after.typed?.b).toEqual(before.typed?.b);
+  expect(after.typed?.a).toEqual(before.typed?.a);
 });

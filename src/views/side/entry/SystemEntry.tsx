@@ -2,17 +2,22 @@
  * The system entry: one text box for every form the parser reads. Apply (button or Ctrl/Cmd+Enter) loads
  * the system as one undo step; a parse error is shown in place and the design and the text stay as they were.
  */
-import { useId, useRef, useState } from 'react';
+import { useId, useState, type RefObject } from 'react';
 import type { InputError } from '../../../core/types.ts';
 import { workbenchStore } from '../../../store/useWorkbench.ts';
 import { ExampleChips } from './ExampleChips.tsx';
 import { ParseErrorView } from './ParseErrorView.tsx';
 import { readEntry, typedAbout } from './readEntry.ts';
 
-export function SystemEntry({ text, setText }: { text: string; setText: (t: string) => void }) {
+interface Props {
+  text: string;
+  setText: (t: string) => void;
+  area: RefObject<HTMLTextAreaElement | null>;
+}
+
+export function SystemEntry({ text, setText, area }: Props) {
   const [error, setError] = useState<{ text: string; error: InputError } | null>(null);
   const [readAs, setReadAs] = useState<string | null>(null);
-  const area = useRef<HTMLTextAreaElement>(null);
   const id = useId();
 
   const apply = () => {
