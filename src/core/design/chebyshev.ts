@@ -1,7 +1,7 @@
 /**
  * Chebyshev analog low-pass prototypes. Type I: equiripple pass band of rp dB up to 1 rad/s, poles on an
  * ellipse. Type II (inverse Chebyshev): monotone pass band, equiripple stop band at least rs dB down from
- * 1 rad/s, zeros on the imaginary axis. Pole formulas as in Antoniou, Digital Filters, ch. 5 (from memory).
+ * 1 rad/s, zeros on the imaginary axis. Pole formulas as in Antoniou, Digital Filters, from memory.
  */
 import type { LogGainZpk } from './prototype.ts';
 import { logProductAt, root } from './prototype.ts';

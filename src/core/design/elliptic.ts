@@ -2,7 +2,7 @@
  * Elliptic (Cauer) analog low-pass prototype: equiripple pass band of rp dB up to 1 rad/s and equiripple
  * stop band at least rs dB down. Zeros at i/(k·sn(jK/N, k)) and poles from the Jacobi functions at a shifted
  * imaginary argument, with the selectivity k from the degree equation; the classical Jacobi-function
- * construction (Lutovac, Tošić & Evans, Filter Design for Signal Processing, ch. 12, from memory).
+ * construction (Lutovac, Tošić & Evans, Filter Design for Signal Processing, from memory).
  */
 import type { LogGainZpk } from './prototype.ts';
 import { logProductAt, root } from './prototype.ts';
