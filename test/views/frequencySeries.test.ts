@@ -8,7 +8,7 @@ import {
   stepHz,
   CURSOR_STEPS_PER_AXIS,
 } from '../../src/views/frequency/cursor.ts';
-import { frequencyLayout } from '../../src/views/frequency/layout.ts';
+import { frequencyLayout, type PlotRect } from '../../src/views/frequency/layout.ts';
 import {
   delaySeries,
   frequencyDomain,
@@ -79,15 +79,24 @@ describe('cross-hair keys', () => {
 });
 
 describe('frequencyLayout', () => {
-  it('stacks magnitude over phase over group delay inside the box, magnitude the tallest', () => {
-    const l = frequencyLayout(640, 360);
-    expect(l.magnitude.top).toBeGreaterThan(0);
-    expect(l.magnitude.bottom).toBeLessThan(l.phase.top);
-    expect(l.phase.bottom).toBeLessThan(l.delay.top);
-    expect(l.delay.bottom).toBeLessThan(360);
-    expect(l.magnitude.right).toBeLessThan(640);
-    const h = (p: { top: number; bottom: number }) => p.bottom - p.top;
-    expect(h(l.magnitude)).toBeGreaterThan(h(l.phase));
-    expect(Math.abs(h(l.phase) - h(l.delay))).toBeLessThanOrEqual(1);
+  const h = (p: { top: number; bottom: number }) => p.bottom - p.top;
+  it('stacks magnitude over phase over group delay inside a tall box, magnitude the tallest', () => {
+    const l = frequencyLayout(640, 420);
+    expect(l.compact).toBe(false);
+    expect(l.plots.map((p) => p.key)).toEqual(['magnitude', 'phase', 'delay']);
+    const [m, p, d] = l.plots.map((x) => x.rect) as [PlotRect, PlotRect, PlotRect];
+    expect(m.top).toBeGreaterThan(0);
+    expect(m.bottom).toBeLessThan(p.top);
+    expect(p.bottom).toBeLessThan(d.top);
+    expect(d.bottom).toBeLessThan(420);
+    expect(m.right).toBeLessThan(640);
+    expect(h(m)).toBeGreaterThan(h(p));
+    expect(Math.abs(h(p) - h(d))).toBeLessThanOrEqual(1);
+  });
+  it('in a short box shows magnitude and the one plot asked for, each still readable', () => {
+    const l = frequencyLayout(520, 240, 'delay');
+    expect(l.compact).toBe(true);
+    expect(l.plots.map((p) => p.key)).toEqual(['magnitude', 'delay']);
+    for (const p of l.plots) expect(h(p.rect)).toBeGreaterThanOrEqual(50);
   });
 });

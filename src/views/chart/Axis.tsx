@@ -33,7 +33,7 @@ export const Axis = memo(function Axis({
   const p1 = Math.max(map.p0, map.p1);
   const marks = ticks.filter((t) => t.label !== '');
   return (
-    <g className={`pw-axis pw-axis-${side}`} aria-hidden="true">
+    <g className={`pw-chart-axis pw-chart-axis-${side}`} aria-hidden="true">
       {horizontal ? <line x1={p0} x2={p1} y1={at} y2={at} /> : <line x1={at} x2={at} y1={p0} y2={p1} />}
       {marks.map((t) => {
         const p = toPixel(map, t.value);
@@ -73,14 +73,14 @@ function AxisTitle(props: {
   const mid = (p0 + p1) / 2;
   if (side === 'bottom') {
     return (
-      <text className="pw-axis-title" x={p1} y={at + 30} textAnchor="end">
+      <text className="pw-chart-axis-title" x={p1} y={at + 30} textAnchor="end">
         {title}
       </text>
     );
   }
   if (side === 'top') {
     return (
-      <text className="pw-axis-title" x={p1} y={at - 20} textAnchor="end">
+      <text className="pw-chart-axis-title" x={p1} y={at - 20} textAnchor="end">
         {title}
       </text>
     );
@@ -88,14 +88,23 @@ function AxisTitle(props: {
   if (placement === 'above') {
     const left = side === 'left';
     return (
-      <text className="pw-axis-title" x={at + (left ? -6 : 6)} y={p0 - 6} textAnchor={left ? 'start' : 'end'}>
+      <text
+        className="pw-chart-axis-title"
+        x={at + (left ? -6 : 6)}
+        y={p0 - 6}
+        textAnchor={left ? 'start' : 'end'}
+      >
         {title}
       </text>
     );
   }
   const x = side === 'left' ? at - 40 : at + 40;
   return (
-    <text className="pw-axis-title" transform={`translate(${x},${mid}) rotate(-90)`} textAnchor="middle">
+    <text
+      className="pw-chart-axis-title"
+      transform={`translate(${x},${mid}) rotate(-90)`}
+      textAnchor="middle"
+    >
       {title}
     </text>
   );

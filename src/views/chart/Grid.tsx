@@ -35,7 +35,7 @@ export const Grid = memo(function Grid({ x, y, left, right, top, bottom }: GridP
     .map((l) => l.d)
     .join('');
   return (
-    <g className="pw-grid" aria-hidden="true">
+    <g className="pw-chart-grid" aria-hidden="true">
       {minor ? <path className="pw-grid-minor" d={minor} /> : null}
       {major ? <path className="pw-grid-major" d={major} /> : null}
     </g>

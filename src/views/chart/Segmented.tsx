@@ -16,10 +16,22 @@ export interface SegmentedProps<T extends string> {
   value: T;
   options: readonly SegmentOption<T>[];
   onChange: (value: T) => void;
+  /** Smaller buttons, for a plot's title row. */
+  mini?: boolean;
+  /** Drawn as tabs (underlined choice) rather than buttons: for switching what is shown. */
+  tabs?: boolean;
 }
 
 /** Buttons in a row; arrow keys move the choice, as in any radio group. */
-export function Segmented<T extends string>({ label, caption, value, options, onChange }: SegmentedProps<T>) {
+export function Segmented<T extends string>({
+  label,
+  caption,
+  value,
+  options,
+  onChange,
+  mini,
+  tabs,
+}: SegmentedProps<T>) {
   const group = useRef<HTMLDivElement>(null);
   const onKeyDown = (e: KeyboardEvent) => {
     const step =
@@ -38,7 +50,13 @@ export function Segmented<T extends string>({ label, caption, value, options, on
     buttons?.[options.indexOf(next)]?.focus();
   };
   return (
-    <div className="pw-seg" role="radiogroup" aria-label={label} ref={group} onKeyDown={onKeyDown}>
+    <div
+      className={`pw-seg${mini ? ' pw-seg-mini' : ''}${tabs ? ' pw-seg-tabs' : ''}`}
+      role="radiogroup"
+      aria-label={label}
+      ref={group}
+      onKeyDown={onKeyDown}
+    >
       {caption ? (
         <span className="pw-seg-caption" aria-hidden="true">
           {caption}

@@ -1,10 +1,10 @@
 /**
- * The stacked frequency plots (magnitude, phase, group delay) on one shared frequency axis, with the
- * cross-hair (pointer or arrow keys) and the selected root's marker.
+ * The frequency plots (magnitude on top, phase and group delay below) on one shared frequency axis, with
+ * the cross-hair (pointer or arrow keys) and the selected root's marker.
  */
-import { useMemo, type KeyboardEvent, type PointerEvent } from 'react';
-import { useWorkbench } from '../../store/useWorkbench.ts';
+import { useMemo, useState, type KeyboardEvent, type PointerEvent } from 'react';
 import { selectResponse, selectZpk } from '../../store/derived.ts';
+import { useWorkbench } from '../../store/useWorkbench.ts';
 import { Axis } from '../chart/Axis.tsx';
 import { fromPixel, toPixel, toPixels, type AxisMap } from '../chart/pixels.ts';
 import { formatHzTick, linearTicks, logTicks } from '../chart/ticks.ts';
@@ -12,11 +12,20 @@ import { useSettledRange } from '../chart/useSettledRange.ts';
 import { formatHz } from '../shared/format.ts';
 import { Crosshair } from './Crosshair.tsx';
 import { cursorStepsForKey, startHz, stepHz } from './cursor.ts';
-import { frequencyLayout } from './layout.ts';
+import { frequencyLayout, type PlotKey } from './layout.ts';
+import { PlotTitles } from './PlotTitles.tsx';
 import type { FrequencyReading } from './readAt.ts';
 import { refineAtRoots } from './refine.ts';
 import { RootMarker } from './RootMarker.tsx';
-import { DEG_PER_RAD, delaySeries, frequencyDomain, gridHz, magnitudeSeries, phaseSeries } from './series.ts';
+import {
+  DEG_PER_RAD,
+  delaySeries,
+  frequencyDomain,
+  gridHz,
+  magnitudeSeries,
+  phaseSeries,
+  type Series,
+} from './series.ts';
 import { TracePlot, yMapOf } from './TracePlot.tsx';
 
 export interface FrequencyChartProps {
@@ -28,26 +37,43 @@ export interface FrequencyChartProps {
 }
 
 /** Horizontal pixels per frequency tick label. */
-const PX_PER_X_TICK = 70;
-const COLOURS = { magnitude: 'var(--pw-magnitude)', phase: 'var(--pw-phase)', delay: 'var(--pw-delay)' };
+const PX_PER_X_TICK = 64;
+const COLOURS: Record<PlotKey, string> = {
+  magnitude: 'var(--pw-magnitude)',
+  phase: 'var(--pw-phase)',
+  delay: 'var(--pw-delay)',
+};
+
+/** The value a reading gives for one plot, in that plot's axis units. */
+function readingValue(
+  key: PlotKey,
+  r: FrequencyReading,
+  v: { db: boolean; wrapped: boolean; ms: boolean },
+): number {
+  if (key === 'magnitude') return v.db ? r.magnitudeDb : r.magnitude;
+  if (key === 'phase') return (v.wrapped ? r.phase : r.phaseUnwrapped) * DEG_PER_RAD;
+  return v.ms ? r.groupDelayMs : r.groupDelay;
+}
 
 export function FrequencyChart({ width, height, reading, onCursor, marker }: FrequencyChartProps) {
   const grid = useWorkbench(selectResponse);
   const zpk = useWorkbench(selectZpk);
-  const response = useMemo(() => refineAtRoots(zpk, grid), [zpk, grid]);
   const fs = useWorkbench((s) => s.design.sampleRate);
   const magnitudeScale = useWorkbench((s) => s.view.magnitudeScale);
   const phaseMode = useWorkbench((s) => s.view.phaseMode);
   const delayUnit = useWorkbench((s) => s.view.delayUnit);
   const axis = useWorkbench((s) => s.view.frequencyAxis);
   const hold = useWorkbench((s) => s.view.holdScale);
+  const [second, setSecond] = useState<'phase' | 'delay'>('phase');
 
-  const layout = useMemo(() => frequencyLayout(width, height), [width, height]);
+  const response = useMemo(() => refineAtRoots(zpk, grid), [zpk, grid]);
+  const layout = useMemo(() => frequencyLayout(width, height, second), [width, height, second]);
+  const area = layout.plots[0]!.rect;
   const hz = useMemo(() => gridHz(response.omega, fs), [response.omega, fs]);
   const [d0, d1] = frequencyDomain(hz, fs, axis);
   const xMap = useMemo<AxisMap>(
-    () => ({ kind: axis, d0, d1, p0: layout.magnitude.left, p1: layout.magnitude.right }),
-    [axis, d0, d1, layout.magnitude.left, layout.magnitude.right],
+    () => ({ kind: axis, d0, d1, p0: area.left, p1: area.right }),
+    [axis, d0, d1, area.left, area.right],
   );
   const xTicks = useMemo(() => {
     const count = Math.max(2, (xMap.p1 - xMap.p0) / PX_PER_X_TICK);
@@ -55,36 +81,34 @@ export function FrequencyChart({ width, height, reading, onCursor, marker }: Fre
   }, [axis, d0, d1, xMap]);
   const xPx = useMemo(() => toPixels(xMap, hz), [xMap, hz]);
 
-  const mag = useMemo(() => magnitudeSeries(response, magnitudeScale), [response, magnitudeScale]);
-  const phase = useMemo(() => phaseSeries(response, phaseMode), [response, phaseMode]);
-  const delay = useMemo(() => delaySeries(response, delayUnit, fs), [response, delayUnit, fs]);
-  const magRange = useSettledRange(mag.key, mag.data, mag.wanted, hold);
-  const phaseRange = useSettledRange(phase.key, phase.data, phase.wanted, hold);
-  const delayRange = useSettledRange(delay.key, delay.data, delay.wanted, hold);
+  const series: Record<PlotKey, Series> = {
+    magnitude: useMemo(() => magnitudeSeries(response, magnitudeScale), [response, magnitudeScale]),
+    phase: useMemo(() => phaseSeries(response, phaseMode), [response, phaseMode]),
+    delay: useMemo(() => delaySeries(response, delayUnit, fs), [response, delayUnit, fs]),
+  };
+  // Every range settles even while its plot is hidden, so switching plots shows a steady axis.
+  const ranges = {
+    magnitude: useSettledRange(series.magnitude.key, series.magnitude.data, series.magnitude.wanted, hold),
+    phase: useSettledRange(series.phase.key, series.phase.data, series.phase.wanted, hold),
+    delay: useSettledRange(series.delay.key, series.delay.data, series.delay.wanted, hold),
+  };
 
-  const points = useMemo(() => {
-    if (!reading) return [];
-    const m = magnitudeScale === 'db' ? reading.magnitudeDb : reading.magnitude;
-    const ph = (phaseMode === 'wrapped' ? reading.phase : reading.phaseUnwrapped) * DEG_PER_RAD;
-    const gd = delayUnit === 'ms' ? reading.groupDelayMs : reading.groupDelay;
-    return [
-      { rect: layout.magnitude, range: magRange, value: m, colour: COLOURS.magnitude },
-      { rect: layout.phase, range: phaseRange, value: ph, colour: COLOURS.phase },
-      { rect: layout.delay, range: delayRange, value: gd, colour: COLOURS.delay },
-    ].map((p) => ({
-      map: yMapOf(p.rect, p.range),
-      value: p.value,
-      colour: p.colour,
-      top: p.rect.top,
-      bottom: p.rect.bottom,
-    }));
-  }, [reading, magnitudeScale, phaseMode, delayUnit, layout, magRange, phaseRange, delayRange]);
+  const rects = layout.plots.map((p) => p.rect);
+  const units = { db: magnitudeScale === 'db', wrapped: phaseMode === 'wrapped', ms: delayUnit === 'ms' };
+  const points = reading
+    ? layout.plots.map(({ key, rect }) => ({
+        map: yMapOf(rect, ranges[key]),
+        value: readingValue(key, reading, units),
+        colour: COLOURS[key],
+        top: rect.top,
+        bottom: rect.bottom,
+      }))
+    : [];
 
   const pointerHz = (e: PointerEvent<SVGRectElement>) => {
     const box = e.currentTarget.ownerSVGElement?.getBoundingClientRect();
     if (!box) return null;
-    const f = fromPixel(xMap, e.clientX - box.left);
-    return Math.min(d1, Math.max(d0, f));
+    return Math.min(d1, Math.max(d0, fromPixel(xMap, e.clientX - box.left)));
   };
   const onKeyDown = (e: KeyboardEvent<SVGRectElement>) => {
     const steps = cursorStepsForKey(e.key, e.shiftKey);
@@ -93,98 +117,83 @@ export function FrequencyChart({ width, height, reading, onCursor, marker }: Fre
       return;
     }
     e.preventDefault();
-    const from = reading ? reading.hz : startHz([d0, d1], axis);
-    onCursor(reading ? stepHz(from, [d0, d1], axis, steps) : from);
+    onCursor(reading ? stepHz(reading.hz, [d0, d1], axis, steps) : startHz([d0, d1], axis));
   };
 
   if (width < 80 || height < 80) return <svg width={width} height={height} />;
-  const area = layout.magnitude;
+  const bottom = layout.axisY;
   const markerX = marker ? toPixel(xMap, marker.hz) : NaN;
   return (
-    <svg
-      className="pw-chart"
-      width={width}
-      height={height}
-      role="group"
-      aria-label="Magnitude, phase and group delay"
-    >
-      <TracePlot
-        rect={layout.magnitude}
-        xMap={xMap}
-        xTicks={xTicks}
-        xPx={xPx}
-        series={mag}
-        range={magRange}
-        colour={COLOURS.magnitude}
-        name="magnitude"
-      />
-      <TracePlot
-        rect={layout.phase}
-        xMap={xMap}
-        xTicks={xTicks}
-        xPx={xPx}
-        series={phase}
-        range={phaseRange}
-        colour={COLOURS.phase}
-        name="phase"
-      />
-      <TracePlot
-        rect={layout.delay}
-        xMap={xMap}
-        xTicks={xTicks}
-        xPx={xPx}
-        series={delay}
-        range={delayRange}
-        colour={COLOURS.delay}
-        name="delay"
-      />
-      <Axis
-        side="bottom"
-        map={xMap}
-        ticks={xTicks}
-        at={layout.axisY}
-        title={axis === 'log' ? 'Frequency (Hz, log)' : 'Frequency (Hz)'}
-      />
-      {marker && markerX >= area.left && markerX <= area.right ? (
-        <RootMarker x={markerX} hz={marker.hz} kind={marker.kind} layout={layout} />
-      ) : null}
-      {reading ? <Crosshair x={toPixel(xMap, reading.hz)} layout={layout} points={points} /> : null}
-      <rect
-        className="pw-plot-area"
-        x={area.left}
-        y={area.top}
-        width={area.right - area.left}
-        height={layout.delay.bottom - area.top}
-        fill="transparent"
-        tabIndex={0}
-        role="slider"
-        aria-label="Cross-hair frequency"
-        aria-valuemin={d0}
-        aria-valuemax={d1}
-        aria-valuenow={reading ? reading.hz : undefined}
-        aria-valuetext={reading ? formatHz(reading.hz) : 'off'}
-        onPointerMove={(e) => onCursor(pointerHz(e))}
-        onPointerDown={(e) => {
-          e.currentTarget.focus();
-          onCursor(pointerHz(e));
-        }}
-        onPointerLeave={(e) => {
-          if (document.activeElement !== e.currentTarget) onCursor(null);
-        }}
-        onFocus={() => {
-          if (!reading) onCursor(startHz([d0, d1], axis));
-        }}
-        onBlur={() => onCursor(null)}
-        onKeyDown={onKeyDown}
-      />
-      <rect
-        className="pw-focus-ring"
-        x={area.left - 2}
-        y={area.top - 2}
-        width={area.right - area.left + 4}
-        height={layout.delay.bottom - area.top + 4}
-        rx={3}
-      />
-    </svg>
+    <>
+      <svg
+        className="pw-chart"
+        width={width}
+        height={height}
+        role="group"
+        aria-label="Magnitude, phase and group delay"
+      >
+        {layout.plots.map(({ key, rect }) => (
+          <TracePlot
+            key={key}
+            rect={rect}
+            xMap={xMap}
+            xTicks={xTicks}
+            xPx={xPx}
+            series={series[key]}
+            range={ranges[key]}
+            colour={COLOURS[key]}
+            name={key}
+          />
+        ))}
+        <Axis
+          side="bottom"
+          map={xMap}
+          ticks={xTicks}
+          at={bottom}
+          title={axis === 'log' ? 'Frequency (Hz, log)' : 'Frequency (Hz)'}
+        />
+        {marker && markerX >= area.left && markerX <= area.right ? (
+          <RootMarker x={markerX} hz={marker.hz} kind={marker.kind} rects={rects} />
+        ) : null}
+        {reading ? <Crosshair x={toPixel(xMap, reading.hz)} rects={rects} points={points} /> : null}
+        <rect
+          className="pw-plot-area"
+          x={area.left}
+          y={area.top}
+          width={area.right - area.left}
+          height={bottom - area.top}
+          fill="transparent"
+          tabIndex={0}
+          role="slider"
+          aria-label="Cross-hair frequency"
+          aria-valuemin={d0}
+          aria-valuemax={d1}
+          aria-valuenow={reading ? reading.hz : undefined}
+          aria-valuetext={reading ? formatHz(reading.hz) : 'off'}
+          onPointerMove={(e) => onCursor(pointerHz(e))}
+          onPointerDown={(e) => {
+            e.currentTarget.focus();
+            onCursor(pointerHz(e));
+          }}
+          onPointerLeave={(e) => {
+            if (document.activeElement !== e.currentTarget) onCursor(null);
+          }}
+          onFocus={() => {
+            if (!reading) onCursor(startHz([d0, d1], axis));
+          }}
+          onBlur={() => onCursor(null)}
+          onKeyDown={onKeyDown}
+        />
+        <rect
+          className="pw-focus-ring"
+          x={area.left - 2}
+          y={area.top - 2}
+          width={area.right - area.left + 4}
+          height={bottom - area.top + 4}
+          rx={3}
+        />
+      </svg>
+      <PlotTitles layout={layout} second={second} onSecond={setSecond} />
+    </>
   );
 }

@@ -1,49 +1,15 @@
-/** The frequency view's settings: magnitude scale, phase mode, delay unit, frequency axis, hold scale. */
-import { useWorkbench } from '../../store/useWorkbench.ts';
-import { workbenchStore } from '../../store/useWorkbench.ts';
+/** The frequency view's panel-wide settings: frequency axis and hold scale (unit choices sit on each plot). */
+import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import type { ViewSettings } from '../../store/view.ts';
 import { Segmented } from '../chart/Segmented.tsx';
 
 const setView = (patch: Partial<ViewSettings>) => workbenchStore.getState().setView(patch);
 
 export function FrequencyControls() {
-  const magnitudeScale = useWorkbench((s) => s.view.magnitudeScale);
-  const phaseMode = useWorkbench((s) => s.view.phaseMode);
-  const delayUnit = useWorkbench((s) => s.view.delayUnit);
   const frequencyAxis = useWorkbench((s) => s.view.frequencyAxis);
   const holdScale = useWorkbench((s) => s.view.holdScale);
   return (
     <div className="pw-freq-controls">
-      <Segmented
-        label="Magnitude scale"
-        caption="|H|"
-        value={magnitudeScale}
-        options={[
-          { value: 'db', label: 'dB' },
-          { value: 'linear', label: 'linear' },
-        ]}
-        onChange={(v) => setView({ magnitudeScale: v })}
-      />
-      <Segmented
-        label="Phase"
-        caption="Phase"
-        value={phaseMode}
-        options={[
-          { value: 'wrapped', label: 'wrapped', title: 'Phase folded into ±180°' },
-          { value: 'unwrapped', label: 'unwrapped', title: 'Continuous phase' },
-        ]}
-        onChange={(v) => setView({ phaseMode: v })}
-      />
-      <Segmented
-        label="Group delay unit"
-        caption="Delay"
-        value={delayUnit}
-        options={[
-          { value: 'samples', label: 'samples' },
-          { value: 'ms', label: 'ms' },
-        ]}
-        onChange={(v) => setView({ delayUnit: v })}
-      />
       <Segmented
         label="Frequency axis"
         caption="f axis"

@@ -34,17 +34,21 @@ export function FrequencyReadout({ reading, phaseMode }: FrequencyReadoutProps) 
       <Item label="f" id="hz">
         {formatHz(reading.hz, 5)}
       </Item>
-      <Item label="|H|" id="db">
-        {formatDb(reading.magnitudeDb, 4)}
-      </Item>
-      <Item label="=" id="linear">
-        {formatNumber(reading.magnitude, 4)}
-      </Item>
+      <span className="pw-readout-item">
+        <span className="pw-readout-label">|H|</span>
+        <span className="pw-readout-value" data-testid="freq-read-db">
+          {formatDb(reading.magnitudeDb, 4)}
+        </span>
+        <span className="pw-readout-label"> = </span>
+        <span className="pw-readout-value" data-testid="freq-read-linear">
+          {formatNumber(reading.magnitude, 4)}
+        </span>
+      </span>
       <Item label="phase" id="phase">
-        {`${formatNumber(ph * DEG_PER_RAD, 4)}° (${formatNumber(ph, 4)} rad)`}
+        {`${formatNumber(ph * DEG_PER_RAD, 4)}° = ${formatNumber(ph, 4)} rad`}
       </Item>
       <Item label="delay" id="delay">
-        {`${formatNumber(reading.groupDelay, 4)} samples (${formatNumber(reading.groupDelayMs, 4)} ms)`}
+        {`${formatNumber(reading.groupDelay, 4)} samples = ${formatNumber(reading.groupDelayMs, 4)} ms`}
       </Item>
     </div>
   );

@@ -1,40 +1,40 @@
 /** A labelled vertical line at the frequency of the root selected in the z-plane. */
 import { memo } from 'react';
 import { formatHz } from '../shared/format.ts';
-import type { FrequencyLayout } from './layout.ts';
+import type { PlotRect } from './layout.ts';
 
 export interface RootMarkerProps {
   x: number;
   hz: number;
   kind: 'zero' | 'pole';
-  layout: FrequencyLayout;
+  /** The plots the line crosses (the first one carries the label). */
+  rects: readonly PlotRect[];
 }
 
-/** Width kept free for the magnitude plot's own title at its top left. */
-const TITLE_ROOM_PX = 110;
+/** Rough width of one label character at 11px, for the label's backing box. */
+const CHAR_PX = 6.6;
 
-export const RootMarker = memo(function RootMarker({ x, hz, kind, layout }: RootMarkerProps) {
+export const RootMarker = memo(function RootMarker({ x, hz, kind, rects }: RootMarkerProps) {
   const colour = kind === 'zero' ? 'var(--pw-zero)' : 'var(--pw-pole)';
   const px = Math.round(x) + 0.5;
-  const nearRight = x > (layout.magnitude.left + layout.magnitude.right) / 2;
-  // The label sits in the title row above the magnitude plot, clear of the curve; keep it off the title.
-  const textX = nearRight ? px - 4 : Math.max(px + 4, layout.magnitude.left + TITLE_ROOM_PX);
+  const first = rects[0];
+  if (!first) return null;
   const label = `${kind === 'zero' ? 'Zero' : 'Pole'} ${formatHz(hz)}`;
+  const w = label.length * CHAR_PX + 6;
+  // The label sits at the bottom of the magnitude plot, on whichever side of the line has room.
+  const right = px + 4 + w <= first.right;
+  const bx = right ? px + 3 : px - 3 - w;
+  const by = first.bottom - 17;
   return (
     <g className="pw-root-marker" data-testid="root-marker" aria-label={`Selected ${label}`} role="img">
       <path
-        d={`M${px} ${layout.magnitude.top - 3}V${layout.magnitude.bottom}M${px} ${layout.phase.top}V${layout.phase.bottom}M${px} ${layout.delay.top}V${layout.delay.bottom}`}
+        d={rects.map((r) => `M${px} ${r.top}V${r.bottom}`).join('')}
         stroke={colour}
         strokeWidth={1.5}
         strokeOpacity={0.75}
       />
-      <text
-        x={textX}
-        y={layout.magnitude.top - 5}
-        textAnchor={nearRight ? 'end' : 'start'}
-        fill={colour}
-        className="pw-marker-label"
-      >
+      <rect x={bx} y={by} width={w} height={15} rx={3} className="pw-marker-box" />
+      <text x={bx + 3} y={by + 11} fill={colour} className="pw-marker-label">
         {label}
       </text>
     </g>

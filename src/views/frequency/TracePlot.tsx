@@ -1,4 +1,4 @@
-/** One frequency plot: grid, y axis with its title, and the curve clipped to the plot's rectangle. */
+/** One frequency plot: grid, y axis and the curve clipped to the plot's rectangle (its title row is HTML). */
 import { memo, useId, useMemo } from 'react';
 import { Axis } from '../chart/Axis.tsx';
 import { Grid } from '../chart/Grid.tsx';
@@ -72,14 +72,7 @@ export const TracePlot = memo(function TracePlot(p: TracePlotProps) {
         strokeWidth={1.6}
         strokeLinejoin="round"
       />
-      <Axis
-        side="left"
-        map={yMap}
-        ticks={yTicks}
-        at={rect.left}
-        title={series.title}
-        titlePlacement="above"
-      />
+      <Axis side="left" map={yMap} ticks={yTicks} at={rect.left} />
     </g>
   );
 });

@@ -74,8 +74,8 @@ export function ClosedFormList() {
   }
   return (
     <section className="pw-cf" aria-label="Closed form">
-      <h3>
-        y[n] for n ≥ 0 <span className="pw-cf-sub">(sum of these terms)</span>
+      <h3 title="The output y[n] for n ≥ 0 is the sum of these terms">
+        Closed form <span className="pw-cf-sub">n ≥ 0</span>
       </h3>
       {body}
     </section>

@@ -21,7 +21,7 @@ export function ModeText({ mode }: { mode: Mode }) {
         <NPower k={mode.power} />
         {constant ? null : (
           <>
-            ·({formatNumber(mode.base, DIGITS)})<sup>n</sup>
+            ·<wbr />({formatNumber(mode.base, DIGITS)})<sup>n</sup>
           </>
         )}
       </span>
@@ -37,11 +37,13 @@ export function ModeText({ mode }: { mode: Mode }) {
       <NPower k={mode.power} />
       {mode.onCircle ? null : (
         <>
-          ·{formatNumber(mode.radius, DIGITS)}
+          ·<wbr />
+          {formatNumber(mode.radius, DIGITS)}
           <sup>n</sup>
         </>
       )}
-      ·cos({formatNumber(mode.omega, DIGITS)}n{phase})
+      ·<wbr />
+      cos({formatNumber(mode.omega, DIGITS)}n{phase})
     </span>
   );
 }

@@ -18,7 +18,6 @@ export function TimeControls() {
     <div className="pw-time-controls">
       <Segmented
         label="Input signal"
-        caption="Input"
         value={input}
         options={[
           { value: 'impulse', label: 'impulse', title: 'Unit impulse δ[n]' },

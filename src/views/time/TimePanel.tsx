@@ -23,9 +23,9 @@ export function TimePanel() {
         <h2>Time</h2>
         <TimeControls />
       </header>
+      <TimeReadout cursor={shown} envelope={envelope} />
       <div className="pw-time-body">
         <div className="pw-time-main">
-          <TimeReadout cursor={shown} envelope={envelope} />
           <div className="pw-chart-box" ref={box}>
             <TimeChart
               width={width}

@@ -2,7 +2,7 @@
 import type { PlotRect } from '../frequency/layout.ts';
 
 /** Room for y labels on the left, the sample axis below and the seconds axis above. */
-export const TIME_MARGIN = { left: 62, right: 14, top: 34, bottom: 34 } as const;
+export const TIME_MARGIN = { left: 58, right: 12, top: 30, bottom: 32 } as const;
 
 /** The plot rectangle for a width × height box. */
 export function timeLayout(width: number, height: number): PlotRect {

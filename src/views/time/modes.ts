@@ -5,6 +5,7 @@
 import type { ClosedForm } from '../../core/closedForm.ts';
 import { NEGLIGIBLE_TERM_RATIO } from '../../core/time/closedFormText.ts';
 import { UNIT_CIRCLE_TOLERANCE } from '../../core/stability.ts';
+import { SAME_RADIUS_REL } from './envelope.ts';
 
 export interface Mode {
   /** 'real': coefficient·nᵏ·baseⁿ; 'pair': amplitude·nᵏ·radiusⁿ·cos(omega·n + phase). */
@@ -68,7 +69,10 @@ export function closedFormModes(cf: ClosedForm): { modes: Mode[]; impulses: Impu
       });
     }
   }
-  modes.sort((a, b) => b.radius - a.radius || a.omega - b.omega || b.power - a.power);
+  // Radii equal to rounding (e.g. the demo's three pole pairs) order by frequency instead.
+  const byRadius = (a: Mode, b: Mode) =>
+    Math.abs(a.radius - b.radius) <= SAME_RADIUS_REL * a.radius ? 0 : b.radius - a.radius;
+  modes.sort((a, b) => byRadius(a, b) || a.omega - b.omega || b.power - a.power);
   const impulses = cf.direct.map((value, delay) => ({ value, delay })).filter((d) => d.value !== 0);
   return { modes, impulses };
 }
