@@ -8,6 +8,8 @@ import { frequencyRingTicks } from './frequencyRing.ts';
 const RING_LABEL_SPACING_PX = 72;
 /** Pixels per axis tick label. */
 const AXIS_LABEL_SPACING_PX = 80;
+/** Room kept free of tick labels at the right end of the real axis for its title, pixels. */
+const AXIS_TITLE_ROOM_PX = 34;
 
 interface Props {
   scale: PlaneScale;
@@ -46,7 +48,7 @@ function PlaneGridImpl({ scale, sampleRate, unstable }: Props) {
       <line className="pw-axis" x1={0} x2={width} y1={axisY} y2={axisY} />
       <line className="pw-axis" x1={axisX} x2={axisX} y1={0} y2={height} />
       {xTicks.map((t) =>
-        t === 0 ? null : (
+        t === 0 || x(t) > width - AXIS_TITLE_ROOM_PX ? null : (
           <g key={`tx${t}`} transform={`translate(${x(t)},${axisY})`}>
             <line className="pw-axis" y2={4} />
             <text className="pw-tick-label" y={14} textAnchor="middle">
@@ -65,7 +67,7 @@ function PlaneGridImpl({ scale, sampleRate, unstable }: Props) {
           </g>
         ),
       )}
-      <text className="pw-axis-title" x={width - 6} y={axisY - 6} textAnchor="end">
+      <text className="pw-axis-title" x={width - 6} y={axisY + 14} textAnchor="end">
         Re z
       </text>
       <text className="pw-axis-title" x={axisX + 6} y={12}>
@@ -97,7 +99,7 @@ function PlaneGridImpl({ scale, sampleRate, unstable }: Props) {
               x={ox + (k + 11) * c}
               y={oy - (k + 11) * s}
               textAnchor={anchor}
-              dy={s < 0.3 ? '0.32em' : '0'}
+              dy={s < 0.05 ? '-0.3em' : s < 0.3 ? '0.32em' : '0'}
             >
               {formatHz(hz, 3)}
             </text>

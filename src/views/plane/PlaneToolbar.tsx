@@ -1,16 +1,15 @@
-/** The plane's toolbar: add roots, snapping, zoom, and the |H| shading switch. */
+/** The plane's toolbar: add roots, snapping, and the |H| shading switch (zoom floats on the plane). */
 import type { MouseEvent } from 'react';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
-import { fitView, HOME_VIEW, zoomAbout } from './geometry.ts';
 import { SnapControl } from './SnapControl.tsx';
 import type { Placement } from './usePlanePointer.ts';
-import { ZOOM_STEP } from './usePlaneKeys.ts';
 
-const ADDS: { kind: 'pole' | 'zero'; pair: boolean; words: string }[] = [
-  { kind: 'pole', pair: true, words: 'Pole pair' },
-  { kind: 'pole', pair: false, words: 'Real pole' },
-  { kind: 'zero', pair: true, words: 'Zero pair' },
-  { kind: 'zero', pair: false, words: 'Real zero' },
+/** The four add buttons: the marker glyph says pole or zero, the word says pair or real. */
+const ADDS: { kind: 'pole' | 'zero'; pair: boolean; words: string; short: string }[] = [
+  { kind: 'pole', pair: true, words: 'Pole pair', short: 'pair' },
+  { kind: 'pole', pair: false, words: 'Real pole', short: 'real' },
+  { kind: 'zero', pair: true, words: 'Zero pair', short: 'pair' },
+  { kind: 'zero', pair: false, words: 'Real zero', short: 'real' },
 ];
 
 interface Props {
@@ -18,19 +17,6 @@ interface Props {
   setPlacing: (p: Placement | null) => void;
   /** Adds a root at a spot in view at once (keyboard activation). */
   addAtDefault: (p: Placement) => void;
-}
-
-function zoom(factor: number) {
-  const { view, setView } = workbenchStore.getState();
-  const v = zoomAbout({ span: view.planeSpan, centre: view.planeCentre }, factor, view.planeCentre);
-  setView({ planeSpan: v.span, planeCentre: v.centre });
-}
-
-function fitRoots() {
-  const { design, setView } = workbenchStore.getState();
-  const pts = [...design.zeros, ...design.poles].flatMap((r) => [r, { re: r.re, im: -r.im }]);
-  const v = fitView(pts);
-  setView({ planeSpan: v.span, planeCentre: v.centre });
 }
 
 export function PlaneToolbar({ placing, setPlacing, addAtDefault }: Props) {
@@ -44,41 +30,21 @@ export function PlaneToolbar({ placing, setPlacing, addAtDefault }: Props) {
     <div className="pw-plane-toolbar" role="toolbar" aria-label="z-plane tools">
       <span className="pw-plane-group" role="group" aria-label="Add a root">
         <span className="pw-plane-group-title">Add</span>
-        {ADDS.map(({ kind, pair, words }) => (
+        {ADDS.map(({ kind, pair, words, short }) => (
           <button
             key={words}
             type="button"
             className={`pw-add pw-add-${kind}`}
+            aria-label={words}
             aria-pressed={placing?.kind === kind && placing.pair === pair}
             title={`Click, then click in the plane to place a ${words.toLowerCase()} (Enter adds one in view)`}
             onClick={onAdd({ kind, pair })}
           >
             <span aria-hidden="true" className={`pw-add-glyph pw-add-glyph-${kind}`} />
-            {words}
+            {short}
           </button>
         ))}
       </span>
-      <span className="pw-plane-group" role="group" aria-label="Zoom">
-        <button type="button" title="Zoom out (−)" aria-label="Zoom out" onClick={() => zoom(ZOOM_STEP)}>
-          −
-        </button>
-        <button type="button" title="Zoom in (+)" aria-label="Zoom in" onClick={() => zoom(1 / ZOOM_STEP)}>
-          +
-        </button>
-        <button type="button" title="Frame every root" onClick={fitRoots}>
-          Fit roots
-        </button>
-        <button
-          type="button"
-          title="Show the whole unit circle"
-          onClick={() =>
-            workbenchStore.getState().setView({ planeSpan: HOME_VIEW.span, planeCentre: HOME_VIEW.centre })
-          }
-        >
-          Unit circle
-        </button>
-      </span>
-      <SnapControl />
       <label className="pw-shading-switch" title="Shade the plane by |H(z)| in dB">
         <input
           type="checkbox"
@@ -87,6 +53,7 @@ export function PlaneToolbar({ placing, setPlacing, addAtDefault }: Props) {
         />{' '}
         |H| shading
       </label>
+      <SnapControl />
     </div>
   );
 }

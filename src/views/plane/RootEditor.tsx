@@ -60,8 +60,7 @@ function Editor({ target: ref, root }: { target: RootRef; root: Root }) {
   return (
     <form className="pw-root-editor" onSubmit={apply} aria-label="Selected root by number">
       <span className={`pw-editor-kind pw-editor-${ref.kind}`}>
-        {real ? 'Real' : ''} {ref.kind}
-        {real ? '' : ' pair'} {ref.index + 1}
+        {real ? `Real ${ref.kind}` : `${ref.kind === 'pole' ? 'Pole' : 'Zero'} pair`} {ref.index + 1}
       </span>
       {!real && (
         <select aria-label="Coordinates" value={form} onChange={(e) => setForm(e.target.value as Form)}>

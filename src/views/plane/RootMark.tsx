@@ -1,11 +1,10 @@
 /** One drawn root: a circle (zero) or a cross (pole), with its selection, danger and multiplicity marks. */
 import { memo } from 'react';
 import type { RootKind } from '../../store/design.ts';
+import { HIT_RADIUS_PX } from './rootHit.ts';
 
 /** Half-size of a marker, pixels. */
 export const MARK_SIZE = 6;
-/** Radius of the invisible hit area, pixels (generous for touch). */
-const HIT_RADIUS = 14;
 
 interface Props {
   kind: RootKind;
@@ -37,7 +36,7 @@ function RootMarkImpl({ kind, index, x, y, multiplicity, mirror, selected, dange
       aria-hidden={mirror ? true : undefined}
       {...focusable}
     >
-      <circle className="pw-root-hit" r={HIT_RADIUS} />
+      <circle className="pw-root-hit" r={HIT_RADIUS_PX} />
       {danger && <circle className="pw-root-danger" r={s + 5} />}
       <circle className="pw-root-ring" r={s + 5} />
       {kind === 'zero' ? (

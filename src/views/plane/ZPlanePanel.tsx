@@ -17,6 +17,7 @@ import { NUDGE_FINE_STEP, NUDGE_STEP } from './nudge.ts';
 import { usePlaneKeys } from './usePlaneKeys.ts';
 import { usePlanePointer, type Placement } from './usePlanePointer.ts';
 import { useWheelZoom } from './useWheelZoom.ts';
+import { ZoomButtons } from './ZoomButtons.tsx';
 import './plane.css';
 
 export function ZPlanePanel() {
@@ -84,10 +85,11 @@ export function ZPlanePanel() {
           )}
         </svg>
         {shading && <SurfaceLegend />}
+        <ZoomButtons />
         <p className="pw-plane-hint" aria-live="polite">
           {placing
             ? `Click in the plane to place a ${placing.pair ? `${placing.kind} pair` : `real ${placing.kind}`} — Esc cancels`
-            : `Drag roots · wheel zooms · drag empty space to pan · arrows nudge ${NUDGE_STEP} (Shift/Alt ${NUDGE_FINE_STEP})`}
+            : `Drag roots · wheel zooms · arrows nudge ${NUDGE_STEP} (Shift/Alt ${NUDGE_FINE_STEP})`}
         </p>
       </div>
       <RootEditor />

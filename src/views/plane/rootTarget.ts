@@ -16,3 +16,10 @@ export function rootTargetOf(target: EventTarget | null): RootTarget | null {
   if ((kind !== 'zero' && kind !== 'pole') || !Number.isInteger(index)) return null;
   return { ref: { kind, index }, mirror: el.dataset.mirror === '1', element: el };
 }
+
+/** The focusable marker of a stored root inside the plane's SVG. */
+export function rootElement(svg: SVGSVGElement, ref: RootRef): SVGGElement | null {
+  return svg.querySelector<SVGGElement>(
+    `g[data-kind="${ref.kind}"][data-index="${ref.index}"]:not([data-mirror])`,
+  );
+}

@@ -8,7 +8,8 @@ import type { RootKind, RootRef } from '../../store/design.ts';
 import { workbenchStore } from '../../store/useWorkbench.ts';
 import { frameCoalescer, type FrameCoalescer } from './frameCoalescer.ts';
 import { pixelToZ, type PlaneScale } from './geometry.ts';
-import { rootTargetOf } from './rootTarget.ts';
+import { nearestRoot } from './rootHit.ts';
+import { rootElement } from './rootTarget.ts';
 import { snapPoint, type Z } from './snap.ts';
 
 /** What a click on empty space adds while placing. */
@@ -21,7 +22,7 @@ export interface Placement {
 const CLICK_SLOP_PX = 3;
 
 type Gesture =
-  | { type: 'root'; ref: RootRef; mirror: boolean; real: boolean; offset: Z; rect: DOMRect; id: number }
+  | { type: 'root'; ref: RootRef; mirror: boolean; real: boolean; offset: Z; id: number }
   | { type: 'pan'; start: { x: number; y: number }; centre: Z; k: number; moved: boolean; id: number };
 
 interface Options {
@@ -48,25 +49,21 @@ export function usePlanePointer({ svgRef, scaleRef, placingRef, onPlaced }: Opti
   rootMoves.current ??= frameCoalescer(({ ref, z }) => workbenchStore.getState().moveRoot(ref, z.re, z.im));
   panMoves.current ??= frameCoalescer((centre) => workbenchStore.getState().setView({ planeCentre: centre }));
 
-  const zAt = (g: { rect: DOMRect }, e: { clientX: number; clientY: number }): Z | null => {
+  /** The pointer's z, from the SVG's current box (re-read: the panel may change size during a drag). */
+  const zAt = (e: { clientX: number; clientY: number }): Z | null => {
     const s = scaleRef.current;
-    return s ? pixelToZ(s, e.clientX - g.rect.left, e.clientY - g.rect.top) : null;
+    const rect = svgRef.current?.getBoundingClientRect();
+    return s && rect ? pixelToZ(s, e.clientX - rect.left, e.clientY - rect.top) : null;
   };
 
   /** Starts dragging a root; `at` is the pointer's z, or null to let the root jump to the pointer. */
-  const startRootDrag = (
-    e: ReactPointerEvent,
-    ref: RootRef,
-    mirror: boolean,
-    at: Z | null,
-    rect: DOMRect,
-  ) => {
+  const startRootDrag = (e: ReactPointerEvent, ref: RootRef, mirror: boolean, at: Z | null) => {
     const st = workbenchStore.getState();
     const root = (ref.kind === 'zero' ? st.design.zeros : st.design.poles)[ref.index];
     if (!root) return;
     // Grabbing a marker off-centre keeps that offset, so the root does not jump under the pointer.
     const offset = at ? { re: root.re - at.re, im: (mirror ? -root.im : root.im) - at.im } : { re: 0, im: 0 };
-    gesture.current = { type: 'root', ref, mirror, real: root.im === 0, offset, rect, id: e.pointerId };
+    gesture.current = { type: 'root', ref, mirror, real: root.im === 0, offset, id: e.pointerId };
     st.select(ref);
     st.setDragging(true);
   };
@@ -77,13 +74,13 @@ export function usePlanePointer({ svgRef, scaleRef, placingRef, onPlaced }: Opti
     if (!svg || !s || gesture.current || (e.pointerType === 'mouse' && e.button > 1)) return;
     const rect = svg.getBoundingClientRect();
     const at = pixelToZ(s, e.clientX - rect.left, e.clientY - rect.top);
-    const hit = rootTargetOf(e.target);
-    const placing = placingRef.current;
     const st = workbenchStore.getState();
+    const hit = nearestRoot(st.design.zeros, st.design.poles, s, e.clientX - rect.left, e.clientY - rect.top);
+    const placing = placingRef.current;
     if (hit && e.button === 0) {
       st.beginGesture();
-      startRootDrag(e, hit.ref, hit.mirror, at, rect);
-      if (!hit.mirror) hit.element.focus({ preventScroll: true });
+      startRootDrag(e, hit.ref, hit.mirror, at);
+      rootElement(svg, hit.ref)?.focus({ preventScroll: true });
     } else if (placing && e.button === 0) {
       const real = !placing.pair;
       const z = snapPoint(at, snapSettings(), real);
@@ -92,8 +89,12 @@ export function usePlanePointer({ svgRef, scaleRef, placingRef, onPlaced }: Opti
       st.addRoot(placing.kind, { re: z.re, im: real ? 0 : Math.abs(z.im), multiplicity: 1 });
       const ref = workbenchStore.getState().selection;
       onPlaced();
-      if (ref) startRootDrag(e, ref, mirror, null, rect);
+      if (ref) {
+        startRootDrag(e, ref, mirror, null);
+        requestAnimationFrame(() => rootElement(svg, ref)?.focus({ preventScroll: true }));
+      }
     } else {
+      svg.focus({ preventScroll: true });
       const view = st.view;
       gesture.current = {
         type: 'pan',
@@ -116,7 +117,7 @@ export function usePlanePointer({ svgRef, scaleRef, placingRef, onPlaced }: Opti
     const g = gesture.current;
     if (!g || e.pointerId !== g.id) return;
     if (g.type === 'root') {
-      const at = zAt(g, e);
+      const at = zAt(e);
       if (!at) return;
       const p = { re: at.re + g.offset.re, im: at.im + g.offset.im };
       const up = g.mirror ? { re: p.re, im: -p.im } : p;

@@ -1,0 +1,81 @@
+/**
+ * In-page instruments for the drag benchmark, passed to page.evaluate (so they must be self-contained:
+ * no imports, no closures over module scope). They time each pointer move on the plane:
+ * - `handler`: from the first listener seeing the move to the end of the React render of every panel
+ *   (a microtask queued after the plane's handler runs after React's synchronous flush);
+ * - `painted`: from the event's timestamp to a task posted from the next animation frame, i.e. after that
+ *   frame's style, layout and paint;
+ * - `frame`: from the first listener to that same point (the main-thread cost of the frame with the move);
+ * and whether the dragged root's marker moved (every pointer update drawn).
+ */
+export interface DragSample {
+  handler: number;
+  painted: number;
+  frame: number;
+  drawn: boolean;
+}
+
+declare global {
+  interface Window {
+    __dragBench?: { samples: DragSample[]; waiters: (() => void)[] };
+  }
+}
+
+/** Installs the listeners; `selector` picks the dragged root's marker. */
+export function installDragProbe(selector: string): void {
+  const state = { samples: [] as DragSample[], waiters: [] as (() => void)[] };
+  window.__dragBench = state;
+  let start = 0;
+  let stamp = 0;
+  let last = document.querySelector(selector)?.getAttribute('transform') ?? '';
+  window.addEventListener(
+    'pointermove',
+    (e) => {
+      start = performance.now();
+      stamp = e.timeStamp;
+    },
+    { capture: true },
+  );
+  window.addEventListener('pointermove', () => {
+    const s0 = start;
+    const ts = stamp;
+    queueMicrotask(() => {
+      const rendered = performance.now();
+      requestAnimationFrame(() => {
+        const ch = new MessageChannel();
+        ch.port1.onmessage = () => {
+          const now = performance.now();
+          const t = document.querySelector(selector)?.getAttribute('transform') ?? '';
+          state.samples.push({
+            handler: rendered - s0,
+            painted: now - ts,
+            frame: now - s0,
+            drawn: t !== last,
+          });
+          last = t;
+          state.waiters.splice(0).forEach((w) => w());
+        };
+        ch.port2.postMessage(0);
+      });
+    });
+  });
+}
+
+/** Resolves once the sample for the latest move has been taken. */
+export function nextSample(count: number): Promise<number> {
+  const state = window.__dragBench!;
+  if (state.samples.length >= count) return Promise.resolve(state.samples.length);
+  return new Promise((resolve) => state.waiters.push(() => resolve(state.samples.length)));
+}
+
+/** Screen position of z from the plane's drawn unit circle. */
+export function zToClient(z: { re: number; im: number }): { x: number; y: number } {
+  const svg = document.querySelector('svg.pw-plane-svg')!;
+  const c = svg.querySelector('circle.pw-unit-circle')!;
+  const box = svg.getBoundingClientRect();
+  const r = Number(c.getAttribute('r'));
+  return {
+    x: box.left + Number(c.getAttribute('cx')) + z.re * r,
+    y: box.top + Number(c.getAttribute('cy')) - z.im * r,
+  };
+}
