@@ -29,7 +29,7 @@ const CASES: [string, number, RegExp][] = [
   ['(1+z^-1)^5000', 8, /beyond 4096/],
   ['z^5000/z^5000', 1, /beyond 4096/],
   ['0/(1 - 0.5z^-1)', 0, /numerator is zero/],
-  ['(1 - 0.5z^-1', 12, /expected '\)' to close the '\(' at column 0/],
+  ['(1 - 0.5z^-1', 12, /expected '\)' to close the '\(' at column 1/],
   ['H(z) = 1/(1 - 0.5w)', 17, /unknown name 'w'/],
   ['1/(1 - 0.5z^-1) $', 16, /unexpected character '\$'/],
   ['b = [0, 1]; a = [0, 1]', 0, /a\[0\] is zero/],
@@ -52,7 +52,7 @@ describe('error messages name what was wrong and where', () => {
     const e = error(parseSystem(text));
     expect(e.message).toMatch(words);
     expect(e.position).toBe(position);
-    expect(e.message).toContain(`column ${position}`);
+    expect(e.message).toContain(`column ${position + 1}`);
   });
 
   it('says what would be accepted', () => {

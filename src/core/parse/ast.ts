@@ -136,7 +136,7 @@ export class Cursor {
     if (t.kind === 'op' && t.text === '(') {
       this.next();
       const inner = this.expression();
-      this.expectOp(')', `to close the '(' at column ${t.pos}`);
+      this.expectOp(')', `to close the '(' at column ${t.pos + 1}`);
       return inner;
     }
     return fail(`expected a number, a name or '('${found(t)}`, t.pos, 'a number, a name or (');

@@ -16,9 +16,9 @@ export class ParseError extends Error {
   }
 }
 
-/** Throws a ParseError whose message ends with the column, so the position is readable in the text too. */
+/** Throws a ParseError whose message ends with the 1-based column (position stays a 0-based offset), so the position is readable in the text too. */
 export function fail(message: string, position: number, expected?: string): never {
-  throw new ParseError(`${message} at column ${position}`, position, expected);
+  throw new ParseError(`${message} at column ${position + 1}`, position, expected);
 }
 
 /** Runs a parse step and turns any thrown error into an InputError with a position inside the text. */

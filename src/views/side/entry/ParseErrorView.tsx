@@ -4,7 +4,7 @@ import { locate } from './readEntry.ts';
 
 /** Characters of context kept on each side of the error in a long line. */
 const CONTEXT = 36;
-/** The parser ends its messages with a 0-based "at column N"; the page states a 1-based column itself. */
+/** The parser ends its messages with a 1-based "at column N"; the page shows the column itself, beside the marked text. */
 const COLUMN_SUFFIX = / at column \d+$/;
 
 export function ParseErrorView({ id, text, error }: { id: string; text: string; error: InputError }) {
