@@ -1,0 +1,37 @@
+/**
+ * Requirement-mask benchmark: judging a mask on the current roots, as the page does on every drag frame
+ * (a pass band, a stop band and a band with both limits, MASK_GRID_POINTS each plus refinement).
+ */
+import type { RequirementMask } from '../src/core/mask.ts';
+import { evaluateMask } from '../src/core/mask.ts';
+import { benchDesign } from './engine.ts';
+import { cell, timeMs } from './timing.ts';
+
+/** Markdown table of evaluateMask timings (median ms) by order, moving one pole a little each call. */
+export function benchMask(): string {
+  const fs = 1000;
+  const mask: RequirementMask = {
+    regions: [
+      { id: 'pass', kind: 'pass', fromHz: 0, toHz: 100, lowerDb: -1, upperDb: 1 },
+      { id: 'stop', kind: 'stop', fromHz: 200, toHz: 500, upperDb: -40 },
+      { id: 'band', kind: 'band', fromHz: 120, toHz: 180, lowerDb: -80, upperDb: 20 },
+    ],
+  };
+  const rows = ['| order | regions | evaluateMask per frame (ms, median) |', '|---|---|---|'];
+  for (const order of [8, 32, 64]) {
+    const base = benchDesign(order);
+    let t = 0;
+    const ms = timeMs(() => {
+      t += 1e-4;
+      const poles = base.poles.slice();
+      const p0 = poles[0]!;
+      poles[0] = { ...p0, re: p0.re + Math.sin(t) * 1e-3 };
+      evaluateMask(mask, { ...base, poles }, fs);
+    }, 300);
+    rows.push(`| ${order} | ${mask.regions.length} | ${cell(ms)} |`);
+  }
+  return rows.join('\n');
+}
+
+if (import.meta.url === `file://${process.argv[1]}`)
+  console.log('## Requirement mask\n\n' + benchMask() + '\n');
