@@ -3,7 +3,8 @@
 
 Usage: python3 bench/numpy_roots.py POLYS.json, then one request per line on standard input:
 "INDEX INNER" runs numpy.roots INNER times on polynomial INDEX and answers one line with the mean seconds
-per call; "quit" ends. A long-lived process lets the caller interleave our runs with numpy's.
+per call; "roots INDEX" answers numpy.roots of polynomial INDEX as JSON {"re": [...], "im": [...]};
+"quit" ends. A long-lived process lets the caller interleave our runs with numpy's.
 """
 import json
 import sys
@@ -21,6 +22,10 @@ def main():
         parts = line.split()
         if not parts or parts[0] == "quit":
             break
+        if parts[0] == "roots":
+            r = np.roots(polys[int(parts[1])])
+            print(json.dumps({"re": r.real.tolist(), "im": r.imag.tolist()}), flush=True)
+            continue
         p = polys[int(parts[0])]
         inner = int(parts[1])
         t0 = time.perf_counter()

@@ -102,10 +102,15 @@ function timeOurs(p: Float64Array, inner: number): number {
   return (performance.now() - t0) / inner;
 }
 
-/** A python3 process answering "index inner" with numpy.roots' mean seconds per call. */
-async function startNumpy(
-  file: string,
-): Promise<{ version: string; time: (i: number, inner: number) => Promise<number>; stop: () => void }> {
+interface NumpyServer {
+  version: string;
+  time: (i: number, inner: number) => Promise<number>;
+  roots: (i: number) => Promise<{ re: number[]; im: number[] }>;
+  stop: () => void;
+}
+
+/** A python3 process answering timing and root requests for numpy.roots (see bench/numpy_roots.py). */
+async function startNumpy(file: string): Promise<NumpyServer> {
   const script = join(fileURLToPath(new URL('.', import.meta.url)), 'numpy_roots.py');
   const child = spawn('python3', [script, file], { stdio: ['pipe', 'pipe', 'inherit'] });
   const lines = createInterface({ input: child.stdout })[Symbol.asyncIterator]();
@@ -120,6 +125,10 @@ async function startNumpy(
     time: async (i, inner) => {
       child.stdin.write(`${i} ${inner}\n`);
       return 1000 * Number(await next());
+    },
+    roots: async (i) => {
+      child.stdin.write(`roots ${i}\n`);
+      return JSON.parse(await next()) as { re: number[]; im: number[] };
     },
     stop: () => {
       child.stdin.end('quit\n');
@@ -139,6 +148,8 @@ export async function benchRoots(): Promise<string> {
     for (const [i, { name, n, p }] of cases.entries()) {
       const res = findRoots(p);
       const berr = rootsBackwardError(p, res.re, res.im);
+      const theirRoots = await numpy.roots(i);
+      const numpyBerr = rootsBackwardError(p, theirRoots.re, theirRoots.im);
       const oursOnce = Math.max(timeOurs(p, 1), timeOurs(p, 1));
       const numpyOnce = await numpy.time(i, 1);
       const innerOurs = Math.max(1, Math.round(TARGET_MS / oursOnce));
@@ -153,7 +164,7 @@ export async function benchRoots(): Promise<string> {
       const mo = median(ours);
       const mn = median(theirs);
       rows.push(
-        `| ${name} | ${n} | ${mo.toFixed(3)} | ${berr.toExponential(1)} | ${res.iterations}${res.converged ? '' : ' (not converged)'} | ${mn.toFixed(3)} | ${(mo / mn).toFixed(2)} |`,
+        `| ${name} | ${n} | ${mo.toFixed(3)} | ${berr.toExponential(1)} | ${res.iterations}${res.converged ? '' : ' (not converged)'} | ${mn.toFixed(3)} | ${numpyBerr.toExponential(1)} | ${(mo / mn).toFixed(2)} |`,
       );
     }
   } finally {
@@ -161,10 +172,11 @@ export async function benchRoots(): Promise<string> {
     rmSync(dir, { recursive: true, force: true });
   }
   return [
-    `findRoots vs numpy.roots (${numpy.version}), Node ${process.version}; median ms per call`,
+    `findRoots vs numpy.roots (${numpy.version}), Node ${process.version}; median ms per call;`,
+    'backward error = max over roots of |p(z)| / Σ|a_k||z|^k; sweeps = Aberth + polish sweeps of ours.',
     '',
-    '| family | degree | ours (ms) | backward error | sweeps | numpy (ms) | ours / numpy |',
-    '| --- | ---: | ---: | ---: | ---: | ---: | ---: |',
+    '| family | degree | ours (ms) | backward error | sweeps | numpy (ms) | numpy backward error | ours / numpy |',
+    '| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: |',
     ...rows,
   ].join('\n');
 }

@@ -6,11 +6,11 @@
  */
 import type { Root } from './types.ts';
 import type { Poly } from './poly.ts';
-import { aberthIterate } from './roots/aberth.ts';
+import { ABERTH_STOP_PER_DEGREE, aberthIterate } from './roots/aberth.ts';
 import { startingPoints } from './roots/start.ts';
 import { polishIllConditioned } from './roots/polish.ts';
 import { symmetrizeConjugates } from './roots/conjugate.ts';
-import { groupMultipleRoots } from './roots/multiplicity.ts';
+import { findMultipleRoots, listGrouped } from './roots/multiplicity.ts';
 
 export { rootsBackwardError } from './roots/backwardError.ts';
 
@@ -71,10 +71,16 @@ export function findRoots(p: Poly, options: RootsOptions = {}): RootsResult {
     const zi = im.subarray(0, n);
     startingPoints(c, zr, zi);
     ({ converged, iterations } = aberthIterate(c, zr, zi, options.maxIterations ?? DEFAULT_MAX_ITERATIONS));
-    if (converged) iterations += polishIllConditioned(c, zr, zi);
   }
-  const mate = symmetrizeConjugates(c, re.subarray(0, n), im.subarray(0, n));
-  const grouped = n > 0 ? groupMultipleRoots(c, re.subarray(0, n), im.subarray(0, n), mate) : [];
+  const zr = re.subarray(0, n);
+  const zi = im.subarray(0, n);
+  const mate = symmetrizeConjugates(c, zr, zi);
+  const multiple = findMultipleRoots(c, zr, zi, mate);
+  if (n > 2 && converged) {
+    const floor = ABERTH_STOP_PER_DEGREE * n * Number.EPSILON;
+    iterations += polishIllConditioned(c, zr, zi, mate, (i) => multiple.group[i]! >= 0, floor);
+  }
+  const grouped = listGrouped(zr, zi, multiple);
   if (origin > 0) grouped.push({ re: 0, im: 0, multiplicity: origin });
   return { re, im, grouped, atInfinity: lead, zeroPolynomial: false, converged, iterations };
 }

@@ -14,7 +14,14 @@ import { logDerivative, relativeResidual } from './horner.ts';
  * Cluster radii tried, relative to the root modulus, largest first. An m-fold root spreads over about
  * ε^(1/m)·(condition), e.g. 1e-8 for m = 2 and 1e-4 for m = 4; the largest radius admits m ≈ 6.
  */
-export const CLUSTER_RADII = [3e-2, 1e-2, 3e-3, 1e-3, 3e-4, 1e-4, 3e-5, 1e-5, 1e-6, 1e-7];
+export const CLUSTER_RADII = [3e-2, 5e-3, 1e-3, 2e-4, 3e-5, 3e-6, 3e-7];
+
+/**
+ * A candidate cluster is verified only if no other root lies within CLUSTER_ISOLATION times its radius of
+ * its centre: the approximations of a multiple root huddle far closer together than to any other root,
+ * while evenly spaced distinct roots (a Butterworth cluster) fail this cheaply, without derivatives.
+ */
+export const CLUSTER_ISOLATION = 3;
 
 /**
  * A merged root must make p, …, p^(m−2) vanish to within this many (degree · ε) of Σ|coefficients||z|^k:
@@ -25,17 +32,23 @@ export const MULTIPLICITY_RESIDUAL_PER_DEGREE = 64;
 /** Newton steps allowed when refining a cluster centre on p^(m−1). */
 const REFINE_STEPS = 12;
 
+/** Verified repeated roots: group[i] indexes clusters (or is -1 for a simple root). */
+export interface MultipleRoots {
+  group: Int32Array;
+  clusters: Root[];
+}
+
 /**
- * Returns the roots (re, im) grouped: each verified cluster once, with its refined value and multiplicity,
- * every other root once with multiplicity 1; conjugates listed separately. c: descending coefficients of
- * the polynomial whose roots these are; mate: conjugate index from symmetrizeConjugates (-1 if real).
+ * Finds the verified clusters among the roots (re, im) of the descending polynomial c; each cluster gets
+ * its refined value and multiplicity, a conjugate cluster listed separately. mate: conjugate index from
+ * symmetrizeConjugates (-1 if real).
  */
-export function groupMultipleRoots(
+export function findMultipleRoots(
   c: Float64Array,
   re: Float64Array,
   im: Float64Array,
   mate: Int32Array,
-): Root[] {
+): MultipleRoots {
   const n = re.length;
   const group = new Int32Array(n).fill(-1);
   const roots: Root[] = [];
@@ -57,7 +70,7 @@ export function groupMultipleRoots(
         if (Math.hypot(re[j]! - cx, im[j]! - cy) <= rho * mod) members.push(j);
       }
       const m = members.length;
-      if (m < 2 || m === failedSize[i]) continue;
+      if (m < 2 || m === failedSize[i] || !isolated(re, im, members, neighbours[i]!, cx, cy)) continue;
       if (real && members.some((k) => mate[k]! >= 0 && !members.includes(mate[k]!))) continue;
       const centre = verifiedCentre(c, derivs, re, im, members, real, rho * mod, tol);
       if (!centre) {
@@ -73,17 +86,40 @@ export function groupMultipleRoots(
       }
     }
   }
+  return { group, clusters: roots };
+}
+
+/** The roots listed once per group: clusters with their multiplicity, simple roots with multiplicity 1. */
+export function listGrouped(re: Float64Array, im: Float64Array, found: MultipleRoots): Root[] {
   const out: Root[] = [];
-  const listed = new Uint8Array(roots.length);
-  for (let i = 0; i < n; i++) {
-    const id = group[i]!;
+  const listed = new Uint8Array(found.clusters.length);
+  for (let i = 0; i < re.length; i++) {
+    const id = found.group[i]!;
     if (id < 0) out.push({ re: re[i]!, im: im[i]!, multiplicity: 1 });
     else if (!listed[id]) {
       listed[id] = 1;
-      out.push(roots[id]!);
+      out.push(found.clusters[id]!);
     }
   }
   return out;
+}
+
+/** Whether no neighbour outside the cluster comes within CLUSTER_ISOLATION × its radius of its centre. */
+function isolated(
+  re: Float64Array,
+  im: Float64Array,
+  members: number[],
+  neighbours: number[],
+  cx: number,
+  cy: number,
+): boolean {
+  let radius = 0;
+  for (const k of members) radius = Math.max(radius, Math.hypot(re[k]! - cx, im[k]! - cy));
+  for (const j of neighbours) {
+    if (members.includes(j)) continue;
+    if (Math.hypot(re[j]! - cx, im[j]! - cy) < CLUSTER_ISOLATION * radius) return false;
+  }
+  return true;
 }
 
 /** For each root, the indices of the other roots within relative distance r (sweep over real parts). */
