@@ -11,6 +11,10 @@ if (want('roots')) {
 }
 if (want('response')) parts.push('## Frequency response', '', benchResponse(), '');
 if (want('recompute')) parts.push('## Drag-step recompute (engine)', '', benchDragRecompute(), '');
+if (want('mask')) {
+  const { benchMask } = await import('./mask.ts');
+  parts.push('## Requirement mask', '', benchMask(), '');
+}
 if (want('drag')) {
   const { benchDrag } = await import('./drag.ts');
   parts.push('## Scripted drag in headless Chromium', '', await benchDrag(), '');
