@@ -4,6 +4,8 @@
  */
 import type { Root } from '../core/types.ts';
 import type { GainRule } from '../core/gainRule.ts';
+import type { DesignerSpec } from '../core/design/index.ts';
+import type { RequirementMask } from '../core/mask.ts';
 
 export type { GainRule } from '../core/gainRule.ts';
 
@@ -26,6 +28,10 @@ export interface Design {
   name: string;
   /** Free text about the design (shown as text, never as markup). */
   note: string;
+  /** The designer that produced the roots, kept so it can be re-run with new values (see store/designer.ts). */
+  designer?: DesignerSpec;
+  /** The requirement mask the magnitude response is judged against. */
+  mask?: RequirementMask;
 }
 
 export type RootKind = 'zero' | 'pole';
