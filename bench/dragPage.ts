@@ -1,17 +1,19 @@
 /**
  * In-page instruments for the drag benchmark, passed to page.evaluate (so they must be self-contained:
  * no imports, no closures over module scope). They time each pointer move on the plane:
- * - `handler`: from the first listener seeing the move to the end of the React render of every panel
+ * - `script`: from the first listener seeing the move to the end of the React render of every panel
  *   (a microtask queued after the plane's handler runs after React's synchronous flush);
- * - `painted`: from the event's timestamp to a task posted from the next animation frame, i.e. after that
- *   frame's style, layout and paint;
- * - `frame`: from the first listener to that same point (the main-thread cost of the frame with the move);
+ * - `render`: from the next animation-frame callback to a task posted from it, i.e. that frame's rAF work,
+ *   style, layout and paint;
+ * - `work`: script + render, the main-thread cost of the frame that shows the move (idle time excluded);
+ * - `latency`: from the event's timestamp to the end of that frame's paint;
  * and whether the dragged root's marker moved (every pointer update drawn).
  */
 export interface DragSample {
-  handler: number;
-  painted: number;
-  frame: number;
+  script: number;
+  render: number;
+  work: number;
+  latency: number;
   drawn: boolean;
 }
 
@@ -42,16 +44,14 @@ export function installDragProbe(selector: string): void {
     queueMicrotask(() => {
       const rendered = performance.now();
       requestAnimationFrame(() => {
+        const raf = performance.now();
         const ch = new MessageChannel();
         ch.port1.onmessage = () => {
           const now = performance.now();
           const t = document.querySelector(selector)?.getAttribute('transform') ?? '';
-          state.samples.push({
-            handler: rendered - s0,
-            painted: now - ts,
-            frame: now - s0,
-            drawn: t !== last,
-          });
+          const script = rendered - s0;
+          const render = now - raf;
+          state.samples.push({ script, render, work: script + render, latency: now - ts, drawn: t !== last });
           last = t;
           state.waiters.splice(0).forEach((w) => w());
         };

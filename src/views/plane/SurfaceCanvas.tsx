@@ -1,59 +1,80 @@
 /**
- * The |H(z)| shading: a canvas under the plane's SVG, drawn from a coarse grid while a root is dragged and a
- * finer one at rest, then stretched (smoothly) to the box.
+ * The |H(z)| shading: a canvas under the plane's SVG. Every change is drawn at once from a coarse grid;
+ * at rest a finer grid is then computed in slices between other work and replaces it when complete.
  */
 import { useLayoutEffect, useRef } from 'react';
+import type { Zpk } from '../../core/types.ts';
 import { selectZpk } from '../../store/derived.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 import type { PlaneScale } from './geometry.ts';
-import { surfaceDb } from './surface.ts';
+import { surfaceDb, surfaceInSlices, type SurfaceRect } from './surface.ts';
 import { paintLevels } from './surfaceColours.ts';
 
-/** Grid cells along the longer side of the box while dragging and at rest. */
+/** Grid cells along the longer side of the box: drawn at once (and while dragging), and at rest. */
 export const SURFACE_CELLS_DRAGGING = 64;
 export const SURFACE_CELLS_AT_REST = 256;
 
-interface Scratch {
-  db: Float32Array;
-  grid: HTMLCanvasElement;
+function gridSize(cells: number, width: number, height: number): [number, number] {
+  const short = (n: number) => Math.max(2, Math.round(n));
+  return width >= height
+    ? [cells, short((cells * height) / width)]
+    : [short((cells * width) / height), cells];
+}
+
+/** Paints dB values on the nx × ny scratch canvas and stretches it over the visible canvas. */
+function draw(
+  canvas: HTMLCanvasElement,
+  grid: HTMLCanvasElement,
+  db: Float32Array,
+  nx: number,
+  ny: number,
+  s: PlaneScale,
+  smooth: boolean,
+) {
+  const ctx = canvas.getContext('2d');
+  grid.width = nx;
+  grid.height = ny;
+  const gctx = grid.getContext('2d');
+  if (!ctx || !gctx) return;
+  const img = gctx.createImageData(nx, ny);
+  paintLevels(db, img.data, nx * ny);
+  gctx.putImageData(img, 0, 0);
+  const dpr = window.devicePixelRatio || 1;
+  const cw = Math.round(s.width * dpr);
+  const ch = Math.round(s.height * dpr);
+  if (canvas.width !== cw || canvas.height !== ch) {
+    canvas.width = cw;
+    canvas.height = ch;
+  }
+  ctx.imageSmoothingEnabled = true;
+  ctx.imageSmoothingQuality = smooth ? 'high' : 'low';
+  ctx.drawImage(grid, 0, 0, cw, ch);
+}
+
+function rectOf(s: PlaneScale): SurfaceRect {
+  const [re0, re1] = s.x.domain() as [number, number];
+  const [imBottom, imTop] = s.y.domain() as [number, number];
+  return { re0, re1, imTop, imBottom };
 }
 
 export function SurfaceCanvas({ scale }: { scale: PlaneScale }) {
-  const zpk = useWorkbench(selectZpk);
+  const zpk: Zpk = useWorkbench(selectZpk);
   const dragging = useWorkbench((s) => s.dragging);
   const canvasRef = useRef<HTMLCanvasElement>(null);
-  const scratch = useRef<Scratch | null>(null);
+  const scratch = useRef<{ db: Float32Array; grid: HTMLCanvasElement } | null>(null);
 
   useLayoutEffect(() => {
     const canvas = canvasRef.current;
-    const ctx = canvas?.getContext('2d');
-    if (!canvas || !ctx) return;
-    const { width, height, x, y } = scale;
-    const cells = dragging ? SURFACE_CELLS_DRAGGING : SURFACE_CELLS_AT_REST;
-    const nx = width >= height ? cells : Math.max(2, Math.round((cells * width) / height));
-    const ny = width >= height ? Math.max(2, Math.round((cells * height) / width)) : cells;
+    if (!canvas) return;
     scratch.current ??= { db: new Float32Array(0), grid: document.createElement('canvas') };
     const sc = scratch.current;
-    const [re0, re1] = x.domain() as [number, number];
-    const [imBottom, imTop] = y.domain() as [number, number];
-    sc.db = surfaceDb(zpk, { re0, re1, imTop, imBottom }, nx, ny, sc.db);
-    sc.grid.width = nx;
-    sc.grid.height = ny;
-    const gctx = sc.grid.getContext('2d');
-    if (!gctx) return;
-    const img = gctx.createImageData(nx, ny);
-    paintLevels(sc.db, img.data, nx * ny);
-    gctx.putImageData(img, 0, 0);
-    const dpr = window.devicePixelRatio || 1;
-    const cw = Math.round(width * dpr);
-    const ch = Math.round(height * dpr);
-    if (canvas.width !== cw || canvas.height !== ch) {
-      canvas.width = cw;
-      canvas.height = ch;
-    }
-    ctx.imageSmoothingEnabled = true;
-    ctx.imageSmoothingQuality = dragging ? 'low' : 'high';
-    ctx.drawImage(sc.grid, 0, 0, cw, ch);
+    const rect = rectOf(scale);
+    const [nx, ny] = gridSize(SURFACE_CELLS_DRAGGING, scale.width, scale.height);
+    sc.db = surfaceDb(zpk, rect, nx, ny, sc.db);
+    draw(canvas, sc.grid, sc.db, nx, ny, scale, false);
+    if (dragging) return;
+    const [fx, fy] = gridSize(SURFACE_CELLS_AT_REST, scale.width, scale.height);
+    return surfaceInSlices(zpk, rect, fx, fy, (db) => draw(canvas, sc.grid, db, fx, fy, scale, true));
   }, [zpk, dragging, scale]);
 
   return (

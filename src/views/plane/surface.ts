@@ -18,9 +18,30 @@ export interface SurfaceRect {
 }
 
 /**
- * 20·log10|H(z)| sampled at the centres of an nx × ny grid over the rectangle, row by row from the top,
- * written into `out` (reused when large enough).
+ * 20·log10|H(z)| at the centres of rows j0…j1−1 of an nx × ny grid over the rectangle (rows counted from
+ * the top), written into db[j·nx + i].
  */
+export function surfaceRows(
+  zpk: Zpk,
+  rect: SurfaceRect,
+  nx: number,
+  ny: number,
+  j0: number,
+  j1: number,
+  db: Float32Array,
+): void {
+  const dx = (rect.re1 - rect.re0) / nx;
+  const dy = (rect.imBottom - rect.imTop) / ny;
+  for (let j = j0; j < j1; j++) {
+    const im = rect.imTop + (j + 0.5) * dy;
+    for (let i = 0; i < nx; i++) {
+      const h = evalZpkAt(zpk, rect.re0 + (i + 0.5) * dx, im);
+      db[j * nx + i] = 20 * Math.log10(Math.max(MAGNITUDE_FLOOR, Math.hypot(h.re, h.im)));
+    }
+  }
+}
+
+/** The whole nx × ny grid (see surfaceRows), into `out` when it is large enough. */
 export function surfaceDb(
   zpk: Zpk,
   rect: SurfaceRect,
@@ -28,16 +49,43 @@ export function surfaceDb(
   ny: number,
   out?: Float32Array,
 ): Float32Array {
-  const n = nx * ny;
-  const db = out && out.length >= n ? out : new Float32Array(n);
-  const dx = (rect.re1 - rect.re0) / nx;
-  const dy = (rect.imBottom - rect.imTop) / ny;
-  for (let j = 0; j < ny; j++) {
-    const im = rect.imTop + (j + 0.5) * dy;
-    for (let i = 0; i < nx; i++) {
-      const h = evalZpkAt(zpk, rect.re0 + (i + 0.5) * dx, im);
-      db[j * nx + i] = 20 * Math.log10(Math.max(MAGNITUDE_FLOOR, Math.hypot(h.re, h.im)));
-    }
-  }
+  const db = out && out.length >= nx * ny ? out : new Float32Array(nx * ny);
+  surfaceRows(zpk, rect, nx, ny, 0, ny, db);
   return db;
+}
+
+/** Main-thread time one slice of a background grid may take, ms (keeps the page responsive). */
+export const SURFACE_SLICE_MS = 8;
+
+/**
+ * Computes the grid a few rows at a time between other work, then calls done(db). Returns a function that
+ * abandons the job (when the design or the view changed before it finished).
+ */
+export function surfaceInSlices(
+  zpk: Zpk,
+  rect: SurfaceRect,
+  nx: number,
+  ny: number,
+  done: (db: Float32Array) => void,
+): () => void {
+  const db = new Float32Array(nx * ny);
+  let row = 0;
+  let timer: ReturnType<typeof setTimeout> | null = null;
+  const step = () => {
+    const t0 = performance.now();
+    while (row < ny && performance.now() - t0 < SURFACE_SLICE_MS) {
+      surfaceRows(zpk, rect, nx, ny, row, row + 1, db);
+      row++;
+    }
+    if (row < ny) timer = setTimeout(step, 0);
+    else {
+      timer = null;
+      done(db);
+    }
+  };
+  timer = setTimeout(step, 0);
+  return () => {
+    if (timer !== null) clearTimeout(timer);
+    timer = null;
+  };
 }
