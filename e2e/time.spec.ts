@@ -95,4 +95,15 @@ test.describe('time view', () => {
     expect(line).toContain('L');
     expect(line).not.toContain('V');
   });
+
+  test('the amplitude axis fits the ringing after the first sample, or everything', async ({ page }) => {
+    const panel = timePanel(page);
+    // By default the large first sample of the notch's impulse response is left off-scale and labelled.
+    await expect(panel.getByTestId('time-offscale')).toContainText('y[0] = 0.9831');
+    await choose(panel, 'Amplitude axis fits', 'all');
+    await expect(panel.getByTestId('time-offscale')).toHaveCount(0);
+    const labels = await panel.locator('.pw-chart-axis-left text').allTextContents();
+    const values = labels.map((t) => Number(t.replace('−', '-'))).filter((v) => Number.isFinite(v));
+    expect(Math.max(...values)).toBeGreaterThanOrEqual(0.98); // y[0] ≈ 0.983 is on the axis now
+  });
 });

@@ -26,7 +26,7 @@ describe('linePath', () => {
     expect(linePath([0, 1, 2, 3], [20, NaN, 30, 31], band)).toBe('M0 20M2 30L3 31');
     expect(linePath([0, 1, 2], [20, 100, 101], { ...band, maxJumpPx: 50 })).toBe('M0 20M1 100L2 101');
   });
-  it('thins dense data to first/min/max/last per pixel column and keeps a one-point notch', () => {
+  it('thins dense data to the lowest and highest point per pixel column and keeps a one-point notch', () => {
     // 1000 points over 10 pixel columns, with a single deep point in column 4.
     const n = 1000;
     const x = new Float64Array(n);
@@ -37,7 +37,7 @@ describe('linePath', () => {
     }
     y[437] = 105;
     const pts = commands(linePath(x, y, { ...band, thin: true }));
-    expect(pts.length).toBeLessThanOrEqual(4 * 11);
+    expect(pts.length).toBeLessThanOrEqual(2 * 11);
     expect(Math.max(...pts.map((p) => p.y))).toBe(105);
     // x stays in order: the thinned line never doubles back.
     for (let i = 1; i < pts.length; i++) expect(pts[i]!.x).toBeGreaterThanOrEqual(pts[i - 1]!.x);
@@ -81,5 +81,13 @@ describe('pixel maps', () => {
     const p = toPixels(log, [0, 100]);
     expect(Number.isNaN(p[0]!)).toBe(true);
     expectClose(p[1]!, 200, { abs: 1e-9 });
+  });
+});
+
+describe('stemsPath thinning', () => {
+  it('merges the stems of one pixel column into one segment that covers them and the baseline', () => {
+    // Four samples in column 3 (x 2.6…3.4), one in column 5; baseline at y = 50.
+    const d = stemsPath([2.6, 2.9, 3.1, 3.4, 5], [40, 70, 45, 52, 10], 50, 0, 100, true);
+    expect(d).toBe('M3 40V70M5 10V50');
   });
 });

@@ -40,16 +40,35 @@ export function refineAtRoots(zpk: Zpk, grid: FrequencyResponse): FrequencyRespo
   if (extra.length === 0) return grid;
   const add = responseZpk(zpk, Float64Array.from(extra));
   const n = g.length + extra.length;
-  const out = Object.fromEntries(FIELDS.map((f) => [f, new Float64Array(n)])) as unknown as FrequencyResponse;
-  let i = 0;
-  let j = 0;
-  for (let k = 0; k < n; k++) {
-    const fromGrid = j >= extra.length || (i < g.length && g[i]! <= extra[j]!);
-    const src = fromGrid ? grid : add;
-    const at = fromGrid ? i++ : j++;
-    for (const f of FIELDS) out[f][k] = src[f][at]!;
+  // Where each extra point lands in the merged arrays; the grid's runs between them are copied whole.
+  const at = extra.map((w, j) => lowerBound(g, w) + j);
+  const out = {} as FrequencyResponse;
+  for (const f of FIELDS) {
+    const src = grid[f];
+    const dst = new Float64Array(n);
+    let from = 0;
+    for (let j = 0; j < extra.length; j++) {
+      const k = at[j]!;
+      dst.set(src.subarray(from, k - j), from + j);
+      dst[k] = add[f][j]!;
+      from = k - j;
+    }
+    dst.set(src.subarray(from), from + extra.length);
+    out[f] = dst;
   }
   return out;
+}
+
+/** Number of grid frequencies below w (the grid is increasing). */
+function lowerBound(g: Float64Array, w: number): number {
+  let lo = 0;
+  let hi = g.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (g[mid]! < w) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
 }
 
 /** Whether w is one of the grid's frequencies exactly (binary search; the grid is increasing). */

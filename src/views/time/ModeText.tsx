@@ -3,6 +3,8 @@ import { formatNumber } from '../shared/format.ts';
 import type { Mode } from './modes.ts';
 
 const DIGITS = 4;
+/** Radii sit close to 1, where 4 digits would round 1.00995 to 1.01: show more. */
+const RADIUS_DIGITS = 6;
 
 /** "n", "n²"… for the power of n; nothing for power 0. */
 function NPower({ k }: { k: number }) {
@@ -21,7 +23,7 @@ export function ModeText({ mode }: { mode: Mode }) {
         <NPower k={mode.power} />
         {constant ? null : (
           <>
-            ·<wbr />({formatNumber(mode.base, DIGITS)})<sup>n</sup>
+            ·<wbr />({formatNumber(mode.base, RADIUS_DIGITS)})<sup>n</sup>
           </>
         )}
       </span>
@@ -38,7 +40,7 @@ export function ModeText({ mode }: { mode: Mode }) {
       {mode.onCircle ? null : (
         <>
           ·<wbr />
-          {formatNumber(mode.radius, DIGITS)}
+          {formatNumber(mode.radius, RADIUS_DIGITS)}
           <sup>n</sup>
         </>
       )}

@@ -13,6 +13,7 @@ import { linearTicks } from '../chart/ticks.ts';
 import { useSettledRange } from '../chart/useSettledRange.ts';
 import { samplePaths } from './samplePaths.ts';
 import { timeLayout, timeUnit } from './layout.ts';
+import { formatNumber } from '../shared/format.ts';
 import type { EnvelopeResult } from './useEnvelope.ts';
 
 export interface TimeChartProps {
@@ -21,19 +22,25 @@ export interface TimeChartProps {
   cursor: number | null;
   onCursor: (n: number | null) => void;
   envelope: EnvelopeResult;
+  /** Fit the amplitude axis to samples from n = 1 on, so a large first sample does not flatten the rest. */
+  fitTail: boolean;
 }
 
 const PX_PER_X_TICK = 70;
 const PX_PER_Y_TICK = 32;
 
-/** y range of input and output together, never thinner than 0.2 so a silent output still has an axis. */
-function valueRange(x: Float64Array, y: Float64Array): Range {
-  const a = finiteExtent(x) ?? [0, 0];
-  const b = finiteExtent(y) ?? [0, 0];
+/** y range of input and output together from sample `from` on, always including 0 (the baseline). */
+export function valueRange(x: Float64Array, y: Float64Array, from: number): Range {
+  const a = finiteExtent(x.subarray(from)) ?? [0, 0];
+  const b = finiteExtent(y.subarray(from)) ?? [0, 0];
   return [Math.min(a[0], b[0], 0), Math.max(a[1], b[1], 0)];
 }
 
-export function TimeChart({ width, height, cursor, onCursor, envelope }: TimeChartProps) {
+/** Smallest amplitude span shown, relative to the data's largest magnitude (and absolutely). */
+const MIN_SPAN_RELATIVE = 0.05;
+const MIN_SPAN_ABSOLUTE = 1e-12;
+
+export function TimeChart({ width, height, cursor, onCursor, envelope, fitTail }: TimeChartProps) {
   const x = useWorkbench(selectTimeInput);
   const y = useWorkbench(selectTimeOutput);
   const fs = useWorkbench((s) => s.design.sampleRate);
@@ -63,9 +70,16 @@ export function TimeChart({ width, height, cursor, onCursor, envelope }: TimeCha
     return { unit, map, ticks };
   }, [n, fs, rect.left, rect.right]);
 
-  const data = useMemo(() => valueRange(x, y), [x, y]);
-  const wanted = useMemo(() => niceRange(data[0], data[1], 0.2, 5), [data]);
-  const range = useSettledRange(kind, data, wanted, hold);
+  const data = useMemo(() => {
+    const tail = fitTail ? valueRange(x, y, Math.min(1, n - 1)) : null;
+    // Nothing after the first sample (e.g. a pure gain): fit everything rather than an empty axis.
+    return tail && (tail[0] !== 0 || tail[1] !== 0) ? tail : valueRange(x, y, 0);
+  }, [x, y, fitTail, n]);
+  const wanted = useMemo(() => {
+    const size = Math.max(Math.abs(data[0]), Math.abs(data[1]));
+    return niceRange(data[0], data[1], Math.max(MIN_SPAN_ABSOLUTE, MIN_SPAN_RELATIVE * size), 5);
+  }, [data]);
+  const range = useSettledRange(`${kind}:${fitTail}`, data, wanted, hold);
   const yMap = useMemo<AxisMap>(
     () => ({ kind: 'linear', d0: range[0], d1: range[1], p0: rect.bottom, p1: rect.top }),
     [range, rect],
@@ -172,6 +186,7 @@ export function TimeChart({ width, height, cursor, onCursor, envelope }: TimeCha
           <path className="pw-time-envelope" data-testid="time-envelope" d={envelopePaths} />
         ) : null}
       </g>
+      <OffScaleNote x={toPixel(xMap, 0)} value={y[0]} range={range} rect={rect} />
       <Axis side="left" map={yMap} ticks={yTicks} at={rect.left} title="Amplitude" />
       <Axis side="bottom" map={xMap} ticks={xTicks} at={rect.bottom} title="Sample n" />
       <Axis
@@ -237,6 +252,28 @@ export function TimeChart({ width, height, cursor, onCursor, envelope }: TimeCha
         rx={3}
       />
     </svg>
+  );
+}
+
+/** A label at the plot's edge for the first output sample when the axis was fitted without it. */
+function OffScaleNote(p: {
+  x: number;
+  value: number | undefined;
+  range: Range;
+  rect: { top: number; bottom: number };
+}) {
+  const v = p.value;
+  if (v === undefined || (v >= p.range[0] && v <= p.range[1])) return null;
+  const up = v > p.range[1];
+  return (
+    <text
+      className="pw-offscale"
+      x={p.x + 5}
+      y={up ? p.rect.top + 11 : p.rect.bottom - 4}
+      data-testid="time-offscale"
+    >
+      {`${up ? '↑' : '↓'} y[0] = ${formatNumber(v, 4)}`}
+    </text>
   );
 }
 

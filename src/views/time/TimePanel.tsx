@@ -1,6 +1,7 @@
 /** The time view: input and output of the current system, the slowest pole's envelope and the closed form. */
 import { useRef, useState } from 'react';
 import { useWorkbench } from '../../store/useWorkbench.ts';
+import { Segmented } from '../chart/Segmented.tsx';
 import { useElementSize } from '../chart/useElementSize.ts';
 import { ClosedFormList } from './ClosedFormList.tsx';
 import { TimeChart } from './TimeChart.tsx';
@@ -14,6 +15,8 @@ export function TimePanel() {
   const box = useRef<HTMLDivElement>(null);
   const { width, height } = useElementSize(box);
   const [cursor, setCursor] = useState<number | null>(null);
+  // The first sample of an impulse response is often far larger than the rest: fit the rest by default.
+  const [fitTail, setFitTail] = useState(true);
   const samples = useWorkbench((s) => s.view.timeSamples);
   const envelope = useEnvelope();
   const shown = cursor !== null && cursor < samples ? cursor : null;
@@ -23,7 +26,25 @@ export function TimePanel() {
         <h2>Time</h2>
         <TimeControls />
       </header>
-      <TimeReadout cursor={shown} envelope={envelope} />
+      <div className="pw-time-info">
+        <TimeReadout cursor={shown} envelope={envelope} />
+        <Segmented
+          mini
+          label="Amplitude axis fits"
+          caption="fit"
+          value={fitTail ? 'tail' : 'all'}
+          options={[
+            { value: 'all', label: 'all', title: 'Fit the amplitude axis to every sample' },
+            {
+              value: 'tail',
+              label: 'n ≥ 1',
+              title:
+                'Fit it to the samples after the first, so a large first sample does not flatten the rest',
+            },
+          ]}
+          onChange={(v) => setFitTail(v === 'tail')}
+        />
+      </div>
       <div className="pw-time-body">
         <div className="pw-time-main">
           <div className="pw-chart-box" ref={box}>
@@ -33,6 +54,7 @@ export function TimePanel() {
               cursor={shown}
               onCursor={setCursor}
               envelope={envelope}
+              fitTail={fitTail}
             />
           </div>
         </div>
