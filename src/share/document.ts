@@ -1,0 +1,60 @@
+/** A design with the view settings that travel with it, and its conversion to and from the current document. */
+import type { DesignerSpec } from '../core/design/index.ts';
+import type { Design } from '../store/design.ts';
+import { CURRENT_VERSION, readDocument, type CurrentDocument } from './schema/migrate.ts';
+import type { SharedView } from './schema/view.ts';
+
+/**
+ * The design's optional parts. EXTENSION POINT: once Design itself declares `designer`, `mask` and
+ * `implementation`, this intersection is redundant but harmless; add `mask` and `implementation` here
+ * and in schema/v2.ts when their types land.
+ */
+export type SharedDesignParts = Design & { designer?: DesignerSpec };
+
+/** What a link, a file or a library entry carries. */
+export interface SharedDesign {
+  design: SharedDesignParts;
+  /** View settings worth sharing; missing keys keep the reader's own. */
+  view: SharedView;
+}
+
+export type ShareResult = { ok: true; value: SharedDesign } | { ok: false; message: string };
+
+/** The current-version document of a design (plain data, ready for JSON or the link codec). */
+export function toDocument(shared: SharedDesign): CurrentDocument {
+  const d = shared.design;
+  return {
+    polewright: 'design',
+    version: CURRENT_VERSION,
+    name: d.name,
+    note: d.note,
+    sampleRate: d.sampleRate,
+    zeros: d.zeros.map((r) => ({ re: r.re, im: r.im, multiplicity: r.multiplicity })),
+    poles: d.poles.map((r) => ({ re: r.re, im: r.im, multiplicity: r.multiplicity })),
+    gainRule: { ...d.gainRule },
+    ...(d.typed ? { typed: { b: [...d.typed.b], a: [...d.typed.a], text: d.typed.text } } : {}),
+    ...(d.designer ? { designer: structuredClone(d.designer) } : {}),
+    ...(Object.keys(shared.view).length ? { view: { ...shared.view } } : {}),
+  };
+}
+
+/** The design in a validated current-version document. */
+export function fromDocument(doc: CurrentDocument): SharedDesign {
+  const design: SharedDesignParts = {
+    sampleRate: doc.sampleRate,
+    zeros: doc.zeros,
+    poles: doc.poles,
+    gainRule: doc.gainRule,
+    name: doc.name,
+    note: doc.note,
+    ...(doc.typed ? { typed: doc.typed } : {}),
+    ...(doc.designer ? { designer: doc.designer } : {}),
+  };
+  return { design, view: doc.view ?? {} };
+}
+
+/** Validates any released document version (parsed JSON or a decoded link) and returns its design. */
+export function readShared(json: unknown): ShareResult {
+  const r = readDocument(json);
+  return r.ok ? { ok: true, value: fromDocument(r.document) } : r;
+}

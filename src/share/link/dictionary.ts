@@ -1,0 +1,81 @@
+/**
+ * Strings a link writes as a small index instead of spelling them out: field names and enumerated values
+ * of the open-ended parts (designer, view, and later mask and implementation). APPEND ONLY: an entry's index
+ * is part of link format 1, so entries are never removed or reordered, only added at the end.
+ */
+export const LINK_DICTIONARY: readonly string[] = [
+  // designer fields and kinds
+  'designer',
+  'kind',
+  'fs',
+  'f0',
+  'q',
+  'bandwidthHz',
+  'cutoffHz',
+  'harmonics',
+  'type',
+  'gainDb',
+  'bandwidthOctaves',
+  'slope',
+  'family',
+  'response',
+  'order',
+  'edgesHz',
+  'rippleDb',
+  'attenuationDb',
+  'passbandHz',
+  'stopbandHz',
+  'notch',
+  'peak',
+  'dcBlocker',
+  'harmonicNotch',
+  'comb',
+  'peakingEq',
+  'lowShelf',
+  'highShelf',
+  'iir',
+  'butterworth',
+  'chebyshev1',
+  'chebyshev2',
+  'elliptic',
+  'lowpass',
+  'highpass',
+  'bandpass',
+  'bandstop',
+  'auto',
+  // view fields and values
+  'view',
+  'magnitudeScale',
+  'phaseMode',
+  'delayUnit',
+  'frequencyAxis',
+  'responsePoints',
+  'timeInput',
+  'sineHz',
+  'timeSamples',
+  'timeStyle',
+  'noiseSeed',
+  'db',
+  'linear',
+  'wrapped',
+  'unwrapped',
+  'samples',
+  'ms',
+  'log',
+  'impulse',
+  'step',
+  'sine',
+  'noise',
+  'stems',
+  'line',
+  // reserved for the parts still to come
+  'mask',
+  'implementation',
+];
+
+const INDEX = new Map(LINK_DICTIONARY.map((s, i) => [s, i]));
+
+/** The dictionary index of a string, if it has one. */
+export function dictionaryIndex(s: string): number | undefined {
+  return INDEX.get(s);
+}

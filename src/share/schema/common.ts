@@ -1,0 +1,58 @@
+/** Zod pieces shared by every schema version: finite numbers, roots, gain rules, plain text. */
+import { z } from 'zod';
+import { MAX_MULTIPLICITY, MAX_ORDER, MAX_SAMPLE_RATE } from './limits.ts';
+
+/** A finite number (JSON has no NaN or infinity, and a link could smuggle them in). */
+export const finite = z.number().refine(Number.isFinite, 'must be a finite number');
+
+/** Plain text of at most `max` characters; lone UTF-16 surrogates are refused so text survives UTF-8. */
+export function plainText(max: number) {
+  return z
+    .string()
+    .max(max, `must be at most ${max} characters`)
+    .refine((s) => !/\p{Cs}/u.test(s), 'must be well-formed Unicode text (a lone surrogate was found)');
+}
+
+export const sampleRate = finite.refine(
+  (v) => v > 0 && v <= MAX_SAMPLE_RATE,
+  `must be a sample rate above 0 and at most ${MAX_SAMPLE_RATE} Hz`,
+);
+
+export const root = z.object({
+  re: finite,
+  im: finite.refine((v) => v >= 0, 'must be ≥ 0 (a complex root is stored once, above the real axis)'),
+  multiplicity: z.number().int().min(1).max(MAX_MULTIPLICITY),
+});
+
+export const roots = z.array(root).max(MAX_ORDER);
+
+export const gainRule = z.discriminatedUnion('kind', [
+  z.object({ kind: z.literal('fixed'), value: finite }),
+  z.object({ kind: z.literal('dc') }),
+  z.object({ kind: z.literal('nyquist') }),
+  z.object({ kind: z.literal('frequency'), hz: finite.refine((v) => v >= 0, 'must be ≥ 0') }),
+  z.object({ kind: z.literal('peak') }),
+]);
+
+export const coefficients = z
+  .array(finite)
+  .min(1)
+  .max(MAX_ORDER + 1);
+
+/** Order of a stored root list: conjugates and multiplicities counted. */
+export function orderOf(list: readonly { im: number; multiplicity: number }[]): number {
+  return list.reduce((n, r) => n + r.multiplicity * (r.im > 0 ? 2 : 1), 0);
+}
+
+/** Adds an issue for each root list whose order exceeds MAX_ORDER. */
+export function checkOrders(
+  d: { zeros: z.infer<typeof roots>; poles: z.infer<typeof roots> },
+  ctx: z.RefinementCtx,
+) {
+  for (const kind of ['zeros', 'poles'] as const) {
+    const n = orderOf(d[kind]);
+    if (n > MAX_ORDER) {
+      ctx.addIssue({ code: 'custom', path: [kind], message: `order ${n} exceeds the limit of ${MAX_ORDER}` });
+    }
+  }
+}

@@ -1,0 +1,29 @@
+/**
+ * Design file version 2 (current): version 1 plus the designer that produced the design and the view
+ * settings worth sharing. The field-by-field description is in src/share/README.md.
+ */
+import { z } from 'zod';
+import { checkOrders, coefficients, gainRule, plainText, roots, sampleRate } from './common.ts';
+import { designerSpec } from './designer.ts';
+import { MAX_NAME_CHARS, MAX_TEXT_CHARS } from './limits.ts';
+import { sharedView } from './view.ts';
+
+export const designDocumentV2 = z
+  .object({
+    polewright: z.literal('design'),
+    version: z.literal(2),
+    name: plainText(MAX_NAME_CHARS).default(''),
+    note: plainText(MAX_TEXT_CHARS).default(''),
+    sampleRate,
+    zeros: roots,
+    poles: roots,
+    gainRule,
+    typed: z.object({ b: coefficients, a: coefficients, text: plainText(MAX_TEXT_CHARS) }).exactOptional(),
+    designer: designerSpec.exactOptional(),
+    // EXTENSION POINT: `mask` (src/core/mask.ts) and `implementation` (src/core/fixed/) join here as
+    // `.exactOptional()` fields once those types exist; add their keys to link/dictionary.ts too.
+    view: sharedView.exactOptional(),
+  })
+  .superRefine(checkOrders);
+
+export type DesignDocumentV2 = z.output<typeof designDocumentV2>;
