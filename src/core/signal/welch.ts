@@ -1,0 +1,188 @@
+/**
+ * Averaged, windowed power spectrum by Welch's method (P. D. Welch, IEEE Trans. Audio Electroacoust. 15(2),
+ * 1967), one-sided, with the segment, overlap, window, detrending and both scalings of
+ * scipy.signal.welch: 'density' in units²/Hz (scale 1/(fs·Σw²)) and 'spectrum' in units² (scale 1/(Σw)²,
+ * so a sinusoid of amplitude A centred on a bin reads A²/2). The accumulator takes the signal in pieces of
+ * any size and gives the same numbers as one call on the whole signal.
+ */
+import { realFft } from './fft.ts';
+import { makeWindow, windowFigures, type WindowName } from './windows.ts';
+
+/** 'density': power spectral density in units²/Hz; 'spectrum': power per bin in units² (sinusoid → A²/2). */
+export type SpectrumScaling = 'density' | 'spectrum';
+
+/** Options as scipy.signal.welch names them; defaults are scipy's. */
+export interface WelchOptions {
+  /** Samples per segment (default 256). */
+  nperseg?: number;
+  /** Samples shared by consecutive segments (default floor(nperseg / 2)). */
+  noverlap?: number;
+  /** Transform length, at least nperseg; zero-pads each segment (default nperseg). Any length works. */
+  nfft?: number;
+  /** Window (default 'hann', periodic). */
+  window?: WindowName;
+  /** Default 'density'. */
+  scaling?: SpectrumScaling;
+  /** Subtract each segment's mean ('constant', the default) or not ('none'). */
+  detrend?: 'constant' | 'none';
+}
+
+/** A one-sided averaged spectrum. */
+export interface WelchResult {
+  /** Bin frequencies in Hz, 0 to fs/2. */
+  frequencies: Float64Array;
+  /** Power per bin in units²/Hz ('density') or units² ('spectrum'). */
+  power: Float64Array;
+  scaling: SpectrumScaling;
+  sampleRate: number;
+  window: WindowName;
+  nperseg: number;
+  noverlap: number;
+  nfft: number;
+  /** Segments averaged (0 when the signal was shorter than one segment). */
+  segments: number;
+  /** fs / nfft, in Hz. */
+  binWidthHz: number;
+  /** Equivalent noise bandwidth of the window, in Hz. */
+  enbwHz: number;
+}
+
+/** Settled options, with everything checked. */
+function settle(sampleRate: number, o: WelchOptions): Required<WelchOptions> {
+  const nperseg = o.nperseg ?? 256;
+  if (!(Number.isInteger(nperseg) && nperseg >= 1))
+    throw new Error(`welch: nperseg ${nperseg}; a whole number ≥ 1`);
+  const noverlap = o.noverlap ?? Math.floor(nperseg / 2);
+  if (!(Number.isInteger(noverlap) && noverlap >= 0 && noverlap < nperseg)) {
+    throw new Error(`welch: noverlap ${noverlap}; a whole number from 0 to nperseg − 1 = ${nperseg - 1}`);
+  }
+  const nfft = o.nfft ?? nperseg;
+  if (!(Number.isInteger(nfft) && nfft >= nperseg)) throw new Error(`welch: nfft ${nfft}; at least nperseg`);
+  if (!(sampleRate > 0)) throw new Error(`welch: sample rate ${sampleRate} Hz; it must be positive`);
+  return {
+    nperseg,
+    noverlap,
+    nfft,
+    window: o.window ?? 'hann',
+    scaling: o.scaling ?? 'density',
+    detrend: o.detrend ?? 'constant',
+  };
+}
+
+/** Welch's average fed piece by piece: push the signal in any split, then read the result. */
+export class WelchAccumulator {
+  private readonly o: Required<WelchOptions>;
+  private readonly sampleRate: number;
+  private readonly win: Float64Array;
+  private readonly segment: Float64Array;
+  private readonly work: Float64Array;
+  private readonly re: Float64Array;
+  private readonly im: Float64Array;
+  private readonly sum: Float64Array;
+  private fill = 0;
+  private segments = 0;
+
+  constructor(sampleRate: number, options: WelchOptions = {}) {
+    this.o = settle(sampleRate, options);
+    this.sampleRate = sampleRate;
+    this.win = makeWindow(this.o.window, this.o.nperseg);
+    this.segment = new Float64Array(this.o.nperseg);
+    this.work = new Float64Array(this.o.nfft);
+    const bins = (this.o.nfft >> 1) + 1;
+    this.re = new Float64Array(bins);
+    this.im = new Float64Array(bins);
+    this.sum = new Float64Array(bins);
+  }
+
+  /** Adds samples; every completed segment is transformed at once, so memory stays one segment. */
+  push(x: ArrayLike<number>): void {
+    const { nperseg, noverlap } = this.o;
+    const seg = this.segment;
+    for (let i = 0; i < x.length;) {
+      const take = Math.min(nperseg - this.fill, x.length - i);
+      for (let k = 0; k < take; k++) seg[this.fill + k] = x[i + k]!;
+      this.fill += take;
+      i += take;
+      if (this.fill === nperseg) {
+        this.addSegment();
+        seg.copyWithin(0, nperseg - noverlap, nperseg);
+        this.fill = noverlap;
+      }
+    }
+  }
+
+  private addSegment(): void {
+    const { nperseg, detrend } = this.o;
+    let mean = 0;
+    if (detrend === 'constant') {
+      for (let k = 0; k < nperseg; k++) mean += this.segment[k]!;
+      mean /= nperseg;
+    }
+    for (let k = 0; k < nperseg; k++) this.work[k] = (this.segment[k]! - mean) * this.win[k]!;
+    realFft(this.work, this.re, this.im);
+    for (let k = 0; k < this.sum.length; k++)
+      this.sum[k] = this.sum[k]! + this.re[k]! ** 2 + this.im[k]! ** 2;
+    this.segments++;
+  }
+
+  /** The averaged one-sided spectrum of everything pushed so far (zeros when no segment is complete). */
+  result(): WelchResult {
+    const { nfft, nperseg, noverlap, window, scaling } = this.o;
+    const fs = this.sampleRate;
+    let sw = 0;
+    let sw2 = 0;
+    for (let k = 0; k < nperseg; k++) {
+      sw += this.win[k]!;
+      sw2 += this.win[k]! ** 2;
+    }
+    const scale = scaling === 'density' ? 1 / (fs * sw2) : 1 / (sw * sw);
+    const bins = this.sum.length;
+    const power = new Float64Array(bins);
+    const frequencies = new Float64Array(bins);
+    // One-sided: every bin but DC (and Nyquist, when nfft is even) folds in its negative-frequency twin.
+    const lastDoubled = nfft % 2 === 0 ? bins - 2 : bins - 1;
+    for (let k = 0; k < bins; k++) {
+      const fold = k >= 1 && k <= lastDoubled ? 2 : 1;
+      power[k] = this.segments ? (fold * scale * this.sum[k]!) / this.segments : 0;
+      frequencies[k] = (k * fs) / nfft;
+    }
+    const binWidthHz = fs / nfft;
+    return {
+      frequencies,
+      power,
+      scaling,
+      sampleRate: fs,
+      window,
+      nperseg,
+      noverlap,
+      nfft,
+      segments: this.segments,
+      binWidthHz,
+      enbwHz: (windowFigures(this.win).enbwBins * fs) / nperseg,
+    };
+  }
+}
+
+/**
+ * Welch's averaged spectrum of x at sample rate fs (Hz). As scipy does, a signal shorter than nperseg is
+ * taken as one segment of its own length.
+ */
+export function welch(x: ArrayLike<number>, sampleRate: number, options: WelchOptions = {}): WelchResult {
+  let o = options;
+  const nperseg = options.nperseg ?? 256;
+  if (x.length < nperseg && x.length > 0) {
+    const noverlap = Math.min(options.noverlap ?? Math.floor(x.length / 2), x.length - 1);
+    o = { ...options, nperseg: x.length, noverlap, nfft: Math.max(options.nfft ?? x.length, x.length) };
+  }
+  const acc = new WelchAccumulator(sampleRate, o);
+  acc.push(x);
+  return acc.result();
+}
+
+/** 10·log10 of a power, floored at floorDb (default −300 dB) so zeros stay finite on a plot. */
+export function powerToDb(power: Float64Array, floorDb = -300): Float64Array {
+  const out = new Float64Array(power.length);
+  for (let k = 0; k < power.length; k++)
+    out[k] = power[k]! > 0 ? Math.max(floorDb, 10 * Math.log10(power[k]!)) : floorDb;
+  return out;
+}
