@@ -9,6 +9,8 @@ export { responseZpk, wrapPhase } from './response/zpkResponse.ts';
 export type { FrequencyResponse } from './response/zpkResponse.ts';
 export { responseAt, evalZpkAt } from './response/pointValue.ts';
 export { GROUP_DELAY_CIRCLE_SNAP } from './response/kernel.ts';
+export { surfaceLevelsDb, SURFACE_FLOOR_DB, SURFACE_CEILING_DB } from './response/surface.ts';
+export type { PlaneRect } from './response/surface.ts';
 
 /** Response of a cascade of second-order sections at each ω (radians per sample), via each section's roots. */
 export function responseSections(sections: readonly Section[], omega: Float64Array): FrequencyResponse {

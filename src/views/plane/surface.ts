@@ -1,12 +1,9 @@
 /**
  * |H(z)| in dB over a rectangle of the plane, for the shading under the roots. Every value comes from the
- * engine (evalZpkAt); this module only walks the grid and writes into a typed array.
+ * engine (surfaceLevelsDb); this module schedules the work and keeps the arrays.
  */
 import type { Zpk } from '../../core/types.ts';
-import { evalZpkAt } from '../../core/response.ts';
-
-/** Floor for |H| before taking dB, so a point on a zero gives a finite (very low) level. */
-const MAGNITUDE_FLOOR = 1e-12;
+import { surfaceLevelsDb } from '../../core/response.ts';
 
 export interface SurfaceRect {
   /** Real part at the left and right edges. */
@@ -30,15 +27,7 @@ export function surfaceRows(
   j1: number,
   db: Float32Array,
 ): void {
-  const dx = (rect.re1 - rect.re0) / nx;
-  const dy = (rect.imBottom - rect.imTop) / ny;
-  for (let j = j0; j < j1; j++) {
-    const im = rect.imTop + (j + 0.5) * dy;
-    for (let i = 0; i < nx; i++) {
-      const h = evalZpkAt(zpk, rect.re0 + (i + 0.5) * dx, im);
-      db[j * nx + i] = 20 * Math.log10(Math.max(MAGNITUDE_FLOOR, Math.hypot(h.re, h.im)));
-    }
-  }
+  surfaceLevelsDb(zpk, rect, nx, ny, j0, j1, db);
 }
 
 /** The whole nx × ny grid (see surfaceRows), into `out` when it is large enough. */
