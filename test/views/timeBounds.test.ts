@@ -6,6 +6,7 @@ import {
   TIME_SAMPLES_MIN,
 } from '../../src/views/time/bounds.ts';
 import { timeLayout, timeUnit } from '../../src/views/time/layout.ts';
+import { sampleAfterKey } from '../../src/views/time/sampleKeys.ts';
 
 describe('time view fields', () => {
   it('accepts a whole number of samples within bounds and explains anything else', () => {
@@ -35,5 +36,16 @@ describe('time view fields', () => {
     expect(r.right).toBeLessThan(500);
     expect(r.bottom).toBeLessThan(300);
     expect(r.top).toBeLessThan(r.bottom);
+  });
+});
+
+describe('sampleAfterKey', () => {
+  it('moves one sample per arrow, ten with Shift, and stays within 0…n−1', () => {
+    expect(sampleAfterKey('ArrowRight', false, 5, 256)).toBe(6);
+    expect(sampleAfterKey('ArrowLeft', true, 5, 256)).toBe(0);
+    expect(sampleAfterKey('PageUp', false, 250, 256)).toBe(255);
+    expect(sampleAfterKey('End', false, null, 256)).toBe(255);
+    expect(sampleAfterKey('ArrowRight', false, null, 256)).toBe(1);
+    expect(sampleAfterKey('x', false, 3, 256)).toBeUndefined();
   });
 });

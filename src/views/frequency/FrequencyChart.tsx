@@ -2,10 +2,11 @@
  * The frequency plots (magnitude on top, phase and group delay below) on one shared frequency axis, with
  * the cross-hair (pointer or arrow keys) and the selected root's marker.
  */
-import { useMemo, useState, type KeyboardEvent, type PointerEvent } from 'react';
+import { useMemo, useState } from 'react';
 import { selectResponse, selectZpk } from '../../store/derived.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 import { Axis } from '../chart/Axis.tsx';
+import { CursorArea } from '../chart/CursorArea.tsx';
 import { fromPixel, toPixel, toPixels, type AxisMap } from '../chart/pixels.ts';
 import { formatHzTick, linearTicks, logTicks } from '../chart/ticks.ts';
 import { useSettledRange } from '../chart/useSettledRange.ts';
@@ -105,21 +106,6 @@ export function FrequencyChart({ width, height, reading, onCursor, marker }: Fre
       }))
     : [];
 
-  const pointerHz = (e: PointerEvent<SVGRectElement>) => {
-    const box = e.currentTarget.ownerSVGElement?.getBoundingClientRect();
-    if (!box) return null;
-    return Math.min(d1, Math.max(d0, fromPixel(xMap, e.clientX - box.left)));
-  };
-  const onKeyDown = (e: KeyboardEvent<SVGRectElement>) => {
-    const steps = cursorStepsForKey(e.key, e.shiftKey);
-    if (steps === null) {
-      if (e.key === 'Escape') onCursor(null);
-      return;
-    }
-    e.preventDefault();
-    onCursor(reading ? stepHz(reading.hz, [d0, d1], axis, steps) : startHz([d0, d1], axis));
-  };
-
   if (width < 80 || height < 80) return <svg width={width} height={height} />;
   const bottom = layout.axisY;
   const markerX = marker ? toPixel(xMap, marker.hz) : NaN;
@@ -156,41 +142,21 @@ export function FrequencyChart({ width, height, reading, onCursor, marker }: Fre
           <RootMarker x={markerX} hz={marker.hz} kind={marker.kind} rects={rects} />
         ) : null}
         {reading ? <Crosshair x={toPixel(xMap, reading.hz)} rects={rects} points={points} /> : null}
-        <rect
-          className="pw-plot-area"
-          x={area.left}
-          y={area.top}
-          width={area.right - area.left}
-          height={bottom - area.top}
-          fill="transparent"
-          tabIndex={0}
-          role="slider"
-          aria-label="Cross-hair frequency"
-          aria-valuemin={d0}
-          aria-valuemax={d1}
-          aria-valuenow={reading ? reading.hz : undefined}
-          aria-valuetext={reading ? formatHz(reading.hz) : 'off'}
-          onPointerMove={(e) => onCursor(pointerHz(e))}
-          onPointerDown={(e) => {
-            e.currentTarget.focus();
-            onCursor(pointerHz(e));
+        <CursorArea
+          rect={{ left: area.left, right: area.right, top: area.top, bottom }}
+          label="Cross-hair frequency"
+          min={d0}
+          max={d1}
+          value={reading ? reading.hz : null}
+          valueText={reading ? formatHz(reading.hz) : 'off'}
+          valueAt={(px) => Math.min(d1, Math.max(d0, fromPixel(xMap, px)))}
+          keyTarget={(key, shift, from) => {
+            const steps = cursorStepsForKey(key, shift);
+            if (steps === null) return undefined;
+            return from === null ? startHz([d0, d1], axis) : stepHz(from, [d0, d1], axis, steps);
           }}
-          onPointerLeave={(e) => {
-            if (document.activeElement !== e.currentTarget) onCursor(null);
-          }}
-          onFocus={() => {
-            if (!reading) onCursor(startHz([d0, d1], axis));
-          }}
-          onBlur={() => onCursor(null)}
-          onKeyDown={onKeyDown}
-        />
-        <rect
-          className="pw-focus-ring"
-          x={area.left - 2}
-          y={area.top - 2}
-          width={area.right - area.left + 4}
-          height={bottom - area.top + 4}
-          rx={3}
+          start={startHz([d0, d1], axis)}
+          onChange={onCursor}
         />
       </svg>
       <PlotTitles layout={layout} second={second} onSecond={setSecond} />

@@ -2,10 +2,11 @@
  * The time plot: input (faint) and output (bold) against the sample index, seconds on a second axis, the
  * slowest pole's decay envelope dashed, and a cross-hair that reads one sample (pointer or arrow keys).
  */
-import { useId, useMemo, type KeyboardEvent, type PointerEvent } from 'react';
+import { useId, useMemo } from 'react';
 import { selectTimeInput, selectTimeOutput } from '../../store/derived.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 import { Axis } from '../chart/Axis.tsx';
+import { CursorArea } from '../chart/CursorArea.tsx';
 import { Grid } from '../chart/Grid.tsx';
 import { fromPixel, toPixel, toPixels, type AxisMap } from '../chart/pixels.ts';
 import { finiteExtent, niceRange, type Range } from '../chart/range.ts';
@@ -13,8 +14,9 @@ import { linearTicks } from '../chart/ticks.ts';
 import { useSettledRange } from '../chart/useSettledRange.ts';
 import { samplePaths } from './samplePaths.ts';
 import { timeLayout, timeUnit } from './layout.ts';
-import { formatNumber } from '../shared/format.ts';
 import type { EnvelopeResult } from './useEnvelope.ts';
+import { sampleAfterKey } from './sampleKeys.ts';
+import { OffScaleNote, SampleCrosshair } from './TimeOverlays.tsx';
 
 export interface TimeChartProps {
   width: number;
@@ -46,7 +48,6 @@ export function TimeChart({ width, height, cursor, onCursor, envelope, fitTail }
   const fs = useWorkbench((s) => s.design.sampleRate);
   const style = useWorkbench((s) => s.view.timeStyle);
   const kind = useWorkbench((s) => s.view.timeInput);
-  const hold = useWorkbench((s) => s.view.holdScale);
   const clipId = `pw-clip-${useId().replace(/:/g, '')}`;
   const n = y.length;
 
@@ -79,7 +80,7 @@ export function TimeChart({ width, height, cursor, onCursor, envelope, fitTail }
     const size = Math.max(Math.abs(data[0]), Math.abs(data[1]));
     return niceRange(data[0], data[1], Math.max(MIN_SPAN_ABSOLUTE, MIN_SPAN_RELATIVE * size), 5);
   }, [data]);
-  const range = useSettledRange(`${kind}:${fitTail}`, data, wanted, hold);
+  const range = useSettledRange(`${kind}:${fitTail}`, data, wanted, false);
   const yMap = useMemo<AxisMap>(
     () => ({ kind: 'linear', d0: range[0], d1: range[1], p0: rect.bottom, p1: rect.top }),
     [range, rect],
@@ -117,31 +118,6 @@ export function TimeChart({ width, height, cursor, onCursor, envelope, fitTail }
     const b = samplePaths(px, toPixels(yMap, down), 0, rect, 'line');
     return a.line + b.line;
   }, [envelope, n, px, yMap, rect]);
-
-  const pointerSample = (e: PointerEvent<SVGRectElement>) => {
-    const box = e.currentTarget.ownerSVGElement?.getBoundingClientRect();
-    if (!box) return null;
-    return Math.min(n - 1, Math.max(0, Math.round(fromPixel(xMap, e.clientX - box.left))));
-  };
-  const onKeyDown = (e: KeyboardEvent<SVGRectElement>) => {
-    const step = e.shiftKey ? 10 : 1;
-    const from = cursor ?? 0;
-    const moves: Record<string, number> = {
-      ArrowRight: from + step,
-      ArrowUp: from + step,
-      ArrowLeft: from - step,
-      ArrowDown: from - step,
-      PageUp: from + Math.max(10, Math.round(n / 20)),
-      PageDown: from - Math.max(10, Math.round(n / 20)),
-      Home: 0,
-      End: n - 1,
-    };
-    if (e.key === 'Escape') return onCursor(null);
-    const to = moves[e.key];
-    if (to === undefined) return;
-    e.preventDefault();
-    onCursor(Math.min(n - 1, Math.max(0, to)));
-  };
 
   if (width < 80 || height < 60 || n === 0) return <svg width={width} height={height} />;
   const cx = cursor === null ? NaN : toPixel(xMap, cursor);
@@ -197,86 +173,20 @@ export function TimeChart({ width, height, cursor, onCursor, envelope, fitTail }
         title={`Time (${seconds.unit})`}
       />
       {cursor !== null ? (
-        <g aria-hidden="true">
-          <path className="pw-crosshair" d={`M${Math.round(cx) + 0.5} ${rect.top}V${rect.bottom}`} />
-          <circle
-            className="pw-crosshair-dot"
-            cx={cx}
-            cy={clampY(toPixel(yMap, x[cursor] ?? 0), rect)}
-            r={3}
-            fill="var(--pw-input)"
-          />
-          <circle
-            className="pw-crosshair-dot"
-            cx={cx}
-            cy={clampY(toPixel(yMap, y[cursor] ?? 0), rect)}
-            r={3.5}
-            fill="var(--pw-output)"
-          />
-        </g>
+        <SampleCrosshair x={cx} yMap={yMap} input={x[cursor] ?? 0} output={y[cursor] ?? 0} rect={rect} />
       ) : null}
-      <rect
-        className="pw-plot-area"
-        x={rect.left}
-        y={rect.top}
-        width={rect.right - rect.left}
-        height={rect.bottom - rect.top}
-        fill="transparent"
-        tabIndex={0}
-        role="slider"
-        aria-label="Sample under the cross-hair"
-        aria-valuemin={0}
-        aria-valuemax={n - 1}
-        aria-valuenow={cursor ?? undefined}
-        aria-valuetext={cursor === null ? 'off' : `sample ${cursor}`}
-        onPointerMove={(e) => onCursor(pointerSample(e))}
-        onPointerDown={(e) => {
-          e.currentTarget.focus();
-          onCursor(pointerSample(e));
-        }}
-        onPointerLeave={(e) => {
-          if (document.activeElement !== e.currentTarget) onCursor(null);
-        }}
-        onFocus={() => {
-          if (cursor === null) onCursor(0);
-        }}
-        onBlur={() => onCursor(null)}
-        onKeyDown={onKeyDown}
-      />
-      <rect
-        className="pw-focus-ring"
-        x={rect.left - 2}
-        y={rect.top - 2}
-        width={rect.right - rect.left + 4}
-        height={rect.bottom - rect.top + 4}
-        rx={3}
+      <CursorArea
+        rect={rect}
+        label="Sample under the cross-hair"
+        min={0}
+        max={n - 1}
+        value={cursor}
+        valueText={cursor === null ? 'off' : `sample ${cursor}`}
+        valueAt={(px) => Math.min(n - 1, Math.max(0, Math.round(fromPixel(xMap, px))))}
+        keyTarget={(key, shift, from) => sampleAfterKey(key, shift, from, n)}
+        start={0}
+        onChange={onCursor}
       />
     </svg>
   );
-}
-
-/** A label at the plot's edge for the first output sample when the axis was fitted without it. */
-function OffScaleNote(p: {
-  x: number;
-  value: number | undefined;
-  range: Range;
-  rect: { top: number; bottom: number };
-}) {
-  const v = p.value;
-  if (v === undefined || (v >= p.range[0] && v <= p.range[1])) return null;
-  const up = v > p.range[1];
-  return (
-    <text
-      className="pw-offscale"
-      x={p.x + 5}
-      y={up ? p.rect.top + 11 : p.rect.bottom - 4}
-      data-testid="time-offscale"
-    >
-      {`${up ? '↑' : '↓'} y[0] = ${formatNumber(v, 4)}`}
-    </text>
-  );
-}
-
-function clampY(y: number, rect: { top: number; bottom: number }): number {
-  return Math.min(rect.bottom, Math.max(rect.top, y));
 }
