@@ -15,6 +15,9 @@ import type { Design } from './design.ts';
 import type { ViewSettings } from './view.ts';
 import type { WorkbenchState } from './store.ts';
 import { memoLast } from './memo.ts';
+import { evaluateMask, type MaskResult } from '../core/mask.ts';
+import { runDesigner, type DesignerSpec } from '../core/design/index.ts';
+import { differsFromDesigner } from './designer.ts';
 
 /** Highest order for which the closed-form time response is listed (partial fractions grow ill-conditioned). */
 export const CLOSED_FORM_MAX_ORDER = 24;
@@ -93,3 +96,21 @@ export const selectOrder = (s: WorkbenchState): number => {
 };
 export const selectClosedForm = (s: WorkbenchState): ClosedForm | null =>
   closedFormOf(selectZpk(s), selectOrder(s), s.view.timeInput, s.view.sineHz, s.design.sampleRate);
+
+const maskResultOf = memoLast((mask: Design['mask'], zpk: Zpk, fs: number): MaskResult | null =>
+  mask ? evaluateMask(mask, zpk, fs) : null,
+);
+/** The mask's verdict on the current roots (per region and overall, margins in dB), or null without a mask. */
+export const selectMaskResult = (s: WorkbenchState): MaskResult | null =>
+  maskResultOf(s.design.mask, zpkOf(s.design), s.design.sampleRate);
+
+const designerOutputOf = memoLast((spec: DesignerSpec | undefined) => (spec ? runDesigner(spec) : null));
+const designerStatusOf = memoLast((design: Design) =>
+  design.designer
+    ? { spec: design.designer, editedByHand: differsFromDesigner(design, designerOutputOf(design.designer)) }
+    : null,
+);
+/** The designer behind the design and whether the roots were edited by hand since it ran, or null. */
+export const selectDesignerStatus = (
+  s: WorkbenchState,
+): { spec: DesignerSpec; editedByHand: boolean } | null => designerStatusOf(s.design);

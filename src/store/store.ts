@@ -10,6 +10,7 @@ import { emptyDesign, type Design, type GainRule, type RootRef, type TypedCoeffi
 import { closeGesture, emptyHistory, recordEdit, type History } from './history.ts';
 import * as edits from './rootEdits.ts';
 import { defaultView, type ViewSettings, type ViewState } from './view.ts';
+import { designerActions, type DesignerActions } from './designer.ts';
 
 export interface DesignActions {
   moveRoot(ref: RootRef, re: number, im: number): void;
@@ -49,7 +50,8 @@ export interface ViewActions {
   setDragging(dragging: boolean): void;
 }
 
-export interface WorkbenchState extends ViewState, DesignActions, HistoryActions, ViewActions {
+export interface WorkbenchState
+  extends ViewState, DesignActions, HistoryActions, ViewActions, DesignerActions {
   design: Design;
   history: History;
 }
@@ -103,6 +105,7 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
         set({ selection: null });
       },
       setName: (name) => edit((d) => (d.name === name ? d : { ...d, name })),
+      ...designerActions(get, edit, () => set({ selection: null })),
 
       beginGesture: () => {
         const { history, design } = get();
