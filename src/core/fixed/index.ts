@@ -1,0 +1,33 @@
+/** Fixed-point implementation: settings, Q formats, quantization, word-length search, bit-exact simulation. */
+export {
+  DEFAULT_IMPLEMENTATION,
+  MIN_WORD_LENGTH,
+  MAX_WORD_LENGTH,
+  MAX_ACCUMULATOR_BITS,
+  validateSettings,
+} from './settings.ts';
+export type { ImplementationSettings, Structure, Rounding, Overflow, FeedbackSign } from './settings.ts';
+export { qName, codeRange, quantizeValue, codeValue, autoFractionBits } from './qformat.ts';
+export type { QFormat } from './qformat.ts';
+export { quantizeCascade, storedValues } from './quantize.ts';
+export type { FixedSection, QuantizedCoefficients } from './quantize.ts';
+export { buildImplementation, cascadeFor, quantizedResponse } from './implementation.ts';
+export type { Implementation, SectionRoots } from './implementation.ts';
+export { smallestWordLength } from './wordSearch.ts';
+export type { QuantizedCheck, WordLengthSearch, WordLengthTrial } from './wordSearch.ts';
+export { makeArith, makeBigArith, DOUBLE_PATH_MAX_BITS } from './arith.ts';
+export type { Arith, DataPath } from './arith.ts';
+export { FixedCascade } from './kernel.ts';
+export type { OverflowEvent, OverflowPlace } from './kernel.ts';
+export {
+  simulateFixed,
+  runFixedCodes,
+  quantizeInput,
+  fixedCascadeOf,
+  MAX_OVERFLOW_EVENTS,
+} from './simulate.ts';
+export type { FixedSimulation } from './simulate.ts';
+export { detectLimitCycle, LIMIT_CYCLE_MAX_SAMPLES } from './limitCycle.ts';
+export type { LimitCycleReport } from './limitCycle.ts';
+export { inputSignal, DEFAULT_SIGNAL_AMPLITUDE } from './signal.ts';
+export type { SignalSpec } from './signal.ts';
