@@ -1,31 +1,24 @@
-/** The side column: stability at the top, then entry, gain, per-root read-outs and the system in every form. */
+/** The side column: stability at the top, then one page at a time (System, and the pages features add). */
 import './side.css';
-import { useCallback, useRef, useState } from 'react';
-import { SystemEntry } from './entry/SystemEntry.tsx';
-import { GainRuleControl } from './GainRuleControl.tsx';
-import { RootTable } from './RootTable.tsx';
+import { useState } from 'react';
 import { StabilityBanner } from './StabilityBanner.tsx';
-import { SystemForms } from './SystemForms.tsx';
+import { SideTabBar } from './SideTabBar.tsx';
+import { SIDE_PAGES } from './sideTabs.ts';
 
 export function SideColumn() {
-  const [text, setText] = useState('');
-  const area = useRef<HTMLTextAreaElement>(null);
-  // "Edit" on a written-out form: put its text in the box and bring the box into view, ready to change.
-  const edit = useCallback((t: string) => {
-    setText(t);
-    requestAnimationFrame(() => {
-      area.current?.scrollIntoView({ block: 'nearest' });
-      area.current?.focus();
-    });
-  }, []);
+  const [current, setCurrent] = useState(SIDE_PAGES[0]!.id);
+  const page = SIDE_PAGES.find((p) => p.id === current) ?? SIDE_PAGES[0]!;
   return (
     <div className="pw-panel pw-side">
       <StabilityBanner />
-      <div className="pw-side-scroll">
-        <SystemEntry text={text} setText={setText} area={area} />
-        <GainRuleControl />
-        <RootTable />
-        <SystemForms onEdit={edit} />
+      {SIDE_PAGES.length > 1 && <SideTabBar pages={SIDE_PAGES} current={page.id} onSelect={setCurrent} />}
+      <div
+        className="pw-side-scroll"
+        role="tabpanel"
+        id={`pw-side-page-${page.id}`}
+        aria-labelledby={`pw-side-tab-${page.id}`}
+      >
+        <page.Page />
       </div>
     </div>
   );

@@ -1,0 +1,27 @@
+/** The "System" page of the side column: entry, gain rule, per-root read-outs and the system written out. */
+import { useCallback, useRef, useState } from 'react';
+import { SystemEntry } from './entry/SystemEntry.tsx';
+import { GainRuleControl } from './GainRuleControl.tsx';
+import { RootTable } from './RootTable.tsx';
+import { SystemForms } from './SystemForms.tsx';
+
+export function SystemPage() {
+  const [text, setText] = useState('');
+  const area = useRef<HTMLTextAreaElement>(null);
+  // "Edit" on a written-out form: put its text in the box and bring the box into view, ready to change.
+  const edit = useCallback((t: string) => {
+    setText(t);
+    requestAnimationFrame(() => {
+      area.current?.scrollIntoView({ block: 'nearest' });
+      area.current?.focus();
+    });
+  }, []);
+  return (
+    <>
+      <SystemEntry text={text} setText={setText} area={area} />
+      <GainRuleControl />
+      <RootTable />
+      <SystemForms onEdit={edit} />
+    </>
+  );
+}

@@ -1,0 +1,19 @@
+/**
+ * The side column's pages. Each feature adds its page here (one line); the stability banner stays above
+ * them all. Order is the order of the tab bar.
+ */
+import type { ComponentType } from 'react';
+import { SystemPage } from './SystemPage.tsx';
+
+export interface SidePage {
+  id: string;
+  /** Tab label: short, our own words. */
+  label: string;
+  /** What the page is for, shown as the tab's tooltip. */
+  title: string;
+  Page: ComponentType;
+}
+
+export const SIDE_PAGES: SidePage[] = [
+  { id: 'system', label: 'System', title: 'Type a system, set the gain, read each root', Page: SystemPage },
+];
