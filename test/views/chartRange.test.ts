@@ -29,6 +29,11 @@ describe('dbRange', () => {
     expect(lo).toBe(-40);
     expect(hi).toBe(10);
   });
+  it('does not add an empty step above a peak that barely passes 0 dB', () => {
+    const db = Float64Array.of(0.01, -3, -Infinity);
+    expect(dbRange(db)[1]).toBe(0);
+    expect(dbRange(Float64Array.of(0.8, -30))[1]).toBeGreaterThanOrEqual(0.8); // a real overshoot still fits
+  });
   it('keeps a flat response readable (at least 12 dB tall)', () => {
     const [lo, hi] = dbRange(Float64Array.of(0, 0, 0));
     expect(hi - lo).toBeGreaterThanOrEqual(12);

@@ -8,6 +8,11 @@ export type Range = readonly [number, number];
 
 /** Deepest level shown below the highest, dB: deeper notches are clipped so they don't flatten the plot. */
 export const DB_FLOOR_BELOW_PEAK = 120;
+/**
+ * A peak this little above a multiple of 10 dB is ranged as if it were on it (the curve overshoots the frame
+ * by under a pixel), so a response peaking at +0.01 dB does not get a whole empty 20 dB step on top.
+ */
+export const DB_TOP_SNAP = 0.5;
 /** Smallest dB span shown, so a flat response isn't blown up to fill the plot with rounding noise. */
 export const DB_MIN_SPAN = 12;
 /** The range shrinks once the data covers less than this fraction of it (hysteresis against jitter). */
@@ -45,8 +50,9 @@ export function niceRange(lo: number, hi: number, minSpan: number, ticks = 5): R
 export function dbExtent(magnitudeDb: ArrayLike<number>): Range {
   const ext = finiteExtent(magnitudeDb);
   if (!ext) return [-DB_FLOOR_BELOW_PEAK, 0];
-  const top = ext[1];
-  let bottom = Math.max(ext[0], top - DB_FLOOR_BELOW_PEAK);
+  const tens = Math.floor(ext[1] / 10) * 10;
+  const top = ext[1] - tens < DB_TOP_SNAP ? tens : ext[1];
+  let bottom = Math.min(top, Math.max(ext[0], top - DB_FLOOR_BELOW_PEAK));
   for (let i = 0; i < magnitudeDb.length; i++) {
     if (magnitudeDb[i] === -Infinity) {
       bottom = top - DB_FLOOR_BELOW_PEAK;
