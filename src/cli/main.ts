@@ -3,16 +3,18 @@ import { UsageError } from './args.ts';
 import { runAnalyze } from './commands/analyze.ts';
 import { runResponse } from './commands/response.ts';
 import { runSimulate } from './commands/simulate.ts';
+import { runDesign } from './commands/design.ts';
 
 export interface CliIo {
   stdout: (s: string) => void;
   stderr: (s: string) => void;
 }
 
-const COMMANDS: Record<string, (argv: string[], io: CliIo) => number> = {
+const COMMANDS: Record<string, (argv: string[], io: CliIo) => number | Promise<number>> = {
   analyze: runAnalyze,
   response: runResponse,
   simulate: runSimulate,
+  design: runDesign,
 };
 
 export const USAGE = `polewright — digital filter analysis on the command line
@@ -20,7 +22,10 @@ export const USAGE = `polewright — digital filter analysis on the command line
 usage:
   polewright analyze  <design> [--json]
   polewright response <design> [--points N] [--log] [--json]
-  polewright simulate <design> [--input impulse|step|sine:<Hz>|<file.csv>] [--samples N] [--json]
+  polewright design   <kind> [parameters] [--json] [--out design.json]   (kinds and flags: polewright design --help)
+  polewright simulate <design> [--input impulse|step|sine:<Hz>|<file.csv>|<file.wav>] [--samples N] [--json]
+                      [--output <file.wav|file.csv>] [--output-format u8|i16|i24|i32|f32|f64]
+                      [--channel N] [--input-rate <Hz>]
 
 <design> is a design file saved from the workbench, or one of:
   --b "1,0,-1" --a "1,-1.6,0.64"      coefficients of z^0, z^-1, z^-2, ...
@@ -42,7 +47,7 @@ export async function main(argv: string[], io: CliIo): Promise<number> {
     return 2;
   }
   try {
-    return run(rest, io);
+    return await run(rest, io);
   } catch (e) {
     if (e instanceof UsageError) {
       io.stderr(`polewright ${command}: ${e.message}\n`);

@@ -1,75 +1,289 @@
-/** `polewright simulate`: the filter's output for an impulse, a step, a sinusoid or samples from a CSV file. */
+/**
+ * `polewright simulate`: the filter's output for an impulse, a step, a sinusoid, or a recording (CSV/TSV
+ * or WAV). With --output the recording is filtered as a stream into a WAV or CSV file, so long files use
+ * bounded memory; without it the output samples are printed.
+ */
 import { readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
 import { filterSections } from '../../core/time.ts';
 import { makeImpulse, makeSine, makeStep } from '../../core/signals.ts';
 import { zpkToSections } from '../../core/system.ts';
-import { UsageError, intFlag, parseArgs } from '../args.ts';
-import { DESIGN_FLAGS, readDesign } from '../designInput.ts';
+import {
+  SAMPLE_FORMATS,
+  parseSampleFormat,
+  readCsvSignal,
+  readWav,
+  writeCsvSignal,
+  writeWav,
+  type SampleFormat,
+} from '../../core/signal/index.ts';
+import { UsageError, intFlag, numberFlag, parseArgs, type ParsedArgs } from '../args.ts';
+import { DESIGN_FLAGS, readDesign, type CliDesign } from '../designInput.ts';
 import { toJson } from '../json.ts';
 import type { CliIo } from '../main.ts';
+import { openForWriting } from '../stream/fileChunks.ts';
+import { filterStream, type StreamRunSummary } from '../stream/filterFile.ts';
+import { CsvFileSink, WavFileSink } from '../stream/sinks.ts';
+import { CsvFileSource, WavFileSource, isWavPath } from '../stream/sources.ts';
 
-/** Most samples one call may ask for. */
+/** Most samples one call may ask for when the output is printed or the input is generated in memory. */
 export const MAX_SIMULATE_SAMPLES = 10_000_000;
 
-/** Reads the first numeric column of a CSV/TSV file; a non-numeric first line is taken as a header. */
-export function readCsvColumn(path: string): Float64Array {
-  let text: string;
+const GENERATED = /^(impulse|step|sine:.*)$/;
+
+/** An input signal read into memory, with what the user should know about how it was read. */
+interface LoadedInput {
+  samples: Float64Array;
+  /** Hz, when the input carries its own rate (WAV, CSV with a time column). */
+  sampleRate: number | null;
+  notes: string[];
+}
+
+function readText(path: string): string {
   try {
-    text = readFileSync(path, 'utf8');
+    return readFileSync(path, 'utf8');
   } catch (e) {
     throw new UsageError(
       `Cannot read the input file ${path}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}`,
     );
   }
-  const values: number[] = [];
-  const lines = text.split(/\r?\n/);
-  for (let i = 0; i < lines.length; i++) {
-    const line = lines[i]!.trim();
-    if (line === '' || line.startsWith('#')) continue;
-    const cell = line.split(/[,;\t ]+/)[0]!;
-    const v = Number(cell);
-    if (cell === '' || !Number.isFinite(v)) {
-      if (values.length === 0 && i === lines.findIndex((l) => l.trim() !== '')) continue; // header
-      throw new UsageError(
-        `${path}, line ${i + 1}: "${cell}" is not a number (expected one sample per line).`,
-      );
-    }
-    values.push(v);
-    if (values.length > MAX_SIMULATE_SAMPLES) {
-      throw new UsageError(`${path} has more than ${MAX_SIMULATE_SAMPLES} samples.`);
-    }
-  }
-  if (values.length === 0) throw new UsageError(`${path} holds no samples.`);
-  return Float64Array.from(values);
 }
 
-/** The input signal named by --input. */
-function inputSignal(spec: string, n: number | null, fs: number): Float64Array {
+/** Reads a CSV/TSV signal (one sample column, or time and value columns) into memory. */
+function loadCsv(path: string, fallbackRate: number): LoadedInput {
+  const r = readCsvSignal(readText(path), { sampleRate: fallbackRate });
+  if (r.status === 'error') {
+    const expected = r.error.expected ? ` Expected: ${r.error.expected}.` : '';
+    throw new UsageError(`${path}: ${r.error.message}${expected}`);
+  }
+  const samples = r.status === 'ok' ? r.signal.samples : r.samples;
+  if (samples.length > MAX_SIMULATE_SAMPLES) {
+    throw new UsageError(`${path} has more than ${MAX_SIMULATE_SAMPLES} samples; write them with --output.`);
+  }
+  const timed = r.status === 'ok' && r.signal.timing !== null;
+  return {
+    samples,
+    sampleRate: timed ? r.signal.sampleRate : null,
+    notes: r.status === 'ok' ? r.signal.notes : r.notes,
+  };
+}
+
+/** Reads one channel of a WAV file into memory. */
+function loadWav(path: string, channel: number | undefined): LoadedInput {
+  let bytes: Buffer;
+  try {
+    bytes = readFileSync(path);
+  } catch (e) {
+    throw new UsageError(
+      `Cannot read the input file ${path}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}`,
+    );
+  }
+  const r = readWav(bytes, { channel: channel ?? 0 });
+  if (!r.ok) {
+    throw new UsageError(
+      `${path}: ${r.error.message}${r.error.expected ? ` Expected: ${r.error.expected}.` : ''}`,
+    );
+  }
+  const notes = [...r.value.notes];
+  if (channel === undefined && r.value.info.channelCount > 1) {
+    notes.push(
+      `${path} has ${r.value.info.channelCount} channels; channel 1 was used (choose with --channel N).`,
+    );
+  }
+  const samples = r.value.channels[0]!;
+  if (samples.length > MAX_SIMULATE_SAMPLES) {
+    throw new UsageError(`${path} has more than ${MAX_SIMULATE_SAMPLES} samples; write them with --output.`);
+  }
+  return { samples, sampleRate: r.value.sampleRate, notes };
+}
+
+/** The input signal named by --input, in memory. */
+function inputSignal(spec: string, n: number | null, fs: number, channel: number | undefined): LoadedInput {
   const count = n ?? 64;
-  if (spec === 'impulse') return makeImpulse(count);
-  if (spec === 'step') return makeStep(count);
+  if (spec === 'impulse') return { samples: makeImpulse(count), sampleRate: null, notes: [] };
+  if (spec === 'step') return { samples: makeStep(count), sampleRate: null, notes: [] };
   const sine = /^sine:(.+)$/.exec(spec);
   if (sine) {
     const hz = Number(sine[1]);
     if (!Number.isFinite(hz) || hz < 0)
       throw new UsageError(`--input sine:<Hz> needs a frequency in Hz; got "${sine[1]}".`);
-    return makeSine((2 * Math.PI * hz) / fs, count);
+    return { samples: makeSine((2 * Math.PI * hz) / fs, count), sampleRate: null, notes: [] };
   }
-  const samples = readCsvColumn(spec);
-  return n === null ? samples : samples.subarray(0, Math.min(n, samples.length));
+  const loaded = isWavPath(spec) ? loadWav(spec, channel) : loadCsv(spec, fs);
+  if (n !== null) loaded.samples = loaded.samples.subarray(0, Math.min(n, loaded.samples.length));
+  return loaded;
 }
 
-/** Runs `simulate`; returns the exit code. */
-export function runSimulate(argv: string[], io: CliIo): number {
-  const args = parseArgs(argv, [...DESIGN_FLAGS, 'input', 'samples'], ['json']);
+/** The 0-based channel from --channel N (1-based), if given. */
+function channelFlag(args: ParsedArgs): number | undefined {
+  return args.flags.has('channel') ? intFlag(args, 'channel', 1, 1, 65535) - 1 : undefined;
+}
+
+function outputFormatFlag(args: ParsedArgs): SampleFormat | null {
+  const raw = args.flags.get('output-format');
+  if (raw === undefined) return null;
+  const f = parseSampleFormat(raw);
+  if (f === null)
+    throw new UsageError(`--output-format must be one of ${SAMPLE_FORMATS.join(', ')}; got "${raw}".`);
+  return f;
+}
+
+/** A note when the recording's rate differs from the rate the design was made for. */
+function rateNote(d: CliDesign, args: ParsedArgs, signalRate: number | null): string | null {
+  const designRateGiven = args.flags.has('fs') || !d.source.startsWith('--');
+  if (signalRate === null || !designRateGiven || signalRate === d.sampleRate) return null;
+  return (
+    `the signal's sample rate (${signalRate} Hz) differs from the design's (${d.sampleRate} Hz); the filter ` +
+    `acts on samples, so its frequencies scale by ${(signalRate / d.sampleRate).toPrecision(4)}.`
+  );
+}
+
+function clipWarning(
+  summary: { clipped: number; frames: number; channels: number },
+  format: SampleFormat,
+): string | null {
+  if (summary.clipped === 0) return null;
+  const total = summary.frames * summary.channels;
+  const share = ((100 * summary.clipped) / Math.max(1, total)).toPrecision(3);
+  return (
+    `warning: ${summary.clipped} of ${total} output samples (${share} %) exceeded full scale and were clipped ` +
+    `to the ${format} range; --output-format f32 keeps them.\n`
+  );
+}
+
+/** Streams a recording through the filter into --output. */
+async function streamToFile(
+  args: ParsedArgs,
+  d: CliDesign,
+  io: CliIo,
+  input: string,
+  output: string,
+): Promise<number> {
+  if (resolve(input) === resolve(output)) {
+    throw new UsageError(`--output ${output} is the input file; writing would destroy it while it is read.`);
+  }
+  const channel = channelFlag(args);
+  const inputRate = args.flags.has('input-rate') ? numberFlag(args, 'input-rate', d.sampleRate) : null;
+  if (inputRate !== null && !(inputRate > 0))
+    throw new UsageError(`--input-rate must be a positive rate in Hz.`);
+  const wavIn = isWavPath(input);
+  if (!wavIn && channel !== undefined)
+    throw new UsageError('--channel applies to WAV input; a CSV input has one value column.');
+  if (wavIn && inputRate !== null)
+    throw new UsageError('--input-rate applies to CSV input; a WAV file states its own rate.');
+  const wavOut = isWavPath(output);
+  const chosen = outputFormatFlag(args);
+  if (chosen !== null && !wavOut)
+    throw new UsageError('--output-format applies to WAV output (a .wav file).');
+  const maxFrames = args.flags.has('samples')
+    ? intFlag(args, 'samples', 1, 1, Number.MAX_SAFE_INTEGER)
+    : undefined;
+  const sections = zpkToSections(d.zpk);
+  const source = wavIn ? new WavFileSource(input, channel) : new CsvFileSource(input);
+  const fallbackRate = inputRate ?? d.sampleRate;
+  let format: SampleFormat = chosen ?? 'f32';
+  const makeSink = async (rate: number) => {
+    if (!wavOut) return CsvFileSink.create(output, rate);
+    return WavFileSink.create(output, format);
+  };
+  // A WAV input's own format is the default output format; it is known after the header, so peek at it.
+  if (wavIn && chosen === null) format = (await wavFormatOf(input)) ?? format;
+  const opts = {
+    fallbackRate,
+    outputFormat: wavOut ? format : ('csv' as const),
+    ...(maxFrames ? { maxFrames } : {}),
+  };
+  const summary: StreamRunSummary = await filterStream(source, makeSink, sections, opts);
+  for (const note of summary.source.notes) io.stderr(`note: ${note}\n`);
+  const rate = summary.source.sampleRate ?? fallbackRate;
+  const mismatch = rateNote(d, args, summary.source.sampleRate);
+  if (mismatch) io.stderr(`note: ${mismatch}\n`);
+  if (wavOut && !Number.isInteger(rate))
+    io.stderr(`note: WAV stores whole hertz; the rate ${rate} Hz was written as ${Math.round(rate)} Hz.\n`);
+  if (wavOut) {
+    const warning = clipWarning(summary, format);
+    if (warning) io.stderr(warning);
+  }
+  if (args.switches.has('json')) {
+    io.stdout(
+      toJson({
+        output,
+        sampleRate: rate,
+        frames: summary.frames,
+        channels: summary.channels,
+        format: summary.outputFormat,
+        clipped: summary.clipped,
+      }),
+    );
+  }
+  return 0;
+}
+
+/** The sample format in a WAV file's header, read from its first bytes. */
+async function wavFormatOf(path: string): Promise<SampleFormat | null> {
+  const source = new WavFileSource(path);
+  for await (const _ of source.blocks()) break;
+  return source.info?.format ?? null;
+}
+
+/** Writes an in-memory output (a generated input's response) to --output. */
+async function writeInMemory(
+  args: ParsedArgs,
+  y: Float64Array,
+  rate: number,
+  output: string,
+  io: CliIo,
+): Promise<void> {
+  const handle = await openForWriting(output);
+  try {
+    if (isWavPath(output)) {
+      const format = outputFormatFlag(args) ?? 'f32';
+      const r = writeWav({ format, sampleRate: Math.round(rate), channels: [y] });
+      await handle.write(r.bytes);
+      const warning = clipWarning({ clipped: r.clipped, frames: y.length, channels: 1 }, format);
+      if (warning) io.stderr(warning);
+    } else {
+      await handle.write(writeCsvSignal([y], rate, { delimiter: /\.(tsv|tab)$/i.test(output) ? '\t' : ',' }));
+    }
+  } finally {
+    await handle.close();
+  }
+}
+
+/** Runs `simulate`; resolves to the exit code. */
+export async function runSimulate(argv: string[], io: CliIo): Promise<number> {
+  const args = parseArgs(
+    argv,
+    [...DESIGN_FLAGS, 'input', 'samples', 'output', 'output-format', 'channel', 'input-rate'],
+    ['json'],
+  );
   const d = readDesign(args);
   for (const note of d.notes) io.stderr(`note: ${note}\n`);
   const spec = args.flags.get('input') ?? 'impulse';
+  const output = args.flags.get('output');
+  if (output !== undefined && !GENERATED.test(spec)) return streamToFile(args, d, io, spec, output);
+  if (output === undefined && args.flags.has('output-format'))
+    throw new UsageError('--output-format needs --output <file.wav>.');
   const n = args.flags.has('samples') ? intFlag(args, 'samples', 64, 1, MAX_SIMULATE_SAMPLES) : null;
-  const x = inputSignal(spec, n, d.sampleRate);
-  const y = filterSections(zpkToSections(d.zpk), x);
+  const x = inputSignal(
+    spec,
+    n,
+    args.flags.has('input-rate') ? numberFlag(args, 'input-rate', d.sampleRate) : d.sampleRate,
+    channelFlag(args),
+  );
+  for (const note of x.notes) io.stderr(`note: ${note}\n`);
+  const mismatch = rateNote(d, args, x.sampleRate);
+  if (mismatch) io.stderr(`note: ${mismatch}\n`);
+  const y = filterSections(zpkToSections(d.zpk), x.samples);
+  const rate = x.sampleRate ?? d.sampleRate;
+  if (output !== undefined) {
+    await writeInMemory(args, y, rate, output, io);
+    if (args.switches.has('json'))
+      io.stdout(toJson({ output, sampleRate: rate, frames: y.length, channels: 1 }));
+    return 0;
+  }
   if (args.switches.has('json')) {
-    io.stdout(toJson({ sampleRate: d.sampleRate, input: spec, output: y }));
+    io.stdout(toJson({ sampleRate: rate, input: spec, output: y }));
     return 0;
   }
   io.stdout(Array.from(y, String).join('\n') + '\n');

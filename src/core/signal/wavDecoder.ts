@@ -76,7 +76,7 @@ export class WavDecoder {
         !(Number.isInteger(channel) && channel >= 0 && channel < h.info.channelCount)
       ) {
         return this.fail({
-          message: `Channel index ${channel} was asked for; the file has ${h.info.channelCount} channel(s).`,
+          message: `Channel ${channel + 1} (index ${channel}) was asked for; the file has ${h.info.channelCount} channel(s).`,
           expected: `a channel index from 0 to ${h.info.channelCount - 1}`,
         });
       }

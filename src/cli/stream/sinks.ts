@@ -1,0 +1,114 @@
+/**
+ * Where filtered samples go, block by block: a WAV file whose header is written as a placeholder first and
+ * rewritten with the final sizes and sample rate at the end, or a CSV file written line by line.
+ */
+import type { FileHandle } from 'node:fs/promises';
+import {
+  csvHeaderLine,
+  csvRows,
+  encodeWavBlock,
+  sampleTimes,
+  wavHeaderBytes,
+} from '../../core/signal/index.ts';
+import type { SampleFormat } from '../../core/signal/index.ts';
+import { openForWriting } from './fileChunks.ts';
+
+/** A destination for blocks of channels. */
+export interface SignalSink {
+  /** Writes the next frames; `times` (seconds) when the input carried its own time column. */
+  write(channels: readonly Float64Array[], times: Float64Array | null): Promise<void>;
+  /** Finishes the file once the sample rate and channel count are final. */
+  close(sampleRate: number, startTime: number): Promise<void>;
+  /** Samples clipped to fit an integer format so far. */
+  readonly clipped: number;
+  readonly frames: number;
+}
+
+/** A WAV file written as blocks arrive; the header is rewritten at close with the final sizes. */
+export class WavFileSink implements SignalSink {
+  clipped = 0;
+  frames = 0;
+  private channelCount = 0;
+  private position = 0;
+  private constructor(
+    private readonly handle: FileHandle,
+    private readonly format: SampleFormat,
+  ) {}
+
+  static async create(path: string, format: SampleFormat): Promise<WavFileSink> {
+    return new WavFileSink(await openForWriting(path), format);
+  }
+
+  async write(channels: readonly Float64Array[]): Promise<void> {
+    if (this.channelCount === 0) {
+      this.channelCount = channels.length;
+      const placeholder = this.header(1);
+      await this.handle.write(placeholder, 0, placeholder.length, 0);
+      this.position = placeholder.length;
+    }
+    const { bytes, clipped } = encodeWavBlock(channels, this.format);
+    this.clipped += clipped;
+    this.frames += channels[0]?.length ?? 0;
+    await this.handle.write(bytes, 0, bytes.length, this.position);
+    this.position += bytes.length;
+  }
+
+  async close(sampleRate: number): Promise<void> {
+    try {
+      if (this.channelCount === 0) {
+        this.channelCount = 1;
+        this.position = this.header(1).length;
+      }
+      const header = this.header(Math.round(sampleRate));
+      await this.handle.write(header, 0, header.length, 0);
+      if ((this.position - header.length) & 1)
+        await this.handle.write(new Uint8Array(1), 0, 1, this.position);
+    } finally {
+      await this.handle.close();
+    }
+  }
+
+  private header(sampleRate: number): Uint8Array {
+    return wavHeaderBytes({
+      format: this.format,
+      channelCount: this.channelCount,
+      sampleRate,
+      frameCount: this.frames,
+    });
+  }
+}
+
+/** A CSV file: a time column in seconds and one column per channel. */
+export class CsvFileSink implements SignalSink {
+  clipped = 0;
+  frames = 0;
+  private headerWritten = false;
+  private constructor(
+    private readonly handle: FileHandle,
+    private readonly sampleRate: number,
+    private readonly startTime: number,
+    private readonly delimiter: ',' | '\t',
+  ) {}
+
+  /** A sink that computes times as startTime + k / sampleRate when the input brings none. */
+  static async create(path: string, sampleRate: number, startTime = 0): Promise<CsvFileSink> {
+    const delimiter = /\.(tsv|tab)$/i.test(path) ? '\t' : ',';
+    return new CsvFileSink(await openForWriting(path), sampleRate, startTime, delimiter);
+  }
+
+  async write(channels: readonly Float64Array[], times: Float64Array | null): Promise<void> {
+    if (!this.headerWritten) {
+      const names = channels.length === 1 ? ['value'] : channels.map((_, c) => `channel_${c + 1}`);
+      await this.handle.write(csvHeaderLine(['time_s', ...names], this.delimiter));
+      this.headerWritten = true;
+    }
+    const n = channels[0]?.length ?? 0;
+    const t = times ?? sampleTimes(this.frames, n, this.sampleRate, this.startTime);
+    await this.handle.write(csvRows([t, ...channels], 0, n, this.delimiter));
+    this.frames += n;
+  }
+
+  async close(): Promise<void> {
+    await this.handle.close();
+  }
+}
