@@ -8,6 +8,7 @@ import { PanelBoundary } from './shared/PanelBoundary.tsx';
 import { installTestProbe } from './shared/testProbe.ts';
 import { Caution } from './shell/Caution.tsx';
 import { Header } from './shell/Header.tsx';
+import { Notices } from './shell/Notices.tsx';
 import { ScenarioNote } from './shell/ScenarioNote.tsx';
 import { SideColumn } from './side/SideColumn.tsx';
 import { TimePanel } from './time/TimePanel.tsx';
@@ -19,6 +20,7 @@ export function App() {
   return (
     <div className="pw-app">
       <Header />
+      <Notices />
       <ScenarioNote />
       <main className="pw-grid">
         <div className="pw-area pw-area-plane">
