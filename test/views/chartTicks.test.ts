@@ -1,5 +1,11 @@
 import { describe, it, expect } from 'vitest';
-import { formatHzTick, formatTickValue, linearTicks, logTicks } from '../../src/views/chart/ticks.ts';
+import {
+  formatHzTick,
+  formatTickValue,
+  linearTicks,
+  logTicks,
+  spacedTicks,
+} from '../../src/views/chart/ticks.ts';
 
 describe('linearTicks', () => {
   it('puts ticks on 1-2-5 steps inside the range', () => {
@@ -56,5 +62,15 @@ describe('logTicks', () => {
     const t = logTicks(0.3, 70);
     expect(Math.min(...t.map((x) => x.value))).toBeGreaterThanOrEqual(0.3);
     expect(Math.max(...t.map((x) => x.value))).toBeLessThanOrEqual(70);
+  });
+});
+
+describe('spacedTicks', () => {
+  it('thins the ticks until the labels are far enough apart', () => {
+    // 120 dB over 100 px with labels ≥ 24 px apart: 20 dB steps would be 16.7 px, so 50 dB steps.
+    const t = spacedTicks(-120, 0, 100, 24);
+    expect(t.map((x) => x.value)).toEqual([-100, -50, 0]);
+    // Given room, it keeps the finer step.
+    expect(spacedTicks(-120, 0, 400, 24).map((x) => x.value)).toContain(-20);
   });
 });

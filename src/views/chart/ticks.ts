@@ -80,3 +80,16 @@ export function stepTicks(lo: number, hi: number, count: number, steps: readonly
     ticks.push({ value: k * step, label: formatTickValue(k * step, step) });
   return ticks;
 }
+
+/**
+ * Linear ticks for an axis `lengthPx` long with labels at least `minGapPx` apart: d3's count is only a hint,
+ * so fewer are asked for until the step it picks leaves room.
+ */
+export function spacedTicks(lo: number, hi: number, lengthPx: number, minGapPx: number): Tick[] {
+  for (let count = Math.max(2, Math.floor(lengthPx / minGapPx)); count >= 1; count--) {
+    const ticks = linearTicks(lo, hi, count);
+    const step = ticks.length > 1 ? Math.abs(ticks[1]!.value - ticks[0]!.value) : Infinity;
+    if ((step / Math.abs(hi - lo)) * lengthPx >= minGapPx || count === 1) return ticks;
+  }
+  return [];
+}

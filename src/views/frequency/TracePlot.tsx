@@ -4,7 +4,7 @@ import { Axis } from '../chart/Axis.tsx';
 import { Grid } from '../chart/Grid.tsx';
 import { linePath } from '../chart/paths.ts';
 import { toPixels, type AxisMap } from '../chart/pixels.ts';
-import { DEGREE_STEPS, linearTicks, stepTicks, type Tick } from '../chart/ticks.ts';
+import { DEGREE_STEPS, spacedTicks, stepTicks, type Tick } from '../chart/ticks.ts';
 import type { Range } from '../chart/range.ts';
 import type { Series } from './series.ts';
 import type { PlotRect } from './layout.ts';
@@ -25,6 +25,8 @@ export interface TracePlotProps {
 
 /** Pixels per y tick: fewer labels on short plots. */
 const PX_PER_Y_TICK = 28;
+/** Closest two y labels may sit, px (11px text plus air). */
+const MIN_Y_LABEL_GAP_PX = 22;
 
 /** Maps the plot's y range onto its rectangle (top of range at the top). */
 export function yMapOf(rect: PlotRect, range: Range): AxisMap {
@@ -38,7 +40,7 @@ export const TracePlot = memo(function TracePlot(p: TracePlotProps) {
     const count = Math.max(2, (rect.bottom - rect.top) / PX_PER_Y_TICK);
     return series.degrees
       ? stepTicks(range[0], range[1], count, DEGREE_STEPS)
-      : linearTicks(range[0], range[1], count);
+      : spacedTicks(range[0], range[1], rect.bottom - rect.top, MIN_Y_LABEL_GAP_PX);
   }, [range, rect.bottom, rect.top, series.degrees]);
   const d = useMemo(() => {
     const py = toPixels(yMap, series.values, series.scale);

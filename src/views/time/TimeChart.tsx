@@ -10,7 +10,7 @@ import { CursorArea } from '../chart/CursorArea.tsx';
 import { Grid } from '../chart/Grid.tsx';
 import { fromPixel, toPixel, toPixels, type AxisMap } from '../chart/pixels.ts';
 import { finiteExtent, niceRange, type Range } from '../chart/range.ts';
-import { linearTicks } from '../chart/ticks.ts';
+import { linearTicks, spacedTicks } from '../chart/ticks.ts';
 import { useSettledRange } from '../chart/useSettledRange.ts';
 import { samplePaths } from './samplePaths.ts';
 import { timeLayout, timeUnit } from './layout.ts';
@@ -86,7 +86,7 @@ export function TimeChart({ width, height, cursor, onCursor, envelope, fitTail }
     [range, rect],
   );
   const yTicks = useMemo(
-    () => linearTicks(range[0], range[1], Math.max(2, (rect.bottom - rect.top) / PX_PER_Y_TICK)),
+    () => spacedTicks(range[0], range[1], rect.bottom - rect.top, PX_PER_Y_TICK),
     [range, rect],
   );
 
