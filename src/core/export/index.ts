@@ -1,0 +1,8 @@
+/** Exports of an implementation as text (C header, JSON, CSV), each stating its conventions and design hash. */
+export { exportC } from './c.ts';
+export type { CExportOptions } from './c.ts';
+export { exportJson } from './json.ts';
+export { exportCsv } from './csv.ts';
+export { conventionLines, structureName } from './conventions.ts';
+export { designHash, fnv1a64, canonicalJson } from './hash.ts';
+export { float17, cInteger } from './numbers.ts';
