@@ -21,8 +21,8 @@ import { differsFromDesigner } from './designer.ts';
 
 /** Highest order for which the closed-form time response is listed (partial fractions grow ill-conditioned). */
 export const CLOSED_FORM_MAX_ORDER = 24;
-/** Lowest frequency of a log frequency axis, as a fraction of the sample rate. */
-export const LOG_AXIS_MIN_FRACTION = 1e-4;
+/** Lowest frequency of a log frequency axis, as a fraction of the sample rate (5e-4: three decades below Nyquist). */
+export const LOG_AXIS_MIN_FRACTION = 5e-4;
 
 const gainOf = memoLast((d: Design) => resolveGain(d.zeros, d.poles, d.gainRule, d.sampleRate));
 const zpkOf = memoLast((design: Design): Zpk => ({

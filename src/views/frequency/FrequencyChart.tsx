@@ -2,7 +2,7 @@
  * The frequency plots (magnitude on top, phase and group delay below) on one shared frequency axis, with
  * the cross-hair (pointer or arrow keys) and the selected root's marker.
  */
-import { useMemo, useState } from 'react';
+import { useId, useMemo, useState } from 'react';
 import { selectResponse, selectZpk } from '../../store/derived.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 import { Axis } from '../chart/Axis.tsx';
@@ -18,6 +18,7 @@ import { PlotTitles } from './PlotTitles.tsx';
 import type { FrequencyReading } from './readAt.ts';
 import { refineAtRoots } from './refine.ts';
 import { RootMarker } from './RootMarker.tsx';
+import { MAGNITUDE_OVERLAYS } from './overlays.ts';
 import {
   DEG_PER_RAD,
   delaySeries,
@@ -66,6 +67,7 @@ export function FrequencyChart({ width, height, reading, onCursor, marker }: Fre
   const axis = useWorkbench((s) => s.view.frequencyAxis);
   const hold = useWorkbench((s) => s.view.holdScale);
   const [second, setSecond] = useState<'phase' | 'delay'>('phase');
+  const overlayClip = `pw-overlay-clip-${useId().replace(/:/g, '')}`;
 
   const response = useMemo(() => refineAtRoots(zpk, grid), [zpk, grid]);
   const layout = useMemo(() => frequencyLayout(width, height, second), [width, height, second]);
@@ -106,6 +108,7 @@ export function FrequencyChart({ width, height, reading, onCursor, marker }: Fre
       }))
     : [];
 
+  const magnitudePlot = layout.plots.find((p) => p.key === 'magnitude');
   if (width < 80 || height < 80) return <svg width={width} height={height} />;
   const bottom = layout.axisY;
   const markerX = marker ? toPixel(xMap, marker.hz) : NaN;
@@ -131,6 +134,27 @@ export function FrequencyChart({ width, height, reading, onCursor, marker }: Fre
             name={key}
           />
         ))}
+        {magnitudePlot && MAGNITUDE_OVERLAYS.length > 0 ? (
+          <g className="pw-magnitude-overlays" clipPath={`url(#${overlayClip})`} pointerEvents="none">
+            <clipPath id={overlayClip}>
+              <rect
+                x={magnitudePlot.rect.left}
+                y={magnitudePlot.rect.top}
+                width={magnitudePlot.rect.right - magnitudePlot.rect.left}
+                height={magnitudePlot.rect.bottom - magnitudePlot.rect.top}
+              />
+            </clipPath>
+            {MAGNITUDE_OVERLAYS.map(({ id, Layer }) => (
+              <Layer
+                key={id}
+                rect={magnitudePlot.rect}
+                xMap={xMap}
+                yMap={yMapOf(magnitudePlot.rect, ranges.magnitude)}
+                db={units.db}
+              />
+            ))}
+          </g>
+        ) : null}
         <Axis
           side="bottom"
           map={xMap}

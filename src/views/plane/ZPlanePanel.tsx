@@ -7,6 +7,7 @@ import { selectStability } from '../../store/derived.ts';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import { planeScale, type PlaneScale } from './geometry.ts';
 import { PlaneGrid } from './PlaneGrid.tsx';
+import { PLANE_OVERLAYS } from './overlays.ts';
 import { PlaneToolbar } from './PlaneToolbar.tsx';
 import { RootEditor } from './RootEditor.tsx';
 import { RootsLayer } from './RootsLayer.tsx';
@@ -80,6 +81,13 @@ export function ZPlanePanel() {
           {...pointer}
         >
           {ready && <PlaneGrid scale={scale} sampleRate={fs} unstable={unstable} />}
+          {ready && (
+            <g className="pw-plane-overlays" pointerEvents="none">
+              {PLANE_OVERLAYS.map(({ id, Layer }) => (
+                <Layer key={id} scale={scale} />
+              ))}
+            </g>
+          )}
           {ready && (
             <RootsLayer zeros={zeros} poles={poles} sampleRate={fs} selection={selection} scale={scale} />
           )}

@@ -1,0 +1,18 @@
+/**
+ * Extra layers drawn on the z-plane between the grid and the draggable roots: features add theirs here (one
+ * line), e.g. the quantized roots, a pinned reference design's roots. Each reads the store itself and draws
+ * with the plane's scale; overlays never take pointer events (the roots above them must stay draggable).
+ */
+import type { ComponentType } from 'react';
+import type { PlaneScale } from './geometry.ts';
+
+export interface PlaneOverlayProps {
+  scale: PlaneScale;
+}
+
+export interface PlaneOverlay {
+  id: string;
+  Layer: ComponentType<PlaneOverlayProps>;
+}
+
+export const PLANE_OVERLAYS: PlaneOverlay[] = [];
