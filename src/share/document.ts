@@ -1,15 +1,14 @@
 /** A design with the view settings that travel with it, and its conversion to and from the current document. */
-import type { DesignerSpec } from '../core/design/index.ts';
+import type { ImplementationSettings } from '../core/fixed/index.ts';
 import type { Design } from '../store/design.ts';
 import { CURRENT_VERSION, readDocument, type CurrentDocument } from './schema/migrate.ts';
 import type { SharedView } from './schema/view.ts';
 
 /**
- * The design's optional parts. EXTENSION POINT: once Design itself declares `designer`, `mask` and
- * `implementation`, this intersection is redundant but harmless; add `mask` and `implementation` here
- * and in schema/v2.ts when their types land.
+ * The design with every optional part a link or file carries. Design declares `designer` and `mask`;
+ * `implementation` is added here until Design declares it too (then this is simply Design).
  */
-export type SharedDesignParts = Design & { designer?: DesignerSpec };
+export type SharedDesignParts = Design & { implementation?: ImplementationSettings };
 
 /** What a link, a file or a library entry carries. */
 export interface SharedDesign {
@@ -34,6 +33,8 @@ export function toDocument(shared: SharedDesign): CurrentDocument {
     gainRule: { ...d.gainRule },
     ...(d.typed ? { typed: { b: [...d.typed.b], a: [...d.typed.a], text: d.typed.text } } : {}),
     ...(d.designer ? { designer: structuredClone(d.designer) } : {}),
+    ...(d.mask ? { mask: structuredClone(d.mask) } : {}),
+    ...(d.implementation ? { implementation: { ...d.implementation } } : {}),
     ...(Object.keys(shared.view).length ? { view: { ...shared.view } } : {}),
   };
 }
@@ -49,6 +50,8 @@ export function fromDocument(doc: CurrentDocument): SharedDesign {
     note: doc.note,
     ...(doc.typed ? { typed: doc.typed } : {}),
     ...(doc.designer ? { designer: doc.designer } : {}),
+    ...(doc.mask ? { mask: doc.mask } : {}),
+    ...(doc.implementation ? { implementation: doc.implementation } : {}),
   };
   return { design, view: doc.view ?? {} };
 }

@@ -81,6 +81,45 @@ const designer: fc.Arbitrary<DesignerSpec> = fc.oneof(
   ),
 );
 
+const mask = fc.record({
+  regions: fc
+    .array(
+      fc.record(
+        {
+          kind: fc.constantFrom('pass' as const, 'stop' as const, 'band' as const),
+          fromHz: anyFinite,
+          toHz: anyFinite,
+          upperDb: anyFinite,
+          lowerDb: anyFinite,
+          label: text(20),
+        },
+        { requiredKeys: ['kind', 'fromHz', 'toHz'] },
+      ),
+      { maxLength: 4 },
+    )
+    .map((rs) => rs.map((r, i) => ({ ...r, id: `r${i}` }))),
+});
+
+const implementation = fc
+  .record({
+    structure: fc.constantFrom('df1' as const, 'df2t' as const),
+    wordLength: fc.integer({ min: 8, max: 32 }),
+    dataWordLength: fc.integer({ min: 8, max: 32 }),
+    rounding: fc.constantFrom('nearest' as const, 'truncate' as const),
+    overflow: fc.constantFrom('saturate' as const, 'wrap' as const),
+    scaling: fc.constantFrom('linf' as const, 'l2' as const, 'l1' as const, 'none' as const),
+    ordering: fc.constantFrom('ascending' as const, 'descending' as const),
+    gainDistribution: fc.constantFrom('first' as const, 'spread' as const),
+    pairing: fc.constantFrom('nearest' as const, 'keep-odd' as const),
+    feedbackSign: fc.constantFrom('denominator' as const, 'negated' as const),
+    auto: fc.boolean(),
+  })
+  .map(({ auto, ...s }) => ({
+    ...s,
+    fractionBits: auto ? ('auto' as const) : s.wordLength - 1,
+    accumulatorBits: Math.min(64, s.wordLength + s.dataWordLength + 8),
+  }));
+
 const view = fc.record(
   {
     magnitudeScale: fc.constantFrom('db' as const, 'linear' as const),
@@ -116,10 +155,18 @@ export const anySharedDesign: fc.Arbitrary<SharedDesign> = fc
       { nil: undefined },
     ),
     designer: fc.option(designer, { nil: undefined }),
+    mask: fc.option(mask, { nil: undefined }),
+    implementation: fc.option(implementation, { nil: undefined }),
     view,
   })
-  .map(({ typed, designer: spec, view: v, ...rest }) => ({
-    design: { ...rest, ...(typed ? { typed } : {}), ...(spec ? { designer: spec } : {}) },
+  .map(({ typed, designer: spec, mask: m, implementation: impl, view: v, ...rest }) => ({
+    design: {
+      ...rest,
+      ...(typed ? { typed } : {}),
+      ...(spec ? { designer: spec } : {}),
+      ...(m ? { mask: m } : {}),
+      ...(impl ? { implementation: impl } : {}),
+    },
     view: v,
   }));
 

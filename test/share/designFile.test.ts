@@ -82,6 +82,30 @@ describe('design files', () => {
     expect(r.ok && r.design.note).toBe('<script>alert(1)</script>');
   });
 
+  it('refuses implementation settings the engine refuses, and duplicate mask region ids', () => {
+    const base = { ...JSON.parse(V1_FILE), version: 2 };
+    const impl = {
+      structure: 'df2t',
+      wordLength: 16,
+      fractionBits: 'auto',
+      dataWordLength: 16,
+      accumulatorBits: 20,
+      rounding: 'nearest',
+      overflow: 'saturate',
+      scaling: 'linf',
+      ordering: 'ascending',
+      gainDistribution: 'first',
+      pairing: 'nearest',
+      feedbackSign: 'denominator',
+    };
+    const r = readDocument({ ...base, implementation: impl });
+    expect(r.ok ? '' : r.message).toMatch(/implementation: a 20-bit accumulator cannot hold/);
+    expect(readDocument({ ...base, implementation: { ...impl, accumulatorBits: 40 } }).ok).toBe(true);
+    const region = { id: 'a', kind: 'stop', fromHz: 100, toHz: 200, upperDb: -40 };
+    const m = readDocument({ ...base, mask: { regions: [region, region] } });
+    expect(m.ok ? '' : m.message).toMatch(/mask\.regions\.1\.id: "a" is used twice/);
+  });
+
   it('validates the designer against the engine type', () => {
     const doc = {
       ...JSON.parse(V1_FILE),

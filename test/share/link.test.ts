@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { runDesigner } from '../../src/core/design/index.ts';
+import { DEFAULT_IMPLEMENTATION } from '../../src/core/fixed/index.ts';
 import { compressRoots } from '../../src/core/system.ts';
 import type { SharedDesign } from '../../src/share/document.ts';
 import { toBase64Url, fromBase64Url } from '../../src/share/link/base64url.ts';
@@ -78,6 +79,20 @@ describe('link round trip', () => {
     };
     shared.design.typed = { b: [1, 0, -1], a: [1, -1.6, 0.64], text: 'b = [1, 0, -1]; a = [1, -1.6, 0.64]' };
     expect(bitwiseDifference(roundTrip(shared), shared)).toBeNull();
+  });
+
+  it('carries a requirement mask and implementation settings', () => {
+    const shared = order8('elliptic');
+    shared.design.mask = {
+      regions: [
+        { id: 'pass', kind: 'pass', fromHz: 0, toHz: 1000, lowerDb: -0.5 },
+        { id: 'stop', kind: 'stop', fromHz: 1500, toHz: 24000, upperDb: -60, label: 'alias band' },
+      ],
+    };
+    shared.design.implementation = { ...DEFAULT_IMPLEMENTATION, wordLength: 18, fractionBits: 15 };
+    const back = roundTrip(shared);
+    expect(bitwiseDifference(back, shared)).toBeNull();
+    expect(back.design.implementation?.wordLength).toBe(18);
   });
 
   it('is compact: an order-8 design fits in about 200 characters', () => {

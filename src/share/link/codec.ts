@@ -13,7 +13,7 @@
  *           distance of im from sqrt((1 − re)(1 + re)) (predict.ts)
  *   string  name, string note (when flagged)
  *   typed   varint count + numbers for b, the same for a, string text (when flagged)
- *   value   an object with the extra parts: designer, view (when flagged)
+ *   value   an object with the extra parts: designer, mask, implementation, view (when flagged)
  */
 import type { Root } from '../../core/types.ts';
 import type { GainRule } from '../../core/gainRule.ts';
@@ -35,8 +35,8 @@ const HAS_NOTE = 2;
 const HAS_TYPED = 4;
 const HAS_EXTRAS = 8;
 const KNOWN_FLAGS = HAS_NAME | HAS_NOTE | HAS_TYPED | HAS_EXTRAS;
-/** Parts of the document carried in the extras object (EXTENSION POINT: 'mask', 'implementation'). */
-const EXTRA_KEYS = ['designer', 'view'] as const;
+/** Parts of the document carried in the extras object. */
+const EXTRA_KEYS = ['designer', 'mask', 'implementation', 'view'] as const;
 const GAIN_KINDS = ['fixed', 'dc', 'nyquist', 'frequency', 'peak'] as const;
 
 const REAL = 0;

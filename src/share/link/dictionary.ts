@@ -1,6 +1,6 @@
 /**
  * Strings a link writes as a small index instead of spelling them out: field names and enumerated values
- * of the open-ended parts (designer, view, and later mask and implementation). APPEND ONLY: an entry's index
+ * of the open-ended parts (designer, mask, implementation, view). APPEND ONLY: an entry's index
  * is part of link format 1, so entries are never removed or reordered, only added at the end.
  */
 export const LINK_DICTIONARY: readonly string[] = [

@@ -29,3 +29,5 @@ export const MAX_EDGES = 2;
 /** Deepest nesting and most values in the open-ended parts of a link (designer, mask, implementation). */
 export const MAX_VALUE_DEPTH = 8;
 export const MAX_VALUE_NODES = 10_000;
+/** Most regions of a requirement mask. */
+export const MAX_MASK_REGIONS = 64;

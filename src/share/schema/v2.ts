@@ -1,10 +1,11 @@
 /**
- * Design file version 2 (current): version 1 plus the designer that produced the design and the view
- * settings worth sharing. The field-by-field description is in src/share/README.md.
+ * Design file version 2 (current): version 1 plus the designer that produced the design, its requirement
+ * mask, its fixed-point implementation settings and the view settings worth sharing. The field-by-field description is in src/share/README.md.
  */
 import { z } from 'zod';
 import { checkOrders, coefficients, gainRule, plainText, roots, sampleRate } from './common.ts';
 import { designerSpec } from './designer.ts';
+import { implementationSettings, requirementMask } from './mask.ts';
 import { MAX_NAME_CHARS, MAX_TEXT_CHARS } from './limits.ts';
 import { sharedView } from './view.ts';
 
@@ -20,8 +21,8 @@ export const designDocumentV2 = z
     gainRule,
     typed: z.object({ b: coefficients, a: coefficients, text: plainText(MAX_TEXT_CHARS) }).exactOptional(),
     designer: designerSpec.exactOptional(),
-    // EXTENSION POINT: `mask` (src/core/mask.ts) and `implementation` (src/core/fixed/) join here as
-    // `.exactOptional()` fields once those types exist; add their keys to link/dictionary.ts too.
+    mask: requirementMask.exactOptional(),
+    implementation: implementationSettings.exactOptional(),
     view: sharedView.exactOptional(),
   })
   .superRefine(checkOrders);
