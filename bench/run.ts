@@ -19,4 +19,8 @@ if (want('drag')) {
   const { benchDrag } = await import('./drag.ts');
   parts.push('## Scripted drag in headless Chromium', '', await benchDrag(), '');
 }
+if (want('signal')) {
+  const { benchSignal } = await import('./signal.ts');
+  parts.push('## Real signals: 10 minutes at 48 kHz', '', await benchSignal(), '');
+}
 console.log(parts.join('\n'));

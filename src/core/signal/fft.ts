@@ -86,21 +86,25 @@ function radix2(re: Float64Array, im: Float64Array, inverse: boolean): void {
     }
   }
   const sign = inverse ? 1 : -1;
+  // Twiddle outermost within a stage: each factor is read once per stage rather than once per butterfly.
   for (let size = 2; size <= n; size <<= 1) {
     const half = size >> 1;
     const step = n / size;
-    for (let start = 0; start < n; start += size) {
-      for (let k = 0, t = 0; k < half; k++, t += step) {
-        const wr = cos[t]!;
-        const wi = sign * sin[t]!;
-        const a = start + k;
+    for (let k = 0; k < half; k++) {
+      const wr = cos[k * step]!;
+      const wi = sign * sin[k * step]!;
+      for (let a = k; a < n; a += size) {
         const b = a + half;
-        const xr = re[b]! * wr - im[b]! * wi;
-        const xi = re[b]! * wi + im[b]! * wr;
-        re[b] = re[a]! - xr;
-        im[b] = im[a]! - xi;
-        re[a] = re[a]! + xr;
-        im[a] = im[a]! + xi;
+        const br = re[b]!;
+        const bi = im[b]!;
+        const xr = br * wr - bi * wi;
+        const xi = br * wi + bi * wr;
+        const ar = re[a]!;
+        const ai = im[a]!;
+        re[b] = ar - xr;
+        im[b] = ai - xi;
+        re[a] = ar + xr;
+        im[a] = ai + xi;
       }
     }
   }
