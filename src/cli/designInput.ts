@@ -1,10 +1,12 @@
-/** Resolves the design a command works on: a design file, or coefficients/equation/H(z) given as flags. */
-import { readFileSync } from 'node:fs';
+/** Resolves the design a command works on: a design file, a design link, or coefficients/equation/H(z) given as flags. */
+import { existsSync, readFileSync } from 'node:fs';
 import type { TransferFunction, Zpk } from '../core/types.ts';
 import { parseCoefficients, parseDifferenceEquation, parseSystem } from '../core/parse/index.ts';
 import { tfToZpk, compressRoots } from '../core/system.ts';
 import { resolveGain } from '../core/gainRule.ts';
-import { readDesignFile } from '../share/designFile.ts';
+import { readSharedFile } from '../share/designFile.ts';
+import type { SharedDesign } from '../share/document.ts';
+import { decodeLink, linkFragment } from '../share/link/index.ts';
 import { UsageError, numberFlag, type ParsedArgs } from './args.ts';
 
 /** Flags every design-taking command accepts. */
@@ -20,6 +22,42 @@ export interface CliDesign {
   source: string;
   /** Things the user should know about how the input was read. */
   notes: string[];
+  /** The whole design as the workbench holds it (designer, mask, implementation, view), for `link`. */
+  shared?: SharedDesign;
+}
+
+/** Whether a positional argument is a design link (a URL or fragment with #pw…) rather than a file. */
+function isLink(arg: string): boolean {
+  return linkFragment(arg) !== null && !existsSync(arg);
+}
+
+/** The command's design from a file's or a link's shared design; --fs overrides the sample rate. */
+function fromShared(shared: SharedDesign, source: string, fs: number | null): CliDesign {
+  const d = fs === null ? shared.design : { ...shared.design, sampleRate: fs };
+  const { gain } = resolveGain(d.zeros, d.poles, d.gainRule, d.sampleRate);
+  return {
+    zpk: { zeros: d.zeros, poles: d.poles, gain },
+    typed: d.typed ? { b: d.typed.b, a: d.typed.a } : null,
+    sampleRate: d.sampleRate,
+    source,
+    notes: [],
+    shared: { design: d, view: shared.view },
+  };
+}
+
+/** Keeps what the user typed with a design given as flags, so `link` can carry it. */
+function withTyped(d: CliDesign, text: string): CliDesign {
+  const typed = d.typed ? { typed: { b: d.typed.b, a: d.typed.a, text } } : {};
+  const design = {
+    sampleRate: d.sampleRate,
+    zeros: d.zpk.zeros,
+    poles: d.zpk.poles,
+    gainRule: { kind: 'fixed' as const, value: d.zpk.gain },
+    name: '',
+    note: '',
+    ...typed,
+  };
+  return { ...d, shared: { design, view: {} } };
 }
 
 function fromTf(tf: TransferFunction, fs: number, source: string, notes: string[] = []): CliDesign {
@@ -51,6 +89,11 @@ export function readDesign(args: ParsedArgs): CliDesign {
     throw new UsageError(`Give the design either as a file (${file}) or with --${given[0]}, not both.`);
   }
   if (given.length > 1) throw new UsageError(`Give the design one way only; got --${given.join(' and --')}.`);
+  if (file !== undefined && isLink(file)) {
+    const read = decodeLink(file);
+    if (!read.ok) throw new UsageError(`the design link: ${read.message}`);
+    return fromShared(read.value, 'the design link', fsGiven ? fs : null);
+  }
   if (file !== undefined) {
     let text: string;
     try {
@@ -60,24 +103,15 @@ export function readDesign(args: ParsedArgs): CliDesign {
         `Cannot read the design file ${file}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}`,
       );
     }
-    const read = readDesignFile(text);
+    const read = readSharedFile(text);
     if (!read.ok) throw new UsageError(`${file}: ${read.message}`);
-    const d = read.design;
-    const sampleRate = fsGiven ? fs : d.sampleRate;
-    const { gain } = resolveGain(d.zeros, d.poles, d.gainRule, sampleRate);
-    return {
-      zpk: { zeros: d.zeros, poles: d.poles, gain },
-      typed: d.typed ? { b: d.typed.b, a: d.typed.a } : null,
-      sampleRate,
-      source: file,
-      notes: [],
-    };
+    return fromShared(read.value, file, fsGiven ? fs : null);
   }
   const eq = args.flags.get('eq');
   if (eq !== undefined) {
     const r = parseDifferenceEquation(eq);
     if (!r.ok) throw parseFailure('eq', eq, r.error);
-    return fromTf(r.value, fs, '--eq');
+    return withTyped(fromTf(r.value, fs, '--eq'), eq);
   }
   const tf = args.flags.get('tf');
   if (tf !== undefined) {
@@ -88,7 +122,7 @@ export function readDesign(args: ParsedArgs): CliDesign {
         `--tf expects H(z) in z or z^-1; this reads as ${r.value.detail} (use --eq or --b/--a).`,
       );
     }
-    return fromTf(r.value.tf, fs, '--tf', r.value.notes);
+    return withTyped(fromTf(r.value.tf, fs, '--tf', r.value.notes), tf);
   }
   const b = args.flags.get('b');
   if (b !== undefined) {
@@ -96,10 +130,10 @@ export function readDesign(args: ParsedArgs): CliDesign {
     const text = `b = [${b}]; a = [${a}]`;
     const r = parseCoefficients(text);
     if (!r.ok) throw parseFailure('b/--a', text, r.error);
-    return fromTf(r.value, fs, '--b/--a');
+    return withTyped(fromTf(r.value, fs, '--b/--a'), text);
   }
   if (args.flags.has('a')) throw new UsageError('--a was given without --b (the numerator).');
   throw new UsageError(
-    'No design given. Pass a design file, or --b "1,-2,1" --a "1,-1.6,0.64", or --eq "<difference equation>", or --tf "<H(z)>".',
+    'No design given. Pass a design file or a design link, or --b "1,-2,1" --a "1,-1.6,0.64", or --eq "<difference equation>", or --tf "<H(z)>".',
   );
 }
