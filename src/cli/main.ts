@@ -1,6 +1,7 @@
 /** The `polewright` command line: a thin front end on the engine. */
 import { UsageError } from './args.ts';
 import { runAnalyze } from './commands/analyze.ts';
+import { runLink } from './commands/link.ts';
 import { runExport } from './commands/export.ts';
 import { runResponse } from './commands/response.ts';
 import { runSimulate } from './commands/simulate.ts';
@@ -15,6 +16,7 @@ const COMMANDS: Record<string, (argv: string[], io: CliIo) => number | Promise<n
   analyze: runAnalyze,
   response: runResponse,
   simulate: runSimulate,
+  link: runLink,
   export: runExport,
   design: runDesign,
 };
@@ -32,8 +34,9 @@ usage:
                       [--data-word 8..32] [--accumulator N] [--rounding nearest|truncate] [--overflow saturate|wrap]
                       [--scaling linf|l2|l1|none] [--ordering ascending|descending] [--gain first|spread]
                       [--pairing nearest|keep-odd] [--feedback denominator|negated] [--name <C prefix>] [--out <file>]
+  polewright link     <design> [--base URL]       (prints a workbench link; default base http://127.0.0.1:5173/)
 
-<design> is a design file saved from the workbench, or one of:
+<design> is a design file saved from the workbench, a design link (a URL with #pw1.…), or one of:
   --b "1,0,-1" --a "1,-1.6,0.64"      coefficients of z^0, z^-1, z^-2, ...
   --eq "y[n] = 1.6y[n-1] - 0.64y[n-2] + x[n] - x[n-2]"
   --tf "(z^2 - 1)/(z^2 - 1.6z + 0.64)"
