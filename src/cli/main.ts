@@ -6,7 +6,6 @@ import { runExport } from './commands/export.ts';
 import { runResponse } from './commands/response.ts';
 import { runSimulate } from './commands/simulate.ts';
 import { runDesign } from './commands/design.ts';
-import { runDesign } from './commands/design.ts';
 
 export interface CliIo {
   stdout: (s: string) => void;
@@ -17,7 +16,6 @@ const COMMANDS: Record<string, (argv: string[], io: CliIo) => number | Promise<n
   analyze: runAnalyze,
   response: runResponse,
   simulate: runSimulate,
-  design: runDesign,
   link: runLink,
   export: runExport,
   design: runDesign,
@@ -28,7 +26,6 @@ export const USAGE = `polewright — digital filter analysis on the command line
 usage:
   polewright analyze  <design> [--json]
   polewright response <design> [--points N] [--log] [--json]
-  polewright design   <kind> [parameters] [--json] [--out design.json]   (kinds and flags: polewright design --help)
   polewright design   <kind> [parameters] [--json] [--out design.json]   (kinds and flags: polewright design --help)
   polewright simulate <design> [--input impulse|step|sine:<Hz>|<file.csv>|<file.wav>] [--samples N] [--json]
                       [--output <file.wav|file.csv>] [--output-format u8|i16|i24|i32|f32|f64]
