@@ -39,23 +39,30 @@ export interface DataPath {
  */
 export const DOUBLE_PATH_MAX_BITS = 50;
 
-function fitNumber(v: number, bits: number, overflow: Overflow): number {
-  const half = 2 ** (bits - 1);
-  if (v >= -half && v < half) return v;
-  if (overflow === 'saturate') return v < 0 ? -half : half - 1;
-  const span = 2 * half;
-  return v - span * Math.floor((v + half) / span);
-}
-
 class NumberArith implements Arith<number> {
   readonly zero = 0;
   accOverflow = false;
   dataOverflow = false;
   private readonly scale: number;
   private readonly half: number;
-  constructor(private readonly p: DataPath) {
+  private readonly nearest: boolean;
+  private readonly saturate: boolean;
+  /** Whether sums can reach the accumulator's limits at all (see DOUBLE_PATH_MAX_BITS). */
+  private readonly accLimited: boolean;
+  private readonly accMin: number;
+  private readonly accMax: number;
+  private readonly dataMin: number;
+  private readonly dataMax: number;
+  constructor(p: DataPath) {
     this.scale = 2 ** p.postShift;
     this.half = p.postShift > 0 ? 2 ** (p.postShift - 1) : Infinity;
+    this.nearest = p.rounding === 'nearest';
+    this.saturate = p.overflow === 'saturate';
+    this.accLimited = p.accumulatorBits <= 52;
+    this.accMin = -(2 ** (p.accumulatorBits - 1));
+    this.accMax = 2 ** (p.accumulatorBits - 1) - 1;
+    this.dataMin = -(2 ** (p.dataBits - 1));
+    this.dataMax = 2 ** (p.dataBits - 1) - 1;
   }
   product(c: number, x: number): number {
     return c * x;
@@ -63,20 +70,23 @@ class NumberArith implements Arith<number> {
   negate(v: number): number {
     return -v;
   }
+  private fit(v: number, min: number, max: number): number {
+    if (this.saturate) return v < min ? min : max;
+    const span = max - min + 1;
+    return v - span * Math.floor((v - min) / span);
+  }
   add(acc: number, v: number): number {
     const s = acc + v;
-    // Past 52 bits no sum of this path can reach the accumulator's limits (see DOUBLE_PATH_MAX_BITS).
-    if (this.p.accumulatorBits > 52) return s;
-    const f = fitNumber(s, this.p.accumulatorBits, this.p.overflow);
-    if (f !== s) this.accOverflow = true;
-    return f;
+    if (!this.accLimited || (s >= this.accMin && s <= this.accMax)) return s;
+    this.accOverflow = true;
+    return this.fit(s, this.accMin, this.accMax);
   }
   toData(acc: number): number {
     const q = Math.floor(acc / this.scale);
-    const r = this.p.rounding === 'nearest' && acc - q * this.scale >= this.half ? q + 1 : q;
-    const f = fitNumber(r, this.p.dataBits, this.p.overflow);
-    if (f !== r) this.dataOverflow = true;
-    return f;
+    const r = this.nearest && acc - q * this.scale >= this.half ? q + 1 : q;
+    if (r >= this.dataMin && r <= this.dataMax) return r;
+    this.dataOverflow = true;
+    return this.fit(r, this.dataMin, this.dataMax);
   }
 }
 
