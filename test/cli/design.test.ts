@@ -419,8 +419,27 @@ describe('polewright design --out', () => {
     if (!read.ok) throw new Error(read.message);
     expect(read.design.sampleRate).toBe(1000);
     expect(read.design.gainRule).toEqual({ kind: 'fixed', value: printed.gain });
+    // The file keeps the designer (to re-run it in the workbench) and the requirement's mask.
+    expect(read.design.designer).toEqual(printed.designer);
+    expect(read.design.mask).toEqual(printed.mask);
+    expect(read.design.mask?.regions.map((x) => x.id)).toEqual(['pass', 'stop']);
     const analysed = await json(['analyze', file]);
     expectClose(analysed.a, printed.a, { rel: 1e-12, abs: 1e-15 }, 'a');
     expectClose(analysed.b, printed.b, { rel: 1e-12, abs: 1e-15 }, 'b');
+  });
+
+  it('every kind of designer round-trips through a file', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'polewright-kinds-'));
+    const help = (await run(['design', '--help'])).stdout;
+    const examples = [...help.matchAll(/^ {2}\S+ +polewright (design .*)$/gm)].map((m) => m[1]!.split(' '));
+    expect(examples).toHaveLength(12);
+    for (const [i, argv] of examples.entries()) {
+      const file = join(dir, `${i}.json`);
+      const r = await run([...argv, '--out', file, '--json']);
+      expect(r.code, argv.join(' ')).toBe(0);
+      const read = readDesignFile(readFileSync(file, 'utf8'));
+      if (!read.ok) throw new Error(`${argv.join(' ')}: ${read.message}`);
+      expect(read.design.designer, argv.join(' ')).toEqual(JSON.parse(r.stdout).designer);
+    }
   });
 });
