@@ -6,6 +6,7 @@ import type { Root } from '../core/types.ts';
 import type { GainRule } from '../core/gainRule.ts';
 import type { DesignerSpec } from '../core/design/index.ts';
 import type { RequirementMask } from '../core/mask.ts';
+import type { ImplementationSettings } from '../core/fixed/index.ts';
 
 export type { GainRule } from '../core/gainRule.ts';
 
@@ -32,6 +33,8 @@ export interface Design {
   designer?: DesignerSpec;
   /** The requirement mask the magnitude response is judged against. */
   mask?: RequirementMask;
+  /** How the design is taken to the target (sections, fixed point); absent while only the ideal filter matters. */
+  implementation?: ImplementationSettings;
 }
 
 export type RootKind = 'zero' | 'pole';

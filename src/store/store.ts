@@ -11,6 +11,7 @@ import { closeGesture, emptyHistory, recordEdit, type History } from './history.
 import * as edits from './rootEdits.ts';
 import { defaultView, type ViewSettings, type ViewState } from './view.ts';
 import { designerActions, type DesignerActions } from './designer.ts';
+import { implementationActions, type ImplementationActions } from './implementation.ts';
 
 export interface DesignActions {
   moveRoot(ref: RootRef, re: number, im: number): void;
@@ -51,7 +52,7 @@ export interface ViewActions {
 }
 
 export interface WorkbenchState
-  extends ViewState, DesignActions, HistoryActions, ViewActions, DesignerActions {
+  extends ViewState, DesignActions, HistoryActions, ViewActions, DesignerActions, ImplementationActions {
   design: Design;
   history: History;
 }
@@ -106,6 +107,7 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
       },
       setName: (name) => edit((d) => (d.name === name ? d : { ...d, name })),
       ...designerActions(get, edit, () => set({ selection: null })),
+      ...implementationActions(get, edit),
 
       beginGesture: () => {
         const { history, design } = get();

@@ -33,6 +33,8 @@ export interface ViewSettings {
   planeCentre: { re: number; im: number };
   /** Angle unit for editing a root by number. */
   angleUnit: 'deg' | 'rad' | 'hz';
+  /** Draw the fixed-point filter over the ideal one (plane, magnitude) while the design has implementation settings; absent = true. */
+  showQuantized?: boolean;
 }
 
 export const defaultView: ViewSettings = {

@@ -1,0 +1,111 @@
+/**
+ * Derived data of the implementation (sections, fixed point), computed by the engine and memoised on the
+ * identity of its inputs, like derived.ts. The word-length search and the simulation are the costly ones:
+ * the page asks for them only while it is open, and not at all during a drag.
+ */
+import {
+  buildImplementation,
+  detectLimitCycle,
+  inputSignal,
+  quantizedResponse,
+  simulateFixed,
+  smallestWordLength,
+  type FixedSimulation,
+  type Implementation,
+  type ImplementationSettings,
+  type LimitCycleReport,
+  type SignalSpec,
+  type WordLengthSearch,
+} from '../core/fixed/index.ts';
+import { buildCascade, type Cascade } from '../core/sections/index.ts';
+import type { FrequencyResponse } from '../core/response.ts';
+import type { Stability } from '../core/stability.ts';
+import type { Result, Zpk } from '../core/types.ts';
+import { evaluateMask, type MaskResult, type RequirementMask } from '../core/mask.ts';
+import { memoLast } from './memo.ts';
+import { implementationOf } from './implementation.ts';
+import { selectResponse, selectZpk } from './derived.ts';
+import type { WorkbenchState } from './store.ts';
+
+const cascadeOf = memoLast(
+  (
+    zpk: Zpk,
+    pairing: ImplementationSettings['pairing'],
+    ordering: ImplementationSettings['ordering'],
+    gain: ImplementationSettings['gainDistribution'],
+    scaling: ImplementationSettings['scaling'],
+  ): Cascade => buildCascade(zpk, { pairing, ordering, gain, scaling }),
+);
+const implementationOfZpk = memoLast(
+  (zpk: Zpk, fs: number, settings: ImplementationSettings): Result<Implementation> => {
+    const c = cascadeOf(
+      zpk,
+      settings.pairing,
+      settings.ordering,
+      settings.gainDistribution,
+      settings.scaling,
+    );
+    return buildImplementation(zpk, fs, settings, c);
+  },
+);
+const responseOf = memoLast((impl: Implementation | null, omega: Float64Array) =>
+  impl ? quantizedResponse(impl, omega) : null,
+);
+const maskOf = memoLast((mask: RequirementMask | undefined, impl: Implementation | null, fs: number) =>
+  mask && impl ? evaluateMask(mask, impl.quantizedZpk, fs) : null,
+);
+const searchOf = memoLast(
+  (zpk: Zpk, fs: number, settings: ImplementationSettings, mask: RequirementMask | undefined) =>
+    smallestWordLength(zpk, fs, settings, mask ? ({ zpk: q }) => evaluateMask(mask, q, fs).pass : undefined),
+);
+
+/** A fixed-point run and what the cascade did afterwards with the input at zero. */
+export interface SimulationReport {
+  simulation: FixedSimulation;
+  /** Zero-input behaviour after this input: rest, a limit cycle (period, amplitude) or undecided. */
+  afterInput: LimitCycleReport;
+}
+const simulationOf = memoLast((impl: Implementation, spec: SignalSpec, fs: number): SimulationReport => {
+  const simulation = simulateFixed(impl, inputSignal(spec, fs));
+  return { simulation, afterInput: detectLimitCycle(impl, simulation.input) };
+});
+
+/** The implementation settings in force (the design's, or the defaults when it has none). */
+export const selectImplementationSettings = (s: WorkbenchState): ImplementationSettings =>
+  implementationOf(s.design);
+/** Whether the design carries implementation settings (then the quantized filter is drawn). */
+export const selectHasImplementation = (s: WorkbenchState): boolean => s.design.implementation !== undefined;
+/** Whether the quantized roots and response are drawn now: settings present and "show quantized" on. */
+export const selectShowQuantized = (s: WorkbenchState): boolean =>
+  s.design.implementation !== undefined && s.view.showQuantized !== false;
+
+/** The design taken to fixed point with the settings in force, or why the settings do not apply. */
+export const selectImplementation = (s: WorkbenchState): Result<Implementation> =>
+  implementationOfZpk(selectZpk(s), s.design.sampleRate, selectImplementationSettings(s));
+const implOrNull = (s: WorkbenchState): Implementation | null => {
+  const r = selectImplementation(s);
+  return r.ok ? r.value : null;
+};
+/** The float cascade of second-order sections (ordered, gain-distributed, scaled) for the settings in force. */
+export const selectCascade = (s: WorkbenchState): Cascade | null => implOrNull(s)?.cascade ?? null;
+/** The quantized filter's frequency response on the frequency view's grid, or null. */
+export const selectQuantizedResponse = (s: WorkbenchState): FrequencyResponse | null =>
+  responseOf(implOrNull(s), selectResponse(s).omega);
+/** Stability of the quantized filter, or null. */
+export const selectQuantizedStability = (s: WorkbenchState): Stability | null =>
+  implOrNull(s)?.stability ?? null;
+/** The design's mask judged on the quantized filter, or null (no mask, or settings that do not apply). */
+export const selectQuantizedMaskResult = (s: WorkbenchState): MaskResult | null =>
+  maskOf(s.design.mask, implOrNull(s), s.design.sampleRate);
+/** Smallest coefficient word length (8..32) giving a stable quantized filter inside the mask (if any). */
+export const selectWordLengthSearch = (s: WorkbenchState): WordLengthSearch =>
+  searchOf(selectZpk(s), s.design.sampleRate, selectImplementationSettings(s), s.design.mask);
+
+/**
+ * The bit-exact run of the implementation on a test input, with the zero-input check after it; null when the
+ * settings do not apply. `spec` must keep its identity between calls for the memo to hold.
+ */
+export function simulationReport(s: WorkbenchState, spec: SignalSpec): SimulationReport | null {
+  const impl = implOrNull(s);
+  return impl ? simulationOf(impl, spec, s.design.sampleRate) : null;
+}
