@@ -1,8 +1,9 @@
 import { defineConfig } from 'vite';
 import react from '@vitejs/plugin-react';
+import { contentSecurityPolicy } from './src/share/csp.ts';
 
 export default defineConfig({
-  plugins: [react()],
+  plugins: [react(), contentSecurityPolicy()],
   server: { port: 5173, strictPort: true, host: '127.0.0.1' },
   preview: { port: 4173, strictPort: true, host: '127.0.0.1' },
   build: { outDir: 'dist', sourcemap: true },

@@ -2,6 +2,11 @@
 import { z } from 'zod';
 import { MAX_MULTIPLICITY, MAX_ORDER, MAX_SAMPLE_RATE } from './limits.ts';
 
+// In the page, zod would probe `new Function` to compile fast validators; the page's CSP forbids eval and
+// the probe would log a violation. The interpreted path is fast enough for designs of bounded size. Node
+// (command line, tests) has no CSP and keeps the compiled validators.
+if (typeof document !== 'undefined') z.config({ jitless: true });
+
 /** A finite number (JSON has no NaN or infinity, and a link could smuggle them in). */
 export const finite = z.number().refine(Number.isFinite, 'must be a finite number');
 
