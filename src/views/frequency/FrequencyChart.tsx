@@ -19,6 +19,8 @@ import type { FrequencyReading } from './readAt.ts';
 import { refineAtRoots } from './refine.ts';
 import { RootMarker } from './RootMarker.tsx';
 import { MAGNITUDE_OVERLAYS } from './overlays.ts';
+import { MaskChip } from './mask/MaskChip.tsx';
+import { MaskHandles } from './mask/MaskHandles.tsx';
 import {
   DEG_PER_RAD,
   delaySeries,
@@ -182,8 +184,17 @@ export function FrequencyChart({ width, height, reading, onCursor, marker }: Fre
           start={startHz([d0, d1], axis)}
           onChange={onCursor}
         />
+        {magnitudePlot ? (
+          <MaskHandles
+            rect={magnitudePlot.rect}
+            xMap={xMap}
+            yMap={yMapOf(magnitudePlot.rect, ranges.magnitude)}
+            db={units.db}
+          />
+        ) : null}
       </svg>
       <PlotTitles layout={layout} second={second} onSecond={setSecond} />
+      {magnitudePlot ? <MaskChip rect={magnitudePlot.rect} /> : null}
     </>
   );
 }

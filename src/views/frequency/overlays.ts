@@ -6,6 +6,7 @@
 import type { ComponentType } from 'react';
 import type { AxisMap } from '../chart/pixels.ts';
 import type { PlotRect } from './layout.ts';
+import { MaskLayer } from './mask/MaskLayer.tsx';
 
 export interface MagnitudeOverlayProps {
   /** The magnitude plot's box in SVG pixels. */
@@ -23,4 +24,4 @@ export interface MagnitudeOverlay {
   Layer: ComponentType<MagnitudeOverlayProps>;
 }
 
-export const MAGNITUDE_OVERLAYS: MagnitudeOverlay[] = [];
+export const MAGNITUDE_OVERLAYS: MagnitudeOverlay[] = [{ id: 'mask', Layer: MaskLayer }];

@@ -1,0 +1,31 @@
+/** The mask's verdict in the magnitude plot's title row: pass or fail, the worst margin and where. */
+import { selectMaskResult } from '../../../store/derived.ts';
+import { useWorkbench } from '../../../store/useWorkbench.ts';
+import { formatHz, formatNumber } from '../../shared/format.ts';
+import type { PlotRect } from '../layout.ts';
+
+export function MaskChip({ rect }: { rect: PlotRect }) {
+  const result = useWorkbench(selectMaskResult);
+  if (!result || result.regions.length === 0) return null;
+  const failing = result.regions.filter((r) => !r.pass).length;
+  const m = result.worstMarginDb;
+  const margin = Number.isFinite(m) ? `${m >= 0 ? '+' : ''}${formatNumber(m, 3)} dB` : '';
+  const where = Number.isFinite(result.worstAtHz) ? ` at ${formatHz(result.worstAtHz)}` : '';
+  return (
+    <div
+      className={`pw-mask-chip ${result.pass ? 'pw-mask-ok' : 'pw-mask-fail'}`}
+      style={{ left: rect.right, top: rect.top - 19 }}
+      data-testid="mask-chip"
+      data-pass={result.pass}
+      title="Requirement mask: the worst margin (positive = inside the limits) and where it occurs"
+    >
+      <b role="status">
+        {result.pass ? '✓ Mask passes' : `✗ Mask fails (${failing} of ${result.regions.length})`}
+      </b>
+      <span>
+        {margin}
+        {where}
+      </span>
+    </div>
+  );
+}

@@ -1,0 +1,142 @@
+/**
+ * Drag handles for the requirement mask, drawn above the cross-hair area in the frequency chart: a strip
+ * over each region edge (drag left/right, Hz) and over each limit line (drag up/down, dB). A drag is one
+ * undo step (begin/endGesture around moveRegionEdge, which keeps the region valid). The handles are
+ * pointer-only; the Design page's table edits the same numbers from the keyboard.
+ */
+import { useMemo, useRef, useState, type PointerEvent } from 'react';
+import type { RegionEdge } from '../../../core/mask.ts';
+import { useWorkbench, workbenchStore } from '../../../store/useWorkbench.ts';
+import type { AxisMap } from '../../chart/pixels.ts';
+import type { PlotRect } from '../layout.ts';
+import { draggedValue, regionShapes } from './maskGeometry.ts';
+
+/** Thickness of a handle's grab strip, px. */
+const GRAB_PX = 8;
+
+export interface MaskHandlesProps {
+  rect: PlotRect;
+  xMap: AxisMap;
+  yMap: AxisMap;
+  db: boolean;
+}
+
+interface Drag {
+  id: string;
+  edge: RegionEdge;
+  /** Handle position minus pointer position at the press, px, so the edge does not jump to the pointer. */
+  offset: number;
+}
+
+const WORDS: Record<RegionEdge, string> = {
+  fromHz: 'lower frequency edge',
+  toHz: 'upper frequency edge',
+  upperDb: 'upper limit',
+  lowerDb: 'lower limit',
+};
+
+export function MaskHandles({ rect, xMap, yMap, db }: MaskHandlesProps) {
+  const mask = useWorkbench((s) => s.design.mask);
+  const drag = useRef<Drag | null>(null);
+  const [active, setActive] = useState<string | null>(null);
+  const shapes = useMemo(
+    () => (mask ? regionShapes(mask.regions, xMap, yMap, db, rect) : []),
+    [mask, xMap, yMap, db, rect],
+  );
+  if (shapes.length === 0) return null;
+
+  const pointer = (e: PointerEvent<SVGRectElement>, horizontal: boolean) => {
+    const box = e.currentTarget.ownerSVGElement?.getBoundingClientRect();
+    if (!box) return NaN;
+    return horizontal ? e.clientX - box.left : e.clientY - box.top;
+  };
+  const start = (e: PointerEvent<SVGRectElement>, id: string, edge: RegionEdge, at: number) => {
+    if (e.button !== 0) return;
+    e.preventDefault();
+    e.stopPropagation();
+    e.currentTarget.setPointerCapture(e.pointerId);
+    const horizontal = edge === 'fromHz' || edge === 'toHz';
+    drag.current = { id, edge, offset: at - pointer(e, horizontal) };
+    setActive(`${id}:${edge}`);
+    workbenchStore.getState().beginGesture();
+  };
+  const move = (e: PointerEvent<SVGRectElement>) => {
+    const d = drag.current;
+    if (!d) return;
+    const horizontal = d.edge === 'fromHz' || d.edge === 'toHz';
+    const v = draggedValue(d.edge, pointer(e, horizontal) + d.offset, xMap, yMap, db);
+    workbenchStore.getState().moveRegionEdge(d.id, d.edge, v);
+  };
+  const end = () => {
+    if (!drag.current) return;
+    drag.current = null;
+    setActive(null);
+    workbenchStore.getState().endGesture();
+  };
+  const handle = (id: string, edge: RegionEdge, at: number, x: number, y: number, w: number, h: number) => (
+    <rect
+      key={edge + at}
+      className={`pw-mask-handle ${edge.endsWith('Hz') ? 'pw-mask-handle-x' : 'pw-mask-handle-y'}${
+        active === `${id}:${edge}` ? ' pw-dragging' : ''
+      }`}
+      data-region={id}
+      data-edge={edge}
+      x={x}
+      y={y}
+      width={Math.max(1, w)}
+      height={Math.max(1, h)}
+      onPointerDown={(e) => start(e, id, edge, at)}
+      onPointerMove={move}
+      onPointerUp={end}
+      onPointerCancel={end}
+      onLostPointerCapture={end}
+    >
+      <title>{`Drag the ${WORDS[edge]} of region ${id}`}</title>
+    </rect>
+  );
+
+  return (
+    <g className="pw-mask-handles" data-testid="mask-handles" aria-hidden="true">
+      {shapes.map((s) => {
+        const inPlot = s.limits.filter((l) => l.y >= rect.top - 1 && l.y <= rect.bottom + 1);
+        // Edge strips span the forbidden zones (where the shading is), at least a grab's height.
+        const tops = s.limits.map((l) => l.zoneTop);
+        const bottoms = s.limits.map((l) => l.zoneBottom);
+        let top = Math.min(...tops);
+        let bottom = Math.max(...bottoms);
+        if (bottom - top < 3 * GRAB_PX) {
+          const mid = Math.min(
+            rect.bottom - 1.5 * GRAB_PX,
+            Math.max(rect.top + 1.5 * GRAB_PX, (top + bottom) / 2),
+          );
+          top = mid - 1.5 * GRAB_PX;
+          bottom = mid + 1.5 * GRAB_PX;
+        }
+        // A narrow region splits its width between its two edge strips; limit strips go on top.
+        const narrow = s.x1 - s.x0 < 2 * GRAB_PX;
+        const mid = (s.x0 + s.x1) / 2;
+        const g = GRAB_PX / 2;
+        const inset = narrow ? 0 : g;
+        return (
+          <g key={s.id}>
+            {s.x0Visible &&
+              handle(s.id, 'fromHz', s.x0, s.x0 - g, top, narrow ? mid - s.x0 + g : GRAB_PX, bottom - top)}
+            {s.x1Visible &&
+              handle(
+                s.id,
+                'toHz',
+                s.x1,
+                narrow ? mid : s.x1 - g,
+                top,
+                narrow ? s.x1 + g - mid : GRAB_PX,
+                bottom - top,
+              )}
+            {inPlot.map((l) =>
+              handle(s.id, l.edge, l.y, s.x0 + inset, l.y - g, s.x1 - s.x0 - 2 * inset, GRAB_PX),
+            )}
+          </g>
+        );
+      })}
+    </g>
+  );
+}

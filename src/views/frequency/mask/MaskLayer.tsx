@@ -1,0 +1,97 @@
+/**
+ * The requirement mask in the magnitude plot (an overlay, no pointer events): hatched forbidden zones
+ * beyond each region's limits, the limit lines, failing regions in the danger colour with their worst
+ * point marked, and the tightest point marked when everything passes.
+ */
+import { useId, useMemo } from 'react';
+import { selectMaskResult } from '../../../store/derived.ts';
+import { useWorkbench } from '../../../store/useWorkbench.ts';
+import { toPixel } from '../../chart/pixels.ts';
+import { formatNumber } from '../../shared/format.ts';
+import type { MagnitudeOverlayProps } from '../overlays.ts';
+import { levelToY, regionShapes } from './maskGeometry.ts';
+import './mask.css';
+
+export function MaskLayer({ rect, xMap, yMap, db }: MagnitudeOverlayProps) {
+  const mask = useWorkbench((s) => s.design.mask);
+  const result = useWorkbench(selectMaskResult);
+  const uid = useId().replace(/:/g, '');
+  const shapes = useMemo(
+    () => (mask ? regionShapes(mask.regions, xMap, yMap, db, rect) : []),
+    [mask, xMap, yMap, db, rect],
+  );
+  if (!mask || !result || shapes.length === 0) return null;
+  const verdict = new Map(result.regions.map((r) => [r.id, r]));
+  const marks = result.regions.filter((r) => (result.pass ? r.id === result.worstRegionId : !r.pass));
+  return (
+    <g className="pw-mask" data-testid="mask-layer" data-pass={result.pass}>
+      <defs>
+        {(['ok', 'fail'] as const).map((tone) => (
+          <pattern
+            key={tone}
+            id={`${uid}-${tone}`}
+            width={6}
+            height={6}
+            patternUnits="userSpaceOnUse"
+            patternTransform="rotate(45)"
+          >
+            <line x1={0} y1={0} x2={0} y2={6} className={`pw-mask-hatch-${tone}`} />
+          </pattern>
+        ))}
+      </defs>
+      {shapes.map((s) => {
+        const fail = verdict.get(s.id)?.pass === false;
+        const tone = fail ? 'fail' : 'ok';
+        return (
+          <g key={s.id} className={`pw-mask-region pw-mask-${tone}`} data-region={s.id} data-pass={!fail}>
+            {s.limits.map((l) => (
+              <g key={l.edge}>
+                {l.zoneBottom > l.zoneTop && (
+                  <>
+                    <rect
+                      className="pw-mask-zone"
+                      x={s.x0}
+                      y={l.zoneTop}
+                      width={s.x1 - s.x0}
+                      height={l.zoneBottom - l.zoneTop}
+                    />
+                    <rect
+                      x={s.x0}
+                      y={l.zoneTop}
+                      width={s.x1 - s.x0}
+                      height={l.zoneBottom - l.zoneTop}
+                      fill={`url(#${uid}-${tone})`}
+                    />
+                  </>
+                )}
+                {l.y >= rect.top && l.y <= rect.bottom && (
+                  <line className="pw-mask-limit" x1={s.x0} x2={s.x1} y1={l.y} y2={l.y} />
+                )}
+              </g>
+            ))}
+          </g>
+        );
+      })}
+      {marks.map((r) => {
+        const x = toPixel(xMap, r.worstAtHz);
+        const y = levelToY(yMap, r.worstDb, db);
+        if (!Number.isFinite(x) || !Number.isFinite(y)) return null;
+        const cy = Math.min(rect.bottom - 4, Math.max(rect.top + 4, y));
+        const right = x < (rect.left + rect.right) / 2;
+        const text = `${r.worstMarginDb >= 0 ? '+' : ''}${formatNumber(r.worstMarginDb, 3)} dB`;
+        return (
+          <g
+            key={r.id}
+            className={`pw-mask-worst ${r.pass ? 'pw-mask-ok' : 'pw-mask-fail'}`}
+            data-testid={`mask-worst-${r.id}`}
+          >
+            <circle cx={x} cy={cy} r={4.5} />
+            <text x={right ? x + 8 : x - 8} y={cy - 6} textAnchor={right ? 'start' : 'end'}>
+              {text}
+            </text>
+          </g>
+        );
+      })}
+    </g>
+  );
+}

@@ -1,0 +1,188 @@
+/**
+ * The requirement mask by number: one row per region (kind, range in Hz, limits in dB, its live verdict),
+ * buttons to add regions, to build the mask from the designer's requirement, and to remove it.
+ */
+import { useMemo, useState } from 'react';
+import type { MaskRegion, MaskRegionKind, MaskRegionPatch } from '../../../core/mask.ts';
+import { selectDesignerStatus, selectMaskResult } from '../../../store/derived.ts';
+import { useWorkbench, workbenchStore } from '../../../store/useWorkbench.ts';
+import { MaskCell } from './MaskCell.tsx';
+import { maskVerdictText, regionVerdictText } from './maskText.ts';
+import { requirementMaskOf } from './requirementMask.ts';
+import { errorText } from './designErrors.ts';
+
+const store = () => workbenchStore.getState();
+const r3 = (v: number) => Number(v.toPrecision(3));
+
+/** The patch that turns a region into another kind, giving it the limit that kind needs. */
+function kindPatch(region: MaskRegion, kind: MaskRegionKind): MaskRegionPatch {
+  if (kind === 'stop') return { kind, lowerDb: undefined, upperDb: region.upperDb ?? -40 };
+  if (kind === 'pass') return { kind, lowerDb: region.lowerDb ?? -1 };
+  return { kind };
+}
+
+function RegionRow({ region, index }: { region: MaskRegion; index: number }) {
+  const verdict = useWorkbench((s) => selectMaskResult(s)?.regions.find((r) => r.id === region.id));
+  const [error, setError] = useState<string | null>(null);
+  const name = `Region ${index + 1}`;
+  const commit = (patch: MaskRegionPatch) => {
+    const r = store().updateRegion(region.id, patch);
+    return r.ok ? null : errorText(r.error);
+  };
+  const cell = (key: 'fromHz' | 'toHz' | 'lowerDb' | 'upperDb', what: string) => (
+    <td>
+      <MaskCell
+        name={`${name} ${what}`}
+        value={region[key]}
+        optional={key === 'lowerDb' || key === 'upperDb'}
+        onCommit={(v) => commit({ [key]: v })}
+        onError={setError}
+      />
+    </td>
+  );
+  const failing = verdict ? !verdict.pass : false;
+  return (
+    <>
+      <tr className={failing ? 'pw-dz-fail' : undefined} data-testid={`mask-row-${region.id}`}>
+        <td>
+          <select
+            aria-label={`${name} kind`}
+            value={region.kind}
+            onChange={(e) => setError(commit(kindPatch(region, e.target.value as MaskRegionKind)))}
+          >
+            <option value="pass">pass</option>
+            <option value="stop">stop</option>
+            <option value="band">band</option>
+          </select>
+        </td>
+        {cell('fromHz', 'from (Hz)')}
+        {cell('toHz', 'to (Hz)')}
+        {cell('lowerDb', 'lower limit (dB)')}
+        {cell('upperDb', 'upper limit (dB)')}
+        <td>
+          <button
+            type="button"
+            className="pw-dz-x"
+            aria-label={`Delete ${name.toLowerCase()}`}
+            title="Delete this region"
+            onClick={() => store().deleteRegion(region.id)}
+          >
+            ×
+          </button>
+        </td>
+      </tr>
+      <tr className={`pw-dz-verdict-row${failing ? ' pw-dz-fail' : ''}`}>
+        <td colSpan={6}>
+          {verdict && (
+            <span
+              className={verdict.pass ? 'pw-dz-ok' : 'pw-dz-bad'}
+              data-testid={`mask-verdict-${region.id}`}
+              data-pass={verdict.pass}
+            >
+              {verdict.pass ? '✓' : '✗'} {regionVerdictText(verdict)}
+            </span>
+          )}
+          {region.label && <span className="pw-hint"> · {region.label}</span>}
+          {error && (
+            <span role="alert" className="pw-field-error pw-block">
+              {error}
+            </span>
+          )}
+        </td>
+      </tr>
+    </>
+  );
+}
+
+export function MaskSection() {
+  const mask = useWorkbench((s) => s.design.mask);
+  const fs = useWorkbench((s) => s.design.sampleRate);
+  const result = useWorkbench(selectMaskResult);
+  const status = useWorkbench(selectDesignerStatus);
+  const implied = useMemo(() => (status ? requirementMaskOf(status.spec) : null), [status]);
+  const [error, setError] = useState<string | null>(null);
+  const add = (kind: 'pass' | 'stop') => {
+    const region =
+      kind === 'pass'
+        ? { kind, fromHz: 0, toHz: r3(0.05 * fs), lowerDb: -1, upperDb: 1 }
+        : { kind, fromHz: r3(0.35 * fs), toHz: fs / 2, upperDb: -40 };
+    const r = store().addRegion(region);
+    setError(r.ok ? null : errorText(r.error));
+  };
+  const regions = mask?.regions ?? [];
+  return (
+    <section className="pw-side-section pw-dz" aria-labelledby="pw-dz-mask-h" data-testid="mask-section">
+      <div className="pw-section-head">
+        <h2 id="pw-dz-mask-h">Requirement mask</h2>
+        {result && regions.length > 0 && (
+          <span
+            className={`pw-dz-chip ${result.pass ? 'pw-dz-ok' : 'pw-dz-bad'}`}
+            data-testid="mask-overall"
+            data-pass={result.pass}
+          >
+            {result.pass ? 'passes' : 'fails'}
+          </span>
+        )}
+      </div>
+      {result && regions.length > 0 ? (
+        <p className="pw-dz-note">{maskVerdictText(result)}</p>
+      ) : (
+        <p className="pw-hint pw-dz-note">
+          No mask. Add pass and stop regions (frequency range and limits in dB) and the response is judged
+          live, also while you drag roots; drag a region's edges on the magnitude plot.
+        </p>
+      )}
+      {regions.length > 0 && (
+        <table className="pw-dz-mask">
+          <thead>
+            <tr>
+              <th>Kind</th>
+              <th>From Hz</th>
+              <th>To Hz</th>
+              <th title="The response must stay above this">Lower dB</th>
+              <th title="The response must stay below this">Upper dB</th>
+              <th>
+                <span className="pw-visually-hidden">Delete</span>
+              </th>
+            </tr>
+          </thead>
+          <tbody>
+            {regions.map((r, i) => (
+              <RegionRow key={r.id} region={r} index={i} />
+            ))}
+          </tbody>
+        </table>
+      )}
+      <div className="pw-dz-buttons pw-dz-actions">
+        <button type="button" onClick={() => add('pass')}>
+          Add pass region
+        </button>
+        <button type="button" onClick={() => add('stop')}>
+          Add stop region
+        </button>
+        <button
+          type="button"
+          disabled={!implied}
+          title={
+            implied
+              ? "Replace the mask by the one the designer's requirement implies"
+              : 'Design a notch or a classical filter with a requirement first'
+          }
+          onClick={() => implied && store().setMask(implied)}
+        >
+          Mask from requirement
+        </button>
+        {mask && (
+          <button type="button" onClick={() => store().setMask(null)}>
+            Remove mask
+          </button>
+        )}
+      </div>
+      {error && (
+        <p role="alert" className="pw-field-error">
+          {error}
+        </p>
+      )}
+    </section>
+  );
+}
