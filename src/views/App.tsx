@@ -4,6 +4,7 @@ import { useEffect } from 'react';
 import { workbenchStore } from '../store/useWorkbench.ts';
 import { FrequencyPanel } from './frequency/FrequencyPanel.tsx';
 import { ZPlanePanel } from './plane/ZPlanePanel.tsx';
+import { FileDrop } from './shared/FileDrop.tsx';
 import { PanelBoundary } from './shared/PanelBoundary.tsx';
 import { installTestProbe } from './shared/testProbe.ts';
 import { Caution } from './shell/Caution.tsx';
@@ -45,6 +46,7 @@ export function App() {
         </aside>
       </main>
       <Caution />
+      <FileDrop />
     </div>
   );
 }

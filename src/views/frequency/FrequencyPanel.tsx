@@ -3,6 +3,7 @@ import { useMemo, useRef, useState } from 'react';
 import { selectZpk } from '../../store/derived.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 import { useElementSize } from '../chart/useElementSize.ts';
+import { PictureMenu } from '../pictures/PictureMenu.tsx';
 import { FrequencyChart } from './FrequencyChart.tsx';
 import { FrequencyControls } from './FrequencyControls.tsx';
 import { FrequencyReadout } from './FrequencyReadout.tsx';
@@ -29,6 +30,7 @@ export function FrequencyPanel() {
       <header className="pw-freq-head">
         <h2>Response</h2>
         <FrequencyControls />
+        <PictureMenu view="frequency" />
       </header>
       <FrequencyReadout reading={reading} phaseMode={phaseMode} />
       <div className="pw-chart-box" ref={box}>

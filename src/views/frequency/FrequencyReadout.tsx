@@ -1,4 +1,5 @@
 /** The cross-hair read-out: exact values at the cross-hair frequency, in every unit the plots offer. */
+import { ReferenceReading } from '../compare/ReferenceReading.tsx';
 import { formatDb, formatHz, formatNumber } from '../shared/format.ts';
 import type { FrequencyReading } from './readAt.ts';
 import { DEG_PER_RAD } from './series.ts';
@@ -50,6 +51,7 @@ export function FrequencyReadout({ reading, phaseMode }: FrequencyReadoutProps) 
       <Item label="delay" id="delay">
         {`${formatNumber(reading.groupDelay, 4)} samples = ${formatNumber(reading.groupDelayMs, 4)} ms`}
       </Item>
+      <ReferenceReading hz={reading.hz} magnitudeDb={reading.magnitudeDb} />
     </div>
   );
 }

@@ -7,6 +7,7 @@ import type { ComponentType } from 'react';
 import type { AxisMap } from '../chart/pixels.ts';
 import type { PlotRect } from './layout.ts';
 import { MaskLayer } from './mask/MaskLayer.tsx';
+import { ReferenceTrace } from './ReferenceTrace.tsx';
 
 export interface MagnitudeOverlayProps {
   /** The magnitude plot's box in SVG pixels. */
@@ -24,4 +25,7 @@ export interface MagnitudeOverlay {
   Layer: ComponentType<MagnitudeOverlayProps>;
 }
 
-export const MAGNITUDE_OVERLAYS: MagnitudeOverlay[] = [{ id: 'mask', Layer: MaskLayer }];
+export const MAGNITUDE_OVERLAYS: MagnitudeOverlay[] = [
+  { id: 'reference', Layer: ReferenceTrace },
+  { id: 'mask', Layer: MaskLayer },
+];

@@ -1,6 +1,7 @@
 /** The plane's toolbar: add roots, snapping, and the |H| shading switch (zoom floats on the plane). */
 import type { MouseEvent } from 'react';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
+import { PictureMenu } from '../pictures/PictureMenu.tsx';
 import { SnapControl } from './SnapControl.tsx';
 import type { Placement } from './usePlanePointer.ts';
 
@@ -54,6 +55,7 @@ export function PlaneToolbar({ placing, setPlacing, addAtDefault }: Props) {
         |H| shading
       </label>
       <SnapControl />
+      <PictureMenu view="plane" />
     </div>
   );
 }

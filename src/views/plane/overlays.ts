@@ -5,6 +5,7 @@
  */
 import type { ComponentType } from 'react';
 import type { PlaneScale } from './geometry.ts';
+import { ReferenceRoots } from './ReferenceRoots.tsx';
 
 export interface PlaneOverlayProps {
   scale: PlaneScale;
@@ -15,4 +16,4 @@ export interface PlaneOverlay {
   Layer: ComponentType<PlaneOverlayProps>;
 }
 
-export const PLANE_OVERLAYS: PlaneOverlay[] = [];
+export const PLANE_OVERLAYS: PlaneOverlay[] = [{ id: 'reference', Layer: ReferenceRoots }];

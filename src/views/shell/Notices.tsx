@@ -1,7 +1,46 @@
-/** Messages from sharing and saving (a link that could not be opened, …), shown as plain text. */
+/**
+ * Messages from sharing and saving (a link that could not be opened, a file that was opened, …), shown
+ * as plain text over the page. Errors stay until dismissed; information fades after a while unless the
+ * pointer or focus is on it.
+ */
 import './notices.css';
+import { useEffect, useState } from 'react';
 import { useStore } from 'zustand';
-import { dismissNotice, noticeStore } from '../../share/notices.ts';
+import { dismissNotice, noticeStore, type Notice } from '../../share/notices.ts';
+
+/** How long an information notice stays, ms. */
+export const INFO_NOTICE_MS = 8000;
+
+function NoticeItem({ notice }: { notice: Notice }) {
+  const [held, setHeld] = useState(false);
+  useEffect(() => {
+    if (notice.tone !== 'info' || held) return;
+    const t = window.setTimeout(() => dismissNotice(notice.id), INFO_NOTICE_MS);
+    return () => window.clearTimeout(t);
+  }, [notice, held]);
+  return (
+    <p
+      className={`pw-notice pw-notice-${notice.tone}`}
+      role={notice.tone === 'error' ? 'alert' : 'status'}
+      data-testid="notice"
+      data-tone={notice.tone}
+      onPointerEnter={() => setHeld(true)}
+      onPointerLeave={() => setHeld(false)}
+      onFocus={() => setHeld(true)}
+      onBlur={() => setHeld(false)}
+    >
+      <span>{notice.text}</span>
+      <button
+        type="button"
+        className="pw-small-button"
+        onClick={() => dismissNotice(notice.id)}
+        aria-label="Dismiss message"
+      >
+        ×
+      </button>
+    </p>
+  );
+}
 
 export function Notices() {
   const notices = useStore(noticeStore, (s) => s.notices);
@@ -9,22 +48,7 @@ export function Notices() {
   return (
     <div className="pw-notices">
       {notices.map((n) => (
-        <p
-          key={n.id}
-          className={`pw-notice pw-notice-${n.tone}`}
-          role={n.tone === 'error' ? 'alert' : 'status'}
-          data-testid="notice"
-        >
-          <span>{n.text}</span>
-          <button
-            type="button"
-            className="pw-small-button"
-            onClick={() => dismissNotice(n.id)}
-            aria-label="Dismiss message"
-          >
-            ×
-          </button>
-        </p>
+        <NoticeItem key={n.id} notice={n} />
       ))}
     </div>
   );

@@ -4,6 +4,7 @@
  */
 import type { ComponentType } from 'react';
 import { SystemPage } from './SystemPage.tsx';
+import { FilesPage } from './files/FilesPage.tsx';
 import { DesignPage } from './design/DesignPage.tsx';
 
 export interface SidePage {
@@ -18,4 +19,5 @@ export interface SidePage {
 export const SIDE_PAGES: SidePage[] = [
   { id: 'system', label: 'System', title: 'Type a system, set the gain, read each root', Page: SystemPage },
   { id: 'design', label: 'Design', title: 'Design from a requirement; edit the mask', Page: DesignPage },
+  { id: 'files', label: 'Keep & share', title: 'Links, files, library, compare, pictures', Page: FilesPage },
 ];

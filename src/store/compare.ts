@@ -1,0 +1,137 @@
+/**
+ * The pinned reference design, drawn faintly under the current one for comparison. It is view state beside
+ * the workbench store, never part of the design's undo history: pinning or unpinning changes no filter.
+ * It is kept in browser storage (as a design file, through the share layer) so a reload keeps it.
+ */
+import { useStore } from 'zustand';
+import { createStore, type StoreApi } from 'zustand/vanilla';
+import { resolveGain } from '../core/gainRule.ts';
+import { frequencyGrid, responseZpk, type FrequencyResponse } from '../core/response.ts';
+import type { Zpk } from '../core/types.ts';
+import { readDesignFile, writeDesignFile } from '../share/designFile.ts';
+import { browserStorage, consoleWarn, type KeyValueStorage, type Warn } from '../share/storage.ts';
+import type { Design } from './design.ts';
+import { LOG_AXIS_MIN_FRACTION } from './derived.ts';
+import { memoLast } from './memo.ts';
+import type { ViewSettings } from './view.ts';
+
+export const REFERENCE_KEY = 'polewright.reference';
+
+export interface Reference {
+  /** A snapshot of the design as it was when pinned (designs are immutable, so no copy is needed). */
+  design: Design;
+  /** When it was pinned, ISO 8601. */
+  pinnedAt: string;
+}
+
+export interface CompareState {
+  reference: Reference | null;
+  pin(design: Design, now?: Date): void;
+  unpin(): void;
+}
+
+export type CompareStore = StoreApi<CompareState>;
+
+function parseKept(text: string): { pinnedAt?: unknown; file?: unknown } | null {
+  try {
+    const v: unknown = JSON.parse(text);
+    return typeof v === 'object' && v !== null ? v : null;
+  } catch {
+    return null;
+  }
+}
+
+function load(storage: KeyValueStorage, warn: Warn): Reference | null {
+  let text: string | null = null;
+  try {
+    text = storage.getItem(REFERENCE_KEY);
+  } catch {
+    return null;
+  }
+  if (text === null) return null;
+  const kept = parseKept(text);
+  const r = typeof kept?.file === 'string' ? readDesignFile(kept.file) : null;
+  if (!r?.ok || typeof kept?.pinnedAt !== 'string') {
+    warn(`the pinned reference design in browser storage is damaged and was dropped.`);
+    return null;
+  }
+  return { design: r.design, pinnedAt: kept.pinnedAt };
+}
+
+function save(storage: KeyValueStorage, ref: Reference | null, warn: Warn): void {
+  try {
+    if (!ref) storage.removeItem(REFERENCE_KEY);
+    else
+      // The design goes in as file text (a string), so its numbers keep the share layer's exact form.
+      storage.setItem(
+        REFERENCE_KEY,
+        JSON.stringify({ pinnedAt: ref.pinnedAt, file: writeDesignFile(ref.design) }),
+      );
+  } catch {
+    warn('the pinned reference could not be kept in browser storage; it lasts until the page closes.');
+  }
+}
+
+/** A reference store over the given storage (null: kept in memory only). */
+export function createCompareStore(storage: KeyValueStorage | null, warn: Warn = consoleWarn): CompareStore {
+  return createStore<CompareState>()((set) => ({
+    reference: storage ? load(storage, warn) : null,
+    pin: (design, now = new Date()) => {
+      const reference = { design, pinnedAt: now.toISOString() };
+      if (storage) save(storage, reference, warn);
+      set({ reference });
+    },
+    unpin: () => {
+      if (storage) save(storage, null, warn);
+      set({ reference: null });
+    },
+  }));
+}
+
+/** The page's reference store. */
+export const compareStore: CompareStore = createCompareStore(browserStorage());
+
+/** Reads a slice of the page's reference store. */
+export function useCompare<T>(selector: (s: CompareState) => T): T {
+  return useStore(compareStore, selector);
+}
+
+const zpkOf = memoLast((d: Design): Zpk => ({
+  zeros: d.zeros,
+  poles: d.poles,
+  gain: resolveGain(d.zeros, d.poles, d.gainRule, d.sampleRate).gain,
+}));
+
+/** The reference's zeros, poles and resolved gain. */
+export const selectReferenceZpk = (ref: Reference): Zpk => zpkOf(ref.design);
+
+/** The reference's response and the frequency of each point in Hz (at the reference's own sample rate). */
+export interface ReferenceResponse {
+  response: FrequencyResponse;
+  hz: Float64Array;
+}
+
+const responseOf = memoLast(
+  (d: Design, points: number, axis: ViewSettings['frequencyAxis']): ReferenceResponse => {
+    const omega = frequencyGrid(
+      points,
+      axis === 'log' ? { log: true, fMin: 2 * Math.PI * LOG_AXIS_MIN_FRACTION } : {},
+    );
+    const response = responseZpk(zpkOf(d), omega);
+    const hz = omega.map((w) => (w * d.sampleRate) / (2 * Math.PI));
+    return { response, hz };
+  },
+);
+
+/** The reference's frequency response on the grid the frequency view uses (same point count and axis). */
+export function selectReferenceResponse(ref: Reference, view: ViewSettings): ReferenceResponse {
+  return responseOf(ref.design, view.responsePoints, view.frequencyAxis);
+}
+
+/** The reference's |H| in dB at hz (Hz), or null above its Nyquist frequency. */
+export function referenceLevelDb(ref: Reference, hz: number): number | null {
+  const fs = ref.design.sampleRate;
+  if (!(hz >= 0 && hz <= fs / 2)) return null;
+  const r = responseZpk(zpkOf(ref.design), Float64Array.of((2 * Math.PI * hz) / fs));
+  return r.magnitudeDb[0]!;
+}
