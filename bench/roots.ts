@@ -144,20 +144,24 @@ export async function benchRoots(): Promise<string> {
   writeFileSync(file, JSON.stringify(cases.map((c) => Array.from(c.p))));
   const numpy = await startNumpy(file);
   const rows: string[] = [];
+  // Let the JIT compile every path (closed forms aside) before anything is timed.
+  for (let k = 0; k < 20; k++) for (const c of cases) if (c.n <= 64) findRoots(c.p);
   try {
     for (const [i, { name, n, p }] of cases.entries()) {
       const res = findRoots(p);
       const berr = rootsBackwardError(p, res.re, res.im);
       const theirRoots = await numpy.roots(i);
       const numpyBerr = rootsBackwardError(p, theirRoots.re, theirRoots.im);
-      const oursOnce = Math.max(timeOurs(p, 1), timeOurs(p, 1));
+      // A single call of each sizes the batches; at high degree it also counts as the first sample.
+      const oursOnce = timeOurs(p, 1);
       const numpyOnce = await numpy.time(i, 1);
       const innerOurs = Math.max(1, Math.round(TARGET_MS / oursOnce));
       const innerNumpy = Math.max(1, Math.round(TARGET_MS / numpyOnce));
-      const rounds = n >= 1024 ? 5 : n >= 512 ? 7 : 11;
-      const ours: number[] = [];
-      const theirs: number[] = [];
-      for (let r = 0; r < rounds; r++) {
+      const big = innerOurs === 1 && innerNumpy === 1;
+      const ours: number[] = big ? [oursOnce] : [];
+      const theirs: number[] = big ? [numpyOnce] : [];
+      const rounds = n >= 512 ? 5 : 11;
+      while (ours.length < rounds) {
         ours.push(timeOurs(p, innerOurs));
         theirs.push(await numpy.time(i, innerNumpy));
       }

@@ -6,7 +6,7 @@
  */
 import type { Root } from './types.ts';
 import type { Poly } from './poly.ts';
-import { ABERTH_STOP_PER_DEGREE, aberthIterate } from './roots/aberth.ts';
+import { aberthIterate, freezeLevel } from './roots/aberth.ts';
 import { startingPoints } from './roots/start.ts';
 import { polishIllConditioned } from './roots/polish.ts';
 import { symmetrizeConjugates } from './roots/conjugate.ts';
@@ -77,7 +77,7 @@ export function findRoots(p: Poly, options: RootsOptions = {}): RootsResult {
   const mate = symmetrizeConjugates(c, zr, zi);
   const multiple = findMultipleRoots(c, zr, zi, mate);
   if (n > 2 && converged) {
-    const floor = ABERTH_STOP_PER_DEGREE * n * Number.EPSILON;
+    const floor = freezeLevel(n);
     iterations += polishIllConditioned(c, zr, zi, mate, (i) => multiple.group[i]! >= 0, floor);
   }
   const grouped = listGrouped(zr, zi, multiple);

@@ -12,6 +12,12 @@ import { logDerivative } from './horner.ts';
  */
 export const ABERTH_STOP_PER_DEGREE = 2;
 
+/**
+ * Upper limit on that freeze level, below the 1e-13 backward-error goal; at high degree Horner's noise
+ * still fluctuates below it, so a root waits for a sweep that lands there.
+ */
+export const ABERTH_STOP_CAP = 6e-14;
+
 /** Below the rounding level, keep iterating while each sweep still cuts the residual by at least this factor. */
 export const ABERTH_STALL_RATIO = 0.25;
 
@@ -20,6 +26,11 @@ export const ABERTH_STALL_RATIO = 0.25;
  * Horner's rounding noise, where further steps only move the point within the noise.
  */
 export const ABERTH_FLOOR_PER_ROOT_DEGREE = 8;
+
+/** Relative residual (dimensionless) at or below which a degree-n approximation counts as a root. */
+export function freezeLevel(n: number): number {
+  return Math.min(ABERTH_STOP_PER_DEGREE * n * Number.EPSILON, ABERTH_STOP_CAP);
+}
 
 /** Outcome of {@link aberthIterate}. */
 export interface AberthOutcome {
@@ -37,7 +48,7 @@ export function aberthIterate(
   const n = c.length - 1;
   const absC = new Float64Array(n + 1);
   for (let k = 0; k <= n; k++) absC[k] = Math.abs(c[k]!);
-  const stop = ABERTH_STOP_PER_DEGREE * n * Number.EPSILON;
+  const stop = freezeLevel(n);
   const floor = ABERTH_FLOOR_PER_ROOT_DEGREE * Math.sqrt(n) * Number.EPSILON;
   const active = new Int32Array(n);
   for (let i = 0; i < n; i++) active[i] = i;

@@ -6,7 +6,13 @@
  * the backward error, even inside a badly conditioned cluster where the pairing is ambiguous.
  */
 import { relativeResidual } from './horner.ts';
-import { ABERTH_STOP_PER_DEGREE } from './aberth.ts';
+import { freezeLevel } from './aberth.ts';
+
+/**
+ * Relative distance below which two mates count as the same root: moving a root by this much changes its
+ * relative residual by at most about this much, far inside the 1e-13 backward-error goal.
+ */
+const PAIR_AGREEMENT = 1e-15;
 
 /** Real Newton steps for a root projected onto the real axis. */
 const REAL_NEWTON_STEPS = 4;
@@ -40,7 +46,7 @@ export function symmetrizeConjugates(c: Float64Array, re: Float64Array, im: Floa
   // no worse than before (or at rounding level). The rest only occur in badly conditioned clusters, where
   // Aberth's answers are not symmetric (even the counts above and below the axis may differ): reflecting a
   // root does not change its residual, so they all move above the axis and pair by nearness.
-  const rounding = ABERTH_STOP_PER_DEGREE * (c.length - 1) * Number.EPSILON;
+  const rounding = freezeLevel(c.length - 1);
   const rest: number[] = [];
   for (let i = 0; i < n; i++) {
     if (mate[i] !== -1 || im[i] === 0) continue;
@@ -63,15 +69,45 @@ export function symmetrizeConjugates(c: Float64Array, re: Float64Array, im: Floa
       const d = Math.hypot(re[j]! - re[i]!, im[j]! - im[i]!);
       if (mate[j] === -1 && d < bestDist) [best, bestDist] = [j, d];
     }
-    if (best < 0) {
-      im[i] = 0;
-      re[i] = realNewton(c, re[i]!);
-    } else {
+    if (best < 0) oddOneOut(c, re, im, mate, i, rounding);
+    else {
       im[best] = -im[best]!;
       pairUp(c, re, im, mate, i, best);
     }
   }
   return mate;
+}
+
+/**
+ * The last unpaired root i of a badly conditioned set: it goes onto the real axis if its real Newton polish
+ * keeps the residual at rounding level; otherwise the real root with the worst residual gives way to i's
+ * conjugate, which keeps every residual small (the one case where a root of the raw set is dropped).
+ */
+function oddOneOut(
+  c: Float64Array,
+  re: Float64Array,
+  im: Float64Array,
+  mate: Int32Array,
+  i: number,
+  rounding: number,
+): void {
+  const x = realNewton(c, re[i]!);
+  let worst = -1;
+  let worstResidual = -1;
+  for (let k = 0; k < re.length; k++) {
+    if (k === i || im[k] !== 0) continue;
+    const r = relativeResidual(c, re[k]!, 0);
+    if (r > worstResidual) [worst, worstResidual] = [k, r];
+  }
+  if (worst < 0 || relativeResidual(c, x, 0) <= rounding) {
+    re[i] = x;
+    im[i] = 0;
+    return;
+  }
+  re[worst] = re[i]!;
+  im[worst] = -im[i]!;
+  mate[i] = worst;
+  mate[worst] = i;
 }
 
 /** Makes i (above the axis) and j (below) an exact conjugate pair, keeping the one with the smaller residual. */
@@ -83,7 +119,11 @@ function pairUp(
   i: number,
   j: number,
 ): void {
-  const keepI = relativeResidual(c, re[i]!, im[i]!) <= relativeResidual(c, re[j]!, im[j]!);
+  // Mates that agree to PAIR_AGREEMENT need no residual comparison: either choice is as good.
+  const gap = Math.hypot(re[i]! - re[j]!, im[i]! + im[j]!);
+  const keepI =
+    gap <= PAIR_AGREEMENT * Math.hypot(re[i]!, im[i]!) ||
+    relativeResidual(c, re[i]!, im[i]!) <= relativeResidual(c, re[j]!, im[j]!);
   const r = keepI ? re[i]! : re[j]!;
   const m = keepI ? im[i]! : -im[j]!;
   re[i] = r;
