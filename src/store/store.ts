@@ -12,6 +12,7 @@ import * as edits from './rootEdits.ts';
 import { defaultView, type ViewSettings, type ViewState } from './view.ts';
 import { designerActions, type DesignerActions } from './designer.ts';
 import { implementationActions, type ImplementationActions } from './implementation.ts';
+import { defaultSignalView, signalActions, type SignalActions, type SignalState } from './signal.ts';
 
 export interface DesignActions {
   moveRoot(ref: RootRef, re: number, im: number): void;
@@ -52,7 +53,15 @@ export interface ViewActions {
 }
 
 export interface WorkbenchState
-  extends ViewState, DesignActions, HistoryActions, ViewActions, DesignerActions, ImplementationActions {
+  extends
+    ViewState,
+    DesignActions,
+    HistoryActions,
+    ViewActions,
+    DesignerActions,
+    ImplementationActions,
+    SignalState,
+    SignalActions {
   design: Design;
   history: History;
 }
@@ -78,6 +87,7 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
       view: defaultView,
       selection: null,
       dragging: false,
+      signal: defaultSignalView,
 
       moveRoot: (ref, re, im) => edit((d) => edits.moveRoot(d, ref, re, im)),
       addRoot: (kind, root) => {
@@ -108,6 +118,7 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
       setName: (name) => edit((d) => (d.name === name ? d : { ...d, name })),
       ...designerActions(get, edit, () => set({ selection: null })),
       ...implementationActions(get, edit),
+      ...signalActions(set, get),
 
       beginGesture: () => {
         const { history, design } = get();

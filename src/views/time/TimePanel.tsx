@@ -9,10 +9,18 @@ import { TimeChart } from './TimeChart.tsx';
 import { TimeControls } from './TimeControls.tsx';
 import { TimeReadout } from './TimeReadout.tsx';
 import { useEnvelope } from './useEnvelope.ts';
+import { RegionSwitch } from '../signal/RegionSwitch.tsx';
+import { SignalPanel } from '../signal/SignalPanel.tsx';
 import '../chart/chart.css';
 import './time.css';
 
+/** The time region: the test inputs below, or a recording and its spectrum (src/views/signal). */
 export function TimePanel() {
+  const region = useWorkbench((s) => s.signal.region);
+  return region === 'test' ? <TestInputPanel /> : <SignalPanel />;
+}
+
+function TestInputPanel() {
   const box = useRef<HTMLDivElement>(null);
   const { width, height } = useElementSize(box);
   const [cursor, setCursor] = useState<number | null>(null);
@@ -25,6 +33,7 @@ export function TimePanel() {
     <section aria-label="time response" className="pw-panel pw-time">
       <header className="pw-time-head">
         <h2>Time</h2>
+        <RegionSwitch />
         <TimeControls />
         <PictureMenu view="time" />
       </header>

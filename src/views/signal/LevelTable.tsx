@@ -1,0 +1,143 @@
+/**
+ * Levels at chosen frequencies before and after the filter, with the change in dB, and the choice of
+ * where to read: the design's notches (default, or 50 Hz harmonics when it has none), a mains series, or
+ * frequencies typed by the user.
+ */
+import { useId, useState } from 'react';
+import { selectLevelChanges, selectLevelPlan } from '../../store/signalDerived.ts';
+import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
+import type { LevelChoice } from '../../store/signal.ts';
+import { formatHz, formatNumber } from '../shared/format.ts';
+import { readNumber } from '../shared/NumberField.tsx';
+
+function db(x: number): string {
+  return Number.isFinite(x) ? formatNumber(x, 3) : x < 0 ? '−∞' : '∞';
+}
+
+function changeDb(x: number): string {
+  if (!Number.isFinite(x)) return x < 0 ? '−∞' : '+∞';
+  const t = x.toFixed(1).replace('-', '−');
+  return x > 0 ? `+${t}` : t;
+}
+
+/** Reads "50, 150, 250" into frequencies in Hz; a message when it is not such a list. */
+export function readFrequencyList(
+  text: string,
+  nyquist: number,
+): { ok: true; value: number[] } | { ok: false; message: string } {
+  const parts = text.split(/[,;\s]+/).filter((t) => t !== '');
+  const xs = parts.map(readNumber);
+  const bad = xs.findIndex((x) => !(x >= 0 && x <= nyquist));
+  if (parts.length === 0 || bad >= 0) {
+    const what =
+      parts.length === 0 ? 'Nothing typed' : `"${parts[bad]}" is not a frequency from 0 to ${nyquist} Hz`;
+    return { ok: false, message: `${what}; type frequencies in Hz separated by commas, e.g. 50, 150, 250.` };
+  }
+  return { ok: true, value: xs };
+}
+
+export function LevelTable() {
+  const changes = useWorkbench(selectLevelChanges);
+  const plan = useWorkbench(selectLevelPlan);
+  const choice = useWorkbench((s) => s.signal.levels);
+  const nyquist = useWorkbench((s) => (s.signal.current?.sampleRate ?? 2) / 2);
+  const shaped = useWorkbench((s) => s.dragging);
+  const [text, setText] = useState<string | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  const id = useId();
+  const set = (c: LevelChoice) => {
+    workbenchStore.getState().setLevelChoice(c);
+    setError(null);
+  };
+  const commit = () => {
+    if (text === null) return;
+    const r = readFrequencyList(text, nyquist);
+    if (!r.ok) return setError(r.message);
+    set({ kind: 'list', frequenciesHz: r.value });
+    setText(null);
+  };
+  const shown = text ?? (choice.kind === 'list' ? choice.frequenciesHz.join(', ') : '');
+  return (
+    <div className="pw-levels" data-testid="level-readout">
+      <h3>
+        Levels <span className="pw-levels-sub">at {plan?.reason ?? '—'}</span>
+      </h3>
+      <div className="pw-levels-choice" role="group" aria-label="Read levels at">
+        <button type="button" aria-pressed={choice.kind === 'auto'} onClick={() => set({ kind: 'auto' })}>
+          notches
+        </button>
+        <button
+          type="button"
+          aria-pressed={choice.kind === 'mains' && choice.fundamentalHz === 50}
+          onClick={() => set({ kind: 'mains', fundamentalHz: 50 })}
+        >
+          50 Hz
+        </button>
+        <button
+          type="button"
+          aria-pressed={choice.kind === 'mains' && choice.fundamentalHz === 60}
+          onClick={() => set({ kind: 'mains', fundamentalHz: 60 })}
+        >
+          60 Hz
+        </button>
+      </div>
+      <label className="pw-levels-typed" htmlFor={id}>
+        or at
+        <input
+          id={id}
+          type="text"
+          size={12}
+          placeholder="e.g. 50, 150"
+          value={shown}
+          aria-invalid={error !== null}
+          aria-describedby={error ? `${id}-err` : undefined}
+          onChange={(e) => setText(e.target.value)}
+          onBlur={commit}
+          onKeyDown={(e) => {
+            if (e.key === 'Enter') commit();
+            if (e.key === 'Escape') {
+              setText(null);
+              setError(null);
+            }
+          }}
+        />
+        Hz
+      </label>
+      {error ? (
+        <p id={`${id}-err`} className="pw-field-error" role="alert">
+          {error}
+        </p>
+      ) : null}
+      {changes && changes.length > 0 ? (
+        <table className="pw-levels-table">
+          <thead>
+            <tr>
+              <th scope="col">f</th>
+              <th scope="col">before</th>
+              <th scope="col">after</th>
+              <th scope="col">change</th>
+            </tr>
+          </thead>
+          <tbody>
+            {changes.map((c) => (
+              <tr key={c.frequencyHz} data-hz={c.frequencyHz}>
+                <th scope="row">{formatHz(c.frequencyHz)}</th>
+                <td>{db(c.beforeDb)}</td>
+                <td>{db(c.afterDb)}</td>
+                <td className={c.changeDb < -0.05 ? 'pw-levels-down' : undefined} data-change-db={c.changeDb}>
+                  {changeDb(c.changeDb)}
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      ) : (
+        <p className="pw-levels-note">No frequency to read below half the sample rate.</p>
+      )}
+      <p className="pw-levels-note">
+        dB re amplitude 1 (dBFS for audio); peak within ±2 bins.
+        {shaped ? ' While you drag: input × |H|²; measured again on release.' : ''}
+      </p>
+    </div>
+  );
+}

@@ -1,0 +1,42 @@
+/**
+ * When the recording's sample rate differs from the design's: says what that means (the filter acts at
+ * the same angles, so at other hertz) and offers to take the recording's rate for the design, one undo
+ * step — re-running the design's designer at the new rate in the same step when it has one, so a notch
+ * designed at 50 Hz stays at 50 Hz.
+ */
+import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
+import { formatHz } from '../shared/format.ts';
+
+/** Sets the design's sample rate (and re-runs its designer) as one undo step. */
+export function adoptSignalRate(hz: number): void {
+  const st = workbenchStore.getState();
+  st.beginGesture();
+  st.setSampleRate(hz);
+  if (workbenchStore.getState().design.designer) workbenchStore.getState().rerunDesigner({});
+  workbenchStore.getState().endGesture();
+}
+
+export function RateNote() {
+  const signalRate = useWorkbench((s) => s.signal.current?.sampleRate ?? null);
+  const designRate = useWorkbench((s) => s.design.sampleRate);
+  const hasDesigner = useWorkbench((s) => s.design.designer !== undefined);
+  if (signalRate === null || signalRate === designRate) return null;
+  return (
+    <div className="pw-signal-rate" role="note" data-testid="rate-mismatch">
+      <span>
+        Recorded at {formatHz(signalRate)}; the design is at {formatHz(designRate)}. The filter acts on
+        samples, so on this recording its features sit at {formatNumberRatio(signalRate, designRate)} their
+        hertz.
+      </span>
+      <button type="button" className="pw-small-button" onClick={() => adoptSignalRate(signalRate)}>
+        Design at {formatHz(signalRate)}
+        {hasDesigner ? ' (re-design)' : ''}
+      </button>
+    </div>
+  );
+}
+
+function formatNumberRatio(a: number, b: number): string {
+  const r = a / b;
+  return `${Number.isInteger(r) ? r : r.toPrecision(3)}×`;
+}
