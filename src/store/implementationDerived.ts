@@ -21,6 +21,7 @@ import { buildCascade, type Cascade } from '../core/sections/index.ts';
 import type { FrequencyResponse } from '../core/response.ts';
 import type { Stability } from '../core/stability.ts';
 import type { Result, Zpk } from '../core/types.ts';
+import { exportC, exportCsv, exportJson } from '../core/export/index.ts';
 import { evaluateMask, type MaskResult, type RequirementMask } from '../core/mask.ts';
 import { memoLast } from './memo.ts';
 import { implementationOf } from './implementation.ts';
@@ -64,10 +65,16 @@ export interface SimulationReport {
   simulation: FixedSimulation;
   /** Zero-input behaviour after this input: rest, a limit cycle (period, amplitude) or undecided. */
   afterInput: LimitCycleReport;
+  /** Largest |fixed-point output − float cascade output| over the run, in data LSBs. */
+  maxErrorLsb: number;
 }
 const simulationOf = memoLast((impl: Implementation, spec: SignalSpec, fs: number): SimulationReport => {
   const simulation = simulateFixed(impl, inputSignal(spec, fs));
-  return { simulation, afterInput: detectLimitCycle(impl, simulation.input) };
+  const { outputValues: y, reference: ref } = simulation;
+  let worst = 0;
+  for (let i = 0; i < y.length; i++) worst = Math.max(worst, Math.abs(y[i]! - ref[i]!));
+  const lsb = 2 ** -(impl.settings.dataWordLength - 1);
+  return { simulation, afterInput: detectLimitCycle(impl, simulation.input), maxErrorLsb: worst / lsb };
 });
 
 /** The implementation settings in force (the design's, or the defaults when it has none). */
@@ -108,4 +115,18 @@ export const selectWordLengthSearch = (s: WorkbenchState): WordLengthSearch =>
 export function simulationReport(s: WorkbenchState, spec: SignalSpec): SimulationReport | null {
   const impl = implOrNull(s);
   return impl ? simulationOf(impl, spec, s.design.sampleRate) : null;
+}
+
+/** The export formats the page offers. */
+export type ExportFormat = 'c' | 'json' | 'csv';
+const exportOf = memoLast((impl: Implementation, format: ExportFormat, cName: string): string =>
+  format === 'c' ? exportC(impl, { name: cName }) : format === 'json' ? exportJson(impl) : exportCsv(impl),
+);
+/**
+ * The export text of the implementation in a format (C names prefixed by `cName`, a C identifier), or null
+ * when the settings do not apply.
+ */
+export function exportText(s: WorkbenchState, format: ExportFormat, cName: string): string | null {
+  const impl = implOrNull(s);
+  return impl ? exportOf(impl, format, cName) : null;
 }

@@ -7,6 +7,7 @@ import type { ComponentType } from 'react';
 import type { AxisMap } from '../chart/pixels.ts';
 import type { PlotRect } from './layout.ts';
 import { MaskLayer } from './mask/MaskLayer.tsx';
+import { QuantizedTrace } from './QuantizedTrace.tsx';
 import { ReferenceTrace } from './ReferenceTrace.tsx';
 
 export interface MagnitudeOverlayProps {
@@ -28,4 +29,5 @@ export interface MagnitudeOverlay {
 export const MAGNITUDE_OVERLAYS: MagnitudeOverlay[] = [
   { id: 'reference', Layer: ReferenceTrace },
   { id: 'mask', Layer: MaskLayer },
+  { id: 'quantized', Layer: QuantizedTrace },
 ];

@@ -6,6 +6,7 @@
 import type { ComponentType } from 'react';
 import type { PlaneScale } from './geometry.ts';
 import { ReferenceRoots } from './ReferenceRoots.tsx';
+import { QuantizedRoots } from './QuantizedRoots.tsx';
 
 export interface PlaneOverlayProps {
   scale: PlaneScale;
@@ -16,4 +17,7 @@ export interface PlaneOverlay {
   Layer: ComponentType<PlaneOverlayProps>;
 }
 
-export const PLANE_OVERLAYS: PlaneOverlay[] = [{ id: 'reference', Layer: ReferenceRoots }];
+export const PLANE_OVERLAYS: PlaneOverlay[] = [
+  { id: 'reference', Layer: ReferenceRoots },
+  { id: 'quantized', Layer: QuantizedRoots },
+];

@@ -1,0 +1,47 @@
+/**
+ * The quantized filter's magnitude response in the magnitude plot: a dashed raspberry line in the plot's
+ * unit, refined at the quantized roots so a notch that moved shows where it went, with a one-line key.
+ * Drawn only while the design has target settings and the overlay is on.
+ */
+import { useMemo } from 'react';
+import { qName } from '../../core/fixed/index.ts';
+import {
+  selectImplementation,
+  selectQuantizedResponse,
+  selectShowQuantized,
+} from '../../store/implementationDerived.ts';
+import { useWorkbench } from '../../store/useWorkbench.ts';
+import { linePath } from '../chart/paths.ts';
+import { toPixels } from '../chart/pixels.ts';
+import type { MagnitudeOverlayProps } from './overlays.ts';
+import { refineAtRoots } from './refine.ts';
+
+const COLOUR = 'var(--pw-quantized)';
+
+export function QuantizedTrace({ rect, xMap, yMap, db }: MagnitudeOverlayProps) {
+  const shown = useWorkbench(selectShowQuantized);
+  const result = useWorkbench(selectImplementation);
+  const response = useWorkbench(selectQuantizedResponse);
+  const fs = useWorkbench((s) => s.design.sampleRate);
+  const impl = shown && result.ok ? result.value : null;
+  const d = useMemo(() => {
+    if (!impl || !response) return '';
+    const r = refineAtRoots(impl.quantizedZpk, response);
+    const k = fs / (2 * Math.PI);
+    const px = toPixels(
+      xMap,
+      r.omega.map((w) => w * k),
+    );
+    const py = toPixels(yMap, db ? r.magnitudeDb : r.magnitude);
+    return linePath(px, py, { top: rect.top, bottom: rect.bottom, thin: true });
+  }, [impl, response, fs, xMap, yMap, db, rect.top, rect.bottom]);
+  if (!impl) return null;
+  return (
+    <g data-testid="quantized-trace" aria-hidden="true">
+      <path d={d} fill="none" stroke={COLOUR} strokeWidth={1.4} strokeDasharray="5 3" />
+      <text x={rect.left + 6} y={rect.bottom - 6} fill={COLOUR} fontSize={11}>
+        {`dashed: quantized, ${impl.settings.wordLength}-bit ${qName(impl.quantized.format)}`}
+      </text>
+    </g>
+  );
+}

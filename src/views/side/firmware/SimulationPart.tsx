@@ -1,0 +1,124 @@
+/** The bit-exact run: a test input through the fixed-point cascade, its overflows and its behaviour after. */
+import { useMemo, useRef, useState } from 'react';
+import type { SignalSpec } from '../../../core/fixed/index.ts';
+import { simulationReport, type SimulationReport } from '../../../store/implementationDerived.ts';
+import { useWorkbench } from '../../../store/useWorkbench.ts';
+import { Segmented } from '../../chart/Segmented.tsx';
+import { NumberField } from '../../shared/NumberField.tsx';
+import { formatNumber } from '../../shared/format.ts';
+import {
+  LISTED_OVERFLOWS,
+  afterInputSummary,
+  errorSummary,
+  overflowSummary,
+  overflowWords,
+} from './simulationWords.ts';
+import { useSettings } from './useTarget.ts';
+
+type Kind = 'impulse' | 'step' | 'sine' | 'noise';
+/** Longest run offered, samples (the run is repeated on every change of the design). */
+const MAX_SAMPLES = 65536;
+/** Noise seed of the run (fixed, so a run is reproducible). */
+const NOISE_SEED = 1;
+
+export function SimulationPart() {
+  const settings = useSettings();
+  const fs = useWorkbench((s) => s.design.sampleRate);
+  const [kind, setKind] = useState<Kind>('impulse');
+  const [length, setLength] = useState(512);
+  const [amplitude, setAmplitude] = useState(0.5);
+  const [sineHz, setSineHz] = useState(() => Math.round(fs / 40));
+  const spec = useMemo((): SignalSpec => {
+    if (kind === 'sine') return { kind, length, frequencyHz: Math.min(sineHz, fs / 2), amplitude };
+    if (kind === 'noise') return { kind, length, seed: NOISE_SEED, amplitude };
+    return { kind, length, amplitude };
+  }, [kind, length, amplitude, sineHz, fs]);
+  const dragging = useWorkbench((s) => s.dragging);
+  const live = useWorkbench((s) => (s.dragging ? null : simulationReport(s, spec)));
+  // While a root is dragged, keep showing the last run rather than re-running on every frame.
+  const last = useRef<SimulationReport | null>(null);
+  if (!dragging) last.current = live;
+  const report = dragging ? last.current : live;
+  return (
+    <section className="pw-side-section" aria-labelledby="pw-sim-h">
+      <h2 id="pw-sim-h">Bit-exact run</h2>
+      <p className="pw-hint pw-block">
+        The integer arithmetic of the exported C, sample by sample, on a test input; then zero input to look
+        for limit cycles.
+      </p>
+      <Segmented
+        label="Test input"
+        value={kind}
+        options={[
+          { value: 'impulse', label: 'impulse' },
+          { value: 'step', label: 'step' },
+          { value: 'sine', label: 'sine' },
+          {
+            value: 'noise',
+            label: 'noise',
+            title: 'Gaussian noise; the amplitude is its standard deviation',
+          },
+        ]}
+        onChange={setKind}
+      />
+      <div className="pw-target-fields pw-sim-fields">
+        <NumberField
+          label="Length"
+          unit="samples"
+          value={length}
+          check={(x) =>
+            Number.isInteger(x) && x >= 1 && x <= MAX_SAMPLES
+              ? null
+              : `Type a whole number of samples from 1 to ${MAX_SAMPLES}.`
+          }
+          onCommit={setLength}
+        />
+        <NumberField
+          label={kind === 'noise' ? 'Std. dev.' : 'Amplitude'}
+          unit="of full scale"
+          value={amplitude}
+          check={(x) => (x > 0 && x <= 2 ? null : 'Type a level above 0 and at most 2 (1 is full scale).')}
+          onCommit={setAmplitude}
+        />
+        {kind === 'sine' && (
+          <NumberField
+            label="Frequency"
+            unit="Hz"
+            value={sineHz}
+            check={(x) =>
+              x >= 0 && x <= fs / 2
+                ? null
+                : `Type a frequency from 0 to ${formatNumber(fs / 2)} Hz (Nyquist).`
+            }
+            onCommit={setSineHz}
+          />
+        )}
+      </div>
+      {report ? (
+        <div className="pw-sim-report" data-testid="simulation-report" aria-live="polite">
+          <p>{overflowSummary(report, length)}</p>
+          {report.simulation.overflowCount > 1 && (
+            <ul className="pw-sim-events">
+              {report.simulation.overflows.slice(0, LISTED_OVERFLOWS).map((e, i) => (
+                <li key={i}>{overflowWords(e)}</li>
+              ))}
+              {report.simulation.overflowCount > LISTED_OVERFLOWS && (
+                <li>… and {report.simulation.overflowCount - LISTED_OVERFLOWS} more</li>
+              )}
+            </ul>
+          )}
+          {report.simulation.inputClipped > 0 && (
+            <p>
+              {report.simulation.inputClipped} input sample(s) were beyond full scale and were clipped before
+              the filter.
+            </p>
+          )}
+          <p>{errorSummary(report)}</p>
+          <p data-testid="limit-cycle">{afterInputSummary(report, settings.dataWordLength)}</p>
+        </div>
+      ) : (
+        <p className="pw-hint pw-block">No run: the settings above do not apply.</p>
+      )}
+    </section>
+  );
+}

@@ -1,0 +1,21 @@
+/** Small hooks the Target page's parts share: the settings in force and the implementation. */
+import type { Implementation, ImplementationSettings } from '../../../core/fixed/index.ts';
+import type { InputError } from '../../../core/types.ts';
+import { selectImplementation, selectImplementationSettings } from '../../../store/implementationDerived.ts';
+import { useWorkbench, workbenchStore } from '../../../store/useWorkbench.ts';
+
+/** The settings in force (the design's or the defaults). */
+export function useSettings(): ImplementationSettings {
+  return useWorkbench(selectImplementationSettings);
+}
+
+/** The implementation, or null when the settings do not apply (the page then shows why). */
+export function useImplementation(): Implementation | null {
+  const r = useWorkbench(selectImplementation);
+  return r.ok ? r.value : null;
+}
+
+/** Applies a settings patch (one undo step); returns why nothing changed, or null. */
+export function patchSettings(patch: Partial<ImplementationSettings>): InputError | null {
+  return workbenchStore.getState().setImplementation(patch);
+}
