@@ -3,6 +3,7 @@
  * them all. Order is the order of the tab bar.
  */
 import type { ComponentType } from 'react';
+import { SignalPage } from '../signal/SignalPage.tsx';
 import { SystemPage } from './SystemPage.tsx';
 import { TargetPage } from './firmware/TargetPage.tsx';
 import { FilesPage } from './files/FilesPage.tsx';
@@ -21,5 +22,6 @@ export const SIDE_PAGES: SidePage[] = [
   { id: 'system', label: 'System', title: 'Type a system, set the gain, read each root', Page: SystemPage },
   { id: 'design', label: 'Design', title: 'Design from a requirement; edit the mask', Page: DesignPage },
   { id: 'target', label: 'Target', title: 'Sections, fixed point, bit-exact run, export', Page: TargetPage },
+  { id: 'signal', label: 'Signal', title: 'Open or make a recording, download it filtered', Page: SignalPage },
   { id: 'files', label: 'Keep & share', title: 'Links, files, library, compare, pictures', Page: FilesPage },
 ];

@@ -46,9 +46,8 @@ export function RecordingView({ signal }: { signal: LoadedSignal }) {
             Show all
           </button>
         </span>
-        <span className="pw-signal-hint">wheel zooms · drag pans · double-click shows all</span>
       </div>
-      <div className="pw-chart-box" ref={box}>
+      <div className="pw-chart-box" ref={box} title="Wheel zooms, drag pans, double-click shows all">
         <SignalChart width={width} height={height} signal={signal} />
       </div>
     </div>

@@ -61,7 +61,7 @@ export function SpectrumView({ signal }: { signal: LoadedSignal }) {
           </select>
         </label>
         <span className="pw-signal-hint">
-          bins {before ? formatHz(before.binWidthHz, 3) : '—'} · {before?.segments ?? 0} segments
+          bins {before ? formatHz(before.binWidthHz, 3) : '—'} · {before?.segments ?? 0} averaged
         </span>
         <Segmented
           mini
@@ -74,14 +74,14 @@ export function SpectrumView({ signal }: { signal: LoadedSignal }) {
           ]}
           onChange={(v) => setLog(v === 'log')}
         />
-        <span className="pw-signal-legend">
-          <span className="pw-key pw-key-input" aria-hidden="true" /> before
-          <span className="pw-key pw-key-output" aria-hidden="true" /> after
-          <span className="pw-key pw-key-response" aria-hidden="true" /> |H| (right axis)
-        </span>
       </div>
       <div className="pw-signal-split">
         <div className="pw-chart-box" ref={box}>
+          <span className="pw-signal-legend pw-signal-legend-over">
+            <span className="pw-key pw-key-input" aria-hidden="true" /> before
+            <span className="pw-key pw-key-output" aria-hidden="true" /> after
+            <span className="pw-key pw-key-response" aria-hidden="true" /> |H| (right axis)
+          </span>
           {before ? (
             <SpectrumChart
               width={width}

@@ -1,0 +1,162 @@
+import { readFileSync, writeFileSync } from 'node:fs';
+import { test, expect } from '@playwright/test';
+import { openWorkbench, readDesign, applySystem, saveScreenshot } from './support/app.ts';
+import { dragRoot } from './support/plane.ts';
+import {
+  humRecording,
+  levelChange,
+  loadRecording,
+  openSignalPage,
+  recordingPanel,
+  showRegion,
+} from './support/signal.ts';
+import { evalZpkAt } from '../src/core/response.ts';
+import { resolveGain } from '../src/core/gainRule.ts';
+import { zpkToSections } from '../src/core/system.ts';
+import { createSectionFilter, readWav, runSectionFilter } from '../src/core/signal/index.ts';
+import type { Design } from '../src/store/design.ts';
+import type { Zpk } from '../src/core/types.ts';
+
+function zpkOf(d: Design): Zpk {
+  return {
+    zeros: d.zeros,
+    poles: d.poles,
+    gain: resolveGain(d.zeros, d.poles, d.gainRule, d.sampleRate).gain,
+  };
+}
+
+/** 20·log10|H(e^{iω})| at f Hz, from the design's roots by the engine's point evaluation. */
+function gainDb(d: Design, hz: number): number {
+  const w = (2 * Math.PI * hz) / d.sampleRate;
+  const h = evalZpkAt(zpkOf(d), Math.cos(w), Math.sin(w));
+  return 20 * Math.log10(Math.hypot(h.re, h.im));
+}
+
+test.describe('recordings', () => {
+  test.beforeEach(async ({ page }) => {
+    await openWorkbench(page);
+  });
+
+  test('a notch takes the hum down by |H| at its frequencies; the filtered WAV downloads', async ({
+    page,
+  }, testInfo) => {
+    // A notch at 50 Hz (9° at 2 kHz) whose zeros sit just inside the circle, so its depth is finite.
+    await applySystem(page, 'zeros: 0.999∠9°; poles: 0.95∠9°; gain: 1');
+    const design = await readDesign(page);
+    expect(design.sampleRate).toBe(2000);
+    const rec = humRecording({
+      sampleRate: 2000,
+      seconds: 10,
+      humHz: 50,
+      humAmplitudes: [0.1, 0, 0.03],
+      format: 'i16',
+    });
+
+    await openSignalPage(page);
+    await loadRecording(page, rec.path);
+    await expect(recordingPanel(page).getByTestId('signal-info')).toContainText(
+      '2 kHz · 10 s · 20,000 samples',
+    );
+    await expect(recordingPanel(page).getByTestId('signal-output-trace')).toHaveCount(1);
+
+    await showRegion(page, 'Spectrum');
+    const typed = page.getByTestId('level-readout').getByRole('textbox');
+    await typed.fill('50, 150');
+    await typed.press('Enter');
+    // A steady tone leaves the filter scaled by |H| at its frequency; Welch reads before and after in the same bin.
+    const at50 = await levelChange(page, 50);
+    const at150 = await levelChange(page, 150);
+    expect(Math.abs(at50 - gainDb(design, 50))).toBeLessThan(0.3);
+    expect(Math.abs(at150 - gainDb(design, 150))).toBeLessThan(0.3);
+    expect(at50).toBeLessThan(-30);
+    await saveScreenshot(page, testInfo, 'signal-spectrum');
+
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Download filtered WAV' }).click(),
+    ]);
+    expect(download.suggestedFilename()).toBe('hopper-hum-filtered.wav');
+    const file = testInfo.outputPath('filtered.wav');
+    await download.saveAs(file);
+    const bytes = new Uint8Array(readFileSync(file));
+    const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
+    const tag = (p: number) => String.fromCharCode(...bytes.subarray(p, p + 4));
+    expect([tag(0), tag(8), tag(12), tag(36)]).toEqual(['RIFF', 'WAVE', 'fmt ', 'data']);
+    expect(view.getUint16(20, true)).toBe(1); // integer PCM, as the input
+    expect(view.getUint16(22, true)).toBe(1);
+    expect(view.getUint32(24, true)).toBe(2000);
+    expect(view.getUint16(34, true)).toBe(16);
+    expect(view.getUint32(40, true)).toBe(20000 * 2);
+    expect(bytes.length).toBe(44 + 40000);
+    // The samples are the engine's cascade on the input as stored, to within one 16-bit step.
+    const input = readWav(readFileSync(rec.path));
+    const out = readWav(bytes);
+    if (!input.ok || !out.ok) throw new Error('WAV not readable');
+    const y = runSectionFilter(createSectionFilter(zpkToSections(zpkOf(design))), input.value.channels[0]!);
+    const got = out.value.channels[0]!;
+    let worst = 0;
+    for (let k = 0; k < y.length; k++) worst = Math.max(worst, Math.abs(got[k]! - y[k]!));
+    expect(worst).toBeLessThanOrEqual(1 / 32768);
+  });
+
+  test('broken and unsupported files get a message that says what is accepted', async ({ page }) => {
+    await openSignalPage(page);
+    const dir = test.info().outputPath('');
+    writeFileSync(`${dir}/notes.wav`, 'hello, not audio at all');
+    await page.getByTestId('recording-file-input').first().setInputFiles(`${dir}/notes.wav`);
+    const alert = page.getByRole('alert').filter({ hasText: 'could not be read' });
+    await expect(alert).toContainText('Not a WAV file');
+    await expect(alert).toContainText('Accepted:');
+    writeFileSync(`${dir}/song.mp3`, new Uint8Array([0xff, 0xfb, 0x90, 0x00, 0, 0, 0, 0]));
+    await page.getByTestId('recording-file-input').first().setInputFiles(`${dir}/song.mp3`);
+    await expect(alert).toContainText('convert it to WAV');
+  });
+
+  test('10 s at 48 kHz: take the file rate (one undo step), follow a root drag live, measure the frames', async ({
+    page,
+  }, testInfo) => {
+    const rec = humRecording({
+      sampleRate: 48000,
+      seconds: 10,
+      humHz: 60,
+      humAmplitudes: [0.1, 0.02, 0.03],
+      format: 'f32',
+    });
+    await openSignalPage(page);
+    await loadRecording(page, rec.path);
+    const note = page.getByTestId('rate-mismatch').first();
+    await expect(note).toContainText('Recorded at 48 kHz');
+    const before = await readDesign(page);
+    await note.getByRole('button').click();
+    expect((await readDesign(page)).sampleRate).toBe(48000);
+    await page.keyboard.press('Control+z');
+    await expect.poll(async () => (await readDesign(page)).sampleRate).toBe(before.sampleRate);
+    await page.getByTestId('rate-mismatch').first().getByRole('button').click();
+    await expect(page.getByTestId('rate-mismatch')).toHaveCount(0);
+
+    await showRegion(page, 'Recording');
+    await page.evaluate(() => performance.clearMeasures());
+    const pole = (await readDesign(page)).poles[0]!;
+    await dragRoot(
+      page,
+      { kind: 'pole', index: 0 },
+      { re: pole.re * 0.97, im: pole.im * 0.97 },
+      { steps: 30 },
+    );
+    const frames = await page.evaluate(() =>
+      performance.getEntriesByName('pw-signal-frame').map((e) => e.duration),
+    );
+    const filters = await page.evaluate(() =>
+      performance.getEntriesByName('pw-signal-filter').map((e) => e.duration),
+    );
+    const draws = await page.evaluate(() =>
+      performance.getEntriesByName('pw-signal-draw').map((e) => e.duration),
+    );
+    expect(frames.length).toBeGreaterThan(5);
+    const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
+    const summary = `${frames.length} frames; filter median ${median(filters).toFixed(1)} ms, plot draw median ${median(draws).toFixed(1)} ms, whole page update median ${median(frames).toFixed(1)} ms, max ${Math.max(...frames).toFixed(1)} ms`;
+    testInfo.annotations.push({ type: 'drag frame, 480 000 samples', description: summary });
+    console.log(`signal drag: ${summary}`);
+    await saveScreenshot(page, testInfo, 'signal-48k');
+  });
+});

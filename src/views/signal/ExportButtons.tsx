@@ -1,0 +1,60 @@
+/** Downloads of the filtered signal: WAV in the input's format (or another) and CSV with a time column. */
+import { useState } from 'react';
+import { SAMPLE_FORMATS, describeFormat, type SampleFormat } from '../../core/signal/index.ts';
+import type { LoadedSignal } from '../../store/signal.ts';
+import { selectSignalOutput } from '../../store/signalDerived.ts';
+import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
+import { defaultExportFormat, downloadBlob, exportName, filteredCsv, filteredWav } from './exportSignal.ts';
+
+export function ExportButtons({ signal }: { signal: LoadedSignal }) {
+  const [chosen, setChosen] = useState<SampleFormat | 'input'>('input');
+  const [notes, setNotes] = useState<string[]>([]);
+  const hasOutput = useWorkbench((s) => s.signal.current !== null);
+  const format = chosen === 'input' ? defaultExportFormat(signal) : chosen;
+  const output = () => selectSignalOutput(workbenchStore.getState());
+  const wav = () => {
+    const y = output();
+    if (!y) return;
+    const r = filteredWav(y, signal.sampleRate, format);
+    setNotes(r.notes);
+    downloadBlob(r.blob, exportName(signal, 'wav'));
+  };
+  const csv = () => {
+    const y = output();
+    if (!y) return;
+    setNotes([]);
+    downloadBlob(filteredCsv(y, signal.sampleRate, signal.startTime), exportName(signal, 'csv'));
+  };
+  return (
+    <div className="pw-signal-export">
+      <label>
+        WAV samples{' '}
+        <select value={chosen} onChange={(e) => setChosen(e.target.value as SampleFormat | 'input')}>
+          <option value="input">
+            {signal.format ? `as the input (${describeFormat(signal.format)})` : `${describeFormat('f32')}`}
+          </option>
+          {SAMPLE_FORMATS.filter((f) => f !== signal.format && (signal.format !== null || f !== 'f32')).map(
+            (f) => (
+              <option key={f} value={f}>
+                {describeFormat(f)}
+              </option>
+            ),
+          )}
+        </select>
+      </label>
+      <div className="pw-signal-export-buttons">
+        <button type="button" disabled={!hasOutput} onClick={wav}>
+          Download filtered WAV
+        </button>
+        <button type="button" disabled={!hasOutput} onClick={csv}>
+          Download filtered CSV
+        </button>
+      </div>
+      {notes.map((n) => (
+        <p key={n} className="pw-hint pw-block" role="status">
+          {n}
+        </p>
+      ))}
+    </div>
+  );
+}
