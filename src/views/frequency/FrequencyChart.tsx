@@ -190,6 +190,7 @@ export function FrequencyChart({ width, height, reading, onCursor, marker }: Fre
             xMap={xMap}
             yMap={yMapOf(magnitudePlot.rect, ranges.magnitude)}
             db={units.db}
+            onHover={onCursor}
           />
         ) : null}
       </svg>

@@ -7,18 +7,29 @@
 import { useMemo, useRef, useState, type PointerEvent } from 'react';
 import type { RegionEdge } from '../../../core/mask.ts';
 import { useWorkbench, workbenchStore } from '../../../store/useWorkbench.ts';
-import type { AxisMap } from '../../chart/pixels.ts';
+import { fromPixel, type AxisMap } from '../../chart/pixels.ts';
 import type { PlotRect } from '../layout.ts';
-import { draggedValue, regionShapes } from './maskGeometry.ts';
+import { draggedValue, regionShapes, type LimitShape } from './maskGeometry.ts';
 
 /** Thickness of a handle's grab strip, px. */
 const GRAB_PX = 8;
+/** Height of an edge's grab strip along a limit line (the hatched band's depth, and a little more), px. */
+const EDGE_GRAB_PX = 18;
+
+/** The y span of a region edge's grab strip next to one limit: inside the zone, along the line. */
+function edgeSpan(l: LimitShape): [number, number] {
+  return l.edge === 'upperDb'
+    ? [Math.max(l.zoneTop, l.zoneBottom - EDGE_GRAB_PX), l.zoneBottom]
+    : [l.zoneTop, Math.min(l.zoneBottom, l.zoneTop + EDGE_GRAB_PX)];
+}
 
 export interface MaskHandlesProps {
   rect: PlotRect;
   xMap: AxisMap;
   yMap: AxisMap;
   db: boolean;
+  /** Moves the cross-hair: the handles pass the pointer's frequency on, so reading values still works. */
+  onHover?: (hz: number | null) => void;
 }
 
 interface Drag {
@@ -35,7 +46,7 @@ const WORDS: Record<RegionEdge, string> = {
   lowerDb: 'lower limit',
 };
 
-export function MaskHandles({ rect, xMap, yMap, db }: MaskHandlesProps) {
+export function MaskHandles({ rect, xMap, yMap, db, onHover }: MaskHandlesProps) {
   const mask = useWorkbench((s) => s.design.mask);
   const drag = useRef<Drag | null>(null);
   const [active, setActive] = useState<string | null>(null);
@@ -61,6 +72,10 @@ export function MaskHandles({ rect, xMap, yMap, db }: MaskHandlesProps) {
     workbenchStore.getState().beginGesture();
   };
   const move = (e: PointerEvent<SVGRectElement>) => {
+    const x = pointer(e, true);
+    const lo = Math.min(xMap.d0, xMap.d1);
+    const hi = Math.max(xMap.d0, xMap.d1);
+    onHover?.(Math.min(hi, Math.max(lo, fromPixel(xMap, x))));
     const d = drag.current;
     if (!d) return;
     const horizontal = d.edge === 'fromHz' || d.edge === 'toHz';
@@ -73,9 +88,18 @@ export function MaskHandles({ rect, xMap, yMap, db }: MaskHandlesProps) {
     setActive(null);
     workbenchStore.getState().endGesture();
   };
-  const handle = (id: string, edge: RegionEdge, at: number, x: number, y: number, w: number, h: number) => (
+  const handle = (
+    id: string,
+    edge: RegionEdge,
+    along: string,
+    at: number,
+    x: number,
+    y: number,
+    w: number,
+    h: number,
+  ) => (
     <rect
-      key={edge + at}
+      key={`${edge}-${along}`}
       className={`pw-mask-handle ${edge.endsWith('Hz') ? 'pw-mask-handle-x' : 'pw-mask-handle-y'}${
         active === `${id}:${edge}` ? ' pw-dragging' : ''
       }`}
@@ -99,19 +123,6 @@ export function MaskHandles({ rect, xMap, yMap, db }: MaskHandlesProps) {
     <g className="pw-mask-handles" data-testid="mask-handles" aria-hidden="true">
       {shapes.map((s) => {
         const inPlot = s.limits.filter((l) => l.y >= rect.top - 1 && l.y <= rect.bottom + 1);
-        // Edge strips span the forbidden zones (where the shading is), at least a grab's height.
-        const tops = s.limits.map((l) => l.zoneTop);
-        const bottoms = s.limits.map((l) => l.zoneBottom);
-        let top = Math.min(...tops);
-        let bottom = Math.max(...bottoms);
-        if (bottom - top < 3 * GRAB_PX) {
-          const mid = Math.min(
-            rect.bottom - 1.5 * GRAB_PX,
-            Math.max(rect.top + 1.5 * GRAB_PX, (top + bottom) / 2),
-          );
-          top = mid - 1.5 * GRAB_PX;
-          bottom = mid + 1.5 * GRAB_PX;
-        }
         // A narrow region splits its width between its two edge strips; limit strips go on top.
         const narrow = s.x1 - s.x0 < 2 * GRAB_PX;
         const mid = (s.x0 + s.x1) / 2;
@@ -119,20 +130,40 @@ export function MaskHandles({ rect, xMap, yMap, db }: MaskHandlesProps) {
         const inset = narrow ? 0 : g;
         return (
           <g key={s.id}>
-            {s.x0Visible &&
-              handle(s.id, 'fromHz', s.x0, s.x0 - g, top, narrow ? mid - s.x0 + g : GRAB_PX, bottom - top)}
-            {s.x1Visible &&
-              handle(
-                s.id,
-                'toHz',
-                s.x1,
-                narrow ? mid : s.x1 - g,
-                top,
-                narrow ? s.x1 + g - mid : GRAB_PX,
-                bottom - top,
-              )}
+            {s.limits.map((l) => {
+              // Edge strips cover the hatched band along the limit line, leaving the rest of the plot
+              // to the cross-hair.
+              const [top, bottom] = edgeSpan(l);
+              if (!(bottom > top)) return null;
+              return (
+                <g key={l.edge}>
+                  {s.x0Visible &&
+                    handle(
+                      s.id,
+                      'fromHz',
+                      l.edge,
+                      s.x0,
+                      s.x0 - g,
+                      top,
+                      narrow ? mid - s.x0 + g : GRAB_PX,
+                      bottom - top,
+                    )}
+                  {s.x1Visible &&
+                    handle(
+                      s.id,
+                      'toHz',
+                      l.edge,
+                      s.x1,
+                      narrow ? mid : s.x1 - g,
+                      top,
+                      narrow ? s.x1 + g - mid : GRAB_PX,
+                      bottom - top,
+                    )}
+                </g>
+              );
+            })}
             {inPlot.map((l) =>
-              handle(s.id, l.edge, l.y, s.x0 + inset, l.y - g, s.x1 - s.x0 - 2 * inset, GRAB_PX),
+              handle(s.id, l.edge, l.edge, l.y, s.x0 + inset, l.y - g, s.x1 - s.x0 - 2 * inset, GRAB_PX),
             )}
           </g>
         );

@@ -12,6 +12,9 @@ import type { MagnitudeOverlayProps } from '../overlays.ts';
 import { levelToY, regionShapes } from './maskGeometry.ts';
 import './mask.css';
 
+/** Depth of the hatched strip along a limit line, on its forbidden side, px. */
+const HATCH_PX = 14;
+
 export function MaskLayer({ rect, xMap, yMap, db }: MagnitudeOverlayProps) {
   const mask = useWorkbench((s) => s.design.mask);
   const result = useWorkbench(selectMaskResult);
@@ -57,9 +60,9 @@ export function MaskLayer({ rect, xMap, yMap, db }: MagnitudeOverlayProps) {
                     />
                     <rect
                       x={s.x0}
-                      y={l.zoneTop}
+                      y={l.edge === 'upperDb' ? Math.max(l.zoneTop, l.zoneBottom - HATCH_PX) : l.zoneTop}
                       width={s.x1 - s.x0}
-                      height={l.zoneBottom - l.zoneTop}
+                      height={Math.min(HATCH_PX, l.zoneBottom - l.zoneTop)}
                       fill={`url(#${uid}-${tone})`}
                     />
                   </>

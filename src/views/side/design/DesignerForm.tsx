@@ -227,10 +227,10 @@ export function DesignerForm({ form, setForm }: DesignerFormProps) {
       {edgeHint && <p className="pw-hint pw-dz-note">Edge: {edgeHint}.</p>}
       {classical && (
         <fieldset className="pw-dz-req">
-          <legend>
-            Requirement
-            {!form.autoOrder && <span className="pw-hint"> — optional: gives margins and a mask</span>}
-          </legend>
+          <legend>Requirement</legend>
+          {!form.autoOrder && (
+            <p className="pw-hint pw-dz-note">Optional with a given order: gives margins and a mask.</p>
+          )}
           <div className="pw-dz-fields">{req.map(field)}</div>
         </fieldset>
       )}

@@ -20,21 +20,7 @@ export function DesignerStatus({ onChangeParameters }: { onChangeParameters: () 
   const value = result?.ok ? result.value : null;
   return (
     <section className="pw-side-section pw-dz" aria-labelledby="pw-dz-by-h" data-testid="designer-status">
-      <div className="pw-section-head">
-        <h2 id="pw-dz-by-h">Designed by</h2>
-        <span className="pw-dz-buttons">
-          <button type="button" onClick={onChangeParameters} title="Put these parameters in the form below">
-            Change parameters
-          </button>
-          <button
-            type="button"
-            onClick={() => workbenchStore.getState().releaseDesigner()}
-            title="Forget the designer; the roots stay and are yours to edit"
-          >
-            Release
-          </button>
-        </span>
-      </div>
+      <h2 id="pw-dz-by-h">Designed by</h2>
       <p className="pw-dz-title" data-testid="designer-title">
         {words.title}
       </p>
@@ -66,6 +52,18 @@ export function DesignerStatus({ onChangeParameters }: { onChangeParameters: () 
           Release keeps them and forgets the designer.
         </p>
       )}
+      <div className="pw-dz-actions">
+        <button type="button" onClick={onChangeParameters} title="Put these parameters in the form below">
+          Change parameters
+        </button>
+        <button
+          type="button"
+          onClick={() => workbenchStore.getState().releaseDesigner()}
+          title="Forget the designer; the roots stay and are yours to edit"
+        >
+          Release
+        </button>
+      </div>
     </section>
   );
 }

@@ -43,7 +43,11 @@ function RegionRow({ region, index }: { region: MaskRegion; index: number }) {
   const failing = verdict ? !verdict.pass : false;
   return (
     <>
-      <tr className={failing ? 'pw-dz-fail' : undefined} data-testid={`mask-row-${region.id}`}>
+      <tr
+        className={failing ? 'pw-dz-fail' : undefined}
+        data-testid={`mask-row-${region.id}`}
+        title={region.label}
+      >
         <td>
           <select
             aria-label={`${name} kind`}
@@ -82,7 +86,6 @@ function RegionRow({ region, index }: { region: MaskRegion; index: number }) {
               {verdict.pass ? '✓' : '✗'} {regionVerdictText(verdict)}
             </span>
           )}
-          {region.label && <span className="pw-hint"> · {region.label}</span>}
           {error && (
             <span role="alert" className="pw-field-error pw-block">
               {error}
@@ -134,6 +137,14 @@ export function MaskSection() {
       )}
       {regions.length > 0 && (
         <table className="pw-dz-mask">
+          <colgroup>
+            <col className="pw-dz-col-kind" />
+            <col />
+            <col />
+            <col />
+            <col />
+            <col className="pw-dz-col-x" />
+          </colgroup>
           <thead>
             <tr>
               <th>Kind</th>
