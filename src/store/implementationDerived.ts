@@ -77,6 +77,17 @@ const simulationOf = memoLast((impl: Implementation, spec: SignalSpec, fs: numbe
   return { simulation, afterInput: detectLimitCycle(impl, simulation.input), maxErrorLsb: worst / lsb };
 });
 
+// selectZpk hands out a new object on any design change (a rename, a setting); this one changes only with the
+// roots or the gain, so changing a fixed-point setting does not rebuild the cascade.
+const zpkFromParts = memoLast((zeros: Zpk['zeros'], poles: Zpk['poles'], gain: number): Zpk => ({
+  zeros,
+  poles,
+  gain,
+}));
+/** The design's zpk, the same object while its roots and gain are unchanged. */
+export const rootsZpk = (s: WorkbenchState): Zpk =>
+  zpkFromParts(s.design.zeros, s.design.poles, selectZpk(s).gain);
+
 /** The implementation settings in force (the design's, or the defaults when it has none). */
 export const selectImplementationSettings = (s: WorkbenchState): ImplementationSettings =>
   implementationOf(s.design);
@@ -88,7 +99,7 @@ export const selectShowQuantized = (s: WorkbenchState): boolean =>
 
 /** The design taken to fixed point with the settings in force, or why the settings do not apply. */
 export const selectImplementation = (s: WorkbenchState): Result<Implementation> =>
-  implementationOfZpk(selectZpk(s), s.design.sampleRate, selectImplementationSettings(s));
+  implementationOfZpk(rootsZpk(s), s.design.sampleRate, selectImplementationSettings(s));
 const implOrNull = (s: WorkbenchState): Implementation | null => {
   const r = selectImplementation(s);
   return r.ok ? r.value : null;
@@ -106,7 +117,7 @@ export const selectQuantizedMaskResult = (s: WorkbenchState): MaskResult | null 
   maskOf(s.design.mask, implOrNull(s), s.design.sampleRate);
 /** Smallest coefficient word length (8..32) giving a stable quantized filter inside the mask (if any). */
 export const selectWordLengthSearch = (s: WorkbenchState): WordLengthSearch =>
-  searchOf(selectZpk(s), s.design.sampleRate, selectImplementationSettings(s), s.design.mask);
+  searchOf(rootsZpk(s), s.design.sampleRate, selectImplementationSettings(s), s.design.mask);
 
 /**
  * The bit-exact run of the implementation on a test input, with the zero-input check after it; null when the

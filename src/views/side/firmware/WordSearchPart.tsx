@@ -7,8 +7,7 @@ import { useState } from 'react';
 import type { ImplementationSettings, WordLengthSearch } from '../../../core/fixed/index.ts';
 import type { RequirementMask } from '../../../core/mask.ts';
 import type { Zpk } from '../../../core/types.ts';
-import { selectZpk } from '../../../store/derived.ts';
-import { selectWordLengthSearch } from '../../../store/implementationDerived.ts';
+import { rootsZpk, selectWordLengthSearch } from '../../../store/implementationDerived.ts';
 import { useWorkbench, workbenchStore } from '../../../store/useWorkbench.ts';
 import { patchSettings, useSettings } from './useTarget.ts';
 
@@ -39,7 +38,7 @@ function cellClass(t: WordLengthSearch['trials'][number]): string {
 
 export function WordSearchPart() {
   const settings = useSettings();
-  const zpk = useWorkbench(selectZpk);
+  const zpk = useWorkbench(rootsZpk);
   const fs = useWorkbench((s) => s.design.sampleRate);
   const mask = useWorkbench((s) => s.design.mask);
   const dragging = useWorkbench((s) => s.dragging);
