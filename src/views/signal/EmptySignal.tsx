@@ -1,4 +1,5 @@
 /** The recording views before any signal: where to drop a file, the picker, and two ready-made signals. */
+import { useState } from 'react';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 import { showGenerated } from './loader.ts';
 import { OpenFileButton } from './OpenFileButton.tsx';
@@ -6,10 +7,12 @@ import { PRESETS, recipeSignal } from './recipe.ts';
 
 export function EmptySignal() {
   const fs = useWorkbench((s) => s.design.sampleRate);
+  const [error, setError] = useState<string | null>(null);
   const make = (id: string) => {
     const preset = PRESETS.find((p) => p.id === id)!;
     const r = recipeSignal(preset.recipe, fs, preset.label);
     if (r.ok) showGenerated(r.value);
+    else setError(`${r.error.message} Change the parts on the Signal page of the side column.`);
   };
   return (
     <div className="pw-signal-empty">
@@ -26,6 +29,11 @@ export function EmptySignal() {
           Tones + 60 Hz hum
         </button>
       </p>
+      {error ? (
+        <p className="pw-field-error" role="alert">
+          {error}
+        </p>
+      ) : null}
       <p className="pw-signal-hint">
         More signals, channels and downloads on the Signal page of the side column.
       </p>

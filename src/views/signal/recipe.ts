@@ -115,7 +115,7 @@ export const PRESETS: { id: string; label: string; recipe: Recipe }[] = [
     recipe: {
       duration: '10',
       parts: [
-        newPart('tones', { frequencies: '440, 1000', amplitude: '0.1' }),
+        newPart('tones', { frequencies: '220, 440', amplitude: '0.1' }),
         newPart('pink-noise', { rms: '0.03' }),
         newPart('hum', {
           fundamental: '60',
