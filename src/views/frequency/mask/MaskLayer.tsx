@@ -43,35 +43,40 @@ export function MaskLayer({ rect, xMap, yMap, db }: MagnitudeOverlayProps) {
         ))}
       </defs>
       {shapes.map((s) => {
-        const fail = verdict.get(s.id)?.pass === false;
-        const tone = fail ? 'fail' : 'ok';
+        const v = verdict.get(s.id);
+        const fail = v?.pass === false;
         return (
-          <g key={s.id} className={`pw-mask-region pw-mask-${tone}`} data-region={s.id} data-pass={!fail}>
-            {s.limits.map((l) => (
-              <g key={l.edge}>
-                {l.zoneBottom > l.zoneTop && (
-                  <>
-                    <rect
-                      className="pw-mask-zone"
-                      x={s.x0}
-                      y={l.zoneTop}
-                      width={s.x1 - s.x0}
-                      height={l.zoneBottom - l.zoneTop}
-                    />
-                    <rect
-                      x={s.x0}
-                      y={l.edge === 'upperDb' ? Math.max(l.zoneTop, l.zoneBottom - HATCH_PX) : l.zoneTop}
-                      width={s.x1 - s.x0}
-                      height={Math.min(HATCH_PX, l.zoneBottom - l.zoneTop)}
-                      fill={`url(#${uid}-${tone})`}
-                    />
-                  </>
-                )}
-                {l.y >= rect.top && l.y <= rect.bottom && (
-                  <line className="pw-mask-limit" x1={s.x0} x2={s.x1} y1={l.y} y2={l.y} />
-                )}
-              </g>
-            ))}
+          <g key={s.id} className="pw-mask-region" data-region={s.id} data-pass={!fail}>
+            {s.limits.map((l) => {
+              // Only the limit that is broken turns red; the region's other limit stays neutral.
+              const broken = fail && v.limit === (l.edge === 'upperDb' ? 'upper' : 'lower');
+              const tone = broken ? 'fail' : 'ok';
+              return (
+                <g key={l.edge} className={`pw-mask-${tone}`}>
+                  {l.zoneBottom > l.zoneTop && (
+                    <>
+                      <rect
+                        className="pw-mask-zone"
+                        x={s.x0}
+                        y={l.zoneTop}
+                        width={s.x1 - s.x0}
+                        height={l.zoneBottom - l.zoneTop}
+                      />
+                      <rect
+                        x={s.x0}
+                        y={l.edge === 'upperDb' ? Math.max(l.zoneTop, l.zoneBottom - HATCH_PX) : l.zoneTop}
+                        width={s.x1 - s.x0}
+                        height={Math.min(HATCH_PX, l.zoneBottom - l.zoneTop)}
+                        fill={`url(#${uid}-${tone})`}
+                      />
+                    </>
+                  )}
+                  {l.y >= rect.top && l.y <= rect.bottom && (
+                    <line className="pw-mask-limit" x1={s.x0} x2={s.x1} y1={l.y} y2={l.y} />
+                  )}
+                </g>
+              );
+            })}
           </g>
         );
       })}
@@ -89,7 +94,11 @@ export function MaskLayer({ rect, xMap, yMap, db }: MagnitudeOverlayProps) {
             data-testid={`mask-worst-${r.id}`}
           >
             <circle cx={x} cy={cy} r={4.5} />
-            <text x={right ? x + 8 : x - 8} y={cy - 6} textAnchor={right ? 'start' : 'end'}>
+            <text
+              x={right ? x + 8 : x - 8}
+              y={cy - 6 < rect.top + 12 ? cy + 16 : cy - 6}
+              textAnchor={right ? 'start' : 'end'}
+            >
               {text}
             </text>
           </g>
