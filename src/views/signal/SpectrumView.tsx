@@ -46,7 +46,13 @@ export function SpectrumView({ signal }: { signal: LoadedSignal }) {
             ))}
           </select>
         </label>
-        <label>
+        <label
+          title={
+            before
+              ? `Bins ${formatHz(before.binWidthHz, 3)} wide; ${before.segments} segments averaged (half overlapping)`
+              : undefined
+          }
+        >
           segment{' '}
           <select
             value={String(settings.segment)}
@@ -60,9 +66,6 @@ export function SpectrumView({ signal }: { signal: LoadedSignal }) {
             ))}
           </select>
         </label>
-        <span className="pw-signal-hint">
-          bins {before ? formatHz(before.binWidthHz, 3) : '—'} · {before?.segments ?? 0} averaged
-        </span>
         <Segmented
           mini
           label="Frequency axis"
