@@ -23,5 +23,5 @@ export const SIDE_PAGES: SidePage[] = [
   { id: 'design', label: 'Design', title: 'Design from a requirement; edit the mask', Page: DesignPage },
   { id: 'target', label: 'Target', title: 'Sections, fixed point, bit-exact run, export', Page: TargetPage },
   { id: 'signal', label: 'Signal', title: 'Open or make a recording, download it filtered', Page: SignalPage },
-  { id: 'files', label: 'Keep & share', title: 'Links, files, library, compare, pictures', Page: FilesPage },
+  { id: 'files', label: 'Share', title: 'Links, files, library, compare, pictures', Page: FilesPage },
 ];
