@@ -39,7 +39,15 @@ export function QuantizedTrace({ rect, xMap, yMap, db }: MagnitudeOverlayProps) 
   return (
     <g data-testid="quantized-trace" aria-hidden="true">
       <path d={d} fill="none" stroke={COLOUR} strokeWidth={1.4} strokeDasharray="5 3" />
-      <text x={rect.left + 6} y={rect.bottom - 6} fill={COLOUR} fontSize={11}>
+      <text
+        x={rect.left + 6}
+        y={rect.bottom - 6}
+        fill={COLOUR}
+        fontSize={11}
+        stroke="#fff"
+        strokeWidth={3}
+        paintOrder="stroke"
+      >
         {`dashed: quantized, ${impl.settings.wordLength}-bit ${qName(impl.quantized.format)}`}
       </text>
     </g>

@@ -1,6 +1,6 @@
 /**
  * The quantized filter's roots on the z-plane, over the ideal ones: small raspberry diamonds (zeros) and
- * plus signs (poles), so a root that moved with quantization shows beside its ideal mark and one that did
+ * small filled triangles (poles), so a root that moved with quantization shows beside its ideal mark and one that did
  * not move still shows inside it. Drawn only while the design has target settings and the overlay is on.
  */
 import type { Root } from '../../core/types.ts';
@@ -37,7 +37,7 @@ function marks(
             strokeWidth={1.6}
           />
         ) : (
-          <path d={`M${-s},0H${s}M0,${-s}V${s}`} stroke={COLOUR} strokeWidth={2} />
+          <path d={`M0,${-s - 0.5}L${s},${s - 0.5}L${-s},${s - 0.5}Z`} fill={COLOUR} />
         )}
       </g>
     )),
@@ -58,8 +58,8 @@ export function QuantizedRoots({ scale }: PlaneOverlayProps) {
           {marks('pole', i, sec.poles, scale)}
         </g>
       ))}
-      <text x={8} y={32} fill={COLOUR} fontSize={11}>
-        {`◇ + quantized: ${q.wordLength}-bit coefficients`}
+      <text x={8} y={32} fill={COLOUR} fontSize={11} stroke="#fff" strokeWidth={3} paintOrder="stroke">
+        {`◇ ▲ quantized: ${q.wordLength}-bit coefficients`}
       </text>
     </g>
   );
