@@ -13,7 +13,7 @@ export function PicturesSection() {
       </p>
       <div className="pw-pictures-grid">
         {PICTURE_VIEW_ORDER.map((v) => (
-          <div key={v} role="group" aria-label={PICTURE_VIEWS[v].label} style={{ display: 'contents' }}>
+          <div key={v} role="group" aria-label={PICTURE_VIEWS[v].label} className="pw-pictures-row">
             <span>{PICTURE_VIEWS[v].label}</span>
             <button
               type="button"

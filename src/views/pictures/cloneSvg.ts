@@ -1,9 +1,11 @@
 /**
- * A stand-alone copy of an SVG on the page: every element's computed look written onto it (CSS variables
- * resolved to colours), interactive-only parts left out (cross-hair, focus rings, hit areas), hidden parts
- * dropped. The page's own SVG is only read.
+ * A stand-alone copy of an SVG on the page, written as markup: every element's computed look as
+ * presentation attributes (CSS variables resolved to colours), interactive-only parts left out (cross-hair,
+ * focus rings, hit areas), hidden parts dropped. The page's own SVG is only read; nothing is built in the
+ * page's DOM.
  */
-import { inlineStyle, type StyleReader } from './styleInline.ts';
+import { escapeXml } from './pictureDocument.ts';
+import { PRESENTATION_PROPERTIES, presentationAttributes, type StyleReader } from './styleInline.ts';
 
 /** Parts of a view that only serve the pointer or the keyboard, never a printed picture. */
 export const INTERACTIVE_ONLY = [
@@ -15,49 +17,61 @@ export const INTERACTIVE_ONLY = [
   '.pw-root-ring',
   '.pw-root-marker',
   'foreignObject',
+  'script',
 ].join(',');
 
-const SVG_NS = 'http://www.w3.org/2000/svg';
-/** Attributes that only matter on the page (styling hooks, focus, assistive roles, test ids). */
-const DROPPED_ATTRIBUTES = [
-  'class',
-  'tabindex',
-  'role',
-  'aria-label',
-  'aria-pressed',
-  'aria-hidden',
-  'aria-roledescription',
-  'data-testid',
-];
+/** Attributes that only matter on the page (styling hooks, focus, events, assistive roles, test ids). */
+function dropped(name: string): boolean {
+  return (
+    name === 'class' ||
+    name === 'style' ||
+    name === 'tabindex' ||
+    name === 'role' ||
+    name === 'xmlns' ||
+    name.startsWith('aria-') ||
+    name.startsWith('data-') ||
+    name.startsWith('on') ||
+    // The element's own transform stays; computed looks replace every other presentation attribute.
+    (PRESENTATION_PROPERTIES.has(name) && name !== 'transform')
+  );
+}
 
 function reader(el: Element): StyleReader {
   const cs = getComputedStyle(el);
   return (p) => cs.getPropertyValue(p);
 }
 
-/** Copies `source` into a new <g>, with styles inlined and interactive-only parts omitted. */
-export function cloneSvgContent(source: SVGSVGElement): SVGGElement {
-  const out = document.createElementNS(SVG_NS, 'g');
-  const rootStyle = reader(source);
-  out.setAttribute('style', inlineStyle(rootStyle, null, false));
-  const walk = (from: Element, into: Element, parentStyle: StyleReader) => {
+function attributes(el: Element, own: StyleReader, parent: StyleReader | null): string {
+  let s = '';
+  for (const a of Array.from(el.attributes)) {
+    if (!dropped(a.name)) s += ` ${a.name}="${escapeXml(a.value)}"`;
+  }
+  for (const [name, value] of presentationAttributes(own, parent, el.hasAttribute('transform'))) {
+    s += ` ${name}="${escapeXml(value)}"`;
+  }
+  return s;
+}
+
+/** The content of `source` as one <g> element's markup, looks written out, interactive parts left out. */
+export function svgContentMarkup(source: SVGSVGElement): string {
+  const walk = (from: Element, parent: StyleReader): string => {
+    let out = '';
     for (const node of Array.from(from.childNodes)) {
       if (node.nodeType === Node.TEXT_NODE) {
-        into.appendChild(node.cloneNode());
+        out += escapeXml(node.textContent ?? '');
         continue;
       }
       if (!(node instanceof SVGElement) || node.matches(INTERACTIVE_ONLY)) continue;
       const own = reader(node);
       if (own('display') === 'none') continue;
-      const copy = node.cloneNode(false) as SVGElement;
-      for (const a of DROPPED_ATTRIBUTES) copy.removeAttribute(a);
-      const style = inlineStyle(own, parentStyle, node.hasAttribute('transform'));
-      if (style) copy.setAttribute('style', style);
-      else copy.removeAttribute('style');
-      into.appendChild(copy);
-      walk(node, copy, own);
+      const tag = node.tagName;
+      out += `<${tag}${attributes(node, own, parent)}>${walk(node, own)}</${tag}>`;
     }
+    return out;
   };
-  walk(source, out, rootStyle);
-  return out;
+  const root = reader(source);
+  const top = presentationAttributes(root, null, false)
+    .map(([n, v]) => ` ${n}="${escapeXml(v)}"`)
+    .join('');
+  return `<g${top}>${walk(source, root)}</g>`;
 }

@@ -2,7 +2,7 @@
  * Reads a view off the page for a picture: its SVG (styles inlined), the HTML labels drawn over it (plot
  * titles, the shading key) turned into SVG, and the shading canvas under the z-plane.
  */
-import { cloneSvgContent } from './cloneSvg.ts';
+import { svgContentMarkup } from './cloneSvg.ts';
 import { labelSvg, type PictureLabel } from './pictureDocument.ts';
 import { PICTURE_VIEWS, plotTitleText, type PictureView } from './views.ts';
 
@@ -38,7 +38,7 @@ function plotTitles(section: Element, origin: DOMRect): PictureLabel[] {
 }
 
 /** The z-plane's shading key (an HTML figure with a small SVG) placed where it shows. */
-function shadingKey(section: Element, origin: DOMRect, serialise: (n: Node) => string): string {
+function shadingKey(section: Element, origin: DOMRect): string {
   const figure = section.querySelector('.pw-surface-legend');
   const svg = figure?.querySelector('svg');
   if (!figure || !svg) return '';
@@ -50,7 +50,7 @@ function shadingKey(section: Element, origin: DOMRect, serialise: (n: Node) => s
   return (
     `<rect x="${x}" y="${y}" width="${f.width}" height="${f.height}" fill="#ffffff" fill-opacity="0.9" rx="4"/>` +
     labelSvg({ x: x + 4, y: y + 12, text: caption, size: 11 }) +
-    `<g transform="translate(${s.left - origin.left},${s.top - origin.top})">${serialise(cloneSvgContent(svg))}</g>`
+    `<g transform="translate(${s.left - origin.left},${s.top - origin.top})">${svgContentMarkup(svg)}</g>`
   );
 }
 
@@ -62,11 +62,9 @@ export function readPageParts(view: PictureView, root: ParentNode = document): P
   if (!section || !svg) return null;
   const origin = svg.getBoundingClientRect();
   if (origin.width < 1 || origin.height < 1) return null;
-  const xml = new XMLSerializer();
-  const serialise = (n: Node) => xml.serializeToString(n);
-  let body = serialise(cloneSvgContent(svg));
+  let body = svgContentMarkup(svg);
   if (view === 'frequency') body += plotTitles(section, origin).map(labelSvg).join('');
-  if (view === 'plane') body += shadingKey(section, origin, serialise);
+  if (view === 'plane') body += shadingKey(section, origin);
   const canvas = view === 'plane' ? section.querySelector<HTMLCanvasElement>('canvas.pw-surface') : null;
   return { width: origin.width, height: origin.height, body, underlay: canvas };
 }

@@ -4,9 +4,10 @@
  * page; every piece of text from the design is escaped, never interpreted as markup.
  */
 
-/** Height of the title band above the view, px. */
+/** Height of the title band above the view when title and subtitle share one line, and when they take two, px. */
 export const TITLE_BAND_PX = 30;
-/** Left margin of the title, px. */
+export const TITLE_BAND_TWO_LINES_PX = 46;
+/** Left and right margin of the title, px. */
 export const TITLE_INSET_PX = 12;
 export const TITLE_FONT = "system-ui, -apple-system, 'Segoe UI', Roboto, 'Helvetica Neue', Arial, sans-serif";
 export const TITLE_COLOUR = '#1d2330';
@@ -58,38 +59,68 @@ export interface PictureParts {
 /** Rough widths of a character of the title (14 px, semibold) and subtitle (12 px), px: generous for digits and capitals. */
 export const TITLE_CHAR_PX = 8.2;
 export const SUBTITLE_CHAR_PX = 6.8;
+/** Least gap between title and subtitle on one line, px. */
+const TITLE_GAP_PX = 16;
 
-/** The title shortened with an ellipsis so it does not run into the subtitle on a picture `width` px wide. */
-export function fitTitle(title: string, subtitle: string, width: number): string {
-  const room = width - 2 * TITLE_INSET_PX - subtitle.length * SUBTITLE_CHAR_PX - 16;
-  const max = Math.max(8, Math.floor(room / TITLE_CHAR_PX));
-  const chars = Array.from(title);
+/** Text shortened with an ellipsis to at most `room` px at `charPx` per character. */
+export function fitText(text: string, room: number, charPx: number): string {
+  const max = Math.max(8, Math.floor(room / charPx));
+  const chars = Array.from(text);
   return chars.length <= max
-    ? title
+    ? text
     : `${chars
         .slice(0, max - 1)
         .join('')
         .trimEnd()}…`;
 }
 
-/** Total size of the picture, px. */
-export function pictureSize(width: number, height: number): { width: number; height: number } {
-  return { width: Math.ceil(width), height: Math.ceil(height) + TITLE_BAND_PX };
+/** How the title band is laid out on a picture `width` px wide: one line when both parts fit, else two. */
+export interface TitleLayout {
+  band: number;
+  title: string;
+  subtitle: string;
+  twoLines: boolean;
+}
+
+export function titleLayout(title: string, subtitle: string, width: number): TitleLayout {
+  const room = width - 2 * TITLE_INSET_PX;
+  const need = Array.from(title).length * TITLE_CHAR_PX + TITLE_GAP_PX + subtitle.length * SUBTITLE_CHAR_PX;
+  if (need <= room) return { band: TITLE_BAND_PX, title, subtitle, twoLines: false };
+  return {
+    band: TITLE_BAND_TWO_LINES_PX,
+    title: fitText(title, room, TITLE_CHAR_PX),
+    subtitle: fitText(subtitle, room, SUBTITLE_CHAR_PX),
+    twoLines: true,
+  };
+}
+
+/** Total size of the picture and where the view starts in it, px. */
+export function pictureSize(p: Pick<PictureParts, 'width' | 'height' | 'title' | 'subtitle'>): {
+  width: number;
+  height: number;
+  top: number;
+} {
+  const width = Math.ceil(p.width);
+  const { band } = titleLayout(p.title, p.subtitle, width);
+  return { width, height: Math.ceil(p.height) + band, top: band };
 }
 
 /** The stand-alone SVG document. */
 export function pictureDocument(p: PictureParts): string {
-  const { width, height } = pictureSize(p.width, p.height);
-  const base = TITLE_BAND_PX - 10;
+  const { width, height, top } = pictureSize(p);
+  const t = titleLayout(p.title, p.subtitle, width);
+  const font = `font-family="${escapeXml(TITLE_FONT)}"`;
+  const sub = t.twoLines
+    ? `<text x="${TITLE_INSET_PX}" y="${top - 8}" ${font} font-size="12" fill="${MUTED_COLOUR}">`
+    : `<text x="${width - TITLE_INSET_PX}" y="${top - 10}" text-anchor="end" ${font} font-size="12" fill="${MUTED_COLOUR}">`;
   return [
     `<svg xmlns="http://www.w3.org/2000/svg" xmlns:xlink="http://www.w3.org/1999/xlink" version="1.1"`,
     ` width="${width}" height="${height}" viewBox="0 0 ${width} ${height}">`,
     p.background ? `<rect width="${width}" height="${height}" fill="#ffffff"/>` : '',
-    `<text x="${TITLE_INSET_PX}" y="${base}" font-family="${escapeXml(TITLE_FONT)}" font-size="14"`,
-    ` font-weight="600" fill="${TITLE_COLOUR}">${escapeXml(fitTitle(p.title, p.subtitle, width))}</text>`,
-    `<text x="${width - TITLE_INSET_PX}" y="${base}" text-anchor="end" font-family="${escapeXml(TITLE_FONT)}"`,
-    ` font-size="12" fill="${MUTED_COLOUR}">${escapeXml(p.subtitle)}</text>`,
-    `<g transform="translate(0,${TITLE_BAND_PX})">`,
+    `<text x="${TITLE_INSET_PX}" y="20" ${font} font-size="14" font-weight="600" fill="${TITLE_COLOUR}">`,
+    `${escapeXml(t.title)}</text>`,
+    `${sub}${escapeXml(t.subtitle)}</text>`,
+    `<g transform="translate(0,${top})">`,
     p.underlay
       ? `<image x="0" y="0" width="${p.width}" height="${p.height}" preserveAspectRatio="none" href="${escapeXml(p.underlay)}"/>`
       : '',

@@ -4,7 +4,7 @@ import { formatHz } from '../shared/format.ts';
 import { downloadBlob } from '../side/files/download.ts';
 import { fileStem } from '../side/files/fileName.ts';
 import { readPageParts } from './pageParts.ts';
-import { pictureDocument, pictureSize, TITLE_BAND_PX } from './pictureDocument.ts';
+import { pictureDocument, pictureSize } from './pictureDocument.ts';
 import { svgToPng } from './toPng.ts';
 import { PICTURE_VIEWS, type PictureView } from './views.ts';
 
@@ -34,10 +34,10 @@ export async function makePicture(
     const text = pictureDocument({ ...common, background: true, ...(underlay ? { underlay } : {}) });
     return { blob: new Blob([text], { type: 'image/svg+xml' }), fileName };
   }
-  const size = pictureSize(parts.width, parts.height);
+  const size = pictureSize(common);
   const text = pictureDocument({ ...common, background: false });
   const under = parts.underlay
-    ? { canvas: parts.underlay, x: 0, y: TITLE_BAND_PX, width: parts.width, height: parts.height }
+    ? { canvas: parts.underlay, x: 0, y: size.top, width: parts.width, height: parts.height }
     : null;
   return { blob: await svgToPng(text, size.width, size.height, under), fileName };
 }
