@@ -14,8 +14,9 @@ import {
   overflowWords,
 } from './simulationWords.ts';
 import { useSettings } from './useTarget.ts';
+import { readTypedSamples } from './typedSamples.ts';
 
-type Kind = 'impulse' | 'step' | 'sine' | 'noise';
+type Kind = 'impulse' | 'step' | 'sine' | 'noise' | 'typed';
 /** Longest run offered, samples (the run is repeated on every change of the design). */
 const MAX_SAMPLES = 65536;
 /** Noise seed of the run (fixed, so a run is reproducible). */
@@ -28,11 +29,14 @@ export function SimulationPart() {
   const [length, setLength] = useState(512);
   const [amplitude, setAmplitude] = useState(0.5);
   const [sineHz, setSineHz] = useState(() => Math.round(fs / 40));
+  const [typed, setTyped] = useState('0.5, 0.5, -0.5, 0.25');
+  const parsed = useMemo(() => readTypedSamples(typed), [typed]);
   const spec = useMemo((): SignalSpec => {
+    if (kind === 'typed') return { kind: 'samples', values: parsed.ok ? parsed.values : [0] };
     if (kind === 'sine') return { kind, length, frequencyHz: Math.min(sineHz, fs / 2), amplitude };
     if (kind === 'noise') return { kind, length, seed: NOISE_SEED, amplitude };
     return { kind, length, amplitude };
-  }, [kind, length, amplitude, sineHz, fs]);
+  }, [kind, length, amplitude, sineHz, fs, parsed]);
   const dragging = useWorkbench((s) => s.dragging);
   const live = useWorkbench((s) => (s.dragging ? null : simulationReport(s, spec)));
   // While a root is dragged, keep showing the last run rather than re-running on every frame.
@@ -58,45 +62,68 @@ export function SimulationPart() {
             label: 'noise',
             title: 'Gaussian noise; the amplitude is its standard deviation',
           },
+          { value: 'typed', label: 'your samples', title: 'Numbers you type or paste, full scale ±1' },
         ]}
         onChange={setKind}
       />
-      <div className="pw-target-fields pw-sim-fields">
-        <NumberField
-          label="Length"
-          unit="samples"
-          value={length}
-          check={(x) =>
-            Number.isInteger(x) && x >= 1 && x <= MAX_SAMPLES
-              ? null
-              : `Type a whole number of samples from 1 to ${MAX_SAMPLES}.`
-          }
-          onCommit={setLength}
-        />
-        <NumberField
-          label={kind === 'noise' ? 'Std. dev.' : 'Amplitude'}
-          unit="of full scale"
-          value={amplitude}
-          check={(x) => (x > 0 && x <= 2 ? null : 'Type a level above 0 and at most 2 (1 is full scale).')}
-          onCommit={setAmplitude}
-        />
-        {kind === 'sine' && (
-          <NumberField
-            label="Frequency"
-            unit="Hz"
-            value={sineHz}
-            check={(x) =>
-              x >= 0 && x <= fs / 2
-                ? null
-                : `Type a frequency from 0 to ${formatNumber(fs / 2)} Hz (Nyquist).`
-            }
-            onCommit={setSineHz}
+      {kind === 'typed' ? (
+        <div className="pw-sim-fields">
+          <label className="pw-block pw-hint" htmlFor="pw-sim-typed">
+            Samples, full scale ±1 (commas, spaces or one per line)
+          </label>
+          <textarea
+            id="pw-sim-typed"
+            className={`pw-sim-typed${parsed.ok ? '' : ' pw-invalid'}`}
+            rows={3}
+            value={typed}
+            aria-invalid={parsed.ok ? undefined : true}
+            aria-describedby={parsed.ok ? undefined : 'pw-sim-typed-err'}
+            onChange={(e) => setTyped(e.target.value)}
           />
-        )}
-      </div>
-      {report ? (
+          {!parsed.ok && (
+            <span id="pw-sim-typed-err" role="alert" className="pw-field-error pw-block">
+              {parsed.message}
+            </span>
+          )}
+        </div>
+      ) : (
+        <div className="pw-target-fields pw-sim-fields">
+          <NumberField
+            label="Length"
+            unit="samples"
+            value={length}
+            check={(x) =>
+              Number.isInteger(x) && x >= 1 && x <= MAX_SAMPLES
+                ? null
+                : `Type a whole number of samples from 1 to ${MAX_SAMPLES}.`
+            }
+            onCommit={setLength}
+          />
+          <NumberField
+            label={kind === 'noise' ? 'Std. dev.' : 'Amplitude'}
+            unit="of full scale"
+            value={amplitude}
+            check={(x) => (x > 0 && x <= 2 ? null : 'Type a level above 0 and at most 2 (1 is full scale).')}
+            onCommit={setAmplitude}
+          />
+          {kind === 'sine' && (
+            <NumberField
+              label="Frequency"
+              unit="Hz"
+              value={sineHz}
+              check={(x) =>
+                x >= 0 && x <= fs / 2
+                  ? null
+                  : `Type a frequency from 0 to ${formatNumber(fs / 2)} Hz (Nyquist).`
+              }
+              onCommit={setSineHz}
+            />
+          )}
+        </div>
+      )}
+      {report && (kind !== 'typed' || parsed.ok) ? (
         <div className="pw-sim-report" data-testid="simulation-report" aria-live="polite">
-          <p>{overflowSummary(report, length)}</p>
+          <p>{overflowSummary(report, report.simulation.input.length)}</p>
           {report.simulation.overflowCount > 1 && (
             <ul className="pw-sim-events">
               {report.simulation.overflows.slice(0, LISTED_OVERFLOWS).map((e, i) => (
@@ -116,7 +143,7 @@ export function SimulationPart() {
           <p>{errorSummary(report)}</p>
           <p data-testid="limit-cycle">{afterInputSummary(report, settings.dataWordLength)}</p>
         </div>
-      ) : (
+      ) : report ? null : (
         <p className="pw-hint pw-block">No run: the settings above do not apply.</p>
       )}
     </section>
