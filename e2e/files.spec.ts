@@ -43,6 +43,34 @@ test.beforeEach(async ({ page }) => {
   await openKeepShare(page);
 });
 
+test('Copy link shows the link in the address bar until the next edit; it opens the same design elsewhere', async ({
+  page,
+  context,
+  browser,
+}) => {
+  await context.grantPermissions(['clipboard-read', 'clipboard-write']);
+  const before = await readDesign(page);
+  const entries = await page.evaluate(() => history.length);
+  await page.getByRole('button', { name: 'Copy link' }).click();
+  const status = page.getByTestId('link-status');
+  await expect(status).toContainText(/^Copied · \d+ characters$/);
+  const copied = await page.evaluate(() => navigator.clipboard.readText());
+  expect(page.url()).toBe(copied);
+  expect(Number(/(\d+) characters/.exec(await status.innerText())![1])).toBe(copied.length);
+  expect(await page.evaluate(() => history.length)).toBe(entries);
+
+  await startEmpty(page);
+  expect(new URL(page.url()).hash).toBe('');
+  expect(await page.evaluate(() => history.length)).toBe(entries);
+
+  const elsewhere = await browser.newContext();
+  const other = await elsewhere.newPage();
+  await other.goto(copied);
+  await other.waitForFunction(() => window.__polewright !== undefined);
+  expect(await readDesign(other)).toEqual(before);
+  await elsewhere.close();
+});
+
 test('a saved design file opens again as the identical design, as one undo step', async ({ page }) => {
   const before = await readDesign(page);
   const file = await saveDesignFile(page);

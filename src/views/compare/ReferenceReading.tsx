@@ -24,7 +24,10 @@ export function ReferenceReading({ hz, magnitudeDb }: ReferenceReadingProps) {
   if (!reference) return null;
   const level = referenceLevelDb(reference, hz);
   return (
-    <span className="pw-readout-item pw-ref-reading">
+    <span
+      className="pw-readout-item pw-ref-reading"
+      title="The pinned reference's |H| here, and the design minus the reference (dB)"
+    >
       <span className="pw-readout-label">ref</span>
       <span className="pw-readout-value" data-testid="freq-read-ref-db">
         {level === null ? 'above its Nyquist' : formatDb(level, 4)}

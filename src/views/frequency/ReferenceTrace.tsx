@@ -11,6 +11,7 @@ import { toPixels } from '../chart/pixels.ts';
 import '../compare/compare.css';
 import type { MagnitudeOverlayProps } from './overlays.ts';
 import { refineAtRoots } from './refine.ts';
+import { fitText } from '../pictures/pictureDocument.ts';
 
 export function ReferenceTrace({ rect, xMap, yMap, db }: MagnitudeOverlayProps) {
   const reference = useCompare((s) => s.reference);
@@ -33,7 +34,7 @@ export function ReferenceTrace({ rect, xMap, yMap, db }: MagnitudeOverlayProps) 
     <g data-testid="reference-trace" aria-hidden="true">
       <path className="pw-ref-trace" d={d} />
       <text className="pw-ref-legend" x={rect.right - 6} y={rect.bottom - 6} textAnchor="end">
-        {`dashed: reference “${reference.design.name || 'untitled'}”`}
+        {`dashed: reference “${fitText(reference.design.name || 'untitled', 260, 6.2)}”`}
       </text>
     </g>
   );

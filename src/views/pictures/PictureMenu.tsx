@@ -63,7 +63,7 @@ export function PictureMenu({ view }: { view: PictureView }) {
         aria-expanded={open}
         aria-controls={id}
         aria-label={`Save a picture of the ${label.toLowerCase()}`}
-        title={`Download the ${label.toLowerCase()} as SVG or PNG, titled, for a report`}
+        title={`Picture: download the ${label.toLowerCase()} as SVG or PNG, titled, for a report`}
         onClick={() => setOpen((o) => !o)}
         onKeyDown={(e) => {
           if (e.key === 'ArrowDown') {
@@ -72,7 +72,10 @@ export function PictureMenu({ view }: { view: PictureView }) {
           }
         }}
       >
-        Picture <span aria-hidden="true">▾</span>
+        <svg className="pw-picture-icon" width="14" height="14" viewBox="0 0 14 14" aria-hidden="true">
+          <path d="M7 1.5v7M4 5.5l3 3 3-3M2 10v2.5h10V10" />
+        </svg>
+        <span aria-hidden="true">▾</span>
       </button>
       {open ? (
         <div

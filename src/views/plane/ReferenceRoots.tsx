@@ -37,13 +37,13 @@ function marks(kind: 'zero' | 'pole', roots: readonly Root[], scale: PlaneOverla
 export function ReferenceRoots({ scale }: PlaneOverlayProps) {
   const reference = useCompare((s) => s.reference);
   if (!reference) return null;
-  const { zeros, poles, name } = reference.design;
+  const { zeros, poles } = reference.design;
   return (
     <g data-testid="reference-roots" aria-hidden="true">
       {marks('zero', zeros, scale)}
       {marks('pole', poles, scale)}
       <text className="pw-ref-legend" x={8} y={16}>
-        {`dashed: reference “${name || 'untitled'}”`}
+        dashed: reference
       </text>
     </g>
   );
