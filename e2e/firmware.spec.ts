@@ -2,6 +2,7 @@ import { test, expect } from '@playwright/test';
 import { execFileSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import { openWorkbench, readDesign, saveScreenshot } from './support/app.ts';
+import { rootAt, zToScreen } from './support/plane.ts';
 import {
   downloadExport,
   exportPreview,
@@ -140,6 +141,30 @@ test.describe('taking the hum notches to fixed point', () => {
     await expect(page.getByRole('button', { name: `Using ${bits} bits` })).toBeDisabled();
     await page.getByRole('button', { name: 'Undo' }).click();
     expect((await readDesign(page)).implementation?.wordLength).toBe(20);
+  });
+
+  test('during a root drag the quantized layers step aside, and follow the new root on release', async ({
+    page,
+  }) => {
+    await setCoefficientBits(page, 12);
+    await expect(page.getByTestId('quantized-roots')).toHaveCount(1);
+    const root = await rootAt(page, { kind: 'pole', index: 0 });
+    const from = await zToScreen(page, root);
+    const to = { re: 0.9 * Math.cos(0.3), im: 0.9 * Math.sin(0.3) };
+    const target = await zToScreen(page, to);
+    await page.mouse.move(from.x, from.y);
+    await page.mouse.down();
+    await page.mouse.move(target.x, target.y, { steps: 8 });
+    await expect(page.getByTestId('quantized-roots')).toHaveCount(0);
+    await expect(page.getByText('Paused while a root is dragged')).toBeVisible();
+    await page.mouse.up();
+    await expect(page.getByTestId('quantized-roots')).toHaveCount(1);
+    const moved = await rootAt(page, { kind: 'pole', index: 0 });
+    expect(Math.hypot(moved.re - to.re, moved.im - to.im)).toBeLessThan(0.02);
+    // Some quantized pole sits within a few coefficient steps (2^-10) of where the pole was dropped.
+    const poles = upper(await quantizedMarks(page), 'pole');
+    const nearest = Math.min(...poles.map((p) => Math.hypot(p.re - moved.re, p.im - moved.im)));
+    expect(nearest).toBeLessThan(0.01);
   });
 
   test('a bad word length is refused with a message and changes nothing', async ({ page }) => {

@@ -1,7 +1,7 @@
 /**
  * The quantized filter's magnitude response in the magnitude plot: a dashed raspberry line in the plot's
  * unit, refined at the quantized roots so a notch that moved shows where it went, with a one-line key.
- * Drawn only while the design has target settings and the overlay is on.
+ * Drawn only while the design has target settings and the overlay is on, and not during a root drag.
  */
 import { useMemo } from 'react';
 import { qName } from '../../core/fixed/index.ts';
@@ -19,11 +19,12 @@ import { refineAtRoots } from './refine.ts';
 const COLOUR = 'var(--pw-quantized)';
 
 export function QuantizedTrace({ rect, xMap, yMap, db }: MagnitudeOverlayProps) {
-  const shown = useWorkbench(selectShowQuantized);
-  const result = useWorkbench(selectImplementation);
-  const response = useWorkbench(selectQuantizedResponse);
+  // Hidden during a root drag: rebuilding the implementation every frame costs too much (see useTarget.ts).
+  const shown = useWorkbench((s) => selectShowQuantized(s) && !s.dragging);
+  const result = useWorkbench((s) => (shown ? selectImplementation(s) : null));
+  const response = useWorkbench((s) => (shown ? selectQuantizedResponse(s) : null));
   const fs = useWorkbench((s) => s.design.sampleRate);
-  const impl = shown && result.ok ? result.value : null;
+  const impl = result?.ok ? result.value : null;
   const d = useMemo(() => {
     if (!impl || !response) return '';
     const r = refineAtRoots(impl.quantizedZpk, response);

@@ -1,7 +1,8 @@
 /**
  * The quantized filter's roots on the z-plane, over the ideal ones: small raspberry diamonds (zeros) and
- * small filled triangles (poles), so a root that moved with quantization shows beside its ideal mark and one that did
- * not move still shows inside it. Drawn only while the design has target settings and the overlay is on.
+ * small filled triangles (poles), so a root that moved with quantization shows beside its ideal mark and
+ * one that did not move still shows inside it. Drawn only while the design has target settings and the
+ * overlay is on, and not during a root drag.
  */
 import type { Root } from '../../core/types.ts';
 import { selectImplementation, selectShowQuantized } from '../../store/implementationDerived.ts';
@@ -45,9 +46,10 @@ function marks(
 }
 
 export function QuantizedRoots({ scale }: PlaneOverlayProps) {
-  const shown = useWorkbench(selectShowQuantized);
-  const result = useWorkbench(selectImplementation);
-  if (!shown || !result.ok) return null;
+  // Hidden during a root drag: rebuilding the implementation every frame costs too much (see useTarget.ts).
+  const shown = useWorkbench((s) => selectShowQuantized(s) && !s.dragging);
+  const result = useWorkbench((s) => (shown ? selectImplementation(s) : null));
+  if (!shown || !result?.ok) return null;
   const impl = result.value;
   const q = impl.quantized.format;
   return (

@@ -8,7 +8,7 @@ import { Segmented } from '../../chart/Segmented.tsx';
 import { CopyButton } from '../../shared/CopyButton.tsx';
 import { downloadText } from './download.ts';
 import { cPrefix, exportFileName } from './fileNames.ts';
-import { patchSettings, useImplementation, useSettings } from './useTarget.ts';
+import { patchSettings, useImplementation, useSettings, useSettled } from './useTarget.ts';
 
 const FORMATS: Record<ExportFormat, { label: string; extension: string; mime: string; what: string }> = {
   c: {
@@ -37,7 +37,7 @@ export function ExportPart() {
   const name = useWorkbench((s) => s.design.name);
   const [format, setFormat] = useState<ExportFormat>('c');
   const prefix = cPrefix(name);
-  const text = useWorkbench((s) => exportText(s, format, prefix));
+  const text = useSettled((s) => exportText(s, format, prefix));
   const f = FORMATS[format];
   const fileName = exportFileName(name, f.extension);
   const conventions = impl ? conventionLines(impl) : [];

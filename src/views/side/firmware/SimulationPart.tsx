@@ -1,7 +1,7 @@
 /** The bit-exact run: a test input through the fixed-point cascade, its overflows and its behaviour after. */
-import { useMemo, useRef, useState } from 'react';
+import { useMemo, useState } from 'react';
 import type { SignalSpec } from '../../../core/fixed/index.ts';
-import { simulationReport, type SimulationReport } from '../../../store/implementationDerived.ts';
+import { simulationReport } from '../../../store/implementationDerived.ts';
 import { useWorkbench } from '../../../store/useWorkbench.ts';
 import { Segmented } from '../../chart/Segmented.tsx';
 import { NumberField } from '../../shared/NumberField.tsx';
@@ -13,7 +13,7 @@ import {
   overflowSummary,
   overflowWords,
 } from './simulationWords.ts';
-import { useSettings } from './useTarget.ts';
+import { useSettings, useSettled } from './useTarget.ts';
 import { readTypedSamples } from './typedSamples.ts';
 
 type Kind = 'impulse' | 'step' | 'sine' | 'noise' | 'typed';
@@ -37,12 +37,8 @@ export function SimulationPart() {
     if (kind === 'noise') return { kind, length, seed: NOISE_SEED, amplitude };
     return { kind, length, amplitude };
   }, [kind, length, amplitude, sineHz, fs, parsed]);
-  const dragging = useWorkbench((s) => s.dragging);
-  const live = useWorkbench((s) => (s.dragging ? null : simulationReport(s, spec)));
-  // While a root is dragged, keep showing the last run rather than re-running on every frame.
-  const last = useRef<SimulationReport | null>(null);
-  if (!dragging) last.current = live;
-  const report = dragging ? last.current : live;
+  // While a root is dragged, the last run stays rather than re-running on every frame.
+  const report = useSettled((s) => simulationReport(s, spec));
   return (
     <section className="pw-side-section" aria-labelledby="pw-sim-h">
       <h2 id="pw-sim-h">Bit-exact run</h2>

@@ -5,6 +5,7 @@ import { useWorkbench, workbenchStore } from '../../../store/useWorkbench.ts';
 export function TargetSwitch() {
   const has = useWorkbench(selectHasImplementation);
   const shown = useWorkbench(selectShowQuantized);
+  const dragging = useWorkbench((s) => s.dragging);
   const toggle = (on: boolean) => {
     const st = workbenchStore.getState();
     // Turning the overlay on with no settings yet stores the defaults the page shows (one undo step).
@@ -33,6 +34,11 @@ export function TargetSwitch() {
           </button>
         )}
       </div>
+      {dragging && (
+        <p className="pw-hint pw-block">
+          Paused while a root is dragged: this page catches up when you let go.
+        </p>
+      )}
     </section>
   );
 }

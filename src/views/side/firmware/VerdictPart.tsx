@@ -9,7 +9,7 @@ import {
 } from '../../../store/implementationDerived.ts';
 import { useWorkbench } from '../../../store/useWorkbench.ts';
 import { formatDb, formatHz, formatNumber } from '../../shared/format.ts';
-import { useSettings } from './useTarget.ts';
+import { useSettings, useSettled } from './useTarget.ts';
 import { qName } from '../../../core/fixed/index.ts';
 
 const STABILITY_WORDS = { stable: 'stable', marginal: 'marginally stable', unstable: 'unstable' } as const;
@@ -39,11 +39,11 @@ function MaskCell({ m }: { m: MaskResult | null }) {
 
 export function VerdictPart() {
   const settings = useSettings();
-  const result = useWorkbench(selectImplementation);
+  const result = useSettled(selectImplementation);
   const ideal = useWorkbench(selectStability);
-  const quantized = useWorkbench(selectQuantizedStability);
-  const idealMask = useWorkbench(selectMaskResult);
-  const quantizedMask = useWorkbench(selectQuantizedMaskResult);
+  const quantized = useSettled(selectQuantizedStability);
+  const idealMask = useSettled(selectMaskResult);
+  const quantizedMask = useSettled(selectQuantizedMaskResult);
   const impl = result.ok ? result.value : null;
   const label = impl ? `${settings.wordLength}-bit ${qName(impl.quantized.format)}` : 'quantized';
   return (
