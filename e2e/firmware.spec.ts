@@ -182,8 +182,9 @@ test.describe('taking the hum notches to fixed point', () => {
     const doc = JSON.parse(await exportPreview(page, 'JSON')) as SectionsJson;
     const preview = await exportPreview(page, 'C header');
     const download = await downloadExport(page);
-    expect(download.suggestedFilename()).toBe('hopper-scale-50-hz-hum-notches.h');
+    expect(download.suggestedFilename()).toBe('hopper_scale_50_hz_hum_notches.h');
     const text = readFileSync(await download.path(), 'utf8');
+    expect(text).toContain('hopper_scale_50_hz_hum_notches.h - ');
     expect(text).toBe(preview);
     for (const { fixed } of doc.sections) expect(text).toContain(`{ ${fixed.join(', ')} }`);
     expect(text).toContain('Q1.10');

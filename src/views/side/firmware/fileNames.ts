@@ -2,7 +2,7 @@
 
 /** Longest slug kept from a design name for a file name and for a C prefix, characters. */
 const MAX_FILE_SLUG = 40;
-const MAX_C_SLUG = 24;
+const MAX_C_SLUG = 32;
 
 /** Lower-case words of the name joined by `sep` (ASCII letters and digits only), or '' when none remain. */
 function slug(name: string, sep: string, max: number): string {
@@ -22,8 +22,12 @@ function slug(name: string, sep: string, max: number): string {
   return out;
 }
 
-/** A file name for the export: "hopper-scale-50-hz-hum-notches.h" (falls back to "filter"). */
+/**
+ * A file name for the export: "hopper-scale-50-hz-hum-notches.json" (falls back to "filter"); a C header is
+ * named after its C prefix, as its include guard and first comment line are ("hopper_scale_50_hz_hum_notches.h").
+ */
 export function exportFileName(designName: string, extension: string): string {
+  if (extension === 'h') return `${cPrefix(designName)}.h`;
   return `${slug(designName, '-', MAX_FILE_SLUG) || 'filter'}.${extension}`;
 }
 
