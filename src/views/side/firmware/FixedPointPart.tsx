@@ -121,7 +121,7 @@ export function FixedPointPart() {
           ]}
           onChange={(overflow) => patchSettings({ overflow })}
         />
-        <BitsField label="Samples" field="dataWordLength" value={s.dataWordLength} settings={s} />
+        <BitsField label="Sample word" field="dataWordLength" value={s.dataWordLength} settings={s} />
         <BitsField label="Accumulator" field="accumulatorBits" value={s.accumulatorBits} settings={s} />
       </div>
     </section>
