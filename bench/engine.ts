@@ -37,7 +37,10 @@ export function dragRecompute(zpk: Zpk, grid: Float64Array, impulse: Float64Arra
 export function benchResponse(): string {
   const orders = [2, 8, 16, 32, 64];
   const points = [512, 2048, 8192, 65536];
-  const rows = [`| order | ${points.map((p) => `${p} pts (ms)`).join(' | ')} |`, `|---|${points.map(() => '---').join('|')}|`];
+  const rows = [
+    `| order | ${points.map((p) => `${p} pts (ms)`).join(' | ')} |`,
+    `|---|${points.map(() => '---').join('|')}|`,
+  ];
   for (const order of orders) {
     const zpk = benchDesign(order);
     const cells = points.map((n) => {

@@ -22,7 +22,8 @@ describe('polewright analyze', () => {
     expect(r.stderr).toBe('');
     expect(r.code).toBe(0);
     const out = JSON.parse(r.stdout);
-    for (const key of ['zeros', 'poles', 'gain', 'b', 'a', 'sections', 'stability']) expect(out).toHaveProperty(key);
+    for (const key of ['zeros', 'poles', 'gain', 'b', 'a', 'sections', 'stability'])
+      expect(out).toHaveProperty(key);
     // (1 - z^-2)/(1 - 0.8 z^-1)^2 factors by hand: zeros +1 and -1, pole 0.8 twice, k = 1.
     const zeros = out.zeros.map((z: { re: number }) => z.re).sort((a: number, b: number) => a - b);
     expectClose(zeros, [-1, 1], { abs: 1e-12 }, 'zeros');
@@ -64,7 +65,9 @@ describe('polewright response and simulate', () => {
     expect(out.frequencies).toHaveLength(11);
     expect(out.frequencies[0]).toBe(0);
     expectClose(out.frequencies[10], 50, { rel: 1e-12 }, 'last frequency');
-    const expected = out.frequencies.map((f: number) => 20 * Math.log10(Math.abs(Math.cos((Math.PI * f) / 100))));
+    const expected = out.frequencies.map(
+      (f: number) => 20 * Math.log10(Math.abs(Math.cos((Math.PI * f) / 100))),
+    );
     expectClose(out.magnitudeDb.slice(0, 10), expected.slice(0, 10), { abs: 1e-9 }, 'magnitude dB');
     // The average has a zero at Nyquist: -Infinity dB (printed as a string) or far below any real level.
     const atNyquist = out.magnitudeDb[10];
@@ -113,7 +116,17 @@ describe('polewright errors', () => {
   it('a broken design file names the field', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'pw-cli-'));
     const file = join(dir, 'd.json');
-    writeFileSync(file, JSON.stringify({ polewright: 'design', version: 1, sampleRate: -1, zeros: [], poles: [], gainRule: { kind: 'dc' } }));
+    writeFileSync(
+      file,
+      JSON.stringify({
+        polewright: 'design',
+        version: 1,
+        sampleRate: -1,
+        zeros: [],
+        poles: [],
+        gainRule: { kind: 'dc' },
+      }),
+    );
     const r = await run(['analyze', file]);
     expect(r.code).toBe(2);
     expect(r.stderr).toMatch(/sampleRate/);
@@ -130,7 +143,10 @@ describe('the installed bin', () => {
     expect(JSON.parse(out).stability.verdict).toBe('stable');
   });
   it('exits non-zero with the message on stderr', () => {
-    const r = spawnSync('node', ['bin/polewright.mjs', 'analyze', '--b', 'x'], { cwd: root, encoding: 'utf8' });
+    const r = spawnSync('node', ['bin/polewright.mjs', 'analyze', '--b', 'x'], {
+      cwd: root,
+      encoding: 'utf8',
+    });
     expect(r.status).toBe(2);
     expect(r.stderr.length).toBeGreaterThan(0);
   });

@@ -4,7 +4,8 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
 const coreDir = fileURLToPath(new URL('../../src/core', import.meta.url));
-const FORBIDDEN = /from\s+['"](react|react-dom|zustand|d3[\w-]*|node:[\w/]+|fs|path|os|child_process)(\/[^'"]*)?['"]|from\s+['"][./]*\/(store|views|cli|share)\//;
+const FORBIDDEN =
+  /from\s+['"](react|react-dom|zustand|d3[\w-]*|node:[\w/]+|fs|path|os|child_process)(\/[^'"]*)?['"]|from\s+['"][./]*\/(store|views|cli|share)\//;
 
 function files(dir: string): string[] {
   return readdirSync(dir).flatMap((f) => {
@@ -20,7 +21,9 @@ describe('src/core is pure', () => {
   });
   it('no file in src/core touches window, document or process', () => {
     const offenders = files(coreDir).filter((f) =>
-      /\b(window|document|process)\.\w/.test(readFileSync(f, 'utf8').replace(/\/\/.*$|\/\*[\s\S]*?\*\//gm, '')),
+      /\b(window|document|process)\.\w/.test(
+        readFileSync(f, 'utf8').replace(/\/\/.*$|\/\*[\s\S]*?\*\//gm, ''),
+      ),
     );
     expect(offenders).toEqual([]);
   });

@@ -22,6 +22,11 @@ export const SIDE_PAGES: SidePage[] = [
   { id: 'system', label: 'System', title: 'Type a system, set the gain, read each root', Page: SystemPage },
   { id: 'design', label: 'Design', title: 'Design from a requirement; edit the mask', Page: DesignPage },
   { id: 'target', label: 'Target', title: 'Sections, fixed point, bit-exact run, export', Page: TargetPage },
-  { id: 'signal', label: 'Signal', title: 'Open or make a recording, download it filtered', Page: SignalPage },
+  {
+    id: 'signal',
+    label: 'Signal',
+    title: 'Open or make a recording, download it filtered',
+    Page: SignalPage,
+  },
   { id: 'files', label: 'Share', title: 'Links, files, library, compare, pictures', Page: FilesPage },
 ];
