@@ -129,18 +129,20 @@ test.describe('taking the hum notches to fixed point', () => {
   });
 
   test('the shortest word is found and put in force with one click (one undo step)', async ({ page }) => {
-    await setCoefficientBits(page, 20);
+    // The demo's mask asks for 40 dB within ±0.02 Hz of each hum line: 12-bit codes slide the notches by
+    // about 1 Hz (see above), so the shortest word that still meets the mask is longer than 12 bits.
+    await setCoefficientBits(page, 12);
     await page.getByRole('button', { name: 'Find the shortest word' }).click();
     const result = page.getByTestId('word-search');
     await expect(result).toContainText(/(\d+) bits is the shortest word/);
     const bits = Number((await result.textContent())!.match(/(\d+) bits is the shortest/)![1]);
-    expect(bits).toBeGreaterThanOrEqual(8);
-    expect(bits).toBeLessThan(20);
+    expect(bits).toBeGreaterThan(12);
+    expect(bits).toBeLessThanOrEqual(32);
     await page.getByRole('button', { name: `Use ${bits} bits` }).click();
     expect((await readDesign(page)).implementation?.wordLength).toBe(bits);
     await expect(page.getByRole('button', { name: `Using ${bits} bits` })).toBeDisabled();
     await page.getByRole('button', { name: 'Undo' }).click();
-    expect((await readDesign(page)).implementation?.wordLength).toBe(20);
+    expect((await readDesign(page)).implementation?.wordLength).toBe(12);
   });
 
   test('during a root drag the quantized layers step aside, and follow the new root on release', async ({
