@@ -69,7 +69,8 @@ function base(root: Root, kind: 'pole' | 'zero', fs: number): RootReadout {
   return {
     root,
     kind,
-    frequencyHz: (angleRad * fs) / (2 * Math.PI),
+    // Divide the angle first: π/(2π) is exactly 0.5, so a root at z = −1 reads exactly fs/2.
+    frequencyHz: (angleRad / (2 * Math.PI)) * fs,
     radius: Math.hypot(root.re, root.im),
     angleRad,
   };

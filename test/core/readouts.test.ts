@@ -69,3 +69,21 @@ describe('rootReadouts', () => {
     expect(away.notchDepthDb).toBeUndefined();
   });
 });
+
+describe('read-out frequencies at the edges', () => {
+  it('a zero at z = −1 reads exactly fs/2 and one at z = 1 reads 0 Hz (common practice)', () => {
+    const r = rootReadouts(
+      {
+        zeros: [
+          { re: -1, im: 0, multiplicity: 1 },
+          { re: 1, im: 0, multiplicity: 1 },
+        ],
+        poles: [],
+        gain: 1,
+      },
+      1000,
+    );
+    expect(r.find((x) => x.root.re === -1)!.frequencyHz).toBe(500);
+    expect(r.find((x) => x.root.re === 1)!.frequencyHz).toBe(0);
+  });
+});
