@@ -1,7 +1,7 @@
 /** One frequency plot: grid, y axis and the curve clipped to the plot's rectangle (its title row is HTML). */
 import { memo, useId, useMemo } from 'react';
 import { Axis } from '../chart/Axis.tsx';
-import { Grid } from '../chart/Grid.tsx';
+import { PlotFrame } from '../chart/PlotFrame.tsx';
 import { linePath } from '../chart/paths.ts';
 import { toPixels, type AxisMap } from '../chart/pixels.ts';
 import { DEGREE_STEPS, spacedTicks, stepTicks, type Tick } from '../chart/ticks.ts';
@@ -50,22 +50,12 @@ export const TracePlot = memo(function TracePlot(p: TracePlotProps) {
   const clipId = `pw-clip-${useId().replace(/:/g, '')}`;
   return (
     <g data-testid={`plot-${name}`}>
-      <clipPath id={clipId}>
-        <rect
-          x={rect.left}
-          y={rect.top - 1}
-          width={rect.right - rect.left}
-          height={rect.bottom - rect.top + 2}
-        />
-      </clipPath>
-      <rect
-        className="pw-plot-bg"
-        x={rect.left}
-        y={rect.top}
-        width={rect.right - rect.left}
-        height={rect.bottom - rect.top}
+      <PlotFrame
+        rect={rect}
+        clipId={clipId}
+        x={{ map: xMap, ticks: xTicks }}
+        y={{ map: yMap, ticks: yTicks }}
       />
-      <Grid x={{ map: xMap, ticks: xTicks }} y={{ map: yMap, ticks: yTicks }} {...rect} />
       <path
         d={d}
         clipPath={`url(#${clipId})`}

@@ -7,7 +7,7 @@ import { selectSignalOutput, FILTER_MARK } from '../../store/signalDerived.ts';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import type { LoadedSignal } from '../../store/signal.ts';
 import { Axis } from '../chart/Axis.tsx';
-import { Grid } from '../chart/Grid.tsx';
+import { PlotFrame } from '../chart/PlotFrame.tsx';
 import type { AxisMap } from '../chart/pixels.ts';
 import { niceRange } from '../chart/range.ts';
 import { linearTicks, spacedTicks } from '../chart/ticks.ts';
@@ -131,22 +131,12 @@ export function SignalChart({
       role="group"
       aria-label="Recording before and after the filter"
     >
-      <clipPath id={clipId}>
-        <rect
-          x={rect.left}
-          y={rect.top - 1}
-          width={rect.right - rect.left}
-          height={rect.bottom - rect.top + 2}
-        />
-      </clipPath>
-      <rect
-        className="pw-plot-bg"
-        x={rect.left}
-        y={rect.top}
-        width={rect.right - rect.left}
-        height={rect.bottom - rect.top}
+      <PlotFrame
+        rect={rect}
+        clipId={clipId}
+        x={{ map: xMap, ticks: xTicks }}
+        y={{ map: yMap, ticks: yTicks }}
       />
-      <Grid x={{ map: xMap, ticks: xTicks }} y={{ map: yMap, ticks: yTicks }} {...rect} />
       {zeroY >= rect.top && zeroY <= rect.bottom ? (
         <path className="pw-time-baseline" d={`M${rect.left} ${Math.round(zeroY) + 0.5}H${rect.right}`} />
       ) : null}

@@ -7,7 +7,7 @@ import { useId, useMemo } from 'react';
 import type { FrequencyResponse } from '../../core/response.ts';
 import type { WelchResult } from '../../core/signal/index.ts';
 import { Axis } from '../chart/Axis.tsx';
-import { Grid } from '../chart/Grid.tsx';
+import { PlotFrame } from '../chart/PlotFrame.tsx';
 import { linePath } from '../chart/paths.ts';
 import { toPixel, toPixels, type AxisMap } from '../chart/pixels.ts';
 import { dbRange, niceRange } from '../chart/range.ts';
@@ -108,22 +108,12 @@ export function SpectrumChart({
       role="img"
       aria-label="Spectrum before and after the filter"
     >
-      <clipPath id={clipId}>
-        <rect
-          x={rect.left}
-          y={rect.top - 1}
-          width={rect.right - rect.left}
-          height={rect.bottom - rect.top + 2}
-        />
-      </clipPath>
-      <rect
-        className="pw-plot-bg"
-        x={rect.left}
-        y={rect.top}
-        width={rect.right - rect.left}
-        height={rect.bottom - rect.top}
+      <PlotFrame
+        rect={rect}
+        clipId={clipId}
+        x={{ map: xMap, ticks: xTicks }}
+        y={{ map: yMap, ticks: yTicks }}
       />
-      <Grid x={{ map: xMap, ticks: xTicks }} y={{ map: yMap, ticks: yTicks }} {...rect} />
       <g clipPath={`url(#${clipId})`}>
         {markersHz.map((f) => {
           const x = toPixel(xMap, f);

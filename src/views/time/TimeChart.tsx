@@ -7,7 +7,7 @@ import { selectTimeInput, selectTimeOutput } from '../../store/derived.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 import { Axis } from '../chart/Axis.tsx';
 import { CursorArea } from '../chart/CursorArea.tsx';
-import { Grid } from '../chart/Grid.tsx';
+import { PlotFrame } from '../chart/PlotFrame.tsx';
 import { fromPixel, toPixel, toPixels, type AxisMap } from '../chart/pixels.ts';
 import { finiteExtent, niceRange, type Range } from '../chart/range.ts';
 import { linearTicks, spacedTicks } from '../chart/ticks.ts';
@@ -130,22 +130,12 @@ export function TimeChart({ width, height, cursor, onCursor, envelope, fitTail }
       role="group"
       aria-label="Input and output against time"
     >
-      <clipPath id={clipId}>
-        <rect
-          x={rect.left}
-          y={rect.top - 1}
-          width={rect.right - rect.left}
-          height={rect.bottom - rect.top + 2}
-        />
-      </clipPath>
-      <rect
-        className="pw-plot-bg"
-        x={rect.left}
-        y={rect.top}
-        width={rect.right - rect.left}
-        height={rect.bottom - rect.top}
+      <PlotFrame
+        rect={rect}
+        clipId={clipId}
+        x={{ map: xMap, ticks: xTicks }}
+        y={{ map: yMap, ticks: yTicks }}
       />
-      <Grid x={{ map: xMap, ticks: xTicks }} y={{ map: yMap, ticks: yTicks }} {...rect} />
       {zeroY >= rect.top && zeroY <= rect.bottom ? (
         <path className="pw-time-baseline" d={`M${rect.left} ${Math.round(zeroY) + 0.5}H${rect.right}`} />
       ) : null}

@@ -1,0 +1,28 @@
+/** What every chart draws beneath its curves: the clip rectangle they use, the plot background and the grid. */
+import { Grid, type GridProps } from './Grid.tsx';
+
+export interface PlotFrameProps {
+  /** The plot rectangle in pixels. */
+  rect: Pick<GridProps, 'left' | 'right' | 'top' | 'bottom'>;
+  /** Id the chart's curves refer to as `url(#clipId)`; unique per chart. */
+  clipId: string;
+  x: NonNullable<GridProps['x']>;
+  y: NonNullable<GridProps['y']>;
+}
+
+/**
+ * The clip path reaches a pixel above and below the rectangle so a curve along the top or bottom edge keeps
+ * its full stroke.
+ */
+export function PlotFrame({ rect, clipId, x, y }: PlotFrameProps) {
+  const { left, right, top, bottom } = rect;
+  return (
+    <>
+      <clipPath id={clipId}>
+        <rect x={left} y={top - 1} width={right - left} height={bottom - top + 2} />
+      </clipPath>
+      <rect className="pw-plot-bg" x={left} y={top} width={right - left} height={bottom - top} />
+      <Grid x={x} y={y} left={left} right={right} top={top} bottom={bottom} />
+    </>
+  );
+}
