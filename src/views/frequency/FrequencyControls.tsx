@@ -9,7 +9,7 @@ export function FrequencyControls() {
   const frequencyAxis = useWorkbench((s) => s.view.frequencyAxis);
   const holdScale = useWorkbench((s) => s.view.holdScale);
   return (
-    <div className="pw-freq-controls">
+    <div className="pw-view-controls">
       <Segmented
         label="Frequency axis"
         caption="f axis"

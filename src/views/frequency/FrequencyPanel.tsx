@@ -26,8 +26,8 @@ export function FrequencyPanel() {
     [zpk, fs, cursorHz],
   );
   return (
-    <section aria-label="frequency response" className="pw-panel pw-freq">
-      <header className="pw-freq-head">
+    <section aria-label="frequency response" className="pw-panel pw-view pw-freq">
+      <header className="pw-view-head">
         <h2>Response</h2>
         <FrequencyControls />
         <PictureMenu view="frequency" />

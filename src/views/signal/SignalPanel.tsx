@@ -22,10 +22,10 @@ export function SignalPanel() {
   return (
     <section
       aria-label="recording"
-      className={`pw-panel pw-time pw-signal${drop.over ? ' pw-drop-over' : ''}`}
+      className={`pw-panel pw-view pw-time pw-signal${drop.over ? ' pw-drop-over' : ''}`}
       {...drop.handlers}
     >
-      <header className="pw-time-head">
+      <header className="pw-view-head">
         <h2>Time</h2>
         <RegionSwitch />
         {signal ? <SignalInfo signal={signal} /> : null}

@@ -15,7 +15,7 @@ export function TimeControls() {
   const style = useWorkbench((s) => s.view.timeStyle);
   const fs = useWorkbench((s) => s.design.sampleRate);
   return (
-    <div className="pw-time-controls">
+    <div className="pw-view-controls">
       <Segmented
         label="Input signal"
         value={input}

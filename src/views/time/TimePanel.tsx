@@ -30,8 +30,8 @@ function TestInputPanel() {
   const envelope = useEnvelope();
   const shown = cursor !== null && cursor < samples ? cursor : null;
   return (
-    <section aria-label="time response" className="pw-panel pw-time">
-      <header className="pw-time-head">
+    <section aria-label="time response" className="pw-panel pw-view pw-time">
+      <header className="pw-view-head">
         <h2>Time</h2>
         <RegionSwitch />
         <TimeControls />
