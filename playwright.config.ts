@@ -1,4 +1,5 @@
 import { defineConfig } from '@playwright/test';
+import { CHROMIUM_ARGS, CHROMIUM_PATH } from './e2e/support/chromium.ts';
 
 /**
  * End-to-end tests drive Debian's Chromium (never a downloaded browser) against the production build
@@ -19,17 +20,8 @@ export default defineConfig({
     baseURL: `http://127.0.0.1:${port}`,
     viewport: { width: 1440, height: 900 },
     launchOptions: {
-      executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-      args: [
-        '--headless',
-        '--no-sandbox',
-        '--disable-gpu',
-        '--disable-quic',
-        '--no-first-run',
-        '--disable-background-networking',
-        '--disable-component-update',
-        '--disable-sync',
-      ],
+      executablePath: process.env.CHROMIUM_PATH ?? CHROMIUM_PATH,
+      args: [...CHROMIUM_ARGS],
     },
   },
   webServer: {

@@ -9,6 +9,7 @@ import { spawn, execFileSync, type ChildProcess } from 'node:child_process';
 import { get } from 'node:http';
 import { fileURLToPath } from 'node:url';
 import { chromium, type Page } from '@playwright/test';
+import { CHROMIUM_ARGS, CHROMIUM_PATH } from '../e2e/support/chromium.ts';
 import { installDragProbe, nextSample, zToClient, type DragSample } from './dragPage.ts';
 import { cell, median, percentile } from './timing.ts';
 
@@ -91,16 +92,9 @@ export async function benchDrag(): Promise<string> {
     },
   );
   const browser = await chromium.launch({
-    executablePath: '/usr/bin/chromium',
+    executablePath: CHROMIUM_PATH,
     args: [
-      '--headless',
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-quic',
-      '--no-first-run',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
+      ...CHROMIUM_ARGS,
       // 4190 is on Chromium's list of restricted ports; allow it for this local server only.
       `--explicitly-allowed-ports=${PORT}`,
     ],
