@@ -4,21 +4,14 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { main } from '../../src/cli/main.ts';
+import { runCli } from '../helpers/cli.ts';
 import { expectClose } from '../helpers/expectClose.ts';
-
-async function run(argv: string[]) {
-  let stdout = '';
-  let stderr = '';
-  const code = await main(argv, { stdout: (s) => (stdout += s), stderr: (s) => (stderr += s) });
-  return { code, stdout, stderr };
-}
 
 const EQ = 'y[n] = 1.6 y[n-1] - 0.64 y[n-2] + x[n] - x[n-2]';
 
 describe('polewright analyze', () => {
   it('analyses the difference equation: a double pole at 0.8, zeros at ±1', async () => {
-    const r = await run(['analyze', '--eq', EQ, '--fs', '1000', '--json']);
+    const r = await runCli(['analyze', '--eq', EQ, '--fs', '1000', '--json']);
     expect(r.stderr).toBe('');
     expect(r.code).toBe(0);
     const out = JSON.parse(r.stdout);
@@ -39,7 +32,7 @@ describe('polewright analyze', () => {
   });
 
   it('lists every conjugate of a complex pole pair', async () => {
-    const r = await run(['analyze', '--b', '1', '--a', '1,-1.2,0.72', '--json']);
+    const r = await runCli(['analyze', '--b', '1', '--a', '1,-1.2,0.72', '--json']);
     const out = JSON.parse(r.stdout);
     // z^2 - 1.2 z + 0.72 = 0  ->  z = 0.6 ± 0.6j (quadratic formula).
     const ims = out.poles.map((p: { im: number }) => p.im).sort((a: number, b: number) => a - b);
@@ -47,12 +40,12 @@ describe('polewright analyze', () => {
   });
 
   it('calls a pole outside the circle unstable', async () => {
-    const r = await run(['analyze', '--b', '1', '--a', '1,-1.05', '--json']);
+    const r = await runCli(['analyze', '--b', '1', '--a', '1,-1.05', '--json']);
     expect(JSON.parse(r.stdout).stability.verdict).toBe('unstable'); // common practice
   });
 
   it('prints a readable summary without --json', async () => {
-    const r = await run(['analyze', '--eq', EQ, '--fs', '1000']);
+    const r = await runCli(['analyze', '--eq', EQ, '--fs', '1000']);
     expect(r.code).toBe(0);
     expect(r.stdout).toMatch(/stability: STABLE/);
   });
@@ -60,7 +53,7 @@ describe('polewright analyze', () => {
 
 describe('polewright response and simulate', () => {
   it('response: frequencies span 0 to fs/2; magnitude of a 2-tap average is |cos(ω/2)|', async () => {
-    const r = await run(['response', '--b', '0.5,0.5', '--fs', '100', '--points', '11', '--json']);
+    const r = await runCli(['response', '--b', '0.5,0.5', '--fs', '100', '--points', '11', '--json']);
     const out = JSON.parse(r.stdout);
     expect(out.frequencies).toHaveLength(11);
     expect(out.frequencies[0]).toBe(0);
@@ -76,7 +69,7 @@ describe('polewright response and simulate', () => {
   });
 
   it('simulate: the impulse response follows the difference equation', async () => {
-    const r = await run(['simulate', '--eq', EQ, '--input', 'impulse', '--samples', '30', '--json']);
+    const r = await runCli(['simulate', '--eq', EQ, '--input', 'impulse', '--samples', '30', '--json']);
     const out = JSON.parse(r.stdout);
     const h: number[] = [];
     for (let n = 0; n < 30; n++) {
@@ -90,26 +83,26 @@ describe('polewright response and simulate', () => {
     const dir = mkdtempSync(join(tmpdir(), 'pw-cli-'));
     const file = join(dir, 'in.csv');
     writeFileSync(file, 'value\n1\n2\n3\n');
-    const r = await run(['simulate', '--b', '1,1', '--input', file, '--json']);
+    const r = await runCli(['simulate', '--b', '1,1', '--input', file, '--json']);
     expect(JSON.parse(r.stdout).output).toEqual([1, 3, 5]);
   });
 });
 
 describe('polewright errors', () => {
   it('a bad equation exits 2 and marks the place', async () => {
-    const r = await run(['analyze', '--eq', 'y[n] = 0.5 y[n-1] + x[n', '--json']);
+    const r = await runCli(['analyze', '--eq', 'y[n] = 0.5 y[n-1] + x[n', '--json']);
     expect(r.code).toBe(2);
     expect(r.stdout).toBe('');
     expect(r.stderr).toMatch(/--eq/);
     expect(r.stderr).toMatch(/\^/);
   });
   it('an unknown option names the accepted ones', async () => {
-    const r = await run(['analyze', '--eq', EQ, '--jsn']);
+    const r = await runCli(['analyze', '--eq', EQ, '--jsn']);
     expect(r.code).toBe(2);
     expect(r.stderr).toMatch(/Unknown option --jsn.*--json/);
   });
   it('no design says how to give one', async () => {
-    const r = await run(['analyze']);
+    const r = await runCli(['analyze']);
     expect(r.code).toBe(2);
     expect(r.stderr).toMatch(/--eq/);
   });
@@ -127,7 +120,7 @@ describe('polewright errors', () => {
         gainRule: { kind: 'dc' },
       }),
     );
-    const r = await run(['analyze', file]);
+    const r = await runCli(['analyze', file]);
     expect(r.code).toBe(2);
     expect(r.stderr).toMatch(/sampleRate/);
   });

@@ -2,20 +2,13 @@ import { describe, it, expect } from 'vitest';
 import { mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { main } from '../../src/cli/main.ts';
+import { runCli } from '../helpers/cli.ts';
 import { readDesignFile } from '../../src/share/designFile.ts';
 import { expectClose } from '../helpers/expectClose.ts';
 import { loadFixture } from '../helpers/fixtures.ts';
 
-async function run(argv: string[]) {
-  let stdout = '';
-  let stderr = '';
-  const code = await main(argv, { stdout: (s) => (stdout += s), stderr: (s) => (stderr += s) });
-  return { code, stdout, stderr };
-}
-
 async function json(argv: string[]) {
-  const r = await run([...argv, '--json']);
+  const r = await runCli([...argv, '--json']);
   expect(r.stderr).toBe('');
   expect(r.code).toBe(0);
   return JSON.parse(r.stdout);
@@ -247,7 +240,7 @@ describe('polewright design: classical families', () => {
   }
 
   it('scenario 4 in words: prints the order and the margins', async () => {
-    const r = await run([
+    const r = await runCli([
       'design',
       'lowpass',
       '--family',
@@ -275,7 +268,7 @@ describe('polewright design: classical families', () => {
 describe('polewright design: errors', () => {
   it('an unknown or missing kind lists the kinds', async () => {
     for (const argv of [['design', 'wobble'], ['design']]) {
-      const r = await run(argv);
+      const r = await runCli(argv);
       expect(r.code).toBe(2);
       expect(r.stderr).toMatch(
         /notch, peak, dc-blocker, harmonic-notch, comb, peaking-eq, low-shelf, high-shelf, lowpass, highpass, bandpass, bandstop/,
@@ -284,12 +277,12 @@ describe('polewright design: errors', () => {
   });
 
   it('a missing parameter is named, with an example', async () => {
-    const r = await run(['design', 'notch', '--fs', '1000', '--f0', '50']);
+    const r = await runCli(['design', 'notch', '--fs', '1000', '--f0', '50']);
     expect(r.code).toBe(2);
     expect(r.stderr).toMatch(
       /--bandwidth is missing .*Example: polewright design notch --fs 1000 --f0 50 --bandwidth 2/,
     );
-    const e = await run([
+    const e = await runCli([
       'design',
       'lowpass',
       '--family',
@@ -304,7 +297,7 @@ describe('polewright design: errors', () => {
     expect(e.stderr).toMatch(
       /--ripple is missing .*Example: polewright design lowpass --family elliptic --order 4 --edge 120 --ripple 1/,
     );
-    const auto = await run([
+    const auto = await runCli([
       'design',
       'bandpass',
       '--family',
@@ -322,12 +315,12 @@ describe('polewright design: errors', () => {
   });
 
   it("bad values give the designer's message and what is accepted", async () => {
-    const r = await run(['design', 'notch', '--fs', '1000', '--f0', '700', '--q', '3']);
+    const r = await runCli(['design', 'notch', '--fs', '1000', '--f0', '700', '--q', '3']);
     expect(r.code).toBe(2);
     expect(r.stderr).toMatch(
       /f0 = 700 Hz lies outside \(0, 500\) Hz\. Accepted: a frequency between 0 and 500 Hz/,
     );
-    const order = await run([
+    const order = await runCli([
       'design',
       'lowpass',
       '--family',
@@ -340,7 +333,7 @@ describe('polewright design: errors', () => {
       '1000',
     ]);
     expect(order.stderr).toMatch(/order 0 is not accepted/);
-    const nest = await run([
+    const nest = await runCli([
       'design',
       'lowpass',
       '--family',
@@ -359,12 +352,12 @@ describe('polewright design: errors', () => {
       '40',
     ]);
     expect(nest.stderr).toMatch(/do not fit a low-pass/);
-    const num = await run(['design', 'notch', '--fs', '1000', '--f0', 'fifty', '--q', '3']);
+    const num = await runCli(['design', 'notch', '--fs', '1000', '--f0', 'fifty', '--q', '3']);
     expect(num.stderr).toMatch(/--f0 must be a number .*got "fifty"/);
   });
 
   it('a flag of another kind is refused, naming what the kind takes', async () => {
-    const r = await run([
+    const r = await runCli([
       'design',
       'notch',
       '--fs',
@@ -381,7 +374,7 @@ describe('polewright design: errors', () => {
   });
 
   it('--help lists every kind with an example', async () => {
-    const r = await run(['design', '--help']);
+    const r = await runCli(['design', '--help']);
     expect(r.code).toBe(0);
     expect(r.stdout).toMatch(
       /harmonic-notch +polewright design harmonic-notch --fs 2000 --f0 50 --harmonics 1,3,5/,
@@ -411,7 +404,7 @@ describe('polewright design --out', () => {
       '--attenuation',
       '60',
     ];
-    const r = await run([...argv, '--out', file, '--json']);
+    const r = await runCli([...argv, '--out', file, '--json']);
     expect(r.code).toBe(0);
     expect(r.stderr).toMatch(/wrote .*lowpass\.json/);
     const printed = JSON.parse(r.stdout);
@@ -430,12 +423,12 @@ describe('polewright design --out', () => {
 
   it('every kind of designer round-trips through a file', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'polewright-kinds-'));
-    const help = (await run(['design', '--help'])).stdout;
+    const help = (await runCli(['design', '--help'])).stdout;
     const examples = [...help.matchAll(/^ {2}\S+ +polewright (design .*)$/gm)].map((m) => m[1]!.split(' '));
     expect(examples).toHaveLength(12);
     for (const [i, argv] of examples.entries()) {
       const file = join(dir, `${i}.json`);
-      const r = await run([...argv, '--out', file, '--json']);
+      const r = await runCli([...argv, '--out', file, '--json']);
       expect(r.code, argv.join(' ')).toBe(0);
       const read = readDesignFile(readFileSync(file, 'utf8'));
       if (!read.ok) throw new Error(`${argv.join(' ')}: ${read.message}`);

@@ -3,22 +3,15 @@ import { execFileSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { main } from '../../src/cli/main.ts';
+import { runCli } from '../helpers/cli.ts';
 import { buildImplementation, DEFAULT_IMPLEMENTATION, runFixedCodes } from '../../src/core/fixed/index.ts';
 import { tfToZpk } from '../../src/core/system.ts';
-
-async function run(argv: string[]) {
-  let stdout = '';
-  let stderr = '';
-  const code = await main(argv, { stdout: (s) => (stdout += s), stderr: (s) => (stderr += s) });
-  return { code, stdout, stderr };
-}
 
 const NOTCH = ['--b', '0.95,-1.8,0.95', '--a', '1,-1.7,0.9', '--fs', '2000'];
 
 describe('polewright export', () => {
   it('writes JSON with the settings the flags name', async () => {
-    const r = await run([
+    const r = await runCli([
       'export',
       ...NOTCH,
       '--format',
@@ -53,12 +46,12 @@ describe('polewright export', () => {
   });
 
   it('writes CSV and C, to stdout or a file', async () => {
-    const csv = await run(['export', ...NOTCH, '--format', 'csv']);
+    const csv = await runCli(['export', ...NOTCH, '--format', 'csv']);
     expect(csv.code).toBe(0);
     expect(csv.stdout).toMatch(/^# design hash: [0-9a-f]{16}/);
     const dir = mkdtempSync(join(tmpdir(), 'polewright-export-'));
     const out = join(dir, 'notch.h');
-    const c = await run(['export', ...NOTCH, '--format', 'c', '--name', 'hum_notch', '--out', out]);
+    const c = await runCli(['export', ...NOTCH, '--format', 'c', '--name', 'hum_notch', '--out', out]);
     expect(c.code).toBe(0);
     expect(c.stdout).toBe('');
     expect(c.stderr).toMatch(
@@ -71,7 +64,7 @@ describe('polewright export', () => {
     const dir = mkdtempSync(join(tmpdir(), 'polewright-export-'));
     const header = join(dir, 'filter.h');
     const flags = ['--structure', 'df1', '--word', '12', '--rounding', 'nearest', '--overflow', 'saturate'];
-    const r = await run(['export', ...NOTCH, '--format', 'c', '--out', header, ...flags]);
+    const r = await runCli(['export', ...NOTCH, '--format', 'c', '--out', header, ...flags]);
     expect(r.code).toBe(0);
     writeFileSync(
       join(dir, 'main.c'),
@@ -115,19 +108,19 @@ int main(void) {
   });
 
   it('rejects bad option values with what is accepted', async () => {
-    const bad = await run(['export', ...NOTCH, '--structure', 'lattice']);
+    const bad = await runCli(['export', ...NOTCH, '--structure', 'lattice']);
     expect(bad.code).toBe(2);
     expect(bad.stderr).toMatch(/--structure must be one of df1, df2t; got "lattice"/);
-    const word = await run(['export', ...NOTCH, '--word', '40']);
+    const word = await runCli(['export', ...NOTCH, '--word', '40']);
     expect(word.stderr).toMatch(/--word must be a whole number from 8 to 32/);
-    const acc = await run(['export', ...NOTCH, '--word', '24', '--accumulator', '32']);
+    const acc = await runCli(['export', ...NOTCH, '--word', '24', '--accumulator', '32']);
     expect(acc.stderr).toMatch(/--accumulator must be a whole number from 39 to 64/);
-    const name = await run(['export', ...NOTCH, '--name', 'no-dash']);
+    const name = await runCli(['export', ...NOTCH, '--name', 'no-dash']);
     expect(name.stderr).toMatch(/not a C identifier/);
   });
 
   it('says on stderr when quantization loses stability', async () => {
-    const r = await run([
+    const r = await runCli([
       'export',
       '--b',
       '1',
@@ -145,7 +138,7 @@ int main(void) {
   });
 
   it('is listed in the usage text', async () => {
-    const r = await run(['--help']);
+    const r = await runCli(['--help']);
     expect(r.stdout).toMatch(/polewright export +<design> \[--format c\|json\|csv\]/);
   });
 });

@@ -2,18 +2,11 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { main } from '../../src/cli/main.ts';
+import { runCli } from '../helpers/cli.ts';
 import { writeSharedFile } from '../../src/share/designFile.ts';
 import { decodeLink, encodeLink } from '../../src/share/link/index.ts';
 import { demoDesign } from '../../src/store/demo.ts';
 import { bitwiseDifference } from '../share/arbitraries.ts';
-
-async function run(argv: string[]) {
-  let stdout = '';
-  let stderr = '';
-  const code = await main(argv, { stdout: (s) => (stdout += s), stderr: (s) => (stderr += s) });
-  return { code, stdout, stderr };
-}
 
 const EQ = 'y[n] = 1.6 y[n-1] - 0.64 y[n-2] + x[n] - x[n-2]';
 
@@ -26,7 +19,7 @@ describe('polewright link', () => {
       view: { timeInput: 'step' as const },
     };
     writeFileSync(file, writeSharedFile(shared));
-    const r = await run(['link', file]);
+    const r = await runCli(['link', file]);
     expect(r.code).toBe(0);
     expect(r.stdout).toMatch(/^http:\/\/127\.0\.0\.1:5173\/#pw1\.[A-Za-z0-9_-]+\n$/);
     const back = decodeLink(r.stdout.trim());
@@ -34,7 +27,7 @@ describe('polewright link', () => {
   });
 
   it('takes --base and a design given as an equation, keeping the typed text', async () => {
-    const r = await run(['link', '--eq', EQ, '--fs', '1000', '--base', 'https://example.org/pw/']);
+    const r = await runCli(['link', '--eq', EQ, '--fs', '1000', '--base', 'https://example.org/pw/']);
     expect(r.code).toBe(0);
     expect(r.stdout.startsWith('https://example.org/pw/#pw1.')).toBe(true);
     const back = decodeLink(r.stdout.trim());
@@ -45,7 +38,7 @@ describe('polewright link', () => {
   });
 
   it('refuses a bad --base', async () => {
-    const r = await run(['link', '--eq', EQ, '--base', 'javascript:alert(1)']);
+    const r = await runCli(['link', '--eq', EQ, '--base', 'javascript:alert(1)']);
     expect(r.code).toBe(2);
     expect(r.stderr).toMatch(/--base must be an http\(s\) address/);
   });
@@ -55,8 +48,8 @@ describe('a link as the design of other commands', () => {
   const link = `http://127.0.0.1:5173/#${encodeLink({ design: demoDesign(), view: {} })}`;
 
   it('analyze reads a full URL and a bare fragment alike', async () => {
-    const a = await run(['analyze', link, '--json']);
-    const b = await run(['analyze', link.slice(link.indexOf('#') + 1), '--json']);
+    const a = await runCli(['analyze', link, '--json']);
+    const b = await runCli(['analyze', link.slice(link.indexOf('#') + 1), '--json']);
     expect(a.code).toBe(0);
     expect(a.stderr).toBe('');
     expect(b.stdout).toBe(a.stdout);
@@ -66,12 +59,12 @@ describe('a link as the design of other commands', () => {
   });
 
   it('response and simulate accept it too', async () => {
-    expect((await run(['response', link, '--points', '16', '--json'])).code).toBe(0);
-    expect((await run(['simulate', link, '--samples', '8', '--json'])).code).toBe(0);
+    expect((await runCli(['response', link, '--points', '16', '--json'])).code).toBe(0);
+    expect((await runCli(['simulate', link, '--samples', '8', '--json'])).code).toBe(0);
   });
 
   it('a damaged link is a usage error with the reason', async () => {
-    const r = await run(['analyze', link.slice(0, 60)]);
+    const r = await runCli(['analyze', link.slice(0, 60)]);
     expect(r.code).toBe(2);
     expect(r.stderr).toMatch(/the design link: The link (cannot be read|is damaged)/);
   });

@@ -2,7 +2,7 @@ import { describe, it, expect } from 'vitest';
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { main } from '../../src/cli/main.ts';
+import { runCli } from '../helpers/cli.ts';
 import { filterStream } from '../../src/cli/stream/filterFile.ts';
 import { WavFileSink } from '../../src/cli/stream/sinks.ts';
 import type { SignalSource } from '../../src/cli/stream/sources.ts';
@@ -13,13 +13,6 @@ import { tfToZpk, zpkToSections, compressRoots } from '../../src/core/system.ts'
 import type { Section } from '../../src/core/types.ts';
 import { loadFixture } from '../helpers/fixtures.ts';
 import { expectClose } from '../helpers/expectClose.ts';
-
-async function run(argv: string[]) {
-  let stdout = '';
-  let stderr = '';
-  const code = await main(argv, { stdout: (s) => (stdout += s), stderr: (s) => (stderr += s) });
-  return { code, stdout, stderr };
-}
 
 const dir = mkdtempSync(join(tmpdir(), 'pw-stream-'));
 const path = (name: string) => join(dir, name);
@@ -50,7 +43,7 @@ describe('simulate --output (streaming)', () => {
   const decoded = readBack(path('in24.wav'));
 
   it('WAV in, WAV out: same rate and format, every channel filtered, bytes equal to one-shot filtering', async () => {
-    const r = await run([
+    const r = await runCli([
       'simulate',
       '--b',
       B,
@@ -72,7 +65,7 @@ describe('simulate --output (streaming)', () => {
   });
 
   it('--channel picks one channel (1-based) and --output-format chooses the stored format', async () => {
-    const r = await run([
+    const r = await runCli([
       'simulate',
       '--b',
       B,
@@ -97,7 +90,7 @@ describe('simulate --output (streaming)', () => {
   });
 
   it('clips to full scale in an integer format and says how many samples', async () => {
-    const r = await run([
+    const r = await runCli([
       'simulate',
       '--b',
       '4',
@@ -127,7 +120,7 @@ describe('simulate --output (streaming)', () => {
     const text =
       'time_s,volts\n' + Array.from(x, (v, k) => `${(0.25 + k / 1000).toFixed(3)},${v}`).join('\n');
     writeFileSync(path('in.csv'), text);
-    const r = await run([
+    const r = await runCli([
       'simulate',
       '--b',
       B,
@@ -153,7 +146,7 @@ describe('simulate --output (streaming)', () => {
   });
 
   it('CSV in, WAV out (float by default, the rate from the time column); WAV in, CSV out', async () => {
-    const r = await run([
+    const r = await runCli([
       'simulate',
       '--b',
       B,
@@ -168,7 +161,7 @@ describe('simulate --output (streaming)', () => {
     const w = readBack(path('fromcsv.wav'));
     expect(w.info.format).toBe('f32');
     expect(w.sampleRate).toBe(1000);
-    const r2 = await run([
+    const r2 = await runCli([
       'simulate',
       '--b',
       B,
@@ -187,7 +180,7 @@ describe('simulate --output (streaming)', () => {
 
   it('a one-column CSV takes --input-rate, else the design rate', async () => {
     writeFileSync(path('col.csv'), '1\n2\n3\n4\n');
-    const r = await run([
+    const r = await runCli([
       'simulate',
       '--b',
       '1,1',
@@ -215,7 +208,7 @@ describe('simulate --output (streaming)', () => {
       path('fx.wav'),
       writeWav({ format: 'f64', sampleRate: fx.fs, channels: [Float64Array.from(fx.x)] }).bytes,
     );
-    const r = await run([
+    const r = await runCli([
       'simulate',
       '--b',
       c.b.join(','),
@@ -268,14 +261,14 @@ describe('simulate: in-memory modes and errors', () => {
         channels: [Float64Array.of(0.5, 0, 0), Float64Array.of(0, 0, 0)],
       }).bytes,
     );
-    const r = await run(['simulate', '--b', '1,1', '--input', path('small.wav'), '--json']);
+    const r = await runCli(['simulate', '--b', '1,1', '--input', path('small.wav'), '--json']);
     expect(r.code).toBe(0);
     expect(JSON.parse(r.stdout)).toMatchObject({ sampleRate: 8000, output: [0.5, 0.5, 0] });
     expect(r.stderr).toMatch(/2 channels; channel 1 was used/);
   });
 
   it('a generated input can be written to a file', async () => {
-    const r = await run([
+    const r = await runCli([
       'simulate',
       '--b',
       '0.5',
@@ -297,7 +290,7 @@ describe('simulate: in-memory modes and errors', () => {
   });
 
   it('notes a signal rate that differs from the design rate', async () => {
-    const r = await run(['simulate', '--b', '1', '--fs', '44100', '--input', path('small.wav'), '--json']);
+    const r = await runCli(['simulate', '--b', '1', '--fs', '44100', '--input', path('small.wav'), '--json']);
     expect(r.stderr).toMatch(/signal's sample rate \(8000 Hz\) differs from the design's \(44100 Hz\)/);
   });
 
@@ -324,13 +317,13 @@ describe('simulate: in-memory modes and errors', () => {
       [['--input', 'step', '--output-format', 'f32'], /--output-format needs --output/],
     ];
     for (const [argv, pattern] of cases) {
-      const r = await run(['simulate', '--b', '1', ...argv]);
+      const r = await runCli(['simulate', '--b', '1', ...argv]);
       expect(r.code, argv.join(' ')).toBe(2);
       expect(r.stderr).toMatch(pattern);
     }
     const full = readFileSync(path('in24.wav'));
     writeFileSync(path('cut.wav'), full.subarray(0, 1000));
-    const cut = await run(['simulate', '--b', '1', '--input', path('cut.wav'), '--output', path('x.wav')]);
+    const cut = await runCli(['simulate', '--b', '1', '--input', path('cut.wav'), '--output', path('x.wav')]);
     expect(cut.code).toBe(2);
     expect(cut.stderr).toMatch(/declares 900006 bytes .* ends after 956 bytes/);
   });
