@@ -9,6 +9,7 @@ import {
   parseSystem,
 } from '../../src/core/parse/index.ts';
 import type { Result } from '../../src/core/types.ts';
+import { mutatedText } from '../helpers/mutate.ts';
 
 const PARSERS: ((t: string) => Result<unknown>)[] = [
   parseSystem,
@@ -74,19 +75,7 @@ describe('parsers never throw', () => {
   });
 
   it('on mutated valid inputs', () => {
-    const edit = fc.record({
-      at: fc.nat(),
-      del: fc.nat({ max: 3 }),
-      ins: fc.array(fc.constantFrom(...ALPHABET), { maxLength: 3 }).map((a) => a.join('')),
-    });
-    const mutated = fc
-      .tuple(fc.constantFrom(...VALID), fc.array(edit, { minLength: 1, maxLength: 4 }))
-      .map(([s, edits]) =>
-        edits.reduce((acc, e) => {
-          const at = e.at % (acc.length + 1);
-          return acc.slice(0, at) + e.ins + acc.slice(at + e.del);
-        }, s),
-      );
+    const mutated = mutatedText(VALID, ALPHABET, 3);
     fc.assert(
       fc.property(mutated, (t) => checkAll(t)),
       { seed: 99, numRuns: 3000 },

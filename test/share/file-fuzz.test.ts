@@ -6,6 +6,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { readSharedFile, writeSharedFile } from '../../src/share/designFile.ts';
 import { demoDesign } from '../../src/store/demo.ts';
+import { mutatedText } from '../helpers/mutate.ts';
 import { anySharedDesign, bitwiseDifference } from './arbitraries.ts';
 
 const RUNS = 10_000;
@@ -88,19 +89,7 @@ describe('design file fuzz', () => {
       '1e309',
       '-0',
     ];
-    const edit = fc.record({
-      at: fc.nat(),
-      del: fc.nat({ max: 6 }),
-      ins: fc.array(fc.constantFrom(...alphabet), { maxLength: 3 }).map((a) => a.join('')),
-    });
-    const mutated = fc
-      .tuple(fc.constantFrom(...files), fc.array(edit, { minLength: 1, maxLength: 4 }))
-      .map(([s, edits]) =>
-        edits.reduce((acc, e) => {
-          const at = e.at % (acc.length + 1);
-          return acc.slice(0, at) + e.ins + acc.slice(at + e.del);
-        }, s),
-      );
+    const mutated = mutatedText(files, alphabet, 6);
     fc.assert(
       fc.property(mutated, (t) => checkRead(t)),
       { seed: 7003, numRuns: RUNS },
