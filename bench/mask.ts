@@ -4,7 +4,7 @@
  */
 import type { RequirementMask } from '../src/core/mask.ts';
 import { evaluateMask } from '../src/core/mask.ts';
-import { benchDesign } from './engine.ts';
+import { benchDesign, dragSteps } from './engine.ts';
 import { cell, timeMs } from './timing.ts';
 
 /** Markdown table of evaluateMask timings (median ms) by order, moving one pole a little each call. */
@@ -19,15 +19,8 @@ export function benchMask(): string {
   };
   const rows = ['| order | regions | evaluateMask per frame (ms, median) |', '|---|---|---|'];
   for (const order of [8, 32, 64]) {
-    const base = benchDesign(order);
-    let t = 0;
-    const ms = timeMs(() => {
-      t += 1e-4;
-      const poles = base.poles.slice();
-      const p0 = poles[0]!;
-      poles[0] = { ...p0, re: p0.re + Math.sin(t) * 1e-3 };
-      evaluateMask(mask, { ...base, poles }, fs);
-    }, 300);
+    const step = dragSteps(benchDesign(order));
+    const ms = timeMs(() => evaluateMask(mask, step(), fs), 300);
     rows.push(`| ${order} | ${mask.regions.length} | ${cell(ms)} |`);
   }
   return rows.join('\n');
