@@ -1,22 +1,33 @@
-/** The current system in every form, each with Copy and a button that puts it in the entry box. */
+/**
+ * The current system in every form, each with Copy and a button that puts it in the entry box. Printing and
+ * laying out seven forms of a high-order system costs more than a frame, so during a root drag the forms
+ * keep their text from before it and catch up on release.
+ */
 import { useMemo, useState } from 'react';
 import { selectTf, selectZpk } from '../../store/derived.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 import { CopyButton } from '../shared/CopyButton.tsx';
+import { useSettled } from '../shared/useSettled.ts';
 import { systemForms } from './systemForms.ts';
 
 const DIGIT_CHOICES = { '6': 6, '10': 10, all: undefined } as const;
 type DigitChoice = keyof typeof DIGIT_CHOICES;
 
 export function SystemForms({ onEdit }: { onEdit: (text: string) => void }) {
-  const tf = useWorkbench(selectTf);
-  const zpk = useWorkbench(selectZpk);
+  const tf = useSettled(selectTf);
+  const zpk = useSettled(selectZpk);
+  const dragging = useWorkbench((s) => s.dragging);
   const [digits, setDigits] = useState<DigitChoice>('6');
   const forms = useMemo(() => systemForms(tf, zpk, DIGIT_CHOICES[digits]), [tf, zpk, digits]);
   return (
     <section className="pw-side-section" aria-labelledby="pw-forms-h" data-testid="system-forms">
       <div className="pw-section-head">
         <h2 id="pw-forms-h">Written out</h2>
+        {dragging && (
+          <span className="pw-hint" data-testid="forms-paused">
+            updates on release
+          </span>
+        )}
         <label className="pw-hint">
           digits{' '}
           <select value={digits} onChange={(e) => setDigits(e.target.value as DigitChoice)}>
