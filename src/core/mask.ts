@@ -20,7 +20,19 @@ export type { MaskOptions } from './mask/evaluate.ts';
 export { functionSource, sampledSource, sectionsSource, zpkSource } from './mask/source.ts';
 export type { MagnitudeSource } from './mask/source.ts';
 export { magnitudeDbAt, magnitudeDbReader, magnitudeDbZpk } from './mask/magnitude.ts';
-export { maskFromDesigner, maskFromNotchRequirement, maskFromRequirement } from './mask/fromRequirement.ts';
+export {
+  maskFromIirDesigner,
+  maskFromNotchRequirement,
+  maskFromRequirement,
+} from './mask/fromRequirement.ts';
+export { maskFromDesigner } from './mask/designerMask.ts';
+export {
+  maskFromNotchDesigner,
+  NOTCH_PASS_GAP_WIDTHS,
+  NOTCH_PASS_TOLERANCE_DB,
+  NOTCH_STOP_HALF_WIDTH,
+  NOTCH_STOP_ATTENUATION_DB,
+} from './mask/notchMask.ts';
 export type { NotchRequirement } from './mask/fromRequirement.ts';
 export {
   addRegion,

@@ -87,7 +87,7 @@ describe('maskFromRequirement', () => {
   });
 
   it('gives no mask for designers without a requirement', () => {
-    expect(maskFromDesigner({ kind: 'notch', fs: FS, f0: 50, q: 30 })).toBeNull();
+    expect(maskFromDesigner({ kind: 'peak', fs: FS, f0: 50, q: 30 })).toBeNull();
     expect(
       maskFromDesigner({
         kind: 'iir',
@@ -98,5 +98,20 @@ describe('maskFromRequirement', () => {
         edgesHz: [100],
       }),
     ).toBeNull();
+  });
+});
+
+describe('the mask a notching designer implies', () => {
+  it('a notch gets a stop region at its centre and flat pass bands clear of it', () => {
+    const mask = maskFromDesigner({ kind: 'notch', fs: 2000, f0: 50, bandwidthHz: 2 })!;
+    const stop = mask.regions.filter((r) => r.kind === 'stop');
+    const pass = mask.regions.filter((r) => r.kind === 'pass');
+    expect(stop).toHaveLength(1);
+    expect(stop[0]!.fromHz).toBeLessThan(50);
+    expect(stop[0]!.toHz).toBeGreaterThan(50);
+    // No pass region may reach into the notch's own −3 dB width (50 ± 1 Hz).
+    for (const r of pass) expect(r.toHz <= 49 || r.fromHz >= 51).toBe(true);
+    expect(pass.some((r) => r.fromHz === 0)).toBe(true);
+    expect(pass.some((r) => r.toHz === 1000)).toBe(true);
   });
 });

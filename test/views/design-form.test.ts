@@ -4,7 +4,7 @@ import { evaluateMask } from '../../src/core/mask.ts';
 import { FAMILIES, KINDS, defaultForm, isClassical } from '../../src/views/side/design/designKinds.ts';
 import { formOf, readForm, readHarmonics } from '../../src/views/side/design/designForm.ts';
 import { errorField } from '../../src/views/side/design/designErrors.ts';
-import { requirementMaskOf } from '../../src/views/side/design/requirementMask.ts';
+import { maskFromDesigner } from '../../src/core/mask.ts';
 import { describeDesigner } from '../../src/views/side/design/describe.ts';
 
 const RATES = [200, 1000, 2000, 8000, 48000];
@@ -32,7 +32,7 @@ describe('defaultForm', () => {
         for (const autoOrder of isClassical(kind) ? [false, true] : [false]) {
           const r = readForm({ ...defaultForm(kind, fs), autoOrder }, fs);
           if (!r.ok) throw new Error(kind);
-          const mask = requirementMaskOf(r.spec);
+          const mask = maskFromDesigner(r.spec);
           const d = runDesigner(r.spec);
           if (!mask || !d.ok) continue;
           const verdict = evaluateMask(mask, d.value.zpk, fs);
@@ -141,9 +141,9 @@ describe('errorField', () => {
   });
 });
 
-describe('requirementMaskOf', () => {
+describe('maskFromDesigner', () => {
   it('gives a notch a narrow stop region at f0 and flat pass regions clear of it', () => {
-    const mask = requirementMaskOf({ kind: 'notch', fs: 2000, f0: 50, bandwidthHz: 2 })!;
+    const mask = maskFromDesigner({ kind: 'notch', fs: 2000, f0: 50, bandwidthHz: 2 })!;
     const stop = mask.regions.filter((r) => r.kind === 'stop');
     expect(stop).toHaveLength(1);
     expect(stop[0]!.fromHz).toBeLessThan(50);
@@ -156,14 +156,14 @@ describe('requirementMaskOf', () => {
   });
 
   it('gives a comb of notches one stop region per tooth, DC and Nyquist included', () => {
-    const mask = requirementMaskOf({ kind: 'comb', fs: 1000, f0: 100, bandwidthHz: 2, type: 'notch' })!;
+    const mask = maskFromDesigner({ kind: 'comb', fs: 1000, f0: 100, bandwidthHz: 2, type: 'notch' })!;
     expect(mask.regions.filter((r) => r.kind === 'stop')).toHaveLength(6);
   });
 
   it('implies no mask for a resonator or a classical design without a requirement', () => {
-    expect(requirementMaskOf({ kind: 'peak', fs: 8000, f0: 1200, q: 25 })).toBeNull();
+    expect(maskFromDesigner({ kind: 'peak', fs: 8000, f0: 1200, q: 25 })).toBeNull();
     expect(
-      requirementMaskOf({
+      maskFromDesigner({
         kind: 'iir',
         fs: 1000,
         family: 'butterworth',

@@ -94,7 +94,7 @@ export function maskFromNotchRequirement(req: NotchRequirement): Result<Requirem
  * The mask a designer description implies: a classical design carrying a complete requirement (pass-band
  * and stop-band edges, ripple, attenuation) gives its requirement's mask; anything else gives null.
  */
-export function maskFromDesigner(spec: DesignerSpec): RequirementMask | null {
+export function maskFromIirDesigner(spec: DesignerSpec): RequirementMask | null {
   if (spec.kind !== 'iir') return null;
   const { passbandHz, stopbandHz, rippleDb, attenuationDb } = spec;
   if (!passbandHz || !stopbandHz || rippleDb === undefined || attenuationDb === undefined) return null;

@@ -1,9 +1,10 @@
 /**
- * The mask a designer's own requirement implies: a classical design's pass and stop bands, or, for notches,
- * flat pass bands between the notches and a narrow stop region at each notch centre.
+ * The mask a notching designer's own numbers imply: flat pass bands between the notches and a narrow stop
+ * region at each notch centre (notch, harmonic notches, notch comb).
  */
-import type { DesignerSpec } from '../../../core/design/index.ts';
-import { maskFromDesigner, maskFromNotchRequirement, type RequirementMask } from '../../../core/mask.ts';
+import type { DesignerSpec } from '../design/index.ts';
+import type { RequirementMask } from './types.ts';
+import { maskFromNotchRequirement } from './fromRequirement.ts';
 
 /** Pass regions stop this many −3 dB widths short of a notch centre (a notch loses ~0.04 dB there). */
 export const NOTCH_PASS_GAP_WIDTHS = 5;
@@ -38,9 +39,8 @@ function notchesOf(spec: DesignerSpec): { hz: number; width: number }[] | null {
   }
 }
 
-/** The mask a designer's requirement implies, or null when it implies none (or its numbers are unusable). */
-export function requirementMaskOf(spec: DesignerSpec): RequirementMask | null {
-  if (spec.kind === 'iir') return maskFromDesigner(spec);
+/** The mask a notching designer implies, or null for other designers (or unusable numbers). */
+export function maskFromNotchDesigner(spec: DesignerSpec): RequirementMask | null {
   const notches = notchesOf(spec);
   if (!notches || !notches.every((n) => n.width > 0 && Number.isFinite(n.width))) return null;
   const sorted = [...notches].sort((a, b) => a.hz - b.hz);

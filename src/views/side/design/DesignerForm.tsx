@@ -24,7 +24,7 @@ import { readForm, type FieldErrors } from './designForm.ts';
 import { errorField, errorText } from './designErrors.ts';
 import { fieldLabel, pairNames } from './fieldLabels.ts';
 import { FormField, PairField } from './FormField.tsx';
-import { requirementMaskOf } from './requirementMask.ts';
+import { maskFromDesigner } from '../../../core/mask.ts';
 
 const GROUPS = [...new Set(KINDS.map((k) => k.group))];
 const PAIRS: Partial<Record<FieldKey, FieldKey>> = {
@@ -56,7 +56,7 @@ export function DesignerForm({ form, setForm }: DesignerFormProps) {
   const [withMask, setWithMask] = useState(true);
 
   const reading = useMemo(() => readForm(form, fs), [form, fs]);
-  const impliedMask = useMemo(() => (reading.ok ? requirementMaskOf(reading.spec) : null), [reading]);
+  const impliedMask = useMemo(() => (reading.ok ? maskFromDesigner(reading.spec) : null), [reading]);
   const fields = visibleFields(form);
   const sameKind =
     status !== null && (status.spec.kind === 'iir' ? status.spec.response : status.spec.kind) === form.kind;

@@ -8,7 +8,7 @@ import { selectDesignerStatus, selectMaskResult } from '../../../store/derived.t
 import { useWorkbench, workbenchStore } from '../../../store/useWorkbench.ts';
 import { MaskCell } from './MaskCell.tsx';
 import { maskVerdictText, regionVerdictText } from './maskText.ts';
-import { requirementMaskOf } from './requirementMask.ts';
+import { maskFromDesigner } from '../../../core/mask.ts';
 import { errorText } from './designErrors.ts';
 
 const store = () => workbenchStore.getState();
@@ -102,7 +102,7 @@ export function MaskSection() {
   const fs = useWorkbench((s) => s.design.sampleRate);
   const result = useWorkbench(selectMaskResult);
   const status = useWorkbench(selectDesignerStatus);
-  const implied = useMemo(() => (status ? requirementMaskOf(status.spec) : null), [status]);
+  const implied = useMemo(() => (status ? maskFromDesigner(status.spec) : null), [status]);
   const [error, setError] = useState<string | null>(null);
   const add = (kind: 'pass' | 'stop') => {
     const region =

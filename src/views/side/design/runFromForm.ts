@@ -2,7 +2,7 @@
 import type { DesignerSpec, DesignResult } from '../../../core/design/index.ts';
 import type { Result } from '../../../core/types.ts';
 import type { WorkbenchState } from '../../../store/store.ts';
-import { requirementMaskOf } from './requirementMask.ts';
+import { maskFromDesigner } from '../../../core/mask.ts';
 
 /**
  * Replaces the roots by the designer's output; with `setMask`, the mask becomes the requirement's (notch
@@ -16,7 +16,7 @@ export function runDesignerWithMask(
   store.beginGesture();
   try {
     const r = store.runDesigner(spec, 'keep');
-    if (r.ok && setMask) store.setMask(requirementMaskOf(spec));
+    if (r.ok && setMask) store.setMask(maskFromDesigner(spec));
     return r;
   } finally {
     store.endGesture();
