@@ -1,4 +1,4 @@
-/** What every chart draws beneath its curves: the clip rectangle they use, the plot background and the grid. */
+/** What every chart draws beneath its curves: the clip rectangle they use, the background, the grid, a zero line. */
 import { Grid, type GridProps } from './Grid.tsx';
 
 export interface PlotFrameProps {
@@ -8,13 +8,15 @@ export interface PlotFrameProps {
   clipId: string;
   x: NonNullable<GridProps['x']>;
   y: NonNullable<GridProps['y']>;
+  /** Pixel y of the value 0, for charts of signed samples: a line is drawn there when it lies in the plot. */
+  zeroY?: number;
 }
 
 /**
  * The clip path reaches a pixel above and below the rectangle so a curve along the top or bottom edge keeps
  * its full stroke.
  */
-export function PlotFrame({ rect, clipId, x, y }: PlotFrameProps) {
+export function PlotFrame({ rect, clipId, x, y, zeroY }: PlotFrameProps) {
   const { left, right, top, bottom } = rect;
   return (
     <>
@@ -23,6 +25,9 @@ export function PlotFrame({ rect, clipId, x, y }: PlotFrameProps) {
       </clipPath>
       <rect className="pw-plot-bg" x={left} y={top} width={right - left} height={bottom - top} />
       <Grid x={x} y={y} left={left} right={right} top={top} bottom={bottom} />
+      {zeroY !== undefined && zeroY >= top && zeroY <= bottom ? (
+        <path className="pw-plot-zero" d={`M${left} ${Math.round(zeroY) + 0.5}H${right}`} />
+      ) : null}
     </>
   );
 }

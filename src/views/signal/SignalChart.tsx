@@ -136,10 +136,8 @@ export function SignalChart({
         clipId={clipId}
         x={{ map: xMap, ticks: xTicks }}
         y={{ map: yMap, ticks: yTicks }}
+        zeroY={zeroY}
       />
-      {zeroY >= rect.top && zeroY <= rect.bottom ? (
-        <path className="pw-time-baseline" d={`M${rect.left} ${Math.round(zeroY) + 0.5}H${rect.right}`} />
-      ) : null}
       <g clipPath={`url(#${clipId})`}>
         <path
           className={`pw-signal-input${inputPath.band ? ' pw-band' : ''}`}

@@ -135,10 +135,8 @@ export function TimeChart({ width, height, cursor, onCursor, envelope, fitTail }
         clipId={clipId}
         x={{ map: xMap, ticks: xTicks }}
         y={{ map: yMap, ticks: yTicks }}
+        zeroY={zeroY}
       />
-      {zeroY >= rect.top && zeroY <= rect.bottom ? (
-        <path className="pw-time-baseline" d={`M${rect.left} ${Math.round(zeroY) + 0.5}H${rect.right}`} />
-      ) : null}
       <g clipPath={`url(#${clipId})`}>
         <g className="pw-time-input" data-testid="time-input-trace">
           <path d={inputPaths.line} />
