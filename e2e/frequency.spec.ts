@@ -76,11 +76,12 @@ test.describe('frequency view', () => {
     await page.keyboard.press('Home');
     await page.keyboard.press('ArrowRight');
     const fs = (await readDesign(page)).sampleRate;
-    expect(await cursorHz(page)).toBeCloseTo(fs / 2 / 400, 9);
+    // Poll: the cross-hair's value is rendered after the key event, not during it.
+    await expect.poll(() => cursorHz(page)).toBeCloseTo(fs / 2 / 400, 9);
     await page.keyboard.press('Shift+ArrowRight');
-    expect(await cursorHz(page)).toBeCloseTo((11 * fs) / 2 / 400, 9);
+    await expect.poll(() => cursorHz(page)).toBeCloseTo((11 * fs) / 2 / 400, 9);
     await page.keyboard.press('End');
-    expect(await cursorHz(page)).toBe(fs / 2);
+    await expect.poll(() => cursorHz(page)).toBe(fs / 2);
   });
 
   test('settings change the axes: dB/linear, log frequency, wrapped phase, delay in ms', async ({
