@@ -37,10 +37,7 @@ export function logDerivative(
       pr = tpr;
       b = b * mod + absC[k]!;
     }
-    const pd = pr * pr + pi * pi;
-    out[0] = (dr * pr + di * pi) / pd;
-    out[1] = (di * pr - dr * pi) / pd;
-    out[2] = Math.sqrt(pd) / b;
+    quotient(dr, di, pr, pi, b, out);
     return;
   }
   // q(w) = w^n p(1/w) has descending coefficients c reversed; p'/p = w (n - w q'/q).
@@ -61,14 +58,37 @@ export function logDerivative(
     qr = tqr;
     b = b * wm + absC[k]!;
   }
-  const qd = qr * qr + qi * qi;
-  const rr = (dr * qr + di * qi) / qd;
-  const ri = (di * qr - dr * qi) / qd;
+  quotient(dr, di, qr, qi, b, out);
+  const rr = out[0]!;
+  const ri = out[1]!;
   const tr = n - (wr * rr - wi * ri);
   const ti = -(wr * ri + wi * rr);
   out[0] = wr * tr - wi * ti;
   out[1] = wr * ti + wi * tr;
-  out[2] = Math.sqrt(qd) / b;
+}
+
+/**
+ * Writes d/p and |p|/b into out. Both are scaled by the larger part of p first: at high degree a
+ * polynomial's values and derivatives span more than the double range when squared (|p| ≈ 1e-182 or
+ * p' ≈ 1e218 for a degree-1024 Butterworth denominator), and |p|² would underflow to 0 or overflow.
+ */
+function quotient(dr: number, di: number, pr: number, pi: number, b: number, out: LogDerivativeOut): void {
+  const m = Math.max(Math.abs(pr), Math.abs(pi));
+  if (!(m > 0 && m < Infinity)) {
+    out[0] = m === 0 ? Infinity : NaN;
+    out[1] = m === 0 ? Infinity : NaN;
+    out[2] = m / b;
+    return;
+  }
+  const s = 1 / m;
+  const ur = pr * s;
+  const ui = pi * s;
+  const vr = dr * s;
+  const vi = di * s;
+  const ud = ur * ur + ui * ui;
+  out[0] = (vr * ur + vi * ui) / ud;
+  out[1] = (vi * ur - vr * ui) / ud;
+  out[2] = (m * Math.sqrt(ud)) / b;
 }
 
 /** Relative residual |p(z)| / Σ|c_k||z|^k at re + i·im (dimensionless), scale-safe for any |z|. */
