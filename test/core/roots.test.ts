@@ -154,27 +154,57 @@ describe('findRoots on clustered Butterworth denominators', () => {
   }
 });
 
+/** Denominator of an order-n digital Butterworth low-pass (cutoff 0.2 of Nyquist), multiplied out. */
+function butterworthDenominator(order: number): Float64Array {
+  // Poles by the bilinear transform of the analog prototype (Butterworth, from memory).
+  const wc = Math.tan((Math.PI * 0.2) / 2);
+  const poles: Root[] = [];
+  for (let k = 0; k < order / 2; k++) {
+    const th = (Math.PI * (2 * k + order + 1)) / (2 * order);
+    const sr = wc * Math.cos(th);
+    const si = Math.abs(wc * Math.sin(th));
+    const d = (1 - sr) ** 2 + si * si; // z = (1 + s) / (1 - s)
+    poles.push({ re: ((1 + sr) * (1 - sr) - si * si) / d, im: (2 * si) / d, multiplicity: 1 });
+  }
+  return polyFromRoots(poles);
+}
+
 describe('findRoots on hopelessly clustered polynomials', () => {
   it('keeps the backward error small and the set symmetric for Butterworth denominators of order 128-512', () => {
-    // Poles by the bilinear transform of the analog prototype (cutoff 0.2 of Nyquist). The multiplied-out
-    // coefficients reach 1e107 and their exact roots scatter far from the poles; numpy.roots 2.4 gets
-    // backward errors of 1e-3 to 1 here (bench/roots.ts), and Aberth's answers are not symmetric on their own.
+    // The multiplied-out coefficients reach 1e107 and their exact roots scatter far from the poles;
+    // numpy.roots 2.4 gets backward errors of 1e-3 to 1 here (bench/roots.ts), and Aberth's answers are
+    // not symmetric on their own.
     for (const order of [128, 256, 512]) {
-      const wc = Math.tan((Math.PI * 0.2) / 2);
-      const poles: Root[] = [];
-      for (let k = 0; k < order / 2; k++) {
-        const th = (Math.PI * (2 * k + order + 1)) / (2 * order);
-        const sr = wc * Math.cos(th);
-        const si = Math.abs(wc * Math.sin(th));
-        const d = (1 - sr) ** 2 + si * si; // z = (1 + s) / (1 - s)
-        poles.push({ re: ((1 + sr) * (1 - sr) - si * si) / d, im: (2 * si) / d, multiplicity: 1 });
-      }
-      const p = polyFromRoots(poles);
+      const p = butterworthDenominator(order);
       const r = findRoots(p);
       expect(r.converged, `order ${order}`).toBe(true);
       expect(rootsBackwardError(p, r.re, r.im), `order ${order}`).toBeLessThan(BACKWARD_GOAL);
       expectConjugateSymmetric(r.re, r.im);
     }
+  });
+
+  it('converges for the order-1024 Butterworth denominator, whose coefficients span 1e-182 to 1e215', () => {
+    // Near the origin |p| ≈ 1e-182 and elsewhere p' ≈ 1e218, so |p|² leaves the double range both ways;
+    // numpy.roots 2.4 has backward error 1.0 here (bench/roots.ts).
+    const p = butterworthDenominator(1024);
+    const r = findRoots(p);
+    expect(r.converged).toBe(true);
+    expect(r.re.length).toBe(1024);
+    expect(rootsBackwardError(p, r.re, r.im)).toBeLessThan(BACKWARD_GOAL);
+    expectConjugateSymmetric(r.re, r.im);
+  });
+
+  it('finds roots whose residuals are below 1e-154 (|p|² underflows): x³ − 1e-200', () => {
+    // Exact roots: 1e-200^(1/3) times the cube roots of unity (common practice).
+    const r = findRoots(Float64Array.of(1, 0, 0, -1e-200));
+    expect(r.converged).toBe(true);
+    const mod = Math.cbrt(1e-200);
+    const got = asRoots(r);
+    const want: Roots = {
+      re: [mod, -mod / 2, -mod / 2],
+      im: [0, (mod * Math.sqrt(3)) / 2, (-mod * Math.sqrt(3)) / 2],
+    };
+    expect(setDistance(got, want) / mod).toBeLessThan(1e-14);
   });
 });
 
