@@ -107,12 +107,30 @@ export function installPersistence(store: WorkbenchStore, env: PersistEnv = brow
     });
     // The first autosave after a reload or a link captures the opened design at once.
     saver.schedule();
+    // A root drag changes the design on every pointer move; writing the session (design and undo history)
+    // mid-drag would cost a frame every throttle interval, so the drag is saved on release, or when the page
+    // goes away mid-drag.
+    let heldByDrag = false;
+    const flush = () => {
+      if (heldByDrag) saver.schedule();
+      heldByDrag = false;
+      saver.flush();
+    };
     offs.push(
       store.subscribe((s, prev) => {
-        if (s.design !== prev.design || s.history !== prev.history || s.view !== prev.view) saver.schedule();
+        const changed = s.design !== prev.design || s.history !== prev.history || s.view !== prev.view;
+        if (s.dragging && !prev.dragging) {
+          // A write already pending (e.g. the gesture's start) waits for the release too.
+          saver.dispose();
+          heldByDrag = true;
+        } else if (s.dragging) heldByDrag ||= changed;
+        else if (changed || heldByDrag) {
+          heldByDrag = false;
+          saver.schedule();
+        }
       }),
-      env.listen('pagehide', () => saver.flush()),
-      env.listen('hidden', () => saver.flush()),
+      env.listen('pagehide', flush),
+      env.listen('hidden', flush),
       () => saver.dispose(),
     );
   }

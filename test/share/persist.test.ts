@@ -1,5 +1,5 @@
 import { beforeEach, describe, expect, it } from 'vitest';
-import { saveSession } from '../../src/share/autosave.ts';
+import { AUTOSAVE_KEY, saveSession } from '../../src/share/autosave.ts';
 import { encodeLink } from '../../src/share/link/index.ts';
 import { noticeStore } from '../../src/share/notices.ts';
 import { memoryStorage, type KeyValueStorage } from '../../src/share/storage.ts';
@@ -104,6 +104,33 @@ describe('page persistence', () => {
     expect(next.getState().design.name).toBe('edited');
     expect(next.getState().design.sampleRate).toBe(4000);
     expect(next.getState().history.past).toHaveLength(2);
+  });
+
+  it('holds the autosave during a root drag and writes the dropped root on release or pagehide', () => {
+    for (const end of ['release', 'pagehide'] as const) {
+      const storage = memoryStorage();
+      const env = fakeEnv(storage);
+      const store = createWorkbenchStore(demoDesign());
+      installPersistence(store, env);
+      env.runTimers();
+      const saved = storage.getItem(AUTOSAVE_KEY);
+      const st = store.getState();
+      st.beginGesture();
+      st.setDragging(true);
+      st.moveRoot({ kind: 'pole', index: 0 }, 0.5, 0.5);
+      st.moveRoot({ kind: 'pole', index: 0 }, 0.4, 0.6);
+      env.runTimers();
+      expect(storage.getItem(AUTOSAVE_KEY), 'nothing written mid-drag').toBe(saved);
+      if (end === 'release') {
+        st.endGesture();
+        st.setDragging(false);
+        env.runTimers();
+      } else env.fire('pagehide');
+      const next = createWorkbenchStore(emptyDesign());
+      installPersistence(next, fakeEnv(storage));
+      const pole = next.getState().design.poles[0]!;
+      expect([pole.re, pole.im], end).toEqual([0.4, 0.6]);
+    }
   });
 
   it('starts normally when the autosave is corrupted', () => {
