@@ -8,7 +8,14 @@ import { resolveGain } from '../src/core/gainRule.ts';
 import { responseZpk } from '../src/core/response.ts';
 import type { Design } from '../src/store/design.ts';
 import { openWorkbench, readDesign } from './support/app.ts';
-import { frequencyPanel, hoverFrequency, parseShown, readFrequency } from './support/charts.ts';
+import {
+  frequencyPanel,
+  hoverFrequency,
+  parseShown,
+  readFrequency,
+  showDelayPlot,
+  timePanel,
+} from './support/charts.ts';
 import {
   downloadPicture,
   dropFile,
@@ -36,6 +43,16 @@ function levelDb(d: Design, hz: number): number {
     Float64Array.of((2 * Math.PI * hz) / d.sampleRate),
   );
   return r.magnitudeDb[0]!;
+}
+
+/** Unwrapped phase (degrees) and group delay (samples) of a design at hz, by the engine. */
+function phaseDelay(d: Design, hz: number): { deg: number; samples: number } {
+  const gain = resolveGain(d.zeros, d.poles, d.gainRule, d.sampleRate).gain;
+  const r = responseZpk(
+    { zeros: d.zeros, poles: d.poles, gain },
+    Float64Array.of((2 * Math.PI * hz) / d.sampleRate),
+  );
+  return { deg: (r.phaseUnwrapped[0]! * 180) / Math.PI, samples: r.groupDelay[0]! };
 }
 
 test.beforeEach(async ({ page }) => {
@@ -191,7 +208,7 @@ test('a design name with markup shows as text in the header, the library, the re
   expect(dialogs).toBe(0);
 });
 
-test('a pinned reference stays drawn while a root is dragged, with its level and the difference in dB', async ({
+test('a pinned reference stays drawn in every plot while a root is dragged, with its values and differences', async ({
   page,
 }) => {
   const reference = await readDesign(page);
@@ -226,9 +243,35 @@ test('a pinned reference stays drawn while a root is dragged, with its level and
   );
   expect(Math.abs(curDb - refDb)).toBeGreaterThan(0.1);
 
+  // Phase (unwrapped, the default view) and group delay (samples), with the design's differences.
+  const read = (id: string) => frequencyPanel(page).getByTestId(`freq-read-ref-${id}`).innerText();
+  const refPd = phaseDelay(reference, shown.hz);
+  const curPd = phaseDelay(current, shown.hz);
+  const near = (shownText: string, want: number) =>
+    expect(Math.abs(parseShown(shownText.replace(/^\+/, '')) - want)).toBeLessThan(
+      Math.abs(want) * 5e-3 + 1e-3,
+    );
+  near(await read('phase'), refPd.deg);
+  near(await read('phase-diff'), curPd.deg - refPd.deg);
+  near(await read('delay'), refPd.samples);
+  near(await read('delay-diff'), curPd.samples - refPd.samples);
+  expect(await read('delay')).toContain('samples');
+
+  // The reference is drawn faintly in the phase and delay plots and in the time plot too.
+  const phaseTrace = page.getByTestId('reference-trace-phase').locator('path');
+  expect((await phaseTrace.getAttribute('d'))?.length).toBeGreaterThan(100);
+  await showDelayPlot(page);
+  const delayTrace = page.getByTestId('reference-trace-delay').locator('path');
+  expect((await delayTrace.getAttribute('d'))?.length).toBeGreaterThan(100);
+  const timeTrace = timePanel(page).getByTestId('reference-time-trace');
+  await expect(timeTrace).toContainText('reference');
+  expect((await timeTrace.locator('path').getAttribute('d'))?.length).toBeGreaterThan(50);
+
   await page.getByRole('button', { name: 'Unpin' }).click();
   await expect(page.getByTestId('reference-trace')).toHaveCount(0);
   await expect(page.getByTestId('reference-roots')).toHaveCount(0);
+  await expect(page.getByTestId('reference-trace-delay')).toHaveCount(0);
+  await expect(page.getByTestId('reference-time-trace')).toHaveCount(0);
   await expect(frequencyPanel(page).getByTestId('freq-read-ref-db')).toHaveCount(0);
 });
 

@@ -6,7 +6,9 @@
 import { useStore } from 'zustand';
 import { createStore, type StoreApi } from 'zustand/vanilla';
 import { resolveGain } from '../core/gainRule.ts';
-import { frequencyGrid, responseZpk, type FrequencyResponse } from '../core/response.ts';
+import { frequencyGrid, responseZpk, wrapPhase, type FrequencyResponse } from '../core/response.ts';
+import { zpkToSections } from '../core/system.ts';
+import { filterSections } from '../core/time.ts';
 import type { Zpk } from '../core/types.ts';
 import { readDesignFile, writeDesignFile } from '../share/designFile.ts';
 import { browserStorage, consoleWarn, type KeyValueStorage, type Warn } from '../share/storage.ts';
@@ -14,6 +16,8 @@ import type { Design } from './design.ts';
 import { LOG_AXIS_MIN_FRACTION } from './derived.ts';
 import { memoLast } from './memo.ts';
 import type { ViewSettings } from './view.ts';
+// Pure engine calls that merge the root angles into a grid; it lives beside the design's own curve.
+import { refineAtRoots } from '../views/frequency/refine.ts';
 
 export const REFERENCE_KEY = 'polewright.reference';
 
@@ -128,10 +132,100 @@ export function selectReferenceResponse(ref: Reference, view: ViewSettings): Ref
   return responseOf(ref.design, view.responsePoints, view.frequencyAxis);
 }
 
+const DEG_PER_RAD = 180 / Math.PI;
+
+/** The reference's three frequency curves in the plots' axis units, at frequencies in Hz. */
+export interface ReferenceCurves {
+  /** Frequency of every point, Hz at the reference's own sample rate. */
+  hz: Float64Array;
+  /** dB or |H|, as the magnitude plot shows. */
+  magnitude: Float64Array;
+  /** Degrees, wrapped to (−180°, 180°] or unwrapped, as the phase plot shows. */
+  phase: Float64Array;
+  /** Group delay in samples or in milliseconds at the reference's rate, as the delay plot shows. */
+  delay: Float64Array;
+}
+
+const curvesOf = memoLast(
+  (
+    d: Design,
+    points: number,
+    axis: ViewSettings['frequencyAxis'],
+    scale: ViewSettings['magnitudeScale'],
+    phaseMode: ViewSettings['phaseMode'],
+    delayUnit: ViewSettings['delayUnit'],
+  ): ReferenceCurves => {
+    // Refined at the roots like the design's own curve, so a notch or a resonance shows in full in both.
+    const r = refineAtRoots(zpkOf(d), responseOf(d, points, axis).response);
+    const toHz = d.sampleRate / (2 * Math.PI);
+    const perSample = delayUnit === 'ms' ? 1000 / d.sampleRate : 1;
+    const phase = phaseMode === 'wrapped' ? r.phase : r.phaseUnwrapped;
+    return {
+      hz: r.omega.map((w) => w * toHz),
+      magnitude: scale === 'db' ? r.magnitudeDb : r.magnitude,
+      phase: phase.map((p) => p * DEG_PER_RAD),
+      delay: r.groupDelay.map((g) => g * perSample),
+    };
+  },
+);
+
+/** The reference's magnitude, phase and group-delay curves for the frequency view's grid and units. */
+export function selectReferenceCurves(ref: Reference, view: ViewSettings): ReferenceCurves {
+  return curvesOf(
+    ref.design,
+    view.responsePoints,
+    view.frequencyAxis,
+    view.magnitudeScale,
+    view.phaseMode,
+    view.delayUnit,
+  );
+}
+
+/** The reference's values at one frequency (radians for phases, samples and ms for delay). */
+export interface ReferencePoint {
+  magnitudeDb: number;
+  /** Wrapped to (−π, π], radians. */
+  phase: number;
+  /** On the unwrapped plot's branch (ω = 0 in (−π, π]), radians. */
+  phaseUnwrapped: number;
+  /** Samples. */
+  groupDelay: number;
+  /** Milliseconds at the reference's own sample rate. */
+  groupDelayMs: number;
+}
+
+const pointOf = memoLast((d: Design, hz: number): ReferencePoint | null => {
+  const fs = d.sampleRate;
+  if (!(hz >= 0 && hz <= fs / 2)) return null;
+  const r = responseZpk(zpkOf(d), Float64Array.of((2 * Math.PI * hz) / fs));
+  const gd = r.groupDelay[0]!;
+  return {
+    magnitudeDb: r.magnitudeDb[0]!,
+    phase: r.phase[0]!,
+    phaseUnwrapped: r.phaseUnwrapped[0]!,
+    groupDelay: gd,
+    groupDelayMs: (gd * 1000) / fs,
+  };
+});
+
+/** The reference's level, phase and group delay at hz (Hz), or null above its Nyquist frequency. */
+export const selectReferencePoint = (ref: Reference, hz: number): ReferencePoint | null =>
+  pointOf(ref.design, hz);
+
+/** Design minus reference phase, radians: wrapped to (−π, π] when the view shows wrapped phase. */
+export function phaseDifference(design: number, reference: number, wrapped: boolean): number {
+  const d = design - reference;
+  return wrapped ? wrapPhase(d) : d;
+}
+
+const sectionsOf = memoLast((d: Design) => zpkToSections(zpkOf(d)));
+const timeOutputOf = memoLast((d: Design, input: Float64Array) => filterSections(sectionsOf(d), input));
+
+/** The reference's output for the time view's input signal (the same samples the design is fed). */
+export const selectReferenceTimeOutput = (ref: Reference, input: Float64Array): Float64Array =>
+  timeOutputOf(ref.design, input);
+
 /** The reference's |H| in dB at hz (Hz), or null above its Nyquist frequency. */
 export function referenceLevelDb(ref: Reference, hz: number): number | null {
-  const fs = ref.design.sampleRate;
-  if (!(hz >= 0 && hz <= fs / 2)) return null;
-  const r = responseZpk(zpkOf(ref.design), Float64Array.of((2 * Math.PI * hz) / fs));
-  return r.magnitudeDb[0]!;
+  return selectReferencePoint(ref, hz)?.magnitudeDb ?? null;
 }

@@ -18,7 +18,7 @@ import { PlotTitles } from './PlotTitles.tsx';
 import type { FrequencyReading } from './readAt.ts';
 import { refineAtRoots } from './refine.ts';
 import { RootMarker } from './RootMarker.tsx';
-import { MAGNITUDE_OVERLAYS } from './overlays.ts';
+import { PLOT_OVERLAYS } from './overlays.ts';
 import { MaskChip } from './mask/MaskChip.tsx';
 import { MaskHandles } from './mask/MaskHandles.tsx';
 import {
@@ -97,9 +97,20 @@ export function FrequencyChart({ width, height, reading, onCursor, marker }: Fre
     phase: useSettledRange(series.phase.key, series.phase.data, series.phase.wanted, hold),
     delay: useSettledRange(series.delay.key, series.delay.data, series.delay.wanted, hold),
   };
+  // One map per plot, kept while its rectangle and range hold, so overlay layers can memoise on it.
+  const { magnitude: rMag, phase: rPhase, delay: rDelay } = ranges;
+  const yMaps = useMemo(() => {
+    const byKey = { magnitude: rMag, phase: rPhase, delay: rDelay };
+    const maps = {} as Record<PlotKey, AxisMap>;
+    for (const { key, rect } of layout.plots) maps[key] = yMapOf(rect, byKey[key]);
+    return maps;
+  }, [layout, rMag, rPhase, rDelay]);
 
   const rects = layout.plots.map((p) => p.rect);
-  const units = { db: magnitudeScale === 'db', wrapped: phaseMode === 'wrapped', ms: delayUnit === 'ms' };
+  const units = useMemo(
+    () => ({ db: magnitudeScale === 'db', wrapped: phaseMode === 'wrapped', ms: delayUnit === 'ms' }),
+    [magnitudeScale, phaseMode, delayUnit],
+  );
   const points = reading
     ? layout.plots.map(({ key, rect }) => ({
         map: yMapOf(rect, ranges[key]),
@@ -136,27 +147,26 @@ export function FrequencyChart({ width, height, reading, onCursor, marker }: Fre
             name={key}
           />
         ))}
-        {magnitudePlot && MAGNITUDE_OVERLAYS.length > 0 ? (
-          <g className="pw-magnitude-overlays" clipPath={`url(#${overlayClip})`} pointerEvents="none">
-            <clipPath id={overlayClip}>
+        {layout.plots.map(({ key, rect }) => (
+          <g
+            key={key}
+            className={`pw-${key}-overlays`}
+            clipPath={`url(#${overlayClip}-${key})`}
+            pointerEvents="none"
+          >
+            <clipPath id={`${overlayClip}-${key}`}>
               <rect
-                x={magnitudePlot.rect.left}
-                y={magnitudePlot.rect.top}
-                width={magnitudePlot.rect.right - magnitudePlot.rect.left}
-                height={magnitudePlot.rect.bottom - magnitudePlot.rect.top}
+                x={rect.left}
+                y={rect.top}
+                width={rect.right - rect.left}
+                height={rect.bottom - rect.top}
               />
             </clipPath>
-            {MAGNITUDE_OVERLAYS.map(({ id, Layer }) => (
-              <Layer
-                key={id}
-                rect={magnitudePlot.rect}
-                xMap={xMap}
-                yMap={yMapOf(magnitudePlot.rect, ranges.magnitude)}
-                db={units.db}
-              />
+            {PLOT_OVERLAYS.map(({ id, Layer }) => (
+              <Layer key={id} plot={key} rect={rect} xMap={xMap} yMap={yMaps[key]} units={units} />
             ))}
           </g>
-        ) : null}
+        ))}
         <Axis
           side="bottom"
           map={xMap}

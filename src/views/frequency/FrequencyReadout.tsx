@@ -1,4 +1,5 @@
 /** The cross-hair read-out: exact values at the cross-hair frequency, in every unit the plots offer. */
+import { useCompare } from '../../store/compare.ts';
 import { ReferenceReading } from '../compare/ReferenceReading.tsx';
 import { formatDb, formatHz, formatNumber } from '../shared/format.ts';
 import type { FrequencyReading } from './readAt.ts';
@@ -22,16 +23,18 @@ function Item({ label, id, children }: { label: string; id: string; children: st
 }
 
 export function FrequencyReadout({ reading, phaseMode }: FrequencyReadoutProps) {
+  // A pinned reference adds its own line; the height is kept whether or not the cross-hair is on.
+  const withRef = useCompare((s) => s.reference !== null) ? ' pw-readout-ref' : '';
   if (!reading) {
     return (
-      <div className="pw-readout pw-readout-hint" aria-live="off">
+      <div className={`pw-readout pw-readout-hint${withRef}`} aria-live="off">
         Point at the plots (or focus them and use the arrow keys) to read exact values.
       </div>
     );
   }
   const ph = phaseMode === 'wrapped' ? reading.phase : reading.phaseUnwrapped;
   return (
-    <div className="pw-readout" aria-label="Values at the cross-hair">
+    <div className={`pw-readout${withRef}`} aria-label="Values at the cross-hair">
       <Item label="f" id="hz">
         {formatHz(reading.hz, 5)}
       </Item>
@@ -51,7 +54,7 @@ export function FrequencyReadout({ reading, phaseMode }: FrequencyReadoutProps) 
       <Item label="delay" id="delay">
         {`${formatNumber(reading.groupDelay, 4)} samples = ${formatNumber(reading.groupDelayMs, 4)} ms`}
       </Item>
-      <ReferenceReading hz={reading.hz} magnitudeDb={reading.magnitudeDb} />
+      <ReferenceReading reading={reading} phaseMode={phaseMode} />
     </div>
   );
 }

@@ -17,6 +17,7 @@ import { timeLayout, timeUnit } from './layout.ts';
 import type { EnvelopeResult } from './useEnvelope.ts';
 import { sampleAfterKey } from './sampleKeys.ts';
 import { OffScaleNote, SampleCrosshair } from './TimeOverlays.tsx';
+import { ReferenceTimeTrace } from './ReferenceTimeTrace.tsx';
 
 export interface TimeChartProps {
   width: number;
@@ -146,6 +147,7 @@ export function TimeChart({ width, height, cursor, onCursor, envelope, fitTail }
           <path d={outputPaths.line} />
           {outputPaths.dots ? <path className="pw-dots" d={outputPaths.dots} /> : null}
         </g>
+        <ReferenceTimeTrace px={px} yMap={yMap} rect={rect} />
         {envelopePaths ? (
           <path className="pw-time-envelope" data-testid="time-envelope" d={envelopePaths} />
         ) : null}
