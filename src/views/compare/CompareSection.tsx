@@ -25,8 +25,8 @@ export function CompareSection() {
         </p>
       ) : (
         <p className="pw-hint pw-block">
-          Pin the design as it is now; keep editing and its roots and magnitude response stay drawn, dashed,
-          under the design’s, with the difference in dB read at the cross-hair.
+          Pin the design as it is now; keep editing and its roots and responses (magnitude, phase, group
+          delay, time) stay drawn, dashed, beside the design’s, with the differences read at the cross-hair.
         </p>
       )}
       <div className="pw-files-row">
