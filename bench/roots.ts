@@ -3,7 +3,8 @@
  * clustered Butterworth denominators, repeated roots) at degrees 8…1024. numpy is timed by
  * bench/numpy_roots.py in a long-lived python3 process on exactly the same coefficients, and its
  * measurements are interleaved with ours because the machine is shared and noisy; figures are medians.
- * Run standalone with `npx tsx bench/roots.ts`.
+ * Run standalone with `npx tsx bench/roots.ts`; `npx tsx bench/roots.ts Butterworth 512 1024` runs only the
+ * named family (case-insensitive prefix) at the given degrees.
  */
 import { spawn } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
@@ -137,8 +138,10 @@ async function startNumpy(file: string): Promise<NumpyServer> {
 }
 
 /** Runs the benchmark and returns a markdown table of median times, backward errors and time ratios. */
-export async function benchRoots(): Promise<string> {
-  const cases = FAMILIES.flatMap(([name, make]) => DEGREES.map((n) => ({ name, n, p: make(n) })));
+export async function benchRoots(family = '', degrees: readonly number[] = DEGREES): Promise<string> {
+  const cases = FAMILIES.filter(([name]) => name.toLowerCase().startsWith(family.toLowerCase())).flatMap(
+    ([name, make]) => degrees.map((n) => ({ name, n, p: make(n) })),
+  );
   const dir = mkdtempSync(join(tmpdir(), 'polewright-roots-'));
   const file = join(dir, 'polys.json');
   writeFileSync(file, JSON.stringify(cases.map((c) => Array.from(c.p))));
@@ -187,5 +190,6 @@ export async function benchRoots(): Promise<string> {
 }
 
 if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
-  console.log(await benchRoots());
+  const [family, ...degrees] = process.argv.slice(2);
+  console.log(await benchRoots(family, degrees.length > 0 ? degrees.map(Number) : DEGREES));
 }
