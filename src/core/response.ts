@@ -6,6 +6,7 @@ import type { FrequencyResponse } from './response/zpkResponse.ts';
 
 export { frequencyGrid, DEFAULT_LOG_GRID_MIN } from './response/grid.ts';
 export { responseZpk, wrapPhase } from './response/zpkResponse.ts';
+export { refineAtRoots, rootAngles, REFINE_RADIUS_BAND } from './response/refine.ts';
 export type { FrequencyResponse } from './response/zpkResponse.ts';
 export { responseAt, evalZpkAt } from './response/pointValue.ts';
 export { GROUP_DELAY_CIRCLE_SNAP } from './response/kernel.ts';

@@ -17,7 +17,7 @@ import { LOG_AXIS_MIN_FRACTION } from './derived.ts';
 import { memoLast } from './memo.ts';
 import type { ViewSettings } from './view.ts';
 // Pure engine calls that merge the root angles into a grid; it lives beside the design's own curve.
-import { refineAtRoots } from '../views/frequency/refine.ts';
+import { refineAtRoots } from '../core/response.ts';
 
 export const REFERENCE_KEY = 'polewright.reference';
 

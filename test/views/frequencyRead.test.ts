@@ -3,7 +3,7 @@ import type { Zpk } from '../../src/core/types.ts';
 import { createWorkbenchStore } from '../../src/store/store.ts';
 import { selectZpk } from '../../src/store/derived.ts';
 import { readAt } from '../../src/views/frequency/readAt.ts';
-import { refineAtRoots, rootAngles } from '../../src/views/frequency/refine.ts';
+import { refineAtRoots, rootAngles } from '../../src/core/response.ts';
 import { responseZpk, frequencyGrid } from '../../src/core/response.ts';
 import { expectClose } from '../helpers/expectClose.ts';
 

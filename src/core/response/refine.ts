@@ -3,8 +3,8 @@
  * circle between two grid points would otherwise show as a shallow dip instead of the true notch (−∞ dB
  * exactly there), and a sharp resonance would lose its peak. The engine evaluates the extra points.
  */
-import { responseZpk, type FrequencyResponse } from '../../core/response.ts';
-import type { Zpk } from '../../core/types.ts';
+import { responseZpk, type FrequencyResponse } from './zpkResponse.ts';
+import type { Zpk } from '../types.ts';
 
 /** Roots farther than this from the unit circle (in radius) add no point: their features are broad. */
 export const REFINE_RADIUS_BAND = 0.2;

@@ -16,7 +16,7 @@ import { cursorStepsForKey, startHz, stepHz } from './cursor.ts';
 import { frequencyLayout, type PlotKey } from './layout.ts';
 import { PlotTitles } from './PlotTitles.tsx';
 import type { FrequencyReading } from './readAt.ts';
-import { refineAtRoots } from './refine.ts';
+import { refineAtRoots } from '../../core/response.ts';
 import { RootMarker } from './RootMarker.tsx';
 import { PLOT_OVERLAYS } from './overlays.ts';
 import { MaskChip } from './mask/MaskChip.tsx';

@@ -14,7 +14,7 @@ import { useWorkbench } from '../../store/useWorkbench.ts';
 import { linePath } from '../chart/paths.ts';
 import { toPixels } from '../chart/pixels.ts';
 import type { MagnitudeOverlayProps } from './overlays.ts';
-import { refineAtRoots } from './refine.ts';
+import { refineAtRoots } from '../../core/response.ts';
 
 const COLOUR = 'var(--pw-quantized)';
 
