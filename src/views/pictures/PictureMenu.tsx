@@ -2,7 +2,7 @@
  * A small "Picture" menu for a panel's header: download the view as SVG (vector, for documents) or PNG
  * (2× image, for slides and chat). Keyboard: Enter/Space/↓ opens, ↑/↓ move, Esc closes.
  */
-import { useEffect, useId, useRef, useState, type KeyboardEvent } from 'react';
+import { memo, useEffect, useId, useRef, useState, type KeyboardEvent } from 'react';
 import { postNotice } from '../../share/notices.ts';
 import { savePicture, type PictureFormat } from './savePicture.ts';
 import { PICTURE_VIEWS, type PictureView } from './views.ts';
@@ -21,7 +21,8 @@ export function downloadPicture(view: PictureView, format: PictureFormat): Promi
   );
 }
 
-export function PictureMenu({ view }: { view: PictureView }) {
+/** Memoised: the panels around it re-render on every root move, the menu has nothing to redraw then. */
+export const PictureMenu = memo(function PictureMenu({ view }: { view: PictureView }) {
   const [open, setOpen] = useState(false);
   const box = useRef<HTMLDivElement>(null);
   const button = useRef<HTMLButtonElement>(null);
@@ -104,4 +105,4 @@ export function PictureMenu({ view }: { view: PictureView }) {
       ) : null}
     </div>
   );
-}
+});

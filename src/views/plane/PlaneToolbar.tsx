@@ -1,5 +1,5 @@
 /** The plane's toolbar: add roots, snapping, and the |H| shading switch (zoom floats on the plane). */
-import type { MouseEvent } from 'react';
+import { memo, type MouseEvent } from 'react';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import { PictureMenu } from '../pictures/PictureMenu.tsx';
 import { SnapControl } from './SnapControl.tsx';
@@ -20,7 +20,7 @@ interface Props {
   addAtDefault: (p: Placement) => void;
 }
 
-export function PlaneToolbar({ placing, setPlacing, addAtDefault }: Props) {
+export const PlaneToolbar = memo(function PlaneToolbar({ placing, setPlacing, addAtDefault }: Props) {
   const shading = useWorkbench((s) => s.view.shading);
   const onAdd = (p: Placement) => (e: MouseEvent) => {
     // A click arms placing (next click in the plane puts the root there); Enter/Space adds one in view.
@@ -58,4 +58,4 @@ export function PlaneToolbar({ placing, setPlacing, addAtDefault }: Props) {
       <PictureMenu view="plane" />
     </div>
   );
-}
+});

@@ -52,16 +52,20 @@ export function ZPlanePanel() {
   });
   useWheelZoom(svgRef, scaleRef);
 
-  const addAtDefault = (p: Placement) => {
-    const { view, addRoot } = workbenchStore.getState();
-    const c = view.planeCentre;
-    const s = view.planeSpan;
-    addRoot(p.kind, { re: c.re + 0.25 * s, im: p.pair ? Math.abs(c.im) + 0.35 * s : 0, multiplicity: 1 });
-    setPlacing(null);
-    requestAnimationFrame(() =>
-      svgRef.current?.querySelector<SVGGElement>('g[aria-pressed="true"]')?.focus(),
-    );
-  };
+  // Stable, so the memoised toolbar skips the re-render every root move brings to this panel.
+  const addAtDefault = useCallback(
+    (p: Placement) => {
+      const { view, addRoot } = workbenchStore.getState();
+      const c = view.planeCentre;
+      const s = view.planeSpan;
+      addRoot(p.kind, { re: c.re + 0.25 * s, im: p.pair ? Math.abs(c.im) + 0.35 * s : 0, multiplicity: 1 });
+      setPlacing(null);
+      requestAnimationFrame(() =>
+        svgRef.current?.querySelector<SVGGElement>('g[aria-pressed="true"]')?.focus(),
+      );
+    },
+    [setPlacing],
+  );
 
   const ready = width > 0 && height > 0;
   return (

@@ -1,4 +1,5 @@
 /** The time view's settings: input signal (with its frequency or seed), number of samples, stems or line. */
+import { memo } from 'react';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import type { ViewSettings } from '../../store/view.ts';
 import { NumberField } from '../chart/NumberField.tsx';
@@ -7,7 +8,7 @@ import { checkSamples, checkSineHz } from './bounds.ts';
 
 const setView = (patch: Partial<ViewSettings>) => workbenchStore.getState().setView(patch);
 
-export function TimeControls() {
+export const TimeControls = memo(function TimeControls() {
   const input = useWorkbench((s) => s.view.timeInput);
   const sineHz = useWorkbench((s) => s.view.sineHz);
   const seed = useWorkbench((s) => s.view.noiseSeed);
@@ -64,4 +65,4 @@ export function TimeControls() {
       />
     </div>
   );
-}
+});
