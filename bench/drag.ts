@@ -3,7 +3,8 @@
  * in headless Debian Chromium, loads an order-32 design through the system entry and drags a pole pair
  * along a 300-step arc with real (CDP) mouse events, one move per frame. Reports the frame cost and the
  * time from pointer event to every view updated, with the |H| shading off and on.
- * Run: `npx tsx bench/drag.ts` (or `npm run bench -- drag`).
+ * Run: `npx tsx bench/drag.ts` (or `npm run bench -- drag`). With PW_DIST=<dir> it serves that already built
+ * directory instead of building, so two builds can be measured alternately in one session.
  */
 import { spawn, execFileSync, type ChildProcess } from 'node:child_process';
 import { get } from 'node:http';
@@ -81,10 +82,22 @@ function row(label: string, s: DragSample[]): string {
 
 /** Runs the benchmark and returns a markdown table (times in ms). */
 export async function benchDrag(): Promise<string> {
-  execFileSync('npx', ['vite', 'build', '--logLevel', 'error'], { cwd: ROOT, stdio: 'inherit' });
+  const dist = process.env.PW_DIST;
+  if (!dist) {
+    execFileSync('npx', ['vite', 'build', '--logLevel', 'error'], { cwd: ROOT, stdio: 'inherit' });
+  }
   const server: ChildProcess = spawn(
     'npx',
-    ['vite', 'preview', '--port', String(PORT), '--strictPort', '--host', '127.0.0.1'],
+    [
+      'vite',
+      'preview',
+      '--port',
+      String(PORT),
+      '--strictPort',
+      '--host',
+      '127.0.0.1',
+      ...(dist ? ['--outDir', dist] : []),
+    ],
     {
       cwd: ROOT,
       stdio: 'ignore',

@@ -17,7 +17,22 @@ export interface LineOptions {
   thin?: boolean;
 }
 
-const r1 = (v: number) => Math.round(v * 10) / 10;
+/** Magnitude past which tenths are formatted as a plain number (an integer that size is no longer a small integer). */
+const FAST_FORMAT_LIMIT = 1e9;
+
+/**
+ * v rounded to tenths as text, the same text as String(Math.round(v * 10) / 10) but built from integers:
+ * formatting a fractional double is the costliest step of a path, and thousands run per frame during a drag.
+ */
+const r1 = (v: number): string => {
+  const t = Math.round(v * 10);
+  if (!(Math.abs(t) < FAST_FORMAT_LIMIT)) return String(t / 10);
+  const d = t % 10;
+  if (d === 0) return String(t / 10);
+  const w = (t - d) / 10;
+  if (t > 0) return `${w}.${d}`;
+  return `${w === 0 ? '-0' : w}.${-d}`;
+};
 
 /**
  * A polyline through (px[i], py[i]). NaN in x or y breaks the line. With `thin`, points sharing a pixel
@@ -36,25 +51,28 @@ export function linePath(px: ArrayLike<number>, py: ArrayLike<number>, o: LineOp
     parts.push(`${penDown ? 'L' : 'M'}${r1(x)} ${r1(y)}`);
     penDown = true;
   };
-  // Column state for thinning: first index and extreme points (by index) of the current pixel column.
-  let col = NaN;
-  let count = 0;
-  let fi = 0;
-  let mini = 0;
-  let maxi = 0;
-  const ys: number[] = [];
-  const xs: number[] = [];
+  // Column state for thinning, in scalars (no array per column): the column's lowest and highest points
+  // with the index each came at.
+  let open = false;
+  let col = 0;
+  let minI = 0;
+  let minX = 0;
+  let minY = 0;
+  let maxI = 0;
+  let maxX = 0;
+  let maxY = 0;
   const flush = () => {
-    if (count === 0) return;
+    if (!open) return;
     // The column's lowest and highest points in the order they came: within one pixel column that draws
     // the same vertical extent as every point of it (first and last add nothing visible).
-    const a = mini < maxi ? mini : maxi;
-    const b = mini < maxi ? maxi : mini;
-    emit(xs[a - fi]!, ys[a - fi]!);
-    if (b !== a) emit(xs[b - fi]!, ys[b - fi]!);
-    count = 0;
-    xs.length = 0;
-    ys.length = 0;
+    if (minI < maxI) {
+      emit(minX, minY);
+      emit(maxX, maxY);
+    } else if (maxI < minI) {
+      emit(maxX, maxY);
+      emit(minX, minY);
+    } else emit(minX, minY);
+    open = false;
   };
   for (let i = 0; i < px.length; i++) {
     const x = px[i]!;
@@ -76,17 +94,25 @@ export function linePath(px: ArrayLike<number>, py: ArrayLike<number>, o: LineOp
       continue;
     }
     const c = Math.round(x);
-    if (count === 0 || c !== col) {
+    if (!open || c !== col) {
       flush();
+      open = true;
       col = c;
-      fi = mini = maxi = i;
+      minI = maxI = i;
+      minX = maxX = x;
+      minY = maxY = y;
     } else {
-      if (y < ys[mini - fi]!) mini = i;
-      if (y > ys[maxi - fi]!) maxi = i;
+      if (y < minY) {
+        minI = i;
+        minX = x;
+        minY = y;
+      }
+      if (y > maxY) {
+        maxI = i;
+        maxX = x;
+        maxY = y;
+      }
     }
-    xs.push(x);
-    ys.push(y);
-    count++;
   }
   flush();
   return parts.join('');
@@ -150,7 +176,7 @@ export function dotsPath(
   bottom: number,
 ): string {
   const parts: string[] = [];
-  const d = r1(2 * r);
+  const d = Math.round(20 * r) / 10;
   for (let i = 0; i < px.length; i++) {
     const x = px[i]!;
     const y = py[i]!;
