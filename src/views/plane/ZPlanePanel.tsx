@@ -13,7 +13,7 @@ import { RootEditor } from './RootEditor.tsx';
 import { RootsLayer } from './RootsLayer.tsx';
 import { SurfaceCanvas } from './SurfaceCanvas.tsx';
 import { SurfaceLegend } from './SurfaceLegend.tsx';
-import { useElementSize } from './useElementSize.ts';
+import { useElementSize } from '../chart/useElementSize.ts';
 import { NUDGE_FINE_STEP, NUDGE_STEP } from './nudge.ts';
 import { usePlaneKeys } from './usePlaneKeys.ts';
 import { usePlanePointer, type Placement } from './usePlanePointer.ts';
