@@ -30,15 +30,16 @@ export function finiteExtent(values: ArrayLike<number>): Range | null {
   return lo <= hi ? [lo, hi] : null;
 }
 
+/** [lo, hi], or a range of exactly `minSpan` about its middle when it is narrower than that. */
+function widenRange(lo: number, hi: number, minSpan: number): Range {
+  if (hi - lo >= minSpan) return [lo, hi];
+  const mid = (lo + hi) / 2;
+  return [mid - minSpan / 2, mid + minSpan / 2];
+}
+
 /** [lo, hi] widened to at least `minSpan` about its middle and rounded outwards to nice tick steps. */
 export function niceRange(lo: number, hi: number, minSpan: number, ticks = 5): Range {
-  let a = lo;
-  let b = hi;
-  if (b - a < minSpan) {
-    const mid = (a + b) / 2;
-    a = mid - minSpan / 2;
-    b = mid + minSpan / 2;
-  }
+  const [a, b] = widenRange(lo, hi, minSpan);
   const [n0, n1] = scaleLinear().domain([a, b]).nice(ticks).domain() as [number, number];
   return [n0, n1];
 }
@@ -97,13 +98,7 @@ export function steppedRange(
   steps: readonly number[],
   count = 4,
 ): Range {
-  let a = lo;
-  let b = hi;
-  if (b - a < minSpan) {
-    const mid = (a + b) / 2;
-    a = mid - minSpan / 2;
-    b = mid + minSpan / 2;
-  }
+  const [a, b] = widenRange(lo, hi, minSpan);
   for (const s of steps) {
     const r0 = Math.floor(a / s) * s;
     const r1 = Math.ceil(b / s) * s;
