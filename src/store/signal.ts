@@ -3,31 +3,14 @@
  * state: it is not part of the design, never enters the undo history, links or autosave (a recording can
  * be hundreds of megabytes). Only the one channel being filtered is kept in memory.
  */
-import type { SampleFormat } from '../core/signal/index.ts';
 import type { WindowName } from '../core/signal/index.ts';
+import type { ParsedSignal } from '../workers/parseSignal.ts';
 
 /** What the time region shows: the built-in test inputs, the recording before/after, or its spectrum. */
 export type TimeRegion = 'test' | 'recording' | 'spectrum';
 
-/** A signal ready to filter. */
-export interface LoadedSignal {
-  /** File name, or a description of the generated signal. */
-  name: string;
-  source: 'wav' | 'csv' | 'generated';
-  /** Samples per second, Hz. */
-  sampleRate: number;
-  /** The channel being filtered, as numbers (WAV integers scaled to [-1, 1)). */
-  samples: Float64Array;
-  /** 0-based channel kept and how many the file has (1 for CSV and generated signals). */
-  channel: number;
-  channelCount: number;
-  /** The WAV file's sample format (the export default), or null for text and generated signals. */
-  format: SampleFormat | null;
-  /** Time of the first sample, s (a CSV time column may start anywhere). */
-  startTime: number;
-  /** What the reader noticed (a time column not quite even, a truncated file, ...). */
-  notes: string[];
-}
+/** A signal ready to filter: a file read by the worker (see ParsedSignal), or one made on the page. */
+export type LoadedSignal = Omit<ParsedSignal, 'source'> & { source: ParsedSignal['source'] | 'generated' };
 
 /** Welch settings of the spectrum view. */
 export interface SpectrumSettings {
