@@ -4,7 +4,7 @@
  */
 import type { Zpk, TransferFunction, Section } from '../core/types.ts';
 import { zpkToTf, zpkToSections } from '../core/system.ts';
-import { responseZpk, frequencyGrid, type FrequencyResponse } from '../core/response.ts';
+import { responseZpk, frequencyGrid, refineAtRoots, type FrequencyResponse } from '../core/response.ts';
 import { resolveGain, type ResolvedGain } from '../core/gainRule.ts';
 import { stabilityOfZpk, type Stability } from '../core/stability.ts';
 import { rootReadouts, type RootReadout } from '../core/readouts.ts';
@@ -38,6 +38,7 @@ const gridOf = memoLast((points: number, axis: ViewSettings['frequencyAxis']) =>
   frequencyGrid(points, axis === 'log' ? { log: true, fMin: 2 * Math.PI * LOG_AXIS_MIN_FRACTION } : {}),
 );
 const responseOf = memoLast((zpk: Zpk, omega: Float64Array) => responseZpk(zpk, omega));
+const displayResponseOf = memoLast(refineAtRoots);
 const stabilityOf = memoLast(stabilityOfZpk);
 const readoutsOf = memoLast((zpk: Zpk, fs: number) => rootReadouts(zpk, fs));
 
@@ -82,6 +83,9 @@ export const selectTf = (s: WorkbenchState): TransferFunction => tfOf(s.design, 
 export const selectSections = (s: WorkbenchState): Section[] => sectionsOf(zpkOf(s.design));
 export const selectResponse = (s: WorkbenchState): FrequencyResponse =>
   responseOf(zpkOf(s.design), gridOf(s.view.responsePoints, s.view.frequencyAxis));
+/** The response on the display grid plus the exact angles of the roots near the circle (true notch depth). */
+export const selectDisplayResponse = (s: WorkbenchState): FrequencyResponse =>
+  displayResponseOf(zpkOf(s.design), selectResponse(s));
 export const selectStability = (s: WorkbenchState): Stability => stabilityOf(zpkOf(s.design));
 export const selectReadouts = (s: WorkbenchState): RootReadout[] =>
   readoutsOf(zpkOf(s.design), s.design.sampleRate);

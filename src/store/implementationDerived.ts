@@ -18,7 +18,7 @@ import {
   type WordLengthSearch,
 } from '../core/fixed/index.ts';
 import { buildCascade, type Cascade } from '../core/sections/index.ts';
-import type { FrequencyResponse } from '../core/response.ts';
+import { refineAtRoots, type FrequencyResponse } from '../core/response.ts';
 import type { Stability } from '../core/stability.ts';
 import type { Result, Zpk } from '../core/types.ts';
 import { exportC, exportCsv, exportJson } from '../core/export/index.ts';
@@ -109,6 +109,12 @@ export const selectCascade = (s: WorkbenchState): Cascade | null => implOrNull(s
 /** The quantized filter's frequency response on the frequency view's grid, or null. */
 export const selectQuantizedResponse = (s: WorkbenchState): FrequencyResponse | null =>
   responseOf(implOrNull(s), selectResponse(s).omega);
+const quantizedDisplayOf = memoLast((impl: Implementation | null, grid: FrequencyResponse | null) =>
+  impl && grid ? refineAtRoots(impl.quantizedZpk, grid) : null,
+);
+/** The quantized response refined at the quantized roots' angles (a notch that moved shows where it went). */
+export const selectQuantizedDisplayResponse = (s: WorkbenchState): FrequencyResponse | null =>
+  quantizedDisplayOf(implOrNull(s), selectQuantizedResponse(s));
 /** Stability of the quantized filter, or null. */
 export const selectQuantizedStability = (s: WorkbenchState): Stability | null =>
   implOrNull(s)?.stability ?? null;

@@ -3,7 +3,7 @@
  * the cross-hair (pointer or arrow keys) and the selected root's marker.
  */
 import { useId, useMemo, useState } from 'react';
-import { selectResponse, selectZpk } from '../../store/derived.ts';
+import { selectDisplayResponse } from '../../store/derived.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 import { Axis } from '../chart/Axis.tsx';
 import { CursorArea } from '../chart/CursorArea.tsx';
@@ -16,7 +16,6 @@ import { cursorStepsForKey, startHz, stepHz } from './cursor.ts';
 import { frequencyLayout, type PlotKey } from './layout.ts';
 import { PlotTitles } from './PlotTitles.tsx';
 import type { FrequencyReading } from './readAt.ts';
-import { refineAtRoots } from '../../core/response.ts';
 import { RootMarker } from './RootMarker.tsx';
 import { PLOT_OVERLAYS } from './overlays.ts';
 import { MaskChip } from './mask/MaskChip.tsx';
@@ -60,8 +59,6 @@ function readingValue(
 }
 
 export function FrequencyChart({ width, height, reading, onCursor, marker }: FrequencyChartProps) {
-  const grid = useWorkbench(selectResponse);
-  const zpk = useWorkbench(selectZpk);
   const fs = useWorkbench((s) => s.design.sampleRate);
   const magnitudeScale = useWorkbench((s) => s.view.magnitudeScale);
   const phaseMode = useWorkbench((s) => s.view.phaseMode);
@@ -71,7 +68,7 @@ export function FrequencyChart({ width, height, reading, onCursor, marker }: Fre
   const [second, setSecond] = useState<'phase' | 'delay'>('phase');
   const overlayClip = `pw-overlay-clip-${useId().replace(/:/g, '')}`;
 
-  const response = useMemo(() => refineAtRoots(zpk, grid), [zpk, grid]);
+  const response = useWorkbench(selectDisplayResponse);
   const layout = useMemo(() => frequencyLayout(width, height, second), [width, height, second]);
   const area = layout.plots[0]!.rect;
   const hz = useMemo(() => gridHz(response.omega, fs), [response.omega, fs]);

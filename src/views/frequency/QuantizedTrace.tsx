@@ -7,14 +7,13 @@ import { useMemo } from 'react';
 import { qName } from '../../core/fixed/index.ts';
 import {
   selectImplementation,
-  selectQuantizedResponse,
+  selectQuantizedDisplayResponse,
   selectShowQuantized,
 } from '../../store/implementationDerived.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 import { linePath } from '../chart/paths.ts';
 import { toPixels } from '../chart/pixels.ts';
 import type { MagnitudeOverlayProps } from './overlays.ts';
-import { refineAtRoots } from '../../core/response.ts';
 
 const COLOUR = 'var(--pw-quantized)';
 
@@ -22,18 +21,17 @@ export function QuantizedTrace({ rect, xMap, yMap, db }: MagnitudeOverlayProps) 
   // Hidden during a root drag: rebuilding the implementation every frame costs too much (see useTarget.ts).
   const shown = useWorkbench((s) => selectShowQuantized(s) && !s.dragging);
   const result = useWorkbench((s) => (shown ? selectImplementation(s) : null));
-  const response = useWorkbench((s) => (shown ? selectQuantizedResponse(s) : null));
+  const response = useWorkbench((s) => (shown ? selectQuantizedDisplayResponse(s) : null));
   const fs = useWorkbench((s) => s.design.sampleRate);
   const impl = result?.ok ? result.value : null;
   const d = useMemo(() => {
     if (!impl || !response) return '';
-    const r = refineAtRoots(impl.quantizedZpk, response);
     const k = fs / (2 * Math.PI);
     const px = toPixels(
       xMap,
-      r.omega.map((w) => w * k),
+      response.omega.map((w) => w * k),
     );
-    const py = toPixels(yMap, db ? r.magnitudeDb : r.magnitude);
+    const py = toPixels(yMap, db ? response.magnitudeDb : response.magnitude);
     return linePath(px, py, { top: rect.top, bottom: rect.bottom, thin: true });
   }, [impl, response, fs, xMap, yMap, db, rect.top, rect.bottom]);
   if (!impl) return null;
