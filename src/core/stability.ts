@@ -1,6 +1,7 @@
 /** Stability of a system from its poles: inside, on or outside the unit circle. */
 import type { Root, Zpk } from './types.ts';
 import { compressRoots, expandRoots } from './system/rootList.ts';
+import { shortNumber } from './shortNumber.ts';
 
 /** stable: every pole strictly inside; marginal: only simple poles on the circle, none outside; unstable: otherwise. */
 export type Verdict = 'stable' | 'marginal' | 'unstable';
@@ -25,11 +26,8 @@ export const UNIT_CIRCLE_TOLERANCE = 1e-9;
 
 const radius = (r: Root) => Math.hypot(r.re, r.im);
 
-/** Short decimal: up to 4 significant digits, no trailing zeros. */
-export function formatNumber(x: number): string {
-  if (x === 0) return '0';
-  return String(Number(x.toPrecision(4)));
-}
+/** Short decimal for the reason text: up to 4 significant digits, no trailing zeros. */
+const formatNumber = (x: number): string => shortNumber(x, 4);
 
 /** "pole at -0.5" / "pole pair at 0.9 ± 0.5j", with "double"/"triple"/"4-fold" for repeated poles. */
 export function describePole(p: Root): string {

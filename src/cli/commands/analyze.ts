@@ -7,6 +7,7 @@ import { parseArgs } from '../args.ts';
 import { DESIGN_FLAGS, readDesign, type CliDesign } from '../designInput.ts';
 import { toJson } from '../json.ts';
 import type { CliIo } from '../main.ts';
+import { shortNumber } from '../../core/shortNumber.ts';
 
 /** b and a scaled so that a[0] = 1 (the typed coefficients when the design came as coefficients). */
 export function normalisedTf(d: CliDesign): TransferFunction {
@@ -37,8 +38,9 @@ export function analysis(d: CliDesign) {
   };
 }
 
-const fmt = (x: number) => (Number.isFinite(x) ? String(Number(x.toPrecision(10))) : String(x));
-const fmtRoot = (r: { re: number; im: number; multiplicity: number }) =>
+const fmt = (x: number) => shortNumber(x, 10);
+/** A root as "re + imj  (×m)" for the readable summaries of analyze and design. */
+export const fmtRoot = (r: { re: number; im: number; multiplicity: number }) =>
   `${fmt(r.re)}${r.im === 0 ? '' : `${r.im < 0 ? ' - ' : ' + '}${fmt(Math.abs(r.im))}j`}${r.multiplicity > 1 ? `  (×${r.multiplicity})` : ''}`;
 
 /** Runs `analyze`; returns the exit code. */

@@ -17,7 +17,8 @@ import { UsageError, parseArgs, type ParsedArgs } from '../args.ts';
 import type { CliDesign } from '../designInput.ts';
 import { toJson } from '../json.ts';
 import type { CliIo } from '../main.ts';
-import { analysis } from './analyze.ts';
+import { analysis, fmtRoot } from './analyze.ts';
+import { shortNumber } from '../../core/shortNumber.ts';
 
 interface KindInfo {
   /** Flags the kind accepts besides --fs, --json, --out, --name. */
@@ -240,7 +241,7 @@ const ALL_FLAGS = [...new Set([...COMMON_FLAGS, ...Object.values(KINDS).flatMap(
 /** Margins smaller than this (dB) are printed as 0. */
 export const MARGIN_DISPLAY_ZERO_DB = 1e-9;
 
-const fmt = (x: number) => (Number.isFinite(x) ? String(Number(x.toPrecision(6))) : String(x));
+const fmt = (x: number) => shortNumber(x, 6);
 /** A margin in dB with its sign; below MARGIN_DISPLAY_ZERO_DB it reads 0 (meets the limit exactly, to rounding). */
 const signed = (x: number) => (Math.abs(x) < MARGIN_DISPLAY_ZERO_DB ? '0' : (x >= 0 ? '+' : '') + fmt(x));
 
@@ -283,10 +284,6 @@ function requirementLines(result: DesignResult, verdict: MaskResult | null): str
   }
   return lines;
 }
-
-const fmtFull = (x: number) => (Number.isFinite(x) ? String(Number(x.toPrecision(10))) : String(x));
-const fmtRoot = (r: { re: number; im: number; multiplicity: number }) =>
-  `${fmtFull(r.re)}${r.im === 0 ? '' : `${r.im < 0 ? ' - ' : ' + '}${fmtFull(Math.abs(r.im))}j`}${r.multiplicity > 1 ? `  (×${r.multiplicity})` : ''}`;
 
 /** What `polewright design --help` prints: every kind with an example, and the classical-family flags. */
 export function designUsage(): string {
@@ -364,14 +361,14 @@ export function runDesign(argv: string[], io: CliIo): number {
   }
   const lines = [`designed: ${result.note}`, ...requirementLines(result, verdict)];
   lines.push(`stability: ${out.stability.verdict.toUpperCase()} — ${out.stability.reason}`);
-  lines.push(`gain k: ${fmtFull(out.gain)}`);
+  lines.push(`gain k: ${shortNumber(out.gain, 10)}`);
   lines.push(`zeros (${out.zeros.length}):`, ...out.zeros.map((z) => `  ${fmtRoot(z)}`));
   lines.push(`poles (${out.poles.length}):`, ...out.poles.map((p) => `  ${fmtRoot(p)}`));
-  lines.push(`b: ${out.b.map(fmtFull).join(', ')}`);
-  lines.push(`a: ${out.a.map(fmtFull).join(', ')}`);
+  lines.push(`b: ${out.b.map((v) => shortNumber(v, 10)).join(', ')}`);
+  lines.push(`a: ${out.a.map((v) => shortNumber(v, 10)).join(', ')}`);
   lines.push(
     'second-order sections [b0 b1 b2 a0 a1 a2]:',
-    ...out.sections.map((q) => `  ${q.map(fmtFull).join('  ')}`),
+    ...out.sections.map((q) => `  ${q.map((v) => shortNumber(v, 10)).join('  ')}`),
   );
   io.stdout(lines.join('\n') + '\n');
   return 0;

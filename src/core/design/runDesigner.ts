@@ -7,11 +7,12 @@ import { designDcBlocker, designNotch, designPeak } from './notch.ts';
 import { runIir } from './runIir.ts';
 import type { DesignerSpec, DesignResult, NotchWidth } from './spec.ts';
 import { DesignInputError, guard, inBand, oneOf, positive, sampleRate } from './validate.ts';
+import { shortNumber } from '../shortNumber.ts';
 
 /** Tolerance on fs/f0 being a whole number for a comb (relative to that number). */
 export const COMB_DIVISOR_TOLERANCE = 1e-9;
 
-const fmt = (v: number) => Number(v.toPrecision(6));
+const fmt = (v: number) => shortNumber(v, 6);
 
 /** −3 dB width in Hz from a bandwidth or Q at centre f, below the limit `below` Hz. */
 function widthHz(w: NotchWidth, f: number, below: number, what: string): number {

@@ -6,6 +6,7 @@ import { estimateOrder } from './orderEstimate.ts';
 import type { Requirement } from './requirement.ts';
 import type { DesignResult, IirSpec } from './spec.ts';
 import { DesignInputError, MAX_DESIGN_ORDER, designOrder, edges, positive, sampleRate } from './validate.ts';
+import { shortNumber } from '../shortNumber.ts';
 
 const FAMILIES = ['butterworth', 'chebyshev1', 'chebyshev2', 'elliptic'] as const;
 const RESPONSES = ['lowpass', 'highpass', 'bandpass', 'bandstop'] as const;
@@ -93,7 +94,7 @@ export function runIir(spec: IirSpec): DesignResult {
     ...(attenuationDb !== undefined && { attenuationDb }),
   });
   const margin = req ? requirementMargin(zpk, req) : undefined;
-  const fmt = (v: number) => Number(v.toPrecision(6));
+  const fmt = (v: number) => shortNumber(v, 6);
   let note = `order ${order} ${FAMILY_NAMES[spec.family]} ${RESPONSE_NAMES[spec.response]}, edges ${edgesHz.map(fmt).join(', ')} Hz`;
   if (needRipple) note += `, ${fmt(rippleDb!)} dB ripple`;
   if (needAtten) note += `, ${fmt(attenuationDb!)} dB stop band`;

@@ -1,5 +1,6 @@
 /** Checks of designer parameters that produce errors a user can act on. */
 import type { InputError, Result } from '../types.ts';
+import { shortNumber } from '../shortNumber.ts';
 
 /** Highest order the classical designers accept. */
 export const MAX_DESIGN_ORDER = 64;
@@ -25,7 +26,7 @@ export function guard<T>(f: () => T): Result<T> {
   }
 }
 
-const fmt = (v: number) => (Number.isFinite(v) ? String(Number(v.toPrecision(10))) : String(v));
+const fmt = (v: number) => shortNumber(v, 10);
 
 /** A finite number > 0 (or >= lower, exclusive). */
 export function positive(name: string, v: number | undefined, unit: string, lower = 0): number {

@@ -5,8 +5,9 @@ import type { DesignerSpec } from '../design/spec.ts';
 import type { InputError, Result } from '../types.ts';
 import type { MaskRegion, RequirementMask } from './types.ts';
 import { validateMask } from './validate.ts';
+import { shortNumber } from '../shortNumber.ts';
 
-const fmt = (v: number) => Number(v.toPrecision(6));
+const fmt = (v: number) => shortNumber(v, 6);
 
 /**
  * The mask of a classical requirement: each pass band must lose at most rippleDb (lowerDb = −rippleDb),

@@ -1,8 +1,9 @@
 /** Checks of a requirement mask against a sample rate, with errors a user can act on. */
 import type { InputError, Result } from '../types.ts';
 import type { MaskRegion, RequirementMask } from './types.ts';
+import { shortNumber } from '../shortNumber.ts';
 
-const fmt = (v: number) => (Number.isFinite(v) ? String(Number(v.toPrecision(10))) : String(v));
+const fmt = (v: number) => shortNumber(v, 10);
 
 const KINDS = ['pass', 'stop', 'band'] as const;
 
