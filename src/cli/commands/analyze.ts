@@ -39,9 +39,23 @@ export function analysis(d: CliDesign) {
 }
 
 const fmt = (x: number) => shortNumber(x, 10);
-/** A root as "re + imj  (×m)" for the readable summaries of analyze and design. */
-export const fmtRoot = (r: { re: number; im: number; multiplicity: number }) =>
+const fmtRoot = (r: { re: number; im: number; multiplicity: number }) =>
   `${fmt(r.re)}${r.im === 0 ? '' : `${r.im < 0 ? ' - ' : ' + '}${fmt(Math.abs(r.im))}j`}${r.multiplicity > 1 ? `  (×${r.multiplicity})` : ''}`;
+
+/** The readable lines for the system itself: gain, zeros, poles, b, a and the sections. */
+export function systemLines(out: ReturnType<typeof analysis>): string[] {
+  return [
+    `gain k: ${fmt(out.gain)}`,
+    `zeros (${out.zeros.length}):`,
+    ...out.zeros.map((r) => `  ${fmtRoot(r)}`),
+    `poles (${out.poles.length}):`,
+    ...out.poles.map((r) => `  ${fmtRoot(r)}`),
+    `b: ${out.b.map(fmt).join(', ')}`,
+    `a: ${out.a.map(fmt).join(', ')}`,
+    'second-order sections [b0 b1 b2 a0 a1 a2]:',
+    ...out.sections.map((s) => `  ${s.map(fmt).join('  ')}`),
+  ];
+}
 
 /** Runs `analyze`; returns the exit code. */
 export function runAnalyze(argv: string[], io: CliIo): number {
@@ -57,15 +71,7 @@ export function runAnalyze(argv: string[], io: CliIo): number {
   lines.push(`design: ${d.source}, sample rate ${fmt(d.sampleRate)} Hz`);
   lines.push(`stability: ${out.stability.verdict.toUpperCase()} — ${out.stability.reason}`);
   lines.push(`largest pole radius: ${fmt(out.stability.maxPoleRadius)}`);
-  lines.push(`gain k: ${fmt(out.gain)}`);
-  lines.push(`zeros (${out.zeros.length}):`, ...out.zeros.map((r) => `  ${fmtRoot(r)}`));
-  lines.push(`poles (${out.poles.length}):`, ...out.poles.map((r) => `  ${fmtRoot(r)}`));
-  lines.push(`b: ${out.b.map(fmt).join(', ')}`);
-  lines.push(`a: ${out.a.map(fmt).join(', ')}`);
-  lines.push(
-    'second-order sections [b0 b1 b2 a0 a1 a2]:',
-    ...out.sections.map((s) => `  ${s.map(fmt).join('  ')}`),
-  );
+  lines.push(...systemLines(out));
   lines.push('roots:');
   for (const r of out.readouts) {
     const parts = [`${r.kind} ${fmtRoot(r.root)}`, `${fmt(r.frequencyHz)} Hz`, `radius ${fmt(r.radius)}`];

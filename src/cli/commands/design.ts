@@ -17,7 +17,7 @@ import { UsageError, parseArgs, type ParsedArgs } from '../args.ts';
 import type { CliDesign } from '../designInput.ts';
 import { toJson } from '../json.ts';
 import type { CliIo } from '../main.ts';
-import { analysis, fmtRoot } from './analyze.ts';
+import { analysis, systemLines } from './analyze.ts';
 import { shortNumber } from '../../core/shortNumber.ts';
 
 interface KindInfo {
@@ -361,15 +361,7 @@ export function runDesign(argv: string[], io: CliIo): number {
   }
   const lines = [`designed: ${result.note}`, ...requirementLines(result, verdict)];
   lines.push(`stability: ${out.stability.verdict.toUpperCase()} — ${out.stability.reason}`);
-  lines.push(`gain k: ${shortNumber(out.gain, 10)}`);
-  lines.push(`zeros (${out.zeros.length}):`, ...out.zeros.map((z) => `  ${fmtRoot(z)}`));
-  lines.push(`poles (${out.poles.length}):`, ...out.poles.map((p) => `  ${fmtRoot(p)}`));
-  lines.push(`b: ${out.b.map((v) => shortNumber(v, 10)).join(', ')}`);
-  lines.push(`a: ${out.a.map((v) => shortNumber(v, 10)).join(', ')}`);
-  lines.push(
-    'second-order sections [b0 b1 b2 a0 a1 a2]:',
-    ...out.sections.map((q) => `  ${q.map((v) => shortNumber(v, 10)).join('  ')}`),
-  );
+  lines.push(...systemLines(out));
   io.stdout(lines.join('\n') + '\n');
   return 0;
 }
