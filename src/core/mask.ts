@@ -19,7 +19,7 @@ export {
 export type { MaskOptions } from './mask/evaluate.ts';
 export { functionSource, sampledSource, sectionsSource, zpkSource } from './mask/source.ts';
 export type { MagnitudeSource } from './mask/source.ts';
-export { magnitudeDbAt, magnitudeDbReader, magnitudeDbZpk } from './mask/magnitude.ts';
+export { magnitudeDbAt, magnitudeDbReader, magnitudeDbZpk } from './response/magnitude.ts';
 export {
   maskFromIirDesigner,
   maskFromNotchRequirement,

@@ -5,7 +5,7 @@
  */
 import type { Section, Zpk } from '../types.ts';
 import { sectionsToZpk } from '../system.ts';
-import { magnitudeDbReader, magnitudeDbZpk } from './magnitude.ts';
+import { magnitudeDbReader, magnitudeDbZpk } from '../response/magnitude.ts';
 
 /** A magnitude response readable at frequencies in Hz. */
 export interface MagnitudeSource {

@@ -1,7 +1,8 @@
 /**
  * Magnitude-only response of zeros/poles/gain: |H|² as a product of squared distances from e^{iω} to each
  * root and its conjugate. It skips the phase and group delay that the full response computes, which makes
- * judging a mask on every drag frame cheap; it agrees with responseZpk's magnitudeDb to rounding.
+ * judging a mask on every drag frame, and shading the whole z-plane, cheap; it agrees with responseZpk's
+ * magnitudeDb to rounding.
  */
 import type { Root, Zpk } from '../types.ts';
 
@@ -20,7 +21,7 @@ function flatten(zpk: Zpk): Float64Array {
   return out;
 }
 
-/** ln|H(e^{iω})|² without the gain, from flattened roots at c = cos ω, s = sin ω. */
+/** ln|H(z)|² without the gain, from flattened roots at z = c + is (c = cos ω, s = sin ω on the circle). */
 function lnPower(flat: Float64Array, c: number, s: number): number {
   let product = 1;
   let lnSum = 0;
@@ -74,4 +75,11 @@ export function magnitudeDbZpk(
     out[i] = DB_PER_LN_POWER * lnPower(flat, Math.cos(w), Math.sin(w)) + k;
   }
   return out;
+}
+
+/** A reader of 20·log10|H(z)| in dB at any point z = x + iy of the plane, for repeated calls. */
+export function planeLevelDbReader(zpk: Zpk): (x: number, y: number) => number {
+  const flat = flatten(zpk);
+  const k = 20 * Math.log10(Math.abs(zpk.gain));
+  return (x, y) => DB_PER_LN_POWER * lnPower(flat, x, y) + k;
 }
