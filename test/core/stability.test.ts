@@ -19,7 +19,7 @@ interface TrapFixture {
   poles: Root[];
   gain: number;
   max_pole_radius: number;
-  numpy_roots_max_radius: number;
+  exact_max_radius: number;
   tf_a: number[];
 }
 
@@ -117,6 +117,7 @@ describe('the expanded-polynomial trap (8th-order Butterworth, 10 Hz at 8 kHz)',
     const s = stabilityOfZpk({ zeros: trap.zeros, poles: trap.poles, gain: trap.gain });
     expect(s.verdict).toBe('stable');
     expectClose(s.maxPoleRadius, trap.max_pole_radius, { rel: 1e-14 }); // scipy.signal.butter 1.17
-    expect(trap.numpy_roots_max_radius).toBeGreaterThan(1.005); // numpy.roots 2.4 on the expanded a
+    // mpmath 1.3 polyroots at 80 digits of the expanded a as stored in doubles: rounding alone moves a root out
+    expect(trap.exact_max_radius).toBeGreaterThan(1.005);
   });
 });

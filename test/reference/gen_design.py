@@ -3,11 +3,52 @@ plus audio-EQ cookbook biquads written out here from R. Bristow-Johnson's publis
 
 Roots are stored as full lists (conjugates included); responses as magnitude in dB and phase at a grid of
 frequencies in Hz that includes the design edges. Frequencies and parameters are our own choices.
+
+Tolerances (fixture.py, conditioning.py): roots and coefficients from closed-form designs move by a few ulps
+between machines (numpy's SIMD sin/cos/tan); roots found by numpy.roots carry their eigenvalue error bound;
+each response point carries the error bound of its evaluation next to the roots. A point whose bound exceeds
+1e-6 of |H| (a frequency on top of a zero on the circle) is not a reliable reference and is stored as None.
 """
 import warnings
 
 import numpy as np
 from scipy import signal
+
+from conditioning import DB_PER_NEPER, EPS, ULPS, eigenvalue_root_error, product_form_condition, ratio_condition
+from fixture import Fixture, Tol, Tolerated
+
+DESIGNED = Tol(rel=1e-12, abs=1e-13, why="closed-form designs (prototypes, bilinear transform, band transforms): ulps")
+# band-stop order estimates slide the pass-band edges with fminbound (xtol 1e-5): an ulp of the objective can
+# change a comparison on its path and land elsewhere within xtol; the attenuation of the design follows
+BANDSTOP_SEARCH = {
+    "naturalHz": Tol(rel=1e-4, why="fminbound with xtol 1e-5 on tan-warped edges"),
+    "naturalEdgesHz": Tol(rel=1e-4, why="fminbound with xtol 1e-5 on tan-warped edges"),
+    "stopAttenuationDb": Tol(rel=0, abs=0.05, why="design at edges known to xtol 1e-5"),
+}
+UNRELIABLE = 1e-6  # relative error bound of |H| beyond which a response point is left out
+
+
+def _curve(f, h, rel_bound):
+    """magDb and phase with per-point tolerances; None where the bound says the value is not reliable."""
+    mag, ph = [], []
+    why = "response next to its roots: ulps times the evaluation's condition"
+    with np.errstate(divide="ignore"):
+        db = 20 * np.log10(np.abs(h))
+    for d, p, e in zip(db, np.angle(h), rel_bound):
+        if not np.isfinite(e) or e > UNRELIABLE or not np.isfinite(d):
+            mag.append(None)
+            ph.append(None)
+            continue
+        mag.append(Tolerated(float(d), Tol(rel=0, abs=DB_PER_NEPER * float(e), why=why)))
+        ph.append(Tolerated(float(p), Tol(rel=0, abs=float(e), why=why, period=2 * np.pi)))
+    return {"f": f, "magDb": mag, "phase": ph}
+
+
+def _found_roots(c):
+    """numpy.roots with each root's eigenvalue error bound."""
+    r = np.roots(c)
+    bound = ULPS * EPS * eigenvalue_root_error(c, r)
+    return [Tolerated(x, Tol(rel=0, abs=float(e), why="numpy.roots: eigenvalue error bound")) for x, e in zip(r, bound)]
 
 GRID_POINTS = 48
 
@@ -20,15 +61,16 @@ def _grid(fs, extra=()):
 
 
 def _response_zpk(z, p, k, f, fs):
-    _, h = signal.freqz_zpk(z, p, k, worN=2 * np.pi * f / fs)
-    with np.errstate(divide="ignore"):
-        return {"f": f, "magDb": 20 * np.log10(np.abs(h)), "phase": np.angle(h)}
+    w = 2 * np.pi * f / fs
+    _, h = signal.freqz_zpk(z, p, k, worN=w)
+    return _curve(f, h, ULPS * EPS * product_form_condition(z, p, w))
 
 
 def _response_ba(b, a, f, fs):
-    _, h = signal.freqz(b, a, worN=2 * np.pi * f / fs)
-    with np.errstate(divide="ignore"):
-        return {"f": f, "magDb": 20 * np.log10(np.abs(h)), "phase": np.angle(h)}
+    w = 2 * np.pi * f / fs
+    _, h = signal.freqz(b, a, worN=w)
+    # Horner's rounding grows with the degree: gamma_n = n eps on top of the coefficients' ulps
+    return _curve(f, h, ULPS * EPS * (len(b) + len(a)) * ratio_condition(b, a, w))
 
 
 def _ba_case(params, b, a, fs, extra=()):
@@ -36,8 +78,8 @@ def _ba_case(params, b, a, fs, extra=()):
         **params,
         "b": b,
         "a": a,
-        "zeros": np.roots(b),
-        "poles": np.roots(a),
+        "zeros": _found_roots(b),
+        "poles": _found_roots(a),
         "curve": _response_ba(b, a, _grid(fs, extra), fs),
     }
 
@@ -190,7 +232,11 @@ def _orders():
                 _, h = signal.freqz_zpk(z, p, k, worN=2 * np.pi * f / fs)
                 with np.errstate(divide="ignore"):
                     worst = min(worst, np.min(-20 * np.log10(np.abs(h))))
-            out.append({"family": fam, "response": response, "passbandHz": wp, "stopbandHz": ws, "rippleDb": rp, "attenuationDb": rs, "fs": fs, "order": n, "naturalHz": np.atleast_1d(wn), "stopAttenuationDb": worst})
+            # the minimum sits on a stop-band ripple peak or an edge, away from the zeros: well conditioned
+            if response != "bandstop":
+                worst = Tolerated(worst, Tol(rel=1e-11, abs=1e-11, why="least attenuation on a ripple peak, away from zeros"))
+            case = {"family": fam, "response": response, "passbandHz": wp, "stopbandHz": ws, "rippleDb": rp, "attenuationDb": rs, "fs": fs, "order": n, "naturalHz": np.atleast_1d(wn), "stopAttenuationDb": worst}
+            out.append(Tolerated(case, fields=BANDSTOP_SEARCH) if response == "bandstop" else case)
     return out
 
 
@@ -198,11 +244,14 @@ def fixtures():
     with warnings.catch_warnings():
         warnings.simplefilter("error")
         return {
-            "design_notch": {"notches": _notches(), "combs": _combs(), "dcBlockers": _dc_blockers()},
-            "design_eq": _equalisers(),
-            "design_butter": _iir("butter"),
-            "design_cheby1": _iir("cheby1"),
-            "design_cheby2": _iir("cheby2"),
-            "design_ellip": _iir("ellip"),
-            "design_order": _orders(),
+            "design_notch": Fixture({"notches": _notches(), "combs": _combs(), "dcBlockers": _dc_blockers()}, tol=DESIGNED),
+            "design_eq": Fixture(_equalisers(), tol=DESIGNED),
+            "design_butter": Fixture(_iir("butter"), tol=DESIGNED),
+            "design_cheby1": Fixture(_iir("cheby1"), tol=DESIGNED),
+            "design_cheby2": Fixture(_iir("cheby2"), tol=DESIGNED),
+            "design_ellip": Fixture(_iir("ellip"), tol=DESIGNED),
+            "design_order": Fixture(
+                _orders(),
+                tol=Tol(rel=1e-12, why="order formulas and natural edges: closed forms (ellipord: a bracketed root)"),
+            ),
         }

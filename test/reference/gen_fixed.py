@@ -12,6 +12,8 @@ partial cascade has norm 1 (s_i = 1 / (norm_i * prod_{j<i} s_j)).
 import numpy as np
 from scipy import signal
 
+from fixture import Fixture, Tol
+
 DECAY = 1e-13
 
 
@@ -79,4 +81,17 @@ def fixtures():
         _case("hum_notches", notch_z, notch_p, k),
         _case("resonator", np.array([1.0, -1.0]), _pairs(8000.0, [1200.0], 0.98), 0.02),
     ]
-    return {"fixed_norms": cases}
+    return {
+        "fixed_norms": Fixture(
+            cases,
+            tol=Tol(rel=1e-12, abs=1e-14, why="zpk2sos sections of closed-form designs: ulps"),
+            fields={
+                "norms.*": Tol(
+                    rel=1e-10,
+                    why="norms of cascades with poles within 0.01 of the circle: a relative change d of a "
+                    "coefficient moves them by at most d / (1 - r)^2 < 1e4 d",
+                ),
+                "scaled_*": Tol(rel=1e-10, abs=1e-14, why="sections times 1 / norm: as the norms"),
+            },
+        )
+    }

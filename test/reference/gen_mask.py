@@ -4,6 +4,9 @@ of our own (the anti-alias low-pass of scenario 4 among them), for the `polewrig
 import numpy as np
 from scipy import signal
 
+from fixture import Fixture, Tol, Tolerated
+from gen_design import BANDSTOP_SEARCH
+
 REQUIREMENTS = [
     # scenario 4: low-pass at 120 Hz on a 1 kHz channel, at least 60 dB down by 400 Hz, 1 dB ripple
     {"response": "lowpass", "fs": 1000, "passband": [120], "stopband": [400], "ripple": 1, "attenuation": 60},
@@ -33,5 +36,10 @@ def fixtures():
         for name, fn in ORDER_FUNCTIONS.items():
             order, wn = fn(wp, ws, req["ripple"], req["attenuation"], fs=req["fs"])
             families[name] = {"order": int(order), "naturalEdgesHz": _edge(wn)}
-        cases.append({**req, "families": families})
-    return {"mask_orders": cases}
+        case = {**req, "families": families}
+        cases.append(Tolerated(case, fields={f"*.{k}": t for k, t in BANDSTOP_SEARCH.items()}) if req["response"] == "bandstop" else case)
+    return {
+        "mask_orders": Fixture(
+            cases, tol=Tol(rel=1e-12, why="order formulas and natural edges in closed form; orders are integers")
+        )
+    }

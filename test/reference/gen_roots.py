@@ -16,6 +16,9 @@ import math
 import numpy as np
 import scipy.signal as ss
 
+from conditioning import EPS, ULPS, eigenvalue_root_error
+from fixture import Fixture, Tol, pointwise
+
 RANDOM_DEGREES = [1, 2, 3, 4, 5, 8, 16, 32, 64, 128, 256, 512]
 FIR_TAPS = [9, 33, 129, 255, 513, 1025]
 FIR_CUTOFF = 0.3
@@ -23,17 +26,23 @@ BUTTER_ORDERS = [4, 8, 20, 40]
 BUTTER_CUTOFF = 0.2
 
 
-def sorted_roots(r):
+def sorted_roots(r, coefficients=None):
+    """Roots sorted by real part (to 1e-9), then imaginary part. With the coefficients they came from (numpy.roots),
+    each root carries the tolerance of its eigenvalue error bound."""
     r = np.asarray(r, dtype=complex)
     r = r[np.lexsort((r.imag, np.round(r.real, 9)))]
-    return {"re": r.real, "im": r.imag}
+    if coefficients is None:
+        return {"re": r.real, "im": r.imag}
+    bound = ULPS * EPS * eigenvalue_root_error(coefficients, r)
+    why = "numpy.roots: n eps ||c|| ||(r^n..1)|| / |p'(r)| per root (LAPACK differs by CPU kernel)"
+    return {"re": pointwise(r.real, bound, why), "im": pointwise(r.imag, bound, why)}
 
 
 def roots_random():
     out = []
     for n in RANDOM_DEGREES:
         p = np.random.default_rng(100 + n).standard_normal(n + 1)
-        out.append({"degree": n, "coefficients": p, "roots": sorted_roots(np.roots(p))})
+        out.append({"degree": n, "coefficients": p, "roots": sorted_roots(np.roots(p), p)})
     return out
 
 
@@ -41,7 +50,7 @@ def roots_fir():
     out = []
     for taps in FIR_TAPS:
         h = ss.firwin(taps, FIR_CUTOFF)
-        out.append({"taps": taps, "coefficients": h, "roots": sorted_roots(np.roots(h))})
+        out.append({"taps": taps, "coefficients": h, "roots": sorted_roots(np.roots(h), h)})
     return out
 
 
@@ -67,24 +76,26 @@ def butterworth_poles(n, wn):
 
 
 def roots_butterworth():
-    import mpmath
-
-    mpmath.mp.dps = 80
     out = []
     for n in BUTTER_ORDERS:
         poles = butterworth_poles(n, BUTTER_CUTOFF)
         a = multiply_out(poles)
         _, a_scipy = ss.butter(n, BUTTER_CUTOFF)
         assert np.allclose(a, a_scipy, rtol=1e-9, atol=1e-12), f"order {n} disagrees with scipy.signal.butter"
-        exact = mpmath.polyroots([mpmath.mpf(c) for c in a], maxsteps=800, extraprec=600)
-        out.append(
-            {
-                "order": n,
-                "coefficients": a,
-                "poles": sorted_roots(poles),
-                "exactRoots": sorted_roots([complex(r) for r in exact]),
-            }
-        )
+        out.append({"order": n, "coefficients": a, "poles": sorted_roots(poles)})
+    return out
+
+
+def exact_roots(stored):
+    """mpmath.polyroots at 80 digits of the committed coefficients: at order 40 an ulp of one coefficient moves
+    the roots by ~0.2, so they are computed from the committed bits, never from this machine's rounding."""
+    import mpmath
+
+    mpmath.mp.dps = 80
+    out = []
+    for case in stored:
+        exact = mpmath.polyroots([mpmath.mpf(c) for c in case["coefficients"]], maxsteps=800, extraprec=600)
+        out.append({"exactRoots": sorted_roots([complex(r) for r in exact])})
     return out
 
 
@@ -118,10 +129,23 @@ def roots_repeated():
     ]
 
 
+PLAIN_PYTHON = Tol(rel=ULPS * EPS, abs=ULPS * EPS, why="plain Python arithmetic and libm sin/cos/tan: an ulp or two")
+
+
 def fixtures():
     return {
-        "roots_random": roots_random(),
-        "roots_fir": roots_fir(),
-        "roots_butterworth": roots_butterworth(),
-        "roots_repeated": roots_repeated(),
+        "roots_random": Fixture(
+            roots_random(), tol=Tol(rel=0, why="seeded PCG64 coefficients; roots carry their own bounds")
+        ),
+        "roots_fir": Fixture(
+            roots_fir(),
+            tol=Tol(rel=ULPS * EPS, abs=ULPS * EPS * 1e-3, why="firwin: windowed sinc from np.sin/np.cos, ulps"),
+        ),
+        "roots_butterworth": Fixture(
+            roots_butterworth(),
+            tol=PLAIN_PYTHON,
+            fields={"exactRoots.*": Tol(rel=1e-14, abs=1e-15, why="mpmath at 80 digits of the committed coefficients")},
+            derive=exact_roots,
+        ),
+        "roots_repeated": Fixture(roots_repeated(), tol=PLAIN_PYTHON),
     }

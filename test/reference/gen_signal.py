@@ -15,6 +15,11 @@ import numpy as np
 from scipy import signal
 from scipy.io import wavfile
 
+from conditioning import EPS, ULPS
+from fixture import Fixture, Tol, Tolerated
+
+SAMPLES = Tol(rel=ULPS * EPS, abs=ULPS * EPS, why="seeded noise plus np.cos tones (SIMD cos: an ulp or two per machine)")
+
 
 def _b64(data: bytes) -> str:
     return base64.b64encode(data).decode("ascii")
@@ -105,16 +110,34 @@ def _filter_cases(rng):
     out = []
     for name, sos in cases.items():
         b, a = signal.sos2tf(sos)
-        out.append({"name": name, "sos": sos, "y_sos": signal.sosfilt(sos, x), "b": b, "a": a,
-                    "y_tf": signal.lfilter(b, a, x)})
+        out.append({"name": name, "sos": sos, "b": b, "a": a})
     return {"source": "scipy.signal.sosfilt / lfilter", "fs": fs, "x": x, "cases": out}
+
+
+def _filter_outputs(f):
+    """sosfilt and lfilter on the committed sections, b, a and samples: sos2tf's BLAS dot products differ by an
+    ulp between CPU kernels, which the expanded 12th-order low-pass amplifies ~1e5 times; from the committed bits
+    both filters run the same operations everywhere."""
+    out = []
+    for c in f["cases"]:
+        y_sos = np.asarray(signal.sosfilt(c["sos"], f["x"]))
+        y_tf = np.asarray(signal.lfilter(c["b"], c["a"], f["x"]))
+        peak = float(np.max(np.abs(y_sos)))
+        out.append({
+            "y_sos": Tolerated(y_sos, Tol(rel=1e-12, abs=1e-13 * peak, why="sosfilt on committed inputs")),
+            "y_tf": Tolerated(y_tf, Tol(rel=1e-9, abs=1e-9 * peak, why="lfilter on committed b, a: a 12th-order recursion")),
+        })
+    return {"cases": out}
 
 
 def _fft_cases(rng):
     out = []
     for n in [1, 2, 3, 5, 8, 12, 97, 128, 360]:
         x = rng.standard_normal(n) + 1j * rng.standard_normal(n)
-        out.append({"n": n, "x": x, "X": np.fft.fft(x)})
+        # an FFT's rounding error is ~eps log2(n) times the input's size, in every output
+        size = float(np.sum(np.abs(x)))
+        tol = Tol(rel=0, abs=ULPS * EPS * (1 + np.log2(n)) * size, why=f"FFT of {n} points: eps log2(n) sum|x|")
+        out.append({"n": n, "x": x, "X": Tolerated(np.fft.fft(x), tol)})
     return {"source": "numpy.fft.fft", "cases": out}
 
 
@@ -139,6 +162,12 @@ def _window_cases():
     return {"source": "scipy.signal.get_window", "cases": out}
 
 
+def _power_tol(p):
+    """Averaged |FFT|^2 of windowed segments: each bin is accurate to ~eps log2(n) of the largest power (the
+    bins far below the peak share the FFT's absolute error), so the bound is relative to the peak."""
+    return Tol(rel=1e-12, abs=1e-12 * float(np.max(p)), why="Welch power: FFT rounding relative to the peak bin")
+
+
 def _welch_cases(rng):
     fs = 1000.0
     x = _hum_recording(rng, 2400, fs) + 0.2
@@ -156,22 +185,40 @@ def _welch_cases(rng):
         f, p = signal.welch(x, fs=fs, window=s["window"], nperseg=s["nperseg"], noverlap=s["noverlap"],
                             nfft=s["nfft"], scaling=s["scaling"], detrend=s["detrend"])
         out.append({**s, "window": ours.get(s["window"], s["window"]),
-                    "detrend": "none" if s["detrend"] is False else s["detrend"], "f": f, "p": p})
+                    "detrend": "none" if s["detrend"] is False else s["detrend"], "f": f,
+                    "p": Tolerated(p, _power_tol(p))})
     short = x[:100]
     with warnings.catch_warnings():
         warnings.simplefilter("ignore")  # scipy says it shortens nperseg to the signal; that is the case tested
         f, p = signal.welch(short, fs=fs, nperseg=256)
     out.append({"window": "hann", "nperseg": 256, "noverlap": None, "scaling": "density", "detrend": "constant",
-                "nfft": None, "short": True, "f": f, "p": p})
+                "nfft": None, "short": True, "f": f, "p": Tolerated(p, _power_tol(p))})
     return {"source": "scipy.signal.welch", "fs": fs, "x": x, "cases": out}
 
 
 def fixtures():
     rng = np.random.default_rng(20260507)
     return {
-        "signal_wav": {"source": "Python wave module / scipy.io.wavfile.write", "cases": _wav_cases(rng)},
-        "signal_filter": _filter_cases(rng),
-        "signal_fft": _fft_cases(rng),
-        "signal_windows": _window_cases(),
-        "signal_welch": _welch_cases(rng),
+        "signal_wav": Fixture(
+            {"source": "Python wave module / scipy.io.wavfile.write", "cases": _wav_cases(rng)},
+            tol=Tol(rel=0, why="bytes and integer samples are exact; the float samples are float32 roundings of "
+                    "np.sin, which an ulp of sin would change only across a rounding boundary (chance ~1e-8 each)"),
+        ),
+        "signal_filter": Fixture(
+            _filter_cases(rng),
+            tol=Tol(rel=1e-13, abs=1e-16, why="designed sections and sos2tf: a few ulps"),
+            fields={"x": SAMPLES},
+            derive=_filter_outputs,
+        ),
+        "signal_fft": Fixture(_fft_cases(rng), tol=Tol(rel=0, why="seeded PCG64 normal samples: the same bits everywhere")),
+        "signal_windows": Fixture(
+            _window_cases(),
+            tol=Tol(rel=ULPS * EPS, abs=ULPS * EPS, why="sums of np.cos terms bounded by 1: a few ulps of 1"),
+            fields={"cases.scallopingLossDb": Tol(rel=1e-12, abs=1e-13, why="log of a ratio of sums of 4096 window samples")},
+        ),
+        "signal_welch": Fixture(
+            _welch_cases(rng),
+            tol=Tol(rel=ULPS * EPS, why="frequencies k fs / nfft and the settings"),
+            fields={"x": SAMPLES},
+        ),
     }

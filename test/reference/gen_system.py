@@ -3,9 +3,21 @@
 Roots are written in the engine's stored form (one entry per conjugate pair, im >= 0, multiplicity 1 per
 listed copy). scipy's tf2zpk left-aligns b/a of different lengths, so the b/a cases are padded with trailing
 zeros to equal length before calling it (that is the reading in z the engine uses).
+
+The b/a cases have repeated roots (a double zero at -1, a double pole at 0.9, a fourfold zero at -1) that any
+eigenvalue solver splits by sqrt(eps) to eps^(1/4), differently for each LAPACK build, even into a different
+number of real roots. So their roots are the exact roots of the committed coefficients from mpmath (80 digits),
+and the generator checks that scipy.signal.tf2zpk agrees with them to that splitting.
 """
+import warnings
+
 import numpy as np
 from scipy import signal
+
+from conditioning import EPS, ULPS, product_form_error
+from fixture import Fixture, Tol, pointwise
+
+DESIGNED = Tol(rel=1e-12, abs=1e-14, why="scipy designs and np.poly products of their roots: a few ulps, mild cancellation")
 
 
 def stored(roots):
@@ -17,6 +29,17 @@ def stored(roots):
     out = [{"re": float(r), "im": 0.0, "multiplicity": 1} for r in zr]
     out += [{"re": float(c.real), "im": float(c.imag), "multiplicity": 1} for c in zc]
     return out
+
+
+def unstored(roots):
+    """The full root array of the stored form: each entry with im > 0 brings its conjugate."""
+    out = []
+    for r in roots:
+        c = complex(r["re"], r["im"])
+        out += [c] * r["multiplicity"]
+        if r["im"] != 0:
+            out += [c.conjugate()] * r["multiplicity"]
+    return np.asarray(out, dtype=complex)
 
 
 def zpk_case(name, z, p, k):
@@ -33,7 +56,9 @@ def zpk_case(name, z, p, k):
     w = np.linspace(0.01, 3.1, 7)
     _, h = signal.freqz_zpk(z, p, k, worN=w)
     case["omega"] = w
-    case["freqz_zpk"] = {"re": h.real, "im": h.imag}
+    err = ULPS * EPS * product_form_error(z, p, k, w)
+    why = "product form next to its roots"
+    case["freqz_zpk"] = {"re": pointwise(h.real, err, why), "im": pointwise(h.imag, err, why)}
     # freqz of scipy's own zpk2tf arrays: equals freqz_zpk only when there are as many zeros as poles.
     _, h2 = signal.freqz(b, a, worN=w)
     case["scipy_tf_matches_zpk"] = bool(np.allclose(h, h2, rtol=1e-9))
@@ -75,10 +100,52 @@ def tf_cases():
         n = max(len(b), len(a))
         bp = np.concatenate([b, np.zeros(n - len(b))])
         ap = np.concatenate([a, np.zeros(n - len(a))])
-        z, p, k = signal.tf2zpk(bp, ap)
-        cases.append({"name": name, "b": b, "a": a, "zeros": stored(z), "poles": stored(p), "gain": float(k)})
+        cases.append({"name": name, "b": b, "a": a})
     return cases
 
 
+def exact_roots(coefficients):
+    """Roots of the polynomial with these (double) coefficients, exact to double precision (mpmath, 80 digits)."""
+    import mpmath
+
+    mpmath.mp.dps = 80
+    c = np.trim_zeros(np.asarray(coefficients, dtype=float), "f")
+    if len(c) < 2:
+        return np.zeros(0, dtype=complex)
+    roots = mpmath.polyroots([mpmath.mpf(float(x)) for x in c], maxsteps=2000, extraprec=800)
+    return np.array([complex(r) for r in roots])
+
+
+def _tf_outputs(stored_inputs):
+    out = []
+    for case in stored_inputs:
+        b, a = np.asarray(case["b"], float), np.asarray(case["a"], float)
+        n = max(len(b), len(a))
+        bp = np.concatenate([b, np.zeros(n - len(b))])
+        ap = np.concatenate([a, np.zeros(n - len(a))])
+        with warnings.catch_warnings():
+            warnings.simplefilter("ignore")  # scipy warns about the leading zeros of the padded b; they are meant
+            z_s, p_s, k = signal.tf2zpk(bp, ap)
+        z, p = exact_roots(bp), exact_roots(ap)
+        for ours, theirs in ((z, z_s), (p, p_s)):  # scipy agrees up to the splitting of repeated roots
+            assert len(ours) == len(theirs)
+            for r in theirs:
+                assert np.min(np.abs(ours - r)) < 1e-3, f"{case['name']}: tf2zpk root {r} far from the exact roots"
+        out.append({"zeros": stored(z), "poles": stored(p), "gain": float(k)})
+    return out
+
+
 def fixtures():
-    return {"system_zpk": zpk_cases(), "system_tf": tf_cases()}
+    return {
+        "system_zpk": Fixture(zpk_cases(), tol=DESIGNED),
+        "system_tf": Fixture(
+            tf_cases(),
+            tol=Tol(rel=1e-14, abs=1e-16, why="typed coefficients, and cheby1's: a few ulps"),
+            fields={
+                "zeros.*": Tol(rel=1e-14, abs=1e-15, why="mpmath at 80 digits of the committed coefficients"),
+                "poles.*": Tol(rel=1e-14, abs=1e-15, why="mpmath at 80 digits of the committed coefficients"),
+                "gain": Tol(rel=1e-14, why="b[0] / a[0] after leading zeros"),
+            },
+            derive=_tf_outputs,
+        ),
+    }

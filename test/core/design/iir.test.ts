@@ -16,7 +16,7 @@ interface IirCase {
   zeros: (C | number)[];
   poles: (C | number)[];
   gain: number;
-  curve: { f: number[]; magDb: number[]; phase: number[] };
+  curve: { f: number[]; magDb: (number | null)[]; phase: (number | null)[] }; // null: not a reliable reference
 }
 
 /** Roots agree with scipy to this relative distance; the worst seen is 2e-12 (elliptic, order 20). */
@@ -47,6 +47,7 @@ describe.each(FIXTURES)('designIir %s against scipy.signal', (family, name) => {
     // scipy.signal.freqz_zpk 1.17
     const r = responseHz(zpk, c.curve.f, c.fs);
     c.curve.magDb.forEach((e, i) => {
+      if (e === null) return; // on top of a zero on the circle: scipy's value is rounding noise
       if (e > DEEP_DB) expectClose(r.magnitudeDb[i]!, e, { abs: DB_TOL }, `dB at ${c.curve.f[i]} Hz`);
       if (e > -100) expect(angleGap(r.phase[i]!, c.curve.phase[i]!)).toBeLessThan(PHASE_TOL);
     });

@@ -14,8 +14,8 @@ import type { Zpk } from '../../../src/core/types.ts';
 
 interface Curve {
   f: number[];
-  magDb: number[];
-  phase: number[];
+  magDb: (number | null)[]; // null: on top of a zero on the circle, not a reliable reference
+  phase: (number | null)[];
 }
 interface BaCase {
   fs: number;
@@ -49,6 +49,7 @@ function compare(zpk: Zpk, c: { zeros: (C | number)[]; poles: (C | number)[]; fs
   expect(rootSetDistance(allRoots(zpk.poles), fixtureRoots(c.poles))).toBeLessThan(ROOT_TOL);
   const r = responseHz(zpk, c.curve.f, c.fs);
   c.curve.magDb.forEach((e, i) => {
+    if (e === null) return;
     if (e > -150) expectClose(r.magnitudeDb[i]!, e, { abs: DB_TOL }, `dB at ${c.curve.f[i]} Hz`);
     if (e > -100) expect(angleGap(r.phase[i]!, c.curve.phase[i]!)).toBeLessThan(1e-8);
   });
