@@ -1,4 +1,7 @@
-/** Fixed-point implementation: settings, Q formats, quantization, word-length search, bit-exact simulation. */
+/**
+ * Fixed-point implementation: settings, Q formats, quantization, word-length search, bit-exact simulation
+ * (whole or streamed), limit cycles, round-off noise and the comparison of arrangements.
+ */
 export {
   DEFAULT_IMPLEMENTATION,
   MIN_WORD_LENGTH,
@@ -31,3 +34,20 @@ export { detectLimitCycle, LIMIT_CYCLE_MAX_SAMPLES } from './limitCycle.ts';
 export type { LimitCycleReport } from './limitCycle.ts';
 export { inputSignal, DEFAULT_SIGNAL_AMPLITUDE } from './signal.ts';
 export type { SignalSpec } from './signal.ts';
+export { zeroInputVerdict } from './limitCycle.ts';
+export { FixedRun, meanSquareDbfs } from './run.ts';
+export type { DifferenceStats, FixedRunReport } from './run.ts';
+export { roundoffNoise, roundingError } from './noise.ts';
+export type { RoundoffNoise, SectionNoise } from './noise.ts';
+export {
+  compareArrangements,
+  quietestSafe,
+  headroomOf,
+  accumulatorSafe,
+  HEADROOM_TOLERANCE,
+  ORDERINGS,
+  SCALINGS,
+  STRUCTURES,
+} from './arrangements.ts';
+export type { Arrangement, Headroom } from './arrangements.ts';
+export { containerFormat, containerBits, codesToValues } from './codes.ts';

@@ -4,6 +4,7 @@
  * cycle length with one saved state, comparing whole states (not outputs), so a detected period is exact.
  */
 import type { Implementation } from './implementation.ts';
+import type { FixedCascade } from './kernel.ts';
 import { fixedCascadeOf } from './simulate.ts';
 
 /** Zero-input samples run at most, by default, before the verdict is 'undecided'. */
@@ -35,14 +36,29 @@ export function detectLimitCycle(
   excitation: Int32Array,
   maxSamples = LIMIT_CYCLE_MAX_SAMPLES,
 ): LimitCycleReport {
-  let overflowCount = 0;
-  let counting = false;
+  const counter = { counting: false, count: 0 };
   const f = fixedCascadeOf(impl, () => {
-    if (counting) overflowCount++;
+    if (counter.counting) counter.count++;
   });
   for (let n = 0; n < excitation.length; n++) f.step(excitation[n]!, n);
-  counting = true;
-  let n = excitation.length;
+  return zeroInputVerdict(f, excitation.length, impl.settings.dataWordLength, counter, maxSamples);
+}
+
+/**
+ * Continues a running cascade (its state as the input left it, next sample index `start`) with zero input
+ * until the state rests or repeats. `counter.counting` is switched on so the cascade's overflow callback can
+ * count the zero-input run's overflows into `counter.count`. The cascade's state is changed.
+ */
+export function zeroInputVerdict(
+  f: FixedCascade<number> | FixedCascade<bigint>,
+  start: number,
+  dataWordLength: number,
+  counter: { counting: boolean; count: number },
+  maxSamples = LIMIT_CYCLE_MAX_SAMPLES,
+): LimitCycleReport {
+  counter.counting = true;
+  counter.count = 0;
+  let n = start;
   let saved = f.snapshot();
   let power = 1;
   let lambda = 1;
@@ -64,7 +80,7 @@ export function detectLimitCycle(
     amplitude: 0,
     cycle: new Int32Array(0),
     samplesRun: run,
-    overflowCount,
+    overflowCount: counter.count,
   };
   if (!f.stateEquals(saved)) return { verdict: 'undecided', ...none };
   if (f.atRest()) return { verdict: 'rest', ...none };
@@ -75,9 +91,9 @@ export function detectLimitCycle(
     verdict: 'cycle',
     period: lambda,
     amplitudeCodes,
-    amplitude: amplitudeCodes * 2 ** -(impl.settings.dataWordLength - 1),
+    amplitude: amplitudeCodes * 2 ** -(dataWordLength - 1),
     cycle,
     samplesRun: run,
-    overflowCount,
+    overflowCount: counter.count,
   };
 }
