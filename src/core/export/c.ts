@@ -8,6 +8,7 @@
 import type { Implementation } from '../fixed/index.ts';
 import { conventionLines, structureName } from './conventions.ts';
 import { cInteger, float17 } from './numbers.ts';
+import { noiseLines } from './noise.ts';
 
 /** Options of the C export. */
 export interface CExportOptions {
@@ -137,9 +138,7 @@ export function exportC(impl: Implementation, options: CExportOptions = {}): str
     return `  { ${[c[0], c[1], c[2], f * c[4], f * c[5]].map(float17).join(', ')} }`;
   });
   const fixedRows = impl.quantized.codes.map((c) => `  { ${[...c.b, ...c.a].map(cInteger).join(', ')} }`);
-  const comment = conventionLines(impl)
-    .map((l) => ` * ${l}`)
-    .join('\n');
+  const comment = [...conventionLines(impl), ...noiseLines(impl)].map((l) => ` * ${l}`).join('\n');
   return `/*
  * ${p}.h - second-order sections exported by Polewright.
 ${comment}

@@ -2,6 +2,7 @@
 import type { Implementation } from '../fixed/index.ts';
 import { conventionLines } from './conventions.ts';
 import { float17 } from './numbers.ts';
+import { noiseLines } from './noise.ts';
 
 /** The CSV export text: '#' lines, a header row, then one row per section in cascade order. */
 export function exportCsv(impl: Implementation): string {
@@ -28,5 +29,9 @@ export function exportCsv(impl: Implementation): string {
       float17(sec.peakGainDb),
     ].join(',');
   });
-  return [...conventionLines(impl).map((l) => `# ${l}`), header.join(','), ...rows].join('\n') + '\n';
+  return (
+    [...[...conventionLines(impl), ...noiseLines(impl)].map((l) => `# ${l}`), header.join(','), ...rows].join(
+      '\n',
+    ) + '\n'
+  );
 }

@@ -6,3 +6,4 @@ export { exportCsv } from './csv.ts';
 export { conventionLines, structureName } from './conventions.ts';
 export { designHash, fnv1a64, canonicalJson } from './hash.ts';
 export { float17, cInteger } from './numbers.ts';
+export { noiseLines, noiseJson, NOISE_MODEL } from './noise.ts';

@@ -3,6 +3,7 @@ import { qName, type Implementation } from '../fixed/index.ts';
 import { conventionLines, structureName } from './conventions.ts';
 import { designHash } from './hash.ts';
 import { float17 } from './numbers.ts';
+import { noiseJson } from './noise.ts';
 
 /** A value of the JSON writer: floats are written with 17 significant digits, integers as they are. */
 type Json = null | boolean | string | { float: number } | number | Json[] | { [k: string]: Json };
@@ -62,6 +63,7 @@ export function exportJson(impl: Implementation): string {
     gainDistribution: s.gainDistribution,
     outputGain: f(impl.cascade.outputGain),
     stability: { ideal: impl.idealStability.verdict, quantized: impl.stability.verdict },
+    roundoffNoise: noiseJson(impl),
     sections: impl.cascade.sections.map((sec, i) => {
       const c = sec.coefficients;
       const codes = impl.quantized.codes[i]!;

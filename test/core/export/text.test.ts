@@ -4,6 +4,7 @@ import {
   DEFAULT_IMPLEMENTATION,
   type Implementation,
   type ImplementationSettings,
+  roundoffNoise,
 } from '../../../src/core/fixed/index.ts';
 import {
   canonicalJson,
@@ -118,5 +119,28 @@ describe('exportC', () => {
     if (!r.ok) throw new Error(r.error.message);
     expect(r.value.quantized.codes[0]!.b[0]).toBe(-2147483648);
     expect(exportC(r.value)).toContain('(-2147483647 - 1)');
+  });
+});
+
+describe('round-off noise in the exports', () => {
+  it('JSON carries the prediction; the C header and CSV state it in their comments', () => {
+    const impl = implement({ structure: 'df1', rounding: 'truncate' });
+    const noise = roundoffNoise(impl);
+    const doc = JSON.parse(exportJson(impl));
+    expect(doc.roundoffNoise.powerDbfs).toBe(noise.powerDbfs);
+    expect(doc.roundoffNoise.snrFullScaleSineDb).toBe(noise.snrDb);
+    expect(doc.roundoffNoise.effectiveBits).toBe(noise.effectiveBits);
+    expect(doc.roundoffNoise.sections).toHaveLength(1);
+    expect(doc.roundoffNoise.droppedBits).toBe(14);
+    const total = new RegExp(`total ${noise.powerDbfs.toFixed(1)} dBFS`);
+    const c = exportC(impl);
+    expect(c.slice(0, c.indexOf('*/'))).toMatch(total);
+    expect(c).toMatch(new RegExp(`SNR ${noise.snrDb.toFixed(1)} dB for a full-scale output sine`));
+    expect(exportCsv(impl)).toMatch(new RegExp(`# +${total.source}`));
+  });
+
+  it('says there is no rounding when the post-shift is 0', () => {
+    const impl = implement({ fractionBits: 0, wordLength: 8, scaling: 'none' });
+    expect(exportC(impl)).toMatch(/round-off noise: none/);
   });
 });
