@@ -1,9 +1,9 @@
 import { describe, it, expect } from 'vitest';
-import { execFileSync } from 'node:child_process';
-import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { runCli } from '../helpers/cli.ts';
+import { compileFilter } from '../helpers/cProgram.ts';
 import { buildImplementation, DEFAULT_IMPLEMENTATION, runFixedCodes } from '../../src/core/fixed/index.ts';
 import { tfToZpk } from '../../src/core/system.ts';
 
@@ -66,8 +66,9 @@ describe('polewright export', () => {
     const flags = ['--structure', 'df1', '--word', '12', '--rounding', 'nearest', '--overflow', 'saturate'];
     const r = await runCli(['export', ...NOTCH, '--format', 'c', '--out', header, ...flags]);
     expect(r.code).toBe(0);
-    writeFileSync(
-      join(dir, 'main.c'),
+    const program = compileFilter(
+      readFileSync(header, 'utf8'),
+      'host',
       `#include <stdio.h>
 #include "filter.h"
 int main(void) {
@@ -82,17 +83,7 @@ int main(void) {
 }
 `,
     );
-    execFileSync('gcc', [
-      '-std=c99',
-      '-Wall',
-      '-Wextra',
-      '-pedantic',
-      '-Werror',
-      '-o',
-      join(dir, 'prog'),
-      join(dir, 'main.c'),
-    ]);
-    const got = execFileSync(join(dir, 'prog')).toString().trim().split('\n').map(Number);
+    const got = program.run('fixed', []).map(Number);
     const impl = buildImplementation(tfToZpk({ b: [0.95, -1.8, 0.95], a: [1, -1.7, 0.9] }), 2000, {
       ...DEFAULT_IMPLEMENTATION,
       structure: 'df1',
