@@ -25,6 +25,7 @@ import { openForWriting } from '../stream/fileChunks.ts';
 import { filterStream, type StreamRunSummary } from '../stream/filterFile.ts';
 import { CsvFileSink, WavFileSink } from '../stream/sinks.ts';
 import { CsvFileSource, WavFileSource, isWavPath } from '../stream/sources.ts';
+import { FIXED_FLAGS, rejectFixedFlags, runSimulateFixed } from './simulateFixed.ts';
 
 /** Most samples one call may ask for when the output is printed or the input is generated in memory. */
 export const MAX_SIMULATE_SAMPLES = 10_000_000;
@@ -254,9 +255,11 @@ async function writeInMemory(
 export async function runSimulate(argv: string[], io: CliIo): Promise<number> {
   const args = parseArgs(
     argv,
-    [...DESIGN_FLAGS, 'input', 'samples', 'output', 'output-format', 'channel', 'input-rate'],
-    ['json'],
+    [...DESIGN_FLAGS, 'input', 'samples', 'output', 'output-format', 'channel', 'input-rate', ...FIXED_FLAGS],
+    ['json', 'fixed'],
   );
+  if (args.switches.has('fixed')) return runSimulateFixed(args, io);
+  rejectFixedFlags(args);
   const d = readDesign(args);
   for (const note of d.notes) io.stderr(`note: ${note}\n`);
   const spec = args.flags.get('input') ?? 'impulse';

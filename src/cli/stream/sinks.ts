@@ -88,17 +88,27 @@ export class CsvFileSink implements SignalSink {
     private readonly sampleRate: number,
     private readonly startTime: number,
     private readonly delimiter: ',' | '\t',
+    private readonly names: readonly string[] | null,
   ) {}
 
-  /** A sink that computes times as startTime + k / sampleRate when the input brings none. */
-  static async create(path: string, sampleRate: number, startTime = 0): Promise<CsvFileSink> {
+  /**
+   * A sink that computes times as startTime + k / sampleRate when the input brings none; `names` heads the
+   * value columns (default "value", or channel_1, channel_2, ...).
+   */
+  static async create(
+    path: string,
+    sampleRate: number,
+    startTime = 0,
+    names: readonly string[] | null = null,
+  ): Promise<CsvFileSink> {
     const delimiter = /\.(tsv|tab)$/i.test(path) ? '\t' : ',';
-    return new CsvFileSink(await openForWriting(path), sampleRate, startTime, delimiter);
+    return new CsvFileSink(await openForWriting(path), sampleRate, startTime, delimiter, names);
   }
 
   async write(channels: readonly Float64Array[], times: Float64Array | null): Promise<void> {
     if (!this.headerWritten) {
-      const names = channels.length === 1 ? ['value'] : channels.map((_, c) => `channel_${c + 1}`);
+      const names =
+        this.names ?? (channels.length === 1 ? ['value'] : channels.map((_, c) => `channel_${c + 1}`));
       await this.handle.write(csvHeaderLine(['time_s', ...names], this.delimiter));
       this.headerWritten = true;
     }
