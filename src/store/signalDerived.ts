@@ -9,11 +9,16 @@ import { responseZpk, type FrequencyResponse } from '../core/response.ts';
 import { rootReadouts } from '../core/readouts.ts';
 import {
   createSectionFilter,
-  levelChanges,
-  nextPowerOfTwo,
+  fitTones,
+  levelFloorDb,
+  levelReadings,
+  measureLevels,
+  autoSegmentLength,
   runSectionFilter,
   welch,
-  type LevelChange,
+  type LevelReading,
+  type LevelReport,
+  type ToneEstimate,
   type WelchResult,
   type WindowName,
 } from '../core/signal/index.ts';
@@ -22,24 +27,14 @@ import { memoLast } from './memo.ts';
 import type { LevelChoice, LoadedSignal, SpectrumSettings } from './signal.ts';
 import type { WorkbenchState } from './store.ts';
 
-/** Bin width the automatic segment length aims for, Hz: fine enough to separate a drifting hum's harmonics. */
-export const AUTO_BIN_HZ = 1;
-/** The automatic segment keeps at least this many segments in the average, when the signal allows. */
-export const AUTO_MIN_SEGMENTS = 4;
-/** Shortest automatic segment, samples. */
-export const AUTO_MIN_SEGMENT = 256;
 /** Harmonics of a mains frequency read by default (fundamental included). */
 export const MAINS_HARMONICS = 5;
 /** Performance-mark names: the filter pass, and its start (a frame's stopwatch starts there). */
 export const FILTER_MARK = 'pw-signal-filter';
 
-/** The Welch segment length for the settings: as set, or a power of two near fs / AUTO_BIN_HZ. */
+/** The Welch segment length for the settings: as set, or the automatic one (autoSegmentLength). */
 export function segmentLength(settings: SpectrumSettings, sampleRate: number, n: number): number {
-  if (settings.segment !== 'auto') return settings.segment;
-  const ideal = nextPowerOfTwo(Math.ceil(sampleRate / AUTO_BIN_HZ));
-  let seg = ideal;
-  while (seg > AUTO_MIN_SEGMENT && seg * AUTO_MIN_SEGMENTS > n) seg /= 2;
-  return seg;
+  return settings.segment === 'auto' ? autoSegmentLength(sampleRate, n) : settings.segment;
 }
 
 /** The signal filtered by the cascade from zero state (marks the pass for the page's timing). */
@@ -171,14 +166,85 @@ export const selectLevelPlan = (s: WorkbenchState): LevelPlan | null => {
   return cur ? levelPlanOf(s.signal.levels, selectZpk(s), s.design.sampleRate, cur.sampleRate) : null;
 };
 
-const changesOf = memoLast((before: WelchResult, after: WelchResult, plan: LevelPlan): LevelChange[] =>
-  levelChanges(before, after, plan.frequenciesHz),
+/** The level read-out: readings before and after, their noise floors, and how they were made. */
+export interface LevelTableData {
+  /** The readings and the method (null when they could not be made: see `error`). */
+  report: LevelReport | null;
+  error: string | null;
+  /** Per reading, the level noise alone would read there (dB), before and after. */
+  floors: { beforeDb: number; afterDb: number | null }[];
+  /** True while a root is dragged: `after` is then before + 20·log10|H| at each frequency (steady state). */
+  shaped: boolean;
+}
+
+type Before = { ok: true; report: LevelReport } | { ok: false; error: string };
+const beforeLevelsOf = memoLast((samples: Float64Array, fs: number, plan: LevelPlan): Before => {
+  try {
+    return { ok: true, report: measureLevels(samples, null, fs, plan.frequenciesHz) };
+  } catch (e) {
+    return { ok: false, error: (e as Error).message };
+  }
+});
+const fittedOf = memoLast((report: LevelReport) => report.readings.map((r) => r.fittedHz));
+const afterLevelsOf = memoLast(
+  (output: Float64Array, fs: number, fitted: number[]): ToneEstimate[] => fitTones(output, fs, fitted).tones,
+);
+const shapedLevelsOf = memoLast((report: LevelReport, zpk: Zpk): { levelDb: number }[] => {
+  const omega = Float64Array.from(report.readings, (r) => (2 * Math.PI * r.fittedHz) / report.sampleRate);
+  const h = responseZpk(zpk, omega).magnitude;
+  return report.readings.map((r, i) => ({ levelDb: r.beforeDb + 20 * Math.log10(h[i]!) }));
+});
+const tableOf = memoLast(
+  (
+    report: LevelReport,
+    after: readonly { levelDb: number }[] | null,
+    inputSpectrum: WelchResult,
+    outputSpectrum: WelchResult | null,
+    shaped: boolean,
+  ): LevelTableData => {
+    const fitted = report.readings.map((r) => r.fittedHz);
+    const readings: LevelReading[] = levelReadings(
+      report.readings.map((r) => r.frequencyHz),
+      fitted,
+      report.readings.map((r) => ({ levelDb: r.beforeDb })),
+      after,
+    );
+    const floor = (spec: WelchResult, f: number) =>
+      levelFloorDb(
+        spec,
+        f,
+        fitted.filter((g) => g !== f),
+        report.count,
+        report.weighting,
+      );
+    return {
+      report: { ...report, readings },
+      error: null,
+      floors: fitted.map((f) => ({
+        beforeDb: floor(inputSpectrum, f),
+        afterDb: outputSpectrum ? floor(outputSpectrum, f) : null,
+      })),
+      shaped,
+    };
+  },
 );
 
-/** Levels (dB re amplitude 1, i.e. dBFS for audio) at the read-out frequencies before and after, with the change. */
-export const selectLevelChanges = (s: WorkbenchState): LevelChange[] | null => {
-  const before = selectInputSpectrum(s);
-  const after = selectOutputSpectrum(s);
+/**
+ * Levels (dB re amplitude 1, i.e. dBFS for audio) at the read-out frequencies before and after, fitted over
+ * the whole recording (see core/signal/levels.ts), with the noise floor at each; while a root is dragged the
+ * after column is before + |H| (dB) at each frequency, measured again on release.
+ */
+export const selectLevelTable = (s: WorkbenchState): LevelTableData | null => {
+  const cur = s.signal.current;
   const plan = selectLevelPlan(s);
-  return before && after && plan ? changesOf(before, after, plan) : null;
+  const input = selectInputSpectrum(s);
+  if (!cur || !plan || !input) return null;
+  const before = beforeLevelsOf(cur.samples, cur.sampleRate, plan);
+  if (!before.ok) return { report: null, error: before.error, floors: [], shaped: false };
+  const output = selectOutputSpectrum(s);
+  if (s.dragging)
+    return tableOf(before.report, shapedLevelsOf(before.report, selectZpk(s)), input, output, true);
+  const y = selectSignalOutput(s);
+  const after = y ? afterLevelsOf(y, cur.sampleRate, fittedOf(before.report)) : null;
+  return tableOf(before.report, after, input, output, false);
 };

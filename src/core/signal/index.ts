@@ -1,4 +1,4 @@
-/** Real signals: WAV and CSV codecs, generators, streaming section filter, FFT, windows, Welch spectrum, levels. */
+/** Real signals: WAV and CSV codecs, generators, streaming section filter, FFT, windows, Welch spectrum, tone levels. */
 export * from './sampleFormat.ts';
 export { decodeFrames, encodeFrames, encodeIntegerFrames } from './sampleCodec.ts';
 export * from './wavHeader.ts';
@@ -15,3 +15,5 @@ export * from './fft.ts';
 export * from './windows.ts';
 export * from './welch.ts';
 export * from './levels.ts';
+export * from './toneFit.ts';
+export * from './toneSearch.ts';

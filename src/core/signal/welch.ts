@@ -5,7 +5,7 @@
  * so a sinusoid of amplitude A centred on a bin reads A²/2). The accumulator takes the signal in pieces of
  * any size and gives the same numbers as one call on the whole signal.
  */
-import { realFft } from './fft.ts';
+import { nextPowerOfTwo, realFft } from './fft.ts';
 import { makeWindow, windowFigures, type WindowName } from './windows.ts';
 
 /** 'density': power spectral density in units²/Hz; 'spectrum': power per bin in units² (sinusoid → A²/2). */
@@ -185,4 +185,21 @@ export function powerToDb(power: Float64Array, floorDb = -300): Float64Array {
   for (let k = 0; k < power.length; k++)
     out[k] = power[k]! > 0 ? Math.max(floorDb, 10 * Math.log10(power[k]!)) : floorDb;
   return out;
+}
+
+/** Bin width the automatic segment length aims for, Hz: fine enough to separate a drifting hum's harmonics. */
+export const AUTO_BIN_HZ = 1;
+/** The automatic segment keeps at least this many segments in the average, when the signal allows. */
+export const AUTO_MIN_SEGMENTS = 4;
+/** Shortest automatic segment, samples. */
+export const AUTO_MIN_SEGMENT = 256;
+
+/**
+ * The automatic Welch segment for n samples at fs (Hz): a power of two near fs / AUTO_BIN_HZ, halved while
+ * that leaves fewer than AUTO_MIN_SEGMENTS segments (down to AUTO_MIN_SEGMENT).
+ */
+export function autoSegmentLength(sampleRate: number, n: number): number {
+  let seg = nextPowerOfTwo(Math.ceil(sampleRate / AUTO_BIN_HZ));
+  while (seg > AUTO_MIN_SEGMENT && seg * AUTO_MIN_SEGMENTS > n) seg /= 2;
+  return seg;
 }

@@ -1,10 +1,12 @@
 /**
  * Levels at chosen frequencies before and after the filter, with the change in dB, and the choice of
  * where to read: the design's notches (default, or 50 Hz harmonics when it has none), a mains series, or
- * frequencies typed by the user.
+ * frequencies typed by the user. The caption says how the levels were read (a least-squares fit of the
+ * tones over the whole recording) and readings near the noise floor are marked.
  */
 import { useId, useState } from 'react';
-import { selectLevelChanges, selectLevelPlan } from '../../store/signalDerived.ts';
+import { selectLevelPlan, selectLevelTable } from '../../store/signalDerived.ts';
+import { LEVEL_FLOOR_MARGIN_DB, levelMethod } from '../../core/signal/index.ts';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import type { LevelChoice } from '../../store/signal.ts';
 import { formatHz, formatNumber } from '../shared/format.ts';
@@ -12,6 +14,25 @@ import { readNumber } from '../shared/NumberField.tsx';
 
 function db(x: number): string {
   return Number.isFinite(x) ? formatNumber(x, 3) : x < 0 ? '−∞' : '∞';
+}
+
+/** A level, marked "~" when within LEVEL_FLOOR_MARGIN_DB of the noise floor there. */
+function LevelCell({ level, floor }: { level: number | null; floor: number | null }) {
+  if (level === null) return <td>—</td>;
+  const near = floor !== null && level - floor < LEVEL_FLOOR_MARGIN_DB;
+  return (
+    <td
+      className={near ? 'pw-levels-floor' : undefined}
+      title={
+        near && floor !== null
+          ? `Within ${LEVEL_FLOOR_MARGIN_DB} dB of the noise floor here (${db(floor)} dB for this record): the tone may be weaker than this reads.`
+          : undefined
+      }
+    >
+      {near ? '~' : ''}
+      {db(level)}
+    </td>
+  );
 }
 
 function changeDb(x: number): string {
@@ -37,11 +58,11 @@ export function readFrequencyList(
 }
 
 export function LevelTable() {
-  const changes = useWorkbench(selectLevelChanges);
+  const table = useWorkbench(selectLevelTable);
   const plan = useWorkbench(selectLevelPlan);
+  const readings = table?.report?.readings ?? null;
   const choice = useWorkbench((s) => s.signal.levels);
   const nyquist = useWorkbench((s) => (s.signal.current?.sampleRate ?? 2) / 2);
-  const shaped = useWorkbench((s) => s.dragging);
   const [text, setText] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
   const id = useId();
@@ -108,24 +129,37 @@ export function LevelTable() {
           {error}
         </p>
       ) : null}
-      {changes && changes.length > 0 ? (
+      {table?.error ? (
+        <p className="pw-field-error" role="alert">
+          {table.error}
+        </p>
+      ) : readings && readings.length > 0 ? (
         <table className="pw-levels-table">
           <thead>
             <tr>
               <th scope="col">f</th>
+              <th scope="col" title="Where the tone was found and fitted, near the asked frequency">
+                found at
+              </th>
               <th scope="col">before</th>
               <th scope="col">after</th>
               <th scope="col">change</th>
             </tr>
           </thead>
           <tbody>
-            {changes.map((c) => (
+            {readings.map((c, i) => (
               <tr key={c.frequencyHz} data-hz={c.frequencyHz}>
                 <th scope="row">{formatHz(c.frequencyHz)}</th>
-                <td>{db(c.beforeDb)}</td>
-                <td>{db(c.afterDb)}</td>
-                <td className={c.changeDb < -0.05 ? 'pw-levels-down' : undefined} data-change-db={c.changeDb}>
-                  {changeDb(c.changeDb)}
+                <td className="pw-levels-found" data-found-hz={c.fittedHz}>
+                  {formatHz(c.fittedHz, 6)}
+                </td>
+                <LevelCell level={c.beforeDb} floor={table!.floors[i]?.beforeDb ?? null} />
+                <LevelCell level={c.afterDb} floor={table!.floors[i]?.afterDb ?? null} />
+                <td
+                  className={c.changeDb !== null && c.changeDb < -0.05 ? 'pw-levels-down' : undefined}
+                  data-change-db={c.changeDb ?? undefined}
+                >
+                  {c.changeDb === null ? '—' : changeDb(c.changeDb)}
                 </td>
               </tr>
             ))}
@@ -134,9 +168,20 @@ export function LevelTable() {
       ) : (
         <p className="pw-levels-note">No frequency to read below half the sample rate.</p>
       )}
-      <p className="pw-levels-note">
-        dB re amplitude 1 (dBFS for audio); peak within ±2 bins.
-        {shaped ? ' While you drag: input × |H|²; measured again on release.' : ''}
+      <p className="pw-levels-note" data-testid="level-method">
+        dB re amplitude 1 (dBFS for audio). {table?.report ? `${levelMethod(table.report)}.` : ''}
+        {table?.floors.some(
+          (f, i) =>
+            (readings?.[i] && readings[i]!.beforeDb - f.beforeDb < LEVEL_FLOOR_MARGIN_DB) ||
+            (f.afterDb !== null &&
+              readings?.[i]?.afterDb != null &&
+              readings[i]!.afterDb! - f.afterDb < LEVEL_FLOOR_MARGIN_DB),
+        )
+          ? ` ~ within ${LEVEL_FLOOR_MARGIN_DB} dB of the noise floor: may read high.`
+          : ''}
+        {table?.shaped
+          ? ' While you drag: after = before + |H| at each frequency; measured again on release.'
+          : ''}
       </p>
     </div>
   );
