@@ -6,6 +6,8 @@ import { runExport } from './commands/export.ts';
 import { runResponse } from './commands/response.ts';
 import { runSimulate } from './commands/simulate.ts';
 import { runDesign } from './commands/design.ts';
+import { runSpectrum } from './commands/spectrum.ts';
+import { IMPLEMENTATION_USAGE } from './implementationFlags.ts';
 
 export interface CliIo {
   stdout: (s: string) => void;
@@ -19,6 +21,7 @@ const COMMANDS: Record<string, (argv: string[], io: CliIo) => number | Promise<n
   link: runLink,
   export: runExport,
   design: runDesign,
+  spectrum: runSpectrum,
 };
 
 export const USAGE = `polewright — digital filter analysis on the command line
@@ -30,10 +33,15 @@ usage:
   polewright simulate <design> [--input impulse|step|sine:<Hz>|<file.csv>|<file.wav>] [--samples N] [--json]
                       [--output <file.wav|file.csv>] [--output-format u8|i16|i24|i32|f32|f64]
                       [--channel N] [--input-rate <Hz>]
-  polewright export   <design> [--format c|json|csv] [--structure df1|df2t] [--word 8..32] [--fraction auto|N]
-                      [--data-word 8..32] [--accumulator N] [--rounding nearest|truncate] [--overflow saturate|wrap]
-                      [--scaling linf|l2|l1|none] [--ordering ascending|descending] [--gain first|spread]
-                      [--pairing nearest|keep-odd] [--feedback denominator|negated] [--name <C prefix>] [--out <file>]
+  polewright simulate <design> --fixed [--input impulse|step|sine:<Hz>|noise[:seed]|<file.csv>|<file.wav>]
+                      [--amplitude A] [--input-units full-scale|codes] [--samples N] [--json]
+                      [--output <file.wav|file.csv>] [--channel N] [--input-rate <Hz>]
+                      ${IMPLEMENTATION_USAGE}
+  polewright export   <design> [--format c|json|csv] [--name <C prefix>] [--out <file>]
+                      ${IMPLEMENTATION_USAGE}
+  polewright spectrum <file.wav|file.csv> [<design>] [--window hann|hamming|blackman|flattop|rectangular]
+                      [--segment auto|N] [--overlap N] [--scaling density|spectrum] [--channel N] [--input-rate <Hz>]
+                      [--levels 50,150 [--level-search <percent>] [--level-weighting hann|rectangular]] [--json]
   polewright link     <design> [--base URL]       (prints a workbench link; default base http://127.0.0.1:5173/)
 
 <design> is a design file saved from the workbench, a design link (a URL with #pw1.…), or one of:
