@@ -22,7 +22,7 @@ const n = 300_001; // several 256 KiB reads, odd
 const x = makeTones(n, fs, [
   { frequencyHz: 50.04, amplitude: 0.2, phase: 0.3 },
   { frequencyHz: 150.12, amplitude: 0.03 },
-]).map((v, i) => v + 0.2);
+]).map((v) => v + 0.2);
 const noise = makeWhiteNoise(n, 3, 0.01);
 for (let i = 0; i < n; i++) x[i] = x[i]! + noise[i]!;
 writeFileSync(path('rec.wav'), writeWav({ format: 'f32', sampleRate: fs, channels: [x] }).bytes);

@@ -155,7 +155,6 @@ export class ToneFitAccumulator {
     if (this.n < this.length)
       throw new RangeError(`the span has ${this.length} samples but only ${this.n} were given`);
     const cols = this.columns;
-    const m = cols.length;
     const a = cols.map((p) => cols.map((q) => this.gram(p, q)));
     const b = cols.map((c, i) => {
       if (i === 0) return this.sumWx;
