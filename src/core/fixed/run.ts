@@ -148,9 +148,9 @@ export class FixedRun {
 
   /**
    * Runs input codes (clamped to the data word, counted as clipped when that changed one) and returns the
-   * output codes, in `out` when given.
+   * output codes, in `out` when given; `ideal`, when given, receives the ideal cascade's output values.
    */
-  pushCodes(codes: Int32Array, out = new Int32Array(codes.length)): Int32Array {
+  pushCodes(codes: Int32Array, out = new Int32Array(codes.length), ideal?: Float64Array): Int32Array {
     if (this.finished) throw new Error('FixedRun: the run was finished; start a new one');
     const f = this.cascade;
     const x = new Float64Array(codes.length);
@@ -165,7 +165,9 @@ export class FixedRun {
       out[i] = f.step(c, this.n + i);
     }
     this.n += codes.length;
-    this.idealDiff.add(out, runSectionFilter(this.ideal, x));
+    const reference = runSectionFilter(this.ideal, x);
+    if (ideal) ideal.set(reference);
+    this.idealDiff.add(out, reference);
     this.roundoffDiff.add(out, runSectionFilter(this.exact, x));
     return out;
   }

@@ -4,7 +4,17 @@ import { SAMPLE_FORMATS, describeFormat, type SampleFormat } from '../../core/si
 import type { LoadedSignal } from '../../store/signal.ts';
 import { selectSignalOutput } from '../../store/signalDerived.ts';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
-import { defaultExportFormat, downloadBlob, exportName, filteredCsv, filteredWav } from './exportSignal.ts';
+import {
+  defaultExportFormat,
+  downloadBlob,
+  exportName,
+  filteredCsv,
+  filteredWav,
+  fixedCsv,
+  fixedExportName,
+  fixedWav,
+} from './exportSignal.ts';
+import { setFixedRunEnabled, useCurrentFixedRun, useFixedRun } from './fixedRecording.ts';
 
 export function ExportButtons({ signal }: { signal: LoadedSignal }) {
   const [chosen, setChosen] = useState<SampleFormat | 'input'>('input');
@@ -23,7 +33,10 @@ export function ExportButtons({ signal }: { signal: LoadedSignal }) {
     const y = output();
     if (!y) return;
     setNotes([]);
-    downloadBlob(filteredCsv(y, signal.sampleRate, signal.startTime), exportName(signal, 'csv'));
+    downloadBlob(
+      filteredCsv(signal.samples, y, signal.sampleRate, signal.startTime),
+      exportName(signal, 'csv'),
+    );
   };
   return (
     <div className="pw-signal-export">
@@ -50,11 +63,63 @@ export function ExportButtons({ signal }: { signal: LoadedSignal }) {
           Download filtered CSV
         </button>
       </div>
+      <FixedDownloads signal={signal} onNotes={setNotes} />
       {notes.map((n) => (
         <p key={n} className="pw-hint pw-block" role="status">
           {n}
         </p>
       ))}
+    </div>
+  );
+}
+
+/** Downloads of the fixed-point run's output codes, or the switch that starts the run. */
+function FixedDownloads({ signal, onNotes }: { signal: LoadedSignal; onNotes: (n: string[]) => void }) {
+  const fixed = useCurrentFixedRun();
+  const enabled = useFixedRun((s) => s.enabled);
+  const status = useFixedRun((s) => s.status);
+  if (!fixed) {
+    const words = !enabled
+      ? 'The fixed-point output (the exported C’s codes) downloads once the recording has run through it.'
+      : status.kind === 'running'
+        ? `Fixed point: running… ${Math.round(100 * status.fraction)} %`
+        : status.kind === 'error'
+          ? `The fixed-point run failed: ${status.message}`
+          : status.kind === 'unavailable'
+            ? status.reason
+            : 'Fixed point: waiting for the run.';
+    return (
+      <p className="pw-hint pw-block" data-testid="fixed-downloads-status">
+        {words}{' '}
+        {enabled ? null : (
+          <button type="button" className="pw-small-button" onClick={() => setFixedRunEnabled(true)}>
+            Run in fixed point
+          </button>
+        )}
+      </p>
+    );
+  }
+  const { result, implementation } = fixed;
+  const wav = () => {
+    const r = fixedWav(result.output, signal.sampleRate, implementation);
+    onNotes(r.notes);
+    downloadBlob(r.blob, fixedExportName(signal, 'wav'));
+  };
+  const csv = () => {
+    onNotes([]);
+    downloadBlob(
+      fixedCsv(signal.samples, result.output, signal.sampleRate, implementation, signal.startTime),
+      fixedExportName(signal, 'csv'),
+    );
+  };
+  return (
+    <div className="pw-signal-export-buttons">
+      <button type="button" onClick={wav}>
+        Download fixed-point WAV
+      </button>
+      <button type="button" onClick={csv}>
+        Download fixed-point CSV
+      </button>
     </div>
   );
 }

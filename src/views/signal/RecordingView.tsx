@@ -1,10 +1,16 @@
-/** Before and after in time: zoom buttons over the plot of the recording and the filtered recording. */
+/**
+ * Before and after in time: zoom buttons over the plot of the recording and the filtered recording, the
+ * switch for the fixed-point run, and (once it has run) its findings and its difference from the ideal filter.
+ */
 import { useRef } from 'react';
 import type { LoadedSignal } from '../../store/signal.ts';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import { useElementSize } from '../chart/useElementSize.ts';
 import { SignalChart } from './SignalChart.tsx';
 import { ZOOM_STEP, zoomAbout } from './useZoomGestures.ts';
+import { FixedRunSummary, FixedRunSwitch } from './FixedRunBar.tsx';
+import { DifferenceStrip } from './DifferenceStrip.tsx';
+import { useCurrentFixedRun } from './fixedRecording.ts';
 
 export function RecordingView({ signal }: { signal: LoadedSignal }) {
   const box = useRef<HTMLDivElement>(null);
@@ -14,13 +20,20 @@ export function RecordingView({ signal }: { signal: LoadedSignal }) {
   const [t0, t1] = zoom ?? [0, duration];
   const set = (z: readonly [number, number] | null) => workbenchStore.getState().setSignalZoom(z);
   const mid = (t0 + t1) / 2;
+  const fixed = useCurrentFixedRun();
   return (
     <div className="pw-signal-body">
       <div className="pw-signal-toolbar">
         <span className="pw-signal-legend">
           <span className="pw-key pw-key-input" aria-hidden="true" /> recording
           <span className="pw-key pw-key-output" aria-hidden="true" /> filtered
+          {fixed ? (
+            <>
+              <span className="pw-key pw-key-fixed" aria-hidden="true" /> fixed point
+            </>
+          ) : null}
         </span>
+        <FixedRunSwitch />
         <span className="pw-signal-zoom" role="group" aria-label="Time zoom">
           <button
             type="button"
@@ -47,9 +60,11 @@ export function RecordingView({ signal }: { signal: LoadedSignal }) {
           </button>
         </span>
       </div>
+      <FixedRunSummary />
       <div className="pw-chart-box" ref={box} title="Wheel zooms, drag pans, double-click shows all">
         <SignalChart width={width} height={height} signal={signal} />
       </div>
+      {fixed ? <DifferenceStrip signal={signal} difference={fixed.result.differenceLsb} /> : null}
     </div>
   );
 }

@@ -1,5 +1,6 @@
 /**
- * Before and after: the recording (faint) and the filtered recording (bold) against time in seconds, one
+ * Before and after: the recording (faint), the filtered recording (bold) and, when it has run, the
+ * fixed-point filter's output (thin, over it) against time in seconds, one
  * band per pixel column when the samples are dense. Wheel / drag / keys zoom and pan the time axis.
  */
 import { useId, useLayoutEffect, useMemo, useRef } from 'react';
@@ -14,6 +15,7 @@ import { linearTicks, spacedTicks } from '../chart/ticks.ts';
 import { useSettledRange } from '../chart/useSettledRange.ts';
 import { extentOf, tracePath, visibleSamples, type Frame } from './envelope.ts';
 import { useZoomGestures } from './useZoomGestures.ts';
+import { useCurrentFixedRun } from './fixedRecording.ts';
 
 /** Performance measure of one drag frame: filter pass to the plot's commit (before paint). */
 export const FRAME_MEASURE = 'pw-signal-frame';
@@ -38,6 +40,12 @@ export function SignalChart({
   signal: LoadedSignal;
 }) {
   const y = useWorkbench(selectSignalOutput);
+  const fixed = useCurrentFixedRun();
+  // Output codes stand for code·2^−(D−1)·G at the design's gain: drawn through a frame scaled by that factor.
+  const codeScale = fixed
+    ? 2 ** -(fixed.implementation.settings.dataWordLength - 1) * fixed.implementation.cascade.outputGain
+    : 1;
+  const codes = fixed?.result.output ?? null;
   const zoom = useWorkbench((s) => s.signal.zoom);
   const dragging = useWorkbench((s) => s.dragging);
   const svg = useRef<SVGSVGElement>(null);
@@ -57,10 +65,18 @@ export function SignalChart({
   }, [rect, t0, t1, fs, n]);
   const inputExtent = useMemo(() => extentOf(x, i0, i1), [x, i0, i1]);
   const outputExtent = useMemo(() => (y ? extentOf(y, i0, i1) : inputExtent), [y, i0, i1, inputExtent]);
+  const fixedExtent = useMemo(() => {
+    if (!codes) return outputExtent;
+    const [a, b] = extentOf(codes, i0, i1).map((v) => v * codeScale) as [number, number];
+    return [Math.min(a, b), Math.max(a, b)] as const;
+  }, [codes, codeScale, i0, i1, outputExtent]);
   const data = useMemo(
     () =>
-      [Math.min(inputExtent[0], outputExtent[0], 0), Math.max(inputExtent[1], outputExtent[1], 0)] as const,
-    [inputExtent, outputExtent],
+      [
+        Math.min(inputExtent[0], outputExtent[0], fixedExtent[0], 0),
+        Math.max(inputExtent[1], outputExtent[1], fixedExtent[1], 0),
+      ] as const,
+    [inputExtent, outputExtent, fixedExtent],
   );
   const wanted = useMemo(() => {
     const size = Math.max(Math.abs(data[0]), Math.abs(data[1]), 1e-12);
@@ -75,6 +91,10 @@ export function SignalChart({
   }, [rect, t0, t1, fs, range]);
   const inputPath = useMemo(() => tracePath(x, frame), [x, frame]);
   const outputPath = useMemo(() => (y ? tracePath(y, frame) : null), [y, frame]);
+  const fixedPath = useMemo(
+    () => (codes ? tracePath(codes, { ...frame, ky: frame.ky * codeScale }) : null),
+    [codes, codeScale, frame],
+  );
 
   // Seconds throughout, however far zoomed in: ticks carry as many decimals as their step needs.
   const unit = { unit: 's', factor: 1 } as const;
@@ -149,6 +169,13 @@ export function SignalChart({
             className={`pw-signal-output${outputPath.band ? ' pw-band' : ''}`}
             data-testid="signal-output-trace"
             d={outputPath.d}
+          />
+        ) : null}
+        {fixedPath ? (
+          <path
+            className={`pw-signal-fixed${fixedPath.band ? ' pw-band' : ''}`}
+            data-testid="signal-fixed-trace"
+            d={fixedPath.d}
           />
         ) : null}
       </g>

@@ -1,6 +1,7 @@
 /**
- * The filtered recording as files: WAV in the input's sample format (or another), and CSV with a time
- * column. Built as Blobs (CSV in slices, so ten minutes of samples never become one giant string).
+ * The filtered recording as files: WAV in the input's sample format (or another), and CSV with time, input
+ * and output columns; the fixed-point run's output codes as an integer WAV and as CSV of input and output
+ * codes. Built as Blobs (CSV in slices, so ten minutes of samples never become one giant string).
  */
 import {
   csvHeaderLine,
@@ -11,6 +12,12 @@ import {
   type SampleFormat,
 } from '../../core/signal/index.ts';
 import type { LoadedSignal } from '../../store/signal.ts';
+import {
+  containerBits,
+  containerFormat,
+  quantizeValue,
+  type Implementation,
+} from '../../core/fixed/index.ts';
 
 /** Rows per CSV slice. */
 export const CSV_SLICE_ROWS = 1 << 16;
@@ -39,15 +46,72 @@ export function filteredWav(
   return { blob: new Blob([bytes as BlobPart], { type: 'audio/wav' }), notes };
 }
 
-/** A CSV file: time in seconds and the filtered samples, one row per sample. */
-export function filteredCsv(samples: Float64Array, sampleRate: number, startTime = 0): Blob {
-  const parts: string[] = [csvHeaderLine(['time_s', 'filtered'])];
+/** A CSV file: time in seconds, the recording and the filtered samples, one row per sample. */
+export function filteredCsv(
+  input: Float64Array,
+  samples: Float64Array,
+  sampleRate: number,
+  startTime = 0,
+): Blob {
+  const parts: string[] = [csvHeaderLine(['time_s', 'input', 'filtered'])];
   for (let first = 0; first < samples.length; first += CSV_SLICE_ROWS) {
     const count = Math.min(CSV_SLICE_ROWS, samples.length - first);
     const t = sampleTimes(first, count, sampleRate, startTime);
-    parts.push(csvRows([t, samples.subarray(first, first + count)], 0, count));
+    const end = first + count;
+    parts.push(csvRows([t, input.subarray(first, end), samples.subarray(first, end)], 0, count));
   }
   return new Blob(parts, { type: 'text/csv' });
+}
+
+/**
+ * The fixed-point output codes as an integer WAV file: D-bit codes in the smallest integer format that holds
+ * them (8, 16, 24 or 32 bits), in its top D bits, so the file's samples are the same fractions of full scale.
+ */
+export function fixedWav(
+  codes: Int32Array,
+  sampleRate: number,
+  impl: Implementation,
+): { blob: Blob; notes: string[] } {
+  const d = impl.settings.dataWordLength;
+  const format = containerFormat(d);
+  const shift = 2 ** (containerBits(format) - d);
+  const rate = Math.max(1, Math.round(sampleRate));
+  const notes =
+    rate !== sampleRate
+      ? [`WAV stores whole hertz: the sample rate ${sampleRate} Hz was written as ${rate} Hz.`]
+      : [];
+  if (shift !== 1)
+    notes.push(
+      `The ${d}-bit codes fill the top ${d} bits of ${describeFormat(format)} samples (code × ${shift}).`,
+    );
+  const integers = shift === 1 ? codes : Int32Array.from(codes, (c) => c * shift);
+  const { bytes } = writeWav({ format, sampleRate: rate, channels: [], integers: [integers] });
+  return { blob: new Blob([bytes as BlobPart], { type: 'audio/wav' }), notes };
+}
+
+/** A CSV file of the fixed-point run: time in seconds, the input codes and the output codes, one row per sample. */
+export function fixedCsv(
+  input: Float64Array,
+  codes: Int32Array,
+  sampleRate: number,
+  impl: Implementation,
+  startTime = 0,
+): Blob {
+  const parts: string[] = [csvHeaderLine(['time_s', 'input_code', 'output_code'])];
+  const inCodes = new Int32Array(CSV_SLICE_ROWS);
+  for (let first = 0; first < codes.length; first += CSV_SLICE_ROWS) {
+    const count = Math.min(CSV_SLICE_ROWS, codes.length - first);
+    for (let i = 0; i < count; i++)
+      inCodes[i] = quantizeValue(input[first + i]!, impl.dataFormat, impl.settings.rounding).code;
+    const t = sampleTimes(first, count, sampleRate, startTime);
+    parts.push(csvRows([t, inCodes.subarray(0, count), codes.subarray(first, first + count)], 0, count));
+  }
+  return new Blob(parts, { type: 'text/csv' });
+}
+
+/** Name of a fixed-point export: the input's name without its extension, "-fixed", the new extension. */
+export function fixedExportName(signal: LoadedSignal, extension: 'wav' | 'csv'): string {
+  return exportName(signal, extension).replace(/-filtered\.(wav|csv)$/, `-fixed.${extension}`);
 }
 
 /** The export's file name: the input's name without its extension, "-filtered", the new extension. */
