@@ -18,7 +18,7 @@ export function noiseLines(impl: Implementation, noise: RoundoffNoise = roundoff
     `round-off noise, predicted by the ${NOISE_MODEL}:`,
     `  total ${db(noise.powerDbfs)} dBFS at the cascade output (dB re a full-scale sine), ${noise.rmsLsb.toPrecision(3)} LSB rms` +
       `${Math.abs(noise.offsetLsb) >= 0.005 ? `, DC offset ${noise.offsetLsb.toPrecision(3)} LSB` : ''}`,
-    `  SNR ${db(noise.snrDb)} dB for a full-scale output sine, ${noise.effectiveBits.toFixed(1)} effective bits` +
+    `  SNR ${db(noise.snrDb)} dB for a full-scale input sine at the peak gain (output amplitude ${Math.min(1, noise.peakGain).toPrecision(3)}), ${noise.effectiveBits.toFixed(1)} effective bits` +
       `${noise.converged ? '' : ' (a path did not decay: poles on or very near the unit circle; a lower bound)'}`,
     `  per section, in cascade order: ${perSection} dBFS`,
   ];
@@ -42,6 +42,7 @@ export function noiseJson(impl: Implementation, noise: RoundoffNoise = roundoffN
     powerDbfs: f(noise.powerDbfs),
     rmsLsb: f(noise.rmsLsb),
     offsetLsb: f(noise.offsetLsb),
+    peakGain: f(noise.peakGain),
     snrFullScaleSineDb: f(noise.snrDb),
     effectiveBits: f(noise.effectiveBits),
     converged: noise.converged,

@@ -1,7 +1,8 @@
 /**
  * The same design and word lengths arranged every way the settings allow — section ordering, scaling norm
  * and structure — with the round-off noise each arrangement adds and the headroom it leaves, so the quietest
- * arrangement that does not overflow can be picked. Pairing, gain distribution, words, rounding and overflow
+ * arrangement that does not overflow can be picked. "Quietest" compares signal-to-noise ratios, not noise
+ * powers: a scaling that lowers the noise by lowering the signal inside the cascade is no quieter. Pairing, gain distribution, words, rounding and overflow
  * mode stay as set.
  *
  * Headroom is judged at every section output (the data word, full scale 1) from the norms of the partial
@@ -79,8 +80,9 @@ export function headroomOf(
 }
 
 /**
- * Every ordering × scaling × structure for the zpk under the settings, quietest first (equal noise keeps
- * the order ordering, scaling, structure). Arrangements whose settings do not apply are left out.
+ * Every ordering × scaling × structure for the zpk under the settings, quietest first: highest SNR for the
+ * loudest sine each delivers (see RoundoffNoise.snrDb; ties keep the order ordering, scaling, structure).
+ * Arrangements whose settings do not apply are left out.
  */
 export function compareArrangements(
   zpk: Zpk,
@@ -113,14 +115,21 @@ export function compareArrangements(
       }
     }
   }
-  return out.sort((a, b) => a.noise.power - b.noise.power);
+  return out.sort((a, b) => b.noise.snrDb - a.noise.snrDb);
 }
+
+/** SNRs this close count as equal when picking, so the arrangement in force is kept rather than a twin. */
+export const SNR_TIE_DB = 0.01;
 
 /**
  * The quietest stable arrangement whose accumulator is safe and whose headroom is at least `need` ('sine'
- * accepts 'any-input' too), or null when none is.
+ * accepts 'any-input' too), preferring the one in force among equals; null when none qualifies.
  */
 export function quietestSafe(list: readonly Arrangement[], need: 'any-input' | 'sine'): Arrangement | null {
   const fits = (h: Headroom) => h === 'any-input' || (need === 'sine' && h === 'sine');
-  return list.find((a) => a.stable && a.accumulatorSafe && fits(a.headroom)) ?? null;
+  const safe = list.filter((a) => a.stable && a.accumulatorSafe && fits(a.headroom));
+  const best = safe[0];
+  if (!best) return null;
+  const current = safe.find((a) => a.current);
+  return current && current.noise.snrDb >= best.noise.snrDb - SNR_TIE_DB ? current : best;
 }

@@ -45,6 +45,7 @@ export {
   headroomOf,
   accumulatorSafe,
   HEADROOM_TOLERANCE,
+  SNR_TIE_DB,
   ORDERINGS,
   SCALINGS,
   STRUCTURES,

@@ -51,7 +51,13 @@ export interface RoundoffNoise {
   rmsLsb: number;
   /** DC offset the means leave at the output, in LSBs. */
   offsetLsb: number;
-  /** Signal-to-noise ratio of a full-scale sine at the output (power 1/2) over this noise, dB. */
+  /** Peak gain of the scaled cascade, max |H(e^{iω})|/G: the largest output amplitude of a full-scale input sine. */
+  peakGain: number;
+  /**
+   * Signal-to-noise ratio, dB, of the loudest sine the cascade delivers without overflow: a full-scale input
+   * sine at the frequency of peak gain, its output amplitude min(1, peakGain). Comparable across scalings,
+   * which trade the signal's level inside the cascade against the noise.
+   */
   snrDb: number;
   /** (SNR − 1.76 dB) / 6.02 dB: the bits of an ideal quantizer with the same SNR (common practice). */
   effectiveBits: number;
@@ -118,7 +124,10 @@ export function roundoffNoise(impl: Implementation): RoundoffNoise {
   const offset = mean ? mean * sections.reduce((sum, s) => sum + s.dcGain, 0) : 0;
   const spread = variance ? variance * sections.reduce((sum, s) => sum + s.noiseGain, 0) : 0;
   const power = spread + offset * offset;
-  const snrDb = power > 0 ? 10 * Math.log10(0.5 / power) : Infinity;
+  const last = impl.cascade.sections.at(-1);
+  const peakGain = last ? 10 ** (last.cascadePeakDb / 20) : 1;
+  const signal = 0.5 * Math.min(1, peakGain) ** 2;
+  const snrDb = power > 0 ? 10 * Math.log10(signal / power) : Infinity;
   return {
     lsb: q,
     droppedBits: dropped,
@@ -129,6 +138,7 @@ export function roundoffNoise(impl: Implementation): RoundoffNoise {
     powerDbfs: meanSquareDbfs(power),
     rmsLsb: Math.sqrt(power) / q,
     offsetLsb: offset / q,
+    peakGain,
     snrDb,
     effectiveBits: (snrDb - 1.76) / 6.02,
     converged,

@@ -135,7 +135,9 @@ describe('round-off noise in the exports', () => {
     const total = new RegExp(`total ${noise.powerDbfs.toFixed(1)} dBFS`);
     const c = exportC(impl);
     expect(c.slice(0, c.indexOf('*/'))).toMatch(total);
-    expect(c).toMatch(new RegExp(`SNR ${noise.snrDb.toFixed(1)} dB for a full-scale output sine`));
+    expect(c).toMatch(
+      new RegExp(`SNR ${noise.snrDb.toFixed(1)} dB for a full-scale input sine at the peak gain`),
+    );
     expect(exportCsv(impl)).toMatch(new RegExp(`# +${total.source}`));
   });
 

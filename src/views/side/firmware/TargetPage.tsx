@@ -1,6 +1,6 @@
 /**
  * The "Target" page of the side column: taking the design to the hardware. Sections and structure, fixed
- * point and its effect (verdicts, shortest word), a bit-exact run, and the exports.
+ * point and its effect (verdicts, shortest word), round-off noise, a bit-exact run, and the exports.
  */
 import './firmware.css';
 import { TargetSwitch } from './TargetSwitch.tsx';
@@ -9,6 +9,7 @@ import { FixedPointPart } from './FixedPointPart.tsx';
 import { VerdictPart } from './VerdictPart.tsx';
 import { WordSearchPart } from './WordSearchPart.tsx';
 import { SimulationPart } from './SimulationPart.tsx';
+import { NoisePart } from './NoisePart.tsx';
 import { ExportPart } from './ExportPart.tsx';
 
 export function TargetPage() {
@@ -19,6 +20,7 @@ export function TargetPage() {
       <VerdictPart />
       <WordSearchPart />
       <SectionsPart />
+      <NoisePart />
       <SimulationPart />
       <ExportPart />
     </div>
