@@ -23,4 +23,8 @@ if (want('signal')) {
   const { benchSignal } = await import('./signal.ts');
   parts.push('## Real signals: 10 minutes at 48 kHz', '', await benchSignal(), '');
 }
+if (want('fixed')) {
+  const { benchFixed } = await import('./fixed.ts');
+  parts.push('## Fixed point: 10 minutes at 48 kHz', '', await benchFixed(), '');
+}
 console.log(parts.join('\n'));

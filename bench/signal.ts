@@ -61,7 +61,7 @@ async function stage<T>(
 }
 
 /** The command line filtering a 10-minute file in a child process: time and the child's peak RSS. */
-function cliRun(args: string[]): { ms: number; maxRssMb: number } {
+export function cliRun(args: string[]): { ms: number; maxRssMb: number } {
   const root = fileURLToPath(new URL('..', import.meta.url));
   const t0 = performance.now();
   const r = spawnSync('npx', ['tsx', 'bench/signal.ts', '--cli-child', ...args], {

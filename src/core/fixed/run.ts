@@ -12,7 +12,7 @@ import { createSectionFilter, runSectionFilter, type SectionFilterState } from '
 import type { Implementation } from './implementation.ts';
 import type { FixedCascade, OverflowEvent } from './kernel.ts';
 import { LIMIT_CYCLE_MAX_SAMPLES, zeroInputVerdict, type LimitCycleReport } from './limitCycle.ts';
-import { codeRange, quantizeValue } from './qformat.ts';
+import { codeRange } from './qformat.ts';
 import { fixedCascadeOf, MAX_OVERFLOW_EVENTS } from './simulate.ts';
 
 /** Running statistics of fixed-point output codes minus a float64 reference, in data-word LSBs. */
@@ -128,15 +128,29 @@ export class FixedRun {
     return this.n;
   }
 
-  /** Input values (full scale ±1) quantized to the data word by the settings' rounding, saturated. */
+  /**
+   * Input values (full scale ±1) quantized to the data word by the settings' rounding, saturated: the same
+   * codes as quantizeValue gives (floor, then compare the exact remainder with one half), without an object
+   * per sample.
+   */
   quantize(x: ArrayLike<number>): Int32Array {
     const codes = new Int32Array(x.length);
-    const { dataFormat, settings } = this.impl;
+    const scale = 2 ** (this.impl.settings.dataWordLength - 1);
+    const nearest = this.impl.settings.rounding === 'nearest';
+    const { min, max } = this;
+    let clipped = 0;
     for (let i = 0; i < x.length; i++) {
-      const q = quantizeValue(x[i]!, dataFormat, settings.rounding);
-      codes[i] = q.code;
-      if (q.saturated) this.clipped++;
+      const v = x[i]! * scale;
+      const low = Math.floor(v);
+      let c = nearest && v - low >= 0.5 ? low + 1 : low;
+      if (!(c >= min && c <= max)) {
+        // NaN stores 0, as quantizeValue's code does in an Int32Array.
+        c = c > max ? max : c < min ? min : 0;
+        clipped++;
+      }
+      codes[i] = c;
     }
+    this.clipped += clipped;
     return codes;
   }
 

@@ -5,6 +5,7 @@ import {
   DEFAULT_IMPLEMENTATION,
   detectLimitCycle,
   FixedRun,
+  quantizeInput,
   simulateFixed,
   type Implementation,
   type ImplementationSettings,
@@ -49,6 +50,17 @@ describe('FixedRun', () => {
       expect(() => run.pushValues([0])).toThrow(/finished/);
     });
   }
+
+  it('quantizes input values exactly as quantizeInput does (rounding, saturation, NaN)', () => {
+    for (const rounding of ['nearest', 'truncate'] as const) {
+      const impl = implement(hum, { rounding, dataWordLength: 12, accumulatorBits: 40 });
+      const x = Float64Array.of(0.5, -0.5, 1, -1, 2, -3, NaN, 1 / 4096, 1.5 / 2048, -1.5 / 2048, 0.99999);
+      const run = new FixedRun(impl);
+      const ref = quantizeInput(impl, x);
+      expect(Array.from(run.quantize(x))).toEqual(Array.from(ref.codes));
+      expect(run.report().inputClipped).toBe(ref.clipped);
+    }
+  });
 
   it('clamps codes outside the data word and counts them', () => {
     const run = new FixedRun(implement(hum, {}));
