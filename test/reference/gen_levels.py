@@ -8,6 +8,8 @@ for broadband content), so no samples are stored. Scenarios are our own: hum har
 import numpy as np
 from scipy import linalg, signal
 
+from fixture import Fixture, Tol
+
 
 def _record(case):
     n = np.arange(case["n"], dtype=float)
@@ -73,4 +75,21 @@ def fixtures():
             for b in bins
         ]
         out.append(entry)
-    return {"signal_levels": {"cases": out}}
+    return {
+        "signal_levels": Fixture(
+            {"cases": out},
+            tol=Tol(rel=0, why="the record's parameters, written in the generator"),
+            fields={
+                "cases.lstsq*": Tol(
+                    rel=1e-11,
+                    why="lstsq of 2k+1 well separated sinusoid columns (condition below 10) over np.cos samples: "
+                    "a few ulps per sample, summed over n",
+                ),
+                "cases.exactDft": Tol(
+                    rel=1e-11,
+                    abs=1e-15,
+                    why="rfft of n points: eps log2(n) sum|x| / n on the bin, relative to the smallest tone",
+                ),
+            },
+        )
+    }
