@@ -63,11 +63,14 @@ test.describe('recordings', () => {
     const typed = page.getByTestId('level-readout').getByRole('textbox');
     await typed.fill('50, 150');
     await typed.press('Enter');
-    // A steady tone leaves the filter scaled by |H| at its frequency; Welch reads before and after in the same bin.
+    // A steady tone leaves the filter scaled by |H| at its frequency; the levels are fitted at the tone itself.
     const at50 = await levelChange(page, 50);
     const at150 = await levelChange(page, 150);
-    expect(Math.abs(at50 - gainDb(design, 50))).toBeLessThan(0.3);
-    expect(Math.abs(at150 - gainDb(design, 150))).toBeLessThan(0.3);
+    expect(Math.abs(at50 - gainDb(design, 50))).toBeLessThan(0.1);
+    expect(Math.abs(at150 - gainDb(design, 150))).toBeLessThan(0.1);
+    await expect(page.getByTestId('level-method')).toContainText(
+      'least-squares fit of sinusoids (jointly, with a constant) over 0 s–10 s (20000 samples)',
+    );
     expect(at50).toBeLessThan(-30);
     await saveScreenshot(page, testInfo, 'signal-spectrum');
 

@@ -33,11 +33,18 @@ interface Column {
 
 /** Samples between exact re-evaluations of the rotating phasors (keeps their drift near one ulp). */
 const RESYNC = 1024;
+/** An angle this close to a multiple of 2π sums as exactly zero in the Dirichlet kernel (N·e^{i0}). */
+const ZERO_ANGLE = 1e-15;
+/**
+ * A pivot below this fraction of the normal matrix's largest diagonal means two columns are nearly the same
+ * sinusoid: the fit is refused rather than returned with amplitudes that noise would swing.
+ */
+const PIVOT_FLOOR = 1e-10;
 
 /** Σ_{n<N} e^{iαn} as [re, im]. */
 function dirichlet(alpha: number, n: number): [number, number] {
   const a = alpha - 2 * Math.PI * Math.round(alpha / (2 * Math.PI));
-  if (Math.abs(a) < 1e-15) return [n, 0];
+  if (Math.abs(a) < ZERO_ANGLE) return [n, 0];
   const mag = Math.sin((n * a) / 2) / Math.sin(a / 2);
   const ph = (a * (n - 1)) / 2;
   return [mag * Math.cos(ph), mag * Math.sin(ph)];
@@ -196,7 +203,7 @@ function solve(a: number[][], b: number[], singular: () => Error): number[] {
   for (let col = 0; col < m; col++) {
     let p = col;
     for (let r = col + 1; r < m; r++) if (Math.abs(a[r]![col]!) > Math.abs(a[p]![col]!)) p = r;
-    if (!(Math.abs(a[p]![col]!) > 1e-10 * scale)) throw singular();
+    if (!(Math.abs(a[p]![col]!) > PIVOT_FLOOR * scale)) throw singular();
     [a[col], a[p]] = [a[p]!, a[col]!];
     [b[col], b[p]] = [b[p]!, b[col]!];
     for (let r = col + 1; r < m; r++) {

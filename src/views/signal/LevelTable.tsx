@@ -5,7 +5,7 @@
  * tones over the whole recording) and readings near the noise floor are marked.
  */
 import { useId, useState } from 'react';
-import { selectLevelPlan, selectLevelTable } from '../../store/signalDerived.ts';
+import { selectLevelPlan, selectLevelTable, type LevelTableData } from '../../store/signalDerived.ts';
 import { LEVEL_FLOOR_MARGIN_DB, levelMethod } from '../../core/signal/index.ts';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import type { LevelChoice } from '../../store/signal.ts';
@@ -16,10 +16,24 @@ function db(x: number): string {
   return Number.isFinite(x) ? formatNumber(x, 3) : x < 0 ? '−∞' : '∞';
 }
 
+/** Whether a level is within LEVEL_FLOOR_MARGIN_DB of its noise floor. */
+function nearFloor(level: number | null, floor: number | null): boolean {
+  return level !== null && floor !== null && level - floor < LEVEL_FLOOR_MARGIN_DB;
+}
+
+/** Whether any reading of the table is near its noise floor. */
+function anyNearFloor(table: LevelTableData): boolean {
+  return (table.report?.readings ?? []).some(
+    (r, i) =>
+      nearFloor(r.beforeDb, table.floors[i]?.beforeDb ?? null) ||
+      nearFloor(r.afterDb, table.floors[i]?.afterDb ?? null),
+  );
+}
+
 /** A level, marked "~" when within LEVEL_FLOOR_MARGIN_DB of the noise floor there. */
 function LevelCell({ level, floor }: { level: number | null; floor: number | null }) {
   if (level === null) return <td>—</td>;
-  const near = floor !== null && level - floor < LEVEL_FLOOR_MARGIN_DB;
+  const near = nearFloor(level, floor);
   return (
     <td
       className={near ? 'pw-levels-floor' : undefined}
@@ -170,13 +184,7 @@ export function LevelTable() {
       )}
       <p className="pw-levels-note" data-testid="level-method">
         dB re amplitude 1 (dBFS for audio). {table?.report ? `${levelMethod(table.report)}.` : ''}
-        {table?.floors.some(
-          (f, i) =>
-            (readings?.[i] && readings[i]!.beforeDb - f.beforeDb < LEVEL_FLOOR_MARGIN_DB) ||
-            (f.afterDb !== null &&
-              readings?.[i]?.afterDb != null &&
-              readings[i]!.afterDb! - f.afterDb < LEVEL_FLOOR_MARGIN_DB),
-        )
+        {table && anyNearFloor(table)
           ? ` ~ within ${LEVEL_FLOOR_MARGIN_DB} dB of the noise floor: may read high.`
           : ''}
         {table?.shaped
