@@ -19,6 +19,10 @@ if (want('drag')) {
   const { benchDrag } = await import('./drag.ts');
   parts.push('## Scripted drag in headless Chromium', '', await benchDrag(), '');
 }
+if (want('cli')) {
+  const { benchCli } = await import('./cli.ts');
+  parts.push('## Command-line start-up', '', benchCli(), '');
+}
 if (want('signal')) {
   const { benchSignal } = await import('./signal.ts');
   parts.push('## Real signals: 10 minutes at 48 kHz', '', await benchSignal(), '');

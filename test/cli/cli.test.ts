@@ -128,7 +128,7 @@ describe('polewright errors', () => {
 
 describe('the installed bin', () => {
   const root = fileURLToPath(new URL('../..', import.meta.url));
-  it('npx polewright analyze runs from source with no build step', () => {
+  it('npx polewright analyze runs the bundled command line that npm ci built', () => {
     const out = execFileSync('npx', ['polewright', 'analyze', '--eq', EQ, '--fs', '1000', '--json'], {
       cwd: root,
       encoding: 'utf8',
@@ -136,7 +136,7 @@ describe('the installed bin', () => {
     expect(JSON.parse(out).stability.verdict).toBe('stable');
   });
   it('exits non-zero with the message on stderr', () => {
-    const r = spawnSync('node', ['bin/polewright.mjs', 'analyze', '--b', 'x'], {
+    const r = spawnSync('node', ['bin/polewright.cjs', 'analyze', '--b', 'x'], {
       cwd: root,
       encoding: 'utf8',
     });
