@@ -2,7 +2,7 @@
  * Axis ranges that follow the data without jitter: nice rounding, a dB floor below the peak, and hysteresis
  * (grow at once when the data leaves the range, shrink only when the data has become much smaller).
  */
-import { scaleLinear } from 'd3';
+import { scaleLinear } from 'd3-scale';
 
 export type Range = readonly [number, number];
 

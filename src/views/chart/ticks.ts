@@ -1,5 +1,5 @@
 /** Tick positions and labels for chart axes: linear (d3's nice steps) and log (decades with 2 and 5). */
-import { scaleLinear } from 'd3';
+import { scaleLinear } from 'd3-scale';
 import { formatNumber } from '../shared/format.ts';
 
 export interface Tick {

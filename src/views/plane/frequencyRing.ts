@@ -1,5 +1,5 @@
 /** The ring of frequency ticks round the unit circle: round values in Hz from DC to Nyquist. */
-import { ticks } from 'd3';
+import { ticks } from 'd3-array';
 
 export interface RingTick {
   hz: number;

@@ -2,7 +2,7 @@
  * The plane's mapping between z and screen pixels: one scale for both axes (circles stay round), centred on
  * view.planeCentre, showing at least view.planeSpan z units either side of it along the shorter side.
  */
-import { scaleLinear, type ScaleLinear } from 'd3';
+import { scaleLinear, type ScaleLinear } from 'd3-scale';
 
 export interface PlaneView {
   span: number;

@@ -2,7 +2,8 @@
  * Colours of the |H| shading: valleys lean to the zero colour, hills to the pole colour, 0 dB is paper.
  * Levels are banded so the shading reads like contour lines.
  */
-import { interpolateRgb, rgb } from 'd3';
+import { interpolateRgb } from 'd3-interpolate';
+import { rgb } from 'd3-color';
 
 /** Lowest and highest level the shading distinguishes, dB; beyond them the end colours hold. */
 export const SURFACE_DB_MIN = -60;
