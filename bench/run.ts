@@ -19,6 +19,10 @@ if (want('drag')) {
   const { benchDrag } = await import('./drag.ts');
   parts.push('## Scripted drag in headless Chromium', '', await benchDrag(), '');
 }
+if (want('bundle')) {
+  const { benchBundle } = await import('./bundle.ts');
+  parts.push('## Page bundle', '', benchBundle(), '');
+}
 if (want('cli')) {
   const { benchCli } = await import('./cli.ts');
   parts.push('## Command-line start-up', '', benchCli(), '');

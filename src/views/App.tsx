@@ -14,10 +14,12 @@ import { ScenarioNote } from './shell/ScenarioNote.tsx';
 import { SideColumn } from './side/SideColumn.tsx';
 import { TimePanel } from './time/TimePanel.tsx';
 import { useKeyboardShortcuts } from './useKeyboardShortcuts.ts';
+import { prefetchAfterFirstPaint } from './prefetch.ts';
 
 export function App() {
   useKeyboardShortcuts();
   useEffect(() => installTestProbe(workbenchStore), []);
+  useEffect(() => prefetchAfterFirstPaint(), []);
   return (
     <div className="pw-app">
       <Header />

@@ -4,7 +4,7 @@
  */
 import { memo, useEffect, useId, useRef, useState, type KeyboardEvent } from 'react';
 import { postNotice } from '../../share/notices.ts';
-import { savePicture, type PictureFormat } from './savePicture.ts';
+import type { PictureFormat } from './savePicture.ts';
 import { PICTURE_VIEWS, type PictureView } from './views.ts';
 import './pictures.css';
 
@@ -15,10 +15,13 @@ const ITEMS: { format: PictureFormat; label: string; hint: string }[] = [
 
 /** Downloads the picture, reporting a failure as a notice. */
 export function downloadPicture(view: PictureView, format: PictureFormat): Promise<void> {
-  return savePicture(view, format).then(
-    () => undefined,
-    (e: unknown) => void postNotice('error', `The picture could not be made: ${(e as Error).message}`),
-  );
+  // the picture writer loads on first use (prefetched after the first paint with the side pages)
+  return import('./savePicture.ts')
+    .then(({ savePicture }) => savePicture(view, format))
+    .then(
+      () => undefined,
+      (e: unknown) => void postNotice('error', `The picture could not be made: ${(e as Error).message}`),
+    );
 }
 
 /** Memoised: the panels around it re-render on every root move, the menu has nothing to redraw then. */

@@ -1,13 +1,21 @@
 /**
  * The side column's pages. Each feature adds its page here (one line); the stability banner stays above
- * them all. Order is the order of the tab bar.
+ * them all. Order is the order of the tab bar. Pages other than the first load their code when first opened
+ * (lazyView), prefetched once the first view is on screen (prefetchSidePages, called by SideColumn).
  */
 import type { ComponentType } from 'react';
-import { SignalPage } from '../signal/SignalPage.tsx';
 import { SystemPage } from './SystemPage.tsx';
-import { TargetPage } from './firmware/TargetPage.tsx';
-import { FilesPage } from './files/FilesPage.tsx';
-import { DesignPage } from './design/DesignPage.tsx';
+import { lazyView } from '../shared/lazyView.tsx';
+
+const design = lazyView('Design page', () => import('./design/DesignPage.tsx').then((m) => m.DesignPage));
+const target = lazyView('Target page', () => import('./firmware/TargetPage.tsx').then((m) => m.TargetPage));
+const signal = lazyView('Signal page', () => import('../signal/SignalPage.tsx').then((m) => m.SignalPage));
+const files = lazyView('Share page', () => import('./files/FilesPage.tsx').then((m) => m.FilesPage));
+
+/** Fetches every lazily loaded page's code (call after the first paint). */
+export function prefetchSidePages(): Promise<unknown> {
+  return Promise.allSettled([design, target, signal, files].map((p) => p.prefetch()));
+}
 
 export interface SidePage {
   id: string;
@@ -20,13 +28,13 @@ export interface SidePage {
 
 export const SIDE_PAGES: SidePage[] = [
   { id: 'system', label: 'System', title: 'Type a system, set the gain, read each root', Page: SystemPage },
-  { id: 'design', label: 'Design', title: 'Design from a requirement; edit the mask', Page: DesignPage },
-  { id: 'target', label: 'Target', title: 'Sections, fixed point, bit-exact run, export', Page: TargetPage },
+  { id: 'design', label: 'Design', title: 'Design from a requirement; edit the mask', Page: design.View },
+  { id: 'target', label: 'Target', title: 'Sections, fixed point, bit-exact run, export', Page: target.View },
   {
     id: 'signal',
     label: 'Signal',
     title: 'Open or make a recording, download it filtered',
-    Page: SignalPage,
+    Page: signal.View,
   },
-  { id: 'files', label: 'Share', title: 'Links, files, library, compare, pictures', Page: FilesPage },
+  { id: 'files', label: 'Share', title: 'Links, files, library, compare, pictures', Page: files.View },
 ];

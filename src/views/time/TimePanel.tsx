@@ -10,14 +10,19 @@ import { TimeControls } from './TimeControls.tsx';
 import { TimeReadout } from './TimeReadout.tsx';
 import { useEnvelope } from './useEnvelope.ts';
 import { RegionSwitch } from '../signal/RegionSwitch.tsx';
-import { SignalPanel } from '../signal/SignalPanel.tsx';
+import { lazyView } from '../shared/lazyView.tsx';
 import '../chart/chart.css';
 import './time.css';
+
+/** The recording tools load when first shown; prefetched after the first paint (App). */
+export const signalRegion = lazyView('recording view', () =>
+  import('../signal/SignalPanel.tsx').then((m) => m.SignalPanel),
+);
 
 /** The time region: the test inputs below, or a recording and its spectrum (src/views/signal). */
 export function TimePanel() {
   const region = useWorkbench((s) => s.signal.region);
-  return region === 'test' ? <TestInputPanel /> : <SignalPanel />;
+  return region === 'test' ? <TestInputPanel /> : <signalRegion.View />;
 }
 
 function TestInputPanel() {

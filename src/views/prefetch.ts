@@ -1,0 +1,24 @@
+/**
+ * The parts of the page that are not in the first view load on demand (lazyView, dynamic import); this
+ * fetches them once the first view has been painted, so opening one later shows it without a wait.
+ */
+import { prefetchSidePages } from './side/sideTabs.ts';
+import { signalRegion } from './time/TimePanel.tsx';
+
+function prefetchAll(): void {
+  void prefetchSidePages();
+  void signalRegion.prefetch();
+  void import('./pictures/savePicture.ts').catch(() => undefined); // retried when a picture is asked for
+}
+
+/** Schedules the prefetch after the next paint; returns a function that cancels it if it has not started. */
+export function prefetchAfterFirstPaint(): () => void {
+  let timer: ReturnType<typeof setTimeout> | undefined;
+  const frame = requestAnimationFrame(() => {
+    timer = setTimeout(prefetchAll, 0); // the frame callback runs before the paint; the timer after it
+  });
+  return () => {
+    cancelAnimationFrame(frame);
+    if (timer !== undefined) clearTimeout(timer);
+  };
+}
