@@ -1,12 +1,27 @@
+import { createHash } from 'node:crypto';
+import { realpathSync } from 'node:fs';
+import { cpus } from 'node:os';
 import { defineConfig } from '@playwright/test';
 import { CHROMIUM_ARGS, CHROMIUM_PATH } from './e2e/support/chromium.ts';
 
 /**
  * End-to-end tests drive Debian's Chromium (never a downloaded browser) against the production build
- * (`vite preview`). While developing, PW_DEV=1 serves the sources with `vite` instead and PW_PORT picks the
- * port, so several people can run their tests side by side.
+ * (`vite preview`), one server for the whole run. Tests run in parallel workers; each worker starts Chromium
+ * once and gives every test a fresh context (its own storage). One browser per worker rather than one for
+ * all: the clipboard belongs to the browser process, so tests that copy would race across workers, and a
+ * download's local path exists only in a browser started by the worker.
+ * PW_DEV=1 serves the sources with `vite` instead. The port is PW_PORT, or one derived from this checkout's
+ * path, so two checkouts run side by side without a setting and never share a server by accident (PW_REUSE=1
+ * reuses one already running on the port). PW_WORKERS sets the number of workers (default: CPUs, at least 2).
  */
-const port = Number(process.env.PW_PORT ?? 4173);
+function portForCheckout(): number {
+  const digest = createHash('sha256')
+    .update(realpathSync(import.meta.dirname))
+    .digest();
+  return 42000 + (digest.readUInt16BE(0) % 1000);
+}
+
+const port = Number(process.env.PW_PORT ?? portForCheckout());
 const server = process.env.PW_DEV ? 'npx vite' : 'npx vite preview';
 
 export default defineConfig({
@@ -14,7 +29,8 @@ export default defineConfig({
   outputDir: 'test-results',
   timeout: 60_000,
   retries: process.env.CI ? 1 : 0,
-  workers: 1,
+  fullyParallel: true,
+  workers: Number(process.env.PW_WORKERS ?? Math.max(2, cpus().length)),
   reporter: [['list']],
   use: {
     baseURL: `http://127.0.0.1:${port}`,
@@ -27,7 +43,7 @@ export default defineConfig({
   webServer: {
     command: `${server} --port ${port} --strictPort --host 127.0.0.1`,
     url: `http://127.0.0.1:${port}`,
-    reuseExistingServer: !process.env.CI,
+    reuseExistingServer: process.env.PW_REUSE === '1',
     timeout: 60_000,
   },
 });
