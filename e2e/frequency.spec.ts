@@ -11,7 +11,7 @@ import {
   showDelayPlot,
 } from './support/charts.ts';
 import { clickRoot } from './support/plane.ts';
-import type { Design } from '../src/store/design.ts';
+import type { Design } from '../src/core/model/design.ts';
 
 /**
  * |H(e^{jω})| of the design at f Hz, evaluated here from the roots (every conjugate and multiplicity) with

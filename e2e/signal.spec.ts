@@ -14,7 +14,7 @@ import { evalZpkAt } from '../src/core/response.ts';
 import { resolveGain } from '../src/core/gainRule.ts';
 import { zpkToSections } from '../src/core/system.ts';
 import { createSectionFilter, readWav, runSectionFilter } from '../src/core/signal/index.ts';
-import type { Design } from '../src/store/design.ts';
+import type { Design } from '../src/core/model/design.ts';
 import type { Zpk } from '../src/core/types.ts';
 
 function zpkOf(d: Design): Zpk {

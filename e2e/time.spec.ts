@@ -1,7 +1,7 @@
 import { test, expect } from '@playwright/test';
 import { openWorkbench, readDesign, saveScreenshot } from './support/app.ts';
 import { choose, hoverSample, readTime, timeCursor, timePanel } from './support/charts.ts';
-import type { Design } from '../src/store/design.ts';
+import type { Design } from '../src/core/model/design.ts';
 
 /**
  * h[0] of the design: with as many zeros as poles, H(z) = k·Π(1 − zᵢz⁻¹)/Π(1 − pᵢz⁻¹), so h[0] = k, and the

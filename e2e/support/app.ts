@@ -1,6 +1,6 @@
 /** Drivers for the workbench shell and side column in end-to-end tests. */
 import { expect, type Page, type TestInfo } from '@playwright/test';
-import type { Design } from '../../src/store/design.ts';
+import type { Design } from '../../src/core/model/design.ts';
 import type { Root } from '../../src/core/types.ts';
 
 /** Opens the page and waits until the workbench and its read-only probe are there. */

@@ -3,7 +3,7 @@
  * reload or a crashed tab loses nothing. Writes are throttled and bounded in size (the oldest undo steps go
  * first); a damaged entry is skipped with a warning and never stops the page.
  */
-import type { Design } from '../store/design.ts';
+import type { Design } from '../core/model/design.ts';
 import { HISTORY_LIMIT } from '../store/history.ts';
 import { fromDocument } from './document.ts';
 import { designJson } from './documentCache.ts';

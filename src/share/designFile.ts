@@ -2,7 +2,7 @@
  * Polewright design files: JSON in our own versioned schema (see README.md in this folder), validated on
  * the way in and migrated from older versions. Numbers are written so that they read back bitwise equal.
  */
-import type { Design } from '../store/design.ts';
+import type { Design } from '../core/model/design.ts';
 import { fromDocument, toDocument, type SharedDesign, type ShareResult } from './document.ts';
 import { stringifyExact } from './exactJson.ts';
 import { MAX_FILE_CHARS } from './schema/limits.ts';

@@ -1,6 +1,6 @@
 /** A design with the view settings that travel with it, and its conversion to and from the current document. */
 import type { ImplementationSettings } from '../core/fixed/index.ts';
-import type { Design } from '../store/design.ts';
+import type { Design } from '../core/model/design.ts';
 import { CURRENT_VERSION, readDocument, type CurrentDocument } from './schema/migrate.ts';
 import type { SharedView } from './schema/view.ts';
 

@@ -1,5 +1,5 @@
 /** Document JSON of designs, cached per design object (designs in the store are never mutated). */
-import type { Design } from '../store/design.ts';
+import type { Design } from '../core/model/design.ts';
 import { toDocument, type SharedDesign } from './document.ts';
 import { stringifyExact } from './exactJson.ts';
 

@@ -12,7 +12,7 @@ import { filterSections } from '../core/time.ts';
 import type { Zpk } from '../core/types.ts';
 import { readDesignFile, writeDesignFile } from '../share/designFile.ts';
 import { browserStorage, consoleWarn, type KeyValueStorage, type Warn } from '../share/storage.ts';
-import type { Design } from './design.ts';
+import type { Design } from '../core/model/design.ts';
 import { LOG_AXIS_MIN_FRACTION } from './derived.ts';
 import { memoLast } from './memo.ts';
 import type { ViewSettings } from './view.ts';

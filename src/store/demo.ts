@@ -1,6 +1,6 @@
 /** The design shown on first open: an invented scenario (see the README), built from hertz. */
 import type { Root } from '../core/types.ts';
-import type { Design } from './design.ts';
+import type { Design } from '../core/model/design.ts';
 import { maskFromNotchRequirement } from '../core/mask.ts';
 
 /** Half-width of the demo's hum stop regions, Hz. */

@@ -11,7 +11,7 @@ import { rootReadouts, type RootReadout } from '../core/readouts.ts';
 import { filterSections } from '../core/time.ts';
 import { makeImpulse, makeStep, makeSine, makeWhiteNoise } from '../core/signals.ts';
 import { closedFormResponseZpk, type ClosedForm } from '../core/closedForm.ts';
-import type { Design } from './design.ts';
+import type { Design } from '../core/model/design.ts';
 import type { ViewSettings } from './view.ts';
 import type { WorkbenchState } from './store.ts';
 import { memoLast } from './memo.ts';

@@ -13,7 +13,7 @@ import type { Result, Root } from '../core/types.ts';
 import { runDesigner, type DesignerSpec, type DesignResult } from '../core/design/index.ts';
 import * as masks from '../core/mask.ts';
 import type { MaskRegion, MaskRegionPatch, RegionEdge, RequirementMask } from '../core/mask.ts';
-import type { Design } from './design.ts';
+import type { Design } from '../core/model/design.ts';
 
 /** What happens to the mask when a designer runs. */
 export type DesignerMaskPolicy =

@@ -1,5 +1,5 @@
 /** Undo history of designs: every edit is one step; a gesture (a whole drag) is one step. */
-import type { Design } from './design.ts';
+import type { Design } from '../core/model/design.ts';
 
 /** Most steps kept; older ones are dropped. */
 export const HISTORY_LIMIT = 500;

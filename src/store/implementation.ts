@@ -14,7 +14,7 @@ import {
   type ImplementationSettings,
 } from '../core/fixed/index.ts';
 import type { InputError, Result } from '../core/types.ts';
-import type { Design } from './design.ts';
+import type { Design } from '../core/model/design.ts';
 
 /** Largest accumulator the automatic widening goes to, bits (the engine's limit). */
 const WIDEST_ACCUMULATOR = 64;

@@ -1,6 +1,6 @@
 /** Pure edits of a design's roots, used by the store's actions. */
 import type { Root } from '../core/types.ts';
-import { rootsOf, withRoots, type Design, type RootRef } from './design.ts';
+import { rootsOf, withRoots, type Design, type RootRef } from '../core/model/design.ts';
 
 /**
  * Smallest imaginary part a conjugate pair keeps while dragged onto the real axis: the pair stays a pair

@@ -6,7 +6,7 @@
 import { createStore, type StoreApi } from 'zustand/vanilla';
 import type { Root } from '../core/types.ts';
 import { demoDesign } from './demo.ts';
-import { emptyDesign, type Design, type GainRule, type RootRef, type TypedCoefficients } from './design.ts';
+import { emptyDesign, type Design, type GainRule, type RootRef, type TypedCoefficients } from '../core/model/design.ts';
 import { closeGesture, emptyHistory, recordEdit, type History } from './history.ts';
 import * as edits from './rootEdits.ts';
 import { defaultView, type ViewSettings, type ViewState } from './view.ts';

@@ -1,5 +1,5 @@
 /** View settings: how the panels show the design. None of this changes the filter. */
-import type { RootRef } from './design.ts';
+import type { RootRef } from '../core/model/design.ts';
 
 export type SnapMode = 'none' | 'circle' | 'real-axis' | 'radius' | 'frequency';
 export type TimeInput = 'impulse' | 'step' | 'sine' | 'noise';

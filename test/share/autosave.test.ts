@@ -10,7 +10,7 @@ import {
 } from '../../src/share/autosave.ts';
 import { memoryStorage } from '../../src/share/storage.ts';
 import { demoDesign } from '../../src/store/demo.ts';
-import { emptyDesign, type Design } from '../../src/store/design.ts';
+import { emptyDesign, type Design } from '../../src/core/model/design.ts';
 import { bitwiseDifference } from './arbitraries.ts';
 
 /** n distinct designs, each a little different from the last. */

@@ -9,7 +9,7 @@ import {
 } from '../../src/share/library.ts';
 import { memoryStorage } from '../../src/share/storage.ts';
 import { demoDesign } from '../../src/store/demo.ts';
-import { emptyDesign } from '../../src/store/design.ts';
+import { emptyDesign } from '../../src/core/model/design.ts';
 import { bitwiseDifference } from './arbitraries.ts';
 
 const quiet = () => {};

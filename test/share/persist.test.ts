@@ -4,7 +4,7 @@ import { encodeLink } from '../../src/share/link/index.ts';
 import { noticeStore } from '../../src/share/notices.ts';
 import { memoryStorage, type KeyValueStorage } from '../../src/share/storage.ts';
 import { demoDesign } from '../../src/store/demo.ts';
-import { emptyDesign } from '../../src/store/design.ts';
+import { emptyDesign } from '../../src/core/model/design.ts';
 import { installPersistence, type PersistEnv } from '../../src/store/persist.ts';
 import { createWorkbenchStore } from '../../src/store/store.ts';
 import { bitwiseDifference } from './arbitraries.ts';

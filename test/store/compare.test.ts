@@ -10,7 +10,7 @@ import {
   selectReferenceResponse,
   selectReferenceTimeOutput,
 } from '../../src/store/compare.ts';
-import type { Design } from '../../src/store/design.ts';
+import type { Design } from '../../src/core/model/design.ts';
 import { defaultView } from '../../src/store/view.ts';
 import { expectClose } from '../helpers/expectClose.ts';
 

@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import { createWorkbenchStore } from '../../src/store/store.ts';
-import { emptyDesign } from '../../src/store/design.ts';
+import { emptyDesign } from '../../src/core/model/design.ts';
 import { mergeDesignerPatch } from '../../src/store/designer.ts';
 import { selectDesignerStatus, selectMaskResult, selectZpk } from '../../src/store/derived.ts';
 import { responseAt } from '../../src/core/response.ts';

@@ -1,7 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import { createWorkbenchStore } from '../../src/store/store.ts';
 import { demoDesign } from '../../src/store/demo.ts';
-import { emptyDesign } from '../../src/store/design.ts';
+import { emptyDesign } from '../../src/core/model/design.ts';
 import type { DesignerSpec } from '../../src/core/design/index.ts';
 import { selectMaskResult, selectZpk } from '../../src/store/derived.ts';
 import { evaluateMask } from '../../src/core/mask.ts';

@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import { createWorkbenchStore } from '../../src/store/store.ts';
-import { emptyDesign } from '../../src/store/design.ts';
+import { emptyDesign } from '../../src/core/model/design.ts';
 
 describe('workbench store: edits and undo', () => {
   it('a whole drag (many moves inside one gesture) is one undo step', () => {

@@ -12,7 +12,7 @@ import {
 } from '../../core/design/index.ts';
 import { evaluateMask, maskFromDesigner, type MaskResult } from '../../core/mask.ts';
 import { writeDesignFile } from '../../share/designFile.ts';
-import type { Design } from '../../store/design.ts';
+import type { Design } from '../../core/model/design.ts';
 import { UsageError, parseArgs, type ParsedArgs } from '../args.ts';
 import type { CliDesign } from '../designInput.ts';
 import { toJson } from '../json.ts';

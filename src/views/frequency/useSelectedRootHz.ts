@@ -1,6 +1,6 @@
 /** The selected root's frequency in Hz (its angle on the plane at the design's sample rate), or null. */
 import { useMemo } from 'react';
-import { rootsOf } from '../../store/design.ts';
+import { rootsOf } from '../../core/model/design.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 
 export function useSelectedRootHz(): { hz: number; kind: 'zero' | 'pole' } | null {

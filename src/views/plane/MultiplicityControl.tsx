@@ -1,6 +1,6 @@
 /** Multiplicity of the selected root: a number field with − and + buttons. */
 import { useEffect, useState } from 'react';
-import type { RootRef } from '../../store/design.ts';
+import type { RootRef } from '../../core/model/design.ts';
 import { MAX_MULTIPLICITY } from '../../store/rootEdits.ts';
 import { workbenchStore } from '../../store/useWorkbench.ts';
 

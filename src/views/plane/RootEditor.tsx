@@ -5,7 +5,7 @@
  */
 import { useEffect, useState, type FormEvent } from 'react';
 import type { Root } from '../../core/types.ts';
-import type { RootRef } from '../../store/design.ts';
+import type { RootRef } from '../../core/model/design.ts';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import { formatNumber } from '../shared/format.ts';
 import { MultiplicityControl } from './MultiplicityControl.tsx';

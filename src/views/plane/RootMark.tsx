@@ -1,6 +1,6 @@
 /** One drawn root: a circle (zero) or a cross (pole), with its selection, danger and multiplicity marks. */
 import { memo } from 'react';
-import type { RootKind } from '../../store/design.ts';
+import type { RootKind } from '../../core/model/design.ts';
 import { HIT_RADIUS_PX } from './rootHit.ts';
 
 /** Half-size of a marker, pixels. */

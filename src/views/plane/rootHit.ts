@@ -3,7 +3,7 @@
  * sitting just under a pole can still be grabbed by pressing on its own centre.
  */
 import type { Root } from '../../core/types.ts';
-import type { RootKind, RootRef } from '../../store/design.ts';
+import type { RootKind, RootRef } from '../../core/model/design.ts';
 import type { PlaneScale } from './geometry.ts';
 
 /** Radius round a marker's centre that a press may land in, pixels (generous for touch). */

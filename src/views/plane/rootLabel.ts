@@ -1,6 +1,6 @@
 /** Words that describe a root: its accessible name and a short caption. */
 import type { Root } from '../../core/types.ts';
-import type { RootKind } from '../../store/design.ts';
+import type { RootKind } from '../../core/model/design.ts';
 import { formatHz, formatNumber } from '../shared/format.ts';
 
 /** The root's frequency in Hz (its angle at sample rate fs, 0…fs/2). */

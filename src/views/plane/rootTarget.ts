@@ -1,5 +1,5 @@
 /** Finds which root (and whether its mirror) a DOM event landed on, from the data attributes of RootMark. */
-import type { RootRef } from '../../store/design.ts';
+import type { RootRef } from '../../core/model/design.ts';
 
 export interface RootTarget {
   ref: RootRef;

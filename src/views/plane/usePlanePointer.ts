@@ -4,7 +4,7 @@
  * most once per animation frame and the last one is always delivered.
  */
 import { useRef, type PointerEvent as ReactPointerEvent, type RefObject } from 'react';
-import type { RootKind, RootRef } from '../../store/design.ts';
+import type { RootKind, RootRef } from '../../core/model/design.ts';
 import { workbenchStore } from '../../store/useWorkbench.ts';
 import { frameCoalescer, type FrameCoalescer } from './frameCoalescer.ts';
 import { pixelToZ, type PlaneScale } from './geometry.ts';

@@ -3,7 +3,7 @@
  * selection, so a test can compare exact numbers without reading them off the screen. It exposes no
  * action, so nothing on the page can be changed through it; it is installed in every build.
  */
-import type { Design, RootRef } from '../../store/design.ts';
+import type { Design, RootRef } from '../../core/model/design.ts';
 import type { WorkbenchStore } from '../../store/store.ts';
 
 export interface PolewrightProbe {

@@ -1,6 +1,6 @@
 /** Load the demo design or start from an empty one; each is one undo step, so nothing is lost. */
 import { demoDesign } from '../../store/demo.ts';
-import { emptyDesign } from '../../store/design.ts';
+import { emptyDesign } from '../../core/model/design.ts';
 import { workbenchStore } from '../../store/useWorkbench.ts';
 
 export function DesignButtons() {

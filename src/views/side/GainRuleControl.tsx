@@ -1,6 +1,6 @@
 /** The gain rule: 0 dB at DC, Nyquist, a frequency or the peak, or a fixed gain; shows the resolved k. */
 import { selectGain } from '../../store/derived.ts';
-import type { GainRule } from '../../store/design.ts';
+import type { GainRule } from '../../core/model/design.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 import { formatNumber } from '../shared/format.ts';
 import { NumberField } from '../shared/NumberField.tsx';

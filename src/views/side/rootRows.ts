@@ -1,6 +1,6 @@
 /** Rows of the root read-out table: the engine's read-outs with the store reference each row selects. */
 import type { RootReadout } from '../../core/readouts.ts';
-import type { RootRef } from '../../store/design.ts';
+import type { RootRef } from '../../core/model/design.ts';
 import { formatComplex, formatNumber } from '../shared/format.ts';
 
 export interface RootRow {

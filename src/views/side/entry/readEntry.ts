@@ -5,7 +5,7 @@
 import { parseSystem } from '../../../core/parse/index.ts';
 import { compressRoots, tfToZpk } from '../../../core/system.ts';
 import type { InputError, Root, Zpk } from '../../../core/types.ts';
-import { emptyDesign, type Design, type TypedCoefficients } from '../../../store/design.ts';
+import { emptyDesign, type Design, type TypedCoefficients } from '../../../core/model/design.ts';
 
 export interface EntryReading {
   zeros: Root[];

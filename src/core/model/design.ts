@@ -2,13 +2,13 @@
  * The design: the source of truth of the workbench. Roots are stored once (a complex root with im > 0
  * implies its conjugate), coefficients a user typed are kept exactly until a root is edited.
  */
-import type { Root } from '../core/types.ts';
-import type { GainRule } from '../core/gainRule.ts';
-import type { DesignerSpec } from '../core/design/index.ts';
-import type { RequirementMask } from '../core/mask.ts';
-import type { ImplementationSettings } from '../core/fixed/index.ts';
+import type { Root } from '../types.ts';
+import type { GainRule } from '../gainRule.ts';
+import type { DesignerSpec } from '../design/index.ts';
+import type { RequirementMask } from '../mask.ts';
+import type { ImplementationSettings } from '../fixed/index.ts';
 
-export type { GainRule } from '../core/gainRule.ts';
+export type { GainRule } from '../gainRule.ts';
 
 /** Coefficients exactly as the user typed them, with the text they came from. */
 export interface TypedCoefficients {
