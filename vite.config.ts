@@ -1,6 +1,6 @@
 import { defineConfig } from 'vite';
 import react from '@vitejs/plugin-react';
-import { contentSecurityPolicy } from './src/share/csp.ts';
+import { contentSecurityPolicy } from './build/csp.ts';
 
 export default defineConfig({
   plugins: [react(), contentSecurityPolicy()],

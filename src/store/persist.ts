@@ -6,7 +6,7 @@
 import { createAutosaver, loadSession, type Session, type Timers } from '../share/autosave.ts';
 import { designJson } from '../share/documentCache.ts';
 import { decodeLink } from '../share/link/index.ts';
-import { postNotice } from '../share/notices.ts';
+import { postNotice } from './notices.ts';
 import { pickSharedView } from '../share/schema/view.ts';
 import { browserStorage, consoleWarn, type KeyValueStorage, type Warn } from '../share/storage.ts';
 import type { WorkbenchStore } from './store.ts';

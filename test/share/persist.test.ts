@@ -1,7 +1,7 @@
 import { beforeEach, describe, expect, it } from 'vitest';
 import { AUTOSAVE_KEY, saveSession } from '../../src/share/autosave.ts';
 import { encodeLink } from '../../src/share/link/index.ts';
-import { noticeStore } from '../../src/share/notices.ts';
+import { noticeStore } from '../../src/store/notices.ts';
 import { memoryStorage, type KeyValueStorage } from '../../src/share/storage.ts';
 import { demoDesign } from '../../src/store/demo.ts';
 import { emptyDesign } from '../../src/core/model/design.ts';

@@ -3,7 +3,7 @@
  * (2× image, for slides and chat). Keyboard: Enter/Space/↓ opens, ↑/↓ move, Esc closes.
  */
 import { memo, useEffect, useId, useRef, useState, type KeyboardEvent } from 'react';
-import { postNotice } from '../../share/notices.ts';
+import { postNotice } from '../../store/notices.ts';
 import type { PictureFormat } from './savePicture.ts';
 import { PICTURE_VIEWS, type PictureView } from './views.ts';
 import './pictures.css';

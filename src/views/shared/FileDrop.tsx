@@ -4,7 +4,7 @@
  * design as it was.
  */
 import { useEffect, useRef, useState } from 'react';
-import { postNotice } from '../../share/notices.ts';
+import { postNotice } from '../../store/notices.ts';
 import { openShared } from '../side/files/openShared.ts';
 import { readDesignBlob } from '../side/files/readFile.ts';
 import './fileDrop.css';

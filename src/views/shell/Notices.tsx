@@ -6,7 +6,7 @@
 import './notices.css';
 import { useEffect, useState } from 'react';
 import { useStore } from 'zustand';
-import { dismissNotice, noticeStore, type Notice } from '../../share/notices.ts';
+import { dismissNotice, noticeStore, type Notice } from '../../store/notices.ts';
 
 /** How long an information notice stays, ms. */
 export const INFO_NOTICE_MS = 8000;
