@@ -4,12 +4,13 @@
  * first); a damaged entry is skipped with a warning and never stops the page.
  */
 import type { Design } from '../core/model/design.ts';
-import { HISTORY_LIMIT } from '../store/history.ts';
+import { HISTORY_LIMIT } from '../core/model/limits.ts';
 import { fromDocument } from './document.ts';
 import { designJson } from './documentCache.ts';
 import { stringifyExact } from './exactJson.ts';
 import { readDocument } from './schema/migrate.ts';
-import { sharedView, type SharedView } from './schema/view.ts';
+import type { SharedView } from '../core/model/view.ts';
+import { sharedView } from './schema/view.ts';
 import { consoleWarn, type KeyValueStorage, type Warn } from './storage.ts';
 
 export const AUTOSAVE_KEY = 'polewright.session';

@@ -2,7 +2,7 @@
 import type { ImplementationSettings } from '../core/fixed/index.ts';
 import type { Design } from '../core/model/design.ts';
 import { CURRENT_VERSION, readDocument, type CurrentDocument } from './schema/migrate.ts';
-import type { SharedView } from './schema/view.ts';
+import type { SharedView } from '../core/model/view.ts';
 
 /**
  * The design with every optional part a link or file carries. Design declares `designer` and `mask`;

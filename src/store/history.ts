@@ -1,8 +1,6 @@
 /** Undo history of designs: every edit is one step; a gesture (a whole drag) is one step. */
 import type { Design } from '../core/model/design.ts';
-
-/** Most steps kept; older ones are dropped. */
-export const HISTORY_LIMIT = 500;
+import { HISTORY_LIMIT } from '../core/model/limits.ts';
 
 export interface History {
   past: Design[];

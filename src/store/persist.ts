@@ -7,7 +7,7 @@ import { createAutosaver, loadSession, type Session, type Timers } from '../shar
 import { designJson } from '../share/documentCache.ts';
 import { decodeLink } from '../share/link/index.ts';
 import { postNotice } from './notices.ts';
-import { pickSharedView } from '../share/schema/view.ts';
+import { pickSharedView } from '../core/model/view.ts';
 import { browserStorage, consoleWarn, type KeyValueStorage, type Warn } from '../share/storage.ts';
 import type { WorkbenchStore } from './store.ts';
 import { defaultView } from './view.ts';

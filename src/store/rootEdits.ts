@@ -1,15 +1,13 @@
 /** Pure edits of a design's roots, used by the store's actions. */
 import type { Root } from '../core/types.ts';
 import { rootsOf, withRoots, type Design, type RootRef } from '../core/model/design.ts';
+import { MAX_MULTIPLICITY } from '../core/model/limits.ts';
 
 /**
  * Smallest imaginary part a conjugate pair keeps while dragged onto the real axis: the pair stays a pair
  * (the user joins it into a double real root on purpose), and im > 0 keeps meaning "conjugate implied".
  */
 export const MIN_PAIR_IM = 1e-9;
-
-/** Largest multiplicity the editor accepts for one root. */
-export const MAX_MULTIPLICITY = 64;
 
 /** Moves a root: a real root stays on the real axis, a pair keeps im > 0 (its mirror follows). */
 export function moveRoot(design: Design, ref: RootRef, re: number, im: number): Design {

@@ -4,12 +4,12 @@
  * be hundreds of megabytes). Only the one channel being filtered is kept in memory.
  */
 import type { WindowName } from '../core/signal/index.ts';
-import type { ParsedSignal } from '../workers/parseSignal.ts';
+import type { ParsedSignal } from '../core/signal/parsedSignal.ts';
 
 /** What the time region shows: the built-in test inputs, the recording before/after, or its spectrum. */
 export type TimeRegion = 'test' | 'recording' | 'spectrum';
 
-/** A signal ready to filter: a file read by the worker (see ParsedSignal), or one made on the page. */
+/** A signal ready to filter: a file read by the worker (a ParsedSignal), or one made on the page. */
 export type LoadedSignal = Omit<ParsedSignal, 'source'> & { source: ParsedSignal['source'] | 'generated' };
 
 /** Welch settings of the spectrum view. */

@@ -6,7 +6,14 @@
 import { createStore, type StoreApi } from 'zustand/vanilla';
 import type { Root } from '../core/types.ts';
 import { demoDesign } from './demo.ts';
-import { emptyDesign, type Design, type GainRule, type RootRef, type TypedCoefficients } from '../core/model/design.ts';
+import {
+  emptyDesign,
+  type Design,
+  type GainRule,
+  type RootRef,
+  type TypedCoefficients,
+} from '../core/model/design.ts';
+import { MAX_SAMPLE_RATE } from '../core/model/limits.ts';
 import { closeGesture, emptyHistory, recordEdit, type History } from './history.ts';
 import * as edits from './rootEdits.ts';
 import { defaultView, type ViewSettings, type ViewState } from './view.ts';
@@ -67,9 +74,6 @@ export interface WorkbenchState
 }
 
 export type WorkbenchStore = StoreApi<WorkbenchState>;
-
-/** Largest sample rate accepted, Hz. */
-export const MAX_SAMPLE_RATE = 1e9;
 
 /** Creates a store holding the given design (the demo design by default). */
 export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchStore {

@@ -1,26 +1,15 @@
-/** View settings: how the panels show the design. None of this changes the filter. */
+/**
+ * View settings: how the panels show the design. None of this changes the filter. The part that travels
+ * with a design (DocumentView) is defined with the design model in src/core/model/view.ts.
+ */
 import type { RootRef } from '../core/model/design.ts';
+import type { DocumentView } from '../core/model/view.ts';
 
 export type SnapMode = 'none' | 'circle' | 'real-axis' | 'radius' | 'frequency';
-export type TimeInput = 'impulse' | 'step' | 'sine' | 'noise';
 
-export interface ViewSettings {
-  /** Frequency view. */
-  magnitudeScale: 'db' | 'linear';
-  phaseMode: 'wrapped' | 'unwrapped';
-  delayUnit: 'samples' | 'ms';
-  frequencyAxis: 'linear' | 'log';
-  /** Number of frequency points on [0, fs/2]. */
-  responsePoints: number;
+export interface ViewSettings extends DocumentView {
   /** Hold the frequency-view axes still while dragging. */
   holdScale: boolean;
-  /** Time view. */
-  timeInput: TimeInput;
-  /** Sinusoid frequency for the time view, Hz. */
-  sineHz: number;
-  timeSamples: number;
-  timeStyle: 'stems' | 'line';
-  noiseSeed: number;
   /** Z-plane. */
   snap: SnapMode;
   /** Radius used by the 'radius' snap. */

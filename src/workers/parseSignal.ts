@@ -10,8 +10,8 @@ import {
   WavDecoder,
   sampleRateOfStep,
   timingNote,
-  type SampleFormat,
 } from '../core/signal/index.ts';
+import type { ParsedSignal } from '../core/signal/parsedSignal.ts';
 import { GrowableSamples } from './growable.ts';
 
 /** Bytes read per step: large enough to keep the overhead small, small enough for a lively progress bar. */
@@ -25,26 +25,6 @@ export interface ParseRequest {
   channel?: number;
   /** Sample rate in Hz for a CSV file without a time column. */
   sampleRate?: number;
-}
-
-/** A file read into one channel of samples. */
-export interface ParsedSignal {
-  /** File name (or, for a signal made on the page, its description). */
-  name: string;
-  source: 'wav' | 'csv';
-  /** Samples per second, Hz. */
-  sampleRate: number;
-  /** The channel being filtered, as numbers (WAV integers scaled to [-1, 1)). */
-  samples: Float64Array;
-  /** 0-based channel kept and how many the file has (1 for CSV). */
-  channel: number;
-  channelCount: number;
-  /** The WAV file's sample format (the export default), or null for text. */
-  format: SampleFormat | null;
-  /** Time of the first sample, s (a CSV time column may start anywhere). */
-  startTime: number;
-  /** What the reader noticed (a time column not quite even, a truncated file, ...). */
-  notes: string[];
 }
 
 /** A problem with the file, with the line (CSV) when there is one. */

@@ -1,10 +1,6 @@
 import { describe, it, expect } from 'vitest';
-import {
-  checkSamples,
-  checkSineHz,
-  TIME_SAMPLES_MAX,
-  TIME_SAMPLES_MIN,
-} from '../../src/views/time/bounds.ts';
+import { checkSamples, checkSineHz } from '../../src/views/time/bounds.ts';
+import { TIME_SAMPLES_MAX, TIME_SAMPLES_MIN } from '../../src/core/model/limits.ts';
 import { timeLayout, timeUnit } from '../../src/views/time/layout.ts';
 import { sampleAfterKey } from '../../src/views/time/sampleKeys.ts';
 

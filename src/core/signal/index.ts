@@ -8,6 +8,7 @@ export * from './wavWrite.ts';
 export * from './csvCells.ts';
 export * from './csvSignal.ts';
 export * from './csvWrite.ts';
+export type { ParsedSignal } from './parsedSignal.ts';
 export * from './generators.ts';
 export * from './pinkNoise.ts';
 export * from './sectionFilter.ts';

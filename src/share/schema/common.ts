@@ -1,6 +1,7 @@
 /** Zod pieces shared by every schema version: finite numbers, roots, gain rules, plain text. */
 import { z } from 'zod';
-import { MAX_MULTIPLICITY, MAX_ORDER, MAX_SAMPLE_RATE } from './limits.ts';
+import { MAX_MULTIPLICITY, MAX_SAMPLE_RATE } from '../../core/model/limits.ts';
+import { MAX_ORDER } from './limits.ts';
 
 // In the page, zod would probe `new Function` to compile fast validators; the page's CSP forbids eval and
 // the probe would log a violation. The interpreted path is fast enough for designs of bounded size. Node

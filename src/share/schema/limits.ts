@@ -1,14 +1,11 @@
 /**
  * Bounds on everything a design file, link or saved session may contain. They are checked before anything is
- * allocated or computed, so a hostile input costs at most a few milliseconds and a clear message.
+ * allocated or computed, so a hostile input costs at most a few milliseconds and a clear message. The
+ * workbench's own bounds (sample rate, multiplicity, view sizes) are in src/core/model/limits.ts.
  */
 
 /** Largest order of the zeros or of the poles (conjugates and multiplicities counted). */
 export const MAX_ORDER = 1024;
-/** Largest multiplicity of one stored root (the workbench's own limit). */
-export const MAX_MULTIPLICITY = 64;
-/** Largest sample rate, Hz (the workbench's own limit). */
-export const MAX_SAMPLE_RATE = 1e9;
 /** Longest design name, characters. */
 export const MAX_NAME_CHARS = 200;
 /** Longest design note or typed-coefficient text, characters. */
@@ -17,12 +14,6 @@ export const MAX_TEXT_CHARS = 20_000;
 export const MAX_FILE_CHARS = 2_000_000;
 /** Longest link fragment, characters (a full-order design with a long note fits in well under this). */
 export const MAX_LINK_CHARS = 200_000;
-/** Frequency points of the shared frequency view. */
-export const RESPONSE_POINTS_MIN = 16;
-export const RESPONSE_POINTS_MAX = 65_536;
-/** Samples of the shared time view (the time view's own bounds). */
-export const TIME_SAMPLES_MIN = 8;
-export const TIME_SAMPLES_MAX = 65_536;
 /** Most harmonics a harmonic-notch designer may list, and most edges of a band. */
 export const MAX_HARMONICS = 64;
 export const MAX_EDGES = 2;

@@ -1,27 +1,15 @@
-/** The view settings worth sharing with a design: how its responses are shown (not panning or snapping). */
+/** Zod schema of the view settings worth sharing with a design (how its responses are shown). */
 import { z } from 'zod';
-import type { ViewSettings } from '../../store/view.ts';
 import { finite } from './common.ts';
-import { RESPONSE_POINTS_MAX, RESPONSE_POINTS_MIN, TIME_SAMPLES_MAX, TIME_SAMPLES_MIN } from './limits.ts';
+import {
+  RESPONSE_POINTS_MAX,
+  RESPONSE_POINTS_MIN,
+  TIME_SAMPLES_MAX,
+  TIME_SAMPLES_MIN,
+} from '../../core/model/limits.ts';
+import type { SharedView } from '../../core/model/view.ts';
 
-/** Keys of ViewSettings that travel with a design in links, files and saved sessions. */
-export const SHARED_VIEW_KEYS = [
-  'magnitudeScale',
-  'phaseMode',
-  'delayUnit',
-  'frequencyAxis',
-  'responsePoints',
-  'timeInput',
-  'sineHz',
-  'timeSamples',
-  'timeStyle',
-  'noiseSeed',
-] as const satisfies readonly (keyof ViewSettings)[];
-
-export type SharedViewKey = (typeof SHARED_VIEW_KEYS)[number];
-/** The shared view settings; a missing key keeps the reader's own setting. */
-export type SharedView = Partial<Pick<ViewSettings, SharedViewKey>>;
-
+/** Schema of the shared view settings (SharedView in src/core/model/view.ts). */
 export const sharedView = z.object({
   magnitudeScale: z.enum(['db', 'linear']).exactOptional(),
   phaseMode: z.enum(['wrapped', 'unwrapped']).exactOptional(),
@@ -41,12 +29,3 @@ export const viewSchemaMatches: [Parsed] extends [SharedView]
     ? true
     : false
   : false = true;
-
-/** The shared part of full view settings, keeping only values that differ from `defaults` (shorter links). */
-export function pickSharedView(view: ViewSettings, defaults?: ViewSettings): SharedView {
-  const out: Record<string, unknown> = {};
-  for (const key of SHARED_VIEW_KEYS) {
-    if (!defaults || !Object.is(view[key], defaults[key])) out[key] = view[key];
-  }
-  return out as SharedView;
-}

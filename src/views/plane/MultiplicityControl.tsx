@@ -1,7 +1,7 @@
 /** Multiplicity of the selected root: a number field with − and + buttons. */
 import { useEffect, useState } from 'react';
 import type { RootRef } from '../../core/model/design.ts';
-import { MAX_MULTIPLICITY } from '../../store/rootEdits.ts';
+import { MAX_MULTIPLICITY } from '../../core/model/limits.ts';
 import { workbenchStore } from '../../store/useWorkbench.ts';
 
 interface Props {

@@ -1,5 +1,5 @@
 /** Reading and showing the sample rate in the header field. */
-import { MAX_SAMPLE_RATE } from '../../store/store.ts';
+import { MAX_SAMPLE_RATE } from '../../core/model/limits.ts';
 
 export type RateUnit = 'Hz' | 'kHz';
 

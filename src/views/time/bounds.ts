@@ -1,8 +1,5 @@
 /** Accepted values of the time view's number fields, and the messages shown for anything else. */
-
-/** Fewest and most samples the time view simulates (more would not redraw within a frame while dragging). */
-export const TIME_SAMPLES_MIN = 8;
-export const TIME_SAMPLES_MAX = 65536;
+import { TIME_SAMPLES_MAX, TIME_SAMPLES_MIN } from '../../core/model/limits.ts';
 
 export type Checked = { ok: true; value: number } | { ok: false; message: string };
 

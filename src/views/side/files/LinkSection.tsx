@@ -1,7 +1,7 @@
 /** "Link": copy a link that holds the whole design, with its length and a short confirmation. */
 import { useEffect, useMemo, useState } from 'react';
 import { encodeLink, linkUrl } from '../../../share/link/index.ts';
-import { pickSharedView } from '../../../share/schema/view.ts';
+import { pickSharedView } from '../../../core/model/view.ts';
 import { useWorkbench } from '../../../store/useWorkbench.ts';
 import { defaultView } from '../../../store/view.ts';
 import { copyText } from '../../shared/copyText.ts';

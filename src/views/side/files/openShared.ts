@@ -4,7 +4,7 @@
  */
 import type { SharedDesign } from '../../../share/document.ts';
 import { designJson } from '../../../share/documentCache.ts';
-import { pickSharedView } from '../../../share/schema/view.ts';
+import { pickSharedView } from '../../../core/model/view.ts';
 import { workbenchStore } from '../../../store/useWorkbench.ts';
 import { defaultView } from '../../../store/view.ts';
 

@@ -1,0 +1,22 @@
+/** A recording read from a WAV or CSV file into the one channel that is filtered. */
+import type { SampleFormat } from './sampleFormat.ts';
+
+/** A file read into one channel of samples. */
+export interface ParsedSignal {
+  /** File name (or, for a signal made on the page, its description). */
+  name: string;
+  source: 'wav' | 'csv';
+  /** Samples per second, Hz. */
+  sampleRate: number;
+  /** The channel being filtered, as numbers (WAV integers scaled to [-1, 1)). */
+  samples: Float64Array;
+  /** 0-based channel kept and how many the file has (1 for CSV). */
+  channel: number;
+  channelCount: number;
+  /** The WAV file's sample format (the export default), or null for text. */
+  format: SampleFormat | null;
+  /** Time of the first sample, s (a CSV time column may start anywhere). */
+  startTime: number;
+  /** What the reader noticed (a time column not quite even, a truncated file, ...). */
+  notes: string[];
+}
