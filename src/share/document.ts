@@ -1,18 +1,11 @@
 /** A design with the view settings that travel with it, and its conversion to and from the current document. */
-import type { ImplementationSettings } from '../core/fixed/index.ts';
 import type { Design } from '../core/model/design.ts';
 import { CURRENT_VERSION, readDocument, type CurrentDocument } from './schema/migrate.ts';
 import type { SharedView } from '../core/model/view.ts';
 
-/**
- * The design with every optional part a link or file carries. Design declares `designer` and `mask`;
- * `implementation` is added here until Design declares it too (then this is simply Design).
- */
-export type SharedDesignParts = Design & { implementation?: ImplementationSettings };
-
 /** What a link, a file or a library entry carries. */
 export interface SharedDesign {
-  design: SharedDesignParts;
+  design: Design;
   /** View settings worth sharing; missing keys keep the reader's own. */
   view: SharedView;
 }
@@ -41,7 +34,7 @@ export function toDocument(shared: SharedDesign): CurrentDocument {
 
 /** The design in a validated current-version document. */
 export function fromDocument(doc: CurrentDocument): SharedDesign {
-  const design: SharedDesignParts = {
+  const design: Design = {
     sampleRate: doc.sampleRate,
     zeros: doc.zeros,
     poles: doc.poles,
