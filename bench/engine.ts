@@ -3,11 +3,11 @@
  * triggers (roots → coefficients and sections → response at 2048 points → 1024-sample impulse response).
  */
 import type { Root, Zpk } from '../src/core/types.ts';
-import { zpkToTf, zpkToSections } from '../src/core/system.ts';
-import { frequencyGrid, responseZpk } from '../src/core/response.ts';
+import { zpkToTf, zpkToSections } from '../src/core/system/index.ts';
+import { frequencyGrid, responseZpk } from '../src/core/response/index.ts';
 import { stabilityOfZpk } from '../src/core/stability.ts';
-import { filterSections } from '../src/core/time.ts';
-import { makeImpulse } from '../src/core/signals.ts';
+import { filterSections } from '../src/core/time/filter.ts';
+import { makeImpulse } from '../src/core/time/inputs.ts';
 import { cell, timeMs } from './timing.ts';
 
 /** A stable design of the given (even) order: conjugate pole pairs inside the circle, zero pairs on it. */

@@ -2,8 +2,8 @@
  * Requirement-mask benchmark: judging a mask on the current roots, as the page does on every drag frame
  * (a pass band, a stop band and a band with both limits, MASK_GRID_POINTS each plus refinement).
  */
-import type { RequirementMask } from '../src/core/mask.ts';
-import { evaluateMask } from '../src/core/mask.ts';
+import type { RequirementMask } from '../src/core/mask/index.ts';
+import { evaluateMask } from '../src/core/mask/index.ts';
 import { benchDesign, dragSteps } from './engine.ts';
 import { cell, timeMs } from './timing.ts';
 

@@ -12,7 +12,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { createInterface } from 'node:readline';
 import { fileURLToPath, pathToFileURL } from 'node:url';
-import { findRoots, rootsBackwardError } from '../src/core/roots.ts';
+import { findRoots, rootsBackwardError } from '../src/core/roots/index.ts';
 import { polyFromRoots } from '../src/core/poly.ts';
 import type { Root } from '../src/core/types.ts';
 

@@ -5,7 +5,7 @@
  */
 import { expect, test, type Page } from '@playwright/test';
 import { resolveGain } from '../src/core/gainRule.ts';
-import { responseZpk } from '../src/core/response.ts';
+import { responseZpk } from '../src/core/response/index.ts';
 import type { Design } from '../src/core/model/design.ts';
 import { openWorkbench, readDesign } from './support/app.ts';
 import {

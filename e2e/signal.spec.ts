@@ -10,9 +10,9 @@ import {
   recordingPanel,
   showRegion,
 } from './support/signal.ts';
-import { evalZpkAt } from '../src/core/response.ts';
+import { evalZpkAt } from '../src/core/response/index.ts';
 import { resolveGain } from '../src/core/gainRule.ts';
-import { zpkToSections } from '../src/core/system.ts';
+import { zpkToSections } from '../src/core/system/index.ts';
 import { createSectionFilter, readWav, runSectionFilter } from '../src/core/signal/index.ts';
 import type { Design } from '../src/core/model/design.ts';
 import type { Zpk } from '../src/core/types.ts';

@@ -18,7 +18,7 @@ import {
 } from '../src/core/fixed/index.ts';
 import { readWav } from '../src/core/signal/index.ts';
 import { resolveGain } from '../src/core/gainRule.ts';
-import type { Design } from '../src/store/design.ts';
+import type { Design } from '../src/core/model/design.ts';
 
 /** The engine's implementation of the page's design under the settings in force. */
 function implementationOf(d: Design, settings: ImplementationSettings) {

@@ -4,7 +4,7 @@
  * with the engine (read through the page's read-only probe) to check what the page shows.
  */
 import { expect, type Locator, type Page } from '@playwright/test';
-import { magnitudeDbAt } from '../../src/core/mask.ts';
+import { magnitudeDbAt } from '../../src/core/mask/index.ts';
 import type { Zpk } from '../../src/core/types.ts';
 import { readDesign } from './app.ts';
 import { frequencyPanel } from './charts.ts';

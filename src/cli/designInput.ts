@@ -2,7 +2,7 @@
 import { existsSync, readFileSync } from 'node:fs';
 import type { TransferFunction, Zpk } from '../core/types.ts';
 import { parseCoefficients, parseDifferenceEquation, parseSystem } from '../core/parse/index.ts';
-import { tfToZpk, compressRoots } from '../core/system.ts';
+import { tfToZpk, compressRoots } from '../core/system/index.ts';
 import { resolveGain } from '../core/gainRule.ts';
 import { readSharedFile } from '../share/designFile.ts';
 import type { SharedDesign } from '../share/document.ts';

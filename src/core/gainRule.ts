@@ -1,6 +1,6 @@
 /** Gain rules: the overall gain k set directly, or chosen so that |H| = 1 (0 dB) at a stated place. */
 import type { Root, Zpk } from './types.ts';
-import { responseZpk, frequencyGrid, evalZpkAt } from './response.ts';
+import { responseZpk, frequencyGrid, evalZpkAt } from './response/index.ts';
 
 export type GainRule =
   | { kind: 'fixed'; value: number }

@@ -6,9 +6,9 @@
 import { useStore } from 'zustand';
 import { createStore, type StoreApi } from 'zustand/vanilla';
 import { resolveGain } from '../core/gainRule.ts';
-import { frequencyGrid, responseZpk, wrapPhase, type FrequencyResponse } from '../core/response.ts';
-import { zpkToSections } from '../core/system.ts';
-import { filterSections } from '../core/time.ts';
+import { frequencyGrid, responseZpk, wrapPhase, type FrequencyResponse } from '../core/response/index.ts';
+import { zpkToSections } from '../core/system/index.ts';
+import { filterSections } from '../core/time/filter.ts';
 import type { Zpk } from '../core/types.ts';
 import { readDesignFile, writeDesignFile } from '../share/designFile.ts';
 import { browserStorage, consoleWarn, type KeyValueStorage, type Warn } from '../share/storage.ts';
@@ -17,7 +17,7 @@ import { LOG_AXIS_MIN_FRACTION } from './derived.ts';
 import { memoLast } from './memo.ts';
 import type { ViewSettings } from './view.ts';
 // Pure engine calls that merge the root angles into a grid; it lives beside the design's own curve.
-import { refineAtRoots } from '../core/response.ts';
+import { refineAtRoots } from '../core/response/index.ts';
 
 export const REFERENCE_KEY = 'polewright.reference';
 

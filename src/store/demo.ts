@@ -1,7 +1,7 @@
 /** The design shown on first open: an invented scenario (see the README), built from hertz. */
 import type { Root } from '../core/types.ts';
 import type { Design } from '../core/model/design.ts';
-import { maskFromNotchRequirement } from '../core/mask.ts';
+import { maskFromNotchRequirement } from '../core/mask/index.ts';
 
 /** Half-width of the demo's hum stop regions, Hz. */
 export const DEMO_HUM_TOLERANCE_HZ = 0.02;

@@ -3,19 +3,19 @@
  * identity of its inputs (the design is immutable, so a new object means a change).
  */
 import type { Zpk, TransferFunction, Section } from '../core/types.ts';
-import { zpkToTf, zpkToSections } from '../core/system.ts';
-import { responseZpk, frequencyGrid, refineAtRoots, type FrequencyResponse } from '../core/response.ts';
+import { zpkToTf, zpkToSections } from '../core/system/index.ts';
+import { responseZpk, frequencyGrid, refineAtRoots, type FrequencyResponse } from '../core/response/index.ts';
 import { resolveGain, type ResolvedGain } from '../core/gainRule.ts';
 import { stabilityOfZpk, type Stability } from '../core/stability.ts';
 import { rootReadouts, type RootReadout } from '../core/readouts.ts';
-import { filterSections } from '../core/time.ts';
-import { makeImpulse, makeStep, makeSine, makeWhiteNoise } from '../core/signals.ts';
-import { closedFormResponseZpk, type ClosedForm } from '../core/closedForm.ts';
+import { filterSections } from '../core/time/filter.ts';
+import { makeImpulse, makeStep, makeSine, makeWhiteNoise } from '../core/time/inputs.ts';
+import { closedFormResponseZpk, type ClosedForm } from '../core/time/closedForm.ts';
 import type { Design } from '../core/model/design.ts';
 import type { ViewSettings } from './view.ts';
 import type { WorkbenchState } from './store.ts';
 import { memoLast } from './memo.ts';
-import { evaluateMask, type MaskResult } from '../core/mask.ts';
+import { evaluateMask, type MaskResult } from '../core/mask/index.ts';
 import { runDesigner, type DesignerSpec } from '../core/design/index.ts';
 import { differsFromDesigner } from './designer.ts';
 

@@ -11,8 +11,8 @@
  */
 import type { Result, Root } from '../core/types.ts';
 import { runDesigner, type DesignerSpec, type DesignResult } from '../core/design/index.ts';
-import * as masks from '../core/mask.ts';
-import type { MaskRegion, MaskRegionPatch, RegionEdge, RequirementMask } from '../core/mask.ts';
+import * as masks from '../core/mask/index.ts';
+import type { MaskRegion, MaskRegionPatch, RegionEdge, RequirementMask } from '../core/mask/index.ts';
 import type { Design } from '../core/model/design.ts';
 
 /** What happens to the mask when a designer runs. */

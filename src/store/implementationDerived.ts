@@ -18,11 +18,11 @@ import {
   type WordLengthSearch,
 } from '../core/fixed/index.ts';
 import { buildCascade, type Cascade } from '../core/sections/index.ts';
-import { refineAtRoots, type FrequencyResponse } from '../core/response.ts';
+import { refineAtRoots, type FrequencyResponse } from '../core/response/index.ts';
 import type { Stability } from '../core/stability.ts';
 import type { Result, Zpk } from '../core/types.ts';
 import { exportC, exportCsv, exportJson } from '../core/export/index.ts';
-import { evaluateMask, type MaskResult, type RequirementMask } from '../core/mask.ts';
+import { evaluateMask, type MaskResult, type RequirementMask } from '../core/mask/index.ts';
 import { memoLast } from './memo.ts';
 import { implementationOf } from './implementation.ts';
 import { selectResponse, selectZpk } from './derived.ts';

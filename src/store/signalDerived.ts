@@ -5,7 +5,7 @@
  * input's spectrum is computed once per signal and setting.
  */
 import type { Section, Zpk } from '../core/types.ts';
-import { responseZpk, type FrequencyResponse } from '../core/response.ts';
+import { responseZpk, type FrequencyResponse } from '../core/response/index.ts';
 import { rootReadouts } from '../core/readouts.ts';
 import {
   createSectionFilter,

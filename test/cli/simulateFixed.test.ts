@@ -11,10 +11,10 @@ import { join } from 'node:path';
 import { runCli } from '../helpers/cli.ts';
 import { compileFilter, requireToolchain } from '../helpers/cProgram.ts';
 import { readCsvSignal, readWav, writeWav } from '../../src/core/signal/index.ts';
-import { makeWhiteNoise } from '../../src/core/signals.ts';
+import { makeWhiteNoise } from '../../src/core/time/inputs.ts';
 import { writeSharedFile } from '../../src/share/designFile.ts';
 import { DEFAULT_IMPLEMENTATION } from '../../src/core/fixed/index.ts';
-import { tfToZpk } from '../../src/core/system.ts';
+import { tfToZpk } from '../../src/core/system/index.ts';
 
 beforeAll(() => requireToolchain('host'));
 

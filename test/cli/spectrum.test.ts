@@ -10,9 +10,9 @@ import { join } from 'node:path';
 import { runCli } from '../helpers/cli.ts';
 import { expectClose } from '../helpers/expectClose.ts';
 import { makeTones, measureLevels, readWav, welch, writeWav } from '../../src/core/signal/index.ts';
-import { makeWhiteNoise } from '../../src/core/signals.ts';
-import { filterSections } from '../../src/core/time.ts';
-import { tfToZpk, zpkToSections, compressRoots } from '../../src/core/system.ts';
+import { makeWhiteNoise } from '../../src/core/time/inputs.ts';
+import { filterSections } from '../../src/core/time/filter.ts';
+import { tfToZpk, zpkToSections, compressRoots } from '../../src/core/system/index.ts';
 
 const dir = mkdtempSync(join(tmpdir(), 'pw-spectrum-'));
 const path = (name: string) => join(dir, name);

@@ -8,10 +8,10 @@ import {
   formatClosedForm,
   type ClosedForm,
   type TimeInput,
-} from '../../src/core/closedForm.ts';
-import { filterSections, filterTf } from '../../src/core/time.ts';
+} from '../../src/core/time/closedForm.ts';
+import { filterSections, filterTf } from '../../src/core/time/filter.ts';
 import { zpkToTf } from '../../src/core/system/transferFunction.ts';
-import { makeImpulse, makeSine, makeStep, mulberry32 } from '../../src/core/signals.ts';
+import { makeImpulse, makeSine, makeStep, mulberry32 } from '../../src/core/time/inputs.ts';
 import { polyFromRoots } from '../../src/core/poly.ts';
 import type { Root, Section, TransferFunction, Zpk } from '../../src/core/types.ts';
 import { expectClose } from '../helpers/expectClose.ts';

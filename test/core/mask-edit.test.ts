@@ -8,7 +8,7 @@ import {
   MIN_LIMIT_GAP_DB,
   MIN_REGION_WIDTH_FRACTION,
   type RequirementMask,
-} from '../../src/core/mask.ts';
+} from '../../src/core/mask/index.ts';
 
 const FS = 1000;
 const mask: RequirementMask = {

@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { evaluateMask, maskFromDesigner, maskFromRequirement } from '../../src/core/mask.ts';
+import { evaluateMask, maskFromDesigner, maskFromRequirement } from '../../src/core/mask/index.ts';
 import { requirementMargin, runDesigner, type IirSpec } from '../../src/core/design/index.ts';
 import { expectClose } from '../helpers/expectClose.ts';
 

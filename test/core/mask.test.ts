@@ -10,10 +10,10 @@ import {
   sectionsSource,
   validateMask,
   type RequirementMask,
-} from '../../src/core/mask.ts';
-import { responseZpk, frequencyGrid, evalZpkAt } from '../../src/core/response.ts';
-import { zpkToSections } from '../../src/core/system.ts';
-import { mulberry32 } from '../../src/core/signals.ts';
+} from '../../src/core/mask/index.ts';
+import { responseZpk, frequencyGrid, evalZpkAt } from '../../src/core/response/index.ts';
+import { zpkToSections } from '../../src/core/system/index.ts';
+import { mulberry32 } from '../../src/core/time/inputs.ts';
 import { runDesigner } from '../../src/core/design/index.ts';
 import { expectClose } from '../helpers/expectClose.ts';
 

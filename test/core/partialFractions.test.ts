@@ -1,8 +1,12 @@
 import { describe, it, expect } from 'vitest';
-import { partialFractions, type Complex, type PartialFractions } from '../../src/core/partialFractions.ts';
+import {
+  partialFractions,
+  type Complex,
+  type PartialFractions,
+} from '../../src/core/time/partialFractions.ts';
 import { polyFromRoots, polyEvalComplex } from '../../src/core/poly.ts';
 import type { Root, TransferFunction } from '../../src/core/types.ts';
-import { mulberry32 } from '../../src/core/signals.ts';
+import { mulberry32 } from '../../src/core/time/inputs.ts';
 import { expectClose } from '../helpers/expectClose.ts';
 import { loadFixture } from '../helpers/fixtures.ts';
 

@@ -9,7 +9,7 @@ import {
   printRationalZ,
   printRationalZinv,
   printRoots,
-} from '../../src/core/print.ts';
+} from '../../src/core/print/index.ts';
 import type { Root, TransferFunction, Zpk } from '../../src/core/types.ts';
 import { expectClose } from '../helpers/expectClose.ts';
 

@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import { rootReadouts } from '../../src/core/readouts.ts';
-import { responseZpk } from '../../src/core/response.ts';
+import { responseZpk } from '../../src/core/response/index.ts';
 import type { Zpk } from '../../src/core/types.ts';
 import { expectClose } from '../helpers/expectClose.ts';
 

@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { surfaceLevelsDb, SURFACE_FLOOR_DB } from '../../src/core/response.ts';
+import { surfaceLevelsDb, SURFACE_FLOOR_DB } from '../../src/core/response/index.ts';
 import type { Zpk } from '../../src/core/types.ts';
 import { expectClose } from '../helpers/expectClose.ts';
 

@@ -7,8 +7,8 @@ import {
   responseSections,
   responseZpk,
   wrapPhase,
-} from '../../src/core/response.ts';
-import { zpkToSections } from '../../src/core/system.ts';
+} from '../../src/core/response/index.ts';
+import { zpkToSections } from '../../src/core/system/index.ts';
 import type { Root, Zpk } from '../../src/core/types.ts';
 import { expectClose } from '../helpers/expectClose.ts';
 import { loadFixture } from '../helpers/fixtures.ts';

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { EigenvalueDecomposition, Matrix } from 'ml-matrix';
-import { findRoots, rootsBackwardError } from '../../src/core/roots.ts';
+import { findRoots, rootsBackwardError } from '../../src/core/roots/index.ts';
 import { polyFromRoots } from '../../src/core/poly.ts';
 import type { Root } from '../../src/core/types.ts';
 import { loadFixture } from '../helpers/fixtures.ts';

@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { makeImpulse, makeSine, makeStep, makeWhiteNoise, mulberry32 } from '../../src/core/signals.ts';
+import { makeImpulse, makeSine, makeStep, makeWhiteNoise, mulberry32 } from '../../src/core/time/inputs.ts';
 import { expectClose } from '../helpers/expectClose.ts';
 
 describe('signals', () => {

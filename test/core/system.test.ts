@@ -9,8 +9,8 @@ import {
   tfToZpk,
   zpkToSections,
   zpkToTf,
-} from '../../src/core/system.ts';
-import { responseSections, responseZpk } from '../../src/core/response.ts';
+} from '../../src/core/system/index.ts';
+import { responseSections, responseZpk } from '../../src/core/response/index.ts';
 import { polyEvalComplex } from '../../src/core/poly.ts';
 import type { Root, Section, TransferFunction, Zpk } from '../../src/core/types.ts';
 import { expectClose } from '../helpers/expectClose.ts';

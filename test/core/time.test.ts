@@ -5,8 +5,8 @@ import {
   impulseResponse,
   sineResponse,
   stepResponse,
-} from '../../src/core/time.ts';
-import { makeSine } from '../../src/core/signals.ts';
+} from '../../src/core/time/filter.ts';
+import { makeSine } from '../../src/core/time/inputs.ts';
 import type { Section, TransferFunction } from '../../src/core/types.ts';
 import { expectClose } from '../helpers/expectClose.ts';
 import { loadFixture } from '../helpers/fixtures.ts';

@@ -1,6 +1,6 @@
 /** Designs and inputs the fixed-point tests share: hum notches, an elliptic low-pass, a band-pass, overflowing resonators. */
 import { designIir } from '../../src/core/design/index.ts';
-import { makeSine, makeWhiteNoise } from '../../src/core/signals.ts';
+import { makeSine, makeWhiteNoise } from '../../src/core/time/inputs.ts';
 import type { Zpk } from '../../src/core/types.ts';
 
 /** Notches at 50, 150, 250 Hz (fs 2 kHz) with poles 4 Hz wide: the hopper-scale demo. */

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { runDesigner } from '../../src/core/design/index.ts';
 import { DEFAULT_IMPLEMENTATION } from '../../src/core/fixed/index.ts';
-import { compressRoots } from '../../src/core/system.ts';
+import { compressRoots } from '../../src/core/system/index.ts';
 import type { SharedDesign } from '../../src/share/document.ts';
 import { toBase64Url, fromBase64Url } from '../../src/share/link/base64url.ts';
 import { ByteWriter } from '../../src/share/link/bytes.ts';

@@ -3,7 +3,7 @@ import { createWorkbenchStore } from '../../src/store/store.ts';
 import { emptyDesign } from '../../src/core/model/design.ts';
 import { mergeDesignerPatch } from '../../src/store/designer.ts';
 import { selectDesignerStatus, selectMaskResult, selectZpk } from '../../src/store/derived.ts';
-import { responseAt } from '../../src/core/response.ts';
+import { responseAt } from '../../src/core/response/index.ts';
 import type { DesignerSpec } from '../../src/core/design/index.ts';
 import { expectClose } from '../helpers/expectClose.ts';
 

@@ -4,7 +4,7 @@ import { demoDesign } from '../../src/store/demo.ts';
 import { emptyDesign } from '../../src/core/model/design.ts';
 import type { DesignerSpec } from '../../src/core/design/index.ts';
 import { selectMaskResult, selectZpk } from '../../src/store/derived.ts';
-import { evaluateMask } from '../../src/core/mask.ts';
+import { evaluateMask } from '../../src/core/mask/index.ts';
 import { expectClose } from '../helpers/expectClose.ts';
 
 /** Deterministic generator for the seeded moves (mulberry32). */

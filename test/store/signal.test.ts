@@ -13,8 +13,8 @@ import {
   selectSignalResponse,
 } from '../../src/store/signalDerived.ts';
 import { selectSections, selectZpk } from '../../src/store/derived.ts';
-import { responseZpk } from '../../src/core/response.ts';
-import { filterSections } from '../../src/core/time.ts';
+import { responseZpk } from '../../src/core/response/index.ts';
+import { filterSections } from '../../src/core/time/filter.ts';
 import { makeTones } from '../../src/core/signal/index.ts';
 import { expectClose } from '../helpers/expectClose.ts';
 

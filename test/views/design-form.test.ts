@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { runDesigner } from '../../src/core/design/index.ts';
-import { evaluateMask } from '../../src/core/mask.ts';
+import { evaluateMask } from '../../src/core/mask/index.ts';
 import { FAMILIES, KINDS, defaultForm, isClassical } from '../../src/views/side/design/designKinds.ts';
 import { formOf, readForm, readHarmonics } from '../../src/views/side/design/designForm.ts';
 import { errorField } from '../../src/views/side/design/designErrors.ts';
-import { maskFromDesigner } from '../../src/core/mask.ts';
+import { maskFromDesigner } from '../../src/core/mask/index.ts';
 import { describeDesigner } from '../../src/views/side/design/describe.ts';
 
 const RATES = [200, 1000, 2000, 8000, 48000];

@@ -3,8 +3,8 @@ import type { Zpk } from '../../src/core/types.ts';
 import { createWorkbenchStore } from '../../src/store/store.ts';
 import { selectZpk } from '../../src/store/derived.ts';
 import { readAt } from '../../src/views/frequency/readAt.ts';
-import { refineAtRoots, rootAngles } from '../../src/core/response.ts';
-import { responseZpk, frequencyGrid } from '../../src/core/response.ts';
+import { refineAtRoots, rootAngles } from '../../src/core/response/index.ts';
+import { responseZpk, frequencyGrid } from '../../src/core/response/index.ts';
 import { expectClose } from '../helpers/expectClose.ts';
 
 describe('readAt (exact values at the cross-hair)', () => {

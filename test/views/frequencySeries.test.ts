@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { frequencyGrid, responseZpk } from '../../src/core/response.ts';
+import { frequencyGrid, responseZpk } from '../../src/core/response/index.ts';
 import type { Zpk } from '../../src/core/types.ts';
 import { DB_FLOOR_BELOW_PEAK } from '../../src/views/chart/range.ts';
 import {

@@ -2,7 +2,7 @@
 import { describe, it, expect } from 'vitest';
 import { buildImplementation, DEFAULT_IMPLEMENTATION, simulateFixed } from '../../src/core/fixed/index.ts';
 import { readWav } from '../../src/core/signal/index.ts';
-import { makeWhiteNoise } from '../../src/core/signals.ts';
+import { makeWhiteNoise } from '../../src/core/time/inputs.ts';
 import { filteredCsv, fixedCsv, fixedWav } from '../../src/views/signal/exportSignal.ts';
 import { hum } from '../helpers/fixedDesigns.ts';
 

@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
-import { closedFormResponse, evaluateClosedForm } from '../../src/core/closedForm.ts';
-import { impulseResponse } from '../../src/core/time.ts';
+import { closedFormResponse, evaluateClosedForm } from '../../src/core/time/closedForm.ts';
+import { impulseResponse } from '../../src/core/time/filter.ts';
 import type { TransferFunction } from '../../src/core/types.ts';
 import { closedFormModes, type Mode } from '../../src/views/time/modes.ts';
 import { envelopeValues, envelopeWeights, fitEnvelopeWeight } from '../../src/views/time/envelope.ts';

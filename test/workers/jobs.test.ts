@@ -17,7 +17,7 @@ import {
   type FixedRecordingResult,
 } from '../../src/workers/fixedRecordingJob.ts';
 import { buildImplementation, DEFAULT_IMPLEMENTATION, simulateFixed } from '../../src/core/fixed/index.ts';
-import { makeWhiteNoise } from '../../src/core/signals.ts';
+import { makeWhiteNoise } from '../../src/core/time/inputs.ts';
 import { hum } from '../helpers/fixedDesigns.ts';
 
 const channels: MessageChannel[] = [];

@@ -1,6 +1,6 @@
 /** `polewright analyze`: roots, gain, coefficients, sections, stability and per-root read-outs. */
 import type { TransferFunction } from '../../core/types.ts';
-import { expandRoots, zpkToTf, zpkToSections } from '../../core/system.ts';
+import { expandRoots, zpkToTf, zpkToSections } from '../../core/system/index.ts';
 import { stabilityOfZpk } from '../../core/stability.ts';
 import { rootReadouts } from '../../core/readouts.ts';
 import { parseArgs } from '../args.ts';

@@ -10,7 +10,7 @@ import {
   type DesignResult,
   type IirFamily,
 } from '../../core/design/index.ts';
-import { evaluateMask, maskFromDesigner, type MaskResult } from '../../core/mask.ts';
+import { evaluateMask, maskFromDesigner, type MaskResult } from '../../core/mask/index.ts';
 import { writeDesignFile } from '../../share/designFile.ts';
 import type { Design } from '../../core/model/design.ts';
 import { UsageError, parseArgs, type ParsedArgs } from '../args.ts';

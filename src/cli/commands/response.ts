@@ -1,5 +1,5 @@
 /** `polewright response`: frequencies (Hz), magnitude (dB), unwrapped phase (rad), group delay (samples). */
-import { frequencyGrid, responseZpk } from '../../core/response.ts';
+import { frequencyGrid, responseZpk } from '../../core/response/index.ts';
 import { intFlag, parseArgs } from '../args.ts';
 import { DESIGN_FLAGS, readDesign } from '../designInput.ts';
 import { toJson } from '../json.ts';

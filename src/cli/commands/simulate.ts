@@ -5,9 +5,9 @@
  */
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
-import { filterSections } from '../../core/time.ts';
-import { makeImpulse, makeSine, makeStep } from '../../core/signals.ts';
-import { zpkToSections } from '../../core/system.ts';
+import { filterSections } from '../../core/time/filter.ts';
+import { makeImpulse, makeSine, makeStep } from '../../core/time/inputs.ts';
+import { zpkToSections } from '../../core/system/index.ts';
 import {
   SAMPLE_FORMATS,
   parseSampleFormat,

@@ -25,7 +25,7 @@ import {
   type WelchResult,
   type WindowName,
 } from '../../core/signal/index.ts';
-import { zpkToSections } from '../../core/system.ts';
+import { zpkToSections } from '../../core/system/index.ts';
 import { UsageError, intFlag, numberFlag, parseArgs, type ParsedArgs } from '../args.ts';
 import { DESIGN_FLAGS, readDesign, type CliDesign } from '../designInput.ts';
 import { choiceFlag } from '../implementationFlags.ts';

@@ -1,6 +1,6 @@
 /** Zeros/poles/gain of a single biquad given by its coefficients, by the quadratic formula. */
 import type { Zpk } from '../types.ts';
-import { quadraticRoots } from '../system.ts';
+import { quadraticRoots } from '../system/index.ts';
 
 /**
  * H(z) = (b0 + b1 z⁻¹ + b2 z⁻²)/(a0 + a1 z⁻¹ + a2 z⁻²) with b0, a0 ≠ 0 as zeros/poles/gain (gain b0/a0);

@@ -3,7 +3,7 @@
  * attenuation, found on a dense grid and then refined around the worst grid point, with their margins.
  */
 import type { Zpk } from '../types.ts';
-import { responseAt, responseZpk } from '../response.ts';
+import { responseAt, responseZpk } from '../response/index.ts';
 import { minimiseOnInterval } from './minimise.ts';
 import type { Requirement } from './requirement.ts';
 import { requirementRegions } from './requirement.ts';

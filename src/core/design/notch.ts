@@ -9,7 +9,7 @@
  * from memory; matches scipy.signal.iirnotch / iirpeak with Q = f0/B).
  */
 import type { Zpk } from '../types.ts';
-import { quadraticRoots } from '../system.ts';
+import { quadraticRoots } from '../system/index.ts';
 import { root } from './prototype.ts';
 
 /** Shared denominator roots and the gain g for centre f0 and −3 dB width B, both in Hz at sample rate fs. */

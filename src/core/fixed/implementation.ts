@@ -4,9 +4,9 @@
  */
 import type { Result, Root, Section, Zpk } from '../types.ts';
 import { buildCascade, type Cascade } from '../sections/index.ts';
-import { sectionsToZpk } from '../system.ts';
+import { sectionsToZpk } from '../system/index.ts';
 import { stabilityOfZpk, type Stability } from '../stability.ts';
-import { responseZpk, type FrequencyResponse } from '../response.ts';
+import { responseZpk, type FrequencyResponse } from '../response/index.ts';
 import { quantizeCascade, type QuantizedCoefficients } from './quantize.ts';
 import { qName, type QFormat } from './qformat.ts';
 import { validateSettings, type ImplementationSettings } from './settings.ts';

@@ -1,6 +1,6 @@
 /** How a design is implemented on the target: structure, word lengths, Q format, rounding, overflow, scaling. */
 import type { GainDistribution, ScalingNorm, SectionOrdering } from '../sections/index.ts';
-import type { SectionPairing } from '../system.ts';
+import type { SectionPairing } from '../system/index.ts';
 import type { InputError, Result } from '../types.ts';
 
 /** Direct form I (x and y delay lines per section) or transposed direct form II (two wide states per section). */

@@ -1,5 +1,5 @@
 /** Test inputs for the fixed-point simulation, described by kind so the page and the command line share them. */
-import { makeImpulse, makeSine, makeStep, makeWhiteNoise } from '../signals.ts';
+import { makeImpulse, makeSine, makeStep, makeWhiteNoise } from '../time/inputs.ts';
 
 /**
  * An input signal: amplitude is in data-word units (full scale 1; default 0.5, leaving headroom), a sine's

@@ -6,7 +6,7 @@ import type { Implementation } from './implementation.ts';
 import { makeArith } from './arith.ts';
 import { FixedCascade, type OverflowEvent } from './kernel.ts';
 import { quantizeValue } from './qformat.ts';
-import { filterSections } from '../time.ts';
+import { filterSections } from '../time/filter.ts';
 
 /** At most this many overflow events are listed (all are counted). */
 export const MAX_OVERFLOW_EVENTS = 1000;

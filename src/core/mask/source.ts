@@ -4,7 +4,7 @@
  * a sampled response only at its samples (between them the mask reads straight lines in dB).
  */
 import type { Section, Zpk } from '../types.ts';
-import { sectionsToZpk } from '../system.ts';
+import { sectionsToZpk } from '../system/index.ts';
 import { magnitudeDbReader, magnitudeDbZpk } from '../response/magnitude.ts';
 
 /** A magnitude response readable at frequencies in Hz. */

@@ -5,7 +5,7 @@
 import type { Root } from '../types.ts';
 import type { GainRule } from '../gainRule.ts';
 import type { DesignerSpec } from '../design/index.ts';
-import type { RequirementMask } from '../mask.ts';
+import type { RequirementMask } from '../mask/index.ts';
 import type { ImplementationSettings } from '../fixed/index.ts';
 
 export type { GainRule } from '../gainRule.ts';

@@ -12,8 +12,8 @@
  * The scaled cascade computes H(z)/outputGain; multiply its output by outputGain to get H exactly.
  */
 import type { Root, Section, Zpk } from '../types.ts';
-import { zpkToSections, sectionsToZpk } from '../system.ts';
-import type { SectionPairing } from '../system.ts';
+import { zpkToSections, sectionsToZpk } from '../system/index.ts';
+import type { SectionPairing } from '../system/index.ts';
 import { peakMagnitude } from './peak.ts';
 import { partialCascadeNorms } from './norms.ts';
 

@@ -4,7 +4,7 @@
  * output: |y| ≤ L1 always; L∞ bounds a sinusoid's amplitude; L2 bounds |y| for inputs of unit energy.
  */
 import type { Section } from '../types.ts';
-import { sectionsToZpk } from '../system.ts';
+import { sectionsToZpk } from '../system/index.ts';
 import { peakMagnitude } from './peak.ts';
 
 /**

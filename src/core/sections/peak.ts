@@ -1,7 +1,7 @@
 /** Peak magnitude of a cascade's frequency response, on a dense grid with the pole angles added. */
 import type { Section } from '../types.ts';
-import { responseSections } from '../response.ts';
-import { sectionsToZpk } from '../system.ts';
+import { responseSections } from '../response/index.ts';
+import { sectionsToZpk } from '../system/index.ts';
 
 /**
  * Evenly spaced points on [0, π] used to find a response peak. Peaks of sharp resonances sit at (or within a

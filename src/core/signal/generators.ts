@@ -3,7 +3,7 @@
  * noise, and mains hum with harmonics and slow drift. Every sample is computed from its index (no running
  * phase), so long signals do not drift and any stretch can be regenerated on its own.
  */
-import { makeWhiteNoise } from '../signals.ts';
+import { makeWhiteNoise } from '../time/inputs.ts';
 import { makePinkNoise } from './pinkNoise.ts';
 
 /** One tone a·cos(2π·f·t + phase). */

@@ -8,7 +8,7 @@
  */
 import type { Root, TransferFunction, Zpk } from '../types.ts';
 import { polyFromRoots } from '../poly.ts';
-import { findRoots } from '../roots.ts';
+import { findRoots } from '../roots/index.ts';
 import { rootCount } from './rootList.ts';
 
 /**

@@ -3,7 +3,7 @@
  * A conjugate pair of modes c·p^n + c̄·p̄^n is written in real form 2|c|·|p|^n·cos(∠p·n + ∠c); angles are
  * in radians (per sample for the frequency).
  */
-import type { ClosedForm, Term } from '../closedForm.ts';
+import type { ClosedForm, Term } from './closedForm.ts';
 
 /** Modes whose coefficient is below this fraction of the largest one are left out of the text. */
 export const NEGLIGIBLE_TERM_RATIO = 1e-12;

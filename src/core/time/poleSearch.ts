@@ -4,7 +4,7 @@
  * the root finder could not resolve), which is then reported as not converged rather than used silently.
  */
 import type { Root } from '../types.ts';
-import { findRoots } from '../roots.ts';
+import { findRoots } from '../roots/index.ts';
 import { polyFromRoots } from '../poly.ts';
 
 /**

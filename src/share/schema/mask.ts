@@ -1,6 +1,6 @@
 /** Zod schemas of the requirement mask (src/core/mask) and the implementation settings (src/core/fixed). */
 import { z } from 'zod';
-import type { RequirementMask } from '../../core/mask.ts';
+import type { RequirementMask } from '../../core/mask/index.ts';
 import type { ImplementationSettings } from '../../core/fixed/index.ts';
 import {
   MAX_ACCUMULATOR_BITS,

@@ -2,7 +2,7 @@
  * What the three frequency plots show for the current view settings: which response array, in which unit,
  * and the axis range the data asks for. Pure functions of the engine's FrequencyResponse.
  */
-import type { FrequencyResponse } from '../../core/response.ts';
+import type { FrequencyResponse } from '../../core/response/index.ts';
 import type { ViewSettings } from '../../store/view.ts';
 import { dbExtent, dbRange, finiteExtent, niceRange, steppedRange, type Range } from '../chart/range.ts';
 import { DEGREE_STEPS } from '../chart/ticks.ts';

@@ -3,7 +3,7 @@
  * engine (surfaceLevelsDb); this module schedules the work and keeps the arrays.
  */
 import type { Zpk } from '../../core/types.ts';
-import { surfaceLevelsDb } from '../../core/response.ts';
+import { surfaceLevelsDb } from '../../core/response/index.ts';
 
 export interface SurfaceRect {
   /** Real part at the left and right edges. */

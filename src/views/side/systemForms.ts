@@ -7,7 +7,7 @@ import {
   printRationalZinv,
   printRoots,
   type PrintOptions,
-} from '../../core/print.ts';
+} from '../../core/print/index.ts';
 import type { TransferFunction, Zpk } from '../../core/types.ts';
 
 export interface SystemForm {

@@ -4,7 +4,7 @@
  * thin marks at the read-out frequencies.
  */
 import { useId, useMemo } from 'react';
-import type { FrequencyResponse } from '../../core/response.ts';
+import type { FrequencyResponse } from '../../core/response/index.ts';
 import type { WelchResult } from '../../core/signal/index.ts';
 import { Axis } from '../chart/Axis.tsx';
 import { PlotFrame } from '../chart/PlotFrame.tsx';

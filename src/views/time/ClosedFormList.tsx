@@ -1,6 +1,6 @@
 /** The closed-form terms of the time response as a compact list, slowest mode first, or why there is none. */
 import { useMemo } from 'react';
-import { formatClosedForm } from '../../core/closedForm.ts';
+import { formatClosedForm } from '../../core/time/closedForm.ts';
 import { CLOSED_FORM_MAX_ORDER, selectClosedForm, selectOrder } from '../../store/derived.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 import { formatHz, formatNumber, formatSeconds } from '../shared/format.ts';

@@ -2,7 +2,7 @@
  * The decay envelope of the slowest pole: e[n] = rⁿ·Σₖ Cₖ·nᵏ drawn as centre ± e[n], where r is the largest
  * pole radius and Cₖ bounds the modes at that radius (|Σ cᵢ pᵢⁿ| ≤ rⁿ Σ|cᵢ| for poles of radius r).
  */
-import type { ClosedForm } from '../../core/closedForm.ts';
+import type { ClosedForm } from '../../core/time/closedForm.ts';
 
 /** Modes whose pole radius is within this relative distance of the largest count as "the slowest pole". */
 export const SAME_RADIUS_REL = 1e-6;

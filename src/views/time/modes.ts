@@ -2,7 +2,7 @@
  * The closed-form response as a list of real modes for display: each conjugate pair of terms c·pⁿ + c̄·p̄ⁿ
  * becomes A·rⁿ·cos(ωn + φ) with A = 2|c|, r = |p|, ω = ∠p, φ = ∠c; a real pole stays c·pⁿ. Slowest first.
  */
-import type { ClosedForm } from '../../core/closedForm.ts';
+import type { ClosedForm } from '../../core/time/closedForm.ts';
 import { NEGLIGIBLE_TERM_RATIO } from '../../core/time/closedFormText.ts';
 import { UNIT_CIRCLE_TOLERANCE } from '../../core/stability.ts';
 import { SAME_RADIUS_REL } from './envelope.ts';

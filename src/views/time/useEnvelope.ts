@@ -1,6 +1,6 @@
 /** The slowest pole's decay envelope for the time view, or the reason it is not drawn. */
 import { useMemo } from 'react';
-import { evalZpkAt } from '../../core/response.ts';
+import { evalZpkAt } from '../../core/response/index.ts';
 import {
   selectClosedForm,
   selectReadouts,

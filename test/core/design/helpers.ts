@@ -1,6 +1,6 @@
 /** Shared checks for designer tests: roots compared as sets, responses at frequencies in Hz. */
 import type { Root, Zpk } from '../../../src/core/types.ts';
-import { responseZpk } from '../../../src/core/response.ts';
+import { responseZpk } from '../../../src/core/response/index.ts';
 
 /** A complex number as the fixtures encode it. */
 export interface C {

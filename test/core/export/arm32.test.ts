@@ -16,7 +16,7 @@ import {
   type ImplementationSettings,
 } from '../../../src/core/fixed/index.ts';
 import { exportC } from '../../../src/core/export/index.ts';
-import { filterSections } from '../../../src/core/time.ts';
+import { filterSections } from '../../../src/core/time/filter.ts';
 import type { Zpk } from '../../../src/core/types.ts';
 import { compileFilter, requireToolchain } from '../../helpers/cProgram.ts';
 import { ellip, hot, overflowInputs } from '../../helpers/fixedDesigns.ts';

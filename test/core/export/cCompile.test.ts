@@ -13,8 +13,8 @@ import {
   type ImplementationSettings,
 } from '../../../src/core/fixed/index.ts';
 import { exportC } from '../../../src/core/export/index.ts';
-import { filterSections } from '../../../src/core/time.ts';
-import { mulberry32 } from '../../../src/core/signals.ts';
+import { filterSections } from '../../../src/core/time/filter.ts';
+import { mulberry32 } from '../../../src/core/time/inputs.ts';
 import type { Zpk } from '../../../src/core/types.ts';
 import { compileFilter, requireToolchain } from '../../helpers/cProgram.ts';
 import { butterBand, ellip, hot, hot64, hum, overflowInputs } from '../../helpers/fixedDesigns.ts';

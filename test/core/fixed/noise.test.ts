@@ -17,7 +17,7 @@ import {
   type Implementation,
   type ImplementationSettings,
 } from '../../../src/core/fixed/index.ts';
-import { makeSine, makeWhiteNoise } from '../../../src/core/signals.ts';
+import { makeSine, makeWhiteNoise } from '../../../src/core/time/inputs.ts';
 import type { Zpk } from '../../../src/core/types.ts';
 import { peakMagnitude } from '../../../src/core/sections/index.ts';
 import { butterBand, ellip, hum } from '../../helpers/fixedDesigns.ts';

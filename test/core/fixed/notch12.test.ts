@@ -4,7 +4,7 @@ import {
   DEFAULT_IMPLEMENTATION,
   quantizedResponse,
 } from '../../../src/core/fixed/index.ts';
-import { responseZpk } from '../../../src/core/response.ts';
+import { responseZpk } from '../../../src/core/response/index.ts';
 import type { Zpk } from '../../../src/core/types.ts';
 
 /** Hopper scale notches (invented scenario): zeros on the circle at 50/150/250 Hz, poles 4 Hz wide, fs 2 kHz. */

@@ -11,8 +11,8 @@ import {
   type ImplementationSettings,
 } from '../../../src/core/fixed/index.ts';
 import type { Zpk } from '../../../src/core/types.ts';
-import { tfToZpk } from '../../../src/core/system.ts';
-import { mulberry32, makeWhiteNoise } from '../../../src/core/signals.ts';
+import { tfToZpk } from '../../../src/core/system/index.ts';
+import { mulberry32, makeWhiteNoise } from '../../../src/core/time/inputs.ts';
 
 const settings = (over: Partial<ImplementationSettings> = {}): ImplementationSettings => ({
   ...DEFAULT_IMPLEMENTATION,

@@ -1,10 +1,10 @@
 import { describe, it, expect } from 'vitest';
 import type { Section, Zpk } from '../../../src/core/types.ts';
 import { buildCascade, partialCascadeNorms, peakMagnitude } from '../../../src/core/sections/index.ts';
-import { responseSections, responseZpk, frequencyGrid } from '../../../src/core/response.ts';
+import { responseSections, responseZpk, frequencyGrid } from '../../../src/core/response/index.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 import { loadFixture } from '../../helpers/fixtures.ts';
-import { tfToZpk } from '../../../src/core/system.ts';
+import { tfToZpk } from '../../../src/core/system/index.ts';
 
 interface NormCase {
   name: string;

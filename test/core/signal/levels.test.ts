@@ -13,10 +13,10 @@ import {
   ToneFitAccumulator,
   welch,
 } from '../../../src/core/signal/index.ts';
-import { makeWhiteNoise } from '../../../src/core/signals.ts';
-import { filterSections } from '../../../src/core/time.ts';
-import { zpkToSections } from '../../../src/core/system.ts';
-import { responseZpk } from '../../../src/core/response.ts';
+import { makeWhiteNoise } from '../../../src/core/time/inputs.ts';
+import { filterSections } from '../../../src/core/time/filter.ts';
+import { zpkToSections } from '../../../src/core/system/index.ts';
+import { responseZpk } from '../../../src/core/response/index.ts';
 import { loadFixture } from '../../helpers/fixtures.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 import { hum } from '../../helpers/fixedDesigns.ts';

@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import { createSectionFilter, resetSectionFilter, runSectionFilter } from '../../../src/core/signal/index.ts';
-import { filterSections, filterTf } from '../../../src/core/time.ts';
+import { filterSections, filterTf } from '../../../src/core/time/filter.ts';
 import type { Section } from '../../../src/core/types.ts';
 import { loadFixture } from '../../helpers/fixtures.ts';
 import { expectClose } from '../../helpers/expectClose.ts';

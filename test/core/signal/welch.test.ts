@@ -11,7 +11,7 @@ import {
   type SpectrumScaling,
   type WindowName,
 } from '../../../src/core/signal/index.ts';
-import { makeWhiteNoise } from '../../../src/core/signals.ts';
+import { makeWhiteNoise } from '../../../src/core/time/inputs.ts';
 import { loadFixture } from '../../helpers/fixtures.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 

@@ -5,7 +5,7 @@
  * pointer-only; the Design page's table edits the same numbers from the keyboard.
  */
 import { useMemo, useRef, useState, type PointerEvent } from 'react';
-import type { RegionEdge } from '../../../core/mask.ts';
+import type { RegionEdge } from '../../../core/mask/index.ts';
 import { useWorkbench, workbenchStore } from '../../../store/useWorkbench.ts';
 import { fromPixel, type AxisMap } from '../../chart/pixels.ts';
 import type { PlotRect } from '../layout.ts';

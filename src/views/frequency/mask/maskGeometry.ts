@@ -2,7 +2,7 @@
  * Where a requirement mask sits in the magnitude plot, in SVG pixels: each region's frequency span, its
  * limit lines and the forbidden zones beyond them (above an upper limit, below a lower one). Pure.
  */
-import type { MaskRegion, RegionEdge } from '../../../core/mask.ts';
+import type { MaskRegion, RegionEdge } from '../../../core/mask/index.ts';
 import { fromPixel, toPixel, type AxisMap } from '../../chart/pixels.ts';
 import type { PlotRect } from '../layout.ts';
 

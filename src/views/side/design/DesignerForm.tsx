@@ -24,7 +24,7 @@ import { readForm, type FieldErrors } from './designForm.ts';
 import { errorField, errorText } from './designErrors.ts';
 import { fieldLabel, pairNames } from './fieldLabels.ts';
 import { FormField, PairField } from './FormField.tsx';
-import { maskFromDesigner } from '../../../core/mask.ts';
+import { maskFromDesigner } from '../../../core/mask/index.ts';
 
 const GROUPS = [...new Set(KINDS.map((k) => k.group))];
 const PAIRS: Partial<Record<FieldKey, FieldKey>> = {

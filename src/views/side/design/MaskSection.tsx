@@ -3,12 +3,12 @@
  * buttons to add regions, to build the mask from the designer's requirement, and to remove it.
  */
 import { useMemo, useState } from 'react';
-import type { MaskRegion, MaskRegionKind, MaskRegionPatch } from '../../../core/mask.ts';
+import type { MaskRegion, MaskRegionKind, MaskRegionPatch } from '../../../core/mask/index.ts';
 import { selectDesignerStatus, selectMaskResult } from '../../../store/derived.ts';
 import { useWorkbench, workbenchStore } from '../../../store/useWorkbench.ts';
 import { MaskCell } from './MaskCell.tsx';
 import { maskVerdictText, regionVerdictText } from './maskText.ts';
-import { maskFromDesigner } from '../../../core/mask.ts';
+import { maskFromDesigner } from '../../../core/mask/index.ts';
 import { errorText } from './designErrors.ts';
 
 const store = () => workbenchStore.getState();

@@ -1,5 +1,5 @@
 /** Words for a mask verdict: pass or fail, the margin in dB and where it is smallest. */
-import type { MaskRegionResult, MaskResult } from '../../../core/mask.ts';
+import type { MaskRegionResult, MaskResult } from '../../../core/mask/index.ts';
 import { formatHz, formatNumber } from '../../shared/format.ts';
 
 /** "+0.19 dB at 100 Hz" / "−2.01 dB at 120 Hz" (a margin: positive inside the limits). */

@@ -2,7 +2,7 @@
 import type { DesignerSpec, DesignResult } from '../../../core/design/index.ts';
 import type { Result } from '../../../core/types.ts';
 import type { WorkbenchState } from '../../../store/store.ts';
-import { maskFromDesigner } from '../../../core/mask.ts';
+import { maskFromDesigner } from '../../../core/mask/index.ts';
 
 /**
  * Replaces the roots by the designer's output; with `setMask`, the mask becomes the requirement's (notch

@@ -3,7 +3,7 @@
  * coefficients exactly as typed. Anything that goes wrong comes back as an InputError, never a throw.
  */
 import { parseSystem } from '../../../core/parse/index.ts';
-import { compressRoots, tfToZpk } from '../../../core/system.ts';
+import { compressRoots, tfToZpk } from '../../../core/system/index.ts';
 import type { InputError, Root, Zpk } from '../../../core/types.ts';
 import { emptyDesign, type Design, type TypedCoefficients } from '../../../core/model/design.ts';
 

@@ -1,5 +1,5 @@
 /** Ideal versus quantized: stability and, when the design has a mask, the mask's verdict, side by side. */
-import type { MaskResult } from '../../../core/mask.ts';
+import type { MaskResult } from '../../../core/mask/index.ts';
 import type { Stability } from '../../../core/stability.ts';
 import { selectMaskResult, selectStability } from '../../../store/derived.ts';
 import {

@@ -5,7 +5,7 @@
  */
 import { useState } from 'react';
 import type { ImplementationSettings, WordLengthSearch } from '../../../core/fixed/index.ts';
-import type { RequirementMask } from '../../../core/mask.ts';
+import type { RequirementMask } from '../../../core/mask/index.ts';
 import type { Zpk } from '../../../core/types.ts';
 import { rootsZpk, selectWordLengthSearch } from '../../../store/implementationDerived.ts';
 import { useWorkbench, workbenchStore } from '../../../store/useWorkbench.ts';

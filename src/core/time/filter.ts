@@ -3,8 +3,8 @@
  * scipy.signal.lfilter uses) for a whole transfer function, and a cascade of such biquads for sections.
  * Loops run on Float64Arrays and allocate nothing per sample, since the page refilters on every drag frame.
  */
-import type { Section, TransferFunction } from './types.ts';
-import { makeImpulse, makeSine, makeStep } from './signals.ts';
+import type { Section, TransferFunction } from '../types.ts';
+import { makeImpulse, makeSine, makeStep } from './inputs.ts';
 
 /**
  * Filters x through H(z) = B(z^-1)/A(z^-1) in transposed direct form II, normalising by a[0] (a[0] must be

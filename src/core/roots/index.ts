@@ -4,15 +4,15 @@
  * (roots/polish.ts), exact conjugate symmetry (roots/conjugate.ts) and verified merging of
  * repeated roots (roots/multiplicity.ts). Degrees 1 and 2 are solved in closed form.
  */
-import type { Root } from './types.ts';
-import type { Poly } from './poly.ts';
-import { aberthIterate, freezeLevel } from './roots/aberth.ts';
-import { startingPoints } from './roots/start.ts';
-import { polishIllConditioned } from './roots/polish.ts';
-import { symmetrizeConjugates } from './roots/conjugate.ts';
-import { findMultipleRoots, listGrouped } from './roots/multiplicity.ts';
+import type { Root } from '../types.ts';
+import type { Poly } from '../poly.ts';
+import { aberthIterate, freezeLevel } from './aberth.ts';
+import { startingPoints } from './start.ts';
+import { polishIllConditioned } from './polish.ts';
+import { symmetrizeConjugates } from './conjugate.ts';
+import { findMultipleRoots, listGrouped } from './multiplicity.ts';
 
-export { rootsBackwardError } from './roots/backwardError.ts';
+export { rootsBackwardError } from './backwardError.ts';
 
 /** Outcome of a root search: every finite root listed (conjugates included), with diagnostics. */
 export interface RootsResult {

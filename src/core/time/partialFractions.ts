@@ -5,15 +5,15 @@
  * B(x)·(1 − p x)^m / A(x) about x = 1/p (x = z^-1), computed as a product of the other poles' factors — the
  * derivative formula for repeated poles, evaluated without forming derivatives of A.
  */
-import type { Root, TransferFunction, Zpk } from './types.ts';
-import { polyMul } from './poly.ts';
-import { zpkToTf } from './system/transferFunction.ts';
-import { expandRoots, rootCount } from './system/rootList.ts';
-import type { Poly } from './poly.ts';
-import { findPoleGroups } from './time/poleSearch.ts';
-import { mergeRepeatedPoles } from './time/repeatedPoles.ts';
-import { taylorAt } from './time/taylor.ts';
-import { factorSeries, seriesDiv, seriesMulInPlace, type Series } from './time/series.ts';
+import type { Root, TransferFunction, Zpk } from '../types.ts';
+import { polyMul } from '../poly.ts';
+import { zpkToTf } from '../system/transferFunction.ts';
+import { expandRoots, rootCount } from '../system/rootList.ts';
+import type { Poly } from '../poly.ts';
+import { findPoleGroups } from './poleSearch.ts';
+import { mergeRepeatedPoles } from './repeatedPoles.ts';
+import { taylorAt } from './taylor.ts';
+import { factorSeries, seriesDiv, seriesMulInPlace, type Series } from './series.ts';
 
 /** First m Taylor coefficients of the numerator N(x), x = z^-1, about the complex point x0. */
 export type NumeratorSeries = (x0r: number, x0i: number, m: number) => Series;

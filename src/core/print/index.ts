@@ -4,10 +4,10 @@
  * `digits` option every number is printed in its shortest form that reads back to the same double, so
  * coefficient, equation and rational forms round-trip exactly.
  */
-import type { Root, TransferFunction, Zpk } from './types.ts';
-import { formatNumber, joinTerms, trimTrailingZeros, type PrintOptions, type Term } from './print/terms.ts';
+import type { Root, TransferFunction, Zpk } from '../types.ts';
+import { formatNumber, joinTerms, trimTrailingZeros, type PrintOptions, type Term } from './terms.ts';
 
-export { formatNumber, type PrintOptions } from './print/terms.ts';
+export { formatNumber, type PrintOptions } from './terms.ts';
 
 /** Options for printRoots. */
 export interface RootPrintOptions extends PrintOptions {

@@ -4,9 +4,9 @@
  * from the partial fractions of H(z)X(z). An input pole that lands on a pole of H (a step into a pole at
  * z = 1, a cosine at a pole's frequency on the unit circle) becomes a repeated pole, hence the n^k terms.
  */
-import type { Root, TransferFunction, Zpk } from './types.ts';
-import { polyMul } from './poly.ts';
-import { findPoleGroups } from './time/poleSearch.ts';
+import type { Root, TransferFunction, Zpk } from '../types.ts';
+import { polyMul } from '../poly.ts';
+import { findPoleGroups } from './poleSearch.ts';
 import {
   expandOverPoles,
   normalizeTf,
@@ -15,9 +15,9 @@ import {
   type PartialFractions,
   type RationalFactor,
 } from './partialFractions.ts';
-import { mergeRepeatedPoles } from './time/repeatedPoles.ts';
+import { mergeRepeatedPoles } from './repeatedPoles.ts';
 
-export { describeTerm, formatClosedForm } from './time/closedFormText.ts';
+export { describeTerm, formatClosedForm } from './closedFormText.ts';
 
 /** One mode of the response: coefficient·n^power·pole^n for n ≥ 0. */
 export interface Term {
