@@ -8,7 +8,7 @@ import { readFileSync } from 'node:fs';
 import { test, expect, type Page } from '@playwright/test';
 import { openWorkbench, readDesign, saveScreenshot } from './support/app.ts';
 import { humRecording, loadRecording, openSignalPage, showRegion } from './support/signal.ts';
-import { openTarget } from './support/firmware.ts';
+import { openTarget } from './support/target.ts';
 import {
   buildImplementation,
   DEFAULT_IMPLEMENTATION,

@@ -1,7 +1,7 @@
 import { describe, it, expect } from 'vitest';
-import { cPrefix, exportFileName } from '../../src/views/side/firmware/fileNames.ts';
-import { readTypedSamples } from '../../src/views/side/firmware/typedSamples.ts';
-import { afterInputSummary, overflowSummary } from '../../src/views/side/firmware/simulationWords.ts';
+import { cPrefix, exportFileName } from '../../src/views/side/target/fileNames.ts';
+import { readTypedSamples } from '../../src/views/side/target/typedSamples.ts';
+import { afterInputSummary, overflowSummary } from '../../src/views/side/target/simulationWords.ts';
 import type { SimulationReport } from '../../src/store/implementationDerived.ts';
 
 describe('export file names and C prefixes from the design name', () => {

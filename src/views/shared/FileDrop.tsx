@@ -5,8 +5,8 @@
  */
 import { useEffect, useRef, useState } from 'react';
 import { postNotice } from '../../store/notices.ts';
-import { openShared } from '../side/files/openShared.ts';
-import { readDesignBlob } from '../side/files/readFile.ts';
+import { openShared } from '../side/share/openShared.ts';
+import { readDesignBlob } from '../side/share/readFile.ts';
 import './fileDrop.css';
 
 /** Whether a drag carries files (not text or a link dragged within the page). */

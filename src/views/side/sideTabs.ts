@@ -8,9 +8,9 @@ import { SystemPage } from './SystemPage.tsx';
 import { lazyView } from '../shared/lazyView.tsx';
 
 const design = lazyView('Design page', () => import('./design/DesignPage.tsx').then((m) => m.DesignPage));
-const target = lazyView('Target page', () => import('./firmware/TargetPage.tsx').then((m) => m.TargetPage));
+const target = lazyView('Target page', () => import('./target/TargetPage.tsx').then((m) => m.TargetPage));
 const signal = lazyView('Signal page', () => import('../signal/SignalPage.tsx').then((m) => m.SignalPage));
-const files = lazyView('Share page', () => import('./files/FilesPage.tsx').then((m) => m.FilesPage));
+const files = lazyView('Share page', () => import('./share/SharePage.tsx').then((m) => m.FilesPage));
 
 /** Fetches every lazily loaded page's code (call after the first paint). */
 export function prefetchSidePages(): Promise<unknown> {

@@ -7,7 +7,7 @@ import { PicturesSection } from '../../pictures/PicturesSection.tsx';
 import { FileSection } from './FileSection.tsx';
 import { LibrarySection } from './LibrarySection.tsx';
 import { LinkSection } from './LinkSection.tsx';
-import './files.css';
+import './share.css';
 
 export function FilesPage() {
   return (

@@ -10,7 +10,7 @@ import {
   quantizedMarks,
   setCoefficientBits,
   type QuantizedMark,
-} from './support/firmware.ts';
+} from './support/target.ts';
 
 /** The JSON export's parts these tests read. */
 interface SectionsJson {

@@ -2,7 +2,7 @@
  * The "Target" page of the side column: taking the design to the hardware. Sections and structure, fixed
  * point and its effect (verdicts, shortest word), round-off noise, a bit-exact run, and the exports.
  */
-import './firmware.css';
+import './target.css';
 import { TargetSwitch } from './TargetSwitch.tsx';
 import { SectionsPart } from './SectionsPart.tsx';
 import { FixedPointPart } from './FixedPointPart.tsx';
