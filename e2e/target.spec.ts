@@ -117,7 +117,7 @@ test.describe('taking the hum notches to fixed point', () => {
 
     await expect(page.getByTestId('verdict-stability')).toContainText('stable');
     await expect(page.getByTestId('limit-cycle')).toContainText(/After the input stops/);
-    await saveScreenshot(page, testInfo, 'firmware-12-bit');
+    await saveScreenshot(page, testInfo, 'target-12-bit');
 
     // The overlay switch hides both layers and brings them back.
     const toggle = page.getByRole('checkbox', { name: /Draw the quantized filter/ });

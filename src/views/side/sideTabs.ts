@@ -10,11 +10,11 @@ import { lazyView } from '../shared/lazyView.tsx';
 const design = lazyView('Design page', () => import('./design/DesignPage.tsx').then((m) => m.DesignPage));
 const target = lazyView('Target page', () => import('./target/TargetPage.tsx').then((m) => m.TargetPage));
 const signal = lazyView('Signal page', () => import('../signal/SignalPage.tsx').then((m) => m.SignalPage));
-const files = lazyView('Share page', () => import('./share/SharePage.tsx').then((m) => m.FilesPage));
+const share = lazyView('Share page', () => import('./share/SharePage.tsx').then((m) => m.SharePage));
 
 /** Fetches every lazily loaded page's code (call after the first paint). */
 export function prefetchSidePages(): Promise<unknown> {
-  return Promise.allSettled([design, target, signal, files].map((p) => p.prefetch()));
+  return Promise.allSettled([design, target, signal, share].map((p) => p.prefetch()));
 }
 
 export interface SidePage {
@@ -36,5 +36,5 @@ export const SIDE_PAGES: SidePage[] = [
     title: 'Open or make a recording, download it filtered',
     Page: signal.View,
   },
-  { id: 'files', label: 'Share', title: 'Links, files, library, compare, pictures', Page: files.View },
+  { id: 'share', label: 'Share', title: 'Links, files, library, compare, pictures', Page: share.View },
 ];

@@ -9,7 +9,7 @@ import { LibrarySection } from './LibrarySection.tsx';
 import { LinkSection } from './LinkSection.tsx';
 import './share.css';
 
-export function FilesPage() {
+export function SharePage() {
   return (
     <>
       <LinkSection />
