@@ -1,0 +1,62 @@
+import { describe, expect, it } from 'vitest';
+import { parseRate, preferredUnit, rateText } from '../../../src/views/shell/sampleRate.ts';
+import { historyKey } from '../../../src/views/useKeyboardShortcuts.ts';
+import { rootRows } from '../../../src/views/side/rootRows.ts';
+import type { RootReadout } from '../../../src/core/readouts.ts';
+
+const key = (
+  k: string,
+  mods: Partial<{ ctrlKey: boolean; metaKey: boolean; shiftKey: boolean; altKey: boolean }>,
+) => ({
+  key: k,
+  ctrlKey: false,
+  metaKey: false,
+  shiftKey: false,
+  altKey: false,
+  ...mods,
+});
+
+describe('sample rate field', () => {
+  it('reads Hz and kHz and refuses what is not a positive rate', () => {
+    expect(parseRate('48', 'kHz')).toEqual({ ok: true, hz: 48000 });
+    expect(parseRate(' 44,1 ', 'kHz')).toEqual({ ok: true, hz: 44100 });
+    expect(parseRate('2e3', 'Hz')).toEqual({ ok: true, hz: 2000 });
+    for (const bad of ['', 'abc', '-5', '0', '1e10', '12 kHz'])
+      expect(parseRate(bad, 'Hz').ok, bad).toBe(false);
+  });
+  it('shows rates without float noise', () => {
+    expect(rateText(44100, 'kHz')).toBe('44.1');
+    expect(rateText(25600, 'kHz')).toBe('25.6');
+    expect(preferredUnit(999)).toBe('Hz');
+    expect(preferredUnit(2000)).toBe('kHz');
+  });
+});
+
+describe('history shortcuts', () => {
+  it('maps Ctrl/Cmd+Z, Shift+Ctrl/Cmd+Z and Ctrl+Y', () => {
+    expect(historyKey(key('z', { ctrlKey: true }))).toBe('undo');
+    expect(historyKey(key('z', { metaKey: true }))).toBe('undo');
+    expect(historyKey(key('Z', { ctrlKey: true, shiftKey: true }))).toBe('redo');
+    expect(historyKey(key('y', { ctrlKey: true }))).toBe('redo');
+    expect(historyKey(key('z', {}))).toBeNull();
+    expect(historyKey(key('z', { ctrlKey: true, altKey: true }))).toBeNull();
+  });
+});
+
+describe('rootRows', () => {
+  it('numbers poles and zeros separately, in order', () => {
+    const r = (kind: 'pole' | 'zero'): RootReadout => ({
+      root: { re: 0, im: 0, multiplicity: 1 },
+      kind,
+      frequencyHz: 0,
+      radius: 0,
+      angleRad: 0,
+    });
+    const rows = rootRows([r('pole'), r('pole'), r('zero')]);
+    expect(rows.map((x) => x.ref)).toEqual([
+      { kind: 'pole', index: 0 },
+      { kind: 'pole', index: 1 },
+      { kind: 'zero', index: 0 },
+    ]);
+  });
+});
