@@ -15,25 +15,14 @@ import { fileURLToPath, pathToFileURL } from 'node:url';
 import { findRoots, rootsBackwardError } from '../src/core/roots/index.ts';
 import { polyFromRoots } from '../src/core/poly.ts';
 import type { Root } from '../src/core/types.ts';
+import { mulberry32 } from '../src/core/random.ts';
 
 const DEGREES = [8, 16, 32, 64, 128, 256, 512, 1024];
 /** Wall time aimed at for one measurement (a batch of calls), in milliseconds. */
 const TARGET_MS = 4;
 
-/** Seeded uniform generator on [0, 1) (mulberry32). */
-function uniform(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 function randomPoly(n: number): Float64Array {
-  const u = uniform(1000 + n);
+  const u = mulberry32(1000 + n);
   return Float64Array.from(
     { length: n + 1 },
     () => Math.sqrt(-2 * Math.log(1 - u())) * Math.cos(2 * Math.PI * u()),
@@ -73,7 +62,7 @@ function butterworth(n: number): Float64Array {
 
 /** n/4 seeded conjugate pairs, each a double root, moduli 0.3…1.2. */
 function repeatedRoots(n: number): Float64Array {
-  const u = uniform(5000 + n);
+  const u = mulberry32(5000 + n);
   const roots: Root[] = [];
   for (let k = 0; k < n / 4; k++) {
     const r = 0.3 + 0.9 * u();

@@ -6,18 +6,7 @@ import type { DesignerSpec } from '../../src/core/design/index.ts';
 import { selectMaskResult, selectZpk } from '../../src/store/derived.ts';
 import { evaluateMask } from '../../src/core/mask/index.ts';
 import { expectClose } from '../helpers/expectClose.ts';
-
-/** Deterministic generator for the seeded moves (mulberry32). */
-function seeded(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+import { mulberry32 } from '../../src/core/random.ts';
 
 /** An equiripple design whose mask has wide regions, where the grid (not only root angles) finds the worst point. */
 const ELLIPTIC: DesignerSpec = {
@@ -44,7 +33,7 @@ describe('selectMaskResult during a root drag', () => {
     ['elliptic low-pass', ellipticStore],
   ])('the coarser drag grid reaches the full-grid verdict for seeded pole moves (%s)', (_name, make) => {
     const store = make();
-    const rand = seeded(7);
+    const rand = mulberry32(7);
     store.getState().beginGesture();
     store.getState().setDragging(true);
     for (let k = 0; k < 20; k++) {

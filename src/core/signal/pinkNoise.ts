@@ -6,7 +6,7 @@
  * from memory. Row r changes every 2^(r+1) samples, so each row adds power one octave lower; the sum falls
  * at about 3 dB per octave over PINK_ROWS octaves below fs/2.
  */
-import { mulberry32 } from '../time/inputs.ts';
+import { mulberry32 } from '../random.ts';
 
 /** Rows summed: 16 octaves of 1/f slope, down to fs/2^17 (0.37 Hz at 48 kHz). */
 export const PINK_ROWS = 16;

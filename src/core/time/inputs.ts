@@ -2,6 +2,7 @@
  * Test input signals for time responses, as Float64Arrays of n samples starting at sample index 0.
  * The noise source is deterministic: the same seed always gives the same samples on every platform.
  */
+import { mulberry32 } from '../random.ts';
 
 /** Unit impulse δ[k] for k = 0..n-1 (1 at k = 0, zero elsewhere). */
 export function makeImpulse(n: number): Float64Array {
@@ -39,16 +40,4 @@ export function makeWhiteNoise(n: number, seed: number, std = 1): Float64Array {
     if (k + 1 < n) x[k + 1] = radius * Math.sin(angle);
   }
   return x;
-}
-
-/** Uniform generator on [0, 1) from a 32-bit seed: mulberry32, a 32-bit-state mixer with period 2^32. */
-export function mulberry32(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
 }

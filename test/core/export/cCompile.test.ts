@@ -14,7 +14,7 @@ import {
 } from '../../../src/core/fixed/index.ts';
 import { exportC } from '../../../src/core/export/index.ts';
 import { filterSections } from '../../../src/core/time/filter.ts';
-import { mulberry32 } from '../../../src/core/time/inputs.ts';
+import { mulberry32 } from '../../../src/core/random.ts';
 import type { Zpk } from '../../../src/core/types.ts';
 import { compileFilter, requireToolchain } from '../../helpers/cProgram.ts';
 import { butterBand, ellip, hot, hot64, hum, overflowInputs } from '../../helpers/fixedDesigns.ts';

@@ -10,7 +10,7 @@ import {
   type Implementation,
   type ImplementationSettings,
 } from '../../../src/core/fixed/index.ts';
-import { mulberry32 } from '../../../src/core/time/inputs.ts';
+import { mulberry32 } from '../../../src/core/random.ts';
 import type { Zpk } from '../../../src/core/types.ts';
 import { hot, hum, overflowInputs } from '../../helpers/fixedDesigns.ts';
 

@@ -12,7 +12,8 @@ import {
 } from '../../../src/core/fixed/index.ts';
 import type { Zpk } from '../../../src/core/types.ts';
 import { tfToZpk } from '../../../src/core/system/index.ts';
-import { mulberry32, makeWhiteNoise } from '../../../src/core/time/inputs.ts';
+import { makeWhiteNoise } from '../../../src/core/time/inputs.ts';
+import { mulberry32 } from '../../../src/core/random.ts';
 
 const settings = (over: Partial<ImplementationSettings> = {}): ImplementationSettings => ({
   ...DEFAULT_IMPLEMENTATION,

@@ -13,7 +13,7 @@ import {
 } from '../../../src/core/mask/index.ts';
 import { responseZpk, frequencyGrid, evalZpkAt } from '../../../src/core/response/index.ts';
 import { zpkToSections } from '../../../src/core/system/index.ts';
-import { mulberry32 } from '../../../src/core/time/inputs.ts';
+import { mulberry32 } from '../../../src/core/random.ts';
 import { runDesigner } from '../../../src/core/design/index.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 

@@ -5,6 +5,7 @@ import { polyFromRoots } from '../../../src/core/poly.ts';
 import type { Root } from '../../../src/core/types.ts';
 import { loadFixture } from '../../helpers/fixtures.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
+import { mulberry32 } from '../../../src/core/random.ts';
 
 interface Roots {
   re: number[];
@@ -13,18 +14,6 @@ interface Roots {
 
 /** The backward-error goal for every computed root set (dimensionless, relative to Σ|a_k||z|^k). */
 const BACKWARD_GOAL = 1e-13;
-
-/** Seeded uniform numbers in [0, 1) (mulberry32). */
-function seeded(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /**
  * Largest relative distance |ours − reference| / max(1, |reference|) after matching the two root sets:
@@ -109,7 +98,7 @@ describe('findRoots against numpy.roots', () => {
 
 describe('findRoots against ml-matrix companion eigenvalues', () => {
   it('agrees on seeded random polynomials of degree 3 to 60', () => {
-    const rand = seeded(21);
+    const rand = mulberry32(21);
     for (const n of [3, 5, 7, 10, 15, 20, 30, 45, 60]) {
       const p = Array.from({ length: n + 1 }, () => 2 * rand() - 1);
       const r = findRoots(p);
@@ -261,7 +250,7 @@ describe('findRoots on repeated roots', () => {
 
 describe('findRoots forward error on known roots', () => {
   it('recovers seeded, well-separated roots of polyFromRoots', () => {
-    const rand = seeded(31);
+    const rand = mulberry32(31);
     for (let trial = 0; trial < 20; trial++) {
       const known: Root[] = [];
       for (let k = 0; k < 6; k++) {
@@ -355,7 +344,7 @@ describe('findRoots edge cases', () => {
   });
 
   it('gives exactly conjugate-symmetric roots for seeded random real polynomials', () => {
-    const rand = seeded(41);
+    const rand = mulberry32(41);
     for (let trial = 0; trial < 30; trial++) {
       const n = 3 + Math.floor(40 * rand());
       const p = Array.from({ length: n + 1 }, () => 2 * rand() - 1);

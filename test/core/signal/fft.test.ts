@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import { fft, ifft, realFft, isPowerOfTwo, nextPowerOfTwo } from '../../../src/core/signal/index.ts';
-import { mulberry32 } from '../../../src/core/time/inputs.ts';
+import { mulberry32 } from '../../../src/core/random.ts';
 import { loadFixture } from '../../helpers/fixtures.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 

@@ -9,7 +9,7 @@ import {
   writeWav,
   type SampleFormat,
 } from '../../../src/core/signal/index.ts';
-import { mulberry32 } from '../../../src/core/time/inputs.ts';
+import { mulberry32 } from '../../../src/core/random.ts';
 import { loadFixture } from '../../helpers/fixtures.ts';
 
 interface WavCase {

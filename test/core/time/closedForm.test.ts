@@ -11,7 +11,8 @@ import {
 } from '../../../src/core/time/closedForm.ts';
 import { filterSections, filterTf } from '../../../src/core/time/filter.ts';
 import { zpkToTf } from '../../../src/core/system/transferFunction.ts';
-import { makeImpulse, makeSine, makeStep, mulberry32 } from '../../../src/core/time/inputs.ts';
+import { makeImpulse, makeSine, makeStep } from '../../../src/core/time/inputs.ts';
+import { mulberry32 } from '../../../src/core/random.ts';
 import { polyFromRoots } from '../../../src/core/poly.ts';
 import type { Root, Section, TransferFunction, Zpk } from '../../../src/core/types.ts';
 import { expectClose } from '../../helpers/expectClose.ts';

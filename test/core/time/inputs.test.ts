@@ -1,11 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import {
-  makeImpulse,
-  makeSine,
-  makeStep,
-  makeWhiteNoise,
-  mulberry32,
-} from '../../../src/core/time/inputs.ts';
+import { makeImpulse, makeSine, makeStep, makeWhiteNoise } from '../../../src/core/time/inputs.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 
 describe('signals', () => {
@@ -18,19 +12,6 @@ describe('signals', () => {
   it('sine is a cosine at the given frequency and phase', () => {
     const x = makeSine(Math.PI / 2, 4, Math.PI / 3);
     expectClose(x, [0.5, -Math.sqrt(3) / 2, -0.5, Math.sqrt(3) / 2], { abs: 1e-15 });
-  });
-
-  it('mulberry32 is deterministic and uniform on [0, 1)', () => {
-    const a = mulberry32(7);
-    const b = mulberry32(7);
-    const c = mulberry32(8);
-    const xs = Array.from({ length: 10000 }, () => a());
-    expect(xs.slice(0, 5)).toEqual(Array.from({ length: 5 }, () => b()));
-    expect(xs[0]).not.toBe(c());
-    expect(Math.min(...xs)).toBeGreaterThanOrEqual(0);
-    expect(Math.max(...xs)).toBeLessThan(1);
-    // mean 1/2 with standard error 1/sqrt(12·10000) ≈ 0.003
-    expectClose(xs.reduce((s, v) => s + v, 0) / xs.length, 0.5, { abs: 0.012 });
   });
 
   it('white noise is repeatable, has the requested spread, and is uncorrelated', () => {

@@ -6,7 +6,7 @@ import {
 } from '../../../src/core/time/partialFractions.ts';
 import { polyFromRoots, polyEvalComplex } from '../../../src/core/poly.ts';
 import type { Root, TransferFunction } from '../../../src/core/types.ts';
-import { mulberry32 } from '../../../src/core/time/inputs.ts';
+import { mulberry32 } from '../../../src/core/random.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 import { loadFixture } from '../../helpers/fixtures.ts';
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { columnEnvelope, extentOf, tracePath, visibleSamples } from '../../../src/views/signal/envelope.ts';
-import { mulberry32 } from '../../../src/core/time/inputs.ts';
+import { mulberry32 } from '../../../src/core/random.ts';
 
 describe('columnEnvelope', () => {
   it('holds the min and max of every column, so a one-sample spike survives (seeded invariant)', () => {
