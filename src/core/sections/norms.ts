@@ -6,6 +6,7 @@
 import type { Section } from '../types.ts';
 import { sectionsToZpk } from '../system/index.ts';
 import { peakMagnitude } from './peak.ts';
+import { createSectionFilter, runSectionFilter } from '../signal/sectionFilter.ts';
 
 /**
  * The impulse response is summed until the slowest pole has decayed by this factor (r^n ≤ 1e-13), so the
@@ -55,21 +56,13 @@ export function partialCascadeNorms(sections: readonly Section[]): {
   h[0] = 1;
   const norms: CascadeNorms[] = [];
   for (let s = 0; s < sections.length; s++) {
-    const [b0r, b1r, b2r, a0, a1r, a2r] = sections[s]!;
-    const [b0, b1, b2, a1, a2] = [b0r / a0, b1r / a0, b2r / a0, a1r / a0, a2r / a0];
-    // One transposed direct form II pass of this section over the running impulse response.
-    let z0 = 0;
-    let z1 = 0;
+    // One pass of this section over the running impulse response, in place.
+    runSectionFilter(createSectionFilter([sections[s]!]), h, h);
     let l1 = 0;
     let e = 0;
     for (let n = 0; n < samples; n++) {
-      const x = h[n]!;
-      const y = b0 * x + z0;
-      z0 = b1 * x - a1 * y + z1;
-      z1 = b2 * x - a2 * y;
-      h[n] = y;
-      l1 += Math.abs(y);
-      e += y * y;
+      l1 += Math.abs(h[n]!);
+      e += h[n]! * h[n]!;
     }
     const unstable = radius > 1;
     norms.push({

@@ -1,8 +1,8 @@
 /**
- * A cascade of second-order sections that keeps its state between calls, for filtering a long signal in
- * pieces. Each section runs over the whole piece before the next, in transposed direct form II with the
- * same arithmetic as filterSections in time.ts, so any split of a signal into pieces gives the one-shot
- * output bit for bit.
+ * The biquad cascade kernel: second-order sections in transposed direct form II, keeping their state
+ * between calls so a long signal can be filtered in pieces. Each section runs over the whole piece before
+ * the next, so any split of a signal into pieces gives the one-shot output (time/filter.ts filterSections,
+ * which runs this kernel) bit for bit. Every float64 cascade of the project runs here.
  */
 import type { Section } from '../types.ts';
 

@@ -4,6 +4,7 @@
  * Loops run on Float64Arrays and allocate nothing per sample, since the page refilters on every drag frame.
  */
 import type { Section, TransferFunction } from '../types.ts';
+import { createSectionFilter, runSectionFilter } from '../signal/sectionFilter.ts';
 import { makeImpulse, makeSine, makeStep } from './inputs.ts';
 
 /**
@@ -48,32 +49,12 @@ export function filterTf(tf: TransferFunction, x: ArrayLike<number>, state?: Flo
 
 /**
  * Filters x through a cascade of second-order sections, each in transposed direct form II and normalised by
- * its own a0, starting from zero state (as scipy.signal.sosfilt). An empty cascade passes x through.
+ * its own a0, starting from zero state (as scipy.signal.sosfilt). An empty cascade passes x through. The
+ * arithmetic is the cascade kernel's (signal/sectionFilter.ts), so a signal filtered in pieces there gives
+ * this output bit for bit.
  */
 export function filterSections(sections: readonly Section[], x: ArrayLike<number>): Float64Array {
-  const y = Float64Array.from(x);
-  const n = y.length;
-  for (let s = 0; s < sections.length; s++) {
-    const [b0r, b1r, b2r, a0, a1r, a2r] = sections[s]!;
-    if (a0 === 0 || !Number.isFinite(a0)) {
-      throw new Error(`filterSections: section ${s} has a0 = ${a0}; it must be a nonzero number`);
-    }
-    const b0 = b0r / a0;
-    const b1 = b1r / a0;
-    const b2 = b2r / a0;
-    const a1 = a1r / a0;
-    const a2 = a2r / a0;
-    let z0 = 0;
-    let z1 = 0;
-    for (let i = 0; i < n; i++) {
-      const xi = y[i]!;
-      const yi = b0 * xi + z0;
-      z0 = b1 * xi + z1 - a1 * yi;
-      z1 = b2 * xi - a2 * yi;
-      y[i] = yi;
-    }
-  }
-  return y;
+  return runSectionFilter(createSectionFilter(sections), x);
 }
 
 /** First n samples of the impulse response h[k], k = 0..n-1. */
