@@ -6,7 +6,7 @@
 import { phaseDifference, selectReferencePoint, useCompare } from '../../store/compare.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 import { formatDb, formatNumber } from '../shared/format.ts';
-import type { FrequencyReading } from '../frequency/readAt.ts';
+import type { FrequencyReading } from '../../core/response/readAt.ts';
 import './compare.css';
 
 export interface ReferenceReadingProps {

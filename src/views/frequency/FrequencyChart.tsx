@@ -15,7 +15,7 @@ import { Crosshair } from './Crosshair.tsx';
 import { cursorStepsForKey, startHz, stepHz } from './cursor.ts';
 import { frequencyLayout, type PlotKey } from './layout.ts';
 import { PlotTitles } from './PlotTitles.tsx';
-import type { FrequencyReading } from './readAt.ts';
+import type { FrequencyReading } from '../../core/response/readAt.ts';
 import { RootMarker } from './RootMarker.tsx';
 import { PLOT_OVERLAYS } from './overlays.ts';
 import { MaskChip } from './mask/MaskChip.tsx';

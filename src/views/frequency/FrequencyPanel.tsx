@@ -7,7 +7,7 @@ import { PictureMenu } from '../pictures/PictureMenu.tsx';
 import { FrequencyChart } from './FrequencyChart.tsx';
 import { FrequencyControls } from './FrequencyControls.tsx';
 import { FrequencyReadout } from './FrequencyReadout.tsx';
-import { readAt } from './readAt.ts';
+import { readAt } from '../../core/response/readAt.ts';
 import { useSelectedRootHz } from './useSelectedRootHz.ts';
 import '../chart/chart.css';
 import './frequency.css';

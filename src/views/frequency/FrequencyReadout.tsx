@@ -2,7 +2,7 @@
 import { useCompare } from '../../store/compare.ts';
 import { ReferenceReading } from '../compare/ReferenceReading.tsx';
 import { formatDb, formatHz, formatNumber } from '../shared/format.ts';
-import type { FrequencyReading } from './readAt.ts';
+import type { FrequencyReading } from '../../core/response/readAt.ts';
 import { DEG_PER_RAD } from './series.ts';
 
 export interface FrequencyReadoutProps {

@@ -2,7 +2,7 @@ import { describe, it, expect } from 'vitest';
 import type { Zpk } from '../../../src/core/types.ts';
 import { createWorkbenchStore } from '../../../src/store/store.ts';
 import { selectZpk } from '../../../src/store/derived.ts';
-import { readAt } from '../../../src/views/frequency/readAt.ts';
+import { readAt } from '../../../src/core/response/readAt.ts';
 import { refineAtRoots, rootAngles } from '../../../src/core/response/index.ts';
 import { responseZpk, frequencyGrid } from '../../../src/core/response/index.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
