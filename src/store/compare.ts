@@ -18,6 +18,7 @@ import { memoLast } from './memo.ts';
 import type { ViewSettings } from './view.ts';
 // Pure engine calls that merge the root angles into a grid; it lives beside the design's own curve.
 import { refineAtRoots } from '../core/response/index.ts';
+import { readAt, type FrequencyReading } from '../core/response/readAt.ts';
 
 export const REFERENCE_KEY = 'polewright.reference';
 
@@ -181,35 +182,12 @@ export function selectReferenceCurves(ref: Reference, view: ViewSettings): Refer
   );
 }
 
-/** The reference's values at one frequency (radians for phases, samples and ms for delay). */
-export interface ReferencePoint {
-  magnitudeDb: number;
-  /** Wrapped to (−π, π], radians. */
-  phase: number;
-  /** On the unwrapped plot's branch (ω = 0 in (−π, π]), radians. */
-  phaseUnwrapped: number;
-  /** Samples. */
-  groupDelay: number;
-  /** Milliseconds at the reference's own sample rate. */
-  groupDelayMs: number;
-}
-
-const pointOf = memoLast((d: Design, hz: number): ReferencePoint | null => {
-  const fs = d.sampleRate;
-  if (!(hz >= 0 && hz <= fs / 2)) return null;
-  const r = responseZpk(zpkOf(d), Float64Array.of((2 * Math.PI * hz) / fs));
-  const gd = r.groupDelay[0]!;
-  return {
-    magnitudeDb: r.magnitudeDb[0]!,
-    phase: r.phase[0]!,
-    phaseUnwrapped: r.phaseUnwrapped[0]!,
-    groupDelay: gd,
-    groupDelayMs: (gd * 1000) / fs,
-  };
-});
+const pointOf = memoLast((d: Design, hz: number): FrequencyReading | null =>
+  hz >= 0 && hz <= d.sampleRate / 2 ? readAt(zpkOf(d), d.sampleRate, hz) : null,
+);
 
 /** The reference's level, phase and group delay at hz (Hz), or null above its Nyquist frequency. */
-export const selectReferencePoint = (ref: Reference, hz: number): ReferencePoint | null =>
+export const selectReferencePoint = (ref: Reference, hz: number): FrequencyReading | null =>
   pointOf(ref.design, hz);
 
 /** Design minus reference phase, radians: wrapped to (−π, π] when the view shows wrapped phase. */

@@ -1,6 +1,6 @@
 /** Exact read-outs at one frequency: the engine evaluates the current system there, not the nearest grid point. */
 import type { Zpk } from '../types.ts';
-import { responseZpk } from './index.ts';
+import { responseZpk } from './zpkResponse.ts';
 
 export interface FrequencyReading {
   hz: number;
