@@ -8,10 +8,14 @@
  *   implied; a real root has im === 0.
  */
 
-/** A root of a polynomial with its multiplicity. */
-export interface Root {
+/** A complex number as a plain pair: the one complex type of the API surface and of code that is not hot. */
+export interface Complex {
   re: number;
   im: number;
+}
+
+/** A root of a polynomial with its multiplicity. */
+export interface Root extends Complex {
   multiplicity: number;
 }
 

@@ -2,6 +2,7 @@
  * View settings: how the panels show the design. None of this changes the filter. The part that travels
  * with a design (DocumentView) is defined with the design model in src/core/model/view.ts.
  */
+import type { Complex } from '../core/types.ts';
 import type { RootRef } from '../core/model/design.ts';
 import type { DocumentView } from '../core/model/view.ts';
 
@@ -19,7 +20,7 @@ export interface ViewSettings extends DocumentView {
   shading: boolean;
   /** Visible half-width of the plane around its centre, in z units; 1.3 shows the unit circle with margin. */
   planeSpan: number;
-  planeCentre: { re: number; im: number };
+  planeCentre: Complex;
   /** Angle unit for editing a root by number. */
   angleUnit: 'deg' | 'rad' | 'hz';
   /** Draw the fixed-point filter over the ideal one (plane, magnitude) while the design has implementation settings; absent = true. */

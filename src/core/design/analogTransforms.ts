@@ -4,7 +4,7 @@
  * (band-stop). Zeros at infinity of the prototype land at 0 or at ±iω₀; gains are carried as logarithms.
  */
 import type { Root } from '../types.ts';
-import type { Complex } from './complex.ts';
+import type { Complex } from '../types.ts';
 import { cAdd, cDiv, cMul, cScale, cSqrt, cSub, cx, upperHalf } from './complex.ts';
 import type { LogGainZpk } from './prototype.ts';
 import { countRoots, logProductAt, root } from './prototype.ts';

@@ -1,10 +1,6 @@
 /** Small complex helpers for the (non-hot) design code: plain {re, im} values, no allocation tricks. */
 
-/** A complex number. */
-export interface Complex {
-  re: number;
-  im: number;
-}
+import type { Complex } from '../types.ts';
 
 export const cx = (re: number, im = 0): Complex => ({ re, im });
 export const cAdd = (a: Complex, b: Complex): Complex => ({ re: a.re + b.re, im: a.im + b.im });

@@ -1,22 +1,18 @@
 /** Complex-number algebra for roots typed as 0.5+0.5j (j or i is the imaginary unit). */
+import type { Complex } from '../types.ts';
 import { fail } from './errors.ts';
 import type { Algebra } from './evaluate.ts';
 import { constantNamed, finite } from './scalar.ts';
 
-export interface C {
-  re: number;
-  im: number;
-}
-
 const ACCEPTED = 'numbers, j (or i), + - * / ( ) and pi';
 
-function checked(z: C, pos: number, what: string): C {
+function checked(z: Complex, pos: number, what: string): Complex {
   finite(z.re, pos, what);
   finite(z.im, pos, what);
   return z;
 }
 
-export const complexAlgebra: Algebra<C> = {
+export const complexAlgebra: Algebra<Complex> = {
   num: (v) => ({ re: v, im: 0 }),
   name(name, at) {
     if (name === 'j' || name === 'i') return { re: 0, im: 1 };

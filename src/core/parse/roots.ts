@@ -16,9 +16,9 @@
  *   '0.5^2' is never misread.
  * - The gain k is that of H(z) = k·Π(z−zᵢ)/Π(z−pᵢ), a real number expression (10^(-3/20) is fine).
  */
-import type { Result, Root, Zpk } from '../types.ts';
+import type { Complex, Result, Root, Zpk } from '../types.ts';
 import { Cursor, found } from './ast.ts';
-import { complexAlgebra, type C } from './complex.ts';
+import { complexAlgebra } from './complex.ts';
 import { fail, guard } from './errors.ts';
 import { evaluate } from './evaluate.ts';
 import { tokenize, type Token } from './lexer.ts';
@@ -54,7 +54,7 @@ function labelAt(tokens: readonly Token[], i: number): Section | undefined {
 }
 
 /** One complex value from tokens[from, to); '^' and unknown names are refused with a reason. */
-function complexFrom(tokens: readonly Token[], s: Span): C {
+function complexFrom(tokens: readonly Token[], s: Span): Complex {
   const cur = new Cursor(tokens, s.from, s.to, { stopNames: STOP });
   if (cur.atEnd()) fail('expected a root, found nothing', cur.peek().pos, ROOTS_SYNTAX);
   const node = cur.expression();
@@ -64,7 +64,7 @@ function complexFrom(tokens: readonly Token[], s: Span): C {
 }
 
 /** r∠θ with its unit, from the magnitude range and the angle range (a leading ± on the angle is allowed). */
-function polar(tokens: readonly Token[], mag: Span, angle: Span): C {
+function polar(tokens: readonly Token[], mag: Span, angle: Span): Complex {
   const r = complexFrom(tokens, mag);
   if (r.im !== 0) fail('the radius of a polar root must be real', tokens[mag.from]!.pos, 'a real radius');
   const to = angle.to;
@@ -105,7 +105,7 @@ function readItem(tokens: readonly Token[], item: Span): Root[] {
     to -= 2;
   }
   const at = tokens[from]!.pos;
-  let values: C[];
+  let values: Complex[];
   const p = topLevelIndex(tokens, { from, to }, ['∠', '@']);
   const pm = topLevelIndex(tokens, { from, to }, ['±']);
   if (p >= 0) values = [polar(tokens, { from, to: p }, { from: p + 1, to })];

@@ -1,8 +1,8 @@
 /** The transfer function at single points. */
-import type { Zpk } from '../types.ts';
+import type { Complex, Zpk } from '../types.ts';
 
 /** H(z) = k·Π(z − zᵢ)/Π(z − pᵢ) at the complex point z = re + i·im, conjugates and multiplicities included. */
-export function evalZpkAt(zpk: Zpk, re: number, im: number): { re: number; im: number } {
+export function evalZpkAt(zpk: Zpk, re: number, im: number): Complex {
   let hr = zpk.gain;
   let hi = 0;
   const apply = (cr: number, ci: number, divide: boolean) => {
@@ -30,6 +30,6 @@ export function evalZpkAt(zpk: Zpk, re: number, im: number): { re: number; im: n
 }
 
 /** H(e^{iω}) at one frequency ω in radians per sample. */
-export function responseAt(zpk: Zpk, omega: number): { re: number; im: number } {
+export function responseAt(zpk: Zpk, omega: number): Complex {
   return evalZpkAt(zpk, Math.cos(omega), Math.sin(omega));
 }

@@ -4,14 +4,13 @@
  * from the partial fractions of H(z)X(z). An input pole that lands on a pole of H (a step into a pole at
  * z = 1, a cosine at a pole's frequency on the unit circle) becomes a repeated pole, hence the n^k terms.
  */
-import type { Root, TransferFunction, Zpk } from '../types.ts';
+import type { Complex, Root, TransferFunction, Zpk } from '../types.ts';
 import { polyMul } from '../poly.ts';
 import { findPoleGroups } from './poleSearch.ts';
 import {
   expandOverPoles,
   normalizeTf,
   partialFractionsZpk,
-  type Complex,
   type PartialFractions,
   type RationalFactor,
 } from './partialFractions.ts';

@@ -5,7 +5,7 @@
  * B(x)·(1 − p x)^m / A(x) about x = 1/p (x = z^-1), computed as a product of the other poles' factors — the
  * derivative formula for repeated poles, evaluated without forming derivatives of A.
  */
-import type { Root, TransferFunction, Zpk } from '../types.ts';
+import type { Complex, Root, TransferFunction, Zpk } from '../types.ts';
 import { polyMul } from '../poly.ts';
 import { zpkToTf } from '../system/transferFunction.ts';
 import { expandRoots, rootCount } from '../system/rootList.ts';
@@ -22,12 +22,6 @@ export type NumeratorSeries = (x0r: number, x0i: number, m: number) => Series;
 export function polynomialNumerator(b: Poly): NumeratorSeries {
   const descending = Array.from(b).reverse();
   return (x0r, x0i, m) => taylorAt(descending, x0r, x0i, m);
-}
-
-/** A complex number as a plain pair. */
-export interface Complex {
-  re: number;
-  im: number;
 }
 
 /** Partial fractions of a transfer function; residues[i], poles[i], powers[i] describe one fraction. */

@@ -2,11 +2,12 @@
  * The plane's mapping between z and screen pixels: one scale for both axes (circles stay round), centred on
  * view.planeCentre, showing at least view.planeSpan z units either side of it along the shorter side.
  */
+import type { Complex } from '../../core/types.ts';
 import { scaleLinear, type ScaleLinear } from 'd3-scale';
 
 export interface PlaneView {
   span: number;
-  centre: { re: number; im: number };
+  centre: Complex;
 }
 
 export interface PlaneScale {
@@ -42,7 +43,7 @@ export function planeScale(view: PlaneView, width: number, height: number): Plan
 }
 
 /** The z of a pixel position inside the plane box. */
-export function pixelToZ(s: PlaneScale, px: number, py: number): { re: number; im: number } {
+export function pixelToZ(s: PlaneScale, px: number, py: number): Complex {
   return { re: s.x.invert(px), im: s.y.invert(py) };
 }
 
@@ -51,7 +52,7 @@ export const MIN_SPAN = 1e-4;
 export const MAX_SPAN = 1e4;
 
 /** The view after zooming by `factor` (< 1 zooms in) about the point z, which stays under the pointer. */
-export function zoomAbout(view: PlaneView, factor: number, z: { re: number; im: number }): PlaneView {
+export function zoomAbout(view: PlaneView, factor: number, z: Complex): PlaneView {
   const span = Math.min(MAX_SPAN, Math.max(MIN_SPAN, view.span * factor));
   const f = span / view.span;
   return {
@@ -68,7 +69,7 @@ export const FIT_MIN_SPAN = 0.02;
 export const HOME_VIEW: PlaneView = { span: 1.3, centre: { re: 0, im: 0 } };
 
 /** A view that frames every point given (roots and their mirrors), or the home view when there are none. */
-export function fitView(points: { re: number; im: number }[]): PlaneView {
+export function fitView(points: Complex[]): PlaneView {
   const finite = points.filter((p) => Number.isFinite(p.re) && Number.isFinite(p.im));
   if (finite.length === 0) return HOME_VIEW;
   let x0 = Infinity;

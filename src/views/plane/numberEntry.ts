@@ -2,6 +2,8 @@
  * Reading a root position typed by number: radius and angle (degrees, radians or Hz) or real and imaginary
  * parts. Returns the position or a message that says what was wrong and what is accepted.
  */
+import type { Complex } from '../../core/types.ts';
+
 export type AngleUnit = 'deg' | 'rad' | 'hz';
 
 export type Parsed<T> = { ok: true; value: T } | { ok: false; message: string };
@@ -36,7 +38,7 @@ export function parsePolar(
   angleText: string,
   unit: AngleUnit,
   fs: number,
-): Parsed<{ re: number; im: number }> {
+): Parsed<Complex> {
   const r = parseUserNumber(radiusText);
   if (r === null || r < 0) {
     return { ok: false, message: `Radius “${radiusText.trim()}” is not a number ≥ 0 (e.g. 0.95).` };
@@ -53,7 +55,7 @@ export function parsePolar(
 }
 
 /** Reads real and imaginary part text into z. */
-export function parseCartesian(reText: string, imText: string): Parsed<{ re: number; im: number }> {
+export function parseCartesian(reText: string, imText: string): Parsed<Complex> {
   const re = parseUserNumber(reText);
   if (re === null)
     return { ok: false, message: `Real part “${reText.trim()}” is not a number (e.g. −0.5 or 1e-3).` };

@@ -2,6 +2,7 @@
  * Snapping of a dragged root: each mode constrains the position the pointer gives. Pure functions on
  * z coordinates; the store then keeps a real root real and a pair above the axis.
  */
+import type { Complex } from '../../core/types.ts';
 import type { SnapMode } from '../../store/view.ts';
 
 export interface SnapSettings {
@@ -14,20 +15,15 @@ export interface SnapSettings {
   sampleRate: number;
 }
 
-export interface Z {
-  re: number;
-  im: number;
-}
-
 /** z scaled to radius r (the angle kept); the origin goes to r on the positive real axis. */
-export function snapToRadius(z: Z, r: number): Z {
+export function snapToRadius(z: Complex, r: number): Complex {
   const m = Math.hypot(z.re, z.im);
   if (m === 0) return { re: r, im: 0 };
   return { re: (z.re / m) * r, im: (z.im / m) * r };
 }
 
 /** z with its angle moved to the nearest multiple of stepHz (or to fs/2) at sample rate fs, radius kept. */
-export function snapToFrequencyGrid(z: Z, stepHz: number, fs: number): Z {
+export function snapToFrequencyGrid(z: Complex, stepHz: number, fs: number): Complex {
   const r = Math.hypot(z.re, z.im);
   if (!(stepHz > 0) || !(fs > 0) || r === 0) return z;
   const hz = (Math.abs(Math.atan2(z.im, z.re)) * fs) / (2 * Math.PI);
@@ -43,7 +39,7 @@ export function snapToFrequencyGrid(z: Z, stepHz: number, fs: number): Z {
  * and radius modes then send it to ±radius, and the frequency grid leaves it alone (only 0 and fs/2 exist
  * on the axis).
  */
-export function snapPoint(z: Z, s: SnapSettings, real = false): Z {
+export function snapPoint(z: Complex, s: SnapSettings, real = false): Complex {
   const p = real ? { re: z.re, im: 0 } : z;
   switch (s.mode) {
     case 'none':

@@ -5,12 +5,13 @@
  */
 import { useRef, type PointerEvent as ReactPointerEvent, type RefObject } from 'react';
 import type { RootKind, RootRef } from '../../core/model/design.ts';
+import type { Complex } from '../../core/types.ts';
 import { workbenchStore } from '../../store/useWorkbench.ts';
 import { frameCoalescer, type FrameCoalescer } from './frameCoalescer.ts';
 import { pixelToZ, type PlaneScale } from './geometry.ts';
 import { nearestRoot } from './rootHit.ts';
 import { rootElement } from './rootTarget.ts';
-import { snapPoint, type Z } from './snap.ts';
+import { snapPoint } from './snap.ts';
 
 /** What a click on empty space adds while placing. */
 export interface Placement {
@@ -22,8 +23,8 @@ export interface Placement {
 const CLICK_SLOP_PX = 3;
 
 type Gesture =
-  | { type: 'root'; ref: RootRef; mirror: boolean; real: boolean; offset: Z; id: number }
-  | { type: 'pan'; start: { x: number; y: number }; centre: Z; k: number; moved: boolean; id: number };
+  | { type: 'root'; ref: RootRef; mirror: boolean; real: boolean; offset: Complex; id: number }
+  | { type: 'pan'; start: { x: number; y: number }; centre: Complex; k: number; moved: boolean; id: number };
 
 interface Options {
   svgRef: RefObject<SVGSVGElement | null>;
@@ -44,20 +45,20 @@ function snapSettings() {
 
 export function usePlanePointer({ svgRef, scaleRef, placingRef, onPlaced }: Options) {
   const gesture = useRef<Gesture | null>(null);
-  const rootMoves = useRef<FrameCoalescer<{ ref: RootRef; z: Z }> | null>(null);
-  const panMoves = useRef<FrameCoalescer<Z> | null>(null);
+  const rootMoves = useRef<FrameCoalescer<{ ref: RootRef; z: Complex }> | null>(null);
+  const panMoves = useRef<FrameCoalescer<Complex> | null>(null);
   rootMoves.current ??= frameCoalescer(({ ref, z }) => workbenchStore.getState().moveRoot(ref, z.re, z.im));
   panMoves.current ??= frameCoalescer((centre) => workbenchStore.getState().setView({ planeCentre: centre }));
 
   /** The pointer's z, from the SVG's current box (re-read: the panel may change size during a drag). */
-  const zAt = (e: { clientX: number; clientY: number }): Z | null => {
+  const zAt = (e: { clientX: number; clientY: number }): Complex | null => {
     const s = scaleRef.current;
     const rect = svgRef.current?.getBoundingClientRect();
     return s && rect ? pixelToZ(s, e.clientX - rect.left, e.clientY - rect.top) : null;
   };
 
   /** Starts dragging a root; `at` is the pointer's z, or null to let the root jump to the pointer. */
-  const startRootDrag = (e: ReactPointerEvent, ref: RootRef, mirror: boolean, at: Z | null) => {
+  const startRootDrag = (e: ReactPointerEvent, ref: RootRef, mirror: boolean, at: Complex | null) => {
     const st = workbenchStore.getState();
     const root = (ref.kind === 'zero' ? st.design.zeros : st.design.poles)[ref.index];
     if (!root) return;

@@ -1,11 +1,7 @@
 import { describe, it, expect } from 'vitest';
-import {
-  partialFractions,
-  type Complex,
-  type PartialFractions,
-} from '../../../src/core/time/partialFractions.ts';
+import { partialFractions, type PartialFractions } from '../../../src/core/time/partialFractions.ts';
 import { polyFromRoots, polyEvalComplex } from '../../../src/core/poly.ts';
-import type { Root, TransferFunction } from '../../../src/core/types.ts';
+import type { Complex, Root, TransferFunction } from '../../../src/core/types.ts';
 import { mulberry32 } from '../../../src/core/random.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 import { loadFixture } from '../../helpers/fixtures.ts';
