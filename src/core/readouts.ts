@@ -1,5 +1,5 @@
 /** Per-root read-outs in the trade's units: frequency, radius, decay, Q and bandwidth, notch depth. */
-import type { Root, Zpk } from './types.ts';
+import type { Complex, Root, Zpk } from './types.ts';
 import { responseAt } from './response/pointValue.ts';
 
 /** What one stored root (a conjugate pair counts once) means at the design's sample rate. */
@@ -64,14 +64,21 @@ export function rootReadouts(zpk: Zpk, fs: number): RootReadout[] {
   return out;
 }
 
+/**
+ * The frequency a root stands for: its angle on the plane as Hz in [0, fs/2] at sample rate fs (Hz), the
+ * same for a root and its conjugate. The one read-out of a root's frequency (table, plane, marker, snapping).
+ */
+export function rootFrequencyHz(root: Complex, fs: number): number {
+  // Divide the angle first: π/(2π) is exactly 0.5, so a root at z = −1 reads exactly fs/2.
+  return (Math.abs(Math.atan2(root.im, root.re)) / (2 * Math.PI)) * fs;
+}
+
 function base(root: Root, kind: 'pole' | 'zero', fs: number): RootReadout {
-  const angleRad = Math.abs(Math.atan2(root.im, root.re));
   return {
     root,
     kind,
-    // Divide the angle first: π/(2π) is exactly 0.5, so a root at z = −1 reads exactly fs/2.
-    frequencyHz: (angleRad / (2 * Math.PI)) * fs,
+    frequencyHz: rootFrequencyHz(root, fs),
     radius: Math.hypot(root.re, root.im),
-    angleRad,
+    angleRad: Math.abs(Math.atan2(root.im, root.re)),
   };
 }

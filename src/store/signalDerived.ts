@@ -6,7 +6,7 @@
  */
 import type { Section, Zpk } from '../core/types.ts';
 import { responseZpk, type FrequencyResponse } from '../core/response/index.ts';
-import { rootReadouts } from '../core/readouts.ts';
+import { rootFrequencyHz, rootReadouts } from '../core/readouts.ts';
 import {
   createSectionFilter,
   fitTones,
@@ -120,7 +120,7 @@ export const selectSignalResponse = (s: WorkbenchState): FrequencyResponse | nul
 export function notchFrequencies(zpk: Zpk, designRate: number, fs: number): number[] {
   const found = rootReadouts(zpk, designRate)
     .filter((r) => r.kind === 'zero' && r.notchFrequencyHz !== undefined)
-    .map((r) => (r.angleRad / (2 * Math.PI)) * fs)
+    .map((r) => rootFrequencyHz(r.root, fs))
     .filter((f) => f > 0 && f < fs / 2);
   return [...new Set(found)].sort((a, b) => a - b);
 }

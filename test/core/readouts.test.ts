@@ -1,5 +1,8 @@
 import { describe, it, expect } from 'vitest';
-import { rootReadouts } from '../../src/core/readouts.ts';
+import { rootFrequencyHz, rootReadouts } from '../../src/core/readouts.ts';
+import { rootAriaLabel } from '../../src/views/plane/rootLabel.ts';
+import { snapToFrequencyGrid } from '../../src/views/plane/snap.ts';
+import { formatHz } from '../../src/views/shared/format.ts';
 import { responseZpk } from '../../src/core/response/index.ts';
 import type { Zpk } from '../../src/core/types.ts';
 import { expectClose } from '../helpers/expectClose.ts';
@@ -85,5 +88,28 @@ describe('read-out frequencies at the edges', () => {
     );
     expect(r.find((x) => x.root.re === -1)!.frequencyHz).toBe(500);
     expect(r.find((x) => x.root.re === 1)!.frequencyHz).toBe(0);
+  });
+});
+
+describe('rootFrequencyHz (the one root-frequency read-out)', () => {
+  it('is the angle as Hz for a root and its conjugate, and exact at z = −1 for odd sample rates', () => {
+    // common practice: a root at angle θ stands for θ·fs/(2π) Hz
+    const z = { re: 0.9 * Math.cos(0.3), im: 0.9 * Math.sin(0.3) };
+    expectClose(rootFrequencyHz(z, 1000), (0.3 * 1000) / (2 * Math.PI), { rel: 1e-15 });
+    expect(rootFrequencyHz({ re: z.re, im: -z.im }, 1000)).toBe(rootFrequencyHz(z, 1000));
+    for (const fs of [1000, 44100, 48000, 7, 2.5e6 / 3])
+      expect(rootFrequencyHz({ re: -1, im: 0 }, fs)).toBe(fs / 2);
+  });
+
+  it('the table, the plane label, the marker and the snapping read the same number', () => {
+    const fs = 44100;
+    const pole = { re: 0.7 * Math.cos(2.1), im: 0.7 * Math.sin(2.1), multiplicity: 1 };
+    const [readout] = rootReadouts({ zeros: [], poles: [pole], gain: 1 }, fs);
+    const hz = rootFrequencyHz(pole, fs);
+    expect(readout!.frequencyHz).toBe(hz);
+    expect(rootAriaLabel('pole', pole, fs)).toContain(formatHz(hz, 4));
+    // Snapping to a grid as fine as the root's own frequency leaves its angle where it is.
+    const snapped = snapToFrequencyGrid(pole, hz, fs);
+    expect(rootFrequencyHz(snapped, fs)).toBeCloseTo(hz, 9);
   });
 });

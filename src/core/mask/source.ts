@@ -5,6 +5,7 @@
  */
 import type { Section, Zpk } from '../types.ts';
 import { sectionsToZpk } from '../system/index.ts';
+import { rootFrequencyHz } from '../readouts.ts';
 import { magnitudeDbReader, magnitudeDbZpk } from '../response/magnitude.ts';
 
 /** A magnitude response readable at frequencies in Hz. */
@@ -22,9 +23,9 @@ export interface MagnitudeSource {
   continuous: boolean;
 }
 
-/** Angles of roots in Hz at sample rate fs (stored roots have im >= 0, so the angles lie in [0, fs/2]). */
+/** Frequencies of the roots in Hz at sample rate fs, in [0, fs/2]. */
 function rootAnglesHz(zpk: Zpk, fs: number): number[] {
-  return [...zpk.zeros, ...zpk.poles].map((r) => (Math.atan2(Math.abs(r.im), r.re) * fs) / (2 * Math.PI));
+  return [...zpk.zeros, ...zpk.poles].map((r) => rootFrequencyHz(r, fs));
 }
 
 /** A zeros/poles/gain system at sample rate fs (Hz), read from its product form. */

@@ -1,5 +1,6 @@
 /** The selected root's frequency in Hz (its angle on the plane at the design's sample rate), or null. */
 import { useMemo } from 'react';
+import { rootFrequencyHz } from '../../core/readouts.ts';
 import { rootsOf } from '../../core/model/design.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 
@@ -12,7 +13,6 @@ export function useSelectedRootHz(): { hz: number; kind: 'zero' | 'pole' } | nul
   const fs = useWorkbench((s) => s.design.sampleRate);
   return useMemo(() => {
     if (!root || !kind) return null;
-    const angle = Math.atan2(root.im, root.re);
-    return { hz: (Math.abs(angle) * fs) / (2 * Math.PI), kind };
+    return { hz: rootFrequencyHz(root, fs), kind };
   }, [root, kind, fs]);
 }

@@ -1,12 +1,8 @@
 /** Words that describe a root: its accessible name and a short caption. */
 import type { Root } from '../../core/types.ts';
+import { rootFrequencyHz } from '../../core/readouts.ts';
 import type { RootKind } from '../../core/model/design.ts';
 import { formatHz, formatNumber } from '../shared/format.ts';
-
-/** The root's frequency in Hz (its angle at sample rate fs, 0…fs/2). */
-export function rootHz(root: Root, fs: number): number {
-  return (Math.abs(Math.atan2(root.im, root.re)) * fs) / (2 * Math.PI);
-}
 
 /** e.g. "Pole pair at 48 Hz, radius 0.994, multiplicity 1" or "Real zero at z = −0.5, multiplicity 2". */
 export function rootAriaLabel(kind: RootKind, root: Root, fs: number): string {
@@ -17,5 +13,5 @@ export function rootAriaLabel(kind: RootKind, root: Root, fs: number): string {
   }
   const r = Math.hypot(root.re, root.im);
   const Noun = noun[0]!.toUpperCase() + noun.slice(1);
-  return `${Noun} pair at ${formatHz(rootHz(root, fs), 4)}, radius ${formatNumber(r, 4)}, ${m}`;
+  return `${Noun} pair at ${formatHz(rootFrequencyHz(root, fs), 4)}, radius ${formatNumber(r, 4)}, ${m}`;
 }

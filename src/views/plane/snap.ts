@@ -3,6 +3,7 @@
  * z coordinates; the store then keeps a real root real and a pair above the axis.
  */
 import type { Complex } from '../../core/types.ts';
+import { rootFrequencyHz } from '../../core/readouts.ts';
 import type { SnapMode } from '../../store/view.ts';
 
 export interface SnapSettings {
@@ -26,7 +27,7 @@ export function snapToRadius(z: Complex, r: number): Complex {
 export function snapToFrequencyGrid(z: Complex, stepHz: number, fs: number): Complex {
   const r = Math.hypot(z.re, z.im);
   if (!(stepHz > 0) || !(fs > 0) || r === 0) return z;
-  const hz = (Math.abs(Math.atan2(z.im, z.re)) * fs) / (2 * Math.PI);
+  const hz = rootFrequencyHz(z, fs);
   const nyquist = fs / 2;
   const onGrid = Math.min(nyquist, Math.round(hz / stepHz) * stepHz);
   const snapped = nyquist - hz < Math.abs(hz - onGrid) ? nyquist : onGrid;
