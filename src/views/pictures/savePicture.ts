@@ -1,8 +1,8 @@
 /** Takes a picture of one view and downloads it as SVG or PNG, titled with the design's name and sample rate. */
 import { workbenchStore } from '../../store/useWorkbench.ts';
 import { formatHz } from '../shared/format.ts';
-import { downloadBlob } from '../side/share/download.ts';
-import { fileStem } from '../side/share/fileName.ts';
+import { downloadBlob } from '../shared/download.ts';
+import { fileStem } from '../shared/fileName.ts';
 import { readPageParts } from './pageParts.ts';
 import { pictureDocument, pictureSize } from './pictureDocument.ts';
 import { svgToPng } from './toPng.ts';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { designFileName, fileStem, MAX_STEM_CHARS } from '../../../src/views/side/share/fileName.ts';
+import { designFileName, fileStem, MAX_STEM_CHARS } from '../../../src/views/shared/fileName.ts';
 import { pictureFileName } from '../../../src/views/pictures/savePicture.ts';
 
 describe('file names from design names', () => {

@@ -2,8 +2,8 @@
 import { useRef, useState } from 'react';
 import { writeSharedFile } from '../../../share/designFile.ts';
 import { useWorkbench } from '../../../store/useWorkbench.ts';
-import { downloadBlob } from './download.ts';
-import { designFileName } from './fileName.ts';
+import { downloadBlob } from '../../shared/download.ts';
+import { designFileName } from '../../shared/fileName.ts';
 import { currentShared, openShared } from './openShared.ts';
 import { readDesignBlob } from './readFile.ts';
 
