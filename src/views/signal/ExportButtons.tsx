@@ -4,9 +4,9 @@ import { SAMPLE_FORMATS, describeFormat, type SampleFormat } from '../../core/si
 import type { LoadedSignal } from '../../store/signal.ts';
 import { selectSignalOutput } from '../../store/signalDerived.ts';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
+import { downloadBlob } from '../shared/download.ts';
 import {
   defaultExportFormat,
-  downloadBlob,
   exportName,
   filteredCsv,
   filteredWav,

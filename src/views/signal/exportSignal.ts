@@ -18,6 +18,7 @@ import {
   quantizeValue,
   type Implementation,
 } from '../../core/fixed/index.ts';
+import { fileStem } from '../shared/fileName.ts';
 
 /** Rows per CSV slice. */
 export const CSV_SLICE_ROWS = 1 << 16;
@@ -117,17 +118,5 @@ export function fixedExportName(signal: LoadedSignal, extension: 'wav' | 'csv'):
 /** The export's file name: the input's name without its extension, "-filtered", the new extension. */
 export function exportName(signal: LoadedSignal, extension: 'wav' | 'csv'): string {
   const base = signal.source === 'generated' ? 'generated' : signal.name.replace(/\.[^.]*$/, '');
-  return `${base.replace(/[^\w.-]+/g, '-') || 'signal'}-filtered.${extension}`;
-}
-
-/** Offers the blob as a download under the name. */
-export function downloadBlob(blob: Blob, name: string): void {
-  const url = URL.createObjectURL(blob);
-  const a = document.createElement('a');
-  a.href = url;
-  a.download = name;
-  document.body.appendChild(a);
-  a.click();
-  a.remove();
-  setTimeout(() => URL.revokeObjectURL(url), 10_000);
+  return `${fileStem(base, 'signal')}-filtered.${extension}`;
 }

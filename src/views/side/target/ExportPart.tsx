@@ -6,8 +6,8 @@ import { exportText, type ExportFormat } from '../../../store/implementationDeri
 import { useWorkbench } from '../../../store/useWorkbench.ts';
 import { Segmented } from '../../chart/Segmented.tsx';
 import { CopyButton } from '../../shared/CopyButton.tsx';
-import { downloadText } from './download.ts';
-import { cPrefix, exportFileName } from './fileNames.ts';
+import { downloadText } from '../../shared/download.ts';
+import { cPrefix, exportFileName } from '../../shared/fileName.ts';
 import { patchSettings, useImplementation, useSettings, useSettled } from './useTarget.ts';
 
 const FORMATS: Record<ExportFormat, { label: string; extension: string; mime: string; what: string }> = {

@@ -1,32 +1,7 @@
 import { describe, it, expect } from 'vitest';
-import { cPrefix, exportFileName } from '../../../../src/views/side/target/fileNames.ts';
 import { readTypedSamples } from '../../../../src/views/side/target/typedSamples.ts';
 import { afterInputSummary, overflowSummary } from '../../../../src/views/side/target/simulationWords.ts';
 import type { SimulationReport } from '../../../../src/store/implementationDerived.ts';
-
-describe('export file names and C prefixes from the design name', () => {
-  it('keeps letters and digits, joins words, and names a C header after its prefix', () => {
-    expect(exportFileName('Hopper scale: 50 Hz hum notches', 'json')).toBe(
-      'hopper-scale-50-hz-hum-notches.json',
-    );
-    expect(exportFileName('Hopper scale: 50 Hz hum notches', 'h')).toBe('hopper_scale_50_hz_hum_notches.h');
-    expect(cPrefix('Pump skid — 3.15 kHz bracket')).toBe('pump_skid_3_15_khz_bracket');
-  });
-
-  it('never starts a C name with a digit and falls back when nothing is left', () => {
-    expect(cPrefix('4th-order anti-alias')).toBe('f_4th_order_anti_alias');
-    expect(cPrefix('→ ←')).toBe('pw_filter');
-    expect(exportFileName('', 'csv')).toBe('filter.csv');
-    expect(/^[A-Za-z_][A-Za-z0-9_]*$/.test(cPrefix('Ünïcödé names, too!'))).toBe(true);
-  });
-
-  it('stops at whole words when a name is long', () => {
-    const p = cPrefix('a very long design name that goes on and on about its hum notches');
-    expect(p.length).toBeLessThanOrEqual(32);
-    expect(p.endsWith('_')).toBe(false);
-    expect('a_very_long_design_name_that_goes_on'.startsWith(p)).toBe(true);
-  });
-});
 
 describe('typed samples for the bit-exact run', () => {
   it('reads commas, spaces, new lines and the minus sign', () => {
