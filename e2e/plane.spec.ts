@@ -102,6 +102,6 @@ test('typing a radius and angle in Hz moves the selected root; bad text changes 
   expect(z.im).toBeCloseTo(0.5, 9);
   await strip.getByLabel('r', { exact: true }).fill('half');
   await strip.getByLabel('r', { exact: true }).press('Enter');
-  await expect(strip.getByRole('alert')).toContainText('Radius “half” is not a number');
+  await expect(strip.getByRole('alert')).toContainText('Radius: "half" is not a number');
   expect(await rootAt(page, ref)).toEqual(z);
 });

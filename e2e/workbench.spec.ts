@@ -111,6 +111,32 @@ test('the gain rule resolves k and says when a rule cannot be met', async ({ pag
   expect((await readDesign(page)).gainRule).toEqual({ kind: 'fixed', value: 2 });
 });
 
+test('number fields read 0,5, the Unicode minus, fractions and units by one policy', async ({ page }) => {
+  await openWorkbench(page);
+  const rate = page.getByRole('textbox', { name: 'Sample rate' });
+  await rate.fill('44,1');
+  await rate.press('Enter');
+  expect((await readDesign(page)).sampleRate).toBe(44100);
+  await rate.fill('800 Hz');
+  await rate.press('Enter');
+  expect((await readDesign(page)).sampleRate).toBe(800);
+  await rate.fill('1,000');
+  await rate.press('Enter');
+  await expect(page.getByRole('alert')).toContainText('ambiguous');
+  expect((await readDesign(page)).sampleRate).toBe(800);
+  await rate.press('Escape');
+  await expect(page.getByRole('alert')).toHaveCount(0);
+
+  await page.getByRole('combobox', { name: 'Gain rule' }).selectOption('fixed');
+  const k = page.getByRole('textbox', { name: 'k =' });
+  await k.fill('−1/4');
+  await k.press('Enter');
+  expect((await readDesign(page)).gainRule).toEqual({ kind: 'fixed', value: -0.25 });
+  await k.fill('0,5');
+  await k.press('Tab');
+  expect((await readDesign(page)).gainRule).toEqual({ kind: 'fixed', value: 0.5 });
+});
+
 test('clicking a row of the root table selects that root', async ({ page }) => {
   await openWorkbench(page);
   const row = page.getByTestId('root-table').locator('tbody tr').nth(1);

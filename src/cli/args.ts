@@ -1,4 +1,10 @@
-/** Command-line argument reading: `--flag value`, `--flag=value`, boolean switches, and positionals. */
+/**
+ * Command-line argument reading: `--flag value`, `--flag=value`, boolean switches, and positionals. Numbers
+ * in flags are read by the one reader of typed numbers (core/parse/typedNumber.ts): a flag with one number
+ * reads it as a page field does (0.5 or 0,5, −2, 1e-3, 1/3, and the flag's unit, e.g. --fs 48kHz); a flag
+ * with a list reads commas as separators.
+ */
+import { readNumber, readNumberList, type TypedUnitName } from '../core/parse/typedNumber.ts';
 
 export class UsageError extends Error {}
 
@@ -44,23 +50,40 @@ export function parseArgs(
   return { positionals, flags, switches };
 }
 
+/** One number typed on the command line for --name (`what` says what it is), or a usage error that quotes it. */
+export function readFlagNumber(name: string, raw: string, what?: string, unit?: TypedUnitName): number {
+  const r = readNumber(raw, unit ? { unit } : {});
+  if (!r.ok)
+    throw new UsageError(
+      `--${name} must be a number${what ? ` (${what})` : ''}; got "${raw}": ${r.message}; expected ${r.expected}.`,
+    );
+  return r.value;
+}
+
+/** A list of numbers typed on the command line for --name (commas separate), or a usage error. */
+export function readFlagList(name: string, raw: string, what?: string): number[] {
+  const r = readNumberList(raw);
+  if (!r.ok)
+    throw new UsageError(
+      `--${name} must be numbers separated by commas${what ? ` (${what})` : ''}; got "${raw}": ${r.message}.`,
+    );
+  return r.values;
+}
+
 /** A positive integer flag within [min, max], or the default when absent. */
 export function intFlag(args: ParsedArgs, name: string, fallback: number, min: number, max: number): number {
   const raw = args.flags.get(name);
   if (raw === undefined) return fallback;
-  const v = Number(raw);
-  if (!Number.isInteger(v) || v < min || v > max) {
-    throw new UsageError(`--${name} must be a whole number from ${min} to ${max}; got "${raw}".`);
+  const r = readNumber(raw);
+  if (!r.ok || !Number.isInteger(r.value) || r.value < min || r.value > max) {
+    const why = r.ok ? '' : `: ${r.message}`;
+    throw new UsageError(`--${name} must be a whole number from ${min} to ${max}; got "${raw}"${why}.`);
   }
-  return v;
+  return r.value;
 }
 
-/** A finite number flag, or the default when absent. */
-export function numberFlag(args: ParsedArgs, name: string, fallback: number): number {
+/** A finite number flag (in `unit`, which may also be typed after it), or the default when absent. */
+export function numberFlag(args: ParsedArgs, name: string, fallback: number, unit?: TypedUnitName): number {
   const raw = args.flags.get(name);
-  if (raw === undefined) return fallback;
-  const v = Number(raw.trim());
-  if (raw.trim() === '' || !Number.isFinite(v))
-    throw new UsageError(`--${name} must be a number; got "${raw}".`);
-  return v;
+  return raw === undefined ? fallback : readFlagNumber(name, raw, undefined, unit);
 }

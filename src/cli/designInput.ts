@@ -80,7 +80,7 @@ function parseFailure(flag: string, text: string, error: { message: string; posi
 /** Reads the design from the positional file argument or from the flags. */
 export function readDesign(args: ParsedArgs): CliDesign {
   const fsGiven = args.flags.has('fs');
-  const fs = numberFlag(args, 'fs', 1);
+  const fs = numberFlag(args, 'fs', 1, 'Hz');
   if (!(fs > 0))
     throw new UsageError(`--fs must be a positive sample rate in Hz; got "${args.flags.get('fs')}".`);
   const file = args.positionals[0];

@@ -13,7 +13,7 @@ import {
 import { evaluateMask, maskFromDesigner, type MaskResult } from '../../core/mask/index.ts';
 import { writeDesignFile } from '../../share/designFile.ts';
 import type { Design } from '../../core/model/design.ts';
-import { UsageError, parseArgs, type ParsedArgs } from '../args.ts';
+import { UsageError, parseArgs, readFlagList, readFlagNumber, type ParsedArgs } from '../args.ts';
 import type { CliDesign } from '../designInput.ts';
 import { toJson } from '../json.ts';
 import type { CliIo } from '../main.ts';
@@ -47,10 +47,7 @@ class FlagReader {
   number(name: string, what: string): number {
     const raw = this.args.flags.get(name);
     if (raw === undefined) throw this.missing(name, what);
-    const v = Number(raw.trim());
-    if (raw.trim() === '' || !Number.isFinite(v))
-      throw new UsageError(`--${name} must be a number (${what}); got "${raw}".`);
-    return v;
+    return readFlagNumber(name, raw, what);
   }
   optionalNumber(name: string, what: string): number | undefined {
     return this.has(name) ? this.number(name, what) : undefined;
@@ -58,11 +55,7 @@ class FlagReader {
   list(name: string, what: string): number[] {
     const raw = this.args.flags.get(name);
     if (raw === undefined) throw this.missing(name, what);
-    const parts = raw.split(',').map((s) => s.trim());
-    const values = parts.map(Number);
-    if (parts.some((s) => s === '') || values.some((v) => !Number.isFinite(v)))
-      throw new UsageError(`--${name} must be numbers separated by commas (${what}); got "${raw}".`);
-    return values;
+    return readFlagList(name, raw, what);
   }
   choice<T extends string>(name: string, choices: readonly T[], fallback?: T): T {
     const raw = this.args.flags.get(name);

@@ -18,6 +18,7 @@ import {
   type SampleFormat,
 } from '../../core/signal/index.ts';
 import { UsageError, intFlag, numberFlag, parseArgs, type ParsedArgs } from '../args.ts';
+import { readNumber } from '../../core/parse/typedNumber.ts';
 import { DESIGN_FLAGS, readDesign, type CliDesign } from '../designInput.ts';
 import { toJson } from '../json.ts';
 import type { CliIo } from '../main.ts';
@@ -105,9 +106,9 @@ function inputSignal(spec: string, n: number | null, fs: number, channel: number
   if (spec === 'step') return { samples: makeStep(count), sampleRate: null, notes: [] };
   const sine = /^sine:(.+)$/.exec(spec);
   if (sine) {
-    const hz = Number(sine[1]);
-    if (!Number.isFinite(hz) || hz < 0)
-      throw new UsageError(`--input sine:<Hz> needs a frequency in Hz; got "${sine[1]}".`);
+    const read = readNumber(sine[1]!, { unit: 'Hz' });
+    const hz = read.ok ? read.value : NaN;
+    if (!(hz >= 0)) throw new UsageError(`--input sine:<Hz> needs a frequency in Hz; got "${sine[1]}".`);
     return { samples: makeSine((2 * Math.PI * hz) / fs, count), sampleRate: null, notes: [] };
   }
   const loaded = isWavPath(spec) ? loadWav(spec, channel) : loadCsv(spec, fs);
@@ -164,7 +165,7 @@ async function streamToFile(
     throw new UsageError(`--output ${output} is the input file; writing would destroy it while it is read.`);
   }
   const channel = channelFlag(args);
-  const inputRate = args.flags.has('input-rate') ? numberFlag(args, 'input-rate', d.sampleRate) : null;
+  const inputRate = args.flags.has('input-rate') ? numberFlag(args, 'input-rate', d.sampleRate, 'Hz') : null;
   if (inputRate !== null && !(inputRate > 0))
     throw new UsageError(`--input-rate must be a positive rate in Hz.`);
   const wavIn = isWavPath(input);
@@ -271,7 +272,7 @@ export async function runSimulate(argv: string[], io: CliIo): Promise<number> {
   const x = inputSignal(
     spec,
     n,
-    args.flags.has('input-rate') ? numberFlag(args, 'input-rate', d.sampleRate) : d.sampleRate,
+    args.flags.has('input-rate') ? numberFlag(args, 'input-rate', d.sampleRate, 'Hz') : d.sampleRate,
     channelFlag(args),
   );
   for (const note of x.notes) io.stderr(`note: ${note}\n`);

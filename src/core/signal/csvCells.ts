@@ -1,7 +1,7 @@
 /**
  * Cells of a delimited text line: the delimiter and decimal mark, guessed from the first data line unless
- * given, and strict number reading (plain decimals with an optional exponent; nothing that merely
- * JavaScript's Number() would accept, such as "" or "0x1f").
+ * given. Cells are read as numbers by the one reader of typed numbers (parse/typedNumber.ts numberCell):
+ * nothing that merely JavaScript's Number() would accept, such as "" or "0x1f".
  */
 
 /** Cell separators read: comma, semicolon, tab, or runs of spaces. */
@@ -12,8 +12,6 @@ export interface CsvDialect {
   delimiter: CsvDelimiter;
   decimal: '.' | ',';
 }
-
-const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
 
 /** Lines that are skipped wherever they appear: starting with #, % or //. */
 export function isCommentLine(trimmed: string): boolean {
@@ -39,12 +37,6 @@ export function splitCells(trimmed: string, delimiter: CsvDelimiter): string[] {
   return cells.map((c) =>
     c.length >= 2 && c.startsWith('"') && c.endsWith('"') ? c.slice(1, -1).trim() : c,
   );
-}
-
-/** The number a cell holds, or NaN when it is not a plain decimal number in the dialect. */
-export function readNumberCell(cell: string, decimal: '.' | ','): number {
-  const text = decimal === ',' ? cell.replace(',', '.') : cell;
-  return NUMBER.test(text) ? Number(text) : NaN;
 }
 
 /** Digits after the decimal mark in a number cell (0 for integers and exponent forms are counted as read). */

@@ -7,14 +7,8 @@
  * chunks of any size (CsvSignalReader); readCsvSignal reads a whole text.
  */
 import type { InputError } from '../types.ts';
-import {
-  decimalsOf,
-  guessDialect,
-  isCommentLine,
-  readNumberCell,
-  splitCells,
-  type CsvDialect,
-} from './csvCells.ts';
+import { decimalsOf, guessDialect, isCommentLine, splitCells, type CsvDialect } from './csvCells.ts';
+import { numberCell } from '../parse/typedNumber.ts';
 
 /** Largest allowed departure of one time step from the mean step, as a fraction of the mean step. */
 export const TIME_STEP_TOLERANCE = 1e-3;
@@ -153,7 +147,7 @@ export class CsvSignalReader {
       if (this.dialect === null) {
         const d = guessDialect(trimmed, this.givenDialect());
         const first = splitCells(trimmed, d.delimiter)[0]!;
-        if (Number.isNaN(readNumberCell(first, d.decimal))) {
+        if (Number.isNaN(numberCell(first, d.decimal))) {
           if (this.header === null) {
             this.header = splitCells(trimmed, d.delimiter);
             continue;
@@ -172,11 +166,11 @@ export class CsvSignalReader {
           expected: `at least ${need} columns separated by "${shown(this.dialect.delimiter)}"`,
         });
       }
-      const v = readNumberCell(cells[this.valueCol]!, this.dialect.decimal);
+      const v = numberCell(cells[this.valueCol]!, this.dialect.decimal);
       if (Number.isNaN(v)) return this.fail(notNumber(this.line, cells[this.valueCol]!, this.valueCol));
       if (this.timeCol >= 0) {
         const cell = cells[this.timeCol]!;
-        const t = readNumberCell(cell, this.dialect.decimal);
+        const t = numberCell(cell, this.dialect.decimal);
         if (Number.isNaN(t)) return this.fail(notNumber(this.line, cell, this.timeCol));
         const e = this.step(t, cell);
         if (e) return this.fail(e);

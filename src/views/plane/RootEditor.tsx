@@ -9,13 +9,7 @@ import type { RootRef } from '../../core/model/design.ts';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import { formatNumber } from '../shared/format.ts';
 import { MultiplicityControl } from './MultiplicityControl.tsx';
-import {
-  parseCartesian,
-  parsePolar,
-  parseUserNumber,
-  radiansToAngle,
-  type AngleUnit,
-} from './numberEntry.ts';
+import { parseCartesian, parsePolar, parseReal, radiansToAngle, type AngleUnit } from './numberEntry.ts';
 import { NUDGE_FINE_STEP, NUDGE_STEP } from './nudge.ts';
 
 type Form = 'polar' | 'cartesian';
@@ -46,10 +40,10 @@ function Editor({ target: ref, root }: { target: RootRef; root: Root }) {
   const apply = (e: FormEvent) => {
     e.preventDefault();
     if (real) {
-      const x = parseUserNumber(a);
-      if (x === null) return setError(`Position “${a.trim()}” is not a number (e.g. −0.5).`);
+      const x = parseReal(a);
+      if (!x.ok) return setError(x.message);
       setError(null);
-      return st().moveRoot(ref, x, 0);
+      return st().moveRoot(ref, x.value, 0);
     }
     const p = form === 'polar' ? parsePolar(a, b, unit, fs) : parseCartesian(a, b);
     if (!p.ok) return setError(p.message);

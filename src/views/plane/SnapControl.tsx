@@ -1,8 +1,8 @@
 /** Choice of snapping for dragged roots, with the radius or frequency step it needs. */
-import { useEffect, useState } from 'react';
 import type { SnapMode } from '../../store/view.ts';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
-import { parseUserNumber } from './numberEntry.ts';
+import { NumberField } from '../shared/NumberField.tsx';
+import type { NumberFieldRule } from '../shared/fieldReading.ts';
 
 const MODES: [SnapMode, string][] = [
   ['none', 'off'],
@@ -12,29 +12,26 @@ const MODES: [SnapMode, string][] = [
   ['frequency', 'Hz grid'],
 ];
 
+/** The radius roots snap to: 0 or more. */
+export const snapRadiusRule: NumberFieldRule = {
+  check: (x) => (x >= 0 ? null : 'The snap radius is 0 or more.'),
+};
+/** The frequency grid's step: above 0 Hz. */
+export const snapStepRule: NumberFieldRule = {
+  typedUnit: 'Hz',
+  check: (x) => (x > 0 ? null : 'The snap step is above 0 Hz.'),
+};
+
 export function SnapControl() {
   const snap = useWorkbench((s) => s.view.snap);
   const radius = useWorkbench((s) => s.view.snapRadius);
   const stepHz = useWorkbench((s) => s.view.snapFrequencyHz);
-  const param = snap === 'radius' ? radius : snap === 'frequency' ? stepHz : null;
-  const [text, setText] = useState('');
-  useEffect(() => setText(param === null ? '' : String(param)), [param]);
-  const valid = (() => {
-    const x = parseUserNumber(text);
-    return x !== null && (snap === 'radius' ? x >= 0 : x > 0) ? x : null;
-  })();
-  const commit = () => {
-    if (valid === null) return;
-    workbenchStore.getState().setView(snap === 'radius' ? { snapRadius: valid } : { snapFrequencyHz: valid });
-  };
+  const setView = workbenchStore.getState().setView;
   return (
     <span className="pw-snap">
       <label>
         Snap{' '}
-        <select
-          value={snap}
-          onChange={(e) => workbenchStore.getState().setView({ snap: e.target.value as SnapMode })}
-        >
+        <select value={snap} onChange={(e) => setView({ snap: e.target.value as SnapMode })}>
           {MODES.map(([m, words]) => (
             <option key={m} value={m}>
               {words}
@@ -42,25 +39,30 @@ export function SnapControl() {
           ))}
         </select>
       </label>
-      {param !== null && (
-        <label className={valid === null ? 'pw-invalid' : undefined}>
-          <span className="pw-visually-hidden">{snap === 'radius' ? 'Snap radius' : 'Snap step in Hz'}</span>
-          <input
-            className="pw-num pw-num-short"
-            value={text}
-            inputMode="decimal"
-            aria-invalid={valid === null}
-            title={
-              snap === 'radius'
-                ? 'Radius roots snap to (≥ 0), Enter applies'
-                : 'Frequency step in Hz (> 0), Enter applies'
-            }
-            onChange={(e) => setText(e.target.value)}
-            onKeyDown={(e) => e.key === 'Enter' && commit()}
-            onBlur={commit}
-          />
-          {snap === 'frequency' ? ' Hz' : ''}
-        </label>
+      {snap === 'radius' && (
+        <NumberField
+          label="Snap radius"
+          hideLabel
+          className="pw-snap-field"
+          inputClassName="pw-num pw-num-short"
+          value={radius}
+          title="Radius roots snap to (≥ 0), Enter applies"
+          {...snapRadiusRule}
+          onCommit={(snapRadius) => setView({ snapRadius })}
+        />
+      )}
+      {snap === 'frequency' && (
+        <NumberField
+          label="Snap step in Hz"
+          hideLabel
+          className="pw-snap-field"
+          inputClassName="pw-num pw-num-short"
+          unit="Hz"
+          value={stepHz}
+          title="Frequency step in Hz (> 0), Enter applies"
+          {...snapStepRule}
+          onCommit={(snapFrequencyHz) => setView({ snapFrequencyHz })}
+        />
       )}
     </span>
   );

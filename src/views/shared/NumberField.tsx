@@ -1,64 +1,97 @@
 /**
- * A number typed by the user, committed on Enter or when the field loses focus. A bad entry shows a
- * message under the field and the old value stays in force; Escape brings the old value back.
+ * The number field of the page: a label, a box, a unit, and its message. It reads what is typed with the
+ * one reader of typed numbers (decimal point or comma, Unicode minus, exponents, simple fractions, and the
+ * field's unit: see core/parse/typedNumber.ts), commits on Enter or when the box loses focus, keeps text it
+ * does not accept with a message (the old value stays in force), and brings the old value back on Escape.
  */
-import { useId, useState } from 'react';
+import { useId, type ReactNode } from 'react';
+import { TYPED_UNITS, type TypedUnitName } from '../../core/parse/typedNumber.ts';
+import { readNumberField, type NumberFieldRule } from './fieldReading.ts';
 import { formatNumber } from './format.ts';
+import { useDraft } from './useDraft.ts';
 
-/** Reads a plain decimal number (a comma is taken as the decimal point); NaN when it is not one. */
-export function readNumber(text: string): number {
-  const t = text.trim().replace(',', '.').replace(/^−/, '-');
-  return /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(t) ? Number(t) : NaN;
-}
-
-interface Props {
+export interface NumberFieldProps extends NumberFieldRule {
   label: string;
-  value: number;
-  /** Why a number is not acceptable, or null when it is. */
-  check: (x: number) => string | null;
-  onCommit: (x: number) => void;
+  /** The label only for screen readers (a table cell's column names it on screen). */
+  hideLabel?: boolean;
+  value: number | undefined;
+  /** Unit shown after the box; when it is one of the typed units (and no typedUnit is given), it may be typed too. */
   unit?: string;
+  /** Applies an accepted value; may still refuse it by returning why. */
+  onCommit: (x: number) => string | null | void;
+  /** Called instead of onCommit when an optional field is emptied. */
+  onClear?: () => string | null | void;
+  /** Text of the committed value (default: `digits` significant digits). */
+  format?: (x: number) => string;
   digits?: number;
+  size?: number;
+  className?: string;
+  inputClassName?: string;
+  messageClassName?: string;
+  placeholder?: string | undefined;
+  title?: string | undefined;
+  /** Receives the field's message when it is shown elsewhere (a table's message row); the field then shows none. */
+  onMessage?: (message: string | null) => void;
+  /** Drawn after the box and its unit (e.g. a unit choice). */
+  children?: ReactNode;
 }
 
-export function NumberField({ label, value, check, onCommit, unit, digits = 6 }: Props) {
-  const [draft, setDraft] = useState<string | null>(null);
-  const [error, setError] = useState<string | null>(null);
+const typedUnitOf = (unit: string | undefined): TypedUnitName | undefined =>
+  unit !== undefined && unit in TYPED_UNITS ? (unit as TypedUnitName) : undefined;
+
+export function NumberField(p: NumberFieldProps) {
   const id = useId();
-  const commit = () => {
-    if (draft === null) return;
-    const x = readNumber(draft);
-    const why = Number.isFinite(x) ? check(x) : `"${draft.trim()}" is not a number; type e.g. 50 or 0.25`;
-    if (why) return setError(why);
-    if (x !== value) onCommit(x);
-    setDraft(null);
-    setError(null);
+  const digits = p.digits ?? 6;
+  const shown =
+    p.value === undefined
+      ? ''
+      : p.format
+        ? p.format(p.value)
+        : formatNumber(p.value, digits).replace('−', '-');
+  const typedUnit = p.typedUnit ?? typedUnitOf(p.unit);
+  const rule: NumberFieldRule = {
+    ...(typedUnit && { typedUnit }),
+    ...(p.bareFactor !== undefined && { bareFactor: p.bareFactor }),
+    ...(p.check && { check: p.check }),
+    ...(p.optional && { optional: true }),
   };
+  const draft = useDraft(
+    shown,
+    (text) => readNumberField(text, rule),
+    (x) => {
+      if (x === undefined) return p.value === undefined ? null : (p.onClear?.() ?? null);
+      return x === p.value ? null : p.onCommit(x);
+    },
+    p.onMessage,
+  );
+  const message = p.onMessage ? null : draft.message;
   return (
-    <span className="pw-number-field">
-      <label htmlFor={id}>{label}</label>
+    <span className={p.className ?? 'pw-number-field'}>
+      {!p.hideLabel && <label htmlFor={id}>{p.label}</label>}
       <input
         id={id}
+        type="text"
         inputMode="decimal"
-        size={8}
-        className={error ? 'pw-invalid' : undefined}
-        value={draft ?? formatNumber(value, digits).replace('−', '-')}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${id}-err` : undefined}
-        onChange={(e) => setDraft(e.target.value)}
-        onBlur={commit}
+        size={p.size ?? 8}
+        className={[p.inputClassName, draft.message && 'pw-invalid'].filter(Boolean).join(' ') || undefined}
+        value={draft.text}
+        placeholder={p.placeholder}
+        title={p.title}
+        aria-label={p.hideLabel ? p.label : undefined}
+        aria-invalid={draft.message ? true : undefined}
+        aria-describedby={message ? `${id}-err` : undefined}
+        onChange={(e) => draft.change(e.target.value)}
+        onBlur={draft.commit}
         onKeyDown={(e) => {
-          if (e.key === 'Enter') commit();
-          if (e.key === 'Escape') {
-            setDraft(null);
-            setError(null);
-          }
+          if (e.key === 'Enter') draft.commit();
+          if (e.key === 'Escape') draft.cancel();
         }}
       />
-      {unit && <span>{unit}</span>}
-      {error && (
-        <span id={`${id}-err`} role="alert" className="pw-field-error pw-block">
-          {error}
+      {p.unit && <span className="pw-number-field-unit">{p.unit}</span>}
+      {p.children}
+      {message && (
+        <span id={`${id}-err`} role="alert" className={p.messageClassName ?? 'pw-field-error pw-block'}>
+          {message}
         </span>
       )}
     </span>

@@ -4,6 +4,7 @@ import type { GainRule } from '../../core/model/design.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 import { formatNumber } from '../shared/format.ts';
 import { NumberField } from '../shared/NumberField.tsx';
+import type { NumberFieldRule } from '../shared/fieldReading.ts';
 
 const KINDS: { kind: GainRule['kind']; label: string }[] = [
   { kind: 'dc', label: '0 dB at DC' },
@@ -12,6 +13,18 @@ const KINDS: { kind: GainRule['kind']; label: string }[] = [
   { kind: 'peak', label: '0 dB at the peak' },
   { kind: 'fixed', label: 'Fixed gain k' },
 ];
+
+/** The frequency where the gain rule puts 0 dB: 0 … fs/2 Hz. */
+export function gainHzRule(fs: number): NumberFieldRule {
+  return {
+    typedUnit: 'Hz',
+    check: (x) =>
+      x >= 0 && x <= fs / 2 ? null : `Choose a frequency from 0 to ${formatNumber(fs / 2)} Hz (Nyquist)`,
+  };
+}
+
+/** A fixed gain k: any finite number (the reader refuses what is not one). */
+export const gainValueRule: NumberFieldRule = {};
 
 /** The rule of a kind, seeded so that switching rules keeps the response where it is when possible. */
 function ruleOf(kind: GainRule['kind'], gain: number, fs: number, last: GainRule): GainRule {
@@ -50,11 +63,7 @@ export function GainRuleControl() {
             label="at"
             unit="Hz"
             value={rule.hz}
-            check={(x) =>
-              x >= 0 && x <= fs / 2
-                ? null
-                : `Choose a frequency from 0 to ${formatNumber(fs / 2)} Hz (Nyquist)`
-            }
+            {...gainHzRule(fs)}
             onCommit={(hz) => setGainRule({ kind: 'frequency', hz })}
           />
         )}
@@ -63,7 +72,7 @@ export function GainRuleControl() {
             label="k ="
             value={rule.value}
             digits={8}
-            check={(x) => (Number.isFinite(x) ? null : 'k must be a finite number')}
+            {...gainValueRule}
             onCommit={(value) => setGainRule({ kind: 'fixed', value })}
           />
         )}

@@ -4,13 +4,14 @@
  * frequencies typed by the user. The caption says how the levels were read (a least-squares fit of the
  * tones over the whole recording) and readings near the noise floor are marked.
  */
-import { useId, useState } from 'react';
+import { useId } from 'react';
 import { selectLevelPlan, selectLevelTable, type LevelTableData } from '../../store/signalDerived.ts';
 import { LEVEL_FLOOR_MARGIN_DB, levelMethod } from '../../core/signal/index.ts';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import type { LevelChoice } from '../../store/signal.ts';
 import { formatHz, formatNumber } from '../shared/format.ts';
-import { readNumber } from '../shared/NumberField.tsx';
+import { readListField, type FieldReading } from '../shared/fieldReading.ts';
+import { useDraft } from '../shared/useDraft.ts';
 
 function db(x: number): string {
   return Number.isFinite(x) ? formatNumber(x, 3) : x < 0 ? '−∞' : '∞';
@@ -55,20 +56,11 @@ function changeDb(x: number): string {
   return x > 0 ? `+${t}` : t;
 }
 
-/** Reads "50, 150, 250" into frequencies in Hz; a message when it is not such a list. */
-export function readFrequencyList(
-  text: string,
-  nyquist: number,
-): { ok: true; value: number[] } | { ok: false; message: string } {
-  const parts = text.split(/[,;\s]+/).filter((t) => t !== '');
-  const xs = parts.map(readNumber);
-  const bad = xs.findIndex((x) => !(x >= 0 && x <= nyquist));
-  if (parts.length === 0 || bad >= 0) {
-    const what =
-      parts.length === 0 ? 'Nothing typed' : `"${parts[bad]}" is not a frequency from 0 to ${nyquist} Hz`;
-    return { ok: false, message: `${what}; type frequencies in Hz separated by commas, e.g. 50, 150, 250.` };
-  }
-  return { ok: true, value: xs };
+/** Reads "50, 150, 250" into frequencies in Hz (the list policy of typed numbers); a message when it is not such a list. */
+export function readFrequencyList(text: string, nyquist: number): FieldReading<number[]> {
+  return readListField(text, (x) =>
+    x >= 0 && x <= nyquist ? null : `${formatHz(x)} is not a frequency from 0 to ${formatHz(nyquist)}.`,
+  );
 }
 
 export function LevelTable() {
@@ -77,21 +69,18 @@ export function LevelTable() {
   const readings = table?.report?.readings ?? null;
   const choice = useWorkbench((s) => s.signal.levels);
   const nyquist = useWorkbench((s) => (s.signal.current?.sampleRate ?? 2) / 2);
-  const [text, setText] = useState<string | null>(null);
-  const [error, setError] = useState<string | null>(null);
   const id = useId();
+  const shown = choice.kind === 'list' ? choice.frequenciesHz.join(', ') : '';
+  const draft = useDraft(
+    shown,
+    (text) => readFrequencyList(text, nyquist),
+    (frequenciesHz) => workbenchStore.getState().setLevelChoice({ kind: 'list', frequenciesHz }),
+  );
+  const error = draft.message;
   const set = (c: LevelChoice) => {
     workbenchStore.getState().setLevelChoice(c);
-    setError(null);
+    draft.cancel();
   };
-  const commit = () => {
-    if (text === null) return;
-    const r = readFrequencyList(text, nyquist);
-    if (!r.ok) return setError(r.message);
-    set({ kind: 'list', frequenciesHz: r.value });
-    setText(null);
-  };
-  const shown = text ?? (choice.kind === 'list' ? choice.frequenciesHz.join(', ') : '');
   return (
     <div className="pw-levels" data-testid="level-readout">
       <h3>
@@ -123,17 +112,14 @@ export function LevelTable() {
           type="text"
           size={12}
           placeholder="e.g. 50, 150"
-          value={shown}
+          value={draft.text}
           aria-invalid={error !== null}
           aria-describedby={error ? `${id}-err` : undefined}
-          onChange={(e) => setText(e.target.value)}
-          onBlur={commit}
+          onChange={(e) => draft.change(e.target.value)}
+          onBlur={draft.commit}
           onKeyDown={(e) => {
-            if (e.key === 'Enter') commit();
-            if (e.key === 'Escape') {
-              setText(null);
-              setError(null);
-            }
+            if (e.key === 'Enter') draft.commit();
+            if (e.key === 'Escape') draft.cancel();
           }}
         />
         Hz

@@ -2,6 +2,7 @@
 import { useState } from 'react';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 import { NumberField } from '../shared/NumberField.tsx';
+import { rateRule } from '../shell/sampleRate.ts';
 import { cancelLoad, dismissStatus, provideSampleRate, useLoader } from './loader.ts';
 
 export function SourceStatus() {
@@ -45,13 +46,7 @@ function RateQuestion({ name, count }: { name: string; count: number }) {
       <p>
         “{name}” holds {count} samples and no time column. At what rate were they taken?
       </p>
-      <NumberField
-        label="Sample rate"
-        unit="Hz"
-        value={rate}
-        check={(x) => (x > 0 && x <= 1e9 ? null : 'A sample rate above 0 Hz, up to 1 GHz.')}
-        onCommit={setRate}
-      />
+      <NumberField label="Sample rate" unit="Hz" value={rate} {...rateRule('Hz')} onCommit={setRate} />
       <button type="button" className="pw-small-button" onClick={() => provideSampleRate(rate)}>
         Use {rate} Hz
       </button>

@@ -5,7 +5,7 @@
  */
 import { generateSignal, type GeneratorSpec } from '../../core/signal/index.ts';
 import type { LoadedSignal } from '../../store/signal.ts';
-import { readNumber } from '../shared/NumberField.tsx';
+import { readListField, readNumberField, type NumberFieldRule } from '../shared/fieldReading.ts';
 
 export type PartKind = GeneratorSpec['kind'];
 
@@ -129,6 +129,12 @@ export const PRESETS: { id: string; label: string; recipe: Recipe }[] = [
   { id: 'step', label: 'A step', recipe: { duration: '2', parts: [newPart('step')] } },
 ];
 
+/** The signal's duration: seconds above 0, up to MAX_DURATION_S (s or ms may be typed). */
+export const durationRule: NumberFieldRule = {
+  typedUnit: 's',
+  check: (x) => (x > 0 && x <= MAX_DURATION_S ? null : `Duration: seconds above 0, up to ${MAX_DURATION_S}.`),
+};
+
 /** A problem in the form: which part (0-based; -1 for the duration) and field, and what is accepted. */
 export interface RecipeError {
   part: number;
@@ -140,14 +146,9 @@ type Checked<T> = { ok: true; value: T } | { ok: false; error: RecipeError };
 
 /** Checks the form and builds the engine's specs and the sample count at sample rate fs (Hz). */
 export function checkRecipe(recipe: Recipe, fs: number): Checked<{ specs: GeneratorSpec[]; n: number }> {
-  const seconds = readNumber(recipe.duration);
-  if (!(seconds > 0 && seconds <= MAX_DURATION_S)) {
-    return fail(
-      -1,
-      'duration',
-      `Duration "${recipe.duration}": a number of seconds above 0, up to ${MAX_DURATION_S}.`,
-    );
-  }
+  const duration = readNumberField(recipe.duration, durationRule);
+  if (!duration.ok) return fail(-1, 'duration', duration.message);
+  const seconds = duration.value!;
   const n = Math.round(seconds * fs);
   if (n > MAX_GENERATED_SAMPLES) {
     return fail(
@@ -175,19 +176,16 @@ function partSpec(p: RecipePart, i: number, fs: number): Checked<GeneratorSpec> 
   const nyquist = fs / 2;
   const num = (key: string, ok: (x: number) => boolean, accepted: string): number | RecipeError => {
     const text = p.fields[key] ?? '';
-    const x = readNumber(text);
-    return Number.isFinite(x) && ok(x) ? x : { part: i, field: key, message: `"${text}": ${accepted}.` };
+    const r = readNumberField(text, {
+      ...typedUnitOf(p.kind, key),
+      check: (x) => (ok(x) ? null : `"${text}": ${accepted}.`),
+    });
+    return r.ok ? r.value! : { part: i, field: key, message: r.message };
   };
   const list = (key: string, ok: (x: number) => boolean, accepted: string): number[] | RecipeError => {
     const text = p.fields[key] ?? '';
-    const xs = text
-      .split(/[,;\s]+/)
-      .filter((t) => t !== '')
-      .map(readNumber);
-    if (xs.length === 0 || xs.some((x) => !(Number.isFinite(x) && ok(x)))) {
-      return { part: i, field: key, message: `"${text}": ${accepted}, separated by commas.` };
-    }
-    return xs;
+    const r = readListField(text, (x) => (ok(x) ? null : `"${text}": ${accepted}, separated by commas.`));
+    return r.ok ? r.value : { part: i, field: key, message: r.message };
   };
   const below = (what: string) => `${what} from 0 up to half the sample rate (${nyquist} Hz)`;
   const any = () => true;
@@ -249,6 +247,12 @@ function partSpec(p: RecipePart, i: number, fs: number): Checked<GeneratorSpec> 
     }
   }
   return isErr(spec) ? { ok: false, error: spec } : { ok: true, value: spec };
+}
+
+/** The unit a part's field may be typed in (the unit it shows, when the reader knows it). */
+function typedUnitOf(kind: PartKind, key: string): { typedUnit?: 'Hz' | 's' } {
+  const unit = PART_KINDS.find((k) => k.kind === kind)?.fields.find((f) => f.key === key)?.unit;
+  return unit === 'Hz' || unit === 's' ? { typedUnit: unit } : {};
 }
 
 function isErr(x: unknown): x is RecipeError {

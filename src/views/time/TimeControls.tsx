@@ -2,9 +2,9 @@
 import { memo } from 'react';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import type { ViewSettings } from '../../store/view.ts';
-import { NumberField } from '../chart/NumberField.tsx';
+import { NumberField } from '../shared/NumberField.tsx';
 import { Segmented } from '../chart/Segmented.tsx';
-import { checkSamples, checkSineHz } from './bounds.ts';
+import { samplesRule, sineHzRule } from './bounds.ts';
 
 const setView = (patch: Partial<ViewSettings>) => workbenchStore.getState().setView(patch);
 
@@ -32,8 +32,11 @@ export const TimeControls = memo(function TimeControls() {
         <NumberField
           label="at"
           unit="Hz"
+          className="pw-numfield"
+          messageClassName="pw-numfield-msg"
+          size={6}
           value={sineHz}
-          check={(t) => checkSineHz(t, fs)}
+          {...sineHzRule(fs)}
           onCommit={(v) => setView({ sineHz: v })}
         />
       ) : null}
@@ -50,8 +53,11 @@ export const TimeControls = memo(function TimeControls() {
       <NumberField
         label="N"
         unit="samples"
+        className="pw-numfield"
+        messageClassName="pw-numfield-msg"
+        size={6}
         value={samples}
-        check={checkSamples}
+        {...samplesRule}
         onCommit={(v) => setView({ timeSamples: v })}
       />
       <Segmented

@@ -1,26 +1,23 @@
-/** Accepted values of the time view's number fields, and the messages shown for anything else. */
+/** The rules of the time view's number fields (read by the one reader of typed numbers), and their messages. */
 import { TIME_SAMPLES_MAX, TIME_SAMPLES_MIN } from '../../core/model/limits.ts';
+import type { NumberFieldRule } from '../shared/fieldReading.ts';
 
-export type Checked = { ok: true; value: number } | { ok: false; message: string };
+/** A whole number of samples in [TIME_SAMPLES_MIN, TIME_SAMPLES_MAX]. */
+export const samplesRule: NumberFieldRule = {
+  typedUnit: 'samples',
+  check: (v) => {
+    if (!Number.isInteger(v)) return 'Use a whole number of samples';
+    if (v < TIME_SAMPLES_MIN || v > TIME_SAMPLES_MAX)
+      return `Samples must be ${TIME_SAMPLES_MIN} … ${TIME_SAMPLES_MAX}`;
+    return null;
+  },
+};
 
-/** A whole number of samples in [TIME_SAMPLES_MIN, TIME_SAMPLES_MAX], from what the user typed. */
-export function checkSamples(text: string): Checked {
-  const v = Number(text.trim());
-  if (text.trim() === '' || !Number.isFinite(v))
-    return { ok: false, message: `“${text}” is not a number of samples` };
-  if (!Number.isInteger(v)) return { ok: false, message: 'Use a whole number of samples' };
-  if (v < TIME_SAMPLES_MIN || v > TIME_SAMPLES_MAX) {
-    return { ok: false, message: `Samples must be ${TIME_SAMPLES_MIN} … ${TIME_SAMPLES_MAX}` };
-  }
-  return { ok: true, value: v };
-}
-
-/** A sinusoid frequency in Hz in [0, fs/2] (Nyquist), from what the user typed. */
-export function checkSineHz(text: string, fs: number): Checked {
-  const v = Number(text.trim());
-  if (text.trim() === '' || !Number.isFinite(v))
-    return { ok: false, message: `“${text}” is not a frequency in Hz` };
-  if (v < 0 || v > fs / 2)
-    return { ok: false, message: `Frequency must be 0 … ${fs / 2} Hz (half the sample rate)` };
-  return { ok: true, value: v };
+/** A sinusoid frequency in Hz in [0, fs/2] (Nyquist). */
+export function sineHzRule(fs: number): NumberFieldRule {
+  return {
+    typedUnit: 'Hz',
+    check: (v) =>
+      v >= 0 && v <= fs / 2 ? null : `Frequency must be 0 … ${fs / 2} Hz (half the sample rate)`,
+  };
 }

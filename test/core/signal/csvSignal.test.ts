@@ -5,6 +5,7 @@ import {
   writeCsvSignal,
   TIME_STEP_TOLERANCE,
 } from '../../../src/core/signal/index.ts';
+import { SINGLE_FIELD_CASES } from '../../helpers/numberPolicy.ts';
 
 function ok(text: string, options = {}) {
   const r = readCsvSignal(text, options);
@@ -13,6 +14,20 @@ function ok(text: string, options = {}) {
 }
 
 describe('readCsvSignal', () => {
+  it('reads every value cell by the number policy (one cell per line, so commas never separate here)', () => {
+    // Texts the policy reads, in a one-column file; a comma can only be a decimal mark in such a file.
+    const cases = SINGLE_FIELD_CASES.filter(
+      ([t, v]) => v !== null && t.trim() !== '' && !/\s/.test(t.trim()),
+    );
+    const text = cases.map(([t]) => t.trim()).join('\n');
+    const samples = ok(text, { sampleRate: 1, decimal: ',', delimiter: ';' }).samples;
+    expect(Array.from(samples)).toEqual(cases.map(([, v]) => v));
+    for (const [t, v] of SINGLE_FIELD_CASES) {
+      if (v !== null || t.trim() === '' || /\s/.test(t.trim()) || t.includes(',')) continue;
+      expect(readCsvSignal(`1\n${t}\n`, { sampleRate: 1 }).status, t).toBe('error');
+    }
+  });
+
   it('one column without a sample rate asks for one, with the samples read', () => {
     const r = readCsvSignal('# comment\nvalue\n1\n2.5\n\n-3e-1\n');
     expect(r.status).toBe('needs-sample-rate');

@@ -1,17 +1,54 @@
 import { describe, it, expect } from 'vitest';
-import { parseCartesian, parsePolar, parseUserNumber } from '../../../src/views/plane/numberEntry.ts';
+import {
+  angleRule,
+  multiplicityRule,
+  parseCartesian,
+  parsePolar,
+  parseReal,
+  partRule,
+  radiusRule,
+} from '../../../src/views/plane/numberEntry.ts';
+import { readNumberField, type NumberFieldRule } from '../../../src/views/shared/fieldReading.ts';
+import { HZ_FIELD_CASES, NO_UNIT_CASES, expectNumberPolicy } from '../../helpers/numberPolicy.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 
-describe('parseUserNumber', () => {
-  it('accepts plain, signed, Unicode-minus and exponent forms', () => {
-    expect(parseUserNumber(' 0.95 ')).toBe(0.95);
-    expect(parseUserNumber('\u22120.5')).toBe(-0.5);
-    expect(parseUserNumber('1e-3')).toBe(0.001);
-    expect(parseUserNumber('.5')).toBe(0.5);
+describe('the root editor fields follow the number policy', () => {
+  const field = (rule: NumberFieldRule) => (text: string) => readNumberField(text, rule);
+  const any = () => true;
+  it('position, real and imaginary parts: any number, no unit', () => {
+    expectNumberPolicy({ read: field(partRule), admissible: any }, NO_UNIT_CASES);
+    const real = (text: string) => {
+      const r = parseReal(text);
+      return r.ok ? r : { ok: false as const, message: r.message };
+    };
+    expectNumberPolicy({ read: real, admissible: any }, NO_UNIT_CASES);
+    expectNumberPolicy(
+      {
+        read: (text) => {
+          const r = parseCartesian(text, '0');
+          return r.ok ? { ok: true, value: r.value.re } : r;
+        },
+        admissible: any,
+      },
+      NO_UNIT_CASES,
+    );
   });
-  it('rejects empty text, words, hex and half numbers', () => {
-    for (const t of ['', ' ', 'abc', '0x10', '1.2.3', '1e', '--1', 'Infinity'])
-      expect(parseUserNumber(t)).toBeNull();
+  it('radius: 0 or more; angle in Hz, degrees or radians (that unit may be typed)', () => {
+    expectNumberPolicy({ read: field(radiusRule), admissible: (x) => x >= 0 }, NO_UNIT_CASES);
+    expectNumberPolicy({ read: field(angleRule('hz')), admissible: any }, HZ_FIELD_CASES);
+    expect(field(angleRule('deg'))('45°')).toEqual({ ok: true, value: 45 });
+    expect(field(angleRule('rad'))('0,5 rad')).toEqual({ ok: true, value: 0.5 });
+    expect(field(angleRule('deg'))('45 Hz').ok).toBe(false);
+  });
+  it('multiplicity: a whole number from 1 to 64', () => {
+    expectNumberPolicy(
+      { read: field(multiplicityRule), admissible: (x) => Number.isInteger(x) && x >= 1 && x <= 64 },
+      NO_UNIT_CASES,
+    );
+  });
+  it('0,5 typed as a radius is one half (it used to be refused here)', () => {
+    const p = parsePolar('0,5', '0', 'hz', 1000);
+    expect(p).toEqual({ ok: true, value: { re: 0.5, im: 0 } });
   });
 });
 
@@ -33,7 +70,7 @@ describe('parsePolar', () => {
     const b = parsePolar('0.5', 'ten', 'deg', 1000);
     expect(a.ok || b.ok).toBe(false);
     if (!a.ok) expect(a.message).toMatch(/Radius/);
-    if (!b.ok) expect(b.message).toMatch(/Angle “ten”.*degrees/);
+    if (!b.ok) expect(b.message).toMatch(/^Angle: "ten" is not a number.*in ° or deg/);
   });
 });
 

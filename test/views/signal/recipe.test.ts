@@ -1,6 +1,48 @@
 import { describe, expect, it } from 'vitest';
-import { PRESETS, checkRecipe, newPart, recipeSignal } from '../../../src/views/signal/recipe.ts';
+import {
+  PRESETS,
+  checkRecipe,
+  durationRule,
+  newPart,
+  recipeSignal,
+} from '../../../src/views/signal/recipe.ts';
+import { readNumberField } from '../../../src/views/shared/fieldReading.ts';
 import { makeHum, makeStepAt } from '../../../src/core/signal/index.ts';
+import {
+  HZ_FIELD_CASES,
+  NO_UNIT_CASES,
+  expectListPolicy,
+  expectNumberPolicy,
+} from '../../helpers/numberPolicy.ts';
+
+/** One field of a one-part recipe read as the form reads it: the value it puts in the engine's spec. */
+function fieldOf(kind: 'step' | 'tones' | 'hum', key: string, pick: (spec: never) => number | number[]) {
+  return (text: string) => {
+    const r = checkRecipe({ duration: '1', parts: [newPart(kind, { [key]: text })] }, 2000);
+    return r.ok
+      ? { ok: true as const, value: pick(r.value.specs[0] as never) as never }
+      : { ok: false as const, message: r.error.message };
+  };
+}
+
+describe('recipe fields follow the number policy', () => {
+  it('a level, a frequency, a time and the duration read typed numbers (and their units)', () => {
+    const level = fieldOf('step', 'level', (s: { level: number }) => s.level);
+    expectNumberPolicy({ read: level, admissible: () => true }, NO_UNIT_CASES);
+    const f0 = fieldOf('hum', 'fundamental', (s: { fundamentalHz: number }) => s.fundamentalHz);
+    expectNumberPolicy({ read: f0, admissible: (x) => x > 0 && x < 200 }, HZ_FIELD_CASES);
+    const at = fieldOf('step', 'at', (s: { atSeconds: number }) => s.atSeconds);
+    expectNumberPolicy({ read: at, admissible: (x) => x >= 0 }, [['20 ms', 0.02]]);
+    const duration = (text: string) => readNumberField(text, durationRule);
+    expectNumberPolicy({ read: duration, admissible: (x) => x > 0 && x <= 600 }, [['20 ms', 0.02]]);
+  });
+  it('tone frequencies are a list of typed numbers', () => {
+    const tones = fieldOf('tones', 'frequencies', (s: { tones: { frequencyHz: number }[] }) =>
+      s.tones.map((t) => t.frequencyHz),
+    );
+    expectListPolicy(tones as never, (x) => x >= 0 && x < 1000);
+  });
+});
 
 describe('recipes', () => {
   it('every preset makes a signal at the asked rate and length', () => {

@@ -1,25 +1,27 @@
 import { describe, it, expect } from 'vitest';
-import { checkSamples, checkSineHz } from '../../../src/views/time/bounds.ts';
+import { samplesRule, sineHzRule } from '../../../src/views/time/bounds.ts';
+import { readNumberField, type NumberFieldRule } from '../../../src/views/shared/fieldReading.ts';
+import { HZ_FIELD_CASES, NO_UNIT_CASES, expectNumberPolicy } from '../../helpers/numberPolicy.ts';
 import { TIME_SAMPLES_MAX, TIME_SAMPLES_MIN } from '../../../src/core/model/limits.ts';
 import { timeLayout, timeUnit } from '../../../src/views/time/layout.ts';
 import { sampleAfterKey } from '../../../src/views/time/sampleKeys.ts';
 
 describe('time view fields', () => {
-  it('accepts a whole number of samples within bounds and explains anything else', () => {
-    expect(checkSamples('1024')).toEqual({ ok: true, value: 1024 });
-    expect(checkSamples(String(TIME_SAMPLES_MIN))).toEqual({ ok: true, value: TIME_SAMPLES_MIN });
-    const big = checkSamples(String(TIME_SAMPLES_MAX + 1));
-    expect(big.ok).toBe(false);
+  const read = (rule: NumberFieldRule) => (text: string) => readNumberField(text, rule);
+  it('N samples reads typed numbers by the policy and keeps a whole number within bounds', () => {
+    const admissible = (x: number) => Number.isInteger(x) && x >= TIME_SAMPLES_MIN && x <= TIME_SAMPLES_MAX;
+    expectNumberPolicy({ read: read(samplesRule), admissible }, NO_UNIT_CASES.slice(1));
+    expect(read(samplesRule)('1024')).toEqual({ ok: true, value: 1024 });
+    expect(read(samplesRule)('1024 samples')).toEqual({ ok: true, value: 1024 });
+    const big = read(samplesRule)(String(TIME_SAMPLES_MAX + 1));
     expect(!big.ok && big.message).toMatch(/65536/);
-    expect(checkSamples('12.5').ok).toBe(false);
-    expect(checkSamples('lots').ok).toBe(false);
+    expect(read(samplesRule)('12.5')).toEqual({ ok: false, message: 'Use a whole number of samples' });
   });
-  it('accepts a sine frequency from 0 to Nyquist', () => {
-    expect(checkSineHz('50', 2000)).toEqual({ ok: true, value: 50 });
-    expect(checkSineHz('1000', 2000).ok).toBe(true);
-    const over = checkSineHz('1000.5', 2000);
+  it('the sine frequency reads typed numbers and Hz by the policy, from 0 to Nyquist', () => {
+    const admissible = (x: number) => x >= 0 && x <= 1000;
+    expectNumberPolicy({ read: read(sineHzRule(2000)), admissible }, HZ_FIELD_CASES);
+    const over = read(sineHzRule(2000))('1000.5');
     expect(!over.ok && over.message).toMatch(/1000 Hz/);
-    expect(checkSineHz('-1', 2000).ok).toBe(false);
   });
   it('picks s, ms or µs for the seconds axis', () => {
     expect(timeUnit(0.128).unit).toBe('ms');

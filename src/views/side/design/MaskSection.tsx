@@ -33,6 +33,7 @@ function RegionRow({ region, index }: { region: MaskRegion; index: number }) {
     <td>
       <MaskCell
         name={`${name} ${what}`}
+        unit={key === 'fromHz' || key === 'toHz' ? 'Hz' : 'dB'}
         value={region[key]}
         optional={key === 'lowerDb' || key === 'upperDb'}
         onCommit={(v) => commit({ [key]: v })}

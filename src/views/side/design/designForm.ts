@@ -3,7 +3,9 @@
  * field that is not a number), and a designer description written back into the form for re-running.
  */
 import type { DesignerSpec, IirSpec } from '../../../core/design/index.ts';
-import { readNumber } from '../../shared/NumberField.tsx';
+import { readListField, readNumberField, type FieldReading } from '../../shared/fieldReading.ts';
+import { TYPED_UNITS, type TypedUnitName } from '../../../core/parse/typedNumber.ts';
+import { fieldLabel } from './fieldLabels.ts';
 import {
   defaultForm,
   isBand,
@@ -18,14 +20,13 @@ export type FieldErrors = Partial<Record<FieldKey, string>>;
 
 export type FormReading = { ok: true; spec: DesignerSpec } | { ok: false; errors: FieldErrors };
 
-/** Reads "1, 3, 5" (commas, spaces or semicolons between) into whole numbers; null when it is not that. */
-export function readHarmonics(text: string): number[] | null {
-  const parts = text
-    .split(/[\s,;]+/)
-    .map((t) => t.trim())
-    .filter(Boolean);
-  if (!parts.length || !parts.every((p) => /^\d+$/.test(p))) return null;
-  return parts.map(Number);
+/** Reads "1, 3, 5" (a list of typed numbers) into harmonic numbers, or says what is wrong. */
+export function readHarmonics(text: string): FieldReading<number[]> {
+  return readListField(text, (h) =>
+    Number.isInteger(h) && h >= 1
+      ? null
+      : `${h} is not a harmonic number; type whole numbers from 1, e.g. 1, 3, 5`,
+  );
 }
 
 /** True when a requirement field is left empty (allowed for a given order: then there is no requirement). */
@@ -57,14 +58,17 @@ export function readForm(s: DesignFormState, fs: number): FormReading {
       if (!optional.has(k)) errors[k] = 'required: type a number';
       continue;
     }
-    const v = readNumber(text);
-    if (Number.isFinite(v)) num[k] = v;
-    else errors[k] = `"${text}" is not a number; type e.g. ${k === 'order' ? '4' : '50 or 0.5'}`;
+    const unit = fieldLabel(k, s.kind, s.family).unit;
+    const typed = unit !== undefined && unit in TYPED_UNITS ? { typedUnit: unit as TypedUnitName } : {};
+    const r = readNumberField(text, typed);
+    if (r.ok) num[k] = r.value!;
+    else errors[k] = r.message;
   }
   let harmonics: number[] | null = null;
   if (fields.includes('harmonics')) {
-    harmonics = readHarmonics(s.values.harmonics);
-    if (!harmonics) errors.harmonics = 'type whole harmonic numbers separated by commas, e.g. 1, 3, 5';
+    const r = readHarmonics(s.values.harmonics);
+    if (r.ok) harmonics = r.value;
+    else errors.harmonics = r.message;
   }
   if (isClassical(s.kind) && !s.autoOrder) {
     const given = fields.filter((k) => REQUIREMENT.includes(k) && !blank(s, k));

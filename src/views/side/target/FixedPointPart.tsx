@@ -8,7 +8,7 @@ import {
 import { Segmented } from '../../chart/Segmented.tsx';
 import { formatNumber } from '../../shared/format.ts';
 import { NumberField } from '../../shared/NumberField.tsx';
-import { patchProblem } from './settingCheck.ts';
+import { bitsRule } from './settingCheck.ts';
 import { patchSettings, useImplementation, useSettings } from './useTarget.ts';
 
 /** A whole-number field for one setting, checked against the engine's rules before it is applied. */
@@ -24,10 +24,8 @@ function BitsField(p: {
       unit="bits"
       value={p.value}
       digits={3}
-      check={(x) =>
-        Number.isInteger(x) ? patchProblem(p.settings, { [p.field]: x }) : `Type a whole number of bits.`
-      }
-      onCommit={(x) => patchSettings({ [p.field]: x })}
+      {...bitsRule(p.settings, p.field)}
+      onCommit={(x) => void patchSettings({ [p.field]: x })}
     />
   );
 }

@@ -5,7 +5,6 @@ import { simulationReport } from '../../../store/implementationDerived.ts';
 import { useWorkbench } from '../../../store/useWorkbench.ts';
 import { Segmented } from '../../chart/Segmented.tsx';
 import { NumberField } from '../../shared/NumberField.tsx';
-import { formatNumber } from '../../shared/format.ts';
 import {
   LISTED_OVERFLOWS,
   afterInputSummary,
@@ -14,11 +13,9 @@ import {
   overflowWords,
 } from './simulationWords.ts';
 import { useSettings, useSettled } from './useTarget.ts';
-import { readTypedSamples } from './typedSamples.ts';
+import { readTypedSamples, runLengthRule, runLevelRule, runSineRule } from './typedSamples.ts';
 
 type Kind = 'impulse' | 'step' | 'sine' | 'noise' | 'typed';
-/** Longest run offered, samples (the run is repeated on every change of the design). */
-const MAX_SAMPLES = 65536;
 /** Noise seed of the run (fixed, so a run is reproducible). */
 const NOISE_SEED = 1;
 
@@ -84,22 +81,12 @@ export function SimulationPart() {
         </div>
       ) : (
         <div className="pw-target-fields pw-sim-fields">
-          <NumberField
-            label="Length"
-            unit="samples"
-            value={length}
-            check={(x) =>
-              Number.isInteger(x) && x >= 1 && x <= MAX_SAMPLES
-                ? null
-                : `Type a whole number of samples from 1 to ${MAX_SAMPLES}.`
-            }
-            onCommit={setLength}
-          />
+          <NumberField label="Length" unit="samples" value={length} {...runLengthRule} onCommit={setLength} />
           <NumberField
             label={kind === 'noise' ? 'Std. dev.' : 'Amplitude'}
             unit="of full scale"
             value={amplitude}
-            check={(x) => (x > 0 && x <= 2 ? null : 'Type a level above 0 and at most 2 (1 is full scale).')}
+            {...runLevelRule}
             onCommit={setAmplitude}
           />
           {kind === 'sine' && (
@@ -107,11 +94,7 @@ export function SimulationPart() {
               label="Frequency"
               unit="Hz"
               value={sineHz}
-              check={(x) =>
-                x >= 0 && x <= fs / 2
-                  ? null
-                  : `Type a frequency from 0 to ${formatNumber(fs / 2)} Hz (Nyquist).`
-              }
+              {...runSineRule(fs)}
               onCommit={setSineHz}
             />
           )}

@@ -3,6 +3,7 @@ import { runDesigner } from '../../../../src/core/design/index.ts';
 import { evaluateMask } from '../../../../src/core/mask/index.ts';
 import { FAMILIES, KINDS, defaultForm, isClassical } from '../../../../src/views/side/design/designKinds.ts';
 import { formOf, readForm, readHarmonics } from '../../../../src/views/side/design/designForm.ts';
+import { expectListPolicy } from '../../../helpers/numberPolicy.ts';
 import { errorField } from '../../../../src/views/side/design/designErrors.ts';
 import { maskFromDesigner } from '../../../../src/core/mask/index.ts';
 import { describeDesigner } from '../../../../src/views/side/design/describe.ts';
@@ -83,10 +84,11 @@ describe('readForm', () => {
   });
 
   it('reads harmonic lists written with commas or spaces, and refuses anything else', () => {
-    expect(readHarmonics('1, 3,5')).toEqual([1, 3, 5]);
-    expect(readHarmonics('1 2;  7')).toEqual([1, 2, 7]);
-    expect(readHarmonics('1, 2.5')).toBeNull();
-    expect(readHarmonics('')).toBeNull();
+    expect(readHarmonics('1, 3,5')).toEqual({ ok: true, value: [1, 3, 5] });
+    expect(readHarmonics('1 2;  7')).toEqual({ ok: true, value: [1, 2, 7] });
+    expect(readHarmonics('1, 2.5').ok).toBe(false);
+    expect(readHarmonics('').ok).toBe(false);
+    expectListPolicy(readHarmonics, (h) => Number.isInteger(h) && h >= 1);
   });
 });
 
