@@ -48,6 +48,10 @@ export interface InputError {
   position?: number;
   /** What would have been accepted at that place. */
   expected?: string;
+  /** The parameter at fault (a designer description's key), so a form can mark that field. */
+  parameter?: string;
+  /** The item of a list parameter at fault, 0-based. */
+  index?: number;
 }
 
 /** Radians per sample (normalised angular frequency, pi = Nyquist). */

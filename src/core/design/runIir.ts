@@ -1,29 +1,19 @@
-/** Runs a classical IIR designer description: checks it, estimates the order if asked, designs, judges. */
+/**
+ * Runs a classical IIR designer description whose parameters have passed their checks: estimates the order
+ * if asked, designs, and judges against the requirement when there is one.
+ */
 import type { BandShape } from './iir.ts';
 import { designIir } from './iir.ts';
 import { requirementMargin } from './margin.ts';
 import { estimateOrder } from './orderEstimate.ts';
 import type { Requirement } from './requirement.ts';
-import type { DesignResult, IirSpec } from './spec.ts';
-import { DesignInputError, MAX_DESIGN_ORDER, designOrder, edges, positive, sampleRate } from './validate.ts';
+import type { DesignResult } from './result.ts';
+import type { IirSpec } from './entries/classical.ts';
+import { BAND_SHAPE_OPTIONS, FAMILY_OPTIONS } from './entries/classical.ts';
+import { DesignInputError, MAX_DESIGN_ORDER } from './validate.ts';
 import { shortNumber } from '../shortNumber.ts';
 
-const FAMILIES = ['butterworth', 'chebyshev1', 'chebyshev2', 'elliptic'] as const;
-const RESPONSES = ['lowpass', 'highpass', 'bandpass', 'bandstop'] as const;
-const FAMILY_NAMES = {
-  butterworth: 'Butterworth',
-  chebyshev1: 'Chebyshev I',
-  chebyshev2: 'Chebyshev II',
-  elliptic: 'elliptic',
-};
-const RESPONSE_NAMES = {
-  lowpass: 'low-pass',
-  highpass: 'high-pass',
-  bandpass: 'band-pass',
-  bandstop: 'band-stop',
-};
-
-const edgeCount = (r: BandShape) => (r === 'lowpass' || r === 'highpass' ? 1 : 2);
+const responseWords = (r: BandShape) => BAND_SHAPE_OPTIONS.find((o) => o.value === r)!.label.toLowerCase();
 
 /** The pass-band/stop-band edges must nest the right way round for the band shape. */
 function checkNesting(r: BandShape, p: number[], s: number[]): void {
@@ -41,63 +31,56 @@ function checkNesting(r: BandShape, p: number[], s: number[]): void {
   }[r];
   if (!ok)
     throw new DesignInputError(
-      `pass-band ${p.join(',')} Hz and stop-band ${s.join(',')} Hz do not fit a ${RESPONSE_NAMES[r]}`,
+      `pass-band ${p.join(',')} Hz and stop-band ${s.join(',')} Hz do not fit a ${responseWords(r)}`,
       expected,
+      'stopbandHz',
     );
 }
 
-function requirementOf(spec: IirSpec, fs: number, needed: boolean): Requirement | undefined {
-  const complete =
-    spec.passbandHz && spec.stopbandHz && spec.rippleDb !== undefined && spec.attenuationDb !== undefined;
-  if (!needed && !complete) return undefined;
-  const n = edgeCount(spec.response);
-  const passbandHz = edges('pass-band edges', spec.passbandHz, n, fs);
-  const stopbandHz = edges('stop-band edges', spec.stopbandHz, n, fs);
-  checkNesting(spec.response, passbandHz, stopbandHz);
-  const rippleDb = positive('pass-band ripple', spec.rippleDb, 'dB');
-  const attenuationDb = positive('stop-band attenuation', spec.attenuationDb, 'dB', rippleDb);
-  return { response: spec.response, passbandHz, stopbandHz, rippleDb, attenuationDb, fs };
+/** The requirement of a description that gives one (its parameters are checked: both bands, ripple, attenuation). */
+function requirementOf(spec: IirSpec): Requirement | undefined {
+  if (!spec.passbandHz || !spec.stopbandHz) return undefined;
+  checkNesting(spec.response, spec.passbandHz, spec.stopbandHz);
+  return {
+    response: spec.response,
+    passbandHz: spec.passbandHz,
+    stopbandHz: spec.stopbandHz,
+    rippleDb: spec.rippleDb!,
+    attenuationDb: spec.attenuationDb!,
+    fs: spec.fs,
+  };
 }
 
-/** Designs a classical filter from its description (throws DesignInputError on a bad parameter). */
+/** Designs a classical filter from its checked description (throws DesignInputError on what the checks cannot see). */
 export function runIir(spec: IirSpec): DesignResult {
-  const fs = sampleRate(spec.fs);
-  if (!FAMILIES.includes(spec.family))
-    throw new DesignInputError(`family '${String(spec.family)}' is not known`, FAMILIES.join(', '));
-  if (!RESPONSES.includes(spec.response))
-    throw new DesignInputError(`response '${String(spec.response)}' is not known`, RESPONSES.join(', '));
-  const auto = spec.order === 'auto';
-  const req = requirementOf(spec, fs, auto);
-  const needRipple = spec.family === 'chebyshev1' || spec.family === 'elliptic';
-  const needAtten = spec.family === 'chebyshev2' || spec.family === 'elliptic';
-  const rippleDb = needRipple ? positive('pass-band ripple', spec.rippleDb, 'dB') : spec.rippleDb;
-  const attenuationDb = needAtten
-    ? positive('stop-band attenuation', spec.attenuationDb, 'dB', spec.family === 'elliptic' ? rippleDb : 0)
-    : spec.attenuationDb;
-  const estimate = req && auto ? estimateOrder(spec.family, req) : undefined;
+  const { fs, family } = spec;
+  const req = requirementOf(spec);
+  const estimate = req && spec.order === 'auto' ? estimateOrder(family, req) : undefined;
   if (estimate && estimate.order > MAX_DESIGN_ORDER)
     throw new DesignInputError(
       `the requirement needs order ${estimate.order}, above the limit of ${MAX_DESIGN_ORDER}`,
       'a wider transition band, more ripple or less attenuation',
+      'order',
     );
-  const order = estimate ? estimate.order : designOrder(spec.order as number);
-  const edgesHz = estimate
-    ? estimate.naturalEdgesHz
-    : edges('edges', spec.edgesHz, edgeCount(spec.response), fs);
+  const order = estimate ? estimate.order : (spec.order as number);
+  const edgesHz = estimate ? estimate.naturalEdgesHz : spec.edgesHz!;
+  const needRipple = family === 'chebyshev1' || family === 'elliptic';
+  const needAtten = family === 'chebyshev2' || family === 'elliptic';
   const zpk = designIir({
-    family: spec.family,
+    family,
     response: spec.response,
     order,
     edgesHz,
     fs,
-    ...(rippleDb !== undefined && { rippleDb }),
-    ...(attenuationDb !== undefined && { attenuationDb }),
+    ...(spec.rippleDb !== undefined && { rippleDb: spec.rippleDb }),
+    ...(spec.attenuationDb !== undefined && { attenuationDb: spec.attenuationDb }),
   });
   const margin = req ? requirementMargin(zpk, req) : undefined;
   const fmt = (v: number) => shortNumber(v, 6);
-  let note = `order ${order} ${FAMILY_NAMES[spec.family]} ${RESPONSE_NAMES[spec.response]}, edges ${edgesHz.map(fmt).join(', ')} Hz`;
-  if (needRipple) note += `, ${fmt(rippleDb!)} dB ripple`;
-  if (needAtten) note += `, ${fmt(attenuationDb!)} dB stop band`;
+  const familyWords = FAMILY_OPTIONS.find((f) => f.value === family)!.words;
+  let note = `order ${order} ${familyWords} ${responseWords(spec.response)}, edges ${edgesHz.map(fmt).join(', ')} Hz`;
+  if (needRipple) note += `, ${fmt(spec.rippleDb!)} dB ripple`;
+  if (needAtten) note += `, ${fmt(spec.attenuationDb!)} dB stop band`;
   note += `, fs ${fmt(fs)} Hz`;
   if (estimate) note += ' (least order meeting the requirement)';
   return { zpk, note, ...(estimate && { estimate }), ...(margin && { margin }) };

@@ -3,8 +3,8 @@
  * of the open-ended parts (designer, mask, implementation, view). APPEND ONLY: an entry's index
  * is part of link format 1, so entries are never removed or reordered, only added at the end.
  */
-export const LINK_DICTIONARY: readonly string[] = [
-  // designer fields and kinds
+/** The designer's words (kinds, parameter keys, choices) of link format 1; a test holds them to the registry. */
+export const DESIGNER_WORDS: readonly string[] = [
   'designer',
   'kind',
   'fs',
@@ -43,7 +43,10 @@ export const LINK_DICTIONARY: readonly string[] = [
   'bandpass',
   'bandstop',
   'auto',
-  // view fields and values
+];
+
+/** The shared view settings' words (keys and values) of link format 1. */
+export const VIEW_WORDS: readonly string[] = [
   'view',
   'magnitudeScale',
   'phaseMode',
@@ -68,10 +71,12 @@ export const LINK_DICTIONARY: readonly string[] = [
   'noise',
   'stems',
   'line',
-  // reserved for the parts still to come
-  'mask',
-  'implementation',
 ];
+
+/** The design's other open-ended parts. */
+const PART_WORDS: readonly string[] = ['mask', 'implementation'];
+
+export const LINK_DICTIONARY: readonly string[] = [...DESIGNER_WORDS, ...VIEW_WORDS, ...PART_WORDS];
 
 const INDEX = new Map(LINK_DICTIONARY.map((s, i) => [s, i]));
 

@@ -1,60 +1,43 @@
-/** Zod schema of the designer that produced a design (DesignerSpec in src/core/design), kept with the design. */
+/**
+ * Zod schema of the designer that produced a design (DesignerSpec in src/core/design), kept with the design.
+ * It is built from the designer registry: every kind with its parameters, their choices and list limits;
+ * numbers are only bounded here, runDesigner checks their sense.
+ */
 import { z } from 'zod';
-import type { DesignerSpec } from '../../core/design/index.ts';
-import { MAX_DESIGN_ORDER } from '../../core/design/index.ts';
+import { DESIGNERS, type DesignerEntry, type DesignerSpec, type Parameter } from '../../core/design/index.ts';
 import { finite } from './common.ts';
-import { MAX_EDGES, MAX_HARMONICS } from './limits.ts';
 
-const opt = finite.exactOptional();
-const edges = z.array(finite).min(1).max(MAX_EDGES).exactOptional();
-const width = { bandwidthHz: opt, q: opt };
+/** Largest harmonic number (or other whole-number item) a file may hold. */
+const MAX_WHOLE_ITEM = 1_000_000;
 
-/** Every designer kind with its parameters; numbers are only bounded here, runDesigner checks their sense. */
-export const designerSpec = z.discriminatedUnion('kind', [
-  z.object({ kind: z.enum(['notch', 'peak']), fs: finite, f0: finite, ...width }),
-  z.object({ kind: z.literal('dcBlocker'), fs: finite, cutoffHz: finite }),
-  z.object({
-    kind: z.literal('harmonicNotch'),
-    fs: finite,
-    f0: finite,
-    harmonics: z.array(z.number().int().min(1).max(1_000_000)).max(MAX_HARMONICS),
-    ...width,
-  }),
-  z.object({ kind: z.literal('comb'), fs: finite, f0: finite, type: z.enum(['notch', 'peak']), ...width }),
-  z.object({
-    kind: z.literal('peakingEq'),
-    fs: finite,
-    f0: finite,
-    gainDb: finite,
-    q: opt,
-    bandwidthOctaves: opt,
-  }),
-  z.object({
-    kind: z.enum(['lowShelf', 'highShelf']),
-    fs: finite,
-    f0: finite,
-    gainDb: finite,
-    q: opt,
-    slope: opt,
-  }),
-  z.object({
-    kind: z.literal('iir'),
-    fs: finite,
-    family: z.enum(['butterworth', 'chebyshev1', 'chebyshev2', 'elliptic']),
-    response: z.enum(['lowpass', 'highpass', 'bandpass', 'bandstop']),
-    order: z.union([z.number().int().min(1).max(MAX_DESIGN_ORDER), z.literal('auto')]),
-    edgesHz: edges,
-    rippleDb: opt,
-    attenuationDb: opt,
-    passbandHz: edges,
-    stopbandHz: edges,
-  }),
-]);
+function valueSchema(p: Parameter): z.ZodType {
+  switch (p.type) {
+    case 'number':
+      return finite;
+    case 'order':
+      return z.union([z.number().int().min(1).max(p.max), z.literal('auto')]);
+    case 'list':
+      return p.item === 'band'
+        ? z.array(finite).min(1).max(p.count.max)
+        : z.array(z.number().int().min(1).max(MAX_WHOLE_ITEM)).max(p.count.max);
+    case 'choice':
+      return z.enum(p.options.map((o) => o.value) as [string, ...string[]]);
+  }
+}
 
-// The schema must describe exactly the engine's type: these fail to compile if the two drift apart.
-type Parsed = z.output<typeof designerSpec>;
-export const designerSchemaMatches: [Parsed] extends [DesignerSpec]
-  ? [DesignerSpec] extends [Parsed]
-    ? true
-    : false
-  : false = true;
+function entrySchema(entry: DesignerEntry) {
+  const shape: Record<string, z.ZodType> = { kind: z.literal(entry.kind), fs: finite };
+  for (const p of entry.parameters) {
+    const v = valueSchema(p);
+    shape[p.key] = p.presence === 'required' ? v : v.exactOptional();
+  }
+  return z.object(shape);
+}
+
+const entries = (DESIGNERS as readonly DesignerEntry[]).map(entrySchema);
+
+/** Every designer kind of the registry with its parameters. */
+export const designerSpec = z.discriminatedUnion(
+  'kind',
+  entries as unknown as [ReturnType<typeof entrySchema>, ...ReturnType<typeof entrySchema>[]],
+) as unknown as z.ZodType<DesignerSpec>;

@@ -1,0 +1,189 @@
+/** Registry entries of the designers that remove or pick out a frequency: notch, resonator, harmonics, comb, DC blocker. */
+import { defineDesigner } from '../parameters.ts';
+import { designComb, designHarmonicNotches } from '../comb.ts';
+import { designDcBlocker, designNotch, designPeak } from '../notch.ts';
+import { checkInBand } from '../checkParameters.ts';
+import { DesignInputError } from '../validate.ts';
+import { NOTCH_WIDTH, bandwidth, centre, fmt, humHz, quality, r3, startWidth, widthHz } from './common.ts';
+
+const GROUP = 'Remove or pick out a frequency';
+/** Tolerance on fs/f0 being a whole number for a comb (relative to that number). */
+export const COMB_DIVISOR_TOLERANCE = 1e-9;
+const tail = (fs: number) => `, fs ${fmt(fs)} Hz`;
+
+export const notchDesigner = defineDesigner({
+  kind: 'notch',
+  parameters: [centre('Centre', 'centre in Hz'), bandwidth, quality('quality factor f0/bandwidth')],
+  alternatives: [NOTCH_WIDTH],
+  variants: [
+    {
+      id: 'notch',
+      cli: 'notch',
+      label: 'Notch',
+      group: GROUP,
+      example: () => ({ fs: 1000, f0: 50, bandwidthHz: 2 }),
+      start: (fs) => ({ f0: humHz(fs), ...startWidth(fs) }),
+    },
+  ],
+  design(spec) {
+    const bw = widthHz(spec, spec.f0, spec.fs / 2, `a notch at fs ${fmt(spec.fs)} Hz`);
+    return {
+      zpk: designNotch(spec.f0, bw, spec.fs),
+      note: `notch at ${fmt(spec.f0)} Hz, −3 dB width ${fmt(bw)} Hz (Q ${fmt(spec.f0 / bw)})${tail(spec.fs)}`,
+    };
+  },
+});
+
+export const peakDesigner = defineDesigner({
+  kind: 'peak',
+  parameters: [centre('Centre', 'centre in Hz'), bandwidth, quality('quality factor f0/bandwidth')],
+  alternatives: [NOTCH_WIDTH],
+  variants: [
+    {
+      id: 'peak',
+      cli: 'peak',
+      label: 'Resonator (peak)',
+      group: GROUP,
+      prefer: ['q'],
+      example: () => ({ fs: 8000, f0: 1200, q: 25 }),
+      start: (fs) => ({ f0: r3(0.15 * fs), ...startWidth(fs) }),
+    },
+  ],
+  design(spec) {
+    const bw = widthHz(spec, spec.f0, spec.fs / 2, `a peak at fs ${fmt(spec.fs)} Hz`);
+    return {
+      zpk: designPeak(spec.f0, bw, spec.fs),
+      note: `peak at ${fmt(spec.f0)} Hz, −3 dB width ${fmt(bw)} Hz (Q ${fmt(spec.f0 / bw)})${tail(spec.fs)}`,
+    };
+  },
+});
+
+export const dcBlockerDesigner = defineDesigner({
+  kind: 'dcBlocker',
+  parameters: [
+    {
+      key: 'cutoffHz',
+      flag: 'cutoff',
+      label: '−3 dB at',
+      what: '−3 dB frequency in Hz',
+      unit: 'Hz',
+      type: 'number',
+      range: 'band',
+      presence: 'required',
+    },
+  ],
+  variants: [
+    {
+      id: 'dcBlocker',
+      cli: 'dc-blocker',
+      label: 'DC blocker',
+      group: GROUP,
+      example: () => ({ fs: 1000, cutoffHz: 0.5 }),
+      start: (fs) => ({ cutoffHz: r3(fs / 1000) }),
+    },
+  ],
+  design: (spec) => ({
+    zpk: designDcBlocker(spec.cutoffHz, spec.fs),
+    note: `DC blocker, −3 dB at ${fmt(spec.cutoffHz)} Hz${tail(spec.fs)}`,
+  }),
+});
+
+/** Notches at h·f0 for each harmonic number h (1 = the fundamental); with q the width grows as h·f0/q. */
+export const harmonicNotchDesigner = defineDesigner({
+  kind: 'harmonicNotch',
+  parameters: [
+    centre('Fundamental', 'fundamental in Hz', 'fundamental'),
+    {
+      key: 'harmonics',
+      flag: 'harmonics',
+      label: 'Harmonics',
+      short: 'harmonics',
+      hint: '1 = the fundamental',
+      what: 'harmonic numbers, 1 = the fundamental',
+      type: 'list',
+      item: 'whole',
+      count: { max: 64 },
+      noun: 'harmonic',
+      presence: 'required',
+    },
+    bandwidth,
+    quality('quality factor f0/bandwidth'),
+  ],
+  alternatives: [NOTCH_WIDTH],
+  variants: [
+    {
+      id: 'harmonicNotch',
+      cli: 'harmonic-notch',
+      label: 'Notches at harmonics',
+      group: GROUP,
+      example: () => ({ fs: 2000, f0: 50, harmonics: [1, 3, 5], bandwidthHz: 2 }),
+      start: (fs) => ({ f0: humHz(fs), harmonics: [1, 3, 5], ...startWidth(fs) }),
+    },
+  ],
+  design(spec) {
+    const { f0, fs } = spec;
+    for (const [i, h] of spec.harmonics.entries()) checkInBand(`harmonic ${h}`, h * f0, fs, 'harmonics', i);
+    const hs = [...new Set(spec.harmonics)].sort((a, b) => a - b);
+    const widths = hs.map((h) =>
+      widthHz(spec.q === undefined ? spec : { q: spec.q }, h * f0, fs / 2, `harmonic ${h}`),
+    );
+    const zpk = designHarmonicNotches(f0, hs, (h) => widths[hs.indexOf(h)]!, fs);
+    const width = spec.q === undefined ? `width ${fmt(widths[0]!)} Hz each` : `Q ${fmt(spec.q)} each`;
+    return { zpk, note: `notches at harmonics ${hs.join(', ')} of ${fmt(f0)} Hz, ${width}${tail(fs)}` };
+  },
+});
+
+/** Teeth at every multiple of f0 (fs/f0 must be a whole number), including DC. */
+export const combDesigner = defineDesigner({
+  kind: 'comb',
+  parameters: [
+    centre('Tooth spacing', 'tooth spacing in Hz, fs/f0 whole', 'spacing', 'fs divided by a whole number'),
+    {
+      key: 'type',
+      flag: 'teeth',
+      label: 'Teeth',
+      short: 'teeth',
+      what: 'notch or peak',
+      type: 'choice',
+      options: [
+        { value: 'notch', label: 'notches' },
+        { value: 'peak', label: 'peaks' },
+      ],
+      fallback: 'notch',
+      control: 'segmented',
+      presence: 'required',
+    },
+    bandwidth,
+    quality('quality factor f0/bandwidth'),
+  ],
+  alternatives: [NOTCH_WIDTH],
+  variants: [
+    {
+      id: 'comb',
+      cli: 'comb',
+      label: 'Comb (every multiple)',
+      group: GROUP,
+      example: () => ({ fs: 1000, f0: 50, q: 30, type: 'notch' }),
+      start: (fs) => ({
+        f0: r3(fs / Math.max(2, Math.round(fs / humHz(fs)))),
+        type: 'notch',
+        ...startWidth(fs),
+      }),
+    },
+  ],
+  design(spec) {
+    const { f0, fs } = spec;
+    const n = Math.round(fs / f0);
+    if (Math.abs(fs / f0 - n) > COMB_DIVISOR_TOLERANCE * n)
+      throw new DesignInputError(
+        `fs/f0 = ${fmt(fs / f0)} is not a whole number`,
+        `f0 = fs/N for a whole number N >= 2, e.g. ${fmt(fs / Math.max(2, n))} Hz`,
+        'f0',
+      );
+    const bw = widthHz(spec, f0, f0, `a comb whose teeth are ${fmt(f0)} Hz apart`);
+    return {
+      zpk: designComb(f0, bw, spec.type, fs),
+      note: `${spec.type} comb of order ${n} at every multiple of ${fmt(f0)} Hz, −3 dB width ${fmt(bw)} Hz${tail(fs)}`,
+    };
+  },
+});
