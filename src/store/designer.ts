@@ -10,7 +10,7 @@
  * output compared with the design, so undoing back to the designed roots reads "as designed" again.
  */
 import type { Result, Root } from '../core/types.ts';
-import { runDesigner, type DesignerSpec, type DesignResult } from '../core/design/index.ts';
+import { designerEntry, runDesigner, type DesignerSpec, type DesignResult } from '../core/design/index.ts';
 import * as masks from '../core/mask/index.ts';
 import type { MaskRegion, MaskRegionPatch, RegionEdge, RequirementMask } from '../core/mask/index.ts';
 import type { Design } from '../core/model/design.ts';
@@ -27,18 +27,16 @@ export type DesignerMaskPolicy =
 /** Changed designer parameters, or a function from the current description to the new one. */
 export type DesignerPatch = Partial<DesignerSpec> | ((spec: DesignerSpec) => DesignerSpec);
 
-/** Parameters that are alternatives to each other: giving one in a patch drops the other. */
-const ALTERNATIVES: readonly (readonly [string, string])[] = [
-  ['bandwidthHz', 'q'],
-  ['bandwidthOctaves', 'q'],
-  ['slope', 'q'],
-];
+/** Parameters that are alternatives to each other (from the designer registry): giving one drops the other. */
+function alternativesOf(kind: string): readonly (readonly [string, string])[] {
+  return designerEntry(kind)?.alternatives?.map((a) => a.keys) ?? [];
+}
 
 /** The designer description with a patch applied; a parameter given drops its alternative (q vs bandwidth). */
 export function mergeDesignerPatch(spec: DesignerSpec, patch: DesignerPatch): DesignerSpec {
   if (typeof patch === 'function') return patch(spec);
   const out: Record<string, unknown> = { ...spec };
-  for (const [a, b] of ALTERNATIVES) {
+  for (const [a, b] of alternativesOf(spec.kind)) {
     if (a in patch && !(b in patch)) delete out[b];
     if (b in patch && !(a in patch)) delete out[a];
   }

@@ -1,14 +1,20 @@
 /**
- * `polewright design <kind> [parameters]`: runs a designer from flags named for what they are, prints the
+ * `polewright design <kind> [parameters]`: runs a designer from flags named for what they are (kinds,
+ * flags, examples and the usage all come from the designer registry in src/core/design), prints the
  * result in the shape `analyze` prints (plus the designer, its note, the estimated order and the
  * requirement's margins and mask verdict), and can write a design file.
  */
 import { writeFileSync } from 'node:fs';
 import {
+  DESIGNER_VARIANTS,
+  isRequired,
   runDesigner,
+  textFor,
+  type DesignValues,
+  type DesignerEntry,
   type DesignerSpec,
   type DesignResult,
-  type IirFamily,
+  type Parameter,
 } from '../../core/design/index.ts';
 import { evaluateMask, maskFromDesigner, type MaskResult } from '../../core/mask/index.ts';
 import { writeDesignFile } from '../../share/designFile.ts';
@@ -20,216 +26,92 @@ import type { CliIo } from '../main.ts';
 import { analysis, systemLines } from './analyze.ts';
 import { shortNumber } from '../../core/shortNumber.ts';
 
-interface KindInfo {
-  /** Flags the kind accepts besides --fs, --json, --out, --name. */
-  flags: readonly string[];
-  example: string;
-  build: (a: FlagReader) => DesignerSpec;
-}
+type Variant = (typeof DESIGNER_VARIANTS)[number];
 
-/** Reads typed values from the parsed flags, with errors that name the flag and show an example. */
-class FlagReader {
-  constructor(
-    private readonly args: ParsedArgs,
-    private readonly kind: string,
-    /** Shown with a missing-flag error; a kind may sharpen it once it knows more (e.g. the family). */
-    public example: string,
-  ) {}
-  raw(name: string): string | undefined {
-    return this.args.flags.get(name);
-  }
-  has(name: string): boolean {
-    return this.args.flags.has(name);
-  }
-  missing(name: string, what: string): UsageError {
-    return new UsageError(`--${name} is missing (${what}). Example: ${this.example}`);
-  }
-  number(name: string, what: string): number {
-    const raw = this.args.flags.get(name);
-    if (raw === undefined) throw this.missing(name, what);
-    return readFlagNumber(name, raw, what);
-  }
-  optionalNumber(name: string, what: string): number | undefined {
-    return this.has(name) ? this.number(name, what) : undefined;
-  }
-  list(name: string, what: string): number[] {
-    const raw = this.args.flags.get(name);
-    if (raw === undefined) throw this.missing(name, what);
-    return readFlagList(name, raw, what);
-  }
-  choice<T extends string>(name: string, choices: readonly T[], fallback?: T): T {
-    const raw = this.args.flags.get(name);
-    if (raw === undefined) {
-      if (fallback !== undefined) return fallback;
-      throw this.missing(name, `one of ${choices.join(', ')}`);
-    }
-    if (!(choices as readonly string[]).includes(raw))
-      throw new UsageError(
-        `--${name} "${raw}" is not known for ${this.kind}; choose one of ${choices.join(', ')}.`,
-      );
-    return raw as T;
-  }
-  /** A notch or peak width: --bandwidth Hz or --q, exactly one. */
-  width(): { bandwidthHz: number } | { q: number } {
-    if (this.has('bandwidth') && this.has('q')) throw new UsageError('give --bandwidth or --q, not both.');
-    if (this.has('q')) return { q: this.number('q', 'quality factor f0/bandwidth') };
-    if (!this.has('bandwidth')) throw this.missing('bandwidth', 'the −3 dB width in Hz, or give --q');
-    return { bandwidthHz: this.number('bandwidth', '−3 dB width in Hz') };
-  }
-}
-
-const FAMILIES: readonly IirFamily[] = ['butterworth', 'chebyshev1', 'chebyshev2', 'elliptic'];
-const IIR_FLAGS = ['family', 'order', 'edge', 'ripple', 'attenuation', 'passband', 'stopband'];
-
-function iirKind(response: 'lowpass' | 'highpass' | 'bandpass' | 'bandstop'): KindInfo {
-  const band = response === 'bandpass' || response === 'bandstop';
-  const pair = band ? 'low,high in Hz' : 'in Hz';
-  const edge = band ? (response === 'bandpass' ? '100,200' : '45,55') : '120';
-  return {
-    flags: IIR_FLAGS,
-    example: `polewright design ${response} --fs 1000 --family butterworth --order 4 --edge ${edge}`,
-    build: (a) => {
-      const family = a.choice('family', FAMILIES);
-      const auto = a.raw('order')?.trim() === 'auto';
-      const values = ` --ripple 1 --attenuation 60 --fs 1000`;
-      const requirementExample = {
-        lowpass: '120 --stopband 400',
-        highpass: '400 --stopband 120',
-        bandpass: '150,250 --stopband 100,320',
-        bandstop: '100,320 --stopband 150,250',
-      }[response];
-      a.example = auto
-        ? `polewright design ${response} --family ${family} --order auto --passband ${requirementExample}${values}`
-        : `polewright design ${response} --family ${family} --order 4 --edge ${edge}${family === 'butterworth' ? ' --fs 1000' : values}`;
-      const order = auto ? 'auto' : a.number('order', 'a whole number from 1, or auto');
-      const needRipple = family === 'chebyshev1' || family === 'elliptic' || auto;
-      const needAttenuation = family === 'chebyshev2' || family === 'elliptic' || auto;
-      const rippleDb = needRipple
-        ? a.number('ripple', 'pass-band ripple in dB')
-        : a.optionalNumber('ripple', 'dB');
-      const attenuationDb = needAttenuation
-        ? a.number('attenuation', 'stop-band attenuation in dB')
-        : a.optionalNumber('attenuation', 'dB');
-      const requirement = auto || a.has('passband') || a.has('stopband');
-      return {
-        kind: 'iir',
-        fs: a.number('fs', 'sample rate in Hz'),
-        family,
-        response,
-        order,
-        ...(!auto && { edgesHz: a.list('edge', `design edge ${pair}`) }),
-        ...(rippleDb !== undefined && { rippleDb }),
-        ...(attenuationDb !== undefined && { attenuationDb }),
-        ...(requirement && {
-          passbandHz: a.list('passband', `pass-band edge ${pair}`),
-          stopbandHz: a.list('stopband', `stop-band edge ${pair}`),
-        }),
-      };
-    },
-  };
-}
-
-const KINDS: Record<string, KindInfo> = {
-  notch: {
-    flags: ['f0', 'bandwidth', 'q'],
-    example: 'polewright design notch --fs 1000 --f0 50 --bandwidth 2',
-    build: (a) => ({
-      kind: 'notch',
-      fs: a.number('fs', 'sample rate in Hz'),
-      f0: a.number('f0', 'centre in Hz'),
-      ...a.width(),
-    }),
-  },
-  peak: {
-    flags: ['f0', 'bandwidth', 'q'],
-    example: 'polewright design peak --fs 8000 --f0 1200 --q 25',
-    build: (a) => ({
-      kind: 'peak',
-      fs: a.number('fs', 'sample rate in Hz'),
-      f0: a.number('f0', 'centre in Hz'),
-      ...a.width(),
-    }),
-  },
-  'dc-blocker': {
-    flags: ['cutoff'],
-    example: 'polewright design dc-blocker --fs 1000 --cutoff 0.5',
-    build: (a) => ({
-      kind: 'dcBlocker',
-      fs: a.number('fs', 'sample rate in Hz'),
-      cutoffHz: a.number('cutoff', '−3 dB frequency in Hz'),
-    }),
-  },
-  'harmonic-notch': {
-    flags: ['f0', 'harmonics', 'bandwidth', 'q'],
-    example: 'polewright design harmonic-notch --fs 2000 --f0 50 --harmonics 1,3,5 --bandwidth 2',
-    build: (a) => ({
-      kind: 'harmonicNotch',
-      fs: a.number('fs', 'sample rate in Hz'),
-      f0: a.number('f0', 'fundamental in Hz'),
-      harmonics: a.list('harmonics', 'harmonic numbers, 1 = the fundamental'),
-      ...a.width(),
-    }),
-  },
-  comb: {
-    flags: ['f0', 'bandwidth', 'q', 'teeth'],
-    example: 'polewright design comb --fs 1000 --f0 50 --q 30 --teeth notch',
-    build: (a) => ({
-      kind: 'comb',
-      fs: a.number('fs', 'sample rate in Hz'),
-      f0: a.number('f0', 'tooth spacing in Hz, fs/f0 whole'),
-      type: a.choice('teeth', ['notch', 'peak'] as const, 'notch'),
-      ...a.width(),
-    }),
-  },
-  'peaking-eq': {
-    flags: ['f0', 'gain-db', 'q', 'octaves'],
-    example: 'polewright design peaking-eq --fs 48000 --f0 1000 --gain-db 6 --q 1.4',
-    build: (a) => {
-      if (a.has('q') && a.has('octaves')) throw new UsageError('give --q or --octaves, not both.');
-      const width = a.has('octaves')
-        ? { bandwidthOctaves: a.number('octaves', 'bandwidth in octaves') }
-        : { q: a.number('q', 'quality factor, or give --octaves') };
-      return {
-        kind: 'peakingEq',
-        fs: a.number('fs', 'sample rate in Hz'),
-        f0: a.number('f0', 'centre in Hz'),
-        gainDb: a.number('gain-db', 'gain at f0 in dB'),
-        ...width,
-      };
-    },
-  },
-  'low-shelf': shelf('lowShelf', 'low-shelf'),
-  'high-shelf': shelf('highShelf', 'high-shelf'),
-  lowpass: iirKind('lowpass'),
-  highpass: iirKind('highpass'),
-  bandpass: iirKind('bandpass'),
-  bandstop: iirKind('bandstop'),
-};
-
-function shelf(kind: 'lowShelf' | 'highShelf', name: string): KindInfo {
-  return {
-    flags: ['f0', 'gain-db', 'q', 'slope'],
-    example: `polewright design ${name} --fs 48000 --f0 200 --gain-db -6 --slope 1`,
-    build: (a) => {
-      if (a.has('q') && a.has('slope')) throw new UsageError('give --q or --slope, not both.');
-      const width = a.has('slope')
-        ? { slope: a.number('slope', 'shelf slope, 1 = steepest monotone') }
-        : { q: a.number('q', 'quality factor, or give --slope') };
-      return {
-        kind,
-        fs: a.number('fs', 'sample rate in Hz'),
-        f0: a.number('f0', 'shelf midpoint in Hz'),
-        gainDb: a.number('gain-db', 'shelf gain in dB'),
-        ...width,
-      };
-    },
-  };
-}
+/** The command line's kinds: every variant of the designer registry, by its command-line name. */
+const KINDS = new Map<string, Variant>(DESIGNER_VARIANTS.map((v) => [v.variant.cli, v]));
 
 /** Every kind the command knows, in the order the usage lists them. */
-export const DESIGN_KINDS = Object.keys(KINDS);
+export const DESIGN_KINDS = [...KINDS.keys()];
 const COMMON_FLAGS = ['fs', 'out', 'name'];
-const ALL_FLAGS = [...new Set([...COMMON_FLAGS, ...Object.values(KINDS).flatMap((k) => k.flags)])];
+
+/** The parameters a kind takes on the command line (those its variant does not fix). */
+const parametersOf = ({ entry, variant }: Variant): Parameter[] =>
+  entry.parameters.filter((p) => !(p.key in (variant.fixed ?? {})));
+
+const ALL_FLAGS = [
+  ...new Set([...COMMON_FLAGS, ...[...KINDS.values()].flatMap((v) => parametersOf(v).map((p) => p.flag))]),
+];
+
+const inAlternative = (entry: DesignerEntry, key: string) =>
+  (entry.alternatives ?? []).some((a) => a.keys.includes(key));
+
+/** A value as typed on the command line. */
+const flagValue = (v: unknown) => (Array.isArray(v) ? v.join(',') : String(v));
+
+/** An example command line for a kind, sharpened by what the user has given so far (e.g. the family). */
+function exampleLine(cli: string, { entry, variant }: Variant, given: DesignValues): string {
+  const ex = variant.example(given);
+  const parts: string[] = [];
+  for (const [key, value] of Object.entries(ex)) {
+    if (key === 'fs') {
+      parts.push(`--fs ${flagValue(value)}`);
+      continue;
+    }
+    const p = entry.parameters.find((q) => q.key === key);
+    if (!p || (p.presence === 'optional' && !isRequired(p, ex) && !inAlternative(entry, key))) continue;
+    parts.push(`--${p.flag} ${flagValue(value)}`);
+  }
+  return `polewright design ${cli} ${parts.join(' ')}`;
+}
+
+/** One parameter's value from its flag's text (usage errors name the flag). */
+function readParameter(p: Parameter, raw: string, kind: string, values: DesignValues): unknown {
+  const what = textFor(p.what, values);
+  switch (p.type) {
+    case 'number':
+      return readFlagNumber(p.flag, raw, what, p.unit);
+    case 'order':
+      return raw.trim() === 'auto' ? 'auto' : readFlagNumber(p.flag, raw, what);
+    case 'list':
+      return readFlagList(p.flag, raw, what);
+    case 'choice': {
+      const choices = p.options.map((o) => o.value);
+      if (!choices.includes(raw))
+        throw new UsageError(
+          `--${p.flag} "${raw}" is not known for ${kind}; choose one of ${choices.join(', ')}.`,
+        );
+      return raw;
+    }
+  }
+}
+
+/** The description a kind's flags give: each parameter read, the choices' defaults, then what is missing. */
+function readDescription(kind: string, v: Variant, args: ParsedArgs): DesignerSpec {
+  const { entry, variant } = v;
+  const values: Record<string, unknown> = { kind: entry.kind, ...variant.fixed };
+  const missing = (p: { flag: string }, what: string) =>
+    new UsageError(`--${p.flag} is missing (${what}). Example: ${exampleLine(kind, v, values)}`);
+  for (const p of parametersOf(v)) {
+    const raw = args.flags.get(p.flag);
+    if (raw !== undefined) values[p.key] = readParameter(p, raw, kind, values);
+    else if (p.type === 'choice' && p.fallback !== undefined) values[p.key] = p.fallback;
+  }
+  const fs = args.flags.get('fs');
+  if (fs === undefined) throw missing({ flag: 'fs' }, 'sample rate in Hz');
+  values.fs = readFlagNumber('fs', fs, 'sample rate in Hz', 'Hz');
+  for (const alt of entry.alternatives ?? []) {
+    const [a, b] = alt.keys.map((k) => entry.parameters.find((p) => p.key === k)!);
+    if (values[a!.key] !== undefined && values[b!.key] !== undefined)
+      throw new UsageError(`give --${a!.flag} or --${b!.flag}, not both.`);
+    if (values[a!.key] === undefined && values[b!.key] === undefined)
+      throw missing(a!, `${textFor(a!.what, values)}, or give --${b!.flag}`);
+  }
+  for (const p of parametersOf(v))
+    if (values[p.key] === undefined && isRequired(p, values))
+      throw missing(p, textFor(p.what, values) ?? p.flag);
+  return values as DesignerSpec;
+}
 
 /** Margins smaller than this (dB) are printed as 0. */
 export const MARGIN_DISPLAY_ZERO_DB = 1e-9;
@@ -244,18 +126,18 @@ export function designerFromArgs(argv: string[]): { spec: DesignerSpec; args: Pa
   const kinds = DESIGN_KINDS.join(', ');
   if (kind === undefined || kind.startsWith('--'))
     throw new UsageError(`say what to design: one of ${kinds}.`);
-  const info = KINDS[kind];
-  if (!info) throw new UsageError(`unknown kind "${kind}". Kinds: ${kinds}.`);
+  const v = KINDS.get(kind);
+  if (!v) throw new UsageError(`unknown kind "${kind}". Kinds: ${kinds}.`);
   const args = parseArgs(rest, ALL_FLAGS, ['json']);
   if (args.positionals.length)
-    throw new UsageError(`unexpected "${args.positionals[0]}". Example: ${info.example}`);
+    throw new UsageError(`unexpected "${args.positionals[0]}". Example: ${exampleLine(kind, v, {})}`);
+  const flags = parametersOf(v).map((p) => p.flag);
   for (const flag of args.flags.keys())
-    if (!COMMON_FLAGS.includes(flag) && !info.flags.includes(flag))
+    if (!COMMON_FLAGS.includes(flag) && !flags.includes(flag))
       throw new UsageError(
-        `--${flag} does not apply to ${kind}; it takes ${info.flags.map((f) => `--${f}`).join(', ')}.`,
+        `--${flag} does not apply to ${kind}; it takes ${flags.map((f) => `--${f}`).join(', ')}.`,
       );
-  const reader = new FlagReader(args, kind, info.example);
-  return { spec: info.build(reader), args, kind };
+  return { spec: readDescription(kind, v, args), args, kind };
 }
 
 function requirementLines(result: DesignResult, verdict: MaskResult | null): string[] {
@@ -278,20 +160,46 @@ function requirementLines(result: DesignResult, verdict: MaskResult | null): str
   return lines;
 }
 
-/** What `polewright design --help` prints: every kind with an example, and the classical-family flags. */
+/** The placeholder of a flag's value in the usage. */
+function placeholder(p: Parameter): string {
+  if (p.type === 'choice') return p.options.map((o) => o.value).join('|');
+  if (p.type === 'order') return 'N|auto';
+  if (p.type === 'list') return p.item === 'whole' ? 'n,n,…' : `<${p.unit ?? ''}>[,<${p.unit ?? ''}>]`;
+  return p.unit ? `<${p.unit}>` : '<number>';
+}
+
+/** What `polewright design --help` prints: every kind with an example, and every parameter with its kinds. */
 export function designUsage(): string {
+  const byFlag = new Map<string, { p: Parameter; kinds: string[] }>();
+  for (const [cli, v] of KINDS)
+    for (const p of parametersOf(v)) {
+      const seen = byFlag.get(p.flag) ?? { p, kinds: [] };
+      seen.kinds.push(cli);
+      byFlag.set(p.flag, seen);
+    }
+  const alternatives = new Set<string>();
+  for (const v of KINDS.values())
+    for (const alt of v.entry.alternatives ?? []) {
+      const [a, b] = alt.keys.map((k) => v.entry.parameters.find((p) => p.key === k)!.flag);
+      alternatives.add(`--${a} or --${b}`);
+    }
   const lines = [
     'polewright design <kind> [parameters] [--json] [--out design.json] [--name <title>]',
     '',
     'kinds, with an example each:',
-    ...DESIGN_KINDS.map((k) => `  ${k.padEnd(15)} ${KINDS[k]!.example}`),
+    ...DESIGN_KINDS.map((k) => `  ${k.padEnd(15)} ${exampleLine(k, KINDS.get(k)!, {})}`),
     '',
-    'low-/high-/band-pass and band-stop:',
-    '  --family butterworth|chebyshev1|chebyshev2|elliptic   --order N --edge <Hz> (band shapes: low,high)',
-    '  --ripple <dB> (pass-band, Chebyshev I and elliptic)   --attenuation <dB> (stop-band, Chebyshev II and elliptic)',
-    '  --order auto --passband <Hz> --stopband <Hz> --ripple <dB> --attenuation <dB>: the least order meeting',
-    '  the requirement, with its margins; --passband/--stopband with a fixed order report the margins too.',
-    'notch, peak, harmonic-notch, comb: --bandwidth <Hz> (−3 dB width) or --q; comb: --teeth notch|peak.',
+    'parameters (every kind takes --fs <Hz>, the sample rate):',
+    ...[...byFlag.values()].map(({ p, kinds }) => {
+      const flag = `  --${p.flag} ${placeholder(p)}`;
+      const what = textFor(p.what, {});
+      const auto = p.type === 'order' ? ` (auto: ${p.autoLabel.toLowerCase()})` : '';
+      return `${flag.padEnd(40)} ${what}${auto}; ${kinds.join(', ')}`;
+    }),
+    '',
+    `give one of each pair: ${[...alternatives].join('; ')}.`,
+    'numbers read as in the workbench: 0.5 or 0,5, −2, 1e-3, 1/3, and a unit after a frequency (1.2kHz);',
+    'lists take commas: --edge 100,200.',
   ];
   return lines.join('\n') + '\n';
 }

@@ -85,6 +85,7 @@ export function expectedOf(p: Parameter, values: DesignValues, fs: number): stri
     case 'number': {
       if (p.range === 'band') return `a frequency between 0 and ${fmt(fs / 2)} Hz (fs/2), exclusive`;
       if (p.range === 'finite') return `a finite number${unitText(p)}`;
+      if (p.range === 'whole') return `a whole number from 1${p.max ? ` to ${p.max}` : ''}`;
       const lower = p.above?.when(values) ? values[p.above.key] : 0;
       return `a number greater than ${fmt(typeof lower === 'number' ? lower : 0)}${unitText(p)}`;
     }
@@ -102,7 +103,14 @@ function checkParameter(p: Parameter, value: unknown, values: DesignValues, fs: 
   switch (p.type) {
     case 'number':
       if (p.range === 'band') checkInBand(name, value, fs, p.key);
-      else if (p.range === 'positive') {
+      else if (p.range === 'whole') {
+        if (typeof value !== 'number' || !Number.isInteger(value) || value < 1 || value > (p.max ?? Infinity))
+          throw new DesignInputError(
+            `${name} ${String(value)} is not accepted`,
+            expectedOf(p, values, fs),
+            p.key,
+          );
+      } else if (p.range === 'positive') {
         const lower = p.above?.when(values) ? values[p.above.key] : 0;
         checkAbove(name, value, unitText(p), p.key, typeof lower === 'number' ? lower : 0);
       } else if (typeof value !== 'number' || !Number.isFinite(value))

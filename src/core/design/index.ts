@@ -1,8 +1,9 @@
 /** Designers: notches, resonators, combs, equaliser sections and classical IIR families, from Hz and dB to roots. */
 export { runDesigner, COMB_DIVISOR_TOLERANCE } from './runDesigner.ts';
 export type { DesignerSpec, DesignResult, IirSpec } from './spec.ts';
-export { DESIGNERS, DESIGNER_VARIANTS, designerEntry, variantOf } from './registry.ts';
-export type { DesignerKind } from './registry.ts';
+export { DESIGNERS, DESIGNER_VARIANTS, designerEntry, registryOf, variantOf } from './registry.ts';
+export type { DesignerKind, VariantOfEntry } from './registry.ts';
+export { defineDesigner } from './parameters.ts';
 export { FAMILY_OPTIONS, BAND_SHAPE_OPTIONS } from './entries/classical.ts';
 export type * from './parameters.ts';
 export { textFor } from './parameters.ts';

@@ -28,6 +28,8 @@ interface ParameterBase<K extends string> {
   readonly label: ValueText;
   /** The name in the "Designed by" list; the label when absent. */
   readonly short?: string;
+  /** false: left out of the "Designed by" list (the variant's title names it). */
+  readonly listed?: boolean;
   readonly hint?: ValueText;
   readonly unit?: ParameterUnit;
   /** Parameters of a requirement are grouped apart in the form. */
@@ -42,8 +44,12 @@ interface ParameterBase<K extends string> {
 /** One number. */
 export interface NumberParameter<K extends string = string> extends ParameterBase<K> {
   readonly type: 'number';
-  /** 'band': a frequency strictly inside (0, fs/2) Hz; 'positive': above 0; 'finite': any number. */
-  readonly range: 'band' | 'positive' | 'finite';
+  /**
+   * 'band': a frequency strictly inside (0, fs/2) Hz; 'positive': above 0; 'finite': any number; 'whole':
+   * a whole number from 1 up to `max` (a count of taps, of sections).
+   */
+  readonly range: 'band' | 'positive' | 'finite' | 'whole';
+  readonly max?: number;
   /** Above another parameter's value too, when `when` holds (an attenuation above the ripple). */
   readonly above?: { readonly key: string; readonly when: (values: DesignValues) => boolean };
 }

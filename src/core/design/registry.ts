@@ -29,22 +29,37 @@ export const DESIGNERS = [
 /** A designer kind of the registry. */
 export type DesignerKind = (typeof DESIGNERS)[number]['kind'];
 
-/** The registry entry of a kind, or undefined for a kind the registry does not hold. */
-export function designerEntry(kind: string): DesignerEntry | undefined {
-  return (DESIGNERS as readonly DesignerEntry[]).find((e) => e.kind === kind);
+/** A variant (a choice a user picks from) with its entry. */
+export interface VariantOfEntry {
+  entry: DesignerEntry;
+  variant: DesignerVariant;
 }
+
+/** The lookups of a list of entries (the registry's own, or a list with more kinds in tests). */
+export function registryOf(entries: readonly DesignerEntry[]) {
+  const variants: readonly VariantOfEntry[] = entries.flatMap((entry) =>
+    entry.variants.map((variant) => ({ entry, variant })),
+  );
+  return {
+    /** Every variant with its entry, in the registry's order. */
+    variants,
+    /** The entry of a kind, or undefined for a kind the registry does not hold. */
+    entry: (kind: string) => entries.find((e) => e.kind === kind),
+    /** The variant a description was made by: the first of its entry whose fixed values it has. */
+    variantOf: (spec: { kind: string } & Record<string, unknown>) =>
+      variants.find(
+        ({ entry, variant }) =>
+          entry.kind === spec.kind && Object.entries(variant.fixed ?? {}).every(([k, v]) => spec[k] === v),
+      ),
+  };
+}
+
+const registry = registryOf(DESIGNERS as readonly DesignerEntry[]);
 
 /** Every variant (the choices a user picks from), with its entry, in the registry's order. */
-export const DESIGNER_VARIANTS: readonly { entry: DesignerEntry; variant: DesignerVariant }[] = (
-  DESIGNERS as readonly DesignerEntry[]
-).flatMap((entry) => entry.variants.map((variant) => ({ entry, variant })));
-
-/** The variant a description was made by: the first of its entry whose fixed values it has. */
-export function variantOf(
-  spec: { kind: string } & Record<string, unknown>,
-): { entry: DesignerEntry; variant: DesignerVariant } | undefined {
-  return DESIGNER_VARIANTS.find(
-    ({ entry, variant }) =>
-      entry.kind === spec.kind && Object.entries(variant.fixed ?? {}).every(([k, v]) => spec[k] === v),
-  );
-}
+export const DESIGNER_VARIANTS: readonly VariantOfEntry[] = registry.variants;
+/** The registry entry of a kind, or undefined for a kind the registry does not hold. */
+export const designerEntry: (kind: string) => DesignerEntry | undefined = registry.entry;
+/** The variant a description was made by. */
+export const variantOf: (spec: { kind: string } & Record<string, unknown>) => VariantOfEntry | undefined =
+  registry.variantOf;

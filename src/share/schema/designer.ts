@@ -13,7 +13,13 @@ const MAX_WHOLE_ITEM = 1_000_000;
 function valueSchema(p: Parameter): z.ZodType {
   switch (p.type) {
     case 'number':
-      return finite;
+      return p.range === 'whole'
+        ? z
+            .number()
+            .int()
+            .min(1)
+            .max(p.max ?? MAX_WHOLE_ITEM)
+        : finite;
     case 'order':
       return z.union([z.number().int().min(1).max(p.max), z.literal('auto')]);
     case 'list':

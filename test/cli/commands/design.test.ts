@@ -271,7 +271,7 @@ describe('polewright design: errors', () => {
       const r = await runCli(argv);
       expect(r.code).toBe(2);
       expect(r.stderr).toMatch(
-        /notch, peak, dc-blocker, harmonic-notch, comb, peaking-eq, low-shelf, high-shelf, lowpass, highpass, bandpass, bandstop/,
+        /notch, harmonic-notch, comb, peak, dc-blocker, peaking-eq, low-shelf, high-shelf, lowpass, highpass, bandpass, bandstop/,
       );
     }
   });

@@ -30,7 +30,8 @@ const hasRequirement = (v: DesignValues) =>
   v.order === 'auto' || v.passbandHz !== undefined || v.stopbandHz !== undefined;
 const needsRipple = (v: DesignValues) => v.family === 'chebyshev1' || v.family === 'elliptic';
 const needsAttenuation = (v: DesignValues) => v.family === 'chebyshev2' || v.family === 'elliptic';
-const pairWords = (v: DesignValues) => (isBand(v) ? 'low,high in Hz' : 'in Hz');
+const pairWords = (v: DesignValues) =>
+  isBand(v) ? 'low,high in Hz' : v.response === undefined ? 'in Hz (low,high for band shapes)' : 'in Hz';
 
 const EDGE_MEANING: Record<string, string> = {
   butterworth: 'the −3 dB point',
@@ -59,7 +60,8 @@ function bandEdges<const K extends 'passbandHz' | 'stopbandHz'>(key: K) {
     key,
     name: pass ? 'pass-band edges' : 'stop-band edges',
     flag: pass ? 'passband' : 'stopband',
-    what: (v: DesignValues) => `${pass ? 'pass-band' : 'stop-band'} edge ${pairWords(v)}`,
+    what: (v: DesignValues) =>
+      `${pass ? 'pass-band' : 'stop-band'} edge ${pairWords(v)}, for order auto or margins at a given order`,
     label: (v: DesignValues) => (pass ? PASS_LABEL : STOP_LABEL)[String(v.response)] ?? 'Band',
     short: pass ? 'pass band edge' : 'stop band edge',
     pairLabel: pass ? 'Pass band edge' : 'Stop band edge',
@@ -80,17 +82,18 @@ const IIR_PARAMETERS = [
     key: 'family',
     flag: 'family',
     label: 'Family',
-    what: 'one of butterworth, chebyshev1, chebyshev2, elliptic',
+    what: 'the filter family',
     type: 'choice',
     options: FAMILY_OPTIONS,
     control: 'select',
+    listed: false,
     presence: 'required',
   },
   {
     key: 'response',
     flag: 'response',
     label: 'Band shape',
-    what: 'one of lowpass, highpass, bandpass, bandstop',
+    what: 'the band shape',
     type: 'choice',
     options: BAND_SHAPE_OPTIONS,
     presence: 'required',
@@ -99,6 +102,7 @@ const IIR_PARAMETERS = [
     key: 'order',
     flag: 'order',
     label: 'Order',
+    short: 'order',
     what: 'a whole number from 1, or auto',
     type: 'order',
     max: MAX_DESIGN_ORDER,
@@ -124,13 +128,15 @@ const IIR_PARAMETERS = [
     requiredWhen: (v: DesignValues) => v.order !== 'auto',
     shownWhen: (v: DesignValues) => v.order !== 'auto',
   },
+  bandEdges('passbandHz'),
+  bandEdges('stopbandHz'),
   {
     key: 'rippleDb',
     name: 'pass-band ripple',
     flag: 'ripple',
     label: 'Pass-band loss at most',
     short: 'ripple',
-    what: 'pass-band ripple in dB',
+    what: 'pass-band ripple in dB, for Chebyshev I, elliptic and a requirement',
     unit: 'dB',
     type: 'number',
     range: 'positive',
@@ -144,7 +150,7 @@ const IIR_PARAMETERS = [
     flag: 'attenuation',
     label: 'Stop band down by at least',
     short: 'attenuation',
-    what: 'stop-band attenuation in dB',
+    what: 'stop-band attenuation in dB, for Chebyshev II, elliptic and a requirement',
     unit: 'dB',
     type: 'number',
     range: 'positive',
@@ -153,8 +159,6 @@ const IIR_PARAMETERS = [
     presence: 'optional',
     requiredWhen: (v: DesignValues) => needsAttenuation(v) || hasRequirement(v),
   },
-  bandEdges('passbandHz'),
-  bandEdges('stopbandHz'),
 ] as const;
 
 /** A classical design's description. */

@@ -58,6 +58,7 @@ function shelfDesigner<const K extends 'lowShelf' | 'highShelf'>(kind: K) {
         key: 'slope',
         flag: 'slope',
         label: 'Slope',
+        short: 'slope',
         hint: '1 = steepest without overshoot',
         what: 'shelf slope, 1 = steepest monotone',
         type: 'number',

@@ -143,7 +143,7 @@ export const combDesigner = defineDesigner({
       flag: 'teeth',
       label: 'Teeth',
       short: 'teeth',
-      what: 'notch or peak',
+      what: 'teeth as notches or peaks (default notch)',
       type: 'choice',
       options: [
         { value: 'notch', label: 'notches' },

@@ -1,46 +1,30 @@
 /**
- * The Design form: choose a kind, state its parameters in Hz and dB, and press Design. Designing (or
- * re-running) replaces the roots in one undo step; the mask follows the requirement when asked.
+ * The Design form: choose a kind, state its parameters in Hz and dB, and press Design. Kinds, fields,
+ * labels, units and choices come from the designer registry. Designing (or re-running) replaces the roots
+ * in one undo step; the mask follows the requirement when asked.
  */
 import { useMemo, useState, type ReactNode } from 'react';
 import { runDesignerWithMask } from './runFromForm.ts';
 import { Segmented } from '../../chart/Segmented.tsx';
 import { useWorkbench, workbenchStore } from '../../../store/useWorkbench.ts';
 import { selectDesignerStatus } from '../../../store/derived.ts';
-import type { IirFamily } from '../../../core/design/index.ts';
+import { textFor, variantOf, type ChoiceParameter } from '../../../core/design/index.ts';
 import {
-  FAMILIES,
+  GROUPS,
   KINDS,
-  hasNotchWidth,
-  isBand,
-  isClassical,
+  fieldLabel,
+  formValues,
+  kindOf,
+  openParameters,
   visibleFields,
   withKind,
   type DesignFormState,
-  type FieldKey,
-  type FormKind,
+  type FormField as Field,
 } from './designKinds.ts';
 import { readForm, type FieldErrors } from './designForm.ts';
 import { errorField, errorText } from './designErrors.ts';
-import { fieldLabel, pairNames } from './fieldLabels.ts';
 import { FormField, PairField } from './FormField.tsx';
 import { maskFromDesigner } from '../../../core/mask/index.ts';
-
-const GROUPS = [...new Set(KINDS.map((k) => k.group))];
-const PAIRS: Partial<Record<FieldKey, FieldKey>> = {
-  edgeLow: 'edgeHigh',
-  passLow: 'passHigh',
-  stopLow: 'stopHigh',
-};
-const SECOND = new Set<FieldKey>(['edgeHigh', 'passHigh', 'stopHigh']);
-const REQUIREMENT = new Set<FieldKey>([
-  'passLow',
-  'passHigh',
-  'stopLow',
-  'stopHigh',
-  'ripple',
-  'attenuation',
-]);
 
 export interface DesignerFormProps {
   form: DesignFormState;
@@ -55,21 +39,25 @@ export function DesignerForm({ form, setForm }: DesignerFormProps) {
   const [done, setDone] = useState<{ note: string; replacedEdits: boolean } | null>(null);
   const [withMask, setWithMask] = useState(true);
 
+  const { entry, variant } = kindOf(form.kind);
+  const values = formValues(form);
   const reading = useMemo(() => readForm(form, fs), [form, fs]);
   const impliedMask = useMemo(() => (reading.ok ? maskFromDesigner(reading.spec) : null), [reading]);
   const fields = visibleFields(form);
-  const sameKind =
-    status !== null && (status.spec.kind === 'iir' ? status.spec.response : status.spec.kind) === form.kind;
+  const sameKind = status !== null && variantOf(status.spec)?.variant.id === form.kind;
+  const orderParameter = entry.parameters.find((p) => p.type === 'order');
+  const choices = openParameters(entry, variant).filter((p): p is ChoiceParameter => p.type === 'choice');
 
   const update = (patch: Partial<DesignFormState>) => {
     setForm({ ...form, ...patch });
     setDone(null);
     setGeneral(null);
   };
-  const setValue = (k: FieldKey, text: string) => {
-    update({ values: { ...form.values, [k]: text } });
-    if (errors[k]) setErrors({ ...errors, [k]: undefined });
+  const setValue = (id: string, text: string) => {
+    update({ values: { ...form.values, [id]: text } });
+    if (errors[id]) setErrors({ ...errors, [id]: undefined });
   };
+  const setChoice = (key: string, value: string) => update({ choices: { ...form.choices, [key]: value } });
   const submit = () => {
     setDone(null);
     if (!reading.ok) {
@@ -90,42 +78,49 @@ export function DesignerForm({ form, setForm }: DesignerFormProps) {
     setGeneral(field ? 'Not designed: see the message above.' : `Not designed: ${errorText(r.error)}`);
   };
 
-  const field = (k: FieldKey): ReactNode => {
-    if (SECOND.has(k)) return null;
-    const info = fieldLabel(k, form.kind, form.family);
-    const pair = isBand(form.kind) ? PAIRS[k] : undefined;
-    if (pair)
+  const field = (f: Field): ReactNode => {
+    if (f.item === 1) return null;
+    const info = fieldLabel(f, form);
+    const p = f.parameter;
+    if (f.item === 0 && fields.some((g) => g.parameter === p && g.item === 1)) {
+      const second = `${p.key}.1`;
+      const stem = p.type === 'list' && p.pairLabel ? p.pairLabel : info.label;
       return (
         <PairField
-          key={k}
+          key={f.id}
           label={info.label}
-          names={pairNames(k)}
-          values={[form.values[k], form.values[pair]]}
-          errors={[errors[k], errors[pair]]}
+          names={[`${stem} low`, `${stem} high`]}
+          values={[form.values[f.id] ?? '', form.values[second] ?? '']}
+          errors={[errors[f.id], errors[second]]}
           unit={info.unit ?? ''}
-          onChange={(i, t) => setValue(i === 0 ? k : pair, t)}
+          onChange={(i, t) => setValue(i === 0 ? f.id : second, t)}
           onEnter={submit}
         />
       );
+    }
     return (
       <FormField
-        key={k}
+        key={f.id}
         label={info.label}
-        value={form.values[k]}
-        error={errors[k]}
-        wide={k === 'harmonics'}
-        onChange={(t) => setValue(k, t)}
+        value={form.values[f.id] ?? ''}
+        error={errors[f.id]}
+        wide={p.type === 'list' && !p.count.exactly}
+        onChange={(t) => setValue(f.id, t)}
         onEnter={submit}
-        hint={k.startsWith('edge') ? undefined : info.hint}
+        hint={f.item !== undefined ? undefined : info.hint}
         {...(info.unit !== undefined && { unit: info.unit })}
       />
     );
   };
 
-  const classical = isClassical(form.kind);
-  const main = fields.filter((k) => !classical || !REQUIREMENT.has(k));
-  const req = fields.filter((k) => classical && REQUIREMENT.has(k));
-  const edgeHint = classical && !form.autoOrder ? fieldLabel('edgeLow', form.kind, form.family).hint : null;
+  const main = fields.filter((f) => f.parameter.section !== 'requirement');
+  const req = fields.filter((f) => f.parameter.section === 'requirement');
+  // An edge list's hint (what an edge means for the family) reads best under the fields.
+  const notes = main
+    .filter((f) => f.item === 0)
+    .map((f) => fieldLabel(f, form))
+    .filter((l) => l.hint)
+    .map((l) => `${l.label}: ${l.hint}.`);
 
   return (
     <section className="pw-side-section pw-dz" aria-labelledby="pw-dz-form-h" data-testid="designer-form">
@@ -136,7 +131,7 @@ export function DesignerForm({ form, setForm }: DesignerFormProps) {
           <select
             value={form.kind}
             onChange={(e) => {
-              setForm(withKind(form, e.target.value as FormKind, fs));
+              setForm(withKind(form, e.target.value, fs));
               setErrors({});
               setGeneral(null);
               setDone(null);
@@ -145,7 +140,7 @@ export function DesignerForm({ form, setForm }: DesignerFormProps) {
             {GROUPS.map((g) => (
               <optgroup key={g} label={g}>
                 {KINDS.filter((k) => k.group === g).map((k) => (
-                  <option key={k.kind} value={k.kind}>
+                  <option key={k.id} value={k.id}>
                     {k.label}
                   </option>
                 ))}
@@ -153,82 +148,79 @@ export function DesignerForm({ form, setForm }: DesignerFormProps) {
             ))}
           </select>
         </label>
-        {classical && (
-          <label className="pw-dz-field">
-            <span>Family</span>
-            <select value={form.family} onChange={(e) => update({ family: e.target.value as IirFamily })}>
-              {FAMILIES.map((f) => (
-                <option key={f.family} value={f.family}>
-                  {f.label}
-                </option>
-              ))}
-            </select>
-          </label>
-        )}
+        {choices
+          .filter((p) => p.control === 'select')
+          .map((p) => (
+            <label key={p.key} className="pw-dz-field">
+              <span>{textFor(p.label, values)}</span>
+              <select value={form.choices[p.key]} onChange={(e) => setChoice(p.key, e.target.value)}>
+                {p.options.map((o) => (
+                  <option key={o.value} value={o.value}>
+                    {o.label}
+                  </option>
+                ))}
+              </select>
+            </label>
+          ))}
       </div>
-      {hasNotchWidth(form.kind) && (
+      {(entry.alternatives?.length || choices.some((p) => p.control === 'segmented')) && (
         <div className="pw-dz-choices">
-          <Segmented
-            mini
-            caption="Width as"
-            label="Width as"
-            value={form.width}
-            options={[
-              { value: 'bandwidth', label: '−3 dB width (Hz)' },
-              { value: 'q', label: 'Q' },
-            ]}
-            onChange={(v) => update({ width: v })}
-          />
-          {form.kind === 'comb' && (
-            <Segmented
-              mini
-              caption="Teeth"
-              label="Teeth"
-              value={form.combType}
-              options={[
-                { value: 'notch', label: 'notches' },
-                { value: 'peak', label: 'peaks' },
-              ]}
-              onChange={(v) => update({ combType: v })}
-            />
-          )}
+          {(entry.alternatives ?? []).map((alt) => {
+            const options = alt.keys.map((k) => {
+              const p = entry.parameters.find((q) => q.key === k)!;
+              const label = textFor(p.label, values) ?? k;
+              return { value: k, label: p.unit === 'Hz' ? `${label} (Hz)` : p.unit ? p.unit : label };
+            });
+            return (
+              <Segmented
+                key={alt.keys[0]}
+                mini
+                caption={alt.label}
+                label={alt.label}
+                value={form.choices[alt.keys[0]] ?? alt.keys[0]}
+                options={options}
+                onChange={(v) => setChoice(alt.keys[0], v)}
+              />
+            );
+          })}
+          {choices
+            .filter((p) => p.control === 'segmented')
+            .map((p) => {
+              const label = textFor(p.label, values) ?? p.key;
+              return (
+                <Segmented
+                  key={p.key}
+                  mini
+                  caption={label}
+                  label={label}
+                  value={form.choices[p.key] ?? p.options[0]!.value}
+                  options={p.options}
+                  onChange={(v) => setChoice(p.key, v)}
+                />
+              );
+            })}
         </div>
       )}
-      {(form.kind === 'peakingEq' || form.kind === 'lowShelf' || form.kind === 'highShelf') && (
-        <div className="pw-dz-choices">
-          <Segmented
-            mini
-            caption="Width as"
-            label="Width as"
-            value={form.eqWidth === 'q' ? 'q' : 'other'}
-            options={[
-              { value: 'q', label: 'Q' },
-              form.kind === 'peakingEq'
-                ? { value: 'other', label: 'octaves' }
-                : { value: 'other', label: 'slope' },
-            ]}
-            onChange={(v) =>
-              update({ eqWidth: v === 'q' ? 'q' : form.kind === 'peakingEq' ? 'octaves' : 'slope' })
-            }
-          />
-        </div>
-      )}
-      {classical && (
+      {orderParameter?.type === 'order' && (
         <label className="pw-dz-check">
           <input
             type="checkbox"
             checked={form.autoOrder}
             onChange={(e) => update({ autoOrder: e.target.checked })}
           />
-          Least order that meets the requirement
+          {orderParameter.autoLabel}
         </label>
       )}
       <div className="pw-dz-fields">{main.map(field)}</div>
-      {edgeHint && <p className="pw-hint pw-dz-note">Edge: {edgeHint}.</p>}
-      {classical && (
+      {notes.map((n) => (
+        <p key={n} className="pw-hint pw-dz-note">
+          {n}
+        </p>
+      ))}
+      {req.length > 0 && (
         <fieldset className="pw-dz-req">
           <legend>Requirement</legend>
-          {!form.autoOrder && (
+          {orderParameter && !form.autoOrder && (
             <p className="pw-hint pw-dz-note">Optional with a given order: gives margins and a mask.</p>
           )}
           <div className="pw-dz-fields">{req.map(field)}</div>

@@ -1,198 +1,137 @@
 /**
- * The designers the Design page offers, the fields each one shows, and starting values scaled to the
- * sample rate (taken from the invented scenarios: 50 Hz hum at 2 kHz, a 120 Hz anti-alias low-pass at
- * 1 kHz, a 1.2 kHz tone detector at 8 kHz).
+ * The Design form as data, derived from the designer registry (src/core/design/registry.ts): the kinds it
+ * offers (the registry's variants, grouped), the fields each shows for the choices made, and starting
+ * values from the registry's scenarios.
  */
-import type { BandShape, IirFamily } from '../../../core/design/index.ts';
+import {
+  DESIGNER_VARIANTS,
+  textFor,
+  type DesignValues,
+  type DesignerEntry,
+  type DesignerVariant,
+  type Parameter,
+} from '../../../core/design/index.ts';
 
-/** What the form designs: the engine's designer kinds, with the classical band shapes listed one by one. */
-export type FormKind =
-  | 'notch'
-  | 'peak'
-  | 'dcBlocker'
-  | 'harmonicNotch'
-  | 'comb'
-  | 'peakingEq'
-  | 'lowShelf'
-  | 'highShelf'
-  | BandShape;
-
-/** Every text field the form can show. */
-export type FieldKey =
-  | 'f0'
-  | 'bandwidth'
-  | 'q'
-  | 'cutoff'
-  | 'harmonics'
-  | 'gainDb'
-  | 'octaves'
-  | 'slope'
-  | 'order'
-  | 'edgeLow'
-  | 'edgeHigh'
-  | 'passLow'
-  | 'passHigh'
-  | 'stopLow'
-  | 'stopHigh'
-  | 'ripple'
-  | 'attenuation';
-
-/** The whole form: choices, and every field's text as typed (fields not shown keep their text). */
+/** The whole form: the chosen kind, every field's text as typed, and the choices made. */
 export interface DesignFormState {
-  kind: FormKind;
-  family: IirFamily;
-  /** Notch, peak, harmonic notches and comb: width as a −3 dB bandwidth in Hz or as Q. */
-  width: 'bandwidth' | 'q';
-  /** Peaking EQ: Q or octaves; shelves: Q or slope. */
-  eqWidth: 'q' | 'octaves' | 'slope';
-  combType: 'notch' | 'peak';
-  /** Classical designs: the least order meeting the requirement instead of a given order. */
+  /** The chosen variant's id (e.g. "notch", "lowpass"). */
+  kind: string;
+  /** Text of each field by field id: a parameter's key, or key.0 / key.1 for the items of an edge list. */
+  values: Record<string, string>;
+  /** Choice parameters by key (family, teeth), and each alternative pair by its first key: the key chosen. */
+  choices: Record<string, string>;
+  /** The order parameter set to "auto" (the least order meeting the requirement). */
   autoOrder: boolean;
-  values: Record<FieldKey, string>;
 }
 
-export interface KindInfo {
-  kind: FormKind;
-  label: string;
-  group: 'Remove or pick out a frequency' | 'Equaliser sections' | 'Classical filters';
+/** A text field of the form: one number, a free list, or the one or two items of an edge list. */
+export interface FormField {
+  id: string;
+  parameter: Parameter;
+  /** 0 or 1 for an item of an edge list (a list of exactly one or two numbers). */
+  item?: number;
 }
 
-export const KINDS: readonly KindInfo[] = [
-  { kind: 'notch', label: 'Notch', group: 'Remove or pick out a frequency' },
-  { kind: 'harmonicNotch', label: 'Notches at harmonics', group: 'Remove or pick out a frequency' },
-  { kind: 'comb', label: 'Comb (every multiple)', group: 'Remove or pick out a frequency' },
-  { kind: 'peak', label: 'Resonator (peak)', group: 'Remove or pick out a frequency' },
-  { kind: 'dcBlocker', label: 'DC blocker', group: 'Remove or pick out a frequency' },
-  { kind: 'peakingEq', label: 'Peaking EQ', group: 'Equaliser sections' },
-  { kind: 'lowShelf', label: 'Low shelf', group: 'Equaliser sections' },
-  { kind: 'highShelf', label: 'High shelf', group: 'Equaliser sections' },
-  { kind: 'lowpass', label: 'Low-pass', group: 'Classical filters' },
-  { kind: 'highpass', label: 'High-pass', group: 'Classical filters' },
-  { kind: 'bandpass', label: 'Band-pass', group: 'Classical filters' },
-  { kind: 'bandstop', label: 'Band-stop', group: 'Classical filters' },
-];
+/** The form's kinds, as the registry lists them. */
+export const KINDS: readonly DesignerVariant[] = DESIGNER_VARIANTS.map((v) => v.variant);
+/** Groups of the kind list, in order. */
+export const GROUPS: readonly string[] = [...new Set(KINDS.map((k) => k.group))];
 
-export const FAMILIES: readonly { family: IirFamily; label: string }[] = [
-  { family: 'butterworth', label: 'Butterworth' },
-  { family: 'chebyshev1', label: 'Chebyshev I' },
-  { family: 'chebyshev2', label: 'Chebyshev II' },
-  { family: 'elliptic', label: 'Elliptic' },
-];
-
-/** True for the classical band shapes. */
-export function isClassical(kind: FormKind): kind is BandShape {
-  return kind === 'lowpass' || kind === 'highpass' || kind === 'bandpass' || kind === 'bandstop';
+/** The registry entry and variant of a form kind. */
+export function kindOf(kind: string): { entry: DesignerEntry; variant: DesignerVariant } {
+  const found = DESIGNER_VARIANTS.find((v) => v.variant.id === kind);
+  if (!found) throw new Error(`designKinds: no designer variant "${kind}"`);
+  return found;
 }
 
-/** True for kinds whose width is a bandwidth or Q. */
-export const hasNotchWidth = (k: FormKind) =>
-  k === 'notch' || k === 'peak' || k === 'harmonicNotch' || k === 'comb';
+/** The parameters a kind asks for (those its variant does not fix). */
+export const openParameters = (entry: DesignerEntry, variant: DesignerVariant): Parameter[] =>
+  entry.parameters.filter((p) => !(p.key in (variant.fixed ?? {})));
 
-/** Two edges per band for band-pass and band-stop, one otherwise. */
-export const isBand = (k: FormKind) => k === 'bandpass' || k === 'bandstop';
+/** The values the form's labels and conditions read: kind, fixed values, choices and the order mode. */
+export function formValues(s: DesignFormState): DesignValues {
+  const { entry, variant } = kindOf(s.kind);
+  const values: Record<string, unknown> = { kind: entry.kind, ...variant.fixed };
+  for (const p of entry.parameters)
+    if (p.type === 'choice' && s.choices[p.key]) values[p.key] = s.choices[p.key];
+  if (entry.parameters.some((p) => p.type === 'order')) values.order = s.autoOrder ? 'auto' : 0;
+  return values;
+}
 
-/** The text fields shown for the form's current choices, in reading order. */
-export function visibleFields(s: DesignFormState): FieldKey[] {
-  const k = s.kind;
-  if (hasNotchWidth(k)) {
-    const head: FieldKey[] = k === 'harmonicNotch' ? ['f0', 'harmonics'] : ['f0'];
-    return [...head, s.width === 'q' ? 'q' : 'bandwidth'];
+/** The key of an alternative pair shown for the form's choice (the other one is not asked for). */
+export function chosenAlternative(entry: DesignerEntry, key: string, s: DesignFormState): boolean {
+  const alt = (entry.alternatives ?? []).find((a) => a.keys.includes(key));
+  return !alt || (s.choices[alt.keys[0]] ?? alt.keys[0]) === key;
+}
+
+/** How many items an edge list has for these values, or null for a free list. */
+export function itemCount(p: Parameter, values: DesignValues): number | null {
+  return p.type === 'list' && p.count.exactly ? p.count.exactly(values) : null;
+}
+
+/** The text fields shown for the form's choices, in reading order. */
+export function visibleFields(s: DesignFormState): FormField[] {
+  const { entry, variant } = kindOf(s.kind);
+  const values = formValues(s);
+  const out: FormField[] = [];
+  for (const p of openParameters(entry, variant)) {
+    if (p.type === 'choice' || (p.type === 'order' && s.autoOrder)) continue;
+    if (!chosenAlternative(entry, p.key, s) || (p.shownWhen && !p.shownWhen(values))) continue;
+    const n = itemCount(p, values);
+    if (n === null) out.push({ id: p.key, parameter: p });
+    else for (let i = 0; i < n; i++) out.push({ id: `${p.key}.${i}`, parameter: p, item: i });
   }
-  if (k === 'dcBlocker') return ['cutoff'];
-  if (k === 'peakingEq') return ['f0', 'gainDb', s.eqWidth === 'octaves' ? 'octaves' : 'q'];
-  if (k === 'lowShelf' || k === 'highShelf') return ['f0', 'gainDb', s.eqWidth === 'slope' ? 'slope' : 'q'];
-  const two = isBand(k);
-  const edges: FieldKey[] = s.autoOrder ? [] : two ? ['order', 'edgeLow', 'edgeHigh'] : ['order', 'edgeLow'];
-  const req: FieldKey[] = two ? ['passLow', 'passHigh', 'stopLow', 'stopHigh'] : ['passLow', 'stopLow'];
-  return [...edges, ...req, 'ripple', 'attenuation'];
+  return out;
 }
 
-/** A value rounded to 3 significant digits, as text. */
-const r3 = (v: number) => String(Number(v.toPrecision(3)));
-
-/** Starting values for every field at sample rate fs (Hz). */
-export function defaultValues(fs: number): Record<FieldKey, string> {
-  const nyq = fs / 2;
-  // 50 Hz mains where it fits comfortably below Nyquist, else a twentieth of fs.
-  const hum = nyq > 400 ? 50 : fs / 20;
-  const at = (fraction: number) => r3(fraction * fs);
+/** A field's label, unit and hint for the form's choices. */
+export function fieldLabel(
+  f: FormField,
+  s: DesignFormState,
+): { label: string; unit?: string; hint?: string } {
+  const values = formValues(s);
+  const hint = textFor(f.parameter.hint, values);
   return {
-    f0: r3(hum),
-    bandwidth: r3(nyq > 400 ? 2 : hum / 25),
-    q: '25',
-    cutoff: r3(fs / 1000),
-    harmonics: '1, 3, 5',
-    gainDb: '6',
-    octaves: '1',
-    slope: '1',
-    order: '4',
-    edgeLow: at(0.12),
-    edgeHigh: at(0.2),
-    passLow: at(0.1),
-    passHigh: at(0.2),
-    stopLow: at(0.4),
-    stopHigh: at(0.3),
-    ripple: '1',
-    attenuation: '60',
+    label: textFor(f.parameter.label, values) ?? f.parameter.key,
+    ...(f.parameter.unit && { unit: f.parameter.unit }),
+    ...(hint && { hint }),
   };
 }
 
-/** Values that suit a kind at fs (band edges nest the right way round; f0 where that kind is usually used). */
-function kindValues(kind: FormKind, fs: number): Partial<Record<FieldKey, string>> {
-  const at = (fraction: number) => r3(fraction * fs);
-  switch (kind) {
-    case 'peak':
-      return { f0: at(0.15), q: '25' };
-    case 'comb':
-      return { f0: r3(fs / Math.max(2, Math.round(fs / Number(defaultValues(fs).f0)))) };
-    case 'peakingEq':
-      return { f0: at(0.1), q: '1' };
-    case 'lowShelf':
-      return { f0: at(0.05), q: '0.707' };
-    case 'highShelf':
-      return { f0: at(0.2), q: '0.707', gainDb: '-6' };
-    case 'highpass':
-      return { edgeLow: at(0.1), passLow: at(0.12), stopLow: at(0.03), attenuation: '40' };
-    case 'bandpass':
-      return {
-        edgeLow: at(0.1),
-        edgeHigh: at(0.2),
-        passLow: at(0.11),
-        passHigh: at(0.19),
-        stopLow: at(0.05),
-        stopHigh: at(0.3),
-        attenuation: '30',
-      };
-    case 'bandstop':
-      return {
-        edgeLow: at(0.1),
-        edgeHigh: at(0.2),
-        passLow: at(0.07),
-        passHigh: at(0.26),
-        stopLow: at(0.14),
-        stopHigh: at(0.16),
-        attenuation: '30',
-      };
-    default:
-      return {};
+/** A value as the form shows it. */
+const asText = (v: unknown) => (Array.isArray(v) ? v.join(', ') : v === undefined ? '' : String(v));
+
+/** A fresh form for a kind at sample rate fs (Hz), with the registry's starting values. */
+export function defaultForm(kind: string, fs: number): DesignFormState {
+  const { entry, variant } = kindOf(kind);
+  const start = variant.start(fs);
+  const s: DesignFormState = { kind, values: {}, choices: {}, autoOrder: start.order === 'auto' };
+  for (const p of openParameters(entry, variant)) {
+    const v = start[p.key];
+    if (p.type === 'choice') s.choices[p.key] = String(v ?? p.fallback ?? p.options[0]!.value);
+    else if (p.type === 'list' && p.count.exactly) {
+      const list = Array.isArray(v) ? v : [];
+      for (let i = 0; i < p.count.max; i++) s.values[`${p.key}.${i}`] = asText(list[i]);
+    } else s.values[p.key] = asText(v);
   }
+  for (const alt of entry.alternatives ?? [])
+    s.choices[alt.keys[0]] = alt.keys.find((k) => variant.prefer?.includes(k)) ?? alt.keys[0];
+  return s;
 }
 
-/** A fresh form for a kind at sample rate fs (Hz). */
-export function defaultForm(kind: FormKind, fs: number): DesignFormState {
-  return {
-    kind,
-    family: 'butterworth',
-    width: kind === 'peak' ? 'q' : 'bandwidth',
-    eqWidth: 'q',
-    combType: 'notch',
-    autoOrder: false,
-    values: { ...defaultValues(fs), ...kindValues(kind, fs) },
-  };
-}
-
-/** The form switched to another kind: the values that kind starts from, keeping the family and order mode. */
-export function withKind(s: DesignFormState, kind: FormKind, fs: number): DesignFormState {
+/** The form switched to another kind: that kind's starting values, keeping the family and order mode. */
+export function withKind(s: DesignFormState, kind: string, fs: number): DesignFormState {
   const fresh = defaultForm(kind, fs);
-  return { ...fresh, family: s.family, autoOrder: s.autoOrder };
+  for (const [key, value] of Object.entries(s.choices))
+    if (
+      key in fresh.choices &&
+      kindOf(kind).entry.parameters.some((p) => p.key === key && p.type === 'choice')
+    )
+      fresh.choices[key] = value;
+  return { ...fresh, autoOrder: s.autoOrder };
+}
+
+/** Text of one field from a description's value (for showing a designer in the form). */
+export function fieldText(f: FormField, value: unknown): string {
+  return f.item === undefined ? asText(value) : asText(Array.isArray(value) ? value[f.item] : undefined);
 }
