@@ -11,52 +11,36 @@ const GROUP = 'Remove or pick out a frequency';
 export const COMB_DIVISOR_TOLERANCE = 1e-9;
 const tail = (fs: number) => `, fs ${fmt(fs)} Hz`;
 
-export const notchDesigner = defineDesigner({
-  kind: 'notch',
-  parameters: [centre('Centre', 'centre in Hz'), bandwidth, quality('quality factor f0/bandwidth')],
-  alternatives: [NOTCH_WIDTH],
-  variants: [
-    {
-      id: 'notch',
-      cli: 'notch',
-      label: 'Notch',
-      group: GROUP,
-      example: () => ({ fs: 1000, f0: 50, bandwidthHz: 2 }),
-      start: (fs) => ({ f0: humHz(fs), ...startWidth(fs) }),
+/** A second-order notch (zeros on the circle) or resonator (a peak) at f0, its width as a bandwidth or Q. */
+function resonanceDesigner<const K extends 'notch' | 'peak'>(kind: K) {
+  const notch = kind === 'notch';
+  return defineDesigner({
+    kind,
+    parameters: [centre('Centre', 'centre in Hz'), bandwidth, quality('quality factor f0/bandwidth')],
+    alternatives: [NOTCH_WIDTH],
+    variants: [
+      {
+        id: kind,
+        cli: kind,
+        label: notch ? 'Notch' : 'Resonator (peak)',
+        group: GROUP,
+        ...(!notch && { prefer: ['q'] }),
+        example: () => (notch ? { fs: 1000, f0: 50, bandwidthHz: 2 } : { fs: 8000, f0: 1200, q: 25 }),
+        start: (fs) => ({ f0: notch ? humHz(fs) : r3(0.15 * fs), ...startWidth(fs) }),
+      },
+    ],
+    design(spec) {
+      const bw = widthHz(spec, spec.f0, spec.fs / 2, `a ${kind} at fs ${fmt(spec.fs)} Hz`);
+      return {
+        zpk: (notch ? designNotch : designPeak)(spec.f0, bw, spec.fs),
+        note: `${kind} at ${fmt(spec.f0)} Hz, −3 dB width ${fmt(bw)} Hz (Q ${fmt(spec.f0 / bw)})${tail(spec.fs)}`,
+      };
     },
-  ],
-  design(spec) {
-    const bw = widthHz(spec, spec.f0, spec.fs / 2, `a notch at fs ${fmt(spec.fs)} Hz`);
-    return {
-      zpk: designNotch(spec.f0, bw, spec.fs),
-      note: `notch at ${fmt(spec.f0)} Hz, −3 dB width ${fmt(bw)} Hz (Q ${fmt(spec.f0 / bw)})${tail(spec.fs)}`,
-    };
-  },
-});
+  });
+}
 
-export const peakDesigner = defineDesigner({
-  kind: 'peak',
-  parameters: [centre('Centre', 'centre in Hz'), bandwidth, quality('quality factor f0/bandwidth')],
-  alternatives: [NOTCH_WIDTH],
-  variants: [
-    {
-      id: 'peak',
-      cli: 'peak',
-      label: 'Resonator (peak)',
-      group: GROUP,
-      prefer: ['q'],
-      example: () => ({ fs: 8000, f0: 1200, q: 25 }),
-      start: (fs) => ({ f0: r3(0.15 * fs), ...startWidth(fs) }),
-    },
-  ],
-  design(spec) {
-    const bw = widthHz(spec, spec.f0, spec.fs / 2, `a peak at fs ${fmt(spec.fs)} Hz`);
-    return {
-      zpk: designPeak(spec.f0, bw, spec.fs),
-      note: `peak at ${fmt(spec.f0)} Hz, −3 dB width ${fmt(bw)} Hz (Q ${fmt(spec.f0 / bw)})${tail(spec.fs)}`,
-    };
-  },
-});
+export const notchDesigner = resonanceDesigner('notch');
+export const peakDesigner = resonanceDesigner('peak');
 
 export const dcBlockerDesigner = defineDesigner({
   kind: 'dcBlocker',
