@@ -4,7 +4,7 @@
  * gesture (a drag) and leaves the single step to endGesture, 'none' does not touch history.
  */
 import { createStore, type StoreApi } from 'zustand/vanilla';
-import type { Root } from '../core/types.ts';
+import type { Result, Root } from '../core/types.ts';
 import { demoDesign } from './demo.ts';
 import {
   emptyDesign,
@@ -17,7 +17,8 @@ import { MAX_SAMPLE_RATE } from '../core/model/limits.ts';
 import { closeGesture, emptyHistory, recordEdit, type History } from './history.ts';
 import * as edits from './rootEdits.ts';
 import { defaultView, type ViewSettings, type ViewState } from './view.ts';
-import { designerActions, type DesignerActions } from './designer.ts';
+import { designerActions, rerunDesignerOn, type DesignerActions } from './designer.ts';
+import type { DesignResult } from '../core/design/index.ts';
 import { implementationActions, type ImplementationActions } from './implementation.ts';
 import { defaultSignalView, signalActions, type SignalActions, type SignalState } from './signal.ts';
 
@@ -30,6 +31,13 @@ export interface DesignActions {
   joinPair(ref: RootRef): void;
   setGainRule(rule: GainRule): void;
   setSampleRate(hz: number): void;
+  /**
+   * Takes a sample rate for the design (a recording's) and re-runs its designer at that rate, so a notch
+   * designed at 50 Hz stays at 50 Hz; one undo step. Returns the re-run's result (null when the design has
+   * no designer, or the rate is not accepted); when the designer refuses the new rate, the rate still
+   * changes and the roots stay, and the error says why.
+   */
+  adoptSampleRate(hz: number): Result<DesignResult> | null;
   /**
    * Replaces the roots and gain by a system the user typed, keeping the typed coefficients; `about`
    * optionally replaces the name and note in the same undo step (the old note described other roots).
@@ -118,6 +126,19 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
       replaceDesign: (design) => {
         edit(() => design);
         set({ selection: null });
+      },
+      adoptSampleRate: (hz) => {
+        if (!(hz > 0 && hz <= MAX_SAMPLE_RATE)) return null;
+        let rerun: Result<DesignResult> | null = null;
+        edit((d) => {
+          const rated = d.sampleRate === hz ? d : { ...d, sampleRate: hz };
+          if (!rated.designer) return rated;
+          const r = rerunDesignerOn(rated, {});
+          rerun = r.ok ? { ok: true, value: r.value.result } : r;
+          return r.ok ? r.value.design : rated;
+        });
+        if (rerun !== null && (rerun as Result<DesignResult>).ok) set({ selection: null });
+        return rerun;
       },
       setName: (name) => edit((d) => (d.name === name ? d : { ...d, name })),
       ...designerActions(get, edit, () => set({ selection: null })),

@@ -1,6 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import { createWorkbenchStore } from '../../src/store/store.ts';
 import { emptyDesign } from '../../src/core/model/design.ts';
+import { rootFrequencyHz } from '../../src/core/readouts.ts';
 
 describe('workbench store: edits and undo', () => {
   it('a whole drag (many moves inside one gesture) is one undo step', () => {
@@ -50,5 +51,70 @@ describe('workbench store: edits and undo', () => {
     store.getState().setSampleRate(NaN);
     expect(store.getState().history.past).toHaveLength(0);
     expect(store.getState().design.sampleRate).toBe(1000);
+  });
+});
+
+describe('compound edits are named store actions of one undo step', () => {
+  const hopper = () => {
+    const store = createWorkbenchStore(emptyDesign(2000));
+    const r = store.getState().runDesigner({ kind: 'notch', fs: 2000, f0: 50, bandwidthHz: 4 });
+    if (!r.ok) throw new Error(r.error.message);
+    return store;
+  };
+
+  it("adopting a recording's rate re-runs the designer there: the notch stays at 50 Hz, and one undo restores all", () => {
+    const store = hopper();
+    const before = store.getState().design;
+    const r = store.getState().adoptSampleRate(48000);
+    expect(r?.ok).toBe(true);
+    const d = store.getState().design;
+    expect(d.sampleRate).toBe(48000);
+    expect(d.designer).toMatchObject({ fs: 48000, f0: 50 });
+    // The zero pair sits at 50 Hz at the new rate (it would sit at 1.2 kHz had only the rate changed).
+    expect(rootFrequencyHz(d.zeros[0]!, 48000)).toBeCloseTo(50, 9);
+    store.getState().undo();
+    expect(store.getState().design).toBe(before);
+  });
+
+  it('adopting a rate the designer cannot follow still takes the rate, keeps the roots and says why', () => {
+    const store = hopper();
+    const zeros = store.getState().design.zeros;
+    const r = store.getState().adoptSampleRate(80);
+    expect(r).toMatchObject({ ok: false, error: { parameter: 'f0' } });
+    expect(store.getState().design.sampleRate).toBe(80);
+    expect(store.getState().design.zeros).toBe(zeros);
+    expect(store.getState().history.past).toHaveLength(2);
+    expect(store.getState().adoptSampleRate(-1)).toBeNull();
+  });
+
+  it('without a designer, adopting a rate is just the rate, one step', () => {
+    const store = createWorkbenchStore(emptyDesign(1000));
+    expect(store.getState().adoptSampleRate(8000)).toBeNull();
+    expect(store.getState().design.sampleRate).toBe(8000);
+    store.getState().undo();
+    expect(store.getState().design.sampleRate).toBe(1000);
+  });
+
+  it('designing from the form sets the roots and the mask its requirement implies in one undo step', () => {
+    const store = createWorkbenchStore(emptyDesign(1000));
+    const before = store.getState().design;
+    const r = store.getState().runDesigner(
+      {
+        kind: 'iir',
+        fs: 1000,
+        family: 'butterworth',
+        response: 'lowpass',
+        order: 'auto',
+        passbandHz: [100],
+        stopbandHz: [300],
+        rippleDb: 1,
+        attenuationDb: 40,
+      },
+      'replace',
+    );
+    expect(r.ok).toBe(true);
+    expect(store.getState().design.mask?.regions.length).toBeGreaterThan(0);
+    store.getState().undo();
+    expect(store.getState().design).toBe(before);
   });
 });

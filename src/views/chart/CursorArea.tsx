@@ -3,6 +3,7 @@
  * It is a slider to assistive technology, valued in the plot's x unit, with a focus ring drawn around it.
  */
 import type { KeyboardEvent } from 'react';
+import { shortcutAction } from '../shortcuts.ts';
 
 export interface CursorAreaProps {
   rect: { left: number; right: number; top: number; bottom: number };
@@ -28,7 +29,7 @@ export function CursorArea(p: CursorAreaProps) {
     return box ? p.valueAt(e.clientX - box.left) : null;
   };
   const onKeyDown = (e: KeyboardEvent<SVGRectElement>) => {
-    if (e.key === 'Escape') return onChange(null);
+    if (shortcutAction('cursor', e) === 'cursor-off') return onChange(null);
     const to = p.keyTarget(e.key, e.shiftKey, p.value);
     if (to === undefined) return;
     e.preventDefault();

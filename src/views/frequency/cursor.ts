@@ -1,27 +1,26 @@
 /** Moving the frequency cross-hair by keyboard: steps that feel even on a linear or a log axis. */
 import type { Range } from '../chart/range.ts';
+import { shortcutAction } from '../shortcuts.ts';
 
 /** Arrow-key steps across the whole axis; Shift (or Page Up/Down) moves ten of them. */
 export const CURSOR_STEPS_PER_AXIS = 400;
 export const CURSOR_BIG_STEP = 10;
 
-/** Keys that move the cross-hair and how far, in small steps; null for any other key. */
+/** Keys that move the cross-hair (the cursor shortcuts) and how far, in small steps; null for any other key. */
 export function cursorStepsForKey(key: string, shift: boolean): number | 'start' | 'end' | null {
   const big = shift ? CURSOR_BIG_STEP : 1;
-  switch (key) {
-    case 'ArrowRight':
-    case 'ArrowUp':
+  switch (shortcutAction('cursor', { key, shiftKey: shift })) {
+    case 'cursor-forward':
       return big;
-    case 'ArrowLeft':
-    case 'ArrowDown':
+    case 'cursor-back':
       return -big;
-    case 'PageUp':
+    case 'cursor-page-forward':
       return CURSOR_BIG_STEP;
-    case 'PageDown':
+    case 'cursor-page-back':
       return -CURSOR_BIG_STEP;
-    case 'Home':
+    case 'cursor-first':
       return 'start';
-    case 'End':
+    case 'cursor-last':
       return 'end';
     default:
       return null;

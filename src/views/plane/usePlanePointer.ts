@@ -137,10 +137,14 @@ export function usePlanePointer({ svgRef, scaleRef, placingRef, onPlaced }: Opti
     gesture.current = null;
     const st = workbenchStore.getState();
     if (g.type === 'root') {
-      rootMoves.current!.flush();
-      rootMoves.current!.cancel();
-      st.endGesture();
-      st.setDragging(false);
+      try {
+        rootMoves.current!.flush();
+        rootMoves.current!.cancel();
+      } finally {
+        // The drag's undo step closes whatever happened to its last move.
+        st.endGesture();
+        st.setDragging(false);
+      }
     } else {
       panMoves.current!.flush();
       panMoves.current!.cancel();

@@ -5,15 +5,17 @@
  * designed at 50 Hz stays at 50 Hz.
  */
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
+import { postNotice } from '../../store/notices.ts';
 import { formatHz } from '../shared/format.ts';
 
-/** Sets the design's sample rate (and re-runs its designer) as one undo step. */
-export function adoptSignalRate(hz: number): void {
-  const st = workbenchStore.getState();
-  st.beginGesture();
-  st.setSampleRate(hz);
-  if (workbenchStore.getState().design.designer) workbenchStore.getState().rerunDesigner({});
-  workbenchStore.getState().endGesture();
+/** Takes the recording's rate for the design (one undo step: the store's adoptSampleRate), saying if its designer could not follow. */
+function adoptSignalRate(hz: number): void {
+  const r = workbenchStore.getState().adoptSampleRate(hz);
+  if (r && !r.ok)
+    postNotice(
+      'info',
+      `The design is now at ${formatHz(hz)}, but its designer could not re-run there (${r.error.message}); the roots stay as they were.`,
+    );
 }
 
 export function RateNote() {

@@ -3,6 +3,7 @@
  * shows everything; keys on the focused plot do the same (+/− zoom, arrows pan, 0 or Home shows all).
  */
 import { useEffect, useRef, type KeyboardEvent, type PointerEvent, type RefObject } from 'react';
+import { shortcutAction } from '../shortcuts.ts';
 
 /** Zoom factor of one wheel notch or key press. */
 export const ZOOM_STEP = 1.5;
@@ -63,17 +64,16 @@ export function useZoomGestures(svg: RefObject<SVGSVGElement | null>, target: Zo
     const { t0, t1 } = target;
     const mid = (t0 + t1) / 2;
     const pan = (e.shiftKey ? 1 : PAN_STEP) * (t1 - t0);
-    const next: Record<string, () => void> = {
-      '+': () => target.set(zoomAbout(t0, t1, mid, ZOOM_STEP)),
-      '=': () => target.set(zoomAbout(t0, t1, mid, ZOOM_STEP)),
-      '-': () => target.set(zoomAbout(t0, t1, mid, 1 / ZOOM_STEP)),
-      ArrowLeft: () => target.set([t0 - pan, t1 - pan]),
-      ArrowRight: () => target.set([t0 + pan, t1 + pan]),
-      '0': () => target.set(null),
-      Home: () => target.set(null),
+    const next = {
+      'zoom-in': () => target.set(zoomAbout(t0, t1, mid, ZOOM_STEP)),
+      'zoom-out': () => target.set(zoomAbout(t0, t1, mid, 1 / ZOOM_STEP)),
+      'pan-back': () => target.set([t0 - pan, t1 - pan]),
+      'pan-forward': () => target.set([t0 + pan, t1 + pan]),
+      'zoom-all': () => target.set(null),
     };
-    const act = next[e.key];
-    if (!act) return;
+    const action = shortcutAction('recording', e);
+    if (!action) return;
+    const act = next[action];
     e.preventDefault();
     act();
   };

@@ -4,7 +4,6 @@
  * in one undo step; the mask follows the requirement when asked.
  */
 import { useMemo, useState, type ReactNode } from 'react';
-import { runDesignerWithMask } from './runFromForm.ts';
 import { Segmented } from '../../chart/Segmented.tsx';
 import { useWorkbench, workbenchStore } from '../../../store/useWorkbench.ts';
 import { selectDesignerStatus } from '../../../store/derived.ts';
@@ -66,7 +65,10 @@ export function DesignerForm({ form, setForm }: DesignerFormProps) {
       return;
     }
     const replacedEdits = status?.editedByHand ?? false;
-    const r = runDesignerWithMask(workbenchStore.getState(), reading.spec, withMask && impliedMask !== null);
+    // One undo step: the roots, and the mask when asked (the one its requirement implies).
+    const r = workbenchStore
+      .getState()
+      .runDesigner(reading.spec, withMask && impliedMask ? 'replace' : 'keep');
     if (r.ok) {
       setErrors({});
       setGeneral(null);

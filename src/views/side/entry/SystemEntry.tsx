@@ -8,6 +8,7 @@ import { workbenchStore } from '../../../store/useWorkbench.ts';
 import { ExampleChips } from './ExampleChips.tsx';
 import { ParseErrorView } from './ParseErrorView.tsx';
 import { readEntry, typedAbout } from './readEntry.ts';
+import { shortcutAction } from '../../shortcuts.ts';
 
 interface Props {
   text: string;
@@ -60,7 +61,7 @@ export function SystemEntry({ text, setText, area }: Props) {
         aria-describedby={error ? `${id}-hint ${id}-err` : `${id}-hint`}
         onChange={(e) => setText(e.target.value)}
         onKeyDown={(e) => {
-          if (e.key === 'Enter' && (e.ctrlKey || e.metaKey)) {
+          if (shortcutAction('entry', e) === 'apply') {
             e.preventDefault();
             apply();
           }
