@@ -24,6 +24,7 @@ import {
 } from '../src/core/signal/index.ts';
 import type { Section } from '../src/core/types.ts';
 import { cell } from './timing.ts';
+import { hzToOmega } from '../src/core/units.ts';
 
 const FS = 48000;
 const SECONDS = 600;
@@ -33,7 +34,7 @@ const MB = 1024 * 1024;
 /** A 50 Hz hum remover: notches at 50, 100 and 150 Hz (pole radius 0.999), as three sections. */
 function humNotches(): Section[] {
   return [50, 100, 150].map((f) => {
-    const w = (2 * Math.PI * f) / FS;
+    const w = hzToOmega(f, FS);
     const r = 0.999;
     return [1, -2 * Math.cos(w), 1, 1, -2 * r * Math.cos(w), r * r];
   });

@@ -8,6 +8,7 @@ import { magnitudeDbAt } from '../../src/core/mask/index.ts';
 import type { Zpk } from '../../src/core/types.ts';
 import { readDesign } from './app.ts';
 import { frequencyPanel } from './charts.ts';
+import { hzToOmega } from '../../src/core/units.ts';
 
 /** Shows the side column's Design page. */
 export async function openDesignPage(page: Page): Promise<void> {
@@ -67,7 +68,7 @@ export async function designZpk(page: Page): Promise<{ zpk: Zpk; fs: number }> {
 
 /** |H| in dB at hz (Hz) for a design at sample rate fs, by the engine. */
 export function magnitudeDbHz(zpk: Zpk, fs: number, hz: number): number {
-  return magnitudeDbAt(zpk, (2 * Math.PI * hz) / fs);
+  return magnitudeDbAt(zpk, hzToOmega(hz, fs));
 }
 
 /**

@@ -1,6 +1,7 @@
 /** Gain rules: the overall gain k set directly, or chosen so that |H| = 1 (0 dB) at a stated place. */
 import type { Root, Zpk } from './types.ts';
 import { responseZpk, frequencyGrid, evalZpkAt } from './response/index.ts';
+import { hzToOmega } from './units.ts';
 
 export type GainRule =
   | { kind: 'fixed'; value: number }
@@ -44,7 +45,7 @@ export function resolveGain(zeros: Root[], poles: Root[], rule: GainRule, fs: nu
     mag = 0;
     for (let i = 0; i < r.magnitude.length; i++) if (r.magnitude[i]! > mag) mag = r.magnitude[i]!;
   } else {
-    const omega = rule.kind === 'dc' ? 0 : rule.kind === 'nyquist' ? Math.PI : (2 * Math.PI * rule.hz) / fs;
+    const omega = rule.kind === 'dc' ? 0 : rule.kind === 'nyquist' ? Math.PI : hzToOmega(rule.hz, fs);
     const h = evalZpkAt(unit, Math.cos(omega), Math.sin(omega));
     mag = Math.hypot(h.re, h.im);
   }

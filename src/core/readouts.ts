@@ -1,16 +1,17 @@
 /** Per-root read-outs in the trade's units: frequency, radius, decay, Q and bandwidth, notch depth. */
 import type { Complex, Root, Zpk } from './types.ts';
 import { responseAt } from './response/pointValue.ts';
+import { omegaToHz, type Hertz, type RadPerSample } from './units.ts';
 
 /** What one stored root (a conjugate pair counts once) means at the design's sample rate. */
 export interface RootReadout {
   root: Root;
   kind: 'pole' | 'zero';
   /** Angle expressed as a frequency, Hz, in [0, fs/2]. */
-  frequencyHz: number;
+  frequencyHz: Hertz;
   radius: number;
   /** Angle in radians per sample, in [0, π]. */
-  angleRad: number;
+  angleRad: RadPerSample;
   /** Poles inside the circle: τ = −1/ln r, samples for the envelope to fall by 1/e. */
   timeConstantSamples?: number;
   timeConstantSeconds?: number;
@@ -19,7 +20,7 @@ export interface RootReadout {
   /** Complex poles inside the circle: f0 / bandwidth. */
   q?: number;
   /** Complex poles inside the circle: −3 dB bandwidth estimate (1 − r)·fs/π, Hz. */
-  bandwidthHz?: number;
+  bandwidthHz?: Hertz;
   /** Zeros within NOTCH_RADIUS_BAND of the circle: |H| in dB at the zero's angle. */
   notchDepthDb?: number;
   notchFrequencyHz?: number;
@@ -36,7 +37,7 @@ export const NOTCH_RADIUS_BAND = 0.05;
  * narrow-resonance approximation: a pole at radius r gives a −3 dB width of 2(1 − r) rad/sample, i.e.
  * (1 − r)·fs/π Hz; accurate when 1 − r is small and the pole is well away from 0 and fs/2.
  */
-export function rootReadouts(zpk: Zpk, fs: number): RootReadout[] {
+export function rootReadouts(zpk: Zpk, fs: Hertz): RootReadout[] {
   const out: RootReadout[] = [];
   for (const p of zpk.poles) {
     const r = base(p, 'pole', fs);
@@ -46,7 +47,8 @@ export function rootReadouts(zpk: Zpk, fs: number): RootReadout[] {
       r.timeConstantSeconds = tau / fs;
       r.decay40dBSeconds = (Math.log(100) * tau) / fs;
       if (p.im > 0) {
-        r.bandwidthHz = ((1 - r.radius) * fs) / Math.PI;
+        // A pole at radius r is 2(1 − r) radians per sample wide at −3 dB.
+        r.bandwidthHz = omegaToHz(2 * (1 - r.radius), fs);
         r.q = r.frequencyHz / r.bandwidthHz;
       }
     }
@@ -68,9 +70,14 @@ export function rootReadouts(zpk: Zpk, fs: number): RootReadout[] {
  * The frequency a root stands for: its angle on the plane as Hz in [0, fs/2] at sample rate fs (Hz), the
  * same for a root and its conjugate. The one read-out of a root's frequency (table, plane, marker, snapping).
  */
-export function rootFrequencyHz(root: Complex, fs: number): number {
-  // Divide the angle first: π/(2π) is exactly 0.5, so a root at z = −1 reads exactly fs/2.
-  return (Math.abs(Math.atan2(root.im, root.re)) / (2 * Math.PI)) * fs;
+export function rootFrequencyHz(root: Complex, fs: Hertz): Hertz {
+  // omegaToHz divides the angle first: a root at z = −1 reads exactly fs/2.
+  return omegaToHz(rootAngle(root), fs);
+}
+
+/** A root's angle on the plane in radians per sample, in [0, π] (a root and its conjugate alike). */
+export function rootAngle(root: Complex): RadPerSample {
+  return Math.abs(Math.atan2(root.im, root.re));
 }
 
 function base(root: Root, kind: 'pole' | 'zero', fs: number): RootReadout {
@@ -79,6 +86,6 @@ function base(root: Root, kind: 'pole' | 'zero', fs: number): RootReadout {
     kind,
     frequencyHz: rootFrequencyHz(root, fs),
     radius: Math.hypot(root.re, root.im),
-    angleRad: Math.abs(Math.atan2(root.im, root.re)),
+    angleRad: rootAngle(root),
   };
 }

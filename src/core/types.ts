@@ -3,7 +3,7 @@
  * - Polynomials are coefficient arrays in DESCENDING powers (highest first), as numpy does. A b/a array in
  *   powers of z^-1 (b[k] multiplies z^-k) is the same array read as a polynomial in z of degree length-1.
  * - Frequencies inside the engine are radians per sample (omega in [0, pi]); hertz only at the edges,
- *   converted with the design's sample rate.
+ *   converted with the design's sample rate by units.ts, whose types keep the two apart.
  * - Roots of real-coefficient systems: a complex root is stored once with im > 0 and its conjugate is
  *   implied; a real root has im === 0.
  */
@@ -52,19 +52,4 @@ export interface InputError {
   parameter?: string;
   /** The item of a list parameter at fault, 0-based. */
   index?: number;
-}
-
-/** Radians per sample (normalised angular frequency, pi = Nyquist). */
-export type RadPerSample = number & { readonly __unit?: 'rad/sample' };
-/** Hertz at the design's sample rate. */
-export type Hertz = number & { readonly __unit?: 'Hz' };
-
-/** Converts hertz at sample rate fs to radians per sample. */
-export function hzToOmega(f: Hertz, fs: Hertz): RadPerSample {
-  return (2 * Math.PI * f) / fs;
-}
-
-/** Converts radians per sample to hertz at sample rate fs. */
-export function omegaToHz(omega: RadPerSample, fs: Hertz): Hertz {
-  return (omega * fs) / (2 * Math.PI);
 }

@@ -19,6 +19,7 @@ import type { ViewSettings } from './view.ts';
 // Pure engine calls that merge the root angles into a grid; it lives beside the design's own curve.
 import { refineAtRoots } from '../core/response/index.ts';
 import { readAt, type FrequencyReading } from '../core/response/readAt.ts';
+import { omegaGridToHz } from '../core/units.ts';
 
 export const REFERENCE_KEY = 'polewright.reference';
 
@@ -123,7 +124,7 @@ const responseOf = memoLast(
       axis === 'log' ? { log: true, fMin: 2 * Math.PI * LOG_AXIS_MIN_FRACTION } : {},
     );
     const response = responseZpk(zpkOf(d), omega);
-    const hz = omega.map((w) => (w * d.sampleRate) / (2 * Math.PI));
+    const hz = omegaGridToHz(omega, d.sampleRate);
     return { response, hz };
   },
 );
@@ -158,11 +159,11 @@ const curvesOf = memoLast(
   ): ReferenceCurves => {
     // Refined at the roots like the design's own curve, so a notch or a resonance shows in full in both.
     const r = refineAtRoots(zpkOf(d), responseOf(d, points, axis).response);
-    const toHz = d.sampleRate / (2 * Math.PI);
+
     const perSample = delayUnit === 'ms' ? 1000 / d.sampleRate : 1;
     const phase = phaseMode === 'wrapped' ? r.phase : r.phaseUnwrapped;
     return {
-      hz: r.omega.map((w) => w * toHz),
+      hz: omegaGridToHz(r.omega, d.sampleRate),
       magnitude: scale === 'db' ? r.magnitudeDb : r.magnitude,
       phase: phase.map((p) => p * DEG_PER_RAD),
       delay: r.groupDelay.map((g) => g * perSample),

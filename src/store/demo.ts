@@ -2,13 +2,14 @@
 import type { Root } from '../core/types.ts';
 import type { Design } from '../core/model/design.ts';
 import { maskFromNotchRequirement } from '../core/mask/index.ts';
+import { hzToOmega } from '../core/units.ts';
 
 /** Half-width of the demo's hum stop regions, Hz. */
 export const DEMO_HUM_TOLERANCE_HZ = 0.02;
 
 /** A conjugate pair at frequency f (Hz) and radius r, stored once. */
 function pairAt(f: number, r: number, fs: number, multiplicity = 1): Root {
-  const w = (2 * Math.PI * f) / fs;
+  const w = hzToOmega(f, fs);
   return { re: r * Math.cos(w), im: r * Math.sin(w), multiplicity };
 }
 
@@ -21,7 +22,8 @@ function pairAt(f: number, r: number, fs: number, multiplicity = 1): Root {
  */
 export function demoDesign(): Design {
   const fs = 2000;
-  const r = 1 - (4 * Math.PI) / fs;
+  // A pole at radius r is 2(1 − r) radians per sample wide at −3 dB: 4 Hz wide.
+  const r = 1 - hzToOmega(4, fs) / 2;
   const hum = [50, 150, 250];
   const mask = maskFromNotchRequirement({
     fs,

@@ -18,6 +18,7 @@ import { memoLast } from './memo.ts';
 import { evaluateMask, type MaskResult } from '../core/mask/index.ts';
 import { runDesigner, type DesignerSpec } from '../core/design/index.ts';
 import { differsFromDesigner } from './designer.ts';
+import { hzToOmega } from '../core/units.ts';
 
 /** Highest order for which the closed-form time response is listed (partial fractions grow ill-conditioned). */
 export const CLOSED_FORM_MAX_ORDER = 24;
@@ -51,7 +52,7 @@ function timeInput(view: ViewSettings, fs: number): Float64Array {
     case 'step':
       return makeStep(n);
     case 'sine':
-      return makeSine((2 * Math.PI * view.sineHz) / fs, n);
+      return makeSine(hzToOmega(view.sineHz, fs), n);
     case 'noise':
       return makeWhiteNoise(n, view.noiseSeed);
   }
@@ -70,8 +71,7 @@ const closedFormOf = memoLast(
     fs: number,
   ): ClosedForm | null => {
     if (order > CLOSED_FORM_MAX_ORDER || kind === 'noise') return null;
-    if (kind === 'sine')
-      return closedFormResponseZpk(zpk, { kind: 'sine', omega: (2 * Math.PI * sineHz) / fs });
+    if (kind === 'sine') return closedFormResponseZpk(zpk, { kind: 'sine', omega: hzToOmega(sineHz, fs) });
     return closedFormResponseZpk(zpk, { kind });
   },
 );

@@ -26,6 +26,7 @@ import { selectSections, selectZpk } from './derived.ts';
 import { memoLast } from './memo.ts';
 import type { LevelChoice, LoadedSignal, SpectrumSettings } from './signal.ts';
 import type { WorkbenchState } from './store.ts';
+import { hzGridToOmega } from '../core/units.ts';
 
 /** Harmonics of a mains frequency read by default (fundamental included). */
 export const MAINS_HARMONICS = 5;
@@ -103,7 +104,7 @@ export const selectSpectrumIsShaped = (s: WorkbenchState): boolean => s.dragging
 
 const responseOnBins = memoLast((zpk: Zpk, frequencies: Float64Array, fs: number) => {
   const omega = new Float64Array(frequencies.length);
-  for (let k = 0; k < omega.length; k++) omega[k] = (2 * Math.PI * frequencies[k]!) / fs;
+  hzGridToOmega(frequencies, fs, omega);
   return responseZpk(zpk, omega);
 });
 

@@ -4,6 +4,7 @@ import { intFlag, parseArgs } from '../args.ts';
 import { DESIGN_FLAGS, readDesign } from '../designInput.ts';
 import { toJson } from '../json.ts';
 import type { CliIo } from '../main.ts';
+import { omegaGridToHz } from '../../core/units.ts';
 
 /** Most frequency points one call may ask for. */
 export const MAX_RESPONSE_POINTS = 1_000_000;
@@ -19,7 +20,7 @@ export function runResponse(argv: string[], io: CliIo): number {
   const log = args.switches.has('log');
   const omega = frequencyGrid(points, log ? { log: true, fMin: 2 * Math.PI * LOG_GRID_MIN_FRACTION } : {});
   const r = responseZpk(d.zpk, omega);
-  const frequencies = Array.from(omega, (w) => (w * d.sampleRate) / (2 * Math.PI));
+  const frequencies = Array.from(omegaGridToHz(omega, d.sampleRate));
   if (args.switches.has('json')) {
     io.stdout(
       toJson({

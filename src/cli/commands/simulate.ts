@@ -27,6 +27,7 @@ import { filterStream, type StreamRunSummary } from '../stream/filterFile.ts';
 import { CsvFileSink, WavFileSink } from '../stream/sinks.ts';
 import { CsvFileSource, WavFileSource, isWavPath } from '../stream/sources.ts';
 import { FIXED_FLAGS, rejectFixedFlags, runSimulateFixed } from './simulateFixed.ts';
+import { hzToOmega } from '../../core/units.ts';
 
 /** Most samples one call may ask for when the output is printed or the input is generated in memory. */
 export const MAX_SIMULATE_SAMPLES = 10_000_000;
@@ -109,7 +110,7 @@ function inputSignal(spec: string, n: number | null, fs: number, channel: number
     const read = readNumber(sine[1]!, { unit: 'Hz' });
     const hz = read.ok ? read.value : NaN;
     if (!(hz >= 0)) throw new UsageError(`--input sine:<Hz> needs a frequency in Hz; got "${sine[1]}".`);
-    return { samples: makeSine((2 * Math.PI * hz) / fs, count), sampleRate: null, notes: [] };
+    return { samples: makeSine(hzToOmega(hz, fs), count), sampleRate: null, notes: [] };
   }
   const loaded = isWavPath(spec) ? loadWav(spec, channel) : loadCsv(spec, fs);
   if (n !== null) loaded.samples = loaded.samples.subarray(0, Math.min(n, loaded.samples.length));

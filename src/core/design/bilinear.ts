@@ -7,9 +7,10 @@ import type { Zpk } from '../types.ts';
 import { cDiv, cx } from './complex.ts';
 import type { LogGainZpk } from './prototype.ts';
 import { countRoots, logProductAt, root } from './prototype.ts';
+import { hzToOmega, type Hertz } from '../units.ts';
 
-/** Prewarped analog frequency tan(π·f/fs) for an edge f in Hz at sample rate fs. */
-export const prewarp = (fHz: number, fs: number): number => Math.tan((Math.PI * fHz) / fs);
+/** Prewarped analog frequency tan(ω/2) = tan(π·f/fs) for an edge f in Hz at sample rate fs. */
+export const prewarp = (fHz: Hertz, fs: Hertz): number => Math.tan(hzToOmega(fHz, fs) / 2);
 
 /** z-plane zeros/poles/gain of the analog system under s = (z − 1)/(z + 1). */
 export function bilinearZpk(p: LogGainZpk): Zpk {

@@ -2,6 +2,8 @@
 import type { Root, Zpk } from '../types.ts';
 import { designNotch } from './notch.ts';
 import { root } from './prototype.ts';
+import { prewarp } from './bilinear.ts';
+import type { Hertz } from '../units.ts';
 
 /** Cascade of second-order notches at h·f0 for each harmonic number h, each with −3 dB width bandwidthHz(h). */
 export function designHarmonicNotches(
@@ -43,9 +45,9 @@ function rootsOfPower(n: number, c: number): Root[] {
  * half-way between (b = β/(1 + β)). This is the second-order notch/peak with z replaced by z^N; it matches
  * scipy.signal.iircomb with pass_zero=False for 'notch' and pass_zero=True for 'peak'.
  */
-export function designComb(f0: number, bandwidthHz: number, type: 'notch' | 'peak', fs: number): Zpk {
+export function designComb(f0: Hertz, bandwidthHz: Hertz, type: 'notch' | 'peak', fs: Hertz): Zpk {
   const n = Math.round(fs / f0);
-  const beta = Math.tan((n * Math.PI * bandwidthHz) / (2 * fs));
+  const beta = prewarp((n * bandwidthHz) / 2, fs);
   const a = (1 - beta) / (1 + beta);
   return {
     zeros: rootsOfPower(n, type === 'notch' ? 1 : -1),

@@ -5,6 +5,8 @@
  */
 import type { Zpk } from '../types.ts';
 import { biquadToZpk } from './biquad.ts';
+import { hzToOmega } from '../units.ts';
+import type { Hertz } from '../units.ts';
 
 /** How the width of an equaliser section is given. */
 export type EqWidth = { q: number } | { bandwidthOctaves: number } | { slope: number };
@@ -18,18 +20,18 @@ function alphaOf(width: EqWidth, w0: number, a: number): number {
 }
 
 /** Peaking section: gain gainDb at f0 Hz, 0 dB far from it; width as Q or octaves. */
-export function designPeakingEq(f0: number, gainDb: number, width: EqWidth, fs: number): Zpk {
+export function designPeakingEq(f0: Hertz, gainDb: number, width: EqWidth, fs: Hertz): Zpk {
   const a = 10 ** (gainDb / 40);
-  const w0 = (2 * Math.PI * f0) / fs;
+  const w0 = hzToOmega(f0, fs);
   const alpha = alphaOf(width, w0, a);
   const c = -2 * Math.cos(w0);
   return biquadToZpk([1 + alpha * a, c, 1 - alpha * a], [1 + alpha / a, c, 1 - alpha / a]);
 }
 
 /** Low shelf (lowShelf = true) or high shelf: gainDb below (above) f0 Hz, half of it in dB at f0. */
-export function designShelf(lowShelf: boolean, f0: number, gainDb: number, width: EqWidth, fs: number): Zpk {
+export function designShelf(lowShelf: boolean, f0: Hertz, gainDb: number, width: EqWidth, fs: Hertz): Zpk {
   const a = 10 ** (gainDb / 40);
-  const w0 = (2 * Math.PI * f0) / fs;
+  const w0 = hzToOmega(f0, fs);
   const cos = Math.cos(w0);
   const t = 2 * Math.sqrt(a) * alphaOf(width, w0, a);
   // The high shelf is the low shelf with cos ω0 → −cos ω0 and z⁻¹ → −z⁻¹ (odd coefficients negated).

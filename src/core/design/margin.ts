@@ -7,6 +7,7 @@ import { responseAt, responseZpk } from '../response/index.ts';
 import { minimiseOnInterval } from './minimise.ts';
 import type { Requirement } from './requirement.ts';
 import { requirementRegions } from './requirement.ts';
+import { hzToOmega } from '../units.ts';
 
 /** Grid points per band region before refinement; fine enough to separate the ripples of order-64 designs. */
 export const MARGIN_GRID_POINTS = 4096;
@@ -47,7 +48,7 @@ function worstOver(
 
 /** Worst pass-band loss and stop-band attenuation of zpk against the requirement, in dB and Hz. */
 export function requirementMargin(zpk: Zpk, req: Requirement): RequirementMargin {
-  const toOmega = (f: number) => (2 * Math.PI * f) / req.fs;
+  const toOmega = (f: number) => hzToOmega(f, req.fs);
   const db = (f: number) => {
     const h = responseAt(zpk, toOmega(f));
     return 20 * Math.log10(Math.hypot(h.re, h.im));

@@ -10,6 +10,8 @@ import type { Requirement } from './requirement.ts';
 import { ellipticK } from './ellipticFunctions.ts';
 import { powerRatioMinusOne } from './chebyshev.ts';
 import { minimiseOnInterval } from './minimise.ts';
+import { prewarp } from './bilinear.ts';
+import { omegaToHz } from '../units.ts';
 
 /** An estimated order with the natural (design) edges in Hz. */
 export interface OrderEstimate {
@@ -75,7 +77,7 @@ function naturalEdges(family: IirFamily, order: number, req: Requirement, passb:
 
 /** Minimum order of a family for a requirement, with its natural edges in Hz (scipy *ord conventions). */
 export function estimateOrder(family: IirFamily, req: Requirement): OrderEstimate {
-  const warp = (f: number) => Math.tan((Math.PI * f) / req.fs);
+  const warp = (f: number) => prewarp(f, req.fs);
   const passb = req.passbandHz.map(warp);
   const stopb = req.stopbandHz.map(warp);
   let converged = true;
@@ -95,5 +97,6 @@ export function estimateOrder(family: IirFamily, req: Requirement): OrderEstimat
   }
   const order = Math.ceil(fractionalOrder(family, selectivity(req, passb, stopb), req));
   const edges = naturalEdges(family, order, req, passb);
-  return { order, naturalEdgesHz: edges.map((w) => (Math.atan(w) * req.fs) / Math.PI), converged };
+  // Back from prewarped tan(ω/2) to hertz.
+  return { order, naturalEdgesHz: edges.map((w) => omegaToHz(2 * Math.atan(w), req.fs)), converged };
 }

@@ -1,5 +1,6 @@
 /** Test inputs for the fixed-point simulation, described by kind so the page and the command line share them. */
 import { makeImpulse, makeSine, makeStep, makeWhiteNoise } from '../time/inputs.ts';
+import { hzToOmega } from '../units.ts';
 
 /**
  * An input signal: amplitude is in data-word units (full scale 1; default 0.5, leaving headroom), a sine's
@@ -25,7 +26,7 @@ export function inputSignal(spec: SignalSpec, fs: number): Float64Array {
     case 'step':
       return scale(makeStep(spec.length));
     case 'sine':
-      return scale(makeSine((2 * Math.PI * spec.frequencyHz) / fs, spec.length));
+      return scale(makeSine(hzToOmega(spec.frequencyHz, fs), spec.length));
     case 'noise':
       return makeWhiteNoise(spec.length, spec.seed, amp);
   }

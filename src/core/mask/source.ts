@@ -7,6 +7,7 @@ import type { Section, Zpk } from '../types.ts';
 import { sectionsToZpk } from '../system/index.ts';
 import { rootFrequencyHz } from '../readouts.ts';
 import { magnitudeDbReader, magnitudeDbZpk } from '../response/magnitude.ts';
+import { hzGridToOmega, hzToOmega, omegaGridToHz } from '../units.ts';
 
 /** A magnitude response readable at frequencies in Hz. */
 export interface MagnitudeSource {
@@ -30,16 +31,14 @@ function rootAnglesHz(zpk: Zpk, fs: number): number[] {
 
 /** A zeros/poles/gain system at sample rate fs (Hz), read from its product form. */
 export function zpkSource(zpk: Zpk, fs: number): MagnitudeSource {
-  const toOmega = (2 * Math.PI) / fs;
   let omega = new Float64Array(0);
   const at = magnitudeDbReader(zpk);
   return {
     readDb(hz, out) {
       if (omega.length < hz.length) omega = new Float64Array(hz.length);
-      for (let i = 0; i < hz.length; i++) omega[i] = hz[i]! * toOmega;
-      magnitudeDbZpk(zpk, omega.subarray(0, hz.length), out);
+      magnitudeDbZpk(zpk, hzGridToOmega(hz, fs, omega.subarray(0, hz.length)), out);
     },
-    readDbAt: (hz) => at(hz * toOmega),
+    readDbAt: (hz) => at(hzToOmega(hz, fs)),
     featuresHz: rootAnglesHz(zpk, fs),
     continuous: true,
   };
@@ -76,7 +75,7 @@ export function sampledSource(
   fs: number,
 ): MagnitudeSource {
   const n = Math.min(omega.length, magnitudeDb.length);
-  const hzOf = Float64Array.from({ length: n }, (_, i) => (omega[i]! * fs) / (2 * Math.PI));
+  const hzOf = omegaGridToHz(omega, fs).subarray(0, n);
   const at = (f: number): number => {
     if (n === 0) return NaN;
     if (f <= hzOf[0]!) return magnitudeDb[0]!;

@@ -5,6 +5,7 @@
  * magnitudeDb to rounding.
  */
 import type { Root, Zpk } from '../types.ts';
+import type { RadPerSample } from '../units.ts';
 
 /** A running product leaving [1/RESCALE, RESCALE] is folded into a log sum, so no order over- or underflows. */
 const RESCALE = 1e150;
@@ -50,13 +51,13 @@ function lnPower(flat: Float64Array, c: number, s: number): number {
 }
 
 /** 20·log10|H(e^{iω})| in dB at one frequency ω (radians per sample). */
-export function magnitudeDbAt(zpk: Zpk, omega: number): number {
+export function magnitudeDbAt(zpk: Zpk, omega: RadPerSample): number {
   const k = 20 * Math.log10(Math.abs(zpk.gain));
   return DB_PER_LN_POWER * lnPower(flatten(zpk), Math.cos(omega), Math.sin(omega)) + k;
 }
 
 /** A reader of 20·log10|H(e^{iω})| in dB at single frequencies ω (radians per sample), for repeated calls. */
-export function magnitudeDbReader(zpk: Zpk): (omega: number) => number {
+export function magnitudeDbReader(zpk: Zpk): (omega: RadPerSample) => number {
   const flat = flatten(zpk);
   const k = 20 * Math.log10(Math.abs(zpk.gain));
   return (omega) => DB_PER_LN_POWER * lnPower(flat, Math.cos(omega), Math.sin(omega)) + k;

@@ -1,5 +1,6 @@
 /** The transfer function at single points. */
 import type { Complex, Zpk } from '../types.ts';
+import type { RadPerSample } from '../units.ts';
 
 /** H(z) = k·Π(z − zᵢ)/Π(z − pᵢ) at the complex point z = re + i·im, conjugates and multiplicities included. */
 export function evalZpkAt(zpk: Zpk, re: number, im: number): Complex {
@@ -30,6 +31,6 @@ export function evalZpkAt(zpk: Zpk, re: number, im: number): Complex {
 }
 
 /** H(e^{iω}) at one frequency ω in radians per sample. */
-export function responseAt(zpk: Zpk, omega: number): Complex {
+export function responseAt(zpk: Zpk, omega: RadPerSample): Complex {
   return evalZpkAt(zpk, Math.cos(omega), Math.sin(omega));
 }

@@ -1,6 +1,7 @@
 /** Exact read-outs at one frequency: the engine evaluates the current system there, not the nearest grid point. */
 import type { Zpk } from '../types.ts';
 import { responseZpk } from './zpkResponse.ts';
+import { hzToOmega, type Hertz } from '../units.ts';
 
 export interface FrequencyReading {
   hz: number;
@@ -19,8 +20,8 @@ export interface FrequencyReading {
 }
 
 /** Every read-out at frequency hz (Hz) for system zpk sampled at fs (Hz). */
-export function readAt(zpk: Zpk, fs: number, hz: number): FrequencyReading {
-  const r = responseZpk(zpk, Float64Array.of((2 * Math.PI * hz) / fs));
+export function readAt(zpk: Zpk, fs: Hertz, hz: Hertz): FrequencyReading {
+  const r = responseZpk(zpk, Float64Array.of(hzToOmega(hz, fs)));
   const gd = r.groupDelay[0]!;
   return {
     hz,

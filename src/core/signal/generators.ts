@@ -5,6 +5,7 @@
  */
 import { makeWhiteNoise } from '../time/inputs.ts';
 import { makePinkNoise } from './pinkNoise.ts';
+import { hzToOmega } from '../units.ts';
 
 /** One tone a·cos(2π·f·t + phase). */
 export interface Tone {
@@ -39,7 +40,7 @@ export type GeneratorSpec =
 export function makeTones(n: number, sampleRate: number, tones: readonly Tone[]): Float64Array {
   const x = new Float64Array(n);
   for (const { frequencyHz, amplitude, phase = 0 } of tones) {
-    const w = (2 * Math.PI * frequencyHz) / sampleRate;
+    const w = hzToOmega(frequencyHz, sampleRate);
     for (let k = 0; k < n; k++) x[k] = x[k]! + amplitude * Math.cos(w * k + phase);
   }
   return x;

@@ -3,6 +3,7 @@
  * The noise source is deterministic: the same seed always gives the same samples on every platform.
  */
 import { mulberry32 } from '../random.ts';
+import type { RadPerSample } from '../units.ts';
 
 /** Unit impulse δ[k] for k = 0..n-1 (1 at k = 0, zero elsewhere). */
 export function makeImpulse(n: number): Float64Array {
@@ -17,7 +18,7 @@ export function makeStep(n: number): Float64Array {
 }
 
 /** Cosine cos(omega·k + phase) for k = 0..n-1; omega in radians per sample, phase in radians. */
-export function makeSine(omega: number, n: number, phase = 0): Float64Array {
+export function makeSine(omega: RadPerSample, n: number, phase = 0): Float64Array {
   const x = new Float64Array(n);
   // Direct evaluation per sample rather than a recurrence, so long signals do not drift.
   for (let k = 0; k < n; k++) x[k] = Math.cos(omega * k + phase);

@@ -24,12 +24,12 @@ import {
   DEG_PER_RAD,
   delaySeries,
   frequencyDomain,
-  gridHz,
   magnitudeSeries,
   phaseSeries,
   type Series,
 } from './series.ts';
 import { TracePlot, yMapOf } from './TracePlot.tsx';
+import { omegaGridToHz } from '../../core/units.ts';
 
 export interface FrequencyChartProps {
   width: number;
@@ -71,7 +71,7 @@ export function FrequencyChart({ width, height, reading, onCursor, marker }: Fre
   const response = useWorkbench(selectDisplayResponse);
   const layout = useMemo(() => frequencyLayout(width, height, second), [width, height, second]);
   const area = layout.plots[0]!.rect;
-  const hz = useMemo(() => gridHz(response.omega, fs), [response.omega, fs]);
+  const hz = useMemo(() => omegaGridToHz(response.omega, fs), [response.omega, fs]);
   const [d0, d1] = frequencyDomain(hz, fs, axis);
   const xMap = useMemo<AxisMap>(
     () => ({ kind: axis, d0, d1, p0: area.left, p1: area.right }),

@@ -14,6 +14,7 @@ import { useWorkbench } from '../../store/useWorkbench.ts';
 import { linePath } from '../chart/paths.ts';
 import { toPixels } from '../chart/pixels.ts';
 import type { MagnitudeOverlayProps } from './overlays.ts';
+import { omegaGridToHz } from '../../core/units.ts';
 
 const COLOUR = 'var(--pw-quantized)';
 
@@ -26,11 +27,7 @@ export function QuantizedTrace({ rect, xMap, yMap, db }: MagnitudeOverlayProps) 
   const impl = result?.ok ? result.value : null;
   const d = useMemo(() => {
     if (!impl || !response) return '';
-    const k = fs / (2 * Math.PI);
-    const px = toPixels(
-      xMap,
-      response.omega.map((w) => w * k),
-    );
+    const px = toPixels(xMap, omegaGridToHz(response.omega, fs));
     const py = toPixels(yMap, db ? response.magnitudeDb : response.magnitude);
     return linePath(px, py, { top: rect.top, bottom: rect.bottom, thin: true });
   }, [impl, response, fs, xMap, yMap, db, rect.top, rect.bottom]);

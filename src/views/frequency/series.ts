@@ -101,14 +101,6 @@ export function delaySeries(r: FrequencyResponse, unit: ViewSettings['delayUnit'
   };
 }
 
-/** Hz of every grid frequency (rad/sample) at sample rate fs. */
-export function gridHz(omega: Float64Array, fs: number): Float64Array {
-  const out = new Float64Array(omega.length);
-  const k = fs / (2 * Math.PI);
-  for (let i = 0; i < omega.length; i++) out[i] = omega[i]! * k;
-  return out;
-}
-
 /** The frequency axis domain in Hz: [0, fs/2] on a linear axis; from the lowest positive grid point on a log axis. */
 export function frequencyDomain(hz: Float64Array, fs: number, axis: ViewSettings['frequencyAxis']): Range {
   const top = fs / 2;

@@ -1,5 +1,6 @@
 /** The ring of frequency ticks round the unit circle: round values in Hz from DC to Nyquist. */
 import { ticks } from 'd3-array';
+import { hzToOmega } from '../../core/units.ts';
 
 export interface RingTick {
   hz: number;
@@ -21,5 +22,5 @@ export function frequencyRingTicks(fs: number, count: number): RingTick[] {
   const step = values.length > 1 ? values[1]! - values[0]! : nyquist;
   const kept = values.filter((hz) => nyquist - hz > NYQUIST_CLEARANCE * step);
   kept.push(nyquist);
-  return kept.map((hz) => ({ hz, angle: (2 * Math.PI * hz) / fs }));
+  return kept.map((hz) => ({ hz, angle: hzToOmega(hz, fs) }));
 }

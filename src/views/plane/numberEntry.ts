@@ -7,22 +7,23 @@ import type { Complex } from '../../core/types.ts';
 import { MAX_MULTIPLICITY } from '../../core/model/limits.ts';
 import type { TypedUnitName } from '../../core/parse/typedNumber.ts';
 import { readNumberField, type NumberFieldRule } from '../shared/fieldReading.ts';
+import { hzToOmega, omegaToHz, type Hertz, type RadPerSample } from '../../core/units.ts';
 
 export type AngleUnit = 'deg' | 'rad' | 'hz';
 
 export type Parsed<T> = { ok: true; value: T } | { ok: false; message: string };
 
 /** The angle in radians/sample for a value in the given unit at sample rate fs. */
-export function angleToRadians(value: number, unit: AngleUnit, fs: number): number {
+export function angleToRadians(value: number, unit: AngleUnit, fs: Hertz): RadPerSample {
   if (unit === 'deg') return (value * Math.PI) / 180;
-  if (unit === 'hz') return (2 * Math.PI * value) / fs;
+  if (unit === 'hz') return hzToOmega(value, fs);
   return value;
 }
 
 /** The angle of z in the given unit (upper half: 0…π, 0…180°, 0…fs/2). */
-export function radiansToAngle(rad: number, unit: AngleUnit, fs: number): number {
+export function radiansToAngle(rad: RadPerSample, unit: AngleUnit, fs: Hertz): number {
   if (unit === 'deg') return (rad * 180) / Math.PI;
-  if (unit === 'hz') return (rad * fs) / (2 * Math.PI);
+  if (unit === 'hz') return omegaToHz(rad, fs);
   return rad;
 }
 

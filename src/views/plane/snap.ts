@@ -5,6 +5,7 @@
 import type { Complex } from '../../core/types.ts';
 import { rootFrequencyHz } from '../../core/readouts.ts';
 import type { SnapMode } from '../../store/view.ts';
+import { hzToOmega } from '../../core/units.ts';
 
 export interface SnapSettings {
   mode: SnapMode;
@@ -31,7 +32,7 @@ export function snapToFrequencyGrid(z: Complex, stepHz: number, fs: number): Com
   const nyquist = fs / 2;
   const onGrid = Math.min(nyquist, Math.round(hz / stepHz) * stepHz);
   const snapped = nyquist - hz < Math.abs(hz - onGrid) ? nyquist : onGrid;
-  const w = (2 * Math.PI * snapped) / fs;
+  const w = hzToOmega(snapped, fs);
   return { re: r * Math.cos(w), im: Math.sign(z.im || 1) * r * Math.sin(w) };
 }
 

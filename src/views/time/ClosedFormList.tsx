@@ -6,11 +6,12 @@ import { useWorkbench } from '../../store/useWorkbench.ts';
 import { formatHz, formatNumber, formatSeconds } from '../shared/format.ts';
 import { closedFormModes, type Mode } from './modes.ts';
 import { ModeText } from './ModeText.tsx';
+import { omegaToHz } from '../../core/units.ts';
 
 /** What kind of motion a mode is, in words, with its frequency and time constant. */
 function modeNote(m: Mode, fs: number): string {
   const parts: string[] = [];
-  if (m.kind === 'pair') parts.push(formatHz((m.omega * fs) / (2 * Math.PI)));
+  if (m.kind === 'pair') parts.push(formatHz(omegaToHz(m.omega, fs)));
   else if (m.base < 0) parts.push('alternating');
   if (m.onCircle) parts.push(m.kind === 'real' && m.base === 1 ? 'steady value' : 'sustained');
   else if (m.radius > 1) parts.push('growing');

@@ -12,11 +12,11 @@ import { frequencyLayout, type PlotRect } from '../../../src/views/frequency/lay
 import {
   delaySeries,
   frequencyDomain,
-  gridHz,
   magnitudeSeries,
   phaseSeries,
 } from '../../../src/views/frequency/series.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
+import { omegaGridToHz } from '../../../src/core/units.ts';
 
 // A zero exactly on the circle at DC (H = 1 − z^-1) and a resonant pole pair.
 const zpk: Zpk = {
@@ -55,7 +55,7 @@ describe('frequency plot series', () => {
     expect(ms.key).not.toBe(samples.key);
   });
   it('maps rad/sample to Hz and picks the frequency domain by axis kind', () => {
-    const hz = gridHz(Float64Array.of(0, Math.PI / 2, Math.PI), 2000);
+    const hz = omegaGridToHz(Float64Array.of(0, Math.PI / 2, Math.PI), 2000);
     expectClose(hz, [0, 500, 1000], { abs: 1e-12 });
     expect(frequencyDomain(hz, 2000, 'linear')).toEqual([0, 1000]);
     expect(frequencyDomain(hz, 2000, 'log')).toEqual([500, 1000]); // the lowest positive grid frequency
