@@ -4,7 +4,7 @@ export type { DesignerSpec, DesignResult, IirSpec } from './spec.ts';
 export { DESIGNERS, DESIGNER_VARIANTS, designerEntry, registryOf, variantOf } from './registry.ts';
 export type { DesignerKind, VariantOfEntry } from './registry.ts';
 export { defineDesigner } from './parameters.ts';
-export { FAMILY_OPTIONS, BAND_SHAPE_OPTIONS } from './entries/classical.ts';
+export { FAMILY_OPTIONS, BAND_SHAPE_OPTIONS } from './entries/classicalParameters.ts';
 export type * from './parameters.ts';
 export { textFor } from './parameters.ts';
 export { isRequired, expectedOf } from './checkParameters.ts';

@@ -8,8 +8,7 @@ import { requirementMargin } from './margin.ts';
 import { estimateOrder } from './orderEstimate.ts';
 import type { Requirement } from './requirement.ts';
 import type { DesignResult } from './result.ts';
-import type { IirSpec } from './entries/classical.ts';
-import { BAND_SHAPE_OPTIONS, FAMILY_OPTIONS } from './entries/classical.ts';
+import { BAND_SHAPE_OPTIONS, FAMILY_OPTIONS, type IirSpec } from './entries/classicalParameters.ts';
 import { DesignInputError, MAX_DESIGN_ORDER } from './validate.ts';
 import { shortNumber } from '../shortNumber.ts';
 

@@ -5,7 +5,7 @@
  */
 import type { SpecOfEntry } from './parameters.ts';
 import type { DESIGNERS } from './registry.ts';
-import type { IirSpec } from './entries/classical.ts';
+import type { IirSpec } from './entries/classicalParameters.ts';
 
 /** Every designer and its parameters. */
 export type DesignerSpec = SpecOfEntry<(typeof DESIGNERS)[number]>;

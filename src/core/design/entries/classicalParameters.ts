@@ -1,0 +1,163 @@
+/**
+ * The parameters of the classical IIR designs (Butterworth, Chebyshev I and II, elliptic) in four band
+ * shapes: of a given order at given edges, or of the least order meeting a requirement.
+ */
+import type { DesignValues, SpecOf } from '../parameters.ts';
+import { MAX_DESIGN_ORDER } from '../validate.ts';
+
+/** The four classical families, with their names in notes. */
+export const FAMILY_OPTIONS = [
+  { value: 'butterworth', label: 'Butterworth', words: 'Butterworth' },
+  { value: 'chebyshev1', label: 'Chebyshev I', words: 'Chebyshev I' },
+  { value: 'chebyshev2', label: 'Chebyshev II', words: 'Chebyshev II' },
+  { value: 'elliptic', label: 'Elliptic', words: 'elliptic' },
+] as const;
+
+/** The four band shapes. */
+export const BAND_SHAPE_OPTIONS = [
+  { value: 'lowpass', label: 'Low-pass' },
+  { value: 'highpass', label: 'High-pass' },
+  { value: 'bandpass', label: 'Band-pass' },
+  { value: 'bandstop', label: 'Band-stop' },
+] as const;
+
+const isBand = (v: DesignValues) => v.response === 'bandpass' || v.response === 'bandstop';
+const edgeCount = (v: DesignValues) => (isBand(v) ? 2 : 1);
+/** A requirement is given: asked for by order 'auto', or begun with either band. */
+const hasRequirement = (v: DesignValues) =>
+  v.order === 'auto' || v.passbandHz !== undefined || v.stopbandHz !== undefined;
+const needsRipple = (v: DesignValues) => v.family === 'chebyshev1' || v.family === 'elliptic';
+const needsAttenuation = (v: DesignValues) => v.family === 'chebyshev2' || v.family === 'elliptic';
+const pairWords = (v: DesignValues) =>
+  isBand(v) ? 'low,high in Hz' : v.response === undefined ? 'in Hz (low,high for band shapes)' : 'in Hz';
+
+const EDGE_MEANING: Record<string, string> = {
+  butterworth: 'the −3 dB point',
+  chebyshev1: 'where the ripple band ends',
+  chebyshev2: 'where the stop band starts',
+  elliptic: 'where the ripple band ends',
+};
+
+const PASS_LABEL: Record<string, string> = {
+  lowpass: 'Pass band up to',
+  highpass: 'Pass band from',
+  bandpass: 'Pass band',
+  bandstop: 'Pass band below / above',
+};
+const STOP_LABEL: Record<string, string> = {
+  lowpass: 'Stop band from',
+  highpass: 'Stop band up to',
+  bandpass: 'Stop band below / above',
+  bandstop: 'Stop band',
+};
+
+/** Requirement edges (a band's edge or edges), shared by the pass and stop bands. */
+function bandEdges<const K extends 'passbandHz' | 'stopbandHz'>(key: K) {
+  const pass = key === 'passbandHz';
+  return {
+    key,
+    name: pass ? 'pass-band edges' : 'stop-band edges',
+    flag: pass ? 'passband' : 'stopband',
+    what: (v: DesignValues) =>
+      `${pass ? 'pass-band' : 'stop-band'} edge ${pairWords(v)}, for order auto or margins at a given order`,
+    label: (v: DesignValues) => (pass ? PASS_LABEL : STOP_LABEL)[String(v.response)] ?? 'Band',
+    short: pass ? 'pass band edge' : 'stop band edge',
+    pairLabel: pass ? 'Pass band edge' : 'Stop band edge',
+    unit: 'Hz',
+    type: 'list',
+    item: 'band',
+    count: { exactly: edgeCount, max: 2 },
+    increasing: true,
+    noun: 'edge',
+    section: 'requirement',
+    presence: 'optional',
+    requiredWhen: hasRequirement,
+  } as const;
+}
+
+export const IIR_PARAMETERS = [
+  {
+    key: 'family',
+    flag: 'family',
+    label: 'Family',
+    what: 'the filter family',
+    type: 'choice',
+    options: FAMILY_OPTIONS,
+    control: 'select',
+    listed: false,
+    presence: 'required',
+  },
+  {
+    key: 'response',
+    flag: 'response',
+    label: 'Band shape',
+    what: 'the band shape',
+    type: 'choice',
+    options: BAND_SHAPE_OPTIONS,
+    presence: 'required',
+  },
+  {
+    key: 'order',
+    flag: 'order',
+    label: 'Order',
+    short: 'order',
+    what: 'a whole number from 1, or auto',
+    type: 'order',
+    max: MAX_DESIGN_ORDER,
+    autoLabel: 'Least order that meets the requirement',
+    presence: 'required',
+  },
+  {
+    key: 'edgesHz',
+    name: 'edges',
+    flag: 'edge',
+    what: (v: DesignValues) => `design edge ${pairWords(v)}`,
+    label: (v: DesignValues) => (isBand(v) ? 'Edges' : 'Edge'),
+    short: 'edges',
+    hint: (v: DesignValues) => EDGE_MEANING[String(v.family)] ?? '',
+    pairLabel: 'Edge',
+    unit: 'Hz',
+    type: 'list',
+    item: 'band',
+    count: { exactly: edgeCount, max: 2 },
+    increasing: true,
+    noun: 'edge',
+    presence: 'optional',
+    requiredWhen: (v: DesignValues) => v.order !== 'auto',
+    shownWhen: (v: DesignValues) => v.order !== 'auto',
+  },
+  bandEdges('passbandHz'),
+  bandEdges('stopbandHz'),
+  {
+    key: 'rippleDb',
+    name: 'pass-band ripple',
+    flag: 'ripple',
+    label: 'Pass-band loss at most',
+    short: 'ripple',
+    what: 'pass-band ripple in dB, for Chebyshev I, elliptic and a requirement',
+    unit: 'dB',
+    type: 'number',
+    range: 'positive',
+    section: 'requirement',
+    presence: 'optional',
+    requiredWhen: (v: DesignValues) => needsRipple(v) || hasRequirement(v),
+  },
+  {
+    key: 'attenuationDb',
+    name: 'stop-band attenuation',
+    flag: 'attenuation',
+    label: 'Stop band down by at least',
+    short: 'attenuation',
+    what: 'stop-band attenuation in dB, for Chebyshev II, elliptic and a requirement',
+    unit: 'dB',
+    type: 'number',
+    range: 'positive',
+    above: { key: 'rippleDb', when: (v: DesignValues) => v.family === 'elliptic' || hasRequirement(v) },
+    section: 'requirement',
+    presence: 'optional',
+    requiredWhen: (v: DesignValues) => needsAttenuation(v) || hasRequirement(v),
+  },
+] as const;
+
+/** A classical design's description. */
+export type IirSpec = SpecOf<'iir', typeof IIR_PARAMETERS>;
