@@ -1,5 +1,5 @@
 /**
- * A design as an implementable cascade of second-order sections: pole–zero pairing (system.ts's nearest-zero
+ * A design as an implementable cascade of second-order sections: pole–zero pairing (system/sections.ts's nearest-zero
  * rules), ordering by pole radius, distribution of the gain k over the sections, and scaling of each
  * section's input so that the partial cascade up to its output has norm 1.
  *
