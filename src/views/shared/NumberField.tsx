@@ -8,7 +8,7 @@ import { useId, type ReactNode } from 'react';
 import { TYPED_UNITS, type TypedUnitName } from '../../core/parse/typedNumber.ts';
 import { readNumberField, type NumberFieldRule } from './fieldReading.ts';
 import { formatNumber } from './format.ts';
-import { useDraft } from './useDraft.ts';
+import { draftInputProps, useDraft } from './useDraft.ts';
 
 export interface NumberFieldProps extends NumberFieldRule {
   label: string;
@@ -74,18 +74,12 @@ export function NumberField(p: NumberFieldProps) {
         inputMode="decimal"
         size={p.size ?? 8}
         className={[p.inputClassName, draft.message && 'pw-invalid'].filter(Boolean).join(' ') || undefined}
-        value={draft.text}
+        {...draftInputProps(draft)}
         placeholder={p.placeholder}
         title={p.title}
         aria-label={p.hideLabel ? p.label : undefined}
         aria-invalid={draft.message ? true : undefined}
         aria-describedby={message ? `${id}-err` : undefined}
-        onChange={(e) => draft.change(e.target.value)}
-        onBlur={draft.commit}
-        onKeyDown={(e) => {
-          if (e.key === 'Enter') draft.commit();
-          if (e.key === 'Escape') draft.cancel();
-        }}
       />
       {p.unit && <span className="pw-number-field-unit">{p.unit}</span>}
       {p.children}

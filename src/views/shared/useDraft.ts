@@ -3,7 +3,7 @@
  * Text that is not accepted stays in the field with its message and the committed value stays in force;
  * once a message shows, it follows the text as it changes; Escape brings the committed value back.
  */
-import { useState } from 'react';
+import { useState, type ChangeEvent, type KeyboardEvent } from 'react';
 import type { FieldReading } from './fieldReading.ts';
 
 export interface Draft {
@@ -14,6 +14,19 @@ export interface Draft {
   change(text: string): void;
   commit(): void;
   cancel(): void;
+}
+
+/** The props that bind a text input to a draft: its text, typing, Enter and leaving commit, Escape reverts. */
+export function draftInputProps(draft: Draft) {
+  return {
+    value: draft.text,
+    onChange: (e: ChangeEvent<HTMLInputElement>) => draft.change(e.target.value),
+    onBlur: draft.commit,
+    onKeyDown: (e: KeyboardEvent<HTMLInputElement>) => {
+      if (e.key === 'Enter') draft.commit();
+      if (e.key === 'Escape') draft.cancel();
+    },
+  };
 }
 
 /**

@@ -11,7 +11,7 @@ import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import type { LevelChoice } from '../../store/signal.ts';
 import { formatHz, formatNumber } from '../shared/format.ts';
 import { readListField, type FieldReading } from '../shared/fieldReading.ts';
-import { useDraft } from '../shared/useDraft.ts';
+import { draftInputProps, useDraft } from '../shared/useDraft.ts';
 
 function db(x: number): string {
   return Number.isFinite(x) ? formatNumber(x, 3) : x < 0 ? '−∞' : '∞';
@@ -112,15 +112,9 @@ export function LevelTable() {
           type="text"
           size={12}
           placeholder="e.g. 50, 150"
-          value={draft.text}
+          {...draftInputProps(draft)}
           aria-invalid={error !== null}
           aria-describedby={error ? `${id}-err` : undefined}
-          onChange={(e) => draft.change(e.target.value)}
-          onBlur={draft.commit}
-          onKeyDown={(e) => {
-            if (e.key === 'Enter') draft.commit();
-            if (e.key === 'Escape') draft.cancel();
-          }}
         />
         Hz
       </label>

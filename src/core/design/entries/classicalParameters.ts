@@ -51,6 +51,16 @@ const STOP_LABEL: Record<string, string> = {
   bandstop: 'Stop band',
 };
 
+/** A list of band edges in Hz: one for low-/high-pass, two increasing ones for band shapes. */
+const EDGE_LIST = {
+  unit: 'Hz',
+  type: 'list',
+  item: 'band',
+  count: { exactly: edgeCount, max: 2 },
+  increasing: true,
+  noun: 'edge',
+} as const;
+
 /** Requirement edges (a band's edge or edges), shared by the pass and stop bands. */
 function bandEdges<const K extends 'passbandHz' | 'stopbandHz'>(key: K) {
   const pass = key === 'passbandHz';
@@ -63,12 +73,7 @@ function bandEdges<const K extends 'passbandHz' | 'stopbandHz'>(key: K) {
     label: (v: DesignValues) => (pass ? PASS_LABEL : STOP_LABEL)[String(v.response)] ?? 'Band',
     short: pass ? 'pass band edge' : 'stop band edge',
     pairLabel: pass ? 'Pass band edge' : 'Stop band edge',
-    unit: 'Hz',
-    type: 'list',
-    item: 'band',
-    count: { exactly: edgeCount, max: 2 },
-    increasing: true,
-    noun: 'edge',
+    ...EDGE_LIST,
     section: 'requirement',
     presence: 'optional',
     requiredWhen: hasRequirement,
@@ -116,12 +121,7 @@ export const IIR_PARAMETERS = [
     short: 'edges',
     hint: (v: DesignValues) => EDGE_MEANING[String(v.family)] ?? '',
     pairLabel: 'Edge',
-    unit: 'Hz',
-    type: 'list',
-    item: 'band',
-    count: { exactly: edgeCount, max: 2 },
-    increasing: true,
-    noun: 'edge',
+    ...EDGE_LIST,
     presence: 'optional',
     requiredWhen: (v: DesignValues) => v.order !== 'auto',
     shownWhen: (v: DesignValues) => v.order !== 'auto',
