@@ -25,7 +25,7 @@ test('after the first view the side pages and recording tools are prefetched, an
   // the prefetch after the first paint fetches every lazily loaded part
   await expect
     .poll(() =>
-      ['DesignPage', 'TargetPage', 'SignalPage', 'FilesPage', 'SignalPanel'].filter(
+      ['DesignPage', 'TargetPage', 'SignalPage', 'SharePage', 'SignalPanel'].filter(
         (n) => !scripts.some((s) => s.includes(n)),
       ),
     )

@@ -1,10 +1,10 @@
 /** Downloads of the recording's fixed-point run: integer WAV of the codes, CSV of input and output codes. */
 import { describe, it, expect } from 'vitest';
-import { buildImplementation, DEFAULT_IMPLEMENTATION, simulateFixed } from '../../src/core/fixed/index.ts';
-import { readWav } from '../../src/core/signal/index.ts';
-import { makeWhiteNoise } from '../../src/core/time/inputs.ts';
-import { filteredCsv, fixedCsv, fixedWav } from '../../src/views/signal/exportSignal.ts';
-import { hum } from '../helpers/fixedDesigns.ts';
+import { buildImplementation, DEFAULT_IMPLEMENTATION, simulateFixed } from '../../../src/core/fixed/index.ts';
+import { readWav } from '../../../src/core/signal/index.ts';
+import { makeWhiteNoise } from '../../../src/core/time/inputs.ts';
+import { filteredCsv, fixedCsv, fixedWav } from '../../../src/views/signal/exportSignal.ts';
+import { hum } from '../../helpers/fixedDesigns.ts';
 
 function implement(dataWordLength: number) {
   const r = buildImplementation(hum, 2000, {

@@ -7,12 +7,12 @@ import { describe, it, expect } from 'vitest';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { runCli } from '../helpers/cli.ts';
-import { expectClose } from '../helpers/expectClose.ts';
-import { makeTones, measureLevels, readWav, welch, writeWav } from '../../src/core/signal/index.ts';
-import { makeWhiteNoise } from '../../src/core/time/inputs.ts';
-import { filterSections } from '../../src/core/time/filter.ts';
-import { tfToZpk, zpkToSections, compressRoots } from '../../src/core/system/index.ts';
+import { runCli } from '../../helpers/cli.ts';
+import { expectClose } from '../../helpers/expectClose.ts';
+import { makeTones, measureLevels, readWav, welch, writeWav } from '../../../src/core/signal/index.ts';
+import { makeWhiteNoise } from '../../../src/core/time/inputs.ts';
+import { filterSections } from '../../../src/core/time/filter.ts';
+import { tfToZpk, zpkToSections, compressRoots } from '../../../src/core/system/index.ts';
 
 const dir = mkdtempSync(join(tmpdir(), 'pw-spectrum-'));
 const path = (name: string) => join(dir, name);

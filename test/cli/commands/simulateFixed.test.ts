@@ -8,13 +8,13 @@ import { describe, it, expect, beforeAll } from 'vitest';
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { runCli } from '../helpers/cli.ts';
-import { compileFilter, requireToolchain } from '../helpers/cProgram.ts';
-import { readCsvSignal, readWav, writeWav } from '../../src/core/signal/index.ts';
-import { makeWhiteNoise } from '../../src/core/time/inputs.ts';
-import { writeSharedFile } from '../../src/share/designFile.ts';
-import { DEFAULT_IMPLEMENTATION } from '../../src/core/fixed/index.ts';
-import { tfToZpk } from '../../src/core/system/index.ts';
+import { runCli } from '../../helpers/cli.ts';
+import { compileFilter, requireToolchain } from '../../helpers/cProgram.ts';
+import { readCsvSignal, readWav, writeWav } from '../../../src/core/signal/index.ts';
+import { makeWhiteNoise } from '../../../src/core/time/inputs.ts';
+import { writeSharedFile } from '../../../src/share/designFile.ts';
+import { DEFAULT_IMPLEMENTATION } from '../../../src/core/fixed/index.ts';
+import { tfToZpk } from '../../../src/core/system/index.ts';
 
 beforeAll(() => requireToolchain('host'));
 
