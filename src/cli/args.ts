@@ -87,3 +87,19 @@ export function numberFlag(args: ParsedArgs, name: string, fallback: number, uni
   const raw = args.flags.get(name);
   return raw === undefined ? fallback : readFlagNumber(name, raw, undefined, unit);
 }
+
+/**
+ * The frequency of a built-in sine input named "sine:<Hz>" (read by the number policy; a unit may follow),
+ * or null when the name is not one; a usage error when the frequency is not from 0 up to `highest` Hz.
+ */
+export function sineInputHz(name: string, highest: number): number | null {
+  const sine = /^sine:(.+)$/.exec(name);
+  if (!sine) return null;
+  const r = readNumber(sine[1]!, { unit: 'Hz' });
+  if (!r.ok || !(r.value >= 0 && r.value <= highest)) {
+    const range = Number.isFinite(highest) ? `from 0 to ${highest} Hz (half the sample rate)` : 'in Hz';
+    const why = r.ok ? '' : `: ${r.message}`;
+    throw new UsageError(`--input sine:<Hz> needs a frequency ${range}; got "${sine[1]}"${why}.`);
+  }
+  return r.value;
+}

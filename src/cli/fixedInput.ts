@@ -4,7 +4,8 @@
  * scale or, for CSV, as integer data-word codes.
  */
 import type { SignalSpec } from '../core/fixed/index.ts';
-import { UsageError } from './args.ts';
+import { UsageError, sineInputHz } from './args.ts';
+import { readNumber } from '../core/parse/typedNumber.ts';
 import type { SignalSource, SourceBlock, SourceSummary } from './stream/sources.ts';
 
 /** Samples per block when a generated input is fed to the run. */
@@ -21,18 +22,12 @@ export function generatedSpec(
   sampleRate: number,
 ): SignalSpec {
   if (name === 'impulse' || name === 'step') return { kind: name, length, amplitude };
-  const sine = /^sine:(.+)$/.exec(name);
-  if (sine) {
-    const hz = Number(sine[1]);
-    if (!Number.isFinite(hz) || hz < 0 || hz > sampleRate / 2)
-      throw new UsageError(
-        `--input sine:<Hz> needs a frequency from 0 to ${sampleRate / 2} Hz (half the sample rate); got "${sine[1]}".`,
-      );
-    return { kind: 'sine', length, frequencyHz: hz, amplitude };
-  }
+  const hz = sineInputHz(name, sampleRate / 2);
+  if (hz !== null) return { kind: 'sine', length, frequencyHz: hz, amplitude };
   const noise = /^noise(?::(.*))?$/.exec(name);
   const seedText = noise?.[1] ?? '1';
-  const seed = Number(seedText);
+  const read = readNumber(seedText);
+  const seed = read.ok ? read.value : NaN;
   if (!Number.isInteger(seed) || seed < 0 || seed > 0xffffffff)
     throw new UsageError(
       `--input noise:<seed> needs a whole-number seed from 0 to 4294967295; got "${seedText}".`,

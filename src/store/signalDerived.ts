@@ -191,7 +191,10 @@ const afterLevelsOf = memoLast(
   (output: Float64Array, fs: number, fitted: number[]): ToneEstimate[] => fitTones(output, fs, fitted).tones,
 );
 const shapedLevelsOf = memoLast((report: LevelReport, zpk: Zpk): { levelDb: number }[] => {
-  const omega = Float64Array.from(report.readings, (r) => (2 * Math.PI * r.fittedHz) / report.sampleRate);
+  const omega = hzGridToOmega(
+    report.readings.map((r) => r.fittedHz),
+    report.sampleRate,
+  );
   const h = responseZpk(zpk, omega).magnitude;
   return report.readings.map((r, i) => ({ levelDb: r.beforeDb + 20 * Math.log10(h[i]!) }));
 });

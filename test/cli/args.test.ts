@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { UsageError, intFlag, numberFlag, parseArgs, readFlagList } from '../../src/cli/args.ts';
+import { UsageError, intFlag, numberFlag, parseArgs, readFlagList, sineInputHz } from '../../src/cli/args.ts';
 import { designerFromArgs } from '../../src/cli/commands/design.ts';
 import {
   HZ_FIELD_CASES,
@@ -38,6 +38,19 @@ describe('numbers on the command line follow the number policy', () => {
       { read, admissible: (x) => Number.isInteger(x) && x >= 2 && x <= 65536 },
       NO_UNIT_CASES.slice(1),
     );
+  });
+  it('the sine input sine:<Hz> reads its frequency like a frequency field', () => {
+    const read = flag((raw) => {
+      // "sine:" with nothing after it is not a sine input at all (the name is then taken as a file).
+      const hz = sineInputHz(`sine:${raw}`, 1000);
+      if (hz === null) throw new UsageError('nothing is typed');
+      return hz;
+    });
+    expectNumberPolicy(
+      { read, admissible: (x) => x >= 0 && x <= 1000 },
+      HZ_FIELD_CASES.filter(([t]) => t !== 'kHz'),
+    );
+    expect(sineInputHz('impulse', 1000)).toBeNull();
   });
   it('a list flag reads commas as separators', () => {
     expectListPolicy(flag((raw) => readFlagList('edge', raw)) as never);

@@ -17,8 +17,7 @@ import {
   writeWav,
   type SampleFormat,
 } from '../../core/signal/index.ts';
-import { UsageError, intFlag, numberFlag, parseArgs, type ParsedArgs } from '../args.ts';
-import { readNumber } from '../../core/parse/typedNumber.ts';
+import { UsageError, intFlag, numberFlag, parseArgs, sineInputHz, type ParsedArgs } from '../args.ts';
 import { DESIGN_FLAGS, readDesign, type CliDesign } from '../designInput.ts';
 import { toJson } from '../json.ts';
 import type { CliIo } from '../main.ts';
@@ -105,13 +104,8 @@ function inputSignal(spec: string, n: number | null, fs: number, channel: number
   const count = n ?? 64;
   if (spec === 'impulse') return { samples: makeImpulse(count), sampleRate: null, notes: [] };
   if (spec === 'step') return { samples: makeStep(count), sampleRate: null, notes: [] };
-  const sine = /^sine:(.+)$/.exec(spec);
-  if (sine) {
-    const read = readNumber(sine[1]!, { unit: 'Hz' });
-    const hz = read.ok ? read.value : NaN;
-    if (!(hz >= 0)) throw new UsageError(`--input sine:<Hz> needs a frequency in Hz; got "${sine[1]}".`);
-    return { samples: makeSine(hzToOmega(hz, fs), count), sampleRate: null, notes: [] };
-  }
+  const hz = sineInputHz(spec, Infinity);
+  if (hz !== null) return { samples: makeSine(hzToOmega(hz, fs), count), sampleRate: null, notes: [] };
   const loaded = isWavPath(spec) ? loadWav(spec, channel) : loadCsv(spec, fs);
   if (n !== null) loaded.samples = loaded.samples.subarray(0, Math.min(n, loaded.samples.length));
   return loaded;

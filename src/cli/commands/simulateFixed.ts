@@ -145,7 +145,9 @@ function inputPlan(args: ParsedArgs, sampleRate: number, output: string | undefi
   if (wav && args.flags.has('input-rate'))
     throw new UsageError('--input-rate applies to CSV input; a WAV file states its own rate.');
   const channel = args.flags.has('channel') ? intFlag(args, 'channel', 1, 1, 65535) - 1 : 0;
-  const inputRate = args.flags.has('input-rate') ? numberFlag(args, 'input-rate', sampleRate) : sampleRate;
+  const inputRate = args.flags.has('input-rate')
+    ? numberFlag(args, 'input-rate', sampleRate, 'Hz')
+    : sampleRate;
   if (!(inputRate > 0)) throw new UsageError('--input-rate must be a positive rate in Hz.');
   const maxFrames = args.flags.has('samples')
     ? intFlag(args, 'samples', 1, 1, Number.MAX_SAFE_INTEGER)

@@ -26,7 +26,7 @@ import {
   type WindowName,
 } from '../../core/signal/index.ts';
 import { zpkToSections } from '../../core/system/index.ts';
-import { UsageError, intFlag, numberFlag, parseArgs, type ParsedArgs } from '../args.ts';
+import { UsageError, intFlag, numberFlag, parseArgs, readFlagList, type ParsedArgs } from '../args.ts';
 import { DESIGN_FLAGS, readDesign, type CliDesign } from '../designInput.ts';
 import { choiceFlag } from '../implementationFlags.ts';
 import { toJson } from '../json.ts';
@@ -76,11 +76,8 @@ function readSettings(args: ParsedArgs): Settings {
   const rawLevels = args.flags.get('levels');
   let levels: number[] | null = null;
   if (rawLevels !== undefined) {
-    levels = rawLevels
-      .split(/[,;\s]+/)
-      .filter((t) => t !== '')
-      .map(Number);
-    if (levels.length === 0 || levels.some((f) => !(f >= 0)))
+    levels = readFlagList('levels', rawLevels, 'frequencies in Hz');
+    if (levels.some((f) => !(f >= 0)))
       throw new UsageError(
         `--levels needs frequencies in Hz separated by commas, e.g. 50,150; got "${rawLevels}".`,
       );
@@ -95,7 +92,7 @@ function readSettings(args: ParsedArgs): Settings {
     throw new UsageError('--channel applies to WAV input; a CSV input has one value column.');
   if (wav && args.flags.has('input-rate'))
     throw new UsageError('--input-rate applies to CSV input; a WAV file states its own rate.');
-  const inputRate = args.flags.has('input-rate') ? numberFlag(args, 'input-rate', 1) : null;
+  const inputRate = args.flags.has('input-rate') ? numberFlag(args, 'input-rate', 1, 'Hz') : null;
   if (inputRate !== null && !(inputRate > 0))
     throw new UsageError('--input-rate must be a positive rate in Hz.');
   return {

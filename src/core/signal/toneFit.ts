@@ -10,6 +10,7 @@
  * Dirichlet kernel D(α) = Σ_{n<N} e^{iαn} = e^{iα(N−1)/2}·sin(Nα/2)/sin(α/2), the Hann weight being
  * ½ − ¼e^{iβn} − ¼e^{−iβn} with β = 2π/N.
  */
+import { hzToOmega } from '../units.ts';
 
 /** 'rectangular': ordinary least squares; 'hann': weighted by a periodic Hann window over the span. */
 export type FitWeighting = 'rectangular' | 'hann';
@@ -79,7 +80,7 @@ export class ToneFitAccumulator {
     const resolution = sampleRate / length;
     for (let i = 1; i < distinct.length; i++)
       if (distinct[i]! - distinct[i - 1]! < resolution) throw tooClose(resolution, length);
-    this.omegas = distinct.map((f) => (2 * Math.PI * f) / sampleRate).filter((w) => w > 0);
+    this.omegas = distinct.map((f) => hzToOmega(f, sampleRate)).filter((w) => w > 0);
     this.columns = [{ omega: 0, sin: false }];
     for (const w of this.omegas) {
       this.columns.push({ omega: w, sin: false });
@@ -170,7 +171,7 @@ export class ToneFitAccumulator {
     });
     const coef = solve(a, b, () => tooClose(this.sampleRate / this.length, this.length));
     const tones = this.frequenciesHz.map((f): ToneEstimate => {
-      const omega = (2 * Math.PI * f) / this.sampleRate;
+      const omega = hzToOmega(f, this.sampleRate);
       if (omega === 0) return tone(f, coef[0]!, 0);
       const i = cols.findIndex((c) => c.omega === omega && !c.sin);
       const j = cols.findIndex((c) => c.omega === omega && c.sin);

@@ -7,6 +7,7 @@
  * ±width, refined by a parabola through the three highest points, is the tone's frequency.
  */
 import { fft, nextPowerOfTwo } from './fft.ts';
+import { hzToOmega } from '../units.ts';
 
 /** Samples between exact re-evaluations of the demodulating phasor. */
 const RESYNC = 1024;
@@ -43,7 +44,7 @@ export class ToneSearchAccumulator {
       const width = widthsHz[k] ?? 0;
       if (!(width > 0 && f > 0 && f < sampleRate / 2)) return null;
       return {
-        omega: (2 * Math.PI * f) / sampleRate,
+        omega: hzToOmega(f, sampleRate),
         widthHz: width,
         block: Math.max(1, Math.floor((BAND_FRACTION * sampleRate) / width)),
         re: [],
