@@ -183,10 +183,13 @@ export function readNumberList(text: string): NumberListReading {
  * comma a point is read as a decimal mark too. Plain decimals take the fast path: one regular expression.
  */
 export function numberCell(cell: string, decimal: '.' | ','): number {
-  if (PLAIN.test(cell)) {
-    const v = Number(cell);
-    return Number.isFinite(v) ? v : NaN;
-  }
+  const v = PLAIN.test(cell) ? Number(cell) : slowCell(cell, decimal);
+  // v − v is 0 only for a finite v (NaN and ±Infinity give NaN).
+  return v - v === 0 ? v : NaN;
+}
+
+/** A cell that is not a plain decimal: a comma, a Unicode minus, a fraction, or no number at all. */
+function slowCell(cell: string, decimal: '.' | ','): number {
   const r = parts(cell, decimal === ',' ? 'either' : '.', false);
-  return r.ok && Number.isFinite(r.value) ? r.value : NaN;
+  return r.ok ? r.value : NaN;
 }
