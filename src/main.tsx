@@ -2,10 +2,11 @@ import './views/theme.css';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { App } from './views/App.tsx';
-import { installPersistence } from './store/persist.ts';
+import { browserEnv, installPersistence } from './store/persist.ts';
 import { workbenchStore } from './store/useWorkbench.ts';
+import { downloadDesignFile } from './views/side/share/saveDesign.ts';
 
-installPersistence(workbenchStore);
+installPersistence(workbenchStore, { ...browserEnv(), downloadDesign: downloadDesignFile });
 
 const container = document.getElementById('root');
 if (!container) throw new Error('Polewright: the page has no #root element.');

@@ -8,6 +8,7 @@ import { readSharedFile } from '../share/designFile.ts';
 import type { SharedDesign } from '../share/document.ts';
 import { decodeLink, linkFragment } from '../share/link/index.ts';
 import { UsageError, numberFlag, type ParsedArgs } from './args.ts';
+import { describeProblem, designProblem } from '../core/model/check.ts';
 
 /** Flags every design-taking command accepts. */
 export const DESIGN_FLAGS = ['b', 'a', 'eq', 'tf', 'fs'] as const;
@@ -71,14 +72,44 @@ function fromTf(tf: TransferFunction, fs: number, source: string, notes: string[
   };
 }
 
-/** Turns a parse failure into a usage error that quotes the input and marks the place. */
-function parseFailure(flag: string, text: string, error: { message: string; position?: number }): UsageError {
-  const mark = error.position !== undefined ? `\n  ${text}\n  ${' '.repeat(error.position)}^` : '';
-  return new UsageError(`--${flag}: ${error.message}${mark}`);
+/** Characters of the input quoted on either side of an error's place. */
+const QUOTE_CHARS = 60;
+
+/** Turns a parse failure into a usage error that quotes the input around the place and marks it. */
+function parseFailure(
+  flag: string,
+  text: string,
+  error: { message: string; position?: number; expected?: string },
+): UsageError {
+  let mark = '';
+  if (error.position !== undefined) {
+    const from = Math.max(0, error.position - QUOTE_CHARS);
+    const to = Math.min(text.length, error.position + QUOTE_CHARS);
+    const lead = from > 0 ? '…' : '';
+    const line = lead + text.slice(from, to).replace(/[\r\n\t]/g, ' ') + (to < text.length ? '…' : '');
+    mark = `\n  ${line}\n  ${' '.repeat(lead.length + error.position - from)}^`;
+  }
+  const accepted = error.expected ? ` (accepted: ${error.expected})` : '';
+  return new UsageError(`--${flag}: ${error.message}${accepted}${mark}`);
 }
 
-/** Reads the design from the positional file argument or from the flags. */
+/** The design as read, refused with a usage error when it breaks the bounds every design keeps. */
+function withinLimits(d: CliDesign): CliDesign {
+  const design = d.shared?.design;
+  const problem = design ? designProblem(design) : null;
+  if (problem) throw new UsageError(`${d.source}: ${describeProblem(problem)}.`);
+  return d;
+}
+
+/**
+ * Reads the design from the positional file argument or from the flags, and checks it against the bounds
+ * every design keeps (core/model/check.ts), as the workbench does: what a command accepts, the page can open.
+ */
 export function readDesign(args: ParsedArgs): CliDesign {
+  return withinLimits(readAnyDesign(args));
+}
+
+function readAnyDesign(args: ParsedArgs): CliDesign {
   const fsGiven = args.flags.has('fs');
   const fs = numberFlag(args, 'fs', 1, 'Hz');
   if (!(fs > 0))

@@ -8,7 +8,7 @@ import { stringifyExact } from './exactJson.ts';
 import { MAX_FILE_CHARS } from './schema/limits.ts';
 import { readDocument } from './schema/migrate.ts';
 
-export { MAX_FILE_CHARS, MAX_ORDER as MAX_FILE_ORDER } from './schema/limits.ts';
+export { MAX_FILE_CHARS } from './schema/limits.ts';
 
 /** Reads design-file text of any released version; on failure says what was wrong, where, what is accepted. */
 export function readSharedFile(text: string): ShareResult {

@@ -10,7 +10,9 @@ export interface SharedDesign {
   view: SharedView;
 }
 
-export type ShareResult = { ok: true; value: SharedDesign } | { ok: false; message: string };
+/** A design read from a link or file, or why not; `notes` say what the reader should know (an old link). */
+export type ShareResult =
+  { ok: true; value: SharedDesign; notes?: string[] } | { ok: false; message: string };
 
 /** The current-version document of a design (plain data, ready for JSON or the link codec). */
 export function toDocument(shared: SharedDesign): CurrentDocument {

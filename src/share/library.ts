@@ -6,7 +6,7 @@
 import { fromDocument, toDocument, type SharedDesign } from './document.ts';
 import { stringifyExact } from './exactJson.ts';
 import { plainText } from './schema/common.ts';
-import { MAX_NAME_CHARS } from './schema/limits.ts';
+import { MAX_NAME_CHARS } from '../core/model/limits.ts';
 import { readDocument } from './schema/migrate.ts';
 import { consoleWarn, type KeyValueStorage, type Warn } from './storage.ts';
 

@@ -4,6 +4,8 @@ export interface KeyValueStorage {
   getItem(key: string): string | null;
   setItem(key: string, value: string): void;
   removeItem(key: string): void;
+  /** Every key held. */
+  keys(): string[];
 }
 
 /** An in-memory storage; `quotaChars` makes setItem throw as a full localStorage does. */
@@ -19,17 +21,33 @@ export function memoryStorage(quotaChars = Infinity): KeyValueStorage & { data: 
       data.set(k, v);
     },
     removeItem: (k) => void data.delete(k),
+    keys: () => [...data.keys()],
   };
 }
 
 /** The page's localStorage, or null where it is unavailable (private modes, blocked storage, Node). */
 export function browserStorage(): KeyValueStorage | null {
+  let s: Storage | undefined;
   try {
-    const s = globalThis.localStorage;
-    return s ?? null;
+    s = globalThis.localStorage;
   } catch {
     return null;
   }
+  if (!s) return null;
+  const ls = s;
+  return {
+    getItem: (k) => ls.getItem(k),
+    setItem: (k, v) => ls.setItem(k, v),
+    removeItem: (k) => ls.removeItem(k),
+    keys: () => {
+      const out: string[] = [];
+      for (let i = 0; i < ls.length; i++) {
+        const k = ls.key(i);
+        if (k !== null) out.push(k);
+      }
+      return out;
+    },
+  };
 }
 
 /** Reports a problem with stored data without breaking anything. */

@@ -14,6 +14,7 @@ import { designerEntry, runDesigner, type DesignerSpec, type DesignResult } from
 import * as masks from '../core/mask/index.ts';
 import type { MaskRegion, MaskRegionPatch, RegionEdge, RequirementMask } from '../core/mask/index.ts';
 import type { Design } from '../core/model/design.ts';
+import { problemPlace, type DesignProblem } from '../core/model/check.ts';
 
 /** What happens to the mask when a designer runs. */
 export type DesignerMaskPolicy =
@@ -157,9 +158,14 @@ export interface DesignerActions {
   moveRegionEdge(id: string, edge: RegionEdge, value: number): void;
 }
 
-/** The designer and mask actions of a store: its design reader, its recording edit, and a hook for new roots. */
+/**
+ * The designer and mask actions of a store: its design reader, its checked edit (which returns the problem
+ * of a result outside the design's bounds), its edit that reports such a problem itself, and a hook for new
+ * roots.
+ */
 export function designerActions(
   get: () => { design: Design },
+  apply: (fn: (d: Design) => Design) => DesignProblem | null,
   edit: (fn: (d: Design) => Design) => void,
   rootsReplaced: () => void = () => {},
 ): DesignerActions {
@@ -167,7 +173,15 @@ export function designerActions(
   const attempt = <T>(fn: (d: Design) => Result<{ design: Design; out: T }>): Result<T> => {
     const r = fn(get().design);
     if (!r.ok) return r;
-    edit(() => r.value.design);
+    const problem = apply(() => r.value.design);
+    if (problem)
+      return {
+        ok: false,
+        error: {
+          message: `the result would not be kept: ${problemPlace(problem)}: ${problem.message}`,
+          expected: problem.expected,
+        },
+      };
     return { ok: true, value: r.value.out };
   };
   const designed = (r: Result<{ design: Design; result: DesignResult }>) =>

@@ -1,12 +1,26 @@
 /**
- * Wires the share layer into the page's store: restore the autosaved session, open a design link from the
- * URL fragment (one undo step on top, so the previous design stays reachable), open later links on
- * `hashchange`, and autosave every change (throttled, flushed on pagehide). Problems become notices.
+ * Wires the share layer into the page's store: restore this tab's autosaved session (or continue the newest
+ * one in a new tab), open a design link from the URL fragment (one undo step on top, so the previous design
+ * stays reachable), open later links on `hashchange`, and autosave every change (throttled, flushed on
+ * pagehide). Work that is not saved is never silent: a lasting notice says why, with the design one click
+ * away as a file, and a tab says when another tab changed the same design, offering to keep its own copy.
  */
-import { createAutosaver, loadSession, type Session, type Timers } from '../share/autosave.ts';
-import { designJson } from '../share/documentCache.ts';
+import {
+  createAutosaver,
+  parseSession,
+  pruneSessions,
+  readSessionHead,
+  restoreSession,
+  sessionKey,
+  SESSION_KEY_PREFIX,
+  type SaveOutcome,
+  type StoredSession,
+  type Timers,
+} from '../share/autosave.ts';
+import type { SharedDesign } from '../share/document.ts';
+import { sameDesign } from '../core/model/design.ts';
 import { decodeLink } from '../share/link/index.ts';
-import { postNotice } from './notices.ts';
+import { dismissKey, hasNotice, postNotice, type NoticeAction } from './notices.ts';
 import { pickSharedView } from '../core/model/view.ts';
 import { browserStorage, consoleWarn, type KeyValueStorage, type Warn } from '../share/storage.ts';
 import type { WorkbenchStore } from './store.ts';
@@ -20,12 +34,44 @@ export interface PersistEnv {
   /** Removes the fragment without reloading or adding a browser-history entry. */
   clearHash(): void;
   listen(event: 'hashchange' | 'pagehide' | 'hidden', fn: () => void): () => void;
+  /** This tab's id as kept across its reloads (sessionStorage), or null in a new tab. */
+  tabId?(): string | null;
+  setTabId?(id: string): void;
+  /** Another tab changed a storage key (the 'storage' event). */
+  onStorage?(fn: (key: string | null) => void): () => void;
+  /** Resolves false when another open tab holds this id (a duplicated tab copies its original's id). */
+  claimTab?(id: string): Promise<boolean>;
+  /** A fresh random id. */
+  newId?(): string;
+  /** Downloads the design as a design file (the page's own Save file). */
+  downloadDesign?(shared: SharedDesign): void;
   timers?: Timers;
   warn?: Warn;
 }
 
-/** The page's environment: localStorage, location and window events. */
+/** Notice keys of the lasting states persistence reports. */
+export const UNSAVED_NOTICE = 'autosave';
+export const otherTabNotice = (tab: string) => `other-tab:${tab}`;
+
+function randomId(): string {
+  const c = globalThis.crypto;
+  if (c && typeof c.randomUUID === 'function') return c.randomUUID();
+  return `${Date.now().toString(36)}-${Math.random().toString(36).slice(2)}`;
+}
+
+function sessionStorageOrNull(): Storage | null {
+  try {
+    return globalThis.sessionStorage ?? null;
+  } catch {
+    return null;
+  }
+}
+
+const TAB_KEY = 'polewright.tab';
+
+/** The page's environment: localStorage, sessionStorage, location, window events and Web Locks. */
 export function browserEnv(): PersistEnv {
+  const session = sessionStorageOrNull();
   return {
     storage: browserStorage(),
     hash: () => window.location.hash,
@@ -46,6 +92,37 @@ export function browserEnv(): PersistEnv {
       window.addEventListener(event, fn);
       return () => window.removeEventListener(event, fn);
     },
+    tabId: () => {
+      try {
+        return session?.getItem(TAB_KEY) ?? null;
+      } catch {
+        return null;
+      }
+    },
+    setTabId: (id) => {
+      try {
+        session?.setItem(TAB_KEY, id);
+      } catch {
+        // Without sessionStorage a reload starts a new tab session (it continues the newest one).
+      }
+    },
+    onStorage: (fn) => {
+      const on = (e: StorageEvent) => fn(e.key);
+      window.addEventListener('storage', on);
+      return () => window.removeEventListener('storage', on);
+    },
+    claimTab: (id) => {
+      const locks = (navigator as Navigator & { locks?: LockManager }).locks;
+      if (!locks) return Promise.resolve(true);
+      return new Promise<boolean>((resolve) => {
+        // The lock is held (the callback never settles) until the page goes away.
+        void locks.request(`polewright.tab.${id}`, { ifAvailable: true }, (lock) => {
+          resolve(lock !== null);
+          return lock === null ? undefined : new Promise<void>(() => {});
+        });
+      });
+    },
+    newId: randomId,
     warn: consoleWarn,
   };
 }
@@ -62,77 +139,195 @@ export function openLinkFromHash(store: WorkbenchStore, env: PersistEnv): boolea
   }
   const state = store.getState();
   // Reopening the design already open would only add an undo step that changes nothing.
-  if (designJson(r.value.design) !== designJson(state.design)) state.replaceDesign(r.value.design);
+  if (!sameDesign(r.value.design, state.design)) state.replaceDesign(r.value.design);
   state.setView({ ...pickSharedView(defaultView), ...r.value.view });
+  const notes = r.notes?.length ? ` ${r.notes.join(' ')}` : '';
   postNotice(
     'info',
-    `Opened “${r.value.design.name || 'untitled design'}” from the link. Undo brings back the design you had before.`,
+    `Opened “${r.value.design.name || 'untitled design'}” from the link. Undo brings back the design you had before.${notes}`,
   );
   return true;
 }
 
 /** The store's session as autosave writes it (a gesture in progress counts as finished). */
-export function sessionOf(store: WorkbenchStore): Session {
+export function sessionOf(store: WorkbenchStore) {
   const { design, history, view } = store.getState();
   const past = history.gestureStart ? [...history.past, history.gestureStart] : history.past;
   return { design, past, future: history.future, view: pickSharedView(view) };
 }
 
+/** The words of a lasting "not saved" notice. */
+export function unsavedText(outcome: Extract<SaveOutcome, { ok: false }> | 'no-storage'): string {
+  const tail = 'A reload or a closed tab would lose it: download the design to keep it.';
+  if (outcome === 'no-storage')
+    return `Your work is not being saved: this browser does not let the workbench use its storage (blocked, or a private mode). ${tail}`;
+  if (outcome.reason === 'full')
+    return `Your latest changes are not saved: ${outcome.message}. ${tail} Deleting designs from the library frees space.`;
+  return `Your latest changes are not saved: ${outcome.message}. ${tail}`;
+}
+
 /** Restores the autosave, opens a link, and keeps saving; returns a function that undoes the wiring. */
 export function installPersistence(store: WorkbenchStore, env: PersistEnv = browserEnv()): () => void {
   const warn = env.warn ?? consoleWarn;
+  const newId = env.newId ?? randomId;
   const { storage } = env;
+  const offs: (() => void)[] = [];
+  const download: NoticeAction[] = env.downloadDesign
+    ? [
+        {
+          label: 'Download the design',
+          keep: true,
+          run: () => {
+            const { design, view } = store.getState();
+            env.downloadDesign!({ design, view: pickSharedView(view) });
+          },
+        },
+      ]
+    : [];
+  let tab = env.tabId?.() ?? null;
+  let lineage: string | null = null;
   if (storage) {
-    let session: Session | null = null;
     try {
-      session = loadSession(storage, warn);
+      const restored = restoreSession(storage, tab, warn);
+      if (restored) {
+        const { session } = restored;
+        lineage = restored.lineage;
+        store.setState({
+          design: session.design,
+          history: { past: session.past, future: session.future, gestureStart: null },
+          view: { ...store.getState().view, ...session.view },
+          selection: null,
+        });
+      }
     } catch (e) {
       warn(`the autosaved session could not be restored: ${(e as Error).message}`);
     }
-    if (session) {
-      store.setState({
-        design: session.design,
-        history: { past: session.past, future: session.future, gestureStart: null },
-        view: { ...store.getState().view, ...session.view },
-        selection: null,
-      });
-    }
-  }
-  openLinkFromHash(store, env);
-  const offs = [env.listen('hashchange', () => openLinkFromHash(store, env))];
-  if (storage) {
-    const saver = createAutosaver(storage, () => sessionOf(store), {
-      ...(env.timers ? { timers: env.timers } : {}),
-      warn,
+  } else {
+    postNotice('error', unsavedText('no-storage'), {
+      key: UNSAVED_NOTICE,
+      persistent: true,
+      actions: download,
     });
-    // The first autosave after a reload or a link captures the opened design at once.
-    saver.schedule();
-    // A root drag changes the design on every pointer move; writing the session (design and undo history)
-    // mid-drag would cost a frame every throttle interval, so the drag is saved on release, or when the page
-    // goes away mid-drag.
-    let heldByDrag = false;
-    const flush = () => {
-      if (heldByDrag) saver.schedule();
-      heldByDrag = false;
-      saver.flush();
+  }
+  if (tab === null) {
+    tab = newId();
+    env.setTabId?.(tab);
+  }
+  lineage ??= newId();
+  openLinkFromHash(store, env);
+  offs.push(env.listen('hashchange', () => openLinkFromHash(store, env)));
+  if (!storage) return () => offs.forEach((off) => off());
+
+  let pruned = false;
+  const done = (outcome: SaveOutcome) => {
+    if (outcome.ok) {
+      if (dismissKey(UNSAVED_NOTICE))
+        postNotice('info', 'Autosave works again: your design is saved in this browser.');
+      if (!pruned) pruneSessions(storage, tab!);
+      pruned = true;
+      return;
+    }
+    warn(`the design could not be autosaved: ${outcome.message}.`);
+    postNotice('error', unsavedText(outcome), { key: UNSAVED_NOTICE, persistent: true, actions: download });
+  };
+  const snapshot = (): StoredSession => ({
+    ...sessionOf(store),
+    tab: tab!,
+    lineage: lineage!,
+    savedAt: (env.timers ?? { now: () => Date.now() }).now(),
+  });
+  const saver = createAutosaver(storage, snapshot, { ...(env.timers ? { timers: env.timers } : {}), done });
+  // A duplicated tab starts with its original's id; it writes nothing until it knows the id is its own.
+  let ready = env.claimTab === undefined;
+  let wanted = true;
+  const schedule = () => {
+    wanted = true;
+    if (ready) saver.schedule();
+  };
+  if (env.claimTab) {
+    void env.claimTab(tab).then((mine) => {
+      if (!mine) {
+        tab = newId();
+        env.setTabId?.(tab);
+      }
+      ready = true;
+      if (wanted) saver.schedule();
+    });
+  }
+  // The first autosave after a reload or a link captures the opened design at once.
+  schedule();
+  // A root drag changes the design on every pointer move; writing the session (design and undo history)
+  // mid-drag would cost a frame every throttle interval, so the drag is saved on release, or when the page
+  // goes away mid-drag.
+  let heldByDrag = false;
+  const flush = () => {
+    if (heldByDrag) schedule();
+    heldByDrag = false;
+    if (ready) saver.flush();
+  };
+  offs.push(
+    store.subscribe((s, prev) => {
+      const changed = s.design !== prev.design || s.history !== prev.history || s.view !== prev.view;
+      if (s.dragging && !prev.dragging) {
+        // A write already pending (e.g. the gesture's start) waits for the release too.
+        saver.dispose();
+        heldByDrag = true;
+      } else if (s.dragging) heldByDrag ||= changed;
+      else if (changed || heldByDrag) {
+        heldByDrag = false;
+        schedule();
+      }
+    }),
+    env.listen('pagehide', flush),
+    env.listen('hidden', flush),
+    () => saver.dispose(),
+  );
+  if (env.onStorage) offs.push(env.onStorage((key) => otherTabChanged(key)));
+
+  /** Another tab wrote its session: say so when it continues the same design and now holds another one. */
+  function otherTabChanged(key: string | null): void {
+    if (key === null || !key.startsWith(SESSION_KEY_PREFIX) || key === sessionKey(tab!)) return;
+    let text: string | null;
+    try {
+      text = storage!.getItem(key);
+    } catch {
+      return;
+    }
+    const head = readSessionHead(text);
+    if (!head || head.lineage !== lineage || head.tab === tab) return;
+    const other = text === null ? null : parseSession(text, () => {});
+    if (!other || sameDesign(other.design, store.getState().design)) return;
+    const noticeKey = otherTabNotice(head.tab);
+    const keepCopy = () => {
+      // A lineage of its own: this tab's copy goes on by itself, and neither tab reports the other again.
+      lineage = newId();
+      schedule();
     };
-    offs.push(
-      store.subscribe((s, prev) => {
-        const changed = s.design !== prev.design || s.history !== prev.history || s.view !== prev.view;
-        if (s.dragging && !prev.dragging) {
-          // A write already pending (e.g. the gesture's start) waits for the release too.
-          saver.dispose();
-          heldByDrag = true;
-        } else if (s.dragging) heldByDrag ||= changed;
-        else if (changed || heldByDrag) {
-          heldByDrag = false;
-          saver.schedule();
-        }
-      }),
-      env.listen('pagehide', flush),
-      env.listen('hidden', flush),
-      () => saver.dispose(),
+    const name = other.design.name || 'untitled design';
+    postNotice(
+      'info',
+      `Another tab changed this design (it now holds “${name}”). This tab keeps its own copy, which a reload of this tab restores.`,
+      {
+        key: noticeKey,
+        persistent: true,
+        onDismiss: keepCopy,
+        actions: [
+          { label: "Keep this tab's copy", run: keepCopy },
+          {
+            label: "Open the other tab's version",
+            run: () => {
+              const latest = parseSession(storage!.getItem(key) ?? '', () => {}) ?? other;
+              store.getState().replaceDesign(latest.design);
+              store.getState().setView({ ...pickSharedView(defaultView), ...latest.view });
+              postNotice('info', 'Opened the other tab’s version. Undo brings back this tab’s copy.');
+            },
+          },
+        ],
+      },
     );
   }
-  return () => offs.forEach((off) => off());
+  return () => {
+    offs.forEach((off) => off());
+    for (const k of [UNSAVED_NOTICE]) if (hasNotice(k)) dismissKey(k);
+  };
 }

@@ -14,6 +14,8 @@ import {
   type TypedCoefficients,
 } from '../core/model/design.ts';
 import { MAX_SAMPLE_RATE } from '../core/model/limits.ts';
+import { describeProblem, designProblem, type DesignProblem } from '../core/model/check.ts';
+import { postNotice } from './notices.ts';
 import { closeGesture, emptyHistory, recordEdit, type History } from './history.ts';
 import * as edits from './rootEdits.ts';
 import { defaultView, type ViewSettings, type ViewState } from './view.ts';
@@ -48,7 +50,7 @@ export interface DesignActions {
     gain: number,
     typed: TypedCoefficients,
     about?: { name?: string; note?: string },
-  ): void;
+  ): DesignProblem | null;
   /** Replaces the whole design (demo, empty, opened file or link); one undo step. */
   replaceDesign(design: Design): void;
   setName(name: string): void;
@@ -83,15 +85,34 @@ export interface WorkbenchState
 
 export type WorkbenchStore = StoreApi<WorkbenchState>;
 
+/** What the page says when an edit would leave the bounds every design keeps (core/model/limits.ts). */
+export function refusedEditText(p: DesignProblem): string {
+  return `That change was not made: ${describeProblem(p)}. The workbench holds only designs it can save, link and reopen.`;
+}
+
+/** Applies a pure edit to a design if the result keeps the design's bounds; returns the edit's outcome. */
+export type Apply = (fn: (d: Design) => Design) => DesignProblem | null;
+
 /** Creates a store holding the given design (the demo design by default). */
 export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchStore {
   return createStore<WorkbenchState>()((set, get) => {
-    /** Applies a pure edit; records one undo step unless inside a gesture. */
-    const edit = (fn: (d: Design) => Design) => {
+    /**
+     * Applies a pure edit; records one undo step unless inside a gesture. A result outside the design's
+     * bounds is not applied and its problem returned, so nothing the page holds is lost on reload.
+     */
+    const apply: Apply = (fn) => {
       const { design, history } = get();
       const next = fn(design);
-      if (next === design) return;
+      if (next === design) return null;
+      const problem = designProblem(next, design);
+      if (problem) return problem;
       set({ design: next, history: recordEdit(history, design) });
+      return null;
+    };
+    /** apply, saying so in a notice when the edit is refused. */
+    const edit = (fn: (d: Design) => Design) => {
+      const problem = apply(fn);
+      if (problem) postNotice('error', refusedEditText(problem));
     };
     return {
       design: initial,
@@ -120,8 +141,16 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
         edit((d) => (d.sampleRate === hz ? d : { ...d, sampleRate: hz }));
       },
       loadTyped: (zeros, poles, gain, typed, about) => {
-        edit((d) => ({ ...d, ...about, zeros, poles, gainRule: { kind: 'fixed', value: gain }, typed }));
-        set({ selection: null });
+        const problem = apply((d) => ({
+          ...d,
+          ...about,
+          zeros,
+          poles,
+          gainRule: { kind: 'fixed', value: gain },
+          typed,
+        }));
+        if (!problem) set({ selection: null });
+        return problem;
       },
       replaceDesign: (design) => {
         edit(() => design);
@@ -141,7 +170,7 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
         return rerun;
       },
       setName: (name) => edit((d) => (d.name === name ? d : { ...d, name })),
-      ...designerActions(get, edit, () => set({ selection: null })),
+      ...designerActions(get, apply, edit, () => set({ selection: null })),
       ...implementationActions(get, edit),
       ...signalActions(set, get),
 

@@ -19,6 +19,8 @@ import {
 import { evaluateMask, maskFromDesigner, type MaskResult } from '../../core/mask/index.ts';
 import { writeDesignFile } from '../../share/designFile.ts';
 import type { Design } from '../../core/model/design.ts';
+import { describeProblem, designProblem } from '../../core/model/check.ts';
+import { MAX_NAME_CHARS } from '../../core/model/limits.ts';
 import { UsageError, parseArgs, readFlagList, readFlagNumber, type ParsedArgs } from '../args.ts';
 import type { CliDesign } from '../designInput.ts';
 import { toJson } from '../json.ts';
@@ -234,18 +236,21 @@ export function runDesign(argv: string[], io: CliIo): number {
     ...(result.margin && { margin: result.margin }),
     ...(mask && { mask, maskResult: verdict }),
   };
+  const design: Design = {
+    sampleRate: spec.fs,
+    zeros: result.zpk.zeros,
+    poles: result.zpk.poles,
+    gainRule: { kind: 'fixed', value: result.zpk.gain },
+    name: (args.flags.get('name') ?? result.note).slice(0, MAX_NAME_CHARS),
+    note: result.note,
+    designer: spec,
+    ...(mask && { mask }),
+  };
+  // The workbench's own door: what this command makes, a design file can hold and the page can open.
+  const problem = designProblem(design);
+  if (problem) throw new UsageError(`the design cannot be kept: ${describeProblem(problem)}.`);
   const file = args.flags.get('out');
   if (file !== undefined) {
-    const design: Design = {
-      sampleRate: spec.fs,
-      zeros: result.zpk.zeros,
-      poles: result.zpk.poles,
-      gainRule: { kind: 'fixed', value: result.zpk.gain },
-      name: (args.flags.get('name') ?? result.note).slice(0, 200),
-      note: result.note,
-      designer: spec,
-      ...(mask && { mask }),
-    };
     try {
       writeFileSync(file, writeDesignFile(design));
     } catch (e) {

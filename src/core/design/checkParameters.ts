@@ -6,6 +6,7 @@
 import { shortNumber } from '../shortNumber.ts';
 import type { DesignValues, DesignerEntry, ListParameter, Parameter } from './parameters.ts';
 import { DesignInputError } from './validate.ts';
+import { MAX_SAMPLE_RATE } from '../model/limits.ts';
 
 const fmt = (v: number) => shortNumber(v, 10);
 const unitText = (p: Parameter) => (p.unit ? ` ${p.unit}` : '');
@@ -147,6 +148,12 @@ function checkParameter(p: Parameter, value: unknown, values: DesignValues, fs: 
  */
 export function checkParameters(entry: DesignerEntry, spec: DesignValues): void {
   const fs = checkAbove('sample rate fs', spec.fs, ' Hz', 'fs');
+  if (fs > MAX_SAMPLE_RATE)
+    throw new DesignInputError(
+      `sample rate fs = ${fmt(fs)} Hz is not accepted`,
+      `a sample rate above 0 and at most ${fmt(MAX_SAMPLE_RATE)} Hz`,
+      'fs',
+    );
   for (const p of entry.parameters) {
     const value = spec[p.key];
     if (value === undefined) {

@@ -67,3 +67,20 @@ export function emptyDesign(sampleRate = 1000): Design {
     note: '',
   };
 }
+
+/** Plain data equal in every field, numbers bit for bit (−0 ≠ 0), whatever the order of object keys. */
+function sameData(a: unknown, b: unknown): boolean {
+  if (typeof a === 'number' || typeof b === 'number') return Object.is(a, b);
+  if (a === b) return true;
+  if (typeof a !== 'object' || typeof b !== 'object' || a === null || b === null) return false;
+  if (Array.isArray(a) !== Array.isArray(b)) return false;
+  const ka = Object.keys(a).filter((k) => (a as Record<string, unknown>)[k] !== undefined);
+  const kb = Object.keys(b).filter((k) => (b as Record<string, unknown>)[k] !== undefined);
+  if (ka.length !== kb.length) return false;
+  return ka.every((k) => sameData((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k]));
+}
+
+/** True when two designs hold the same values (what a file or link of either would carry). */
+export function sameDesign(a: Design, b: Design): boolean {
+  return sameData(a, b);
+}

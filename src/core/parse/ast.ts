@@ -9,6 +9,7 @@
  * The tree is evaluated later in whichever algebra the form needs (numbers, polynomials in z, signals).
  */
 import { fail } from './errors.ts';
+import { MAX_ORDER } from '../model/limits.ts';
 import type { Token } from './lexer.ts';
 
 export type Node =
@@ -20,8 +21,8 @@ export type Node =
 
 /** Deepest nesting accepted, far beyond any real entry and well inside the JavaScript stack. */
 export const MAX_NESTING = 200;
-/** Largest sample offset accepted in x[n±k] / y[n±k]. */
-export const MAX_SAMPLE_OFFSET = 4096;
+/** Largest sample offset accepted in x[n±k] / y[n±k]: the largest order a design may have. */
+export const MAX_SAMPLE_OFFSET = MAX_ORDER;
 
 export interface ParseOptions {
   /** Names that end an expression instead of multiplying it (units and markers of the roots syntax). */

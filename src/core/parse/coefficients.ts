@@ -12,6 +12,7 @@ import { fail, guard } from './errors.ts';
 import { tokenize, type Token } from './lexer.ts';
 import { hasTopLevel, splitCommas, splitSpaces, unwrapBrackets, type Span } from './lists.ts';
 import { realFromTokens } from './scalar.ts';
+import { MAX_COEFFICIENTS } from '../model/limits.ts';
 
 const LABELS: Record<string, 'b' | 'a'> = {
   b: 'b',
@@ -47,6 +48,13 @@ function readList(tokens: readonly Token[], span: Span, name: string): number[] 
   const inner = unwrapBrackets(tokens, trimSeparators(tokens, span));
   if (inner.to <= inner.from) fail(`the list ${name} is empty`, tokens[span.from]!.pos, 'at least one value');
   const items = hasTopLevel(tokens, inner, ',') ? splitCommas(tokens, inner) : splitSpaces(tokens, inner);
+  const extra = items[MAX_COEFFICIENTS];
+  if (extra)
+    fail(
+      `the list ${name} has ${items.length} values`,
+      tokens[extra.from]!.pos,
+      `at most ${MAX_COEFFICIENTS} values (order ${MAX_COEFFICIENTS - 1})`,
+    );
   return items.map((it) => realFromTokens(tokens, it.from, it.to));
 }
 

@@ -4,6 +4,7 @@
  * see a Result.
  */
 import type { InputError, Result } from '../types.ts';
+import { MAX_TYPED_TEXT_CHARS } from '../model/limits.ts';
 
 /** A mistake in the input at a 0-based character offset, with what would have been accepted there. */
 export class ParseError extends Error {
@@ -21,8 +22,20 @@ export function fail(message: string, position: number, expected?: string): neve
   throw new ParseError(`${message} at column ${position + 1}`, position, expected);
 }
 
-/** Runs a parse step and turns any thrown error into an InputError with a position inside the text. */
+/**
+ * Runs a parse step and turns any thrown error into an InputError with a position inside the text. Text
+ * longer than a design may keep (MAX_TYPED_TEXT_CHARS) is refused before any parsing.
+ */
 export function guard<T>(text: string, run: () => T): Result<T> {
+  if (text.length > MAX_TYPED_TEXT_CHARS)
+    return {
+      ok: false,
+      error: {
+        message: `the text is ${text.length} characters long`,
+        position: MAX_TYPED_TEXT_CHARS,
+        expected: `at most ${MAX_TYPED_TEXT_CHARS} characters`,
+      },
+    };
   try {
     return { ok: true, value: run() };
   } catch (e) {

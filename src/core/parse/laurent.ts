@@ -4,9 +4,13 @@
  * powers of z^-1 only at the very end.
  */
 import { fail } from './errors.ts';
+import { MAX_ORDER } from '../model/limits.ts';
 
-/** Largest span of powers of z accepted in any intermediate result (total degree of a factor). */
-export const MAX_DEGREE = 4096;
+/**
+ * Largest span of powers of z accepted in any intermediate result (total degree of a factor): the largest
+ * order a design may have, so work stops at once on input no design could hold.
+ */
+export const MAX_DEGREE = MAX_ORDER;
 
 /** Sum of c[i]·z^(low+i); no zero coefficient at either end; the zero polynomial has c = []. */
 export interface Laurent {

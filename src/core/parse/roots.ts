@@ -137,8 +137,17 @@ function readRoots(tokens: readonly Token[], span: Span): Root[] {
     ? splitCommas(tokens, inner)
     : splitSpaces(tokens, inner, joins);
   const counts: { re: number; im: number; up: number; down: number }[] = [];
+  let order = 0;
   for (const item of items) {
     for (const r of readItem(tokens, item)) {
+      // Counted as typed (a pair typed as both conjugates counts twice), so work stops early on long lists.
+      order += r.multiplicity;
+      if (order > MAX_DEGREE)
+        fail(
+          `the list has more than ${MAX_DEGREE} roots`,
+          tokens[item.from]!.pos,
+          `at most ${MAX_DEGREE} roots (conjugates and repeats counted)`,
+        );
       const im = Math.abs(r.im);
       let c = counts.find((o) => o.re === r.re && o.im === im);
       if (!c) counts.push((c = { re: r.re, im, up: 0, down: 0 }));

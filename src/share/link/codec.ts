@@ -18,7 +18,8 @@
 import type { Root } from '../../core/types.ts';
 import type { GainRule } from '../../core/gainRule.ts';
 import { readShared, toDocument, type SharedDesign, type ShareResult } from '../document.ts';
-import { MAX_LINK_CHARS, MAX_ORDER } from '../schema/limits.ts';
+import { MAX_COEFFICIENTS, MAX_ORDER } from '../../core/model/limits.ts';
+import { MAX_LINK_CHARS } from '../schema/limits.ts';
 import { CURRENT_VERSION, type CurrentDocument } from '../schema/migrate.ts';
 import { toBase64Url, fromBase64Url } from './base64url.ts';
 import { ByteReader, ByteWriter, LinkFormatError } from './bytes.ts';
@@ -89,7 +90,7 @@ function writeNumbers(w: ByteWriter, values: readonly number[]): void {
 }
 
 function readNumbers(r: ByteReader, what: string): number[] {
-  const n = r.count(`the number of coefficients in ${what}`, MAX_ORDER + 1);
+  const n = r.count(`the number of coefficients in ${what}`, MAX_COEFFICIENTS);
   const out: number[] = [];
   for (let i = 0; i < n; i++) out.push(readNumber(r, `${what}[${i}]`));
   return out;

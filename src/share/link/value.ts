@@ -3,7 +3,8 @@
  * byte per value, numbers as in number.ts (their tags double as value tags), strings from the dictionary
  * when they are in it. Reading is bounded in depth and in the number of values.
  */
-import { MAX_TEXT_CHARS, MAX_VALUE_DEPTH, MAX_VALUE_NODES } from '../schema/limits.ts';
+import { MAX_TYPED_TEXT_CHARS } from '../../core/model/limits.ts';
+import { MAX_VALUE_DEPTH, MAX_VALUE_NODES } from '../schema/limits.ts';
 import { ByteReader, ByteWriter, LinkFormatError, decodeUtf8, encodeUtf8 } from './bytes.ts';
 import { LINK_DICTIONARY, dictionaryIndex } from './dictionary.ts';
 import { isNumberTag, readNumberAfterTag, writeNumber } from './number.ts';
@@ -14,8 +15,8 @@ const TRUE = 0xf2;
 const STRING = 0xf3;
 const ARRAY = 0xf4;
 const OBJECT = 0xf5;
-/** Most UTF-8 bytes of one string: every character of the longest text at up to 3 bytes. */
-const MAX_STRING_BYTES = MAX_TEXT_CHARS * 3;
+/** Most UTF-8 bytes of one string: every character of the longest text (the typed text) at up to 3 bytes. */
+const MAX_STRING_BYTES = MAX_TYPED_TEXT_CHARS * 3;
 
 /** Writes a string: odd header = dictionary index, even header = literal UTF-8 of (header / 2) bytes. */
 export function writeString(w: ByteWriter, s: string): void {

@@ -1,7 +1,8 @@
 /** Zod pieces shared by every schema version: finite numbers, roots, gain rules, plain text. */
 import { z } from 'zod';
-import { MAX_MULTIPLICITY, MAX_SAMPLE_RATE } from '../../core/model/limits.ts';
-import { MAX_ORDER } from './limits.ts';
+import { MAX_COEFFICIENTS, MAX_MULTIPLICITY, MAX_ORDER, MAX_SAMPLE_RATE } from '../../core/model/limits.ts';
+import { designProblem } from '../../core/model/check.ts';
+import type { Design } from '../../core/model/design.ts';
 
 // In the page, zod would probe `new Function` to compile fast validators; the page's CSP forbids eval and
 // the probe would log a violation. The interpreted path is fast enough for designs of bounded size. Node
@@ -40,25 +41,13 @@ export const gainRule = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('peak') }),
 ]);
 
-export const coefficients = z
-  .array(finite)
-  .min(1)
-  .max(MAX_ORDER + 1);
+export const coefficients = z.array(finite).min(1).max(MAX_COEFFICIENTS);
 
-/** Order of a stored root list: conjugates and multiplicities counted. */
-export function orderOf(list: readonly { im: number; multiplicity: number }[]): number {
-  return list.reduce((n, r) => n + r.multiplicity * (r.im > 0 ? 2 : 1), 0);
-}
-
-/** Adds an issue for each root list whose order exceeds MAX_ORDER. */
-export function checkOrders(
-  d: { zeros: z.infer<typeof roots>; poles: z.infer<typeof roots> },
-  ctx: z.RefinementCtx,
-) {
-  for (const kind of ['zeros', 'poles'] as const) {
-    const n = orderOf(d[kind]);
-    if (n > MAX_ORDER) {
-      ctx.addIssue({ code: 'custom', path: [kind], message: `order ${n} exceeds the limit of ${MAX_ORDER}` });
-    }
-  }
+/**
+ * Runs the workbench's own door (core/model/check.ts) on a document that has the shape of a design, so a
+ * file, link or saved session accepts exactly the designs the page and the command line may hold.
+ */
+export function checkDesignLimits(d: Design, ctx: z.RefinementCtx) {
+  const p = designProblem(d);
+  if (p) ctx.addIssue({ code: 'custom', path: p.path, message: `${p.message} (accepted: ${p.expected})` });
 }

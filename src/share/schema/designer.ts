@@ -5,10 +5,8 @@
  */
 import { z } from 'zod';
 import { DESIGNERS, type DesignerEntry, type DesignerSpec, type Parameter } from '../../core/design/index.ts';
+import { MAX_WHOLE_ITEM } from '../../core/model/limits.ts';
 import { finite } from './common.ts';
-
-/** Largest harmonic number (or other whole-number item) a file may hold. */
-const MAX_WHOLE_ITEM = 1_000_000;
 
 function valueSchema(p: Parameter): z.ZodType {
   switch (p.type) {

@@ -1,24 +1,24 @@
 /**
- * Bounds on everything a design file, link or saved session may contain. They are checked before anything is
- * allocated or computed, so a hostile input costs at most a few milliseconds and a clear message. The
- * workbench's own bounds (sample rate, multiplicity, view sizes) are in src/core/model/limits.ts.
+ * Bounds on the containers a design travels in: design files, links and the open-ended parts of a link.
+ * They are checked before anything is allocated or computed, so a hostile input costs at most a few
+ * milliseconds and a clear message. They follow from the design's own bounds (src/core/model/limits.ts):
+ * test/share/worstCase.test.ts builds the largest design those bounds allow, with the costliest characters,
+ * and checks that its file, link and saved session fit within these.
  */
+import { MAX_HARMONICS, MAX_MASK_REGIONS } from '../../core/model/limits.ts';
 
-/** Largest order of the zeros or of the poles (conjugates and multiplicities counted). */
-export const MAX_ORDER = 1024;
-/** Longest design name, characters. */
-export const MAX_NAME_CHARS = 200;
-/** Longest design note or typed-coefficient text, characters. */
-export const MAX_TEXT_CHARS = 20_000;
 /** Longest design file, characters. */
-export const MAX_FILE_CHARS = 2_000_000;
-/** Longest link fragment, characters (a full-order design with a long note fits in well under this). */
-export const MAX_LINK_CHARS = 200_000;
-/** Most harmonics a harmonic-notch designer may list, and most edges of a band. */
-export const MAX_HARMONICS = 64;
-export const MAX_EDGES = 2;
-/** Deepest nesting and most values in the open-ended parts of a link (designer, mask, implementation). */
+export const MAX_FILE_CHARS = 4_000_000;
+/** Longest design file, bytes: UTF-8 takes at most 3 bytes per UTF-16 unit (and a 3-byte mark may lead). */
+export const MAX_FILE_BYTES = MAX_FILE_CHARS * 3 + 3;
+/** Deepest nesting of arrays and objects in a design file (a design needs 4). */
+export const MAX_FILE_DEPTH = 32;
+/** Longest link fragment, characters. */
+export const MAX_LINK_CHARS = 2_000_000;
+/** Deepest nesting of the open-ended parts of a link (designer, mask, implementation, view). */
 export const MAX_VALUE_DEPTH = 8;
-export const MAX_VALUE_NODES = 10_000;
-/** Most regions of a requirement mask. */
-export const MAX_MASK_REGIONS = 64;
+/**
+ * Most values in the open-ended parts of a link: a mask region is an object of at most 7 fields (8 values
+ * with the object itself), a designer at most 10 fields and a harmonics list; the rest is a few dozen.
+ */
+export const MAX_VALUE_NODES = MAX_MASK_REGIONS * 8 + MAX_HARMONICS + 256;

@@ -9,7 +9,7 @@ import {
   validateSettings,
 } from '../../core/fixed/index.ts';
 import { finite, plainText } from './common.ts';
-import { MAX_MASK_REGIONS, MAX_NAME_CHARS } from './limits.ts';
+import { MAX_MASK_REGIONS, MAX_REGION_ID_CHARS, MAX_REGION_LABEL_CHARS } from '../../core/model/limits.ts';
 
 const opt = finite.exactOptional();
 
@@ -22,13 +22,13 @@ export const requirementMask = z
     regions: z
       .array(
         z.object({
-          id: plainText(64).min(1, 'must not be empty'),
+          id: plainText(MAX_REGION_ID_CHARS).min(1, 'must not be empty'),
           kind: z.enum(['pass', 'stop', 'band']),
           fromHz: finite,
           toHz: finite,
           upperDb: opt,
           lowerDb: opt,
-          label: plainText(MAX_NAME_CHARS).exactOptional(),
+          label: plainText(MAX_REGION_LABEL_CHARS).exactOptional(),
         }),
       )
       .max(MAX_MASK_REGIONS),

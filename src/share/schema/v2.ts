@@ -3,10 +3,10 @@
  * mask, its fixed-point implementation settings and the view settings worth sharing. The field-by-field description is in src/share/README.md.
  */
 import { z } from 'zod';
-import { checkOrders, coefficients, gainRule, plainText, roots, sampleRate } from './common.ts';
+import { checkDesignLimits, coefficients, gainRule, plainText, roots, sampleRate } from './common.ts';
 import { designerSpec } from './designer.ts';
 import { implementationSettings, requirementMask } from './mask.ts';
-import { MAX_NAME_CHARS, MAX_TEXT_CHARS } from './limits.ts';
+import { MAX_NAME_CHARS, MAX_NOTE_CHARS, MAX_TYPED_TEXT_CHARS } from '../../core/model/limits.ts';
 import { sharedView } from './view.ts';
 
 export const designDocumentV2 = z
@@ -14,17 +14,19 @@ export const designDocumentV2 = z
     polewright: z.literal('design'),
     version: z.literal(2),
     name: plainText(MAX_NAME_CHARS).default(''),
-    note: plainText(MAX_TEXT_CHARS).default(''),
+    note: plainText(MAX_NOTE_CHARS).default(''),
     sampleRate,
     zeros: roots,
     poles: roots,
     gainRule,
-    typed: z.object({ b: coefficients, a: coefficients, text: plainText(MAX_TEXT_CHARS) }).exactOptional(),
+    typed: z
+      .object({ b: coefficients, a: coefficients, text: plainText(MAX_TYPED_TEXT_CHARS) })
+      .exactOptional(),
     designer: designerSpec.exactOptional(),
     mask: requirementMask.exactOptional(),
     implementation: implementationSettings.exactOptional(),
     view: sharedView.exactOptional(),
   })
-  .superRefine(checkOrders);
+  .superRefine(checkDesignLimits);
 
 export type DesignDocumentV2 = z.output<typeof designDocumentV2>;

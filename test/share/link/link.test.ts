@@ -8,6 +8,7 @@ import { ByteWriter } from '../../../src/share/link/bytes.ts';
 import { decodeLink, encodeLink, linkFragment, linkUrl } from '../../../src/share/link/index.ts';
 import { writeNumber } from '../../../src/share/link/number.ts';
 import { demoDesign } from '../../../src/store/demo.ts';
+import { MAX_LINK_CHARS } from '../../../src/share/schema/limits.ts';
 import { bitwiseDifference } from '../arbitraries.ts';
 
 /** An order-8 classical low-pass at 48 kHz, as the designer produces it. */
@@ -188,7 +189,7 @@ describe('hostile links', () => {
   });
 
   it('refuses an oversized link before decoding', () => {
-    expect(message('pw1.' + 'A'.repeat(300_000))).toMatch(/at most 200000/);
+    expect(message('pw1.' + 'A'.repeat(MAX_LINK_CHARS))).toMatch(new RegExp(`at most ${MAX_LINK_CHARS}`));
   });
 
   it('refuses trailing bytes, unknown header bits and non-finite numbers', () => {

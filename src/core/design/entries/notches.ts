@@ -4,6 +4,8 @@ import { designComb, designHarmonicNotches } from '../comb.ts';
 import { designDcBlocker, designNotch, designPeak } from '../notch.ts';
 import { checkInBand } from '../checkParameters.ts';
 import { DesignInputError } from '../validate.ts';
+import { shortNumber } from '../../shortNumber.ts';
+import { MAX_HARMONICS, MAX_ORDER } from '../../model/limits.ts';
 import { NOTCH_WIDTH, bandwidth, centre, fmt, humHz, quality, r3, startWidth, widthHz } from './common.ts';
 
 const GROUP = 'Remove or pick out a frequency';
@@ -86,7 +88,7 @@ export const harmonicNotchDesigner = defineDesigner({
       what: 'harmonic numbers, 1 = the fundamental',
       type: 'list',
       item: 'whole',
-      count: { max: 64 },
+      count: { max: MAX_HARMONICS },
       noun: 'harmonic',
       presence: 'required',
     },
@@ -162,6 +164,12 @@ export const combDesigner = defineDesigner({
       throw new DesignInputError(
         `fs/f0 = ${fmt(fs / f0)} is not a whole number`,
         `f0 = fs/N for a whole number N >= 2, e.g. ${fmt(fs / Math.max(2, n))} Hz`,
+        'f0',
+      );
+    if (n > MAX_ORDER)
+      throw new DesignInputError(
+        `teeth ${fmt(f0)} Hz apart at fs ${fmt(fs)} Hz make a comb of order ${n}`,
+        `an order of at most ${MAX_ORDER}: f0 = fs/N with N ≤ ${MAX_ORDER}, e.g. ${shortNumber(fs / MAX_ORDER, 12)} Hz or more`,
         'f0',
       );
     const bw = widthHz(spec, f0, f0, `a comb whose teeth are ${fmt(f0)} Hz apart`);

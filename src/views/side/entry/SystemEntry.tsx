@@ -4,6 +4,7 @@
  */
 import { useId, useState, type RefObject } from 'react';
 import type { InputError } from '../../../core/types.ts';
+import { problemPlace } from '../../../core/model/check.ts';
 import { workbenchStore } from '../../../store/useWorkbench.ts';
 import { ExampleChips } from './ExampleChips.tsx';
 import { ParseErrorView } from './ParseErrorView.tsx';
@@ -35,7 +36,18 @@ export function SystemEntry({ text, setText, area }: Props) {
     }
     const { zeros, poles, gain, typed, detail } = r.value;
     const store = workbenchStore.getState();
-    store.loadTyped(zeros, poles, gain, typed, typedAbout(store.design));
+    const refused = store.loadTyped(zeros, poles, gain, typed, typedAbout(store.design));
+    if (refused) {
+      setError({
+        text,
+        error: {
+          message: `This system is not loaded: ${problemPlace(refused)}: ${refused.message}`,
+          expected: refused.expected,
+          position: 0,
+        },
+      });
+      return;
+    }
     setError(null);
     setReadAs(detail);
   };

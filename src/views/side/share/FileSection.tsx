@@ -1,11 +1,10 @@
 /** "Design file": save the design as a JSON file, open one by picker (or by dropping it on the page). */
 import { useRef, useState } from 'react';
-import { writeSharedFile } from '../../../share/designFile.ts';
 import { useWorkbench } from '../../../store/useWorkbench.ts';
-import { downloadBlob } from '../../shared/download.ts';
 import { designFileName } from '../../shared/fileName.ts';
 import { currentShared, openShared } from './openShared.ts';
 import { readDesignBlob } from './readFile.ts';
+import { downloadDesignFile } from './saveDesign.ts';
 
 type Outcome = { tone: 'error' | 'info'; text: string } | null;
 
@@ -15,9 +14,7 @@ export function FileSection() {
   const [outcome, setOutcome] = useState<Outcome>(null);
 
   const save = () => {
-    const text = writeSharedFile(currentShared());
-    const file = designFileName(name);
-    downloadBlob(new Blob([text], { type: 'application/json' }), file);
+    const file = downloadDesignFile(currentShared());
     setOutcome({ tone: 'info', text: `Saved as ${file}.` });
   };
   const open = async (files: FileList | null) => {

@@ -3,7 +3,7 @@
  * already open), with the view settings it carries. The previous design stays reachable by undo.
  */
 import type { SharedDesign } from '../../../share/document.ts';
-import { designJson } from '../../../share/documentCache.ts';
+import { sameDesign } from '../../../core/model/design.ts';
 import { pickSharedView } from '../../../core/model/view.ts';
 import { workbenchStore } from '../../../store/useWorkbench.ts';
 import { defaultView } from '../../../store/view.ts';
@@ -11,7 +11,7 @@ import { defaultView } from '../../../store/view.ts';
 /** Replaces the design (one undo step) and applies the shared view settings; returns whether it changed. */
 export function openShared(shared: SharedDesign): boolean {
   const state = workbenchStore.getState();
-  const changed = designJson(shared.design) !== designJson(state.design);
+  const changed = !sameDesign(shared.design, state.design);
   if (changed) state.replaceDesign(shared.design);
   state.setView({ ...pickSharedView(defaultView), ...shared.view });
   return changed;
