@@ -88,6 +88,12 @@ test('a malformed link shows a message and keeps the previous design', async ({ 
     await expect(page.getByRole('alert').last()).toContainText('could not be opened');
     expect(bitwiseDifference(await readDesign(page), before)).toBeNull();
   }
+  // One character changed in the middle: the check value catches it, where it would open another design.
+  const i = Math.floor(good.length / 2);
+  const altered = good.slice(0, i) + (good[i] === 'Q' ? 'R' : 'Q') + good.slice(i + 1);
+  await page.evaluate((h) => (window.location.hash = h), `#${altered}`);
+  await expect(page.getByRole('alert').last()).toContainText('The link was altered or cut');
+  expect(bitwiseDifference(await readDesign(page), before)).toBeNull();
   expect(await canUndo(page)).toBe(false);
   // On load, too: the restored design stays.
   await page.goto('about:blank');

@@ -123,7 +123,8 @@ function readAnyDesign(args: ParsedArgs): CliDesign {
   if (file !== undefined && isLink(file)) {
     const read = decodeLink(file);
     if (!read.ok) throw new UsageError(`the design link: ${read.message}`);
-    return fromShared(read.value, 'the design link', fsGiven ? fs : null);
+    const d = fromShared(read.value, 'the design link', fsGiven ? fs : null);
+    return { ...d, notes: [...d.notes, ...(read.notes ?? [])] };
   }
   if (file !== undefined) {
     let text: string;

@@ -44,7 +44,7 @@ usage:
                       [--levels 50,150 [--level-search <percent>] [--level-weighting hann|rectangular]] [--json]
   polewright link     <design> [--base URL]       (prints a workbench link; default base http://127.0.0.1:5173/)
 
-<design> is a design file saved from the workbench, a design link (a URL with #pw1.…), or one of:
+<design> is a design file saved from the workbench, a design link (a URL with #pw2.…), or one of:
   --b "1,0,-1" --a "1,-1.6,0.64"      coefficients of z^0, z^-1, z^-2, ...
   --eq "y[n] = 1.6y[n-1] - 0.64y[n-2] + x[n] - x[n-2]"
   --tf "(z^2 - 1)/(z^2 - 1.6z + 0.64)"

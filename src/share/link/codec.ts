@@ -1,10 +1,14 @@
 /**
- * Design links: the whole design in the URL fragment as `pw1.` + base64url of a compact binary form.
- * The prefix names the link format (1), so later formats can still read old links. Decoding is bounded
- * (lengths are checked against the bytes left before anything is allocated) and ends in the same schema
- * check as design files, so a link can never hold what a file could not.
+ * Design links: the whole design in the URL fragment as `pw2.` + base64url of a compact binary form and its
+ * check value. The prefix names the link format, so later formats can still read old links. Decoding checks
+ * the check value first, so a link that was altered or cut is refused as such instead of opening another
+ * design; then it is bounded (lengths are checked against the bytes left before anything is allocated) and
+ * ends in the same schema check as design files, so a link can never hold what a file could not.
  *
- * Link format 1, in order (varint = unsigned LEB128; number = number.ts; string = value.ts):
+ * Link format 2: the payload below, then its CRC-32 (crc32.ts) as 4 bytes, most significant first.
+ * Link format 1 (the first release): the payload alone, with no check value; still read, with a note.
+ *
+ * The payload, in order (varint = unsigned LEB128; number = number.ts; string = value.ts):
  *   varint  flags: 1 name, 2 note, 4 typed coefficients, 8 extra parts
  *   number  sample rate, Hz
  *   byte    gain rule: 0 fixed (+ number k), 1 DC, 2 Nyquist, 3 frequency (+ number Hz), 4 peak
@@ -25,11 +29,23 @@ import { toBase64Url, fromBase64Url } from './base64url.ts';
 import { ByteReader, ByteWriter, LinkFormatError } from './bytes.ts';
 import { numberSize, readNumber, writeNumber } from './number.ts';
 import { circleDelta, circleImFromDelta } from './predict.ts';
+import { crc32 } from './crc32.ts';
 import { readString, readValue, writeString, writeValue } from './value.ts';
 
 /** The link format written today, and the prefix that names it. */
-export const LINK_FORMAT = 1;
+export const LINK_FORMAT = 2;
 export const LINK_PREFIX = `pw${LINK_FORMAT}.`;
+/** The first link format, without a check value: read, never written. */
+export const UNCHECKED_LINK_FORMAT = 1;
+/** Bytes of the check value at the end of a format-2 link. */
+const CHECK_BYTES = 4;
+
+/** The message for a link whose check value does not match: it was changed or cut on its way. */
+export const ALTERED_LINK_MESSAGE =
+  'The link was altered or cut: its check value does not match its contents. Copy the whole link again from where it came.';
+/** The note on a link of the first format, which cannot tell whether it was damaged. */
+export const UNCHECKED_LINK_NOTE =
+  'This link was made by an older Polewright and has no check value, so damage to it cannot be detected: check the design before relying on it.';
 
 const HAS_NAME = 1;
 const HAS_NOTE = 2;
@@ -173,9 +189,25 @@ export function decodePayload(bytes: Uint8Array): Record<string, unknown> {
   return doc;
 }
 
-/** The fragment text (without '#') of a design: `pw1.` and the payload in base64url. */
+/** The payload followed by its CRC-32 (4 bytes, most significant first). */
+export function withCheck(payload: Uint8Array): Uint8Array {
+  const out = new Uint8Array(payload.length + CHECK_BYTES);
+  out.set(payload);
+  new DataView(out.buffer).setUint32(payload.length, crc32(payload), false);
+  return out;
+}
+
+/** The payload of checked bytes, or null when the check value does not match (or is missing). */
+export function checkedPayload(bytes: Uint8Array): Uint8Array | null {
+  if (bytes.length < CHECK_BYTES) return null;
+  const payload = bytes.subarray(0, bytes.length - CHECK_BYTES);
+  const stored = new DataView(bytes.buffer, bytes.byteOffset, bytes.length).getUint32(payload.length, false);
+  return stored === crc32(payload) ? payload : null;
+}
+
+/** The fragment text (without '#') of a design: `pw2.` and the checked payload in base64url. */
 export function encodeLink(shared: SharedDesign): string {
-  return LINK_PREFIX + toBase64Url(encodePayload(toDocument(shared)));
+  return LINK_PREFIX + toBase64Url(withCheck(encodePayload(toDocument(shared))));
 }
 
 /** A full link: the page address with the design in its fragment. */
@@ -204,38 +236,46 @@ export function decodeLink(text: string): ShareResult {
   }
   const frag = linkFragment(text);
   if (frag === null)
-    return { ok: false, message: 'This is not a Polewright design link (it should contain "#pw1.").' };
+    return {
+      ok: false,
+      message: `This is not a Polewright design link (it should contain "#${LINK_PREFIX}").`,
+    };
   const format = Number(LINK_TEXT.exec(frag)![1]);
-  if (format !== LINK_FORMAT) {
+  if (format !== LINK_FORMAT && format !== UNCHECKED_LINK_FORMAT) {
     return format > LINK_FORMAT
       ? {
           ok: false,
-          message: `This link was made by a newer Polewright (link format ${format}); this one reads format ${LINK_FORMAT}.`,
+          message: `This link was made by a newer Polewright (link format ${format}); this one reads formats ${UNCHECKED_LINK_FORMAT} and ${LINK_FORMAT}.`,
         }
       : {
           ok: false,
-          message: `Link format ${format} does not exist; this Polewright reads format ${LINK_FORMAT}.`,
+          message: `Link format ${format} does not exist; this Polewright reads formats ${UNCHECKED_LINK_FORMAT} and ${LINK_FORMAT}.`,
         };
   }
+  const checked = format === LINK_FORMAT;
   const body = frag.slice(frag.indexOf('.') + 1);
   const bytes = fromBase64Url(body);
   if (!bytes)
     return {
       ok: false,
-      message: 'The link is damaged: it has characters outside A–Z, a–z, 0–9, "-" and "_", or a cut-off end.',
+      message: checked
+        ? `${ALTERED_LINK_MESSAGE} (It has characters outside A–Z, a–z, 0–9, "-" and "_", or a cut-off end.)`
+        : 'The link is damaged: it has characters outside A–Z, a–z, 0–9, "-" and "_", or a cut-off end.',
     };
+  const payload = checked ? checkedPayload(bytes) : bytes;
+  if (!payload) return { ok: false, message: ALTERED_LINK_MESSAGE };
   let doc: Record<string, unknown>;
   try {
-    doc = decodePayload(bytes);
+    doc = decodePayload(payload);
   } catch (e) {
     if (e instanceof LinkFormatError) return { ok: false, message: `The link cannot be read: ${e.message}.` };
     throw e;
   }
   const r = readShared(doc);
-  return r.ok
-    ? r
-    : {
-        ok: false,
-        message: r.message.replace('Not a valid Polewright design', 'The link holds an invalid design'),
-      };
+  if (!r.ok)
+    return {
+      ok: false,
+      message: r.message.replace('Not a valid Polewright design', 'The link holds an invalid design'),
+    };
+  return checked ? r : { ...r, notes: [UNCHECKED_LINK_NOTE] };
 }

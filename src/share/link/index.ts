@@ -1,2 +1,11 @@
 /** Design links: encode a design into a URL fragment and read one back. */
-export { LINK_FORMAT, LINK_PREFIX, decodeLink, encodeLink, linkFragment, linkUrl } from './codec.ts';
+export {
+  ALTERED_LINK_MESSAGE,
+  LINK_FORMAT,
+  LINK_PREFIX,
+  UNCHECKED_LINK_NOTE,
+  decodeLink,
+  encodeLink,
+  linkFragment,
+  linkUrl,
+} from './codec.ts';

@@ -5,6 +5,9 @@ import { describe, expect, it } from 'vitest';
 import { runCli } from '../../helpers/cli.ts';
 import { writeSharedFile } from '../../../src/share/designFile.ts';
 import { decodeLink, encodeLink } from '../../../src/share/link/index.ts';
+import { toDocument } from '../../../src/share/document.ts';
+import { toBase64Url } from '../../../src/share/link/base64url.ts';
+import { encodePayload } from '../../../src/share/link/codec.ts';
 import { demoDesign } from '../../../src/store/demo.ts';
 import { bitwiseDifference } from '../../share/arbitraries.ts';
 
@@ -21,7 +24,7 @@ describe('polewright link', () => {
     writeFileSync(file, writeSharedFile(shared));
     const r = await runCli(['link', file]);
     expect(r.code).toBe(0);
-    expect(r.stdout).toMatch(/^http:\/\/127\.0\.0\.1:5173\/#pw1\.[A-Za-z0-9_-]+\n$/);
+    expect(r.stdout).toMatch(/^http:\/\/127\.0\.0\.1:5173\/#pw2\.[A-Za-z0-9_-]+\n$/);
     const back = decodeLink(r.stdout.trim());
     expect(back.ok && bitwiseDifference(back.value, shared)).toBeNull();
   });
@@ -29,7 +32,7 @@ describe('polewright link', () => {
   it('takes --base and a design given as an equation, keeping the typed text', async () => {
     const r = await runCli(['link', '--eq', EQ, '--fs', '1000', '--base', 'https://example.org/pw/']);
     expect(r.code).toBe(0);
-    expect(r.stdout.startsWith('https://example.org/pw/#pw1.')).toBe(true);
+    expect(r.stdout.startsWith('https://example.org/pw/#pw2.')).toBe(true);
     const back = decodeLink(r.stdout.trim());
     expect(back.ok).toBe(true);
     if (!back.ok) return;
@@ -63,9 +66,21 @@ describe('a link as the design of other commands', () => {
     expect((await runCli(['simulate', link, '--samples', '8', '--json'])).code).toBe(0);
   });
 
-  it('a damaged link is a usage error with the reason', async () => {
-    const r = await runCli(['analyze', link.slice(0, 60)]);
-    expect(r.code).toBe(2);
-    expect(r.stderr).toMatch(/the design link: The link (cannot be read|is damaged)/);
+  it('a cut or altered link is a usage error that says so', async () => {
+    const cut = await runCli(['analyze', link.slice(0, 60)]);
+    expect(cut.code).toBe(2);
+    expect(cut.stderr).toMatch(/the design link: The link was altered or cut/);
+    const i = link.length - 10;
+    const flipped = link.slice(0, i) + (link[i] === 'A' ? 'B' : 'A') + link.slice(i + 1);
+    const altered = await runCli(['analyze', flipped]);
+    expect(altered.code).toBe(2);
+    expect(altered.stderr).toMatch(/the design link: The link was altered or cut/);
+  });
+
+  it('opens a link of the first format with a note that damage to it cannot be detected', async () => {
+    const old = 'http://x/#pw1.' + toBase64Url(encodePayload(toDocument({ design: demoDesign(), view: {} })));
+    const r = await runCli(['analyze', old, '--json']);
+    expect(r.code).toBe(0);
+    expect(r.stderr).toMatch(/note: This link was made by an older Polewright and has no check value/);
   });
 });

@@ -1,10 +1,13 @@
+import { crc32 as zlibCrc32 } from 'node:zlib';
 import { describe, expect, it } from 'vitest';
 import { runDesigner } from '../../../src/core/design/index.ts';
 import { DEFAULT_IMPLEMENTATION } from '../../../src/core/fixed/index.ts';
 import { compressRoots } from '../../../src/core/system/index.ts';
-import type { SharedDesign } from '../../../src/share/document.ts';
+import { toDocument, type SharedDesign } from '../../../src/share/document.ts';
 import { toBase64Url, fromBase64Url } from '../../../src/share/link/base64url.ts';
 import { ByteWriter } from '../../../src/share/link/bytes.ts';
+import { encodePayload, withCheck } from '../../../src/share/link/codec.ts';
+import { crc32 } from '../../../src/share/link/crc32.ts';
 import { decodeLink, encodeLink, linkFragment, linkUrl } from '../../../src/share/link/index.ts';
 import { writeNumber } from '../../../src/share/link/number.ts';
 import { demoDesign } from '../../../src/store/demo.ts';
@@ -141,20 +144,34 @@ describe('link text', () => {
 
 describe('hostile links', () => {
   const good = encodeLink({ design: demoDesign(), view: {} });
-  const bytesLink = (bytes: number[]) => 'pw1.' + toBase64Url(Uint8Array.from(bytes));
+  /** A link of hand-made payload bytes with a correct check value, so the checks behind it are reached. */
+  const checked = (bytes: Uint8Array) => 'pw2.' + toBase64Url(withCheck(bytes));
+  const bytesLink = (bytes: number[]) => checked(Uint8Array.from(bytes));
   const message = (text: string) => {
     const r = decodeLink(text);
     expect(r.ok).toBe(false);
     return r.ok ? '' : r.message;
   };
 
-  it('refuses a truncated link', () => {
-    expect(message(good.slice(0, 40))).toMatch(/cut short|damaged/);
+  it('refuses a truncated link as altered or cut', () => {
+    for (const n of [4, 5, 8, 40, good.length - 2])
+      expect(message(good.slice(0, n))).toMatch(/^The link was altered or cut/);
   });
 
   it('refuses a newer link format and an unknown one', () => {
-    expect(message('#pw2.AAAA')).toMatch(/newer Polewright/);
+    expect(message('#pw3.AAAA')).toMatch(/newer Polewright/);
     expect(message('#pw0.AAAA')).toMatch(/does not exist/);
+  });
+
+  it('opens a link of the first format (no check value) with a note saying damage cannot be detected', () => {
+    const old = 'pw1.' + toBase64Url(encodePayload(toDocument({ design: demoDesign(), view: {} })));
+    const r = decodeLink(old);
+    expect(r.ok).toBe(true);
+    if (!r.ok) return;
+    expect(bitwiseDifference(r.value.design, demoDesign())).toBeNull();
+    expect(r.notes).toEqual([expect.stringMatching(/no check value/)]);
+    // A link of today's format has no such note.
+    expect(decodeLink(good)).not.toHaveProperty('notes');
   });
 
   it('refuses degree 10^6 before allocating anything', () => {
@@ -164,7 +181,7 @@ describe('hostile links', () => {
     writeNumber(w, 1);
     w.byte(1);
     w.varint(1_000_000);
-    expect(message('pw1.' + toBase64Url(w.result()))).toMatch(/at most 1024/);
+    expect(message(checked(w.result()))).toMatch(/at most 1024/);
   });
 
   it('refuses a multiplicity beyond the limit and an order beyond 1024', () => {
@@ -176,7 +193,7 @@ describe('hostile links', () => {
     w.varint((100_000_000 - 1) * 4); // one real zero of multiplicity 10^8
     writeNumber(w, 0.5);
     w.varint(0);
-    expect(message('pw1.' + toBase64Url(w.result()))).toMatch(/zeros\.0\.multiplicity/);
+    expect(message(checked(w.result()))).toMatch(/zeros\.0\.multiplicity/);
   });
 
   it('refuses 10^9 time samples through the shared view', () => {
@@ -189,11 +206,13 @@ describe('hostile links', () => {
   });
 
   it('refuses an oversized link before decoding', () => {
-    expect(message('pw1.' + 'A'.repeat(MAX_LINK_CHARS))).toMatch(new RegExp(`at most ${MAX_LINK_CHARS}`));
+    expect(message('pw2.' + 'A'.repeat(MAX_LINK_CHARS))).toMatch(new RegExp(`at most ${MAX_LINK_CHARS}`));
   });
 
   it('refuses trailing bytes, unknown header bits and non-finite numbers', () => {
-    expect(message(good + 'AAAA')).toMatch(/unexpected bytes/);
+    expect(message(good + 'AAAA')).toMatch(/altered or cut/);
+    const payload = encodePayload(toDocument({ design: demoDesign(), view: {} }));
+    expect(message(checked(Uint8Array.from([...payload, 0, 0, 0])))).toMatch(/unexpected bytes/);
     expect(message(bytesLink([0x40]))).toMatch(/does not know/);
     const w = new ByteWriter();
     w.varint(0);
@@ -202,7 +221,7 @@ describe('hostile links', () => {
     w.byte(1);
     w.varint(0);
     w.varint(0);
-    expect(message('pw1.' + toBase64Url(w.result()))).toMatch(/sampleRate/);
+    expect(message(checked(w.result()))).toMatch(/sampleRate/);
   });
 
   it('keeps a field called __proto__ a plain field and refuses it', () => {
@@ -228,7 +247,20 @@ describe('hostile links', () => {
     w.varint(1);
     lit('polluted');
     w.byte(0xf2);
-    expect(message('pw1.' + toBase64Url(w.result()))).toMatch(/designer/);
+    expect(message(checked(w.result()))).toMatch(/designer/);
     expect(({} as Record<string, unknown>).polluted).toBeUndefined();
+  });
+});
+
+describe('CRC-32', () => {
+  it('matches the check value of the algorithm and zlib on random bytes', () => {
+    // The standard check value of CRC-32 (ISO-HDLC) for the ASCII bytes "123456789", from memory.
+    expect(crc32(new TextEncoder().encode('123456789'))).toBe(0xcbf43926);
+    expect(crc32(new Uint8Array(0))).toBe(0);
+    let seed = 7;
+    for (let n = 1; n < 600; n += 37) {
+      const bytes = Uint8Array.from({ length: n }, () => (seed = (seed * 1103515245 + 12345) >>> 0) >>> 24);
+      expect(crc32(bytes)).toBe(zlibCrc32(bytes)); // node:zlib crc32 (Node ≥ 20.15), an outside reference
+    }
   });
 });
