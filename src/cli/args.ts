@@ -103,3 +103,13 @@ export function sineInputHz(name: string, highest: number): number | null {
   }
   return r.value;
 }
+
+/** A rate flag in Hz: a number above 0 and at most `max` Hz (a unit may follow it), or the default when absent. */
+export function rateFlag(args: ParsedArgs, name: string, fallback: number, max: number): number {
+  const raw = args.flags.get(name);
+  if (raw === undefined) return fallback;
+  const v = readFlagNumber(name, raw, 'a rate in Hz', 'Hz');
+  if (!(v > 0 && v <= max))
+    throw new UsageError(`--${name} must be a rate above 0 and at most ${max} Hz; got "${raw}".`);
+  return v;
+}

@@ -1,10 +1,10 @@
 /** Resolves the design a command works on: a design file, a design link, or coefficients/equation/H(z) given as flags. */
-import { existsSync, readFileSync } from 'node:fs';
+import { existsSync, readFileSync, statSync } from 'node:fs';
 import type { TransferFunction, Zpk } from '../core/types.ts';
 import { parseCoefficients, parseDifferenceEquation, parseSystem } from '../core/parse/index.ts';
 import { tfToZpk, compressRoots } from '../core/system/index.ts';
 import { resolveGain } from '../core/gainRule.ts';
-import { readSharedFile } from '../share/designFile.ts';
+import { MAX_FILE_BYTES, readSharedFileBytes, tooLarge } from '../share/designFile.ts';
 import type { SharedDesign } from '../share/document.ts';
 import { decodeLink, linkFragment } from '../share/link/index.ts';
 import { UsageError, numberFlag, type ParsedArgs } from './args.ts';
@@ -25,6 +25,26 @@ export interface CliDesign {
   notes: string[];
   /** The whole design as the workbench holds it (designer, mask, implementation, view), for `link`. */
   shared?: SharedDesign;
+}
+
+/** The bytes of a design file, its size checked before anything is read (a 200 MB file costs nothing). */
+function readFileBounded(file: string): Uint8Array {
+  const why = (e: unknown) => (e as NodeJS.ErrnoException).code ?? (e as Error).message;
+  let size: number;
+  try {
+    const st = statSync(file);
+    if (!st.isFile()) throw new UsageError(`${file} is not a file (a design file, or a link with #pw2.…).`);
+    size = st.size;
+  } catch (e) {
+    if (e instanceof UsageError) throw e;
+    throw new UsageError(`Cannot read the design file ${file}: ${why(e)}`);
+  }
+  if (size > MAX_FILE_BYTES) throw new UsageError(`${file}: ${tooLarge(size)}`);
+  try {
+    return readFileSync(file);
+  } catch (e) {
+    throw new UsageError(`Cannot read the design file ${file}: ${why(e)}`);
+  }
 }
 
 /** Whether a positional argument is a design link (a URL or fragment with #pw…) rather than a file. */
@@ -127,15 +147,7 @@ function readAnyDesign(args: ParsedArgs): CliDesign {
     return { ...d, notes: [...d.notes, ...(read.notes ?? [])] };
   }
   if (file !== undefined) {
-    let text: string;
-    try {
-      text = readFileSync(file, 'utf8');
-    } catch (e) {
-      throw new UsageError(
-        `Cannot read the design file ${file}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}`,
-      );
-    }
-    const read = readSharedFile(text);
+    const read = readSharedFileBytes(readFileBounded(file));
     if (!read.ok) throw new UsageError(`${file}: ${read.message}`);
     return fromShared(read.value, file, fsGiven ? fs : null);
   }

@@ -1,5 +1,6 @@
 /** The `polewright` command line: a thin front end on the engine. */
 import { UsageError } from './args.ts';
+import { CliFailure } from './output.ts';
 import { runAnalyze } from './commands/analyze.ts';
 import { runLink } from './commands/link.ts';
 import { runExport } from './commands/export.ts';
@@ -51,7 +52,11 @@ usage:
 plus --fs <Hz> (sample rate; default 1, or the file's).
 `;
 
-/** Runs the command line; returns the process exit code (0 ok, 1 failed, 2 usage error). */
+/**
+ * Runs the command line; returns the process exit code: 0 ok, 2 for a usage or input error (UsageError),
+ * 1 when the work could not be done for another reason (CliFailure: a file that cannot be written) and for
+ * anything unexpected, which is a bug and says "internal error".
+ */
 export async function main(argv: string[], io: CliIo): Promise<number> {
   const [command, ...rest] = argv;
   if (command === undefined || command === '--help' || command === '-h' || command === 'help') {
@@ -69,6 +74,10 @@ export async function main(argv: string[], io: CliIo): Promise<number> {
     if (e instanceof UsageError) {
       io.stderr(`polewright ${command}: ${e.message}\n`);
       return 2;
+    }
+    if (e instanceof CliFailure) {
+      io.stderr(`polewright ${command}: ${e.message}\n`);
+      return 1;
     }
     io.stderr(`polewright ${command}: internal error: ${(e as Error).message}\n`);
     return 1;

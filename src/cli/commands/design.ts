@@ -4,7 +4,6 @@
  * result in the shape `analyze` prints (plus the designer, its note, the estimated order and the
  * requirement's margins and mask verdict), and can write a design file.
  */
-import { writeFileSync } from 'node:fs';
 import {
   DESIGNER_VARIANTS,
   isRequired,
@@ -25,6 +24,7 @@ import { UsageError, parseArgs, readFlagList, readFlagNumber, type ParsedArgs } 
 import type { CliDesign } from '../designInput.ts';
 import { toJson } from '../json.ts';
 import type { CliIo } from '../main.ts';
+import { writeFileAtomic } from '../output.ts';
 import { analysis, systemLines } from './analyze.ts';
 import { shortNumber } from '../../core/shortNumber.ts';
 
@@ -251,14 +251,7 @@ export function runDesign(argv: string[], io: CliIo): number {
   if (problem) throw new UsageError(`the design cannot be kept: ${describeProblem(problem)}.`);
   const file = args.flags.get('out');
   if (file !== undefined) {
-    try {
-      writeFileSync(file, writeDesignFile(design));
-    } catch (e) {
-      io.stderr(
-        `polewright design: cannot write ${file}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}\n`,
-      );
-      return 1;
-    }
+    writeFileAtomic(file, writeDesignFile(design));
     io.stderr(`note: wrote ${file}\n`);
   }
   if (args.switches.has('json')) {

@@ -4,7 +4,6 @@
  * bounded memory; without it the output samples are printed.
  */
 import { readFileSync } from 'node:fs';
-import { resolve } from 'node:path';
 import { filterSections } from '../../core/time/filter.ts';
 import { makeImpulse, makeSine, makeStep } from '../../core/time/inputs.ts';
 import { zpkToSections } from '../../core/system/index.ts';
@@ -17,13 +16,15 @@ import {
   writeWav,
   type SampleFormat,
 } from '../../core/signal/index.ts';
-import { UsageError, intFlag, numberFlag, parseArgs, sineInputHz, type ParsedArgs } from '../args.ts';
+import { UsageError, intFlag, parseArgs, rateFlag, sineInputHz, type ParsedArgs } from '../args.ts';
 import { DESIGN_FLAGS, readDesign, type CliDesign } from '../designInput.ts';
 import { toJson } from '../json.ts';
 import type { CliIo } from '../main.ts';
-import { openForWriting } from '../stream/fileChunks.ts';
+import { refuseOverwritingInputs, writeAtomically, writeFileAtomic } from '../output.ts';
+import { linkFragment } from '../../share/link/index.ts';
+import { MAX_SAMPLE_RATE } from '../../core/model/limits.ts';
 import { filterStream, type StreamRunSummary } from '../stream/filterFile.ts';
-import { CsvFileSink, WavFileSink } from '../stream/sinks.ts';
+import { CsvFileSink, WavFileSink, wavRate } from '../stream/sinks.ts';
 import { CsvFileSource, WavFileSource, isWavPath } from '../stream/sources.ts';
 import { FIXED_FLAGS, rejectFixedFlags, runSimulateFixed } from './simulateFixed.ts';
 import { hzToOmega } from '../../core/units.ts';
@@ -156,13 +157,9 @@ async function streamToFile(
   input: string,
   output: string,
 ): Promise<number> {
-  if (resolve(input) === resolve(output)) {
-    throw new UsageError(`--output ${output} is the input file; writing would destroy it while it is read.`);
-  }
+  refuseOverwritingInputs(output, '--output', [input, designFileOf(args)]);
   const channel = channelFlag(args);
-  const inputRate = args.flags.has('input-rate') ? numberFlag(args, 'input-rate', d.sampleRate, 'Hz') : null;
-  if (inputRate !== null && !(inputRate > 0))
-    throw new UsageError(`--input-rate must be a positive rate in Hz.`);
+  const inputRate = inputRateFlag(args);
   const wavIn = isWavPath(input);
   if (!wavIn && channel !== undefined)
     throw new UsageError('--channel applies to WAV input; a CSV input has one value column.');
@@ -179,9 +176,10 @@ async function streamToFile(
   const source = wavIn ? new WavFileSource(input, channel) : new CsvFileSource(input);
   const fallbackRate = inputRate ?? d.sampleRate;
   let format: SampleFormat = chosen ?? 'f32';
-  const makeSink = async (rate: number) => {
-    if (!wavOut) return CsvFileSink.create(output, rate);
-    return WavFileSink.create(output, format);
+  const makeSink = (path: string) => async (rate: number) => {
+    if (!wavOut) return CsvFileSink.create(path, rate);
+    wavRate(rate); // fails early when the rate known so far cannot be stored
+    return WavFileSink.create(path, format);
   };
   // A WAV input's own format is the default output format; it is known after the header, so peek at it.
   if (wavIn && chosen === null) format = (await wavFormatOf(input)) ?? format;
@@ -190,7 +188,10 @@ async function streamToFile(
     outputFormat: wavOut ? format : ('csv' as const),
     ...(maxFrames ? { maxFrames } : {}),
   };
-  const summary: StreamRunSummary = await filterStream(source, makeSink, sections, opts);
+  // Written beside --output and renamed over it only when the whole run succeeded.
+  const summary: StreamRunSummary = await writeAtomically(output, (path) =>
+    filterStream(source, makeSink(path), sections, opts),
+  );
   for (const note of summary.source.notes) io.stderr(`note: ${note}\n`);
   const rate = summary.source.sampleRate ?? fallbackRate;
   const mismatch = rateNote(d, args, summary.source.sampleRate);
@@ -223,28 +224,32 @@ async function wavFormatOf(path: string): Promise<SampleFormat | null> {
   return source.info?.format ?? null;
 }
 
-/** Writes an in-memory output (a generated input's response) to --output. */
-async function writeInMemory(
-  args: ParsedArgs,
-  y: Float64Array,
-  rate: number,
-  output: string,
-  io: CliIo,
-): Promise<void> {
-  const handle = await openForWriting(output);
-  try {
-    if (isWavPath(output)) {
-      const format = outputFormatFlag(args) ?? 'f32';
-      const r = writeWav({ format, sampleRate: Math.round(rate), channels: [y] });
-      await handle.write(r.bytes);
-      const warning = clipWarning({ clipped: r.clipped, frames: y.length, channels: 1 }, format);
-      if (warning) io.stderr(warning);
-    } else {
-      await handle.write(writeCsvSignal([y], rate, { delimiter: /\.(tsv|tab)$/i.test(output) ? '\t' : ',' }));
-    }
-  } finally {
-    await handle.close();
+/** Writes an in-memory output (a generated input's response) to --output, all or nothing. */
+function writeInMemory(args: ParsedArgs, y: Float64Array, rate: number, output: string, io: CliIo): void {
+  refuseOverwritingInputs(output, '--output', [designFileOf(args)]);
+  if (isWavPath(output)) {
+    const format = outputFormatFlag(args) ?? 'f32';
+    const r = writeWav({ format, sampleRate: wavRate(rate), channels: [y] });
+    writeFileAtomic(output, r.bytes);
+    const warning = clipWarning({ clipped: r.clipped, frames: y.length, channels: 1 }, format);
+    if (warning) io.stderr(warning);
+  } else {
+    writeFileAtomic(
+      output,
+      writeCsvSignal([y], rate, { delimiter: /\.(tsv|tab)$/i.test(output) ? '\t' : ',' }),
+    );
   }
+}
+
+/** The design file named on the command line (not a link), which an output must not overwrite. */
+function designFileOf(args: ParsedArgs): string | undefined {
+  const file = args.positionals[0];
+  return file !== undefined && !linkFragment(file) ? file : undefined;
+}
+
+/** --input-rate in Hz when given: above 0 and at most the largest sample rate a design may have. */
+function inputRateFlag(args: ParsedArgs): number | null {
+  return args.flags.has('input-rate') ? rateFlag(args, 'input-rate', 0, MAX_SAMPLE_RATE) : null;
 }
 
 /** Runs `simulate`; resolves to the exit code. */
@@ -264,19 +269,14 @@ export async function runSimulate(argv: string[], io: CliIo): Promise<number> {
   if (output === undefined && args.flags.has('output-format'))
     throw new UsageError('--output-format needs --output <file.wav>.');
   const n = args.flags.has('samples') ? intFlag(args, 'samples', 64, 1, MAX_SIMULATE_SAMPLES) : null;
-  const x = inputSignal(
-    spec,
-    n,
-    args.flags.has('input-rate') ? numberFlag(args, 'input-rate', d.sampleRate, 'Hz') : d.sampleRate,
-    channelFlag(args),
-  );
+  const x = inputSignal(spec, n, inputRateFlag(args) ?? d.sampleRate, channelFlag(args));
   for (const note of x.notes) io.stderr(`note: ${note}\n`);
   const mismatch = rateNote(d, args, x.sampleRate);
   if (mismatch) io.stderr(`note: ${mismatch}\n`);
   const y = filterSections(zpkToSections(d.zpk), x.samples);
   const rate = x.sampleRate ?? d.sampleRate;
   if (output !== undefined) {
-    await writeInMemory(args, y, rate, output, io);
+    writeInMemory(args, y, rate, output, io);
     if (args.switches.has('json'))
       io.stdout(toJson({ output, sampleRate: rate, frames: y.length, channels: 1 }));
     return 0;

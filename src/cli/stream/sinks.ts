@@ -12,6 +12,23 @@ import {
 } from '../../core/signal/index.ts';
 import type { SampleFormat } from '../../core/signal/index.ts';
 import { openForWriting } from './fileChunks.ts';
+import { UsageError } from '../args.ts';
+
+/** Largest sample rate a WAV header stores: an unsigned 32-bit number of whole hertz. */
+export const MAX_WAV_RATE = 0xffff_ffff;
+/** Largest data a WAV (RIFF) file holds, bytes: its sizes are 32-bit, less the header. */
+export const MAX_WAV_DATA_BYTES = 0xffff_ffff - 64;
+
+/** The whole-hertz rate a WAV file stores for a rate in Hz, or a usage error when it cannot store it. */
+export function wavRate(rate: number): number {
+  const r = Math.round(rate);
+  if (!(r >= 1 && r <= MAX_WAV_RATE))
+    throw new UsageError(
+      `a WAV file stores a sample rate of 1 to ${MAX_WAV_RATE} whole hertz; this output's rate is ${rate} Hz. ` +
+        'Write CSV instead (--output <file.csv>), or give the rate with --input-rate.',
+    );
+  return r;
+}
 
 /** A destination for blocks of channels. */
 export interface SignalSink {
@@ -47,6 +64,10 @@ export class WavFileSink implements SignalSink {
       this.position = placeholder.length;
     }
     const { bytes, clipped } = encodeWavBlock(channels, this.format);
+    if (this.position + bytes.length > MAX_WAV_DATA_BYTES)
+      throw new UsageError(
+        `the output passes the 4 GiB a WAV file can hold; write CSV, a smaller --output-format, or fewer --samples.`,
+      );
     this.clipped += clipped;
     this.frames += channels[0]?.length ?? 0;
     await this.handle.write(bytes, 0, bytes.length, this.position);
@@ -59,7 +80,7 @@ export class WavFileSink implements SignalSink {
         this.channelCount = 1;
         this.position = this.header(1).length;
       }
-      const header = this.header(Math.round(sampleRate));
+      const header = this.header(wavRate(sampleRate));
       await this.handle.write(header, 0, header.length, 0);
       if ((this.position - header.length) & 1)
         await this.handle.write(new Uint8Array(1), 0, 1, this.position);
