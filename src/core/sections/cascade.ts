@@ -135,7 +135,12 @@ export function buildCascade(zpk: Zpk, options: CascadeOptions = {}): Cascade {
     notes.push('the gain is 0; the sections are not scaled');
   const scaled = distributed.map((s, i) => withNumeratorTimes(s, scales[i]!));
   const outputGain = 1 / scales.reduce((p, s) => p * s, 1);
-  const after = partialCascadeNorms(scaled).norms;
+  // Scaling multiplies partial cascade i by the product of the first i scales, and every norm with it.
+  let product = 1;
+  const after = norms.map((n, i) => {
+    product *= Math.abs(scales[i]!);
+    return { l1: n.l1 * product, l2: n.l2 * product, linf: n.linf * product };
+  });
   const sections = scaled.map((s, i): CascadeSection => {
     const z = sectionsToZpk([s]);
     return {

@@ -5,8 +5,8 @@
  */
 import type { Section } from '../types.ts';
 import { sectionsToZpk } from '../system/index.ts';
-import { peakMagnitude } from './peak.ts';
-import { createSectionFilter, runSectionFilter } from '../signal/sectionFilter.ts';
+import { partialCascadePeaks } from './peak.ts';
+import { createSectionFilter } from '../signal/sectionFilter.ts';
 
 /**
  * The impulse response is summed until the slowest pole has decayed by this factor (r^n ≤ 1e-13), so the
@@ -24,21 +24,54 @@ export interface CascadeNorms {
   linf: number;
 }
 
-/** Largest pole radius of a cascade (0 for no poles). */
+/** Largest pole radius of a cascade (0 for no poles), section by section. */
 export function largestPoleRadius(sections: readonly Section[]): number {
   let r = 0;
-  for (const p of sectionsToZpk(sections).poles) r = Math.max(r, Math.hypot(p.re, p.im));
+  for (const s of sections) for (const p of sectionsToZpk([s]).poles) r = Math.max(r, Math.hypot(p.re, p.im));
   return r;
 }
 
-/** Number of impulse-response samples needed for the tail to fall below NORM_TAIL_DECAY, and whether it can. */
-export function normLength(radius: number): { samples: number; converged: boolean } {
+/**
+ * Number of impulse-response samples needed for the tail to fall below NORM_TAIL_DECAY, and whether it can.
+ * The numerators of `sections` sections delay and lengthen the response by up to two samples each (an FIR
+ * cascade of N sections has 2N + 1 taps), so they are added to the pole's decay time.
+ */
+export function normLength(radius: number, sections = 1): { samples: number; converged: boolean } {
   if (radius >= 1) return { samples: MAX_NORM_SAMPLES, converged: false };
-  if (radius === 0) return { samples: 8, converged: true };
-  const need = Math.ceil(Math.log(NORM_TAIL_DECAY) / Math.log(radius)) + 8;
+  const fir = 2 * sections + 1;
+  if (radius === 0) return { samples: fir + 8, converged: true };
+  const need = Math.ceil(Math.log(NORM_TAIL_DECAY) / Math.log(radius)) + fir + 8;
   return need > MAX_NORM_SAMPLES
     ? { samples: MAX_NORM_SAMPLES, converged: false }
     : { samples: need, converged: true };
+}
+
+/**
+ * One pass of a section over the running impulse response h, in place, summing |y| and y² as it goes: the
+ * transposed direct form II step of signal/sectionFilter.ts (the same operations in the same order, so the
+ * same numbers — a test holds the two together), fused with the sums so the long response is read once.
+ */
+export function passWithSums(section: Section, h: Float64Array): { l1: number; energy: number } {
+  const c = createSectionFilter([section]).coefficients;
+  const b0 = c[0]!;
+  const b1 = c[1]!;
+  const b2 = c[2]!;
+  const a1 = c[3]!;
+  const a2 = c[4]!;
+  let z0 = 0;
+  let z1 = 0;
+  let l1 = 0;
+  let energy = 0;
+  for (let i = 0; i < h.length; i++) {
+    const xi = h[i]!;
+    const yi = b0 * xi + z0;
+    z0 = b1 * xi + z1 - a1 * yi;
+    z1 = b2 * xi - a2 * yi;
+    h[i] = yi;
+    l1 += Math.abs(yi);
+    energy += yi * yi;
+  }
+  return { l1, energy };
 }
 
 /**
@@ -51,24 +84,18 @@ export function partialCascadeNorms(sections: readonly Section[]): {
   converged: boolean;
 } {
   const radius = largestPoleRadius(sections);
-  const { samples, converged } = normLength(radius);
+  const { samples, converged } = normLength(radius, sections.length);
+  const peaks = partialCascadePeaks(sections);
   const h = new Float64Array(samples);
   h[0] = 1;
   const norms: CascadeNorms[] = [];
+  const unstable = radius > 1;
   for (let s = 0; s < sections.length; s++) {
-    // One pass of this section over the running impulse response, in place.
-    runSectionFilter(createSectionFilter([sections[s]!]), h, h);
-    let l1 = 0;
-    let e = 0;
-    for (let n = 0; n < samples; n++) {
-      l1 += Math.abs(h[n]!);
-      e += h[n]! * h[n]!;
-    }
-    const unstable = radius > 1;
+    const { l1, energy } = passWithSums(sections[s]!, h);
     norms.push({
       l1: unstable ? Infinity : l1,
-      l2: unstable ? Infinity : Math.sqrt(e),
-      linf: peakMagnitude(sections.slice(0, s + 1)).peak,
+      l2: unstable ? Infinity : Math.sqrt(energy),
+      linf: peaks[s]!.peak,
     });
   }
   return { norms, converged };

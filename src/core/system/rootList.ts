@@ -30,19 +30,51 @@ export function expandRoots(roots: readonly Root[]): Root[] {
 export function compressRoots(roots: readonly Root[], tolerance = ROOT_MERGE_TOLERANCE): Root[] {
   const n = roots.length;
   const used = new Uint8Array(n);
+  // Roots sorted by real part: a seed's neighbours lie in a window of real parts ±limit, found by bisection,
+  // so a list of n roots costs O(n log n) instead of comparing every pair. skip[k] leads past used entries.
+  const order = Array.from({ length: n }, (_, i) => i).sort((a, b) => roots[a]!.re - roots[b]!.re || a - b);
+  const rank = new Int32Array(n);
+  order.forEach((i, k) => (rank[i] = k));
+  const skip = Int32Array.from({ length: n + 1 }, (_, k) => k);
+  const live = (k: number): number => {
+    let r = k;
+    while (skip[r] !== r) r = skip[r]!;
+    while (skip[k] !== r) [k, skip[k]] = [skip[k]!, r];
+    return r;
+  };
+  const markUsed = (i: number) => {
+    used[i] = 1;
+    skip[rank[i]!] = rank[i]! + 1;
+  };
   const out: Root[] = [];
   for (let i = 0; i < n; i++) {
     if (used[i]) continue;
-    used[i] = 1;
+    markUsed(i);
     const seed = roots[i]!;
     const limit = tolerance * Math.max(1, Math.hypot(seed.re, seed.im));
+    // The window is a little wider than ±limit, so rounding in its bounds never hides a neighbour.
+    const reach = 2 * limit + Math.abs(seed.re) * 1e-15 + 1e-300;
+    let lo = 0;
+    let hi = n;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (roots[order[mid]!]!.re < seed.re - reach) lo = mid + 1;
+      else hi = mid;
+    }
+    const merged: number[] = [];
+    for (let k = live(lo); k < n && roots[order[k]!]!.re <= seed.re + reach; k = live(k + 1)) {
+      const j = order[k]!;
+      const r = roots[j]!;
+      if (Math.hypot(r.re - seed.re, r.im - seed.im) <= limit) merged.push(j);
+    }
+    // Summed in list order, as a pairwise scan would, so the mean comes out the same to the bit.
+    merged.sort((a, b) => a - b);
     let m = seed.multiplicity;
     let sr = seed.re * m;
     let si = seed.im * m;
-    for (let j = i + 1; j < n; j++) {
+    for (const j of merged) {
       const r = roots[j]!;
-      if (used[j] || Math.hypot(r.re - seed.re, r.im - seed.im) > limit) continue;
-      used[j] = 1;
+      markUsed(j);
       m += r.multiplicity;
       sr += r.re * r.multiplicity;
       si += r.im * r.multiplicity;

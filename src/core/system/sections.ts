@@ -10,6 +10,7 @@
  */
 import type { Root, Section, Zpk } from '../types.ts';
 import { rootCount } from './rootList.ts';
+import { NearestPoints } from './nearest.ts';
 
 /** How sections are formed when the order is odd: one extra pole/zero pair at the origin, or a first-order section. */
 export type SectionPairing = 'nearest' | 'keep-odd';
@@ -38,30 +39,6 @@ function items(roots: readonly Root[], extraReal: Item[]): Item[] {
 const zeroItems = (n: number, delay: boolean): Item[] =>
   Array.from({ length: n }, () => ({ re: 0, im: 0, delay }));
 
-/** Index of the pole closest to the unit circle (first on ties), among those passing the filter. */
-function worst(list: readonly Item[], only?: (x: Item) => boolean): number {
-  let best = -1;
-  let bestD = Infinity;
-  list.forEach((x, i) => {
-    if (only && !only(x)) return;
-    const d = Math.abs(1 - Math.hypot(x.re, x.im));
-    if (d < bestD) [best, bestD] = [i, d];
-  });
-  return best;
-}
-
-/** Index of the item nearest to `to` among real, complex or any items (first on ties); -1 if none. */
-function nearest(list: readonly Item[], to: Item, which: 'real' | 'complex' | 'any'): number {
-  let best = -1;
-  let bestD = Infinity;
-  list.forEach((x, i) => {
-    if ((which === 'real' && x.im !== 0) || (which === 'complex' && x.im === 0)) return;
-    const d = Math.hypot(x.re - to.re, x.im - to.im);
-    if (d < bestD) [best, bestD] = [i, d];
-  });
-  return best;
-}
-
 /** Monic polynomial of up to two roots (a complex root brings its conjugate), right-aligned in three slots. */
 function quadratic(roots: readonly Item[]): [number, number, number] {
   let p = [1];
@@ -74,10 +51,6 @@ function quadratic(roots: readonly Item[]): [number, number, number] {
   }
   while (p.length < 3) p.unshift(0);
   return [p[0]!, p[1]!, p[2]!];
-}
-
-function take(list: Item[], i: number): Item {
-  return list.splice(i, 1)[0]!;
 }
 
 /**
@@ -133,28 +106,85 @@ export function zpkToSections(zpk: Zpk, opts: { pairing?: SectionPairing } = {})
   return sections;
 }
 
-/** The scipy zpk2sos loop: consumes z and p, filling sections from the last one backwards. */
+/** Distance from the unit circle, by which poles are taken (closest first). */
+const circleDistance = (x: Item) => Math.abs(1 - Math.hypot(x.re, x.im));
+
+/**
+ * Poles in the order the pairing takes them — closest to the unit circle first, list order on ties — sorted
+ * once, with the real ones in the same order for the partner of a real pole.
+ */
+class PoleQueue {
+  private readonly order: number[];
+  private readonly realOrder: number[];
+  private readonly used: Uint8Array;
+  private at = 0;
+  private realAt = 0;
+  realLeft: number;
+  left: number;
+
+  constructor(private readonly p: readonly Item[]) {
+    const d = p.map(circleDistance);
+    this.order = p.map((_, i) => i).sort((a, b) => d[a]! - d[b]! || a - b);
+    this.realOrder = this.order.filter((i) => p[i]!.im === 0);
+    this.used = new Uint8Array(p.length);
+    this.realLeft = this.realOrder.length;
+    this.left = p.length;
+  }
+
+  private mark(i: number): Item {
+    this.used[i] = 1;
+    this.left--;
+    if (this.p[i]!.im === 0) this.realLeft--;
+    return this.p[i]!;
+  }
+
+  /** The remaining pole closest to the unit circle. */
+  takeWorst(): Item {
+    while (this.used[this.order[this.at]!]) this.at++;
+    return this.mark(this.order[this.at]!);
+  }
+
+  /** The remaining real pole closest to the unit circle. */
+  takeWorstReal(): Item {
+    while (this.used[this.realOrder[this.realAt]!]) this.realAt++;
+    const i = this.realOrder[this.realAt];
+    if (i === undefined) throw new RangeError('no real pole left');
+    return this.mark(i);
+  }
+}
+
+/**
+ * The scipy zpk2sos loop: consumes z and p, filling sections from the last one backwards. The poles are
+ * sorted once by their distance from the circle and the zeros searched by real part (nearest.ts), so the
+ * pairing costs O(n log n) for n roots rather than a scan of every remaining root per section.
+ */
 function fill(sections: Section[], z: Item[], p: Item[], found: (i: number) => number): void {
-  const count = (list: readonly Item[]) => list.filter((x) => x.im === 0).length;
-  const isReal = (x: Item) => x.im === 0;
+  const poles = new PoleQueue(p);
+  const zeros = new NearestPoints(z);
+  let zLeft = z.length;
+  const takeZero = (i: number): Item => {
+    zeros.remove(found(i));
+    zLeft--;
+    return z[i]!;
+  };
   const origin: Item = { re: 0, im: 0, delay: false };
   for (let si = sections.length - 1; si >= 0; si--) {
-    const p1 = take(p, worst(p));
+    const p1 = poles.takeWorst();
     let zs: Item[];
     let ps: Item[];
-    if (p1.im === 0 && count(p) === 0) {
-      zs = [take(z, found(nearest(z, p1, 'real'))), origin];
+    if (p1.im === 0 && poles.realLeft === 0) {
+      zs = [takeZero(zeros.nearest(p1.re, p1.im, 'real')), origin];
       ps = [p1, origin];
-    } else if (p.length + 1 === z.length && p1.im !== 0 && count(p) === 1 && count(z) === 1) {
-      zs = [take(z, found(nearest(z, p1, 'complex')))];
+    } else if (poles.left + 1 === zLeft && p1.im !== 0 && poles.realLeft === 1 && zeros.count('real') === 1) {
+      zs = [takeZero(zeros.nearest(p1.re, p1.im, 'complex'))];
       ps = [p1];
     } else {
-      ps = p1.im === 0 ? [p1, take(p, worst(p, isReal))] : [p1];
+      ps = p1.im === 0 ? [p1, poles.takeWorstReal()] : [p1];
       zs = [];
-      if (z.length > 0) {
-        const z1 = take(z, nearest(z, p1, 'any'));
+      if (zLeft > 0) {
+        const z1 = takeZero(zeros.nearest(p1.re, p1.im, 'any'));
         zs.push(z1);
-        if (z1.im === 0 && z.length > 0) zs.push(take(z, found(nearest(z, p1, 'real'))));
+        if (z1.im === 0 && zLeft > 0) zs.push(takeZero(zeros.nearest(p1.re, p1.im, 'real')));
       }
     }
     const b = quadratic(zs);

@@ -1,6 +1,8 @@
 import { describe, it, expect } from 'vitest';
 import type { Section, Zpk } from '../../../src/core/types.ts';
 import { buildCascade, partialCascadeNorms, peakMagnitude } from '../../../src/core/sections/index.ts';
+import { passWithSums } from '../../../src/core/sections/norms.ts';
+import { createSectionFilter, runSectionFilter } from '../../../src/core/signal/sectionFilter.ts';
 import { responseSections, responseZpk, frequencyGrid } from '../../../src/core/response/index.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 import { loadFixture } from '../../helpers/fixtures.ts';
@@ -147,5 +149,48 @@ describe('buildCascade', () => {
     const c = buildCascade(zpk, { scaling: 'l1' });
     expect(c.sections[0]!.scale).toBe(1);
     expect(c.notes.join(' ')).toMatch(/not scaled/);
+  });
+});
+
+describe('partial norms of long cascades', () => {
+  it('an FIR cascade of 10 sections (1 + z⁻¹)¹⁰ has L1 = 2¹⁰ and L2² = C(20, 10)', () => {
+    // common practice: Σ C(10,k) = 2^10 and Σ C(10,k)² = C(20,10) = 184756 (Vandermonde's identity)
+    const s: Section = [1, 1, 0, 1, 0, 0];
+    const { norms, converged } = partialCascadeNorms(Array.from({ length: 10 }, () => s));
+    expect(converged).toBe(true);
+    norms.forEach((n, i) => expectClose(n.l1, 2 ** (i + 1), { rel: 1e-15 }, `l1[${i}]`));
+    expectClose(norms[9]!.l2, Math.sqrt(184756), { rel: 1e-14 }, 'l2');
+    expectClose(norms[9]!.linf, 1024, { rel: 1e-12 }, 'linf at DC');
+  });
+
+  it('every partial peak is at least the peak found on the partial cascade alone, and close to it', () => {
+    const c = cases.find((x) => x.name === 'ellip6_lowpass')!;
+    const sections = asSections(c.sos);
+    const { norms } = partialCascadeNorms(sections);
+    sections.forEach((_, i) => {
+      const alone = peakMagnitude(sections.slice(0, i + 1)).peak;
+      expect(norms[i]!.linf).toBeGreaterThanOrEqual(alone * (1 - 1e-12));
+      expectClose(norms[i]!.linf, alone, { rel: 1e-9 }, `linf[${i}]`);
+    });
+  });
+});
+
+describe('passWithSums', () => {
+  it('filters exactly as the cascade kernel does (bit for bit) and sums |y| and y² of the result', () => {
+    const sections: Section[] = [
+      [0.3, -0.2, 0.7, 1.1, -1.7, 0.81],
+      [1, 2, 1, 1, -0.5, 0.25],
+      [0.5, 0, -0.5, 2, 0.4, 0.1],
+    ];
+    const h = new Float64Array(300);
+    h[0] = 1;
+    const x = h.slice();
+    for (const s of sections) {
+      const { l1, energy } = passWithSums(s, h);
+      runSectionFilter(createSectionFilter([s]), x, x);
+      expect(Array.from(h)).toEqual(Array.from(x));
+      expect(l1).toBe(x.reduce((a, v) => a + Math.abs(v), 0));
+      expect(energy).toBe(x.reduce((a, v) => a + v * v, 0));
+    }
   });
 });
