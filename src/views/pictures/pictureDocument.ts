@@ -13,11 +13,34 @@ export const TITLE_FONT = "system-ui, -apple-system, 'Segoe UI', Roboto, 'Helvet
 export const TITLE_COLOUR = '#1d2330';
 export const MUTED_COLOUR = '#5f6b7a';
 
-/** Escapes text for an XML text node or attribute value. */
+/**
+ * Characters XML 1.0 does not allow anywhere in a document, not even as a character reference (its Char
+ * production): C0 controls other than tab, line feed and carriage return, U+FFFE, U+FFFF, and halves of
+ * surrogate pairs standing alone.
+ */
+const NOT_XML =
+  // eslint-disable-next-line no-control-regex -- these control characters are what the pattern is for
+  /[\u0000-\u0008\u000b\u000c\u000e-\u001f\ufffe\uffff]|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/g;
+
+const REFERENCES: Record<string, string> = {
+  '<': '&lt;',
+  '>': '&gt;',
+  '&': '&amp;',
+  '"': '&quot;',
+  "'": '&apos;',
+  // As references, so an attribute value keeps them (a parser turns literal ones into spaces there).
+  '\t': '&#9;',
+  '\n': '&#10;',
+  '\r': '&#13;',
+};
+
+/**
+ * Escapes text for an XML text node or attribute value: markup characters and white space other than the
+ * space as references, and every character XML forbids (NOT_XML) as U+FFFD, the replacement character, so the
+ * picture is always well-formed whatever a design's name holds.
+ */
 export function escapeXml(text: string): string {
-  return text.replace(/[<>&"']/g, (c) =>
-    c === '<' ? '&lt;' : c === '>' ? '&gt;' : c === '&' ? '&amp;' : c === '"' ? '&quot;' : '&apos;',
-  );
+  return text.replace(NOT_XML, '\ufffd').replace(/[<>&"'\t\n\r]/g, (c) => REFERENCES[c]!);
 }
 
 /** A label drawn as SVG text (for parts of a view the page writes in HTML, e.g. plot titles). */

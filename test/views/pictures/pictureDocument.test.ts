@@ -12,14 +12,36 @@ import {
 
 const HOSTILE = '<img src=x onerror=alert(1)> & "quotes"';
 
+/**
+ * XML 1.0 (Fifth Edition), production [2]: Char ::= #x9 | #xA | #xD | [#x20-#xD7FF] | [#xE000-#xFFFD] |
+ * [#x10000-#x10FFFF], from memory. A well-formed document holds nothing else, not even as a reference.
+ */
+const XML_CHAR = /^[\t\n\r\u0020-\ud7ff\ue000-\ufffd\u{10000}-\u{10ffff}]*$/u;
+
 describe('escapeXml', () => {
-  it('escapes the five XML specials and nothing else', () => {
-    expect(escapeXml(`a<b>c&d"e'f ü`)).toBe('a&lt;b&gt;c&amp;d&quot;e&apos;f ü');
+  it('escapes the five XML specials, keeps other characters, and writes tab and line ends as references', () => {
+    expect(escapeXml(`a<b>c&d"e'f ü 𝄞`)).toBe('a&lt;b&gt;c&amp;d&quot;e&apos;f ü 𝄞');
+    expect(escapeXml('a\tb\nc\rd')).toBe('a&#9;b&#10;c&#13;d');
+  });
+
+  it('never lets through a character XML forbids, whatever the name holds (every UTF-16 code unit)', () => {
+    const every = Array.from({ length: 0x10000 }, (_, i) => String.fromCharCode(i)).join('');
+    const out = escapeXml(every + '\ud834\udd1e' + '\udd1e\ud834');
+    expect(out).toMatch(XML_CHAR);
+    // Forbidden ones become U+FFFD, one each; the valid pair stays a pair.
+    expect(escapeXml('a\u0001b\u001fc\uffffd\ud800e')).toBe('a\ufffdb\ufffdc\ufffdd\ufffde');
+    expect(escapeXml('\ud834\udd1e')).toBe('𝄞');
   });
 });
 
 describe('pictureDocument', () => {
   const base = { width: 600.4, height: 300, subtitle: 'z-plane · sample rate 2 kHz', body: '<g/>' };
+
+  it('is made only of characters XML allows when the name holds control characters', () => {
+    const svg = pictureDocument({ ...base, title: 'Hum\u0001 notch\u0008\u001b[31m', background: true });
+    expect(svg).toMatch(XML_CHAR);
+    expect(svg).toContain('Hum\ufffd notch\ufffd\ufffd[31m');
+  });
 
   it('writes a design name with markup as text, never as an element', () => {
     const svg = pictureDocument({ ...base, title: HOSTILE, background: true });
