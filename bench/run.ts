@@ -27,6 +27,10 @@ if (want('cli')) {
   const { benchCli } = await import('./cli.ts');
   parts.push('## Command-line start-up', '', benchCli(), '');
 }
+if (want('bounds')) {
+  const { benchBounds } = await import('./bounds.ts');
+  parts.push('## Bounded work (largest accepted inputs, refusals)', '', await benchBounds(), '');
+}
 if (want('signal')) {
   const { benchSignal } = await import('./signal.ts');
   parts.push('## Real signals: 10 minutes at 48 kHz', '', await benchSignal(), '');
