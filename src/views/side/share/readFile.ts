@@ -1,25 +1,18 @@
 /** Reads a design file the user picked or dropped, refusing oversized files before reading them. */
-import { MAX_FILE_CHARS, readSharedFile } from '../../../share/designFile.ts';
+import { MAX_FILE_BYTES, readSharedFileBytes, tooLarge } from '../../../share/designFile.ts';
 import type { ShareResult } from '../../../share/document.ts';
-
-/** Largest file read, bytes: UTF-8 takes at most 3 bytes per UTF-16 unit the loader accepts. */
-export const MAX_FILE_BYTES = MAX_FILE_CHARS * 3;
 
 /** The design in a file, or a message naming the file and saying what was wrong. */
 export async function readDesignBlob(file: File): Promise<ShareResult> {
   const label = `“${file.name}”`;
-  if (file.size > MAX_FILE_BYTES) {
-    return {
-      ok: false,
-      message: `${label} is ${Math.round(file.size / 1e6)} MB; a design file is at most ${MAX_FILE_BYTES / 1e6} MB.`,
-    };
-  }
-  let text: string;
+  if (file.size > MAX_FILE_BYTES)
+    return { ok: false, message: `${label} was not opened. ${tooLarge(file.size)}` };
+  let bytes: Uint8Array;
   try {
-    text = await file.text();
+    bytes = new Uint8Array(await file.arrayBuffer());
   } catch (e) {
     return { ok: false, message: `${label} could not be read: ${(e as Error).message}` };
   }
-  const r = readSharedFile(text);
+  const r = readSharedFileBytes(bytes);
   return r.ok ? r : { ok: false, message: `${label} was not opened. ${r.message}` };
 }
