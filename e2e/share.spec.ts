@@ -141,3 +141,37 @@ test('the built page carries the Content-Security-Policy and runs under it', asy
   await expect(page.getByRole('status').filter({ hasText: 'from the link' })).toBeVisible();
   expect(problems).toEqual([]);
 });
+
+test('the server sends the policy as a header that forbids framing and sniffing', async ({
+  page,
+  baseURL,
+}) => {
+  const response = await page.goto('/');
+  const headers = response!.headers();
+  const csp = headers['content-security-policy'] ?? '';
+  expect(csp).toContain("frame-ancestors 'none'");
+  expect(csp).toContain("default-src 'self'");
+  expect(csp).toContain("object-src 'none'");
+  expect(csp).not.toContain('unsafe-eval');
+  expect(headers['x-content-type-options']).toBe('nosniff');
+  expect(headers['x-frame-options']).toBe('DENY');
+  // The built page's header is as strict as its <meta> tag; the development server relaxes only scripts
+  // and styles inline (hot reload) and its WebSocket.
+  if (!process.env.PW_DEV) expect(csp).not.toContain('unsafe-inline');
+  // Another page cannot show the workbench in a frame.
+  const framing = await page.context().newPage();
+  await framing.route('http://framing.test/', (r) =>
+    r.fulfill({ contentType: 'text/html', body: `<iframe src="${baseURL}/"></iframe>` }),
+  );
+  await framing.goto('http://framing.test/');
+  await expect
+    .poll(
+      () =>
+        framing
+          .frames()
+          .find((f) => f !== framing.mainFrame())
+          ?.url() ?? '',
+    )
+    .toMatch(/^chrome-error:/);
+  await framing.close();
+});
