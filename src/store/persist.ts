@@ -294,7 +294,12 @@ export function installPersistence(store: WorkbenchStore, env: PersistEnv = brow
       return;
     }
     const head = readSessionHead(text);
-    if (!head || head.lineage !== lineage || head.tab === tab) return;
+    if (!head || head.tab === tab) return;
+    // The other tab went its own way (it kept its copy): what it did no longer concerns this tab.
+    if (head.lineage !== lineage) {
+      dismissKey(otherTabNotice(head.tab));
+      return;
+    }
     const other = text === null ? null : parseSession(text, () => {});
     if (!other || sameDesign(other.design, store.getState().design)) return;
     const noticeKey = otherTabNotice(head.tab);
