@@ -118,3 +118,48 @@ describe('compound edits are named store actions of one undo step', () => {
     expect(store.getState().design).toBe(before);
   });
 });
+
+describe('the door every edit passes (core/model/check.ts)', () => {
+  it('refuses an edit past a bound, leaves design and history alone and says why in a notice', async () => {
+    const { noticeStore } = await import('../../src/store/notices.ts');
+    noticeStore.setState({ notices: [] });
+    const store = createWorkbenchStore(emptyDesign(1000));
+    store.getState().addRoot('pole', { re: 0.5, im: 0.5, multiplicity: 500 });
+    const before = store.getState().design;
+    // A pair of multiplicity 513 would be order 1026.
+    store.getState().setMultiplicity({ kind: 'pole', index: 0 }, 513);
+    expect(store.getState().design).toBe(before);
+    expect(store.getState().history.past).toHaveLength(1);
+    expect(noticeStore.getState().notices.at(-1)!.text).toMatch(
+      /That change was not made: poles: the poles have order 1026.*at most 1024/,
+    );
+    // Within the bound it goes through.
+    store.getState().setMultiplicity({ kind: 'pole', index: 0 }, 512);
+    expect(store.getState().design.poles[0]!.multiplicity).toBe(512);
+  });
+
+  it('returns the problem of a typed system past a bound instead of loading it', () => {
+    const store = createWorkbenchStore(emptyDesign(1000));
+    const problem = store.getState().loadTyped([], [], 1, { b: [1], a: [1], text: 'x'.repeat(131_201) });
+    expect(problem?.path).toEqual(['typed', 'text']);
+    expect(store.getState().design.typed).toBeUndefined();
+  });
+
+  it('turns a mask edit past a bound into the edit error', () => {
+    const store = createWorkbenchStore(emptyDesign(1000));
+    const regions = Array.from({ length: 1025 }, (_, i) => ({
+      id: `r${i}`,
+      kind: 'stop' as const,
+      fromHz: i * 0.4,
+      toHz: i * 0.4 + 0.2,
+      upperDb: -20,
+    }));
+    store.getState().replaceDesign({ ...emptyDesign(1000), mask: { regions } });
+    const r = store.getState().addRegion({ kind: 'stop', fromHz: 450, toHz: 460, upperDb: -30 });
+    expect(r).toMatchObject({
+      ok: false,
+      error: { message: expect.stringMatching(/mask\.regions: 1026 regions/) },
+    });
+    expect(store.getState().design.mask!.regions).toHaveLength(1025);
+  });
+});
