@@ -75,3 +75,28 @@ test("the page's comb designer: order 1000 with a mask region per tooth is kept,
   expect(await readDesign(page)).toEqual(designed);
   await saveScreenshot(page, info, 'comb-1000');
 });
+
+test('the Design page says when an order is beyond double precision, and which order works', async ({
+  page,
+}, info) => {
+  await openWorkbench(page);
+  await openDesignPage(page);
+  await chooseKind(page, 'Band-pass');
+  const form = designerForm(page);
+  await form.getByLabel('Family').selectOption({ label: 'Elliptic' });
+  const before = await readDesign(page);
+  await fillField(page, 'Order', '64');
+  await pressDesign(page);
+  const refusal = form.getByRole('alert').filter({ hasText: 'order 64' });
+  await expect(refusal).toContainText('order 64 puts two poles');
+  await expect(refusal).toContainText('closer than double precision separates');
+  await expect(form.getByLabel('Order', { exact: true })).toHaveAttribute('aria-invalid', 'true');
+  expect(await readDesign(page)).toEqual(before);
+  await saveScreenshot(page, info, 'order-beyond-precision');
+  const largest = /order (\d+) is the largest that works/.exec((await refusal.textContent()) ?? '')![1]!;
+  await fillField(page, 'Order', largest);
+  await pressDesign(page);
+  await expect
+    .poll(async () => (await readDesign(page)).designer)
+    .toMatchObject({ kind: 'iir', family: 'elliptic', order: Number(largest) });
+});

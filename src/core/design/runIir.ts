@@ -10,6 +10,7 @@ import type { Requirement } from './requirement.ts';
 import type { DesignResult } from './result.ts';
 import { BAND_SHAPE_OPTIONS, FAMILY_OPTIONS, type IirSpec } from './entries/classicalParameters.ts';
 import { DesignInputError, MAX_DESIGN_ORDER } from './validate.ts';
+import { separationProblem } from './separation.ts';
 import { shortNumber } from '../shortNumber.ts';
 
 const responseWords = (r: BandShape) => BAND_SHAPE_OPTIONS.find((o) => o.value === r)!.label.toLowerCase();
@@ -50,6 +51,32 @@ function requirementOf(spec: IirSpec): Requirement | undefined {
   };
 }
 
+/**
+ * The refusal of an order whose roots double precision cannot keep apart, naming the largest lower order
+ * that works with the same edges, ripple and attenuation (each lower order is designed and checked, so the
+ * answer does not assume that closeness grows with the order).
+ */
+function beyondPrecision(
+  order: number,
+  problem: string,
+  at: (order: number) => ReturnType<typeof designIir>,
+  estimated: boolean,
+): DesignInputError {
+  let works = 0;
+  for (let n = order - 1; n >= 1 && works === 0; n--) if (!separationProblem(at(n))) works = n;
+  const asked = estimated ? `the requirement needs order ${order}, which` : `order ${order}`;
+  const advice = estimated
+    ? 'a wider transition band, more pass-band ripple or less attenuation'
+    : 'a lower order';
+  return new DesignInputError(
+    `${asked} puts ${problem}`,
+    works > 0
+      ? `${advice}: order ${works} is the largest that works with these edges${estimated ? ' (it does not meet the requirement)' : ''}`
+      : `${advice}; no order works with these edges`,
+    'order',
+  );
+}
+
 /** Designs a classical filter from its checked description (throws DesignInputError on what the checks cannot see). */
 export function runIir(spec: IirSpec): DesignResult {
   const { fs, family } = spec;
@@ -65,15 +92,19 @@ export function runIir(spec: IirSpec): DesignResult {
   const edgesHz = estimate ? estimate.naturalEdgesHz : spec.edgesHz!;
   const needRipple = family === 'chebyshev1' || family === 'elliptic';
   const needAtten = family === 'chebyshev2' || family === 'elliptic';
-  const zpk = designIir({
-    family,
-    response: spec.response,
-    order,
-    edgesHz,
-    fs,
-    ...(spec.rippleDb !== undefined && { rippleDb: spec.rippleDb }),
-    ...(spec.attenuationDb !== undefined && { attenuationDb: spec.attenuationDb }),
-  });
+  const at = (n: number) =>
+    designIir({
+      family,
+      response: spec.response,
+      order: n,
+      edgesHz,
+      fs,
+      ...(spec.rippleDb !== undefined && { rippleDb: spec.rippleDb }),
+      ...(spec.attenuationDb !== undefined && { attenuationDb: spec.attenuationDb }),
+    });
+  const zpk = at(order);
+  const beyond = separationProblem(zpk);
+  if (beyond) throw beyondPrecision(order, beyond, at, estimate !== undefined);
   const margin = req ? requirementMargin(zpk, req) : undefined;
   const fmt = (v: number) => shortNumber(v, 6);
   const familyWords = FAMILY_OPTIONS.find((f) => f.value === family)!.words;
