@@ -20,9 +20,9 @@ export function separationProblem(zpk: Zpk): string | null {
     [zpk.poles, 'poles'],
     [zpk.zeros, 'zeros'],
   ] as const) {
-    const close = closestDistinct(expandRoots(list));
-    if (close && close.distance < ROOT_SEPARATION * close.scale)
-      return `two ${what} ${fmt(close.distance)} apart, closer than double precision separates (${fmt(ROOT_SEPARATION)})`;
+    const distance = closestTooClose(expandRoots(list));
+    if (distance !== null)
+      return `two ${what} ${fmt(distance)} apart, closer than double precision separates (${fmt(ROOT_SEPARATION)})`;
   }
   let nearest = 0;
   for (const p of zpk.poles) nearest = Math.max(nearest, Math.hypot(p.re, p.im));
@@ -31,17 +31,24 @@ export function separationProblem(zpk: Zpk): string | null {
   return null;
 }
 
-/** The two distinct roots of the list that are closest, with their distance and scale max(1, |z|). */
-function closestDistinct(roots: readonly Root[]): { distance: number; scale: number } | null {
-  let best: { distance: number; scale: number } | null = null;
-  for (let i = 0; i < roots.length; i++) {
-    const a = roots[i]!;
-    for (let j = i + 1; j < roots.length; j++) {
-      const b = roots[j]!;
+/**
+ * The distance of the closest two distinct roots that are nearer than ROOT_SEPARATION·max(1, |z|), or null.
+ * Sorted by real part, each root is compared only with those whose real part is that near: O(n log n).
+ */
+function closestTooClose(roots: readonly Root[]): number | null {
+  const sorted = roots.slice().sort((a, b) => a.re - b.re);
+  let widest = 1;
+  for (const r of sorted) widest = Math.max(widest, Math.hypot(r.re, r.im));
+  const reach = ROOT_SEPARATION * widest;
+  let best: number | null = null;
+  for (let i = 0; i < sorted.length; i++) {
+    const a = sorted[i]!;
+    const limit = ROOT_SEPARATION * Math.max(1, Math.hypot(a.re, a.im));
+    for (let j = i + 1; j < sorted.length && sorted[j]!.re - a.re <= reach; j++) {
+      const b = sorted[j]!;
       const distance = Math.hypot(a.re - b.re, a.im - b.im);
-      if (distance === 0) continue; // the same root repeated, as designers place on purpose
-      const scale = Math.max(1, Math.hypot(a.re, a.im));
-      if (!best || distance / scale < best.distance / best.scale) best = { distance, scale };
+      // Distance 0 is the same root repeated, as designers place on purpose.
+      if (distance > 0 && distance < limit && (best === null || distance < best)) best = distance;
     }
   }
   return best;
