@@ -5,7 +5,9 @@
  */
 import { expect, test, type Page } from '@playwright/test';
 import { DEFAULT_IMPLEMENTATION } from '../src/core/fixed/index.ts';
-import type { SharedDesign } from '../src/share/document.ts';
+import { toDocument, type SharedDesign } from '../src/share/document.ts';
+import { toBase64Url } from '../src/share/link/base64url.ts';
+import { encodePayload } from '../src/share/link/codec.ts';
 import { encodeLink } from '../src/share/link/index.ts';
 import { demoDesign } from '../src/store/demo.ts';
 import { bitwiseDifference } from '../test/share/arbitraries.ts';
@@ -101,6 +103,18 @@ test('a malformed link shows a message and keeps the previous design', async ({ 
   await page.waitForFunction(() => window.__polewright !== undefined);
   await expect(page.getByRole('alert')).toContainText('unchanged');
   expect(bitwiseDifference(await readDesign(page), before)).toBeNull();
+});
+
+test('a link of the first format (no check value) opens with a note that stays', async ({ page }) => {
+  const shared = richDesign('Old link');
+  const old = 'pw1.' + toBase64Url(encodePayload(toDocument(shared)));
+  await page.goto(`/#${old}`);
+  await page.waitForFunction(() => window.__polewright !== undefined);
+  expect(bitwiseDifference(await readDesign(page), shared.design)).toBeNull();
+  const note = page.getByRole('status').filter({ hasText: 'no check value' });
+  await expect(note).toContainText('damage to it cannot be detected');
+  await page.waitForTimeout(9000);
+  await expect(note).toBeVisible();
 });
 
 test('markup in a design name and note shows as text', async ({ page }) => {

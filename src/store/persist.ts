@@ -142,9 +142,11 @@ export function openLinkFromHash(store: WorkbenchStore, env: PersistEnv): boolea
   if (!sameDesign(r.value.design, state.design)) state.replaceDesign(r.value.design);
   state.setView({ ...pickSharedView(defaultView), ...r.value.view });
   const notes = r.notes?.length ? ` ${r.notes.join(' ')}` : '';
+  // A note (an old link without a check value) stays until read; a plain confirmation fades.
   postNotice(
     'info',
     `Opened “${r.value.design.name || 'untitled design'}” from the link. Undo brings back the design you had before.${notes}`,
+    notes ? { persistent: true } : {},
   );
   return true;
 }
