@@ -212,6 +212,53 @@ const ROWS: Row[] = [
     then: () => expect(readFileSync(path('good.wav')).equals(Buffer.from(wav(4000)))).toBe(true),
   },
   {
+    name: 'simulate --fixed keeps a good result when a later run fails on a truncated input',
+    setup: () => writeFileSync(path('fixed-kept.csv'), 'a good result\n'),
+    argv: () => [
+      'simulate',
+      '--fixed',
+      '--b',
+      '0.5,0.5',
+      '--input',
+      path('cut.wav'),
+      '--output',
+      path('fixed-kept.csv'),
+    ],
+    code: 2,
+    says: /cut\.wav/,
+    then: () => {
+      expect(readFileSync(path('fixed-kept.csv'), 'utf8')).toBe('a good result\n');
+      noTemporaryFiles();
+    },
+  },
+  {
+    name: 'simulate --fixed refuses an output that is a link to its input',
+    argv: () => [
+      'simulate',
+      '--fixed',
+      '--b',
+      '0.5,0.5',
+      '--input',
+      path('good.wav'),
+      '--output',
+      path('alias.wav'),
+    ],
+    code: 2,
+    says: /same file as the input/,
+  },
+  {
+    name: 'simulate --fixed --input-rate 0 is refused',
+    argv: () => ['simulate', '--fixed', '--b', '0.5,0.5', '--input', path('x.csv'), '--input-rate', '0'],
+    code: 2,
+    says: /--input-rate must be a rate above 0/,
+  },
+  {
+    name: 'spectrum --input-rate -5 is refused',
+    argv: () => ['spectrum', path('x.csv'), '--input-rate', '-5'],
+    code: 2,
+    says: /--input-rate must be a rate above 0/,
+  },
+  {
     name: 'an output that is a hard link to the input is refused',
     setup: () => linkSync(path('good.wav'), path('hard.wav')),
     argv: () => ['simulate', '--b', '1,1', '--input', path('good.wav'), '--output', path('hard.wav')],

@@ -5,7 +5,6 @@
  * reports overflows, what the cascade does after the input (rest or a limit cycle), the difference from the
  * ideal filter, and the round-off noise measured beside the predicted.
  */
-import { resolve } from 'node:path';
 import {
   buildImplementation,
   codesToValues,
@@ -17,7 +16,10 @@ import {
   DEFAULT_SIGNAL_AMPLITUDE,
   type Implementation,
 } from '../../core/fixed/index.ts';
-import { UsageError, intFlag, numberFlag, type ParsedArgs } from '../args.ts';
+import { UsageError, intFlag, numberFlag, rateFlag, type ParsedArgs } from '../args.ts';
+import { refuseOverwritingInputs, writeAtomically } from '../output.ts';
+import { linkFragment } from '../../share/link/index.ts';
+import { MAX_SAMPLE_RATE } from '../../core/model/limits.ts';
 import { readDesign } from '../designInput.ts';
 import { IMPLEMENTATION_FLAGS, baseSettings, choiceFlag, settingsFromArgs } from '../implementationFlags.ts';
 import { codesOf, GENERATED_INPUT, GeneratedSource, generatedSpec } from '../fixedInput.ts';
@@ -133,8 +135,7 @@ function inputPlan(args: ParsedArgs, sampleRate: number, output: string | undefi
     };
   }
   if (args.flags.has('amplitude')) throw new UsageError('--amplitude applies to the built-in inputs.');
-  if (output !== undefined && resolve(spec) === resolve(output))
-    throw new UsageError(`--output ${output} is the input file; writing would destroy it while it is read.`);
+  if (output !== undefined) refuseOverwritingInputs(output, '--output', [spec]);
   const wav = isWavPath(spec);
   if (wav && units === 'codes')
     throw new UsageError(
@@ -145,10 +146,7 @@ function inputPlan(args: ParsedArgs, sampleRate: number, output: string | undefi
   if (wav && args.flags.has('input-rate'))
     throw new UsageError('--input-rate applies to CSV input; a WAV file states its own rate.');
   const channel = args.flags.has('channel') ? intFlag(args, 'channel', 1, 1, 65535) - 1 : 0;
-  const inputRate = args.flags.has('input-rate')
-    ? numberFlag(args, 'input-rate', sampleRate, 'Hz')
-    : sampleRate;
-  if (!(inputRate > 0)) throw new UsageError('--input-rate must be a positive rate in Hz.');
+  const inputRate = rateFlag(args, 'input-rate', sampleRate, MAX_SAMPLE_RATE);
   const maxFrames = args.flags.has('samples')
     ? intFlag(args, 'samples', 1, 1, Number.MAX_SAFE_INTEGER)
     : Infinity;
@@ -190,11 +188,25 @@ export async function runSimulateFixed(args: ParsedArgs, io: CliIo): Promise<num
   const plan = inputPlan(args, sampleRate, output);
   const rate = () => plan.source.summary().sampleRate ?? plan.fallbackRate;
   const memory = output === undefined ? new MemoryWriter() : null;
-  const writer: CodeWriter = memory ?? new FileWriter(output!, impl.settings.dataWordLength, rate);
   const run = new FixedRun(impl);
-  const frames = await runBlocks(run, plan, writer);
+  const runInto = async (writer: CodeWriter) => {
+    const n = await runBlocks(run, plan, writer);
+    await writer.close(rate(), plan.source.summary().startTime);
+    return n;
+  };
+  if (output !== undefined) {
+    const design = args.positionals[0];
+    refuseOverwritingInputs(output, '--output', [
+      design !== undefined && !linkFragment(design) ? design : undefined,
+    ]);
+  }
+  // A file output is written beside its name and renamed over it only when the whole run succeeded.
+  const frames = memory
+    ? await runInto(memory)
+    : await writeAtomically(output!, (path) =>
+        runInto(new FileWriter(path, impl.settings.dataWordLength, rate)),
+      );
   const summary = plan.source.summary();
-  await writer.close(rate(), summary.startTime);
   for (const note of summary.notes) io.stderr(`note: ${note}\n`);
   const report = run.finish();
   for (const w of fixedWarnings(report)) io.stderr(`warning: ${w}\n`);

@@ -26,7 +26,16 @@ import {
   type WindowName,
 } from '../../core/signal/index.ts';
 import { zpkToSections } from '../../core/system/index.ts';
-import { UsageError, intFlag, numberFlag, parseArgs, readFlagList, type ParsedArgs } from '../args.ts';
+import {
+  UsageError,
+  intFlag,
+  numberFlag,
+  parseArgs,
+  rateFlag,
+  readFlagList,
+  type ParsedArgs,
+} from '../args.ts';
+import { MAX_SAMPLE_RATE } from '../../core/model/limits.ts';
 import { DESIGN_FLAGS, readDesign, type CliDesign } from '../designInput.ts';
 import { choiceFlag } from '../implementationFlags.ts';
 import { toJson } from '../json.ts';
@@ -92,9 +101,7 @@ function readSettings(args: ParsedArgs): Settings {
     throw new UsageError('--channel applies to WAV input; a CSV input has one value column.');
   if (wav && args.flags.has('input-rate'))
     throw new UsageError('--input-rate applies to CSV input; a WAV file states its own rate.');
-  const inputRate = args.flags.has('input-rate') ? numberFlag(args, 'input-rate', 1, 'Hz') : null;
-  if (inputRate !== null && !(inputRate > 0))
-    throw new UsageError('--input-rate must be a positive rate in Hz.');
+  const inputRate = args.flags.has('input-rate') ? rateFlag(args, 'input-rate', 1, MAX_SAMPLE_RATE) : null;
   return {
     path,
     channel: args.flags.has('channel') ? intFlag(args, 'channel', 1, 1, 65535) - 1 : undefined,
