@@ -101,9 +101,13 @@ function isQuotaError(e: unknown): boolean {
   return name === 'QuotaExceededError' || name === 'NS_ERROR_DOM_QUOTA_REACHED' || code === 22;
 }
 
+/** Sessions of other tabs older than this (ms) give way when the storage is full. */
+export const STALE_SESSION_MS = 60 * 60 * 1000;
+
 /**
  * Writes the session under its tab's key. On a full storage it retries with half the history budget, then a
- * quarter, then the design alone; the outcome says what happened.
+ * quarter, then the design alone, then after removing the sessions of tabs silent for STALE_SESSION_MS one by
+ * one (oldest first); the outcome says what happened.
  */
 export function saveSession(
   storage: KeyValueStorage,
@@ -117,27 +121,38 @@ export function saveSession(
       reason: 'refused',
       message: `the design would not reopen (${describeProblem(problem)})`,
     };
-  let quota = false;
-  for (const b of [budget, budget / 2, budget / 4, 0]) {
-    const out = serialiseSession(s, b);
-    try {
-      storage.setItem(sessionKey(s.tab), out.text);
-      return { ok: true, droppedPast: out.droppedPast, droppedFuture: out.droppedFuture };
-    } catch (e) {
-      if (!isQuotaError(e))
-        return {
-          ok: false,
-          reason: 'unavailable',
-          message: `browser storage refused the write (${(e as Error).message || String(e)})`,
-        };
-      quota = true;
+  const attempt = (): SaveOutcome | 'full' => {
+    for (const b of [budget, budget / 2, budget / 4, 0]) {
+      const out = serialiseSession(s, b);
+      try {
+        storage.setItem(sessionKey(s.tab), out.text);
+        return { ok: true, droppedPast: out.droppedPast, droppedFuture: out.droppedFuture };
+      } catch (e) {
+        if (!isQuotaError(e))
+          return {
+            ok: false,
+            reason: 'unavailable',
+            message: `browser storage refused the write (${(e as Error).message || String(e)})`,
+          };
+      }
     }
-  }
-  return {
-    ok: false,
-    reason: quota ? 'full' : 'unavailable',
-    message: 'browser storage is full',
+    return 'full';
   };
+  let outcome = attempt();
+  // Still full: the sessions of tabs not heard from for an hour give way, oldest first (a tab still open
+  // writes its own again when it changes or is hidden).
+  const stale = listSessions(storage)
+    .filter((h) => h.tab !== s.tab && h.savedAt < s.savedAt - STALE_SESSION_MS)
+    .reverse();
+  while (outcome === 'full' && stale.length > 0) {
+    try {
+      storage.removeItem(stale.shift()!.key);
+    } catch {
+      break;
+    }
+    outcome = attempt();
+  }
+  return outcome === 'full' ? { ok: false, reason: 'full', message: 'browser storage is full' } : outcome;
 }
 
 const HEAD =

@@ -217,3 +217,28 @@ describe('autosave', () => {
     expect(outcomes).toEqual([true, true, true]);
   });
 });
+
+describe('a full storage', () => {
+  it('makes the sessions of tabs silent for an hour give way, oldest first, but never a recent one', () => {
+    const hour = 60 * 60 * 1000;
+    const now = 10 * hour;
+    const big = (tab: string, savedAt: number): StoredSession => ({
+      ...session(0, 0, tab),
+      savedAt,
+      design: { ...demoDesign(), note: 'x'.repeat(5000) },
+    });
+    const one = serialiseSession(big('mine', now), Infinity).text.length;
+    const storage = memoryStorage(Math.floor(one * 3.5));
+    saveSession(storage, big('old', now - 3 * hour));
+    saveSession(storage, big('older', now - 5 * hour));
+    saveSession(storage, big('recent', now - 10 * 60 * 1000));
+    expect(saveSession(storage, big('mine', now))).toMatchObject({ ok: true });
+    const left = listSessions(storage).map((h) => h.tab);
+    expect(left).toEqual(['mine', 'recent', 'old']);
+    // With only recent sessions left, a write that does not fit is reported, and nothing is removed.
+    const full = memoryStorage(Math.floor(one * 1.5));
+    saveSession(full, big('recent', now - 60_000));
+    expect(saveSession(full, big('mine', now))).toMatchObject({ ok: false, reason: 'full' });
+    expect(listSessions(full).map((h) => h.tab)).toEqual(['recent']);
+  });
+});
