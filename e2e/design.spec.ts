@@ -128,6 +128,8 @@ test('a design re-runs with a changed parameter (one undo step) and is released 
 
   await designerStatus(page).getByRole('button', { name: 'Change parameters' }).click();
   await expect(designerForm(page).getByLabel('Centre', { exact: true })).toHaveValue('120');
+  // The form scrolls into view and takes the focus on the next frame; a click aimed before that can miss.
+  await expect(designerForm(page).getByLabel('Centre', { exact: true })).toBeFocused();
   await fillField(page, '−3 dB width', '20');
   await designerForm(page).getByRole('button', { name: 'Re-run' }).click();
   const second = await readDesign(page);
