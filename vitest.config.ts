@@ -6,5 +6,7 @@ export default defineConfig({
     environment: 'node',
     testTimeout: 60_000,
     pool: 'forks',
+    // The command line's set-up: the full design reader is there from the start (src/share/schema/reader.ts).
+    setupFiles: ['test/setup.ts'],
   },
 });

@@ -6,12 +6,19 @@ import { browserEnv, installPersistence } from './store/persist.ts';
 import { workbenchStore } from './store/useWorkbench.ts';
 import { downloadDesignFile } from './views/side/share/saveDesign.ts';
 
-installPersistence(workbenchStore, { ...browserEnv(), downloadDesign: downloadDesignFile });
+const persistence = installPersistence(workbenchStore, {
+  ...browserEnv(),
+  downloadDesign: downloadDesignFile,
+});
 
 const container = document.getElementById('root');
 if (!container) throw new Error('Polewright: the page has no #root element.');
-createRoot(container).render(
-  <StrictMode>
-    <App />
-  </StrictMode>,
-);
+// The first view shows the restored design, never the demo in its place: a session only the full design
+// reader can read (an older version's) waits for it; what the workbench wrote itself is there at once.
+const render = () =>
+  createRoot(container).render(
+    <StrictMode>
+      <App />
+    </StrictMode>,
+  );
+void persistence.restored.then(render, render);

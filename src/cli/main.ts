@@ -1,4 +1,6 @@
 /** The `polewright` command line: a thin front end on the engine. */
+import * as fullReader from '../share/schema/full.ts';
+import { installFullReader } from '../share/schema/reader.ts';
 import { UsageError } from './args.ts';
 import { CliFailure } from './output.ts';
 import { runAnalyze } from './commands/analyze.ts';
@@ -14,6 +16,9 @@ export interface CliIo {
   stdout: (s: string) => void;
   stderr: (s: string) => void;
 }
+
+// The command line reads every design with the full reader (zod schemas, migrations, messages) from the start.
+installFullReader(fullReader);
 
 const COMMANDS: Record<string, (argv: string[], io: CliIo) => number | Promise<number>> = {
   analyze: runAnalyze,

@@ -12,9 +12,8 @@ import { describeProblem, designProblem } from '../core/model/check.ts';
 import { fromDocument } from './document.ts';
 import { designJson } from './documentCache.ts';
 import { stringifyExact } from './exactJson.ts';
-import { readDocument } from './schema/migrate.ts';
+import { readDocumentNow, readViewNow } from './schema/reader.ts';
 import type { SharedView } from '../core/model/view.ts';
-import { sharedView } from './schema/view.ts';
 import { consoleWarn, type KeyValueStorage, type Warn } from './storage.ts';
 
 /** Each tab's session is kept under this prefix followed by the tab's id. */
@@ -212,13 +211,16 @@ export function pruneSessions(storage: KeyValueStorage, own: string): void {
 
 /** Reads one stored design; null (with a warning) when it is damaged. */
 function readEntry(json: unknown, where: string, warn: Warn): Design | null {
-  const r = readDocument(json);
+  const r = readDocumentNow(json);
   if (r.ok) return fromDocument(r.document).design;
   warn(`autosaved ${where} ignored: ${r.message}`);
   return null;
 }
 
-/** A session from its stored text (version 1, the shared session of older versions, or 2), or null. */
+/**
+ * A session from its stored text (version 1, the shared session of older versions, or 2), or null. In the
+ * page it throws FullReaderPending when a part needs the full reader before it has loaded (schema/reader.ts).
+ */
 export function parseSession(
   text: string,
   warn: Warn = consoleWarn,
@@ -266,13 +268,13 @@ export function parseSession(
     if (!d) break;
     future.push(d);
   }
-  const v = sharedView.safeParse(env.view ?? {});
-  if (!v.success) warn('the autosaved view settings were damaged and were ignored.');
+  const v = readViewNow(env.view ?? {});
+  if (!v) warn('the autosaved view settings were damaged and were ignored.');
   return {
     design,
     past,
     future,
-    view: v.success ? v.data : {},
+    view: v ?? {},
     ...(typeof env.tab === 'string' ? { tab: env.tab } : {}),
     ...(typeof env.lineage === 'string' ? { lineage: env.lineage } : {}),
     ...(typeof env.savedAt === 'number' ? { savedAt: env.savedAt } : {}),

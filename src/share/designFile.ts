@@ -8,7 +8,7 @@ import { stringifyExact } from './exactJson.ts';
 import { MAX_FILE_BYTES, MAX_FILE_CHARS, MAX_FILE_DEPTH } from './schema/limits.ts';
 import { decodeFileText } from './fileText.ts';
 import { parseStrictJson } from './strictJson.ts';
-import { readDocument } from './schema/migrate.ts';
+import { readDocumentNow } from './schema/reader.ts';
 
 export { MAX_FILE_BYTES, MAX_FILE_CHARS } from './schema/limits.ts';
 
@@ -25,7 +25,7 @@ export function readSharedFile(text: string): ShareResult {
   }
   const json = parseStrictJson(text, MAX_FILE_DEPTH);
   if (!json.ok) return { ok: false, message: `The file is not valid JSON: ${json.message}.` };
-  const r = readDocument(json.value);
+  const r = readDocumentNow(json.value);
   return r.ok ? { ok: true, value: fromDocument(r.document) } : r;
 }
 

@@ -1,6 +1,8 @@
 /** A design with the view settings that travel with it, and its conversion to and from the current document. */
 import type { Design } from '../core/model/design.ts';
-import { CURRENT_VERSION, readDocument, type CurrentDocument } from './schema/migrate.ts';
+import type { CurrentDocument } from './schema/migrate.ts';
+import { readDocumentNow } from './schema/reader.ts';
+import { CURRENT_VERSION } from './schema/version.ts';
 import type { SharedView } from '../core/model/view.ts';
 
 /** What a link, a file or a library entry carries. */
@@ -51,8 +53,11 @@ export function fromDocument(doc: CurrentDocument): SharedDesign {
   return { design, view: doc.view ?? {} };
 }
 
-/** Validates any released document version (parsed JSON or a decoded link) and returns its design. */
+/**
+ * Validates any released document version (parsed JSON or a decoded link) and returns its design; in the
+ * page, throws FullReaderPending when that needs the full reader before it has loaded (schema/reader.ts).
+ */
 export function readShared(json: unknown): ShareResult {
-  const r = readDocument(json);
+  const r = readDocumentNow(json);
   return r.ok ? { ok: true, value: fromDocument(r.document) } : r;
 }

@@ -11,6 +11,7 @@ import { zpkToSections } from '../core/system/index.ts';
 import { filterSections } from '../core/time/filter.ts';
 import type { Zpk } from '../core/types.ts';
 import { readDesignFile, writeDesignFile } from '../share/designFile.ts';
+import { FullReaderPending, loadFullReader } from '../share/schema/reader.ts';
 import { browserStorage, consoleWarn, type KeyValueStorage, type Warn } from '../share/storage.ts';
 import type { Design } from '../core/model/design.ts';
 import { LOG_AXIS_MIN_FRACTION } from './derived.ts';
@@ -80,18 +81,39 @@ function save(storage: KeyValueStorage, ref: Reference | null, warn: Warn): void
 
 /** A reference store over the given storage (null: kept in memory only). */
 export function createCompareStore(storage: KeyValueStorage | null, warn: Warn = consoleWarn): CompareStore {
-  return createStore<CompareState>()((set) => ({
-    reference: storage ? load(storage, warn) : null,
+  let touched = false;
+  let initial: Reference | null = null;
+  let later = false;
+  try {
+    initial = storage ? load(storage, warn) : null;
+  } catch (e) {
+    // A reference only the full design reader can read: it appears once that reader has loaded, unless
+    // the user pinned or unpinned in the meantime (nothing is written before).
+    if (!(e instanceof FullReaderPending)) throw e;
+    later = true;
+  }
+  const store = createStore<CompareState>()((set) => ({
+    reference: initial,
     pin: (design, now = new Date()) => {
+      touched = true;
       const reference = { design, pinnedAt: now.toISOString() };
       if (storage) save(storage, reference, warn);
       set({ reference });
     },
     unpin: () => {
+      touched = true;
       if (storage) save(storage, null, warn);
       set({ reference: null });
     },
   }));
+  if (later && storage)
+    void loadFullReader().then(
+      () => {
+        if (!touched) store.setState({ reference: load(storage, warn) });
+      },
+      (e: unknown) => warn(`the pinned reference design could not be read: ${(e as Error).message}`),
+    );
+  return store;
 }
 
 /** The page's reference store. */

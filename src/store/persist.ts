@@ -20,6 +20,7 @@ import {
 import type { SharedDesign } from '../share/document.ts';
 import { sameDesign } from '../core/model/design.ts';
 import { decodeLink } from '../share/link/index.ts';
+import { FullReaderPending, loadFullReader } from '../share/schema/reader.ts';
 import { dismissKey, hasNotice, postNotice, type NoticeAction } from './notices.ts';
 import { pickSharedView } from '../core/model/view.ts';
 import { browserStorage, consoleWarn, type KeyValueStorage, type Warn } from '../share/storage.ts';
@@ -127,11 +128,32 @@ export function browserEnv(): PersistEnv {
   };
 }
 
-/** Opens the design link in the fragment, if there is one; returns whether a design was opened. */
-export function openLinkFromHash(store: WorkbenchStore, env: PersistEnv): boolean {
+/**
+ * Opens the design link in the fragment, if there is one; returns whether a design was opened, or a promise
+ * of it when the link needs the full design reader, which has not loaded yet (the fragment is read at once).
+ */
+export function openLinkFromHash(store: WorkbenchStore, env: PersistEnv): boolean | Promise<boolean> {
   const hash = env.hash();
   if (!/^#pw/.test(hash)) return false;
   env.clearHash();
+  try {
+    return openLink(store, hash);
+  } catch (e) {
+    if (!(e instanceof FullReaderPending)) throw e;
+    return loadFullReader().then(
+      () => openLink(store, hash),
+      (err: unknown) => {
+        postNotice(
+          'error',
+          `The design link could not be opened, so your design is unchanged: part of the page did not load (${(err as Error).message}). Reload the page with the link to try again.`,
+        );
+        return false;
+      },
+    );
+  }
+}
+
+function openLink(store: WorkbenchStore, hash: string): boolean {
   const r = decodeLink(hash);
   if (!r.ok) {
     postNotice('error', `The design link could not be opened, so your design is unchanged. ${r.message}`);
@@ -168,8 +190,16 @@ export function unsavedText(outcome: Extract<SaveOutcome, { ok: false }> | 'no-s
   return `Your latest changes are not saved: ${outcome.message}. ${tail}`;
 }
 
-/** Restores the autosave, opens a link, and keeps saving; returns a function that undoes the wiring. */
-export function installPersistence(store: WorkbenchStore, env: PersistEnv = browserEnv()): () => void {
+/** What installPersistence returns: undoes the wiring; `restored` settles once the autosave is restored. */
+export type Persistence = (() => void) & { restored: Promise<void> };
+
+/**
+ * Restores the autosave, opens a link, and keeps saving. The session is restored at once when the quick
+ * design reader can read it (what this workbench wrote); otherwise (an older version's session, a damaged
+ * one) the restore waits for the full reader, and nothing is autosaved before it is done, so the demo never
+ * overwrites the session waiting to be read. `restored` tells the page when to draw its first view.
+ */
+export function installPersistence(store: WorkbenchStore, env: PersistEnv = browserEnv()): Persistence {
   const warn = env.warn ?? consoleWarn;
   const newId = env.newId ?? randomId;
   const { storage } = env;
@@ -188,9 +218,11 @@ export function installPersistence(store: WorkbenchStore, env: PersistEnv = brow
     : [];
   let tab = env.tabId?.() ?? null;
   let lineage: string | null = null;
-  if (storage) {
+  let disposed = false;
+  /** Restores the session; false when that needs the full reader, which has not loaded yet. */
+  const restore = (): boolean => {
     try {
-      const restored = restoreSession(storage, tab, warn);
+      const restored = restoreSession(storage!, tab, warn);
       if (restored) {
         const { session } = restored;
         lineage = restored.lineage;
@@ -202,139 +234,184 @@ export function installPersistence(store: WorkbenchStore, env: PersistEnv = brow
         });
       }
     } catch (e) {
+      if (e instanceof FullReaderPending) return false;
       warn(`the autosaved session could not be restored: ${(e as Error).message}`);
     }
-  } else {
+    return true;
+  };
+  const dispose = () => {
+    disposed = true;
+    offs.forEach((off) => off());
+    for (const k of [UNSAVED_NOTICE]) if (hasNotice(k)) dismissKey(k);
+  };
+  if (!storage) {
     postNotice('error', unsavedText('no-storage'), {
       key: UNSAVED_NOTICE,
       persistent: true,
       actions: download,
     });
-  }
-  if (tab === null) {
-    tab = newId();
-    env.setTabId?.(tab);
-  }
-  lineage ??= newId();
-  openLinkFromHash(store, env);
-  offs.push(env.listen('hashchange', () => openLinkFromHash(store, env)));
-  if (!storage) return () => offs.forEach((off) => off());
-
-  let pruned = false;
-  const done = (outcome: SaveOutcome) => {
-    if (outcome.ok) {
-      if (dismissKey(UNSAVED_NOTICE))
-        postNotice('info', 'Autosave works again: your design is saved in this browser.');
-      if (!pruned) pruneSessions(storage, tab!);
-      pruned = true;
-      return;
-    }
-    warn(`the design could not be autosaved: ${outcome.message}.`);
-    postNotice('error', unsavedText(outcome), { key: UNSAVED_NOTICE, persistent: true, actions: download });
-  };
-  const snapshot = (): StoredSession => ({
-    ...sessionOf(store),
-    tab: tab!,
-    lineage: lineage!,
-    savedAt: (env.timers ?? { now: () => Date.now() }).now(),
-  });
-  const saver = createAutosaver(storage, snapshot, { ...(env.timers ? { timers: env.timers } : {}), done });
-  // A duplicated tab starts with its original's id; it writes nothing until it knows the id is its own.
-  let ready = env.claimTab === undefined;
-  let wanted = true;
-  const schedule = () => {
-    wanted = true;
-    if (ready) saver.schedule();
-  };
-  if (env.claimTab) {
-    void env.claimTab(tab).then((mine) => {
-      if (!mine) {
-        tab = newId();
-        env.setTabId?.(tab);
-      }
-      ready = true;
-      if (wanted) saver.schedule();
-    });
-  }
-  // The first autosave after a reload or a link captures the opened design at once.
-  schedule();
-  // A root drag changes the design on every pointer move; writing the session (design and undo history)
-  // mid-drag would cost a frame every throttle interval, so the drag is saved on release, or when the page
-  // goes away mid-drag.
-  let heldByDrag = false;
-  const flush = () => {
-    if (heldByDrag) schedule();
-    heldByDrag = false;
-    if (ready) saver.flush();
-  };
-  offs.push(
-    store.subscribe((s, prev) => {
-      const changed = s.design !== prev.design || s.history !== prev.history || s.view !== prev.view;
-      if (s.dragging && !prev.dragging) {
-        // A write already pending (e.g. the gesture's start) waits for the release too.
-        saver.dispose();
-        heldByDrag = true;
-      } else if (s.dragging) heldByDrag ||= changed;
-      else if (changed || heldByDrag) {
-        heldByDrag = false;
-        schedule();
-      }
-    }),
-    env.listen('pagehide', flush),
-    env.listen('hidden', flush),
-    () => saver.dispose(),
-  );
-  if (env.onStorage) offs.push(env.onStorage((key) => otherTabChanged(key)));
-
-  /** Another tab wrote its session: say so when it continues the same design and now holds another one. */
-  function otherTabChanged(key: string | null): void {
-    if (key === null || !key.startsWith(SESSION_KEY_PREFIX) || key === sessionKey(tab!)) return;
-    let text: string | null;
-    try {
-      text = storage!.getItem(key);
-    } catch {
-      return;
-    }
-    const head = readSessionHead(text);
-    if (!head || head.tab === tab) return;
-    // The other tab went its own way (it kept its copy): what it did no longer concerns this tab.
-    if (head.lineage !== lineage) {
-      dismissKey(otherTabNotice(head.tab));
-      return;
-    }
-    const other = text === null ? null : parseSession(text, () => {});
-    if (!other || sameDesign(other.design, store.getState().design)) return;
-    const noticeKey = otherTabNotice(head.tab);
-    const keepCopy = () => {
-      // A lineage of its own: this tab's copy goes on by itself, and neither tab reports the other again.
-      lineage = newId();
-      schedule();
-    };
-    const name = other.design.name || 'untitled design';
-    postNotice(
-      'info',
-      `Another tab changed this design (it now holds “${name}”). This tab keeps its own copy, which a reload of this tab restores.`,
-      {
-        key: noticeKey,
-        persistent: true,
-        onDismiss: keepCopy,
-        actions: [
-          { label: "Keep this tab's copy", run: keepCopy },
-          {
-            label: "Open the other tab's version",
-            run: () => {
-              const latest = parseSession(storage!.getItem(key) ?? '', () => {}) ?? other;
-              store.getState().replaceDesign(latest.design);
-              store.getState().setView({ ...pickSharedView(defaultView), ...latest.view });
-              postNotice('info', 'Opened the other tab’s version. Undo brings back this tab’s copy.');
-            },
-          },
-        ],
+  } else if (!restore()) {
+    const restored = loadFullReader().then(
+      () => {
+        if (disposed) return;
+        restore();
+        wire();
+      },
+      (e: unknown) => {
+        if (disposed) return;
+        // Without the reader the session cannot be read, and writing would replace it: save nothing.
+        warn(`the autosaved session could not be restored: ${(e as Error).message}`);
+        postNotice(
+          'error',
+          `Your autosaved design could not be restored: part of the page did not load (${(e as Error).message}). It is kept as it was, and nothing is saved until the page is reloaded: reload to get it back.`,
+          { key: UNSAVED_NOTICE, persistent: true },
+        );
       },
     );
+    return Object.assign(dispose, { restored });
   }
-  return () => {
-    offs.forEach((off) => off());
-    for (const k of [UNSAVED_NOTICE]) if (hasNotice(k)) dismissKey(k);
-  };
+  wire();
+  return Object.assign(dispose, { restored: Promise.resolve() });
+
+  /** Opens a link in the fragment and keeps saving (after the restore). */
+  function wire(): void {
+    if (tab === null) {
+      tab = newId();
+      env.setTabId?.(tab);
+    }
+    lineage ??= newId();
+    openLinkFromHash(store, env);
+    offs.push(env.listen('hashchange', () => openLinkFromHash(store, env)));
+    if (!storage) return;
+
+    let pruned = false;
+    const done = (outcome: SaveOutcome) => {
+      if (outcome.ok) {
+        if (dismissKey(UNSAVED_NOTICE))
+          postNotice('info', 'Autosave works again: your design is saved in this browser.');
+        if (!pruned) pruneSessions(storage, tab!);
+        pruned = true;
+        return;
+      }
+      warn(`the design could not be autosaved: ${outcome.message}.`);
+      postNotice('error', unsavedText(outcome), { key: UNSAVED_NOTICE, persistent: true, actions: download });
+    };
+    const snapshot = (): StoredSession => ({
+      ...sessionOf(store),
+      tab: tab!,
+      lineage: lineage!,
+      savedAt: (env.timers ?? { now: () => Date.now() }).now(),
+    });
+    const saver = createAutosaver(storage, snapshot, { ...(env.timers ? { timers: env.timers } : {}), done });
+    // A duplicated tab starts with its original's id; it writes nothing until it knows the id is its own.
+    let ready = env.claimTab === undefined;
+    let wanted = true;
+    const schedule = () => {
+      wanted = true;
+      if (ready) saver.schedule();
+    };
+    if (env.claimTab) {
+      void env.claimTab(tab).then((mine) => {
+        if (!mine) {
+          tab = newId();
+          env.setTabId?.(tab);
+        }
+        ready = true;
+        if (wanted) saver.schedule();
+      });
+    }
+    // The first autosave after a reload or a link captures the opened design at once.
+    schedule();
+    // A root drag changes the design on every pointer move; writing the session (design and undo history)
+    // mid-drag would cost a frame every throttle interval, so the drag is saved on release, or when the page
+    // goes away mid-drag.
+    let heldByDrag = false;
+    const flush = () => {
+      if (heldByDrag) schedule();
+      heldByDrag = false;
+      if (ready) saver.flush();
+    };
+    offs.push(
+      store.subscribe((s, prev) => {
+        const changed = s.design !== prev.design || s.history !== prev.history || s.view !== prev.view;
+        if (s.dragging && !prev.dragging) {
+          // A write already pending (e.g. the gesture's start) waits for the release too.
+          saver.dispose();
+          heldByDrag = true;
+        } else if (s.dragging) heldByDrag ||= changed;
+        else if (changed || heldByDrag) {
+          heldByDrag = false;
+          schedule();
+        }
+      }),
+      env.listen('pagehide', flush),
+      env.listen('hidden', flush),
+      () => saver.dispose(),
+    );
+    if (env.onStorage) offs.push(env.onStorage((key) => otherTabChanged(key)));
+
+    /** Another tab wrote its session: say so when it continues the same design and now holds another one. */
+    function otherTabChanged(key: string | null): void {
+      if (key === null || !key.startsWith(SESSION_KEY_PREFIX) || key === sessionKey(tab!)) return;
+      let text: string | null;
+      try {
+        text = storage!.getItem(key);
+      } catch {
+        return;
+      }
+      const head = readSessionHead(text);
+      if (!head || head.tab === tab) return;
+      // The other tab went its own way (it kept its copy): what it did no longer concerns this tab.
+      if (head.lineage !== lineage) {
+        dismissKey(otherTabNotice(head.tab));
+        return;
+      }
+      let other: ReturnType<typeof parseSession>;
+      try {
+        other = text === null ? null : parseSession(text, () => {});
+      } catch (e) {
+        // A session this tab's quick reader cannot read: look again once the full reader is here.
+        if (e instanceof FullReaderPending)
+          void loadFullReader().then(
+            () => otherTabChanged(key),
+            () => {},
+          );
+        return;
+      }
+      if (!other || sameDesign(other.design, store.getState().design)) return;
+      const noticeKey = otherTabNotice(head.tab);
+      const keepCopy = () => {
+        // A lineage of its own: this tab's copy goes on by itself, and neither tab reports the other again.
+        lineage = newId();
+        schedule();
+      };
+      const name = other.design.name || 'untitled design';
+      postNotice(
+        'info',
+        `Another tab changed this design (it now holds “${name}”). This tab keeps its own copy, which a reload of this tab restores.`,
+        {
+          key: noticeKey,
+          persistent: true,
+          onDismiss: keepCopy,
+          actions: [
+            { label: "Keep this tab's copy", run: keepCopy },
+            {
+              label: "Open the other tab's version",
+              run: () => {
+                let latest = other;
+                try {
+                  latest = parseSession(storage!.getItem(key) ?? '', () => {}) ?? other;
+                } catch (e) {
+                  if (!(e instanceof FullReaderPending)) throw e; // the version read when the notice came
+                }
+                store.getState().replaceDesign(latest.design);
+                store.getState().setView({ ...pickSharedView(defaultView), ...latest.view });
+                postNotice('info', 'Opened the other tab’s version. Undo brings back this tab’s copy.');
+              },
+            },
+          ],
+        },
+      );
+    }
+  }
 }

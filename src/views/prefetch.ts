@@ -2,6 +2,7 @@
  * The parts of the page that are not in the first view load on demand (lazyView, dynamic import); this
  * fetches them once the first view has been painted, so opening one later shows it without a wait.
  */
+import { loadFullReader } from '../share/schema/reader.ts';
 import { prefetchSidePages } from './side/sideTabs.ts';
 import { signalRegion } from './time/TimePanel.tsx';
 
@@ -9,6 +10,8 @@ function prefetchAll(): void {
   void prefetchSidePages();
   void signalRegion.prefetch();
   void import('./pictures/savePicture.ts').catch(() => undefined); // retried when a picture is asked for
+  // The design reader for files, links and sessions the quick reader leaves to it (share/schema/reader.ts).
+  void loadFullReader().catch(() => undefined); // retried when a read needs it
 }
 
 /** Schedules the prefetch after the next paint; returns a function that cancels it if it has not started. */

@@ -6,8 +6,9 @@ import type { z } from 'zod';
 import { designDocumentV1, type DesignDocumentV1 } from './v1.ts';
 import { designDocumentV2, type DesignDocumentV2 } from './v2.ts';
 
-/** The version written today. */
-export const CURRENT_VERSION = 2;
+import { CURRENT_VERSION } from './version.ts';
+
+export { CURRENT_VERSION };
 export type CurrentDocument = DesignDocumentV2;
 
 export type DocumentResult = { ok: true; document: CurrentDocument } | { ok: false; message: string };

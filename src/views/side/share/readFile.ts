@@ -1,6 +1,7 @@
 /** Reads a design file the user picked or dropped, refusing oversized files before reading them. */
 import { MAX_FILE_BYTES, readSharedFileBytes, tooLarge } from '../../../share/designFile.ts';
 import type { ShareResult } from '../../../share/document.ts';
+import { readWhenReady } from '../../../share/schema/reader.ts';
 
 /** The design in a file, or a message naming the file and saying what was wrong. */
 export async function readDesignBlob(file: File): Promise<ShareResult> {
@@ -13,6 +14,14 @@ export async function readDesignBlob(file: File): Promise<ShareResult> {
   } catch (e) {
     return { ok: false, message: `${label} could not be read: ${(e as Error).message}` };
   }
-  const r = readSharedFileBytes(bytes);
+  let r: ShareResult;
+  try {
+    r = await readWhenReady(() => readSharedFileBytes(bytes));
+  } catch (e) {
+    return {
+      ok: false,
+      message: `${label} could not be read: part of the page did not load (${(e as Error).message}). Reload the page to try again.`,
+    };
+  }
   return r.ok ? r : { ok: false, message: `${label} was not opened. ${r.message}` };
 }
