@@ -21,7 +21,6 @@ import { buildCascade, type Cascade } from '../core/sections/index.ts';
 import { refineAtRoots, type FrequencyResponse } from '../core/response/index.ts';
 import type { Stability } from '../core/stability.ts';
 import type { Result, Zpk } from '../core/types.ts';
-import { exportC, exportCsv, exportJson } from '../core/export/index.ts';
 import { evaluateMask, type MaskResult, type RequirementMask } from '../core/mask/index.ts';
 import { memoLast } from './memo.ts';
 import { implementationOf } from './implementation.ts';
@@ -132,18 +131,4 @@ export const selectWordLengthSearch = (s: WorkbenchState): WordLengthSearch =>
 export function simulationReport(s: WorkbenchState, spec: SignalSpec): SimulationReport | null {
   const impl = implOrNull(s);
   return impl ? simulationOf(impl, spec, s.design.sampleRate) : null;
-}
-
-/** The export formats the page offers. */
-export type ExportFormat = 'c' | 'json' | 'csv';
-const exportOf = memoLast((impl: Implementation, format: ExportFormat, cName: string): string =>
-  format === 'c' ? exportC(impl, { name: cName }) : format === 'json' ? exportJson(impl) : exportCsv(impl),
-);
-/**
- * The export text of the implementation in a format (C names prefixed by `cName`, a C identifier), or null
- * when the settings do not apply.
- */
-export function exportText(s: WorkbenchState, format: ExportFormat, cName: string): string | null {
-  const impl = implOrNull(s);
-  return impl ? exportOf(impl, format, cName) : null;
 }

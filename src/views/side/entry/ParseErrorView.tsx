@@ -1,6 +1,6 @@
 /** A parse error shown in place: the message, and the offending line with the spot marked. */
 import type { InputError } from '../../../core/types.ts';
-import { locate } from './readEntry.ts';
+import { locate } from './entryText.ts';
 
 /** Characters of context kept on each side of the error in a long line. */
 const CONTEXT = 36;

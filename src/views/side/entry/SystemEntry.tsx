@@ -8,7 +8,8 @@ import { problemPlace } from '../../../core/model/check.ts';
 import { workbenchStore } from '../../../store/useWorkbench.ts';
 import { ExampleChips } from './ExampleChips.tsx';
 import { ParseErrorView } from './ParseErrorView.tsx';
-import { readEntry, typedAbout } from './readEntry.ts';
+import { typedAbout } from './entryText.ts';
+import { loadEntryReader } from './loadEntryReader.ts';
 import { shortcutAction } from '../../shortcuts.ts';
 
 interface Props {
@@ -22,7 +23,20 @@ export function SystemEntry({ text, setText, area }: Props) {
   const [readAs, setReadAs] = useState<string | null>(null);
   const id = useId();
 
-  const apply = () => {
+  const apply = async () => {
+    let readEntry: Awaited<ReturnType<typeof loadEntryReader>>['readEntry'];
+    try {
+      ({ readEntry } = await loadEntryReader());
+    } catch (e) {
+      setError({
+        text,
+        error: {
+          message: `The system was not read: part of the page did not load (${(e as Error).message}). Reload the page to try again; your design is unchanged`,
+          position: 0,
+        },
+      });
+      return;
+    }
     const r = readEntry(text);
     if (!r.ok) {
       setError({ text, error: r.error });
@@ -75,12 +89,12 @@ export function SystemEntry({ text, setText, area }: Props) {
         onKeyDown={(e) => {
           if (shortcutAction('entry', e) === 'apply') {
             e.preventDefault();
-            apply();
+            void apply();
           }
         }}
       />
       <div className="pw-entry-bar">
-        <button type="button" className="pw-primary" onClick={apply} disabled={!text.trim()}>
+        <button type="button" className="pw-primary" onClick={() => void apply()} disabled={!text.trim()}>
           Apply
         </button>
         <span className="pw-hint">Ctrl/⌘+Enter</span>

@@ -5,7 +5,9 @@
 import { parseSystem } from '../../../core/parse/index.ts';
 import { compressRoots, tfToZpk } from '../../../core/system/index.ts';
 import type { InputError, Root, Zpk } from '../../../core/types.ts';
-import { emptyDesign, type Design, type TypedCoefficients } from '../../../core/model/design.ts';
+import type { TypedCoefficients } from '../../../core/model/design.ts';
+
+export { locate, typedAbout, TYPED_NAME } from './entryText.ts';
 
 export interface EntryReading {
   zeros: Root[];
@@ -43,26 +45,4 @@ export function readEntry(
       detail,
     },
   };
-}
-
-/** The line holding a 0-based offset, with the column inside it (1-based line number). */
-export function locate(text: string, position: number): { line: number; lineText: string; column: number } {
-  const p = Math.min(Math.max(0, position), text.length);
-  const start = text.lastIndexOf('\n', p - 1) + 1;
-  const endAt = text.indexOf('\n', p);
-  const end = endAt < 0 ? text.length : endAt;
-  const line = text.slice(0, start).split('\n').length;
-  return { line, lineText: text.slice(start, end), column: p - start };
-}
-
-/** The name a typed system takes over from a scenario's or the empty design's name. */
-export const TYPED_NAME = 'Typed system';
-
-/**
- * Name and note for a design replaced by typed text: a scenario's note described other roots, so it goes
- * and the name with it; a name the user chose (a design without a note) stays.
- */
-export function typedAbout(design: Pick<Design, 'name' | 'note'>): { name?: string; note?: string } {
-  if (design.note) return { name: TYPED_NAME, note: '' };
-  return design.name === emptyDesign().name ? { name: TYPED_NAME } : {};
 }

@@ -2,7 +2,7 @@
 import { useState } from 'react';
 import type { FeedbackSign } from '../../../core/fixed/index.ts';
 import { conventionLines } from '../../../core/export/index.ts';
-import { exportText, type ExportFormat } from '../../../store/implementationDerived.ts';
+import { exportText, type ExportFormat } from '../../../store/exportDerived.ts';
 import { useWorkbench } from '../../../store/useWorkbench.ts';
 import { Segmented } from '../../chart/Segmented.tsx';
 import { CopyButton } from '../../shared/CopyButton.tsx';
