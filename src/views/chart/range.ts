@@ -2,7 +2,7 @@
  * Axis ranges that follow the data without jitter: nice rounding, a dB floor below the peak, and hysteresis
  * (grow at once when the data leaves the range, shrink only when the data has become much smaller).
  */
-import { scaleLinear } from 'd3-scale';
+import { niceDomain } from './linearScale.ts';
 
 export type Range = readonly [number, number];
 
@@ -40,8 +40,7 @@ function widenRange(lo: number, hi: number, minSpan: number): Range {
 /** [lo, hi] widened to at least `minSpan` about its middle and rounded outwards to nice tick steps. */
 export function niceRange(lo: number, hi: number, minSpan: number, ticks = 5): Range {
   const [a, b] = widenRange(lo, hi, minSpan);
-  const [n0, n1] = scaleLinear().domain([a, b]).nice(ticks).domain() as [number, number];
-  return [n0, n1];
+  return niceDomain(a, b, ticks);
 }
 
 /**

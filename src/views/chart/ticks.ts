@@ -1,5 +1,5 @@
 /** Tick positions and labels for chart axes: linear (d3's nice steps) and log (decades with 2 and 5). */
-import { scaleLinear } from 'd3-scale';
+import { ticks } from 'd3-array';
 import { formatNumber } from '../shared/format.ts';
 
 export interface Tick {
@@ -19,8 +19,7 @@ export function linearTicks(
   format: (value: number, step: number) => string = formatTickValue,
 ): Tick[] {
   if (!(Number.isFinite(lo) && Number.isFinite(hi)) || lo === hi) return [];
-  const scale = scaleLinear().domain([lo, hi]);
-  const values = scale.ticks(Math.max(1, Math.round(count)));
+  const values = ticks(lo, hi, Math.max(1, Math.round(count)));
   const step = values.length > 1 ? Math.abs(values[1]! - values[0]!) : Math.abs(hi - lo);
   return values.map((value) => ({ value, label: format(value, step) }));
 }

@@ -3,7 +3,7 @@
  * view.planeCentre, showing at least view.planeSpan z units either side of it along the shorter side.
  */
 import type { Complex } from '../../core/types.ts';
-import { scaleLinear, type ScaleLinear } from 'd3-scale';
+import { linearScale, type LinearScale } from '../chart/linearScale.ts';
 
 export interface PlaneView {
   span: number;
@@ -12,9 +12,9 @@ export interface PlaneView {
 
 export interface PlaneScale {
   /** Real part → x pixel. */
-  x: ScaleLinear<number, number>;
+  x: LinearScale;
   /** Imaginary part → y pixel (up is positive). */
-  y: ScaleLinear<number, number>;
+  y: LinearScale;
   /** Pixels per z unit. */
   k: number;
   width: number;
@@ -30,12 +30,8 @@ export function planeScale(view: PlaneView, width: number, height: number): Plan
   const halfIm = h / 2 / k;
   const { re, im } = view.centre;
   return {
-    x: scaleLinear()
-      .domain([re - halfRe, re + halfRe])
-      .range([0, w]),
-    y: scaleLinear()
-      .domain([im - halfIm, im + halfIm])
-      .range([h, 0]),
+    x: linearScale([re - halfRe, re + halfRe], [0, w]),
+    y: linearScale([im - halfIm, im + halfIm], [h, 0]),
     k,
     width: w,
     height: h,

@@ -2,8 +2,6 @@
  * Colours of the |H| shading: valleys lean to the zero colour, hills to the pole colour, 0 dB is paper.
  * Levels are banded so the shading reads like contour lines.
  */
-import { interpolateRgb } from 'd3-interpolate';
-import { rgb } from 'd3-color';
 
 /** Lowest and highest level the shading distinguishes, dB; beyond them the end colours hold. */
 export const SURFACE_DB_MIN = -60;
@@ -20,16 +18,30 @@ export const SURFACE_STOPS: [number, string][] = [
   [40, '#cf6a33'],
 ];
 
-/** CSS colour for a level in dB (banded). */
-export function surfaceColour(db: number): string {
+/** Red, green and blue (0…255) of a `#rrggbb` stop. */
+function channels(hex: string): [number, number, number] {
+  const v = parseInt(hex.slice(1), 16);
+  return [(v >> 16) & 255, (v >> 8) & 255, v & 255];
+}
+
+/** Red, green and blue (0…255, whole) for a level in dB (banded): straight lines between the stops. */
+function surfaceRgb(db: number): [number, number, number] {
   const band = Math.floor(db / SURFACE_BAND_DB) * SURFACE_BAND_DB + SURFACE_BAND_DB / 2;
   const x = Math.min(SURFACE_DB_MAX, Math.max(SURFACE_DB_MIN, band));
-  for (let i = 1; i < SURFACE_STOPS.length; i++) {
-    const [d1, c1] = SURFACE_STOPS[i]!;
-    const [d0, c0] = SURFACE_STOPS[i - 1]!;
-    if (x <= d1) return interpolateRgb(c0, c1)((x - d0) / (d1 - d0));
-  }
-  return SURFACE_STOPS[SURFACE_STOPS.length - 1]![1];
+  let i = 1;
+  while (i < SURFACE_STOPS.length - 1 && x > SURFACE_STOPS[i]![0]) i++;
+  const [d0, c0] = SURFACE_STOPS[i - 1]!;
+  const [d1, c1] = SURFACE_STOPS[i]!;
+  const t = (x - d0) / (d1 - d0);
+  const a = channels(c0);
+  const b = channels(c1);
+  return [0, 1, 2].map((k) => Math.round(a[k]! + t * (b[k]! - a[k]!))) as [number, number, number];
+}
+
+/** CSS colour for a level in dB (banded). */
+export function surfaceColour(db: number): string {
+  const [r, g, b] = surfaceRgb(db);
+  return `rgb(${r}, ${g}, ${b})`;
 }
 
 /** Number of entries in the lookup table, one per 0.5 dB over the range. */
@@ -40,10 +52,7 @@ function table(): Uint8ClampedArray {
   if (lut) return lut;
   lut = new Uint8ClampedArray(LUT_SIZE * 3);
   for (let i = 0; i < LUT_SIZE; i++) {
-    const c = rgb(surfaceColour(SURFACE_DB_MIN + i / 2));
-    lut[3 * i] = c.r;
-    lut[3 * i + 1] = c.g;
-    lut[3 * i + 2] = c.b;
+    lut.set(surfaceRgb(SURFACE_DB_MIN + i / 2), 3 * i);
   }
   return lut;
 }
