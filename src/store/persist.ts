@@ -19,8 +19,7 @@ import {
 } from '../share/autosave.ts';
 import type { SharedDesign } from '../share/document.ts';
 import { sameDesign } from '../core/model/design.ts';
-import { decodeLink } from '../share/link/index.ts';
-import { FullReaderPending, loadFullReader } from '../share/schema/reader.ts';
+import { FullReaderPending, loadFullReader, readWhenReady } from '../share/schema/reader.ts';
 import { dismissKey, hasNotice, postNotice, type NoticeAction } from './notices.ts';
 import { pickSharedView } from '../core/model/view.ts';
 import { browserStorage, consoleWarn, type KeyValueStorage, type Warn } from '../share/storage.ts';
@@ -128,32 +127,53 @@ export function browserEnv(): PersistEnv {
   };
 }
 
+type LinkReader = typeof import('../share/link/index.ts');
+let linkReader: LinkReader | null = null;
+let linkLoading: Promise<LinkReader> | null = null;
+
+/**
+ * The link codec is needed only when a page opens with a link or gets one later, so it is not in the first
+ * view: it loads then (the first view waits for it) and is prefetched after the first paint (prefetch.ts).
+ */
+export function loadLinkReader(): Promise<LinkReader> {
+  if (linkReader) return Promise.resolve(linkReader);
+  return (linkLoading ??= import('../share/link/index.ts').then(
+    (m) => (linkReader = m),
+    (e: unknown) => {
+      linkLoading = null;
+      throw e;
+    },
+  ));
+}
+
 /**
  * Opens the design link in the fragment, if there is one; returns whether a design was opened, or a promise
- * of it when the link needs the full design reader, which has not loaded yet (the fragment is read at once).
+ * of it when the link codec or the full design reader has not loaded yet (the fragment is taken at once).
  */
 export function openLinkFromHash(store: WorkbenchStore, env: PersistEnv): boolean | Promise<boolean> {
   const hash = env.hash();
   if (!/^#pw/.test(hash)) return false;
   env.clearHash();
-  try {
-    return openLink(store, hash);
-  } catch (e) {
-    if (!(e instanceof FullReaderPending)) throw e;
-    return loadFullReader().then(
-      () => openLink(store, hash),
-      (err: unknown) => {
-        postNotice(
-          'error',
-          `The design link could not be opened, so your design is unchanged: part of the page did not load (${(err as Error).message}). Reload the page with the link to try again.`,
-        );
-        return false;
-      },
+  const notLoaded = (err: unknown) => {
+    postNotice(
+      'error',
+      `The design link could not be opened, so your design is unchanged: part of the page did not load (${(err as Error).message}). Reload the page with the link to try again.`,
     );
+    return false;
+  };
+  if (linkReader) {
+    try {
+      return openLink(store, hash, linkReader);
+    } catch (e) {
+      if (!(e instanceof FullReaderPending)) throw e;
+    }
   }
+  return loadLinkReader()
+    .then((reader) => readWhenReady(() => openLink(store, hash, reader)))
+    .catch(notLoaded);
 }
 
-function openLink(store: WorkbenchStore, hash: string): boolean {
+function openLink(store: WorkbenchStore, hash: string, { decodeLink }: LinkReader): boolean {
   const r = decodeLink(hash);
   if (!r.ok) {
     postNotice('error', `The design link could not be opened, so your design is unchanged. ${r.message}`);
@@ -219,6 +239,8 @@ export function installPersistence(store: WorkbenchStore, env: PersistEnv = brow
   let tab = env.tabId?.() ?? null;
   let lineage: string | null = null;
   let disposed = false;
+  /** Settles once a link in the fragment at start has been opened (or refused). */
+  let opening: Promise<unknown> = Promise.resolve();
   /** Restores the session; false when that needs the full reader, which has not loaded yet. */
   const restore = (): boolean => {
     try {
@@ -256,6 +278,7 @@ export function installPersistence(store: WorkbenchStore, env: PersistEnv = brow
         if (disposed) return;
         restore();
         wire();
+        return opening.then(() => undefined);
       },
       (e: unknown) => {
         if (disposed) return;
@@ -271,7 +294,7 @@ export function installPersistence(store: WorkbenchStore, env: PersistEnv = brow
     return Object.assign(dispose, { restored });
   }
   wire();
-  return Object.assign(dispose, { restored: Promise.resolve() });
+  return Object.assign(dispose, { restored: opening.then(() => undefined) });
 
   /** Opens a link in the fragment and keeps saving (after the restore). */
   function wire(): void {
@@ -280,7 +303,7 @@ export function installPersistence(store: WorkbenchStore, env: PersistEnv = brow
       env.setTabId?.(tab);
     }
     lineage ??= newId();
-    openLinkFromHash(store, env);
+    opening = Promise.resolve(openLinkFromHash(store, env));
     offs.push(env.listen('hashchange', () => openLinkFromHash(store, env)));
     if (!storage) return;
 

@@ -3,6 +3,7 @@
  * fetches them once the first view has been painted, so opening one later shows it without a wait.
  */
 import { loadFullReader } from '../share/schema/reader.ts';
+import { loadLinkReader } from '../store/persist.ts';
 import { loadEntryReader } from './side/entry/loadEntryReader.ts';
 import { prefetchSidePages } from './side/sideTabs.ts';
 import { signalRegion } from './time/TimePanel.tsx';
@@ -14,6 +15,7 @@ function prefetchAll(): void {
   // The design reader for files, links and sessions the quick reader leaves to it (share/schema/reader.ts).
   void loadFullReader().catch(() => undefined); // retried when a read needs it
   void loadEntryReader().catch(() => undefined); // retried when the entry is applied
+  void loadLinkReader().catch(() => undefined); // retried when a link comes
 }
 
 /** Schedules the prefetch after the next paint; returns a function that cancels it if it has not started. */

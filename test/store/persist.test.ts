@@ -85,7 +85,7 @@ describe('page persistence', () => {
     expect(bitwiseDifference(store.getState().design, demoDesign())).toBeNull();
   });
 
-  it('opens a link on top of the restored design, one undo step away, and removes the fragment', () => {
+  it('opens a link on top of the restored design, one undo step away, and removes the fragment', async () => {
     const storage = memoryStorage();
     saveSession(
       storage,
@@ -94,7 +94,8 @@ describe('page persistence', () => {
     const shared = { design: demoDesign(), view: { frequencyAxis: 'log' as const } };
     const env = fakeEnv(storage, '#' + encodeLink(shared));
     const store = createWorkbenchStore(emptyDesign());
-    installPersistence(store, env);
+    // The link codec loads when a link comes; the page draws its first view once it is open.
+    await installPersistence(store, env).restored;
     expect(bitwiseDifference(store.getState().design, shared.design)).toBeNull();
     expect(store.getState().view.frequencyAxis).toBe('log');
     expect(env.hashNow()).toBe('');
@@ -103,12 +104,12 @@ describe('page persistence', () => {
     expect(store.getState().design.name).toBe('before');
   });
 
-  it('leaves the design untouched and posts a message for a malformed link, also on hashchange', () => {
+  it('leaves the design untouched and posts a message for a malformed link, also on hashchange', async () => {
     const storage = memoryStorage();
     const env = fakeEnv(storage, '#pw1.AAAA');
     const store = createWorkbenchStore();
     const before = store.getState().design;
-    installPersistence(store, env);
+    await installPersistence(store, env).restored;
     expect(store.getState().design).toBe(before);
     expect(store.getState().history.past).toHaveLength(0);
     expect(notices()[0]).toMatchObject({
