@@ -1,37 +1,30 @@
 /**
- * What the page's first view loads: the entry script of dist/index.html and the chunks it preloads (the
- * static imports), gzipped, against the goal of 150 kB; and every chunk loaded later (side pages, recording
- * tools, picture writer), prefetched after the first paint. Reads an existing build (`npm run build` first).
- * Run alone: `npx tsx bench/bundle.ts`.
+ * What the page's first view loads, gzipped, against the goal of 150 kB (build/firstView.ts, also checked
+ * by `npm test`), and every chunk loaded later (side pages, recording tools, design reader, link codec,
+ * parser, picture writer), prefetched after the first paint. Reads an existing build (`npm run build`
+ * first). Run alone: `npx tsx bench/bundle.ts`.
  */
-import { existsSync, readFileSync, readdirSync } from 'node:fs';
+import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { gzipSync } from 'node:zlib';
+import { checkFirstView, FIRST_VIEW_BUDGET_KB, laterScripts } from '../build/firstView.ts';
 import { cell } from './timing.ts';
 
 const DIST = fileURLToPath(new URL('../dist', import.meta.url));
-const GOAL_KB = 150;
-
-const gz = (file: string) => gzipSync(readFileSync(join(DIST, file)), { level: 9 }).length / 1024;
+const name = (f: string) => f.replace(/-[\w-]{8}\.js$/, '.js');
 
 export function benchBundle(): string {
   if (!existsSync(join(DIST, 'index.html'))) return 'No build in dist/: run `npm run build` first.';
-  const html = readFileSync(join(DIST, 'index.html'), 'utf8');
-  const first = [...html.matchAll(/(?:src|href)="\/(assets\/[^"]+\.js)"/g)].map((m) => m[1]!);
-  const later = readdirSync(join(DIST, 'assets'))
-    .filter((f) => f.endsWith('.js') && !first.includes(`assets/${f}`) && !f.includes('.worker'))
-    .map((f) => `assets/${f}`);
-  const total = first.reduce((s, f) => s + gz(f), 0);
+  const first = checkFirstView(DIST);
   const rows = [
     '| first view (entry and preloaded chunks) | gzip (kB) |',
     '|---|---|',
-    ...first.map((f) => `| ${f.replace(/-[\w-]{8}\.js$/, '.js')} | ${cell(gz(f))} |`),
-    `| **total** (goal ≤ ${GOAL_KB}) | **${cell(total)}** |`,
+    ...first.scripts.map((s) => `| ${name(s.file)} | ${cell(s.kb)} |`),
+    `| **total** (goal ≤ ${FIRST_VIEW_BUDGET_KB}) | **${cell(first.totalKb)}** |`,
     '',
     '| loaded on first use, prefetched after the first paint | gzip (kB) |',
     '|---|---|',
-    ...later.map((f) => `| ${f.replace(/-[\w-]{8}\.js$/, '.js')} | ${cell(gz(f))} |`),
+    ...laterScripts(DIST).map((s) => `| ${name(s.file)} | ${cell(s.kb)} |`),
   ];
   return rows.join('\n');
 }

@@ -12,6 +12,7 @@ const STEPS = [
   ['reference fixtures', 'test:reference'],
   ['unit and reference checks', 'test:unit'],
   ['production build', 'build'],
+  ['first view size', 'check:first-view'],
   ['end-to-end', 'test:e2e'],
 ];
 
