@@ -10,7 +10,7 @@ import { linePath } from '../chart/paths.ts';
 import { toPixels } from '../chart/pixels.ts';
 import '../compare/compare.css';
 import type { PlotOverlayProps } from './overlays.ts';
-import { fitText } from '../pictures/pictureDocument.ts';
+import { fitText } from '../pictures/fitText.ts';
 
 /** Vertical jump (fraction of the plot height) at which the wrapped phase line breaks, as the design's does. */
 const WRAP_BREAK_FRACTION = 0.6;

@@ -3,6 +3,9 @@
  * rate) above the view's own drawing, on white. Pure string building, so it runs and is tested without a
  * page; every piece of text from the design is escaped, never interpreted as markup.
  */
+import { fitText } from './fitText.ts';
+
+export { fitText };
 
 /** Height of the title band above the view when title and subtitle share one line, and when they take two, px. */
 export const TITLE_BAND_PX = 30;
@@ -84,18 +87,6 @@ export const TITLE_CHAR_PX = 8.2;
 export const SUBTITLE_CHAR_PX = 6.8;
 /** Least gap between title and subtitle on one line, px. */
 const TITLE_GAP_PX = 16;
-
-/** Text shortened with an ellipsis to at most `room` px at `charPx` per character. */
-export function fitText(text: string, room: number, charPx: number): string {
-  const max = Math.max(8, Math.floor(room / charPx));
-  const chars = Array.from(text);
-  return chars.length <= max
-    ? text
-    : `${chars
-        .slice(0, max - 1)
-        .join('')
-        .trimEnd()}…`;
-}
 
 /** How the title band is laid out on a picture `width` px wide: one line when both parts fit, else two. */
 export interface TitleLayout {
