@@ -1,6 +1,13 @@
-/** The side pages and recording tools load after the first view, and open at once when they are there. */
+/**
+ * What is not in the first view loads after it: the side pages and recording tools open at once when they
+ * are there; the design reader, link codec and parser arrive after the first paint, and an autosaved
+ * session, a link or a dropped file that needs one of them waits for it without losing anything.
+ */
 import { expect, test, type Page } from '@playwright/test';
+import { encodeLink } from '../src/share/link/index.ts';
+import { demoDesign } from '../src/store/demo.ts';
 import { openWorkbench, readDesign, saveScreenshot } from './support/app.ts';
+import { dropFile } from './support/files.ts';
 
 /** Records whether a "Loading the …" placeholder is ever put into the page from now on. */
 async function watchForPlaceholders(page: Page): Promise<() => Promise<boolean>> {
@@ -75,4 +82,125 @@ test('a page whose code has not arrived says so, and one that cannot be fetched 
   ).toBeVisible();
   await saveScreenshot(page, testInfo, 'target-page-not-loaded');
   expect(await readDesign(page)).toEqual(before);
+});
+
+/** A design document of the first release (version 1): only the full design reader reads it. */
+const FIRST_RELEASE_DESIGN = {
+  polewright: 'design',
+  version: 1,
+  name: 'Loom tension: 19 Hz sway notch (first release)',
+  note: '',
+  sampleRate: 500,
+  zeros: [{ re: 0.9716317329146739, im: 0.23649899702372468, multiplicity: 1 }],
+  poles: [{ re: 0.9424827809272337, im: 0.22940402711301294, multiplicity: 1 }],
+  gainRule: { kind: 'dc' },
+};
+
+/** Holds every request for a script whose name starts with `chunk` until the returned function is called. */
+async function holdChunk(page: Page, chunk: string): Promise<() => void> {
+  let release: () => void = () => undefined;
+  const held = new Promise<void>((r) => (release = r));
+  await page.route(new RegExp(`/${chunk}-[\\w-]+\\.js$`), async (route) => {
+    await held;
+    await route.continue();
+  });
+  return release;
+}
+
+test('the design reader, link codec and system parser are not in the first view and arrive after it', async ({
+  page,
+}) => {
+  const scripts: string[] = [];
+  page.on('request', (r) => {
+    if (r.resourceType() === 'script') scripts.push(new URL(r.url()).pathname);
+  });
+  const release = await holdChunk(page, 'migrate');
+  await openWorkbench(page);
+  // The first view is drawn while the design reader is still held back.
+  await expect(page.getByRole('textbox', { name: 'System text' })).toBeVisible();
+  release();
+  await expect
+    .poll(() => ['migrate', 'link', 'readEntry'].filter((n) => !scripts.some((s) => s.includes(`/${n}-`))))
+    .toEqual([]);
+  // The parser came with the prefetch: Apply reads at once.
+  await page.getByRole('textbox', { name: 'System text' }).fill('b = [1, 0, -1]\na = [1, -0.5, 0.25]');
+  await page.getByRole('button', { name: 'Apply' }).click();
+  await expect(page.getByTestId('read-as')).toBeVisible();
+  expect((await readDesign(page)).typed?.b).toEqual([1, 0, -1]);
+});
+
+test('a reload restores the autosaved session; one only the full reader can read waits for it and is never overwritten', async ({
+  page,
+}, testInfo) => {
+  // What the workbench wrote itself comes back at once.
+  await openWorkbench(page);
+  await page.getByRole('textbox', { name: 'Design name' }).fill('Kept across the reload');
+  await page.getByRole('textbox', { name: 'Design name' }).press('Enter');
+  await expect
+    .poll(() =>
+      page.evaluate(() => Object.keys(localStorage).some((k) => k.startsWith('polewright.session.'))),
+    )
+    .toBe(true);
+  await page.evaluate(() => window.dispatchEvent(new Event('pagehide')));
+  const kept = await readDesign(page);
+  await page.reload();
+  await page.waitForFunction(() => window.__polewright !== undefined);
+  expect(await readDesign(page)).toEqual(kept);
+
+  // This tab's session holding a first-release design: the page waits for the full reader before drawing.
+  const tab = await page.evaluate(() => sessionStorage.getItem('polewright.tab'));
+  const session = JSON.stringify({
+    polewright: 'session',
+    version: 2,
+    tab,
+    lineage: 'loom-line',
+    savedAt: Date.now(),
+    view: { timeStyle: 'line' },
+    design: FIRST_RELEASE_DESIGN,
+    past: [],
+    future: [],
+  });
+  await page.evaluate(
+    ([key, text]) => localStorage.setItem(key!, text!),
+    [`polewright.session.${tab}`, session],
+  );
+  const release = await holdChunk(page, 'migrate');
+  await page.reload({ waitUntil: 'domcontentloaded' });
+  await page.waitForTimeout(700);
+  await expect(page.getByRole('heading', { name: 'Polewright' })).toHaveCount(0);
+  expect(await page.evaluate((key) => localStorage.getItem(key), `polewright.session.${tab}`)).toBe(session);
+  release();
+  await expect(page.getByRole('heading', { name: 'Polewright' })).toBeVisible();
+  await page.waitForFunction(() => window.__polewright !== undefined);
+  const restored = await readDesign(page);
+  expect(restored.name).toBe(FIRST_RELEASE_DESIGN.name);
+  expect(restored.zeros).toEqual(FIRST_RELEASE_DESIGN.zeros);
+  // From then on it is saved as usual, in the current version.
+  await expect
+    .poll(() => page.evaluate((key) => localStorage.getItem(key), `polewright.session.${tab}`))
+    .toContain('"version":2,"name":"Loom tension');
+  await saveScreenshot(page, testInfo, 'restored-first-release-session');
+});
+
+test('a link opens once its codec arrives, and a dropped file waits for the design reader when it needs it', async ({
+  page,
+}) => {
+  const shared = { design: { ...demoDesign(), name: 'Opened while the codec loaded' }, view: {} };
+  const releaseLink = await holdChunk(page, 'link');
+  const releaseReader = await holdChunk(page, 'migrate');
+  await page.goto(`/#${encodeLink(shared)}`);
+  await page.waitForTimeout(500);
+  await expect(page.getByRole('heading', { name: 'Polewright' })).toHaveCount(0);
+  releaseLink();
+  await page.waitForFunction(() => window.__polewright !== undefined);
+  expect((await readDesign(page)).name).toBe('Opened while the codec loaded');
+  await expect(page.getByRole('status').filter({ hasText: 'from the link' })).toBeVisible();
+
+  // A first-release file needs the full reader, which is still held: it opens when the reader comes.
+  await dropFile(page, 'loom.json', JSON.stringify(FIRST_RELEASE_DESIGN));
+  await page.waitForTimeout(300);
+  expect((await readDesign(page)).name).toBe('Opened while the codec loaded');
+  releaseReader();
+  await expect(page.getByTestId('notice').filter({ hasText: 'from loom.json' })).toBeVisible();
+  expect((await readDesign(page)).name).toBe(FIRST_RELEASE_DESIGN.name);
 });
