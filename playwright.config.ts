@@ -6,10 +6,10 @@ import { CHROMIUM_ARGS, CHROMIUM_PATH } from './e2e/support/chromium.ts';
 
 /**
  * End-to-end tests drive Debian's Chromium (never a downloaded browser) against the production build
- * (`vite preview`), one server for the whole run. Tests run in parallel workers; each worker starts Chromium
- * once and gives every test a fresh context (its own storage). One browser per worker rather than one for
- * all: the clipboard belongs to the browser process, so tests that copy would race across workers, and a
- * download's local path exists only in a browser started by the worker.
+ * (`vite preview`): one server and one browser for the whole run (e2e/support/sharedBrowser.ts starts it;
+ * PW_BROWSER_PER_WORKER=1 gives each worker its own). Tests run in parallel workers, each test in a fresh
+ * browser context (its own storage); tests that read the clipboard back take a lock (e2e/support/clipboard.ts),
+ * and downloads are read as streams (a remote browser has no local download path).
  * PW_DEV=1 serves the sources with `vite` instead. The port is PW_PORT, or one derived from this checkout's
  * path, so two checkouts run side by side without a setting and never share a server by accident (PW_REUSE=1
  * reuses one already running on the port). PW_WORKERS sets the number of workers (default: CPUs, at least 2).
@@ -32,7 +32,9 @@ export default defineConfig({
   fullyParallel: true,
   workers: Number(process.env.PW_WORKERS ?? Math.max(2, cpus().length)),
   reporter: [['list']],
+  globalSetup: './e2e/support/sharedBrowser.ts',
   use: {
+    ...(process.env.PW_BROWSER_WS ? { connectOptions: { wsEndpoint: process.env.PW_BROWSER_WS } } : {}),
     baseURL: `http://127.0.0.1:${port}`,
     viewport: { width: 1440, height: 900 },
     launchOptions: {

@@ -3,9 +3,9 @@
  * gives a lasting notice with the design one click away as a file; two pages of one browser keep their own
  * sessions across reloads, and each says when the other changed the same design.
  */
-import { readFileSync } from 'node:fs';
 import { expect, test, type Page } from '@playwright/test';
 import { openWorkbench, readDesign, saveScreenshot } from './support/app.ts';
+import { downloadBytes } from './support/files.ts';
 
 const nameField = (page: Page) => page.getByRole('textbox', { name: 'Design name' });
 
@@ -56,7 +56,7 @@ test('a full storage gives a lasting notice that downloads the design, and goes 
     page.waitForEvent('download'),
     notice.getByRole('button', { name: 'Download the design' }).click(),
   ]);
-  const file = JSON.parse(readFileSync((await download.path())!, 'utf8'));
+  const file = JSON.parse((await downloadBytes(download)).toString('utf8'));
   expect(file.name).toBe('Changed while the storage is full');
   expect(file.zeros).toEqual((await readDesign(page)).zeros);
   // Space again: the next change is saved, the notice goes, and a reload keeps the change.

@@ -1,5 +1,6 @@
 /** The system entry: every form reads to the same roots; errors show in place and change nothing. */
 import { expect, test } from '@playwright/test';
+import { withClipboard } from './support/clipboard.ts';
 import {
   applySystem,
   entryBox,
@@ -107,9 +108,11 @@ test('the current system is shown in every form, each copyable', async ({ page, 
   await expect(forms).toContainText('y[n]');
   await expect(forms).toContainText('z^-1');
   const copy = forms.getByRole('button', { name: /^Copy/ }).first();
-  await copy.click();
-  await expect(copy).toHaveText('Copied');
-  const clip = await page.evaluate(() => navigator.clipboard.readText());
+  const clip = await withClipboard(async () => {
+    await copy.click();
+    await expect(copy).toHaveText('Copied');
+    return page.evaluate(() => navigator.clipboard.readText());
+  });
   expect(clip).toContain('y[n]');
 
   // "Edit" puts a form in the entry box, focused; applying it gives back the same system.

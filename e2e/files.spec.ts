@@ -4,6 +4,7 @@
  * and pictures of each view as SVG and PNG.
  */
 import { expect, test, type Page } from '@playwright/test';
+import { withClipboard } from './support/clipboard.ts';
 import { resolveGain } from '../src/core/gainRule.ts';
 import { responseZpk } from '../src/core/response/index.ts';
 import type { Design } from '../src/core/model/design.ts';
@@ -68,10 +69,12 @@ test('Copy link shows the link in the address bar until the next edit; it opens 
   await context.grantPermissions(['clipboard-read', 'clipboard-write']);
   const before = await readDesign(page);
   const entries = await page.evaluate(() => history.length);
-  await page.getByRole('button', { name: 'Copy link' }).click();
   const status = page.getByTestId('link-status');
-  await expect(status).toContainText(/^Copied · \d+ characters$/);
-  const copied = await page.evaluate(() => navigator.clipboard.readText());
+  const copied = await withClipboard(async () => {
+    await page.getByRole('button', { name: 'Copy link' }).click();
+    await expect(status).toContainText(/^Copied · \d+ characters$/);
+    return page.evaluate(() => navigator.clipboard.readText());
+  });
   expect(page.url()).toBe(copied);
   expect(Number(/(\d+) characters/.exec(await status.innerText())![1])).toBe(copied.length);
   expect(await page.evaluate(() => history.length)).toBe(entries);

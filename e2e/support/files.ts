@@ -3,7 +3,6 @@
  * drop a file on the page, use the library, pin a reference and download pictures of the views.
  */
 import { expect, type Download, type Locator, type Page } from '@playwright/test';
-import { readFile } from 'node:fs/promises';
 
 /** Shows the "Share" page of the side column. */
 export async function openKeepShare(page: Page): Promise<void> {
@@ -19,8 +18,14 @@ export async function downloadOf(
   const pending = page.waitForEvent('download');
   await click();
   const download = await pending;
-  const path = await download.path();
-  return { download, bytes: await readFile(path) };
+  return { download, bytes: await downloadBytes(download) };
+}
+
+/** The bytes of a finished download (read as a stream: the shared browser is remote to the worker). */
+export async function downloadBytes(download: Download): Promise<Buffer> {
+  const chunks: Buffer[] = [];
+  for await (const chunk of await download.createReadStream()) chunks.push(chunk as Buffer);
+  return Buffer.concat(chunks);
 }
 
 /** Saves the design file through the page and returns its name and text. */
