@@ -141,6 +141,25 @@ def _fft_cases(rng):
     return {"source": "numpy.fft.fft", "cases": out}
 
 
+def fft_test_signal(n):
+    """The long-transform test signal, also built in test/core/signal/fft.test.ts: tones, a chirp and a step."""
+    j = np.arange(n, dtype=float)
+    re = np.sin(0.37 * j) + 0.25 * np.cos(1.3 * j + 1e-3 * (j % 97) ** 2) + (j < n / 3)
+    im = np.cos(0.21 * j) - 0.5 * np.sin(2.9 * j)
+    return re + 1j * im
+
+
+def _fft_long_cases():
+    """Transforms too long to store whole: every length the page or command line may use for a segment (powers
+    of two, audio rates, lengths with factors 3, 5 and 7, primes), stored as 48 spread bins and the energy."""
+    out = []
+    for n in [4096, 65536, 6000, 44100, 48000, 1000, 2310, 12288, 10007, 8191, 4999 * 2]:
+        X = np.fft.fft(fft_test_signal(n))
+        bins = sorted(set(int(k) for k in np.linspace(0, n - 1, 48).round()) | {1, n // 2})
+        out.append({"n": n, "bins": bins, "X": X[bins], "energy": float(np.sum(np.abs(X) ** 2))})
+    return {"source": "numpy.fft.fft", "cases": out}
+
+
 def _window_cases():
     names = {"rectangular": "boxcar", "hann": "hann", "hamming": "hamming", "blackman": "blackman",
              "flattop": "flattop"}
@@ -211,6 +230,11 @@ def fixtures():
             derive=_filter_outputs,
         ),
         "signal_fft": Fixture(_fft_cases(rng), tol=Tol(rel=0, why="seeded PCG64 normal samples: the same bits everywhere")),
+        "signal_fft_long": Fixture(
+            _fft_long_cases(),
+            tol=Tol(rel=1e-12, abs=1e-9, why="numpy.fft of a signal built from np.sin/np.cos: the transform's and "
+                    "sin's rounding over up to 65 536 terms"),
+        ),
         "signal_windows": Fixture(
             _window_cases(),
             tol=Tol(rel=ULPS * EPS, abs=ULPS * EPS, why="sums of np.cos terms bounded by 1: a few ulps of 1"),

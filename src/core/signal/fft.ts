@@ -1,36 +1,62 @@
 /**
- * Discrete Fourier transform of any length, in place on separate real and imaginary Float64Arrays.
- * Powers of two use the iterative radix-2 Cooley–Tukey algorithm (Cooley & Tukey 1965) with a cached
- * bit-reversal table and twiddle table; every other length uses Bluestein's chirp-z algorithm
- * (Bluestein 1970), which rewrites the DFT as a convolution done with power-of-two transforms.
+ * Discrete Fourier transform of any length, on separate real and imaginary Float64Arrays (and, for Welch,
+ * of real signals). Internally a self-sorting mixed-radix Cooley–Tukey transform (Cooley & Tukey 1965) in
+ * the Stockham arrangement (no bit reversal: each pass reads one buffer and writes the other in order), on
+ * interleaved re/im data, with written-out butterflies for radices 4, 2, 3 and 5 and a direct one for any
+ * other prime factor. A length whose prime factors make that slow uses Bluestein's chirp-z algorithm
+ * (Bluestein 1970) instead: the DFT as a convolution done with transforms of a nearby length with small
+ * factors, the chirp and its transform computed once per length and kept in the plan.
  * Forward: X[k] = Σ x[j]·e^{-2πijk/n}, no scaling; inverse scales by 1/n (numpy.fft's convention).
  */
+import { butterflyPass } from './fftPasses.ts';
 
-interface Radix2Plan {
+/** One pass of the transform: a radix and where its twiddle factors start in the plan's table. */
+interface Pass {
+  radix: number;
+  /** Sub-transforms already combined before this pass (the product of the earlier radices). */
+  l1: number;
+  /** Length of each remaining sub-transform divided by the radix: n / (l1·radix). */
+  ido: number;
+  twOffset: number;
+}
+
+interface DirectPlan {
+  kind: 'direct';
   n: number;
-  rev: Uint32Array;
-  /** cos(2πk/n) and sin(2πk/n) for k < n/2. */
-  cos: Float64Array;
-  sin: Float64Array;
+  passes: Pass[];
+  /** Interleaved twiddles of every pass: e^{-2πi·j·i/(ido·radix)} for j = 1..radix−1, i < ido. */
+  twiddles: Float64Array;
+  /** Two interleaved work buffers of n complex values (the passes alternate between them). */
+  a: Float64Array;
+  b: Float64Array;
 }
 
 interface BluesteinPlan {
+  kind: 'bluestein';
   n: number;
   m: number;
-  /** The chirp e^{-iπk²/n}, k < n. */
-  wRe: Float64Array;
-  wIm: Float64Array;
-  /** FFT of the conjugate chirp laid out circularly in length m. */
-  bRe: Float64Array;
-  bIm: Float64Array;
-  workRe: Float64Array;
-  workIm: Float64Array;
+  inner: DirectPlan;
+  /** The chirp e^{-iπk²/n}, k < n, interleaved. */
+  chirp: Float64Array;
+  /** Transform of the conjugate chirp laid out circularly in length m, scaled by 1/m, interleaved. */
+  kernel: Float64Array;
+  /** Work buffers: m values for the convolution, n for the result. */
+  work: Float64Array;
+  out: Float64Array;
 }
+
+type Plan = DirectPlan | BluesteinPlan;
 
 /** Plans kept per length; a Welch run uses one or two lengths, so the cache stays small. */
 const MAX_CACHED_PLANS = 32;
-const radix2Plans = new Map<number, Radix2Plan>();
-const bluesteinPlans = new Map<number, BluesteinPlan>();
+const plans = new Map<number, Plan>();
+
+/** Radices the transform writes out; any other prime factor goes through the direct (slower) butterfly. */
+const FAST_RADICES = [4, 2, 3, 5];
+/** Rough cost per sample of one pass of each radix, in units of a radix-2 pass (for choosing Bluestein). */
+function passCost(radix: number): number {
+  return radix === 2 ? 1 : radix === 3 ? 1.6 : radix === 4 ? 1.5 : radix === 5 ? 2.2 : radix;
+}
 
 /** True when n is a power of two (1, 2, 4, ...). */
 export function isPowerOfTwo(n: number): boolean {
@@ -44,148 +70,229 @@ export function nextPowerOfTwo(n: number): number {
   return m;
 }
 
-function remember<T>(cache: Map<number, T>, n: number, make: () => T): T {
-  let plan = cache.get(n);
+/** The radices of n: fours first, then a two, threes, fives, then any other prime factors ascending. */
+export function factorize(n: number): number[] {
+  const out: number[] = [];
+  let r = n;
+  for (const f of FAST_RADICES) {
+    while (r % f === 0) {
+      out.push(f);
+      r /= f;
+    }
+  }
+  for (let p = 7; p * p <= r; p += 2) {
+    while (r % p === 0) {
+      out.push(p);
+      r /= p;
+    }
+  }
+  if (r > 1) out.push(r);
+  return out;
+}
+
+/** Smallest m ≥ n whose only prime factors are 2, 3 and 5. */
+export function smoothLength(n: number): number {
+  let best = nextPowerOfTwo(n);
+  for (let p5 = 1; p5 < best; p5 *= 5) {
+    for (let p35 = p5; p35 < best; p35 *= 3) {
+      let m = p35;
+      while (m < n) m *= 2;
+      if (m < best) best = m;
+    }
+  }
+  return best;
+}
+
+function directCost(n: number): number {
+  return n * factorize(n).reduce((s, f) => s + passCost(f), 0);
+}
+
+function remember(n: number, make: () => Plan): Plan {
+  let plan = plans.get(n);
   if (plan === undefined) {
-    if (cache.size >= MAX_CACHED_PLANS) cache.delete(cache.keys().next().value!);
+    if (plans.size >= MAX_CACHED_PLANS) plans.delete(plans.keys().next().value!);
     plan = make();
-    cache.set(n, plan);
+    plans.set(n, plan);
   }
   return plan;
 }
 
-function radix2Plan(n: number): Radix2Plan {
-  return remember(radix2Plans, n, () => {
-    const bits = Math.round(Math.log2(n));
-    const rev = new Uint32Array(n);
-    for (let i = 1; i < n; i++) rev[i] = (rev[i >> 1]! >> 1) | ((i & 1) << (bits - 1));
-    const half = n >> 1;
-    const cos = new Float64Array(half);
-    const sin = new Float64Array(half);
-    for (let k = 0; k < half; k++) {
-      cos[k] = Math.cos((2 * Math.PI * k) / n);
-      sin[k] = Math.sin((2 * Math.PI * k) / n);
-    }
-    return { n, rev, cos, sin };
-  });
-}
-
-function radix2(re: Float64Array, im: Float64Array, inverse: boolean): void {
-  const n = re.length;
-  if (n <= 1) return;
-  const { rev, cos, sin } = radix2Plan(n);
-  for (let i = 0; i < n; i++) {
-    const j = rev[i]!;
-    if (j > i) {
-      const tr = re[i]!;
-      re[i] = re[j]!;
-      re[j] = tr;
-      const ti = im[i]!;
-      im[i] = im[j]!;
-      im[j] = ti;
-    }
+function directPlan(n: number): DirectPlan {
+  const radices = factorize(n);
+  const passes: Pass[] = [];
+  let l1 = 1;
+  let size = 0;
+  for (const radix of radices) {
+    const ido = n / (l1 * radix);
+    passes.push({ radix, l1, ido, twOffset: size });
+    size += 2 * (radix - 1) * ido;
+    l1 *= radix;
   }
-  const sign = inverse ? 1 : -1;
-  // Twiddle outermost within a stage: each factor is read once per stage rather than once per butterfly.
-  for (let size = 2; size <= n; size <<= 1) {
-    const half = size >> 1;
-    const step = n / size;
-    for (let k = 0; k < half; k++) {
-      const wr = cos[k * step]!;
-      const wi = sign * sin[k * step]!;
-      for (let a = k; a < n; a += size) {
-        const b = a + half;
-        const br = re[b]!;
-        const bi = im[b]!;
-        const xr = br * wr - bi * wi;
-        const xi = br * wi + bi * wr;
-        const ar = re[a]!;
-        const ai = im[a]!;
-        re[b] = ar - xr;
-        im[b] = ai - xi;
-        re[a] = ar + xr;
-        im[a] = ai + xi;
+  const twiddles = new Float64Array(size);
+  for (const { radix, ido, twOffset } of passes) {
+    const len = ido * radix;
+    for (let j = 1; j < radix; j++) {
+      for (let i = 0; i < ido; i++) {
+        // (j·i) mod len keeps the angle below 2π, so it is exact to a rounding however long the transform.
+        const angle = (-2 * Math.PI * ((j * i) % len)) / len;
+        const at = twOffset + 2 * ((j - 1) * ido + i);
+        twiddles[at] = Math.cos(angle);
+        twiddles[at + 1] = Math.sin(angle);
       }
     }
   }
+  return { kind: 'direct', n, passes, twiddles, a: new Float64Array(2 * n), b: new Float64Array(2 * n) };
 }
 
-function bluesteinPlan(n: number): BluesteinPlan {
-  return remember(bluesteinPlans, n, () => {
-    const m = nextPowerOfTwo(2 * n - 1);
-    const wRe = new Float64Array(n);
-    const wIm = new Float64Array(n);
-    for (let k = 0; k < n; k++) {
-      // k² mod 2n keeps the angle small, so it stays accurate for long transforms.
-      const angle = (Math.PI * ((k * k) % (2 * n))) / n;
-      wRe[k] = Math.cos(angle);
-      wIm[k] = -Math.sin(angle);
+function planFor(n: number): Plan {
+  return remember(n, () => {
+    const largest = factorize(n).at(-1) ?? 1;
+    if (largest > 5) {
+      const m = smoothLength(2 * n - 1);
+      if (2 * directCost(m) + 8 * m < directCost(n)) return bluesteinPlan(n, m);
     }
-    const bRe = new Float64Array(m);
-    const bIm = new Float64Array(m);
-    bRe[0] = wRe[0]!;
-    bIm[0] = -wIm[0]!;
-    for (let k = 1; k < n; k++) {
-      bRe[k] = bRe[m - k] = wRe[k]!;
-      bIm[k] = bIm[m - k] = -wIm[k]!;
-    }
-    radix2(bRe, bIm, false);
-    return { n, m, wRe, wIm, bRe, bIm, workRe: new Float64Array(m), workIm: new Float64Array(m) };
+    return directPlan(n);
   });
 }
 
-function bluestein(re: Float64Array, im: Float64Array, inverse: boolean): void {
-  const n = re.length;
-  const { m, wRe, wIm, bRe, bIm, workRe: ar, workIm: ai } = bluesteinPlan(n);
-  // The inverse DFT is the forward one of the conjugate, conjugated.
-  const s = inverse ? -1 : 1;
-  ar.fill(0);
-  ai.fill(0);
+function bluesteinPlan(n: number, m: number): BluesteinPlan {
+  const inner = planFor(m);
+  if (inner.kind !== 'direct') throw new Error(`fft: length ${m} should have small factors`);
+  const chirp = new Float64Array(2 * n);
   for (let k = 0; k < n; k++) {
-    const xr = re[k]!;
-    const xi = s * im[k]!;
-    ar[k] = xr * wRe[k]! - xi * wIm[k]!;
-    ai[k] = xr * wIm[k]! + xi * wRe[k]!;
+    // k² mod 2n keeps the angle small, so it stays accurate for long transforms.
+    const angle = (-Math.PI * ((k * k) % (2 * n))) / n;
+    chirp[2 * k] = Math.cos(angle);
+    chirp[2 * k + 1] = Math.sin(angle);
   }
-  radix2(ar, ai, false);
+  const kernel = new Float64Array(2 * m);
+  kernel[0] = chirp[0]! / m;
+  kernel[1] = -chirp[1]! / m;
+  for (let k = 1; k < n; k++) {
+    const re = chirp[2 * k]! / m;
+    const im = -chirp[2 * k + 1]! / m;
+    kernel[2 * k] = kernel[2 * (m - k)] = re;
+    kernel[2 * k + 1] = kernel[2 * (m - k) + 1] = im;
+  }
+  const out = runDirect(inner, kernel);
+  kernel.set(out);
+  const work = new Float64Array(2 * m);
+  const result = new Float64Array(2 * n);
+  return { kind: 'bluestein', n, m, inner, chirp, kernel, work, out: result };
+}
+
+/** Runs the passes on data (interleaved, n values), which is left as is; returns the buffer holding X. */
+function runDirect(plan: DirectPlan, data: Float64Array): Float64Array {
+  let src = data;
+  let dst = plan.a;
+  for (const p of plan.passes) {
+    butterflyPass(p.radix, p.ido, p.l1, src, dst, plan.twiddles, p.twOffset);
+    src = dst;
+    dst = dst === plan.a ? plan.b : plan.a;
+  }
+  if (src === data) plan.a.set(data.subarray(0, 2 * plan.n));
+  return src === data ? plan.a : src;
+}
+
+/**
+ * Bluestein: X_k = w_k·Σ_j (x_j w_j)·conj(w_{k−j}) with w_j = e^{-iπj²/n}, the sum a circular convolution in
+ * length m done as forward transforms (the inverse as the conjugate of a forward one).
+ */
+function runBluestein(plan: BluesteinPlan, data: Float64Array): Float64Array {
+  const { n, m, chirp, kernel, inner, work, out } = plan;
+  work.fill(0, 2 * n);
+  for (let k = 0; k < n; k++) {
+    const xr = data[2 * k]!;
+    const xi = data[2 * k + 1]!;
+    const wr = chirp[2 * k]!;
+    const wi = chirp[2 * k + 1]!;
+    work[2 * k] = xr * wr - xi * wi;
+    work[2 * k + 1] = xr * wi + xi * wr;
+  }
+  const A = runDirect(inner, work);
+  // conj(A·K) into work, then its forward transform is conj of the inverse (the 1/m sits in the kernel).
   for (let k = 0; k < m; k++) {
-    const r = ar[k]! * bRe[k]! - ai[k]! * bIm[k]!;
-    ai[k] = ar[k]! * bIm[k]! + ai[k]! * bRe[k]!;
-    ar[k] = r;
+    const ar = A[2 * k]!;
+    const ai = A[2 * k + 1]!;
+    const kr = kernel[2 * k]!;
+    const ki = kernel[2 * k + 1]!;
+    work[2 * k] = ar * kr - ai * ki;
+    work[2 * k + 1] = -(ar * ki + ai * kr);
   }
-  radix2(ar, ai, true);
+  const C = runDirect(inner, work);
   for (let k = 0; k < n; k++) {
-    const cr = ar[k]! / m;
-    const ci = ai[k]! / m;
-    re[k] = cr * wRe[k]! - ci * wIm[k]!;
-    im[k] = s * (cr * wIm[k]! + ci * wRe[k]!);
+    const cr = C[2 * k]!;
+    const ci = -C[2 * k + 1]!;
+    const wr = chirp[2 * k]!;
+    const wi = chirp[2 * k + 1]!;
+    out[2 * k] = cr * wr - ci * wi;
+    out[2 * k + 1] = cr * wi + ci * wr;
+  }
+  return out;
+}
+
+/** The forward DFT of interleaved data (n complex values); the result is in a buffer the plan may reuse. */
+function transform(n: number, data: Float64Array): Float64Array {
+  const plan = planFor(n);
+  return plan.kind === 'direct' ? runDirect(plan, data) : runBluestein(plan, data);
+}
+
+const interleaved = new Map<number, Float64Array>();
+function scratch(n: number): Float64Array {
+  let s = interleaved.get(n);
+  if (!s) {
+    if (interleaved.size >= MAX_CACHED_PLANS) interleaved.delete(interleaved.keys().next().value!);
+    s = new Float64Array(2 * n);
+    interleaved.set(n, s);
+  }
+  return s;
+}
+
+function complexTransform(re: Float64Array, im: Float64Array, inverse: boolean, what: string): void {
+  if (re.length !== im.length) throw new Error(`${what}: re has ${re.length} values, im ${im.length}`);
+  const n = re.length;
+  if (n <= 1) return;
+  const s = scratch(n);
+  // The inverse DFT is the forward one of the conjugate, conjugated.
+  const sign = inverse ? -1 : 1;
+  for (let k = 0; k < n; k++) {
+    s[2 * k] = re[k]!;
+    s[2 * k + 1] = sign * im[k]!;
+  }
+  const X = transform(n, s);
+  const scale = inverse ? 1 / n : 1;
+  for (let k = 0; k < n; k++) {
+    re[k] = X[2 * k]! * scale;
+    im[k] = sign * X[2 * k + 1]! * scale;
   }
 }
 
 /** Forward DFT of (re, im) in place, any length, unscaled. */
 export function fft(re: Float64Array, im: Float64Array): void {
-  if (re.length !== im.length) throw new Error(`fft: re has ${re.length} values, im ${im.length}`);
-  if (isPowerOfTwo(re.length) || re.length === 0) radix2(re, im, false);
-  else bluestein(re, im, false);
+  complexTransform(re, im, false, 'fft');
 }
 
 /** Inverse DFT of (re, im) in place, any length, scaled by 1/n so that ifft(fft(x)) = x. */
 export function ifft(re: Float64Array, im: Float64Array): void {
-  if (re.length !== im.length) throw new Error(`ifft: re has ${re.length} values, im ${im.length}`);
-  const n = re.length;
-  if (isPowerOfTwo(n) || n === 0) radix2(re, im, true);
-  else bluestein(re, im, true);
-  for (let k = 0; k < n; k++) {
-    re[k] = re[k]! / n;
-    im[k] = im[k]! / n;
-  }
+  complexTransform(re, im, true, 'ifft');
 }
 
-/** Scratch for realFft, reused between calls of the same length. */
-const realScratch = new Map<
-  number,
-  { re: Float64Array; im: Float64Array; c?: Float64Array; s?: Float64Array }
->();
+/** cos and sin of −2πk/n for k ≤ n/2, per even length, for untangling a packed real transform. */
+const untangleTables = new Map<number, Float64Array>();
+function untangleTable(n: number): Float64Array {
+  let t = untangleTables.get(n);
+  if (!t) {
+    if (untangleTables.size >= MAX_CACHED_PLANS) untangleTables.delete(untangleTables.keys().next().value!);
+    const h = n >> 1;
+    t = new Float64Array(2 * (h + 1));
+    for (let k = 0; k <= h; k++) {
+      t[2 * k] = Math.cos((-2 * Math.PI * k) / n);
+      t[2 * k + 1] = Math.sin((-2 * Math.PI * k) / n);
+    }
+    untangleTables.set(n, t);
+  }
+  return t;
+}
 
 /**
  * DFT of a real signal, bins 0..floor(n/2) (the rest are their conjugates), written into outRe/outIm.
@@ -197,42 +304,39 @@ export function realFft(x: ArrayLike<number>, outRe: Float64Array, outIm: Float6
   const bins = (n >> 1) + 1;
   if (outRe.length < bins || outIm.length < bins) throw new Error(`realFft: outputs need ${bins} values`);
   if (n % 2 === 1 || n < 4) {
-    const scratch = remember(realScratch, n, () => ({ re: new Float64Array(n), im: new Float64Array(n) }));
-    for (let j = 0; j < n; j++) scratch.re[j] = x[j]!;
-    scratch.im.fill(0);
-    fft(scratch.re, scratch.im);
-    outRe.set(scratch.re.subarray(0, bins));
-    outIm.set(scratch.im.subarray(0, bins));
+    const s = scratch(n);
+    for (let j = 0; j < n; j++) {
+      s[2 * j] = x[j]!;
+      s[2 * j + 1] = 0;
+    }
+    const X = n === 1 ? s : transform(n, s);
+    for (let k = 0; k < bins; k++) {
+      outRe[k] = X[2 * k]!;
+      outIm[k] = X[2 * k + 1]!;
+    }
     return;
   }
   const h = n >> 1;
-  const z = remember(realScratch, n, () => {
-    const c = new Float64Array(h + 1);
-    const s = new Float64Array(h + 1);
-    for (let k = 0; k <= h; k++) {
-      c[k] = Math.cos((-2 * Math.PI * k) / n);
-      s[k] = Math.sin((-2 * Math.PI * k) / n);
-    }
-    return { re: new Float64Array(h), im: new Float64Array(h), c, s };
-  });
-  const cs = z.c!;
-  const sn = z.s!;
-  for (let j = 0; j < h; j++) {
-    z.re[j] = x[2 * j]!;
-    z.im[j] = x[2 * j + 1]!;
-  }
-  fft(z.re, z.im);
+  const s = scratch(h);
+  // x[2j] + i·x[2j+1] is exactly x read as interleaved complex values.
+  for (let j = 0; j < n; j++) s[j] = x[j]!;
+  const Z = transform(h, s);
+  const t = untangleTable(n);
   for (let k = 0; k <= h; k++) {
-    const k1 = k % h;
-    const k2 = (h - k) % h;
+    const k1 = k === h ? 0 : k;
+    const k2 = k === 0 ? 0 : h - k;
+    const z1r = Z[2 * k1]!;
+    const z1i = Z[2 * k1 + 1]!;
+    const z2r = Z[2 * k2]!;
+    const z2i = Z[2 * k2 + 1]!;
     // E = (Z[k] + conj Z[h-k]) / 2 is the even samples' DFT, O = (Z[k] - conj Z[h-k]) / 2i the odd ones'.
-    const er = (z.re[k1]! + z.re[k2]!) / 2;
-    const ei = (z.im[k1]! - z.im[k2]!) / 2;
-    const or = (z.im[k1]! + z.im[k2]!) / 2;
-    const oi = -(z.re[k1]! - z.re[k2]!) / 2;
-    const c = cs[k]!;
-    const s = sn[k]!;
-    outRe[k] = er + or * c - oi * s;
-    outIm[k] = ei + or * s + oi * c;
+    const er = (z1r + z2r) / 2;
+    const ei = (z1i - z2i) / 2;
+    const or = (z1i + z2i) / 2;
+    const oi = -(z1r - z2r) / 2;
+    const c = t[2 * k]!;
+    const sn = t[2 * k + 1]!;
+    outRe[k] = er + or * c - oi * sn;
+    outIm[k] = ei + or * sn + oi * c;
   }
 }

@@ -1,11 +1,33 @@
 import { describe, it, expect } from 'vitest';
-import { fft, ifft, realFft, isPowerOfTwo, nextPowerOfTwo } from '../../../src/core/signal/index.ts';
+import {
+  factorize,
+  fft,
+  ifft,
+  realFft,
+  isPowerOfTwo,
+  nextPowerOfTwo,
+  smoothLength,
+} from '../../../src/core/signal/index.ts';
 import { mulberry32 } from '../../../src/core/random.ts';
 import { loadFixture } from '../../helpers/fixtures.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 
 type C = { re: number; im: number };
 const fx = loadFixture<{ cases: { n: number; x: C[]; X: C[] }[] }>('signal_fft');
+const long = loadFixture<{ cases: { n: number; bins: number[]; X: C[]; energy: number }[] }>(
+  'signal_fft_long',
+);
+
+/** The long-transform test signal, as test/reference/gen_signal.py fft_test_signal builds it. */
+function fftTestSignal(n: number): { re: Float64Array; im: Float64Array } {
+  const re = new Float64Array(n);
+  const im = new Float64Array(n);
+  for (let j = 0; j < n; j++) {
+    re[j] = Math.sin(0.37 * j) + 0.25 * Math.cos(1.3 * j + 1e-3 * (j % 97) ** 2) + (j < n / 3 ? 1 : 0);
+    im[j] = Math.cos(0.21 * j) - 0.5 * Math.sin(2.9 * j);
+  }
+  return { re, im };
+}
 
 /** The DFT straight from its definition, O(n²), as an independent check. */
 function naiveDft(re: Float64Array, im: Float64Array): [Float64Array, Float64Array] {
@@ -73,6 +95,57 @@ describe('fft', () => {
       expectClose(re, R.subarray(0, bins), { abs: 1e-13 * n }, `re n=${n}`);
       expectClose(im, I.subarray(0, bins), { abs: 1e-13 * n }, `im n=${n}`);
     }
+  });
+
+  it('long transforms of every kind of length match numpy.fft.fft at spread bins and in energy', () => {
+    for (const c of long.cases) {
+      const { re, im } = fftTestSignal(c.n);
+      const a = re.slice();
+      const b = im.slice();
+      fft(a, b);
+      // Rounding grows like log n; the signal's peak bins are about n in size.
+      const tol = 1e-14 * c.n * Math.log2(c.n);
+      expectClose(
+        c.bins.map((k) => a[k]!),
+        c.X.map((v) => v.re),
+        { abs: tol },
+        `re n=${c.n}`,
+      ); // numpy.fft.fft 2.4
+      expectClose(
+        c.bins.map((k) => b[k]!),
+        c.X.map((v) => v.im),
+        { abs: tol },
+        `im n=${c.n}`,
+      );
+      let energy = 0;
+      for (let k = 0; k < c.n; k++) energy += a[k]! ** 2 + b[k]! ** 2;
+      expectClose(energy, c.energy, { rel: 1e-12 }, `energy n=${c.n}`);
+      ifft(a, b);
+      expectClose(a, re, { abs: 1e-15 * c.n }, `inverse n=${c.n}`);
+    }
+  });
+
+  it('realFft of long signals equals the complex transform of the same real signal', () => {
+    for (const n of [65536, 6000, 48000, 44100, 20014, 8191]) {
+      const { re } = fftTestSignal(n);
+      const a = re.slice();
+      const b = new Float64Array(n);
+      fft(a, b);
+      const bins = (n >> 1) + 1;
+      const outRe = new Float64Array(bins);
+      const outIm = new Float64Array(bins);
+      realFft(re, outRe, outIm);
+      expectClose(outRe, a.subarray(0, bins), { abs: 1e-14 * n }, `re n=${n}`);
+      expectClose(outIm, b.subarray(0, bins), { abs: 1e-14 * n }, `im n=${n}`);
+    }
+  });
+
+  it('factorize and smoothLength', () => {
+    expect(factorize(65536)).toEqual([4, 4, 4, 4, 4, 4, 4, 4]);
+    expect(factorize(6000)).toEqual([4, 4, 3, 5, 5, 5]);
+    expect(factorize(2 * 7 * 7 * 11)).toEqual([2, 7, 7, 11]);
+    expect(factorize(10007)).toEqual([10007]);
+    expect([1, 7, 11, 49, 97, 101, 20013].map(smoothLength)).toEqual([1, 8, 12, 50, 100, 108, 20250]);
   });
 
   it('power-of-two helpers', () => {

@@ -1,0 +1,336 @@
+/**
+ * The butterflies of the self-sorting mixed-radix FFT (fft.ts), one pass each, on interleaved complex data.
+ * A pass of radix p, with l1 sub-transforms already combined and ido = n/(l1·p), reads the input as
+ * cc(i, j, k) = element i + ido·(j + p·k) and writes ch(i, k, m) = element i + ido·(k + l1·m):
+ *   ch(i, k, m) = tw(m, i) · Σ_j cc(i, j, k)·e^{-2πi·jm/p},   tw(m, i) = e^{-2πi·m·i/(ido·p)},
+ * the decimation-in-frequency step of Cooley–Tukey in the Stockham (autosort) order, so the last pass
+ * leaves the transform in natural order. Forward transform only (the inverse conjugates around it).
+ */
+
+/** Runs one pass of the given radix from cc into ch with the twiddles at tw[twOff...]. */
+export function butterflyPass(
+  radix: number,
+  ido: number,
+  l1: number,
+  cc: Float64Array,
+  ch: Float64Array,
+  tw: Float64Array,
+  twOff: number,
+): void {
+  switch (radix) {
+    case 4:
+      return pass4(ido, l1, cc, ch, tw, twOff);
+    case 2:
+      return pass2(ido, l1, cc, ch, tw, twOff);
+    case 3:
+      return pass3(ido, l1, cc, ch, tw, twOff);
+    case 5:
+      return pass5(ido, l1, cc, ch, tw, twOff);
+    default:
+      return passGeneral(radix, ido, l1, cc, ch, tw, twOff);
+  }
+}
+
+function pass2(
+  ido: number,
+  l1: number,
+  cc: Float64Array,
+  ch: Float64Array,
+  tw: Float64Array,
+  t0: number,
+): void {
+  const sIn = 2 * ido;
+  const sOut = 2 * ido * l1;
+  for (let k = 0; k < l1; k++) {
+    const inK = 2 * ido * 2 * k;
+    const outK = 2 * ido * k;
+    for (let i = 0; i < ido; i++) {
+      const a = inK + 2 * i;
+      const o = outK + 2 * i;
+      const ar = cc[a]!;
+      const ai = cc[a + 1]!;
+      const br = cc[a + sIn]!;
+      const bi = cc[a + sIn + 1]!;
+      ch[o] = ar + br;
+      ch[o + 1] = ai + bi;
+      const dr = ar - br;
+      const di = ai - bi;
+      const wr = tw[t0 + 2 * i]!;
+      const wi = tw[t0 + 2 * i + 1]!;
+      ch[o + sOut] = dr * wr - di * wi;
+      ch[o + sOut + 1] = dr * wi + di * wr;
+    }
+  }
+}
+
+function pass4(
+  ido: number,
+  l1: number,
+  cc: Float64Array,
+  ch: Float64Array,
+  tw: Float64Array,
+  t0: number,
+): void {
+  const sIn = 2 * ido;
+  const sOut = 2 * ido * l1;
+  const t1 = t0 + 2 * ido;
+  const t2 = t0 + 4 * ido;
+  if (ido === 1) {
+    for (let k = 0; k < l1; k++) {
+      const a = 8 * k;
+      const o = 2 * k;
+      const a0r = cc[a]!;
+      const a0i = cc[a + 1]!;
+      const a1r = cc[a + 2]!;
+      const a1i = cc[a + 3]!;
+      const a2r = cc[a + 4]!;
+      const a2i = cc[a + 5]!;
+      const a3r = cc[a + 6]!;
+      const a3i = cc[a + 7]!;
+      const s02r = a0r + a2r;
+      const s02i = a0i + a2i;
+      const d02r = a0r - a2r;
+      const d02i = a0i - a2i;
+      const s13r = a1r + a3r;
+      const s13i = a1i + a3i;
+      const d13r = a1r - a3r;
+      const d13i = a1i - a3i;
+      ch[o] = s02r + s13r;
+      ch[o + 1] = s02i + s13i;
+      ch[o + sOut] = d02r + d13i;
+      ch[o + sOut + 1] = d02i - d13r;
+      ch[o + 2 * sOut] = s02r - s13r;
+      ch[o + 2 * sOut + 1] = s02i - s13i;
+      ch[o + 3 * sOut] = d02r - d13i;
+      ch[o + 3 * sOut + 1] = d02i + d13r;
+    }
+    return;
+  }
+  for (let k = 0; k < l1; k++) {
+    const inK = 8 * ido * k;
+    const outK = 2 * ido * k;
+    for (let i = 0; i < ido; i++) {
+      const a = inK + 2 * i;
+      const o = outK + 2 * i;
+      const a0r = cc[a]!;
+      const a0i = cc[a + 1]!;
+      const a1r = cc[a + sIn]!;
+      const a1i = cc[a + sIn + 1]!;
+      const a2r = cc[a + 2 * sIn]!;
+      const a2i = cc[a + 2 * sIn + 1]!;
+      const a3r = cc[a + 3 * sIn]!;
+      const a3i = cc[a + 3 * sIn + 1]!;
+      const s02r = a0r + a2r;
+      const s02i = a0i + a2i;
+      const d02r = a0r - a2r;
+      const d02i = a0i - a2i;
+      const s13r = a1r + a3r;
+      const s13i = a1i + a3i;
+      const d13r = a1r - a3r;
+      const d13i = a1i - a3i;
+      ch[o] = s02r + s13r;
+      ch[o + 1] = s02i + s13i;
+      // X1 = d02 − i·d13, X2 = s02 − s13, X3 = d02 + i·d13, each times its twiddle.
+      const x1r = d02r + d13i;
+      const x1i = d02i - d13r;
+      const x2r = s02r - s13r;
+      const x2i = s02i - s13i;
+      const x3r = d02r - d13i;
+      const x3i = d02i + d13r;
+      const w1r = tw[t0 + 2 * i]!;
+      const w1i = tw[t0 + 2 * i + 1]!;
+      const w2r = tw[t1 + 2 * i]!;
+      const w2i = tw[t1 + 2 * i + 1]!;
+      const w3r = tw[t2 + 2 * i]!;
+      const w3i = tw[t2 + 2 * i + 1]!;
+      ch[o + sOut] = x1r * w1r - x1i * w1i;
+      ch[o + sOut + 1] = x1r * w1i + x1i * w1r;
+      ch[o + 2 * sOut] = x2r * w2r - x2i * w2i;
+      ch[o + 2 * sOut + 1] = x2r * w2i + x2i * w2r;
+      ch[o + 3 * sOut] = x3r * w3r - x3i * w3i;
+      ch[o + 3 * sOut + 1] = x3r * w3i + x3i * w3r;
+    }
+  }
+}
+
+/** cos and sin of 2π/3. */
+const C3 = -0.5;
+const S3 = Math.sqrt(3) / 2;
+
+function pass3(
+  ido: number,
+  l1: number,
+  cc: Float64Array,
+  ch: Float64Array,
+  tw: Float64Array,
+  t0: number,
+): void {
+  const sIn = 2 * ido;
+  const sOut = 2 * ido * l1;
+  const t1 = t0 + 2 * ido;
+  for (let k = 0; k < l1; k++) {
+    const inK = 6 * ido * k;
+    const outK = 2 * ido * k;
+    for (let i = 0; i < ido; i++) {
+      const a = inK + 2 * i;
+      const o = outK + 2 * i;
+      const a0r = cc[a]!;
+      const a0i = cc[a + 1]!;
+      const a1r = cc[a + sIn]!;
+      const a1i = cc[a + sIn + 1]!;
+      const a2r = cc[a + 2 * sIn]!;
+      const a2i = cc[a + 2 * sIn + 1]!;
+      const sr = a1r + a2r;
+      const si = a1i + a2i;
+      ch[o] = a0r + sr;
+      ch[o + 1] = a0i + si;
+      const mr = a0r + C3 * sr;
+      const mi = a0i + C3 * si;
+      // −i·sin(2π/3)·(a1 − a2)
+      const qr = S3 * (a1i - a2i);
+      const qi = -S3 * (a1r - a2r);
+      const x1r = mr + qr;
+      const x1i = mi + qi;
+      const x2r = mr - qr;
+      const x2i = mi - qi;
+      const w1r = tw[t0 + 2 * i]!;
+      const w1i = tw[t0 + 2 * i + 1]!;
+      const w2r = tw[t1 + 2 * i]!;
+      const w2i = tw[t1 + 2 * i + 1]!;
+      ch[o + sOut] = x1r * w1r - x1i * w1i;
+      ch[o + sOut + 1] = x1r * w1i + x1i * w1r;
+      ch[o + 2 * sOut] = x2r * w2r - x2i * w2i;
+      ch[o + 2 * sOut + 1] = x2r * w2i + x2i * w2r;
+    }
+  }
+}
+
+/** cos and sin of 2π/5 and 4π/5. */
+const C51 = Math.cos((2 * Math.PI) / 5);
+const S51 = Math.sin((2 * Math.PI) / 5);
+const C52 = Math.cos((4 * Math.PI) / 5);
+const S52 = Math.sin((4 * Math.PI) / 5);
+
+function pass5(
+  ido: number,
+  l1: number,
+  cc: Float64Array,
+  ch: Float64Array,
+  tw: Float64Array,
+  t0: number,
+): void {
+  const sIn = 2 * ido;
+  const sOut = 2 * ido * l1;
+  for (let k = 0; k < l1; k++) {
+    const inK = 10 * ido * k;
+    const outK = 2 * ido * k;
+    for (let i = 0; i < ido; i++) {
+      const a = inK + 2 * i;
+      const o = outK + 2 * i;
+      const a0r = cc[a]!;
+      const a0i = cc[a + 1]!;
+      const a1r = cc[a + sIn]!;
+      const a1i = cc[a + sIn + 1]!;
+      const a2r = cc[a + 2 * sIn]!;
+      const a2i = cc[a + 2 * sIn + 1]!;
+      const a3r = cc[a + 3 * sIn]!;
+      const a3i = cc[a + 3 * sIn + 1]!;
+      const a4r = cc[a + 4 * sIn]!;
+      const a4i = cc[a + 4 * sIn + 1]!;
+      const s14r = a1r + a4r;
+      const s14i = a1i + a4i;
+      const d14r = a1r - a4r;
+      const d14i = a1i - a4i;
+      const s23r = a2r + a3r;
+      const s23i = a2i + a3i;
+      const d23r = a2r - a3r;
+      const d23i = a2i - a3i;
+      ch[o] = a0r + s14r + s23r;
+      ch[o + 1] = a0i + s14i + s23i;
+      // Xm = a0 + cos·(sums) − i·sin·(differences), for m = 1, 4 and m = 2, 3.
+      const m1r = a0r + C51 * s14r + C52 * s23r;
+      const m1i = a0i + C51 * s14i + C52 * s23i;
+      const m2r = a0r + C52 * s14r + C51 * s23r;
+      const m2i = a0i + C52 * s14i + C51 * s23i;
+      const q1r = S51 * d14i + S52 * d23i;
+      const q1i = -(S51 * d14r + S52 * d23r);
+      const q2r = S52 * d14i - S51 * d23i;
+      const q2i = -(S52 * d14r - S51 * d23r);
+      out5(ch, o + sOut, m1r + q1r, m1i + q1i, tw, t0 + 2 * i);
+      out5(ch, o + 2 * sOut, m2r + q2r, m2i + q2i, tw, t0 + 2 * ido + 2 * i);
+      out5(ch, o + 3 * sOut, m2r - q2r, m2i - q2i, tw, t0 + 4 * ido + 2 * i);
+      out5(ch, o + 4 * sOut, m1r - q1r, m1i - q1i, tw, t0 + 6 * ido + 2 * i);
+    }
+  }
+}
+
+function out5(ch: Float64Array, o: number, xr: number, xi: number, tw: Float64Array, w: number): void {
+  const wr = tw[w]!;
+  const wi = tw[w + 1]!;
+  ch[o] = xr * wr - xi * wi;
+  ch[o + 1] = xr * wi + xi * wr;
+}
+
+/** Roots of unity e^{-2πiq/p}, q < p, per prime radix p of the direct butterfly. */
+const rootTables = new Map<number, Float64Array>();
+function rootsOfUnity(p: number): Float64Array {
+  let t = rootTables.get(p);
+  if (!t) {
+    t = new Float64Array(2 * p);
+    for (let q = 0; q < p; q++) {
+      t[2 * q] = Math.cos((2 * Math.PI * q) / p);
+      t[2 * q + 1] = -Math.sin((2 * Math.PI * q) / p);
+    }
+    rootTables.set(p, t);
+  }
+  return t;
+}
+
+/** Any radix p by the DFT's definition (p² products per butterfly): for prime factors above 5. */
+function passGeneral(
+  p: number,
+  ido: number,
+  l1: number,
+  cc: Float64Array,
+  ch: Float64Array,
+  tw: Float64Array,
+  t0: number,
+): void {
+  const roots = rootsOfUnity(p);
+  const sIn = 2 * ido;
+  const sOut = 2 * ido * l1;
+  const ar = new Float64Array(p);
+  const ai = new Float64Array(p);
+  for (let k = 0; k < l1; k++) {
+    const inK = 2 * ido * p * k;
+    const outK = 2 * ido * k;
+    for (let i = 0; i < ido; i++) {
+      const a = inK + 2 * i;
+      const o = outK + 2 * i;
+      for (let j = 0; j < p; j++) {
+        ar[j] = cc[a + j * sIn]!;
+        ai[j] = cc[a + j * sIn + 1]!;
+      }
+      for (let m = 0; m < p; m++) {
+        let xr = 0;
+        let xi = 0;
+        for (let j = 0, q = 0; j < p; j++, q = (q + m) % p) {
+          const cr = roots[2 * q]!;
+          const ci = roots[2 * q + 1]!;
+          xr += ar[j]! * cr - ai[j]! * ci;
+          xi += ar[j]! * ci + ai[j]! * cr;
+        }
+        if (m === 0) {
+          ch[o] = xr;
+          ch[o + 1] = xi;
+        } else {
+          const w = t0 + 2 * ((m - 1) * ido + i);
+          const wr = tw[w]!;
+          const wi = tw[w + 1]!;
+          ch[o + m * sOut] = xr * wr - xi * wi;
+          ch[o + m * sOut + 1] = xr * wi + xi * wr;
+        }
+      }
+    }
+  }
+}
