@@ -1,36 +1,100 @@
 /**
- * Scripted drag benchmark (not a test): builds the page, serves it with `vite preview` on port 4190, opens it
- * in headless Debian Chromium, loads an order-32 design through the system entry and drags a pole pair
- * along a 300-step arc with real (CDP) mouse events, one move per frame. Reports the frame cost and the
- * time from pointer event to every view updated, with the |H| shading off and on.
- * Run: `npx tsx bench/drag.ts` (or `npm run bench -- drag`). With PW_DIST=<dir> it serves that already built
- * directory instead of building, so two builds can be measured alternately in one session.
+ * Scripted drag benchmark (not a test): serves one or more production builds with `vite preview`, opens each
+ * in headless Debian Chromium and drags a pole pair along an arc with real (CDP) mouse events, one move per
+ * frame, in every side tab, with the |H| shading off and on, without and with a 10-minute 48 kHz recording
+ * loaded, at several orders. Reports per move the main-thread work read from a Chromium trace (steadier than
+ * wall time on a shared machine) beside the wall-clock figures of the in-page probe, and the load average.
+ *
+ * Run: `npx tsx bench/drag.ts` (or `npm run bench -- drag`) builds the working tree and measures it.
+ * `PW_DIST=<dir>` serves that already built directory instead; `PW_DISTS=before=<dir>,after=<dir>` serves
+ * several and alternates between them configuration by configuration in one session, so a comparison sees
+ * the same machine load. Narrower runs: PW_DRAG_ORDERS=8,32, PW_DRAG_TABS=system,design,
+ * PW_DRAG_RECORDING=off|on, PW_DRAG_SHADING=off|on, PW_DRAG_STEPS=120, PW_BENCH_PORT=4412 (first port), PW_DRAG_TRACE_DIR=<dir> keeps the traces.
  */
 import { spawn, execFileSync, type ChildProcess } from 'node:child_process';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { get } from 'node:http';
+import { loadavg, tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { chromium, type Page } from '@playwright/test';
+import { chromium, type Browser, type Page } from '@playwright/test';
 import { CHROMIUM_ARGS, CHROMIUM_PATH } from '../e2e/support/chromium.ts';
 import { installDragProbe, nextSample, zToClient, type DragSample } from './dragPage.ts';
+import { TRACE_CATEGORIES, workPerMove, type TraceEvent } from './dragTrace.ts';
 import { cell, median, percentile } from './timing.ts';
+import { runDesigner, type DesignerSpec } from '../src/core/design/index.ts';
+import { maskFromDesigner } from '../src/core/mask/index.ts';
+import { encodeLink } from '../src/share/link/codec.ts';
+import type { Design } from '../src/core/model/design.ts';
+import { makeHum, makePinkNoise, writeWav } from '../src/core/signal/index.ts';
 
-const PORT = 4190;
-const STEPS = 300;
 const ROOT = fileURLToPath(new URL('..', import.meta.url));
 const POLE = 'svg.pw-plane-svg g[data-kind="pole"][data-index="0"]:not([data-mirror])';
+const FS = 48000;
+const RECORDING_SECONDS = 600;
+const TABS = ['system', 'design', 'target', 'signal', 'share'] as const;
+const TAB_LABEL: Record<(typeof TABS)[number], string> = {
+  system: 'System',
+  design: 'Design',
+  target: 'Target',
+  signal: 'Signal',
+  share: 'Share',
+};
 
-/** Order 32: 16 zero pairs on the unit circle and 16 pole pairs at radius 0.9–0.97, spread over the band. */
-function order32Text(): string {
-  const zeros: string[] = [];
-  const poles: string[] = [];
-  for (let i = 0; i < 16; i++) {
-    zeros.push(`1∠${(7 + 10.5 * i).toFixed(1)}°`);
-    poles.push(`${(0.9 + 0.004 * i).toFixed(3)}∠${(4 + 10.5 * i).toFixed(1)}°`);
-  }
-  return `zeros: ${zeros.join(', ')}; poles: ${poles.join(', ')}; gain: 1`;
+const env = (k: string) => process.env[k]?.trim() || undefined;
+const list = (k: string, all: readonly string[]) => env(k)?.split(',') ?? [...all];
+const STEPS = Number(env('PW_DRAG_STEPS') ?? 120);
+const ORDERS = list('PW_DRAG_ORDERS', ['2', '8', '32', '64']).map(Number);
+const TAB_IDS = list('PW_DRAG_TABS', TABS) as (typeof TABS)[number][];
+const RECORDING = list('PW_DRAG_RECORDING', ['off', 'on']);
+const SHADING = list('PW_DRAG_SHADING', ['off', 'on']);
+const FIRST_PORT = Number(env('PW_BENCH_PORT') ?? 4412);
+
+/**
+ * An order-N Butterworth low-pass at 48 kHz (N/2 pole pairs, N zeros at z = −1) designed by the engine with
+ * its requirement (pass band to 4 kHz, stop band from 8 kHz), so the designer's status and the mask are live.
+ */
+function designOfOrder(order: number): Design {
+  const spec: DesignerSpec = {
+    kind: 'iir',
+    fs: FS,
+    family: 'butterworth',
+    response: 'lowpass',
+    order,
+    edgesHz: [6000],
+    passbandHz: [4000],
+    stopbandHz: [8000],
+    rippleDb: 1,
+    attenuationDb: 40,
+  };
+  const r = runDesigner(spec);
+  if (!r.ok) throw new Error(`bench design of order ${order}: ${r.error.message}`);
+  const mask = maskFromDesigner(spec);
+  return {
+    sampleRate: FS,
+    zeros: r.value.zpk.zeros,
+    poles: r.value.zpk.poles,
+    gainRule: { kind: 'fixed', value: r.value.zpk.gain },
+    name: `Bench order ${order}`,
+    note: r.value.note,
+    designer: spec,
+    ...(mask ? { mask } : {}),
+  };
 }
 
-/** Resolves once the server answers 200 (node:http, since fetch refuses port 4190 as a "bad port"). */
+/** Ten minutes at 48 kHz, 16-bit: 50 Hz hum with harmonics over pink noise (invented), in a temporary file. */
+function writeRecording(dir: string): string {
+  const n = FS * RECORDING_SECONDS;
+  const hum = makeHum(n, FS, { fundamentalHz: 50, harmonicAmplitudes: [0.2, 0.05, 0.03], driftHz: 0.1 });
+  const noise = makePinkNoise(n, 7, 0.05);
+  for (let i = 0; i < n; i++) hum[i] = hum[i]! + noise[i]!;
+  const { bytes } = writeWav({ format: 'i16', sampleRate: FS, channels: [hum] });
+  const path = join(dir, 'hopper-10min.wav');
+  writeFileSync(path, bytes);
+  return path;
+}
+
+/** Resolves once the server answers 200 (node:http, since fetch refuses some local ports as "bad"). */
 async function waitForServer(url: string, ms: number): Promise<void> {
   const until = Date.now() + ms;
   const ok = () =>
@@ -48,94 +112,175 @@ async function waitForServer(url: string, ms: number): Promise<void> {
   throw new Error(`vite preview did not answer on ${url}`);
 }
 
-async function dragOnce(page: Page): Promise<DragSample[]> {
-  await page.evaluate(installDragProbe, POLE);
-  const arc = (i: number) => {
-    const w = ((4 + (60 * i) / STEPS) * Math.PI) / 180;
-    return { re: 0.9 * Math.cos(w), im: 0.9 * Math.sin(w) };
-  };
-  const from = await page.evaluate(zToClient, arc(0));
-  await page.mouse.move(from.x, from.y);
-  await page.mouse.down();
-  await page.evaluate(() => (window.__dragBench!.samples.length = 0));
-  for (let i = 1; i <= STEPS; i++) {
-    const p = await page.evaluate(zToClient, arc(i));
-    await page.mouse.move(p.x, p.y);
-    await page.evaluate(nextSample, i);
-  }
-  await page.mouse.up();
-  const samples = await page.evaluate(() => window.__dragBench!.samples);
-  await page.keyboard.press('Control+z');
-  return samples;
+interface Build {
+  name: string;
+  dir: string | undefined;
+  port: number;
+  server?: ChildProcess;
 }
 
-type Metric = 'work' | 'script' | 'render' | 'latency';
-
-function row(label: string, s: DragSample[]): string {
-  const stats = (k: Metric) => {
-    const xs = s.map((x) => x[k]);
-    return `${cell(median(xs))} | ${cell(percentile(xs, 95))}`;
-  };
-  const drawn = s.filter((x) => x.drawn).length;
-  return `| ${label} | ${stats('work')} | ${stats('script')} | ${stats('render')} | ${stats('latency')} | ${drawn}/${s.length} |`;
-}
-
-/** Runs the benchmark and returns a markdown table (times in ms). */
-export async function benchDrag(): Promise<string> {
-  const dist = process.env.PW_DIST;
-  if (!dist) {
-    execFileSync('npx', ['vite', 'build', '--logLevel', 'error'], { cwd: ROOT, stdio: 'inherit' });
-  }
-  const server: ChildProcess = spawn(
+function serve(b: Build): ChildProcess {
+  return spawn(
     'npx',
     [
       'vite',
       'preview',
       '--port',
-      String(PORT),
+      String(b.port),
       '--strictPort',
       '--host',
       '127.0.0.1',
-      ...(dist ? ['--outDir', dist] : []),
+      ...(b.dir ? ['--outDir', b.dir] : []),
     ],
-    {
-      cwd: ROOT,
-      stdio: 'ignore',
-      detached: true,
-    },
+    { cwd: ROOT, stdio: 'ignore', detached: true },
   );
+}
+
+/** Reads a trace returned as a stream by Tracing.end. */
+async function traceDrag(page: Page, drag: () => Promise<void>): Promise<TraceEvent[]> {
+  const cdp = await page.context().newCDPSession(page);
+  const done = new Promise<string>((resolve) =>
+    cdp.once('Tracing.tracingComplete', (e) => resolve(e.stream!)),
+  );
+  await cdp.send('Tracing.start', { categories: TRACE_CATEGORIES, transferMode: 'ReturnAsStream' });
+  await drag();
+  await cdp.send('Tracing.end');
+  const handle = await done;
+  let text = '';
+  for (;;) {
+    const chunk = await cdp.send('IO.read', { handle });
+    text += chunk.base64Encoded ? Buffer.from(chunk.data, 'base64').toString('utf8') : chunk.data;
+    if (chunk.eof) break;
+  }
+  await cdp.send('IO.close', { handle });
+  await cdp.detach();
+  const keep = env('PW_DRAG_TRACE_DIR');
+  if (keep) writeFileSync(join(keep, `trace-${Date.now()}.json`), text);
+  const parsed = JSON.parse(text) as TraceEvent[] | { traceEvents: TraceEvent[] };
+  return Array.isArray(parsed) ? parsed : parsed.traceEvents;
+}
+
+interface Result {
+  samples: DragSample[];
+  work: number[];
+  load: number;
+}
+
+async function dragOnce(page: Page): Promise<Result> {
+  await page.evaluate(installDragProbe, POLE);
+  // From the pole where it is, along its own circle 40° up and back (every step a new place).
+  const pole = await page.evaluate(() => window.__polewright!.design().poles[0]!);
+  const r = Math.hypot(pole.re, pole.im);
+  const theta = Math.atan2(pole.im, pole.re);
+  const arc = Array.from({ length: STEPS + 1 }, (_, i) => {
+    const up = 1 - Math.abs((2 * i) / STEPS - 1);
+    const w = Math.min(theta + ((40 * Math.PI) / 180) * up, (175 * Math.PI) / 180);
+    return { re: r * Math.cos(w), im: r * Math.sin(w) };
+  });
+  const points = await page.evaluate(zToClient, arc);
+  await page.mouse.move(points[0]!.x, points[0]!.y);
+  await page.mouse.down();
+  await page.evaluate(() => (window.__dragBench!.samples.length = 0));
+  const load0 = loadavg()[0]!;
+  const events = await traceDrag(page, async () => {
+    for (let i = 1; i <= STEPS; i++) {
+      await page.mouse.move(points[i]!.x, points[i]!.y);
+      await page.evaluate(nextSample, i);
+    }
+  });
+  const load = (load0 + loadavg()[0]!) / 2;
+  await page.mouse.up();
+  const samples = await page.evaluate(() => window.__dragBench!.samples);
+  await page.keyboard.press('Control+z');
+  // Let the release's own work (refinement, background jobs) finish before the next drag starts.
+  await page.waitForTimeout(400);
+  return { samples, work: workPerMove(events).slice(0, samples.length), load };
+}
+
+async function openPage(browser: Browser, b: Build, order: number, recording: string | null): Promise<Page> {
+  const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
+  const link = encodeLink({ design: designOfOrder(order), view: {} });
+  await page.goto(`http://127.0.0.1:${b.port}/#${link}`);
+  await page.waitForFunction((n) => window.__polewright?.design().poles.length === n, order / 2);
+  if (recording) {
+    await page.getByRole('tab', { name: 'Signal' }).click();
+    await page.getByTestId('recording-file-input').first().setInputFiles(recording);
+    await page
+      .locator('section[aria-label="recording"]')
+      .getByTestId('signal-info')
+      .waitFor({ timeout: 120_000 });
+    await page.waitForTimeout(1000);
+  }
+  return page;
+}
+
+const stats = (xs: number[]) => `${cell(median(xs))} | ${cell(percentile(xs, 95))}`;
+
+function row(build: string, order: number, tab: string, shading: string, rec: string, r: Result): string {
+  const drawn = r.samples.filter((x) => x.drawn).length;
+  const wall = (k: 'work' | 'latency') => stats(r.samples.map((x) => x[k]));
+  return `| ${build} | ${rec} | ${order} | ${tab} | ${shading} | ${stats(r.work)} | ${wall('work')} | ${wall('latency')} | ${drawn}/${r.samples.length} | ${r.load.toFixed(1)} |`;
+}
+
+/** Runs the benchmark and returns a markdown table (times in ms). */
+export async function benchDrag(): Promise<string> {
+  const builds: Build[] = [];
+  const many = env('PW_DISTS');
+  if (many) {
+    many.split(',').forEach((pair, i) => {
+      const [name, dir] = pair.split('=');
+      builds.push({ name: name!, dir, port: FIRST_PORT + i });
+    });
+  } else {
+    const dir = env('PW_DIST');
+    if (!dir) execFileSync('npx', ['vite', 'build', '--logLevel', 'error'], { cwd: ROOT, stdio: 'inherit' });
+    builds.push({ name: 'this', dir, port: FIRST_PORT });
+  }
+  const tmp = mkdtempSync(join(tmpdir(), 'pw-drag-'));
+  const recording = RECORDING.includes('on') ? writeRecording(tmp) : null;
+  for (const b of builds) b.server = serve(b);
   const browser = await chromium.launch({
     executablePath: CHROMIUM_PATH,
-    args: [
-      ...CHROMIUM_ARGS,
-      // 4190 is on Chromium's list of restricted ports; allow it for this local server only.
-      `--explicitly-allowed-ports=${PORT}`,
-    ],
+    args: [...CHROMIUM_ARGS, `--explicitly-allowed-ports=${builds.map((b) => b.port).join(',')}`],
   });
+  const rows: string[] = [];
   try {
-    await waitForServer(`http://127.0.0.1:${PORT}/`, 30_000);
-    const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
-    await page.goto(`http://127.0.0.1:${PORT}/`);
-    await page.getByLabel('System text').fill(order32Text());
-    await page.getByRole('button', { name: 'Apply' }).click();
-    await page.waitForFunction(() => window.__polewright?.design().poles.length === 16);
-    const off = await dragOnce(page);
-    await page.getByLabel('|H| shading').check();
-    const on = await dragOnce(page);
+    for (const b of builds) await waitForServer(`http://127.0.0.1:${b.port}/`, 30_000);
+    for (const rec of RECORDING) {
+      for (const order of ORDERS) {
+        const pages = new Map<string, Page>();
+        for (const b of builds)
+          pages.set(b.name, await openPage(browser, b, order, rec === 'on' ? recording : null));
+        for (const tab of TAB_IDS) {
+          for (const shading of SHADING) {
+            for (const b of builds) {
+              const page = pages.get(b.name)!;
+              await page.getByRole('tab', { name: TAB_LABEL[tab] }).click();
+              await page.getByLabel('|H| shading').setChecked(shading === 'on');
+              const r = await dragOnce(page);
+              const line = row(b.name, order, tab, shading, rec, r);
+              rows.push(line);
+              console.error(line);
+            }
+          }
+        }
+        for (const p of pages.values()) await p.close();
+      }
+    }
     const version = browser.version();
     return [
-      `Order-32 design (16 zero pairs, 16 pole pairs), ${STEPS}-step drag of a pole pair, one mouse move per frame, headless Chromium ${version} (software rendering), 1440×900. Times in ms.`,
+      `${STEPS}-step drag of a pole pair (40° along its circle and back) of an order-N Butterworth low-pass (designer and mask live), one mouse move per frame, headless Chromium ${version} (software rendering), 1440×900; recording: a 10-minute 48 kHz 16-bit WAV loaded and shown before/after. Times in ms; load = 1-minute load average during the drag.`,
       '',
-      '| shading | frame work median | p95 | script median | p95 | render+paint median | p95 | event→painted median | p95 | updates drawn |',
-      '| --- | --- | --- | --- | --- | --- | --- | --- | --- | --- |',
-      row('off', off),
-      row('on (64-cell grid while dragging)', on),
+      '| build | recording | order | tab | shading | main thread median | p95 | wall frame work median | p95 | event→painted median | p95 | drawn | load |',
+      '| --- | --- | --: | --- | --- | --: | --: | --: | --: | --: | --: | --- | --: |',
+      ...rows,
       '',
-      'frame work = script (first pointermove listener → React render of every panel done) + render+paint (animation-frame callback → task posted from it, after style, layout and paint); idle time waiting for the frame is left out. event→painted: from the event timestamp to the end of that paint. Goal: frame work p95 < 16.7 ms, every update drawn.',
+      'main thread = the renderer main thread’s task time per move from the Chromium trace (input dispatch to the compositor commit, the probe’s own read-out included). wall frame work = script + render+paint by the in-page stopwatches (idle time excluded). Goal: main thread p95 ≤ 16.7 ms (stretch 8.3 ms), every update drawn.',
     ].join('\n');
   } finally {
     await browser.close();
-    if (server.pid) process.kill(-server.pid, 'SIGTERM');
+    for (const b of builds) if (b.server?.pid) process.kill(-b.server.pid, 'SIGTERM');
+    rmSync(tmp, { recursive: true, force: true });
   }
 }
 

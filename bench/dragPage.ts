@@ -25,6 +25,7 @@ declare global {
 
 /** Installs the listeners; `selector` picks the dragged root's marker. */
 export function installDragProbe(selector: string): void {
+  if (window.__dragBench) return; // once per page: a second set of listeners would be measured too
   const state = { samples: [] as DragSample[], waiters: [] as (() => void)[] };
   window.__dragBench = state;
   let start = 0;
@@ -35,6 +36,8 @@ export function installDragProbe(selector: string): void {
     (e) => {
       start = performance.now();
       stamp = e.timeStamp;
+      // Read by bench/dragTrace.ts (MOVE_MARK): where each move's main-thread work begins in the trace.
+      performance.mark('pw-bench-move');
     },
     { capture: true },
   );
@@ -68,14 +71,14 @@ export function nextSample(count: number): Promise<number> {
   return new Promise((resolve) => state.waiters.push(() => resolve(state.samples.length)));
 }
 
-/** Screen position of z from the plane's drawn unit circle. */
-export function zToClient(z: { re: number; im: number }): { x: number; y: number } {
+/** Screen positions of the points z from the plane's drawn unit circle (all at once, before a drag). */
+export function zToClient(zs: { re: number; im: number }[]): { x: number; y: number }[] {
   const svg = document.querySelector('svg.pw-plane-svg')!;
   const c = svg.querySelector('circle.pw-unit-circle')!;
   const box = svg.getBoundingClientRect();
   const r = Number(c.getAttribute('r'));
-  return {
+  return zs.map((z) => ({
     x: box.left + Number(c.getAttribute('cx')) + z.re * r,
     y: box.top + Number(c.getAttribute('cy')) - z.im * r,
-  };
+  }));
 }
