@@ -1,16 +1,23 @@
 /**
  * The recording slice: a loaded or generated signal to try the filter on, and how it is shown. This is view
  * state: it is not part of the design, never enters the undo history, links or autosave (a recording can
- * be hundreds of megabytes). Only the one channel being filtered is kept in memory.
+ * be hundreds of megabytes). The samples themselves live in the recording worker (views/signal/
+ * recordingWorker.ts), which does every computation on them; the store knows what the signal is.
  */
 import type { WindowName } from '../core/signal/index.ts';
-import type { ParsedSignal } from '../core/signal/parsedSignal.ts';
+import type { ParsedSignalInfo } from '../core/signal/parsedSignal.ts';
 
 /** What the time region shows: the built-in test inputs, the recording before/after, or its spectrum. */
 export type TimeRegion = 'test' | 'recording' | 'spectrum';
 
-/** A signal ready to filter: a file read by the worker (a ParsedSignal), or one made on the page. */
-export type LoadedSignal = Omit<ParsedSignal, 'source'> & { source: ParsedSignal['source'] | 'generated' };
+/**
+ * A signal ready to filter: a file read by the worker, or one made on the page; `id` names it in the
+ * recording worker (a new number per signal), `length` counts its samples.
+ */
+export type LoadedSignal = Omit<ParsedSignalInfo, 'source'> & {
+  source: ParsedSignalInfo['source'] | 'generated';
+  id: number;
+};
 
 /** Welch settings of the spectrum view. */
 export interface SpectrumSettings {
@@ -57,7 +64,7 @@ export const defaultSignalView: SignalView = {
 
 /** Duration of a signal in seconds. */
 export function signalSeconds(s: LoadedSignal): number {
-  return s.samples.length / s.sampleRate;
+  return s.length / s.sampleRate;
 }
 
 /** A zoom span clamped to [0, duration] and at least minSpan long; null when it covers everything. */

@@ -1,121 +1,64 @@
 /**
- * Derived data of the recording slice: the filtered signal, the Welch spectra before and after, the
- * design's response on the spectrum's bins and the levels at chosen frequencies. All computed by the
- * engine and memoised on the identity of their inputs, so a root drag refilters once per frame and the
- * input's spectrum is computed once per signal and setting.
+ * Derived data of the recording slice that the page computes itself: the Welch segment length the settings
+ * give, where the level read-out looks, the filtered spectrum estimated from the recording's own (the input's
+ * estimate times |H|², see shapedSpectrum), and the level read-out assembled from its parts. The recording's
+ * samples, its filtered output, their Welch spectra and the tone fits over them are computed in the
+ * recording worker (views/signal/recordingWorker.ts).
  */
-import type { Section, Zpk } from '../core/types.ts';
+import type { Zpk } from '../core/types.ts';
 import { responseZpk, type FrequencyResponse } from '../core/response/index.ts';
 import { rootFrequencyHz, rootReadouts } from '../core/readouts.ts';
 import {
-  createSectionFilter,
-  fitTones,
+  autoSegmentLength,
   levelFloorDb,
   levelReadings,
-  measureLevels,
-  autoSegmentLength,
-  runSectionFilter,
-  welch,
   type LevelReading,
   type LevelReport,
-  type ToneEstimate,
   type WelchResult,
-  type WindowName,
 } from '../core/signal/index.ts';
-import { selectSections, selectZpk } from './derived.ts';
+import { selectZpk } from './derived.ts';
 import { memoLast } from './memo.ts';
-import type { LevelChoice, LoadedSignal, SpectrumSettings } from './signal.ts';
+import type { LevelChoice, SpectrumSettings } from './signal.ts';
 import type { WorkbenchState } from './store.ts';
 import { hzGridToOmega } from '../core/units.ts';
 
 /** Harmonics of a mains frequency read by default (fundamental included). */
 export const MAINS_HARMONICS = 5;
-/** Performance-mark names: the filter pass, and its start (a frame's stopwatch starts there). */
-export const FILTER_MARK = 'pw-signal-filter';
 
 /** The Welch segment length for the settings: as set, or the automatic one (autoSegmentLength). */
 export function segmentLength(settings: SpectrumSettings, sampleRate: number, n: number): number {
   return settings.segment === 'auto' ? autoSegmentLength(sampleRate, n) : settings.segment;
 }
 
-/** The signal filtered by the cascade from zero state (marks the pass for the page's timing). */
-export function filterSignal(sections: readonly Section[], samples: Float64Array): Float64Array {
-  const mark = typeof performance !== 'undefined' && typeof performance.mark === 'function';
-  if (mark) performance.mark(`${FILTER_MARK}:start`);
-  const out = runSectionFilter(createSectionFilter(sections), samples);
-  if (mark) performance.measure(FILTER_MARK, `${FILTER_MARK}:start`);
-  return out;
-}
-
-const outputOf = memoLast((sections: Section[], samples: Float64Array) => filterSignal(sections, samples));
-
-const spectrumOf = (x: Float64Array, fs: number, window: WindowName, nperseg: number): WelchResult =>
-  welch(x, fs, { window, nperseg, scaling: 'spectrum' });
-const inputSpectrumOf = memoLast(spectrumOf);
-const outputSpectrumOf = memoLast(spectrumOf);
-
-/** The filtered recording, or null without one. */
-export const selectSignalOutput = (s: WorkbenchState): Float64Array | null => {
-  const cur = s.signal.current;
-  return cur ? outputOf(selectSections(s), cur.samples) : null;
-};
-
-const segmentOf = (s: WorkbenchState, cur: LoadedSignal) =>
-  segmentLength(s.signal.spectrum, cur.sampleRate, cur.samples.length);
-
-/** Welch spectrum ('spectrum' scaling: a tone of amplitude A reads A²/2) of the recording before filtering. */
-export const selectInputSpectrum = (s: WorkbenchState): WelchResult | null => {
-  const cur = s.signal.current;
-  if (!cur) return null;
-  return inputSpectrumOf(cur.samples, cur.sampleRate, s.signal.spectrum.window, segmentOf(s, cur));
-};
-
 /**
  * The input's estimate times |H|² bin by bin: what the filtered spectrum tends to for a stationary signal
- * and segments long against the filter's memory. Used while a root is dragged, when a fresh Welch pass
- * per frame would be too slow on a long recording; the exact estimate follows on release.
+ * and segments long against the filter's memory. |H| is read off `response` (any grid of angles in
+ * increasing order, such as the display response refined at the roots, so a notch's depth is on it),
+ * linearly between its points, at each bin's angle 2πf/fs: the filter acts on samples, so at the
+ * recording's rate. Shown while a root is dragged and until the filtered recording's own estimate is in.
  */
 export function shapedSpectrum(input: WelchResult, response: FrequencyResponse): WelchResult {
   const power = new Float64Array(input.power.length);
-  for (let k = 0; k < power.length; k++) power[k] = input.power[k]! * response.magnitude[k]! ** 2;
+  const w = response.omega;
+  const m = response.magnitude;
+  const last = w.length - 1;
+  const omegas = hzGridToOmega(input.frequencies, input.sampleRate);
+  let j = 0;
+  for (let k = 0; k < power.length; k++) {
+    const omega = omegas[k]!;
+    while (j < last && w[j + 1]! < omega) j++;
+    let h: number;
+    if (last < 0) h = 1;
+    else if (omega <= w[0]!) h = m[0]!;
+    else if (j >= last) h = m[last]!;
+    else {
+      const t = (omega - w[j]!) / (w[j + 1]! - w[j]!);
+      h = m[j]! + t * (m[j + 1]! - m[j]!);
+    }
+    power[k] = input.power[k]! * h * h;
+  }
   return { ...input, power };
 }
-const shapedOf = memoLast(shapedSpectrum);
-
-/**
- * The same estimate of the filtered recording; during a drag (`dragging`), the input's estimate shaped by
- * |H|² instead (see shapedSpectrum).
- */
-export const selectOutputSpectrum = (s: WorkbenchState): WelchResult | null => {
-  const cur = s.signal.current;
-  if (!cur) return null;
-  if (s.dragging) {
-    const input = selectInputSpectrum(s);
-    const response = selectSignalResponse(s);
-    return input && response ? shapedOf(input, response) : null;
-  }
-  const y = selectSignalOutput(s);
-  if (!y) return null;
-  return outputSpectrumOf(y, cur.sampleRate, s.signal.spectrum.window, segmentOf(s, cur));
-};
-
-/** True while the output spectrum is the shaped approximation rather than its own Welch estimate. */
-export const selectSpectrumIsShaped = (s: WorkbenchState): boolean => s.dragging && s.signal.current !== null;
-
-const responseOnBins = memoLast((zpk: Zpk, frequencies: Float64Array, fs: number) => {
-  const omega = new Float64Array(frequencies.length);
-  hzGridToOmega(frequencies, fs, omega);
-  return responseZpk(zpk, omega);
-});
-
-/**
- * The design's response at the spectrum's bin frequencies, taken at the recording's sample rate (the
- * filter acts on samples, so a design at another rate acts at the same angles, other hertz).
- */
-export const selectSignalResponse = (s: WorkbenchState): FrequencyResponse | null => {
-  const spec = selectInputSpectrum(s);
-  return spec ? responseOnBins(selectZpk(s), spec.frequencies, spec.sampleRate) : null;
-};
 
 /** Frequencies of the zeros on (or near) the unit circle, in Hz at sample rate fs, ascending, without 0 and fs/2. */
 export function notchFrequencies(zpk: Zpk, designRate: number, fs: number): number[] {
@@ -178,19 +121,8 @@ export interface LevelTableData {
   shaped: boolean;
 }
 
-type Before = { ok: true; report: LevelReport } | { ok: false; error: string };
-const beforeLevelsOf = memoLast((samples: Float64Array, fs: number, plan: LevelPlan): Before => {
-  try {
-    return { ok: true, report: measureLevels(samples, null, fs, plan.frequenciesHz) };
-  } catch (e) {
-    return { ok: false, error: (e as Error).message };
-  }
-});
-const fittedOf = memoLast((report: LevelReport) => report.readings.map((r) => r.fittedHz));
-const afterLevelsOf = memoLast(
-  (output: Float64Array, fs: number, fitted: number[]): ToneEstimate[] => fitTones(output, fs, fitted).tones,
-);
-const shapedLevelsOf = memoLast((report: LevelReport, zpk: Zpk): { levelDb: number }[] => {
+/** After levels while a root is dragged: before + 20·log10|H| at each fitted frequency (steady state). */
+export const shapedLevels = memoLast((report: LevelReport, zpk: Zpk): { levelDb: number }[] => {
   const omega = hzGridToOmega(
     report.readings.map((r) => r.fittedHz),
     report.sampleRate,
@@ -198,7 +130,8 @@ const shapedLevelsOf = memoLast((report: LevelReport, zpk: Zpk): { levelDb: numb
   const h = responseZpk(zpk, omega).magnitude;
   return report.readings.map((r, i) => ({ levelDb: r.beforeDb + 20 * Math.log10(h[i]!) }));
 });
-const tableOf = memoLast(
+/** The read-out from its parts (memoised on their identity). */
+export const levelTableOf = memoLast(
   (
     report: LevelReport,
     after: readonly { levelDb: number }[] | null,
@@ -232,23 +165,3 @@ const tableOf = memoLast(
     };
   },
 );
-
-/**
- * Levels (dB re amplitude 1, i.e. dBFS for audio) at the read-out frequencies before and after, fitted over
- * the whole recording (see core/signal/levels.ts), with the noise floor at each; while a root is dragged the
- * after column is before + |H| (dB) at each frequency, measured again on release.
- */
-export const selectLevelTable = (s: WorkbenchState): LevelTableData | null => {
-  const cur = s.signal.current;
-  const plan = selectLevelPlan(s);
-  const input = selectInputSpectrum(s);
-  if (!cur || !plan || !input) return null;
-  const before = beforeLevelsOf(cur.samples, cur.sampleRate, plan);
-  if (!before.ok) return { report: null, error: before.error, floors: [], shaped: false };
-  const output = selectOutputSpectrum(s);
-  if (s.dragging)
-    return tableOf(before.report, shapedLevelsOf(before.report, selectZpk(s)), input, output, true);
-  const y = selectSignalOutput(s);
-  const after = y ? afterLevelsOf(y, cur.sampleRate, fittedOf(before.report)) : null;
-  return tableOf(before.report, after, input, output, false);
-};

@@ -11,6 +11,7 @@ import {
   type LimitCycleReport,
 } from '../core/fixed/index.ts';
 import type { JobContext } from './jobs.ts';
+import type { StoredSamples } from './growable.ts';
 
 /** The job's kind. */
 export const FIXED_RUN_JOB = 'fixed-run';
@@ -20,7 +21,7 @@ export const FIXED_RUN_SLICE = 1 << 15;
 /** What the page asks for. */
 export interface FixedRecordingRequest {
   implementation: Implementation;
-  /** The key the recording's samples (Float64Array, full scale 1) were put under. */
+  /** The key the recording's samples (full scale 1) are kept under (recordingKeys.ts RECORDING_KEY). */
   recordingKey: string;
 }
 
@@ -38,7 +39,7 @@ export async function fixedRecordingJob(
   request: FixedRecordingRequest,
   ctx: JobContext,
 ): Promise<{ value: FixedRecordingResult; transfer: Transferable[] }> {
-  const x = ctx.get<Float64Array>(request.recordingKey);
+  const x = ctx.get<StoredSamples>(request.recordingKey);
   if (!x) throw new Error('no recording to run (it was closed)');
   const run = new FixedRun(request.implementation);
   const n = x.length;

@@ -1,17 +1,38 @@
-/** A Float64Array that grows by doubling, for samples whose count is known only at the end. */
+/**
+ * Samples whose count is known only at the end (or only from a header): stored as float32 when the source
+ * holds nothing float32 cannot represent exactly (8-, 16- and 24-bit integers, 32-bit float), else float64.
+ * With an expected count the array is allocated once at that size; beyond it, it grows by doubling.
+ */
+import type { SampleFormat } from '../core/signal/index.ts';
+
+/** The array type a recording is kept in. */
+export type StoredSamples = Float32Array | Float64Array;
+
+/** True when every sample of the format is a float32 value exactly (WAV integers scaled by 2^(bits−1)). */
+export function fitsFloat32(format: SampleFormat | null): boolean {
+  return format === 'u8' || format === 'i16' || format === 'i24' || format === 'f32';
+}
+
 export class GrowableSamples {
-  private data: Float64Array;
+  private data: StoredSamples;
   length = 0;
 
-  constructor(capacity = 1 << 16) {
-    this.data = new Float64Array(Math.max(1, capacity));
+  constructor(
+    private readonly single: boolean,
+    capacity = 1 << 16,
+  ) {
+    this.data = this.make(Math.max(1, capacity));
+  }
+
+  private make(n: number): StoredSamples {
+    return this.single ? new Float32Array(n) : new Float64Array(n);
   }
 
   /** Appends the values. */
-  push(values: Float64Array): void {
+  push(values: ArrayLike<number>): void {
     const need = this.length + values.length;
     if (need > this.data.length) {
-      const next = new Float64Array(Math.max(need, 2 * this.data.length));
+      const next = this.make(Math.max(need, 2 * this.data.length));
       next.set(this.data.subarray(0, this.length));
       this.data = next;
     }
@@ -20,7 +41,7 @@ export class GrowableSamples {
   }
 
   /** The samples, in an array of exactly their length (its buffer can be transferred). */
-  take(): Float64Array {
+  take(): StoredSamples {
     return this.length === this.data.length ? this.data : this.data.slice(0, this.length);
   }
 }

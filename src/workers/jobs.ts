@@ -27,8 +27,12 @@ export type JobResponse =
 
 /** What a job sees of the worker. */
 export interface JobContext {
-  /** A value sent with `put`, or undefined. */
+  /** A value sent with `put` (or kept by a job with `set`), or undefined. */
   get<T>(key: string): T | undefined;
+  /** Keeps a value in the worker for later jobs (a recording read there, what was computed from it). */
+  set(key: string, value: unknown): void;
+  /** Forgets a kept value. */
+  drop(key: string): void;
   /** Reports progress (0..1) and yields to the worker's message loop; throws JobCancelled once cancelled. */
   checkpoint(fraction: number): Promise<void>;
 }
@@ -86,6 +90,8 @@ export function serveJobs(
     const handler = handlers[kind];
     const ctx: JobContext = {
       get: <T>(key: string) => store.get(key) as T | undefined,
+      set: (key, value) => void store.set(key, value),
+      drop: (key) => void store.delete(key),
       checkpoint: async (fraction) => {
         if (cancelled.has(id)) throw new JobCancelled();
         scope.postMessage({ type: 'progress', id, fraction });

@@ -9,7 +9,13 @@ async function parse(
 ) {
   const messages: ParseMessage[] = [];
   const file = new Blob([bytes as BlobPart]);
-  await parseSignalFile({ file, name, ...opts }, (m) => messages.push(m), 4096);
+  await parseSignalFile(
+    { file, name, ...opts },
+    (m) => {
+      messages.push(m);
+    },
+    4096,
+  );
   return messages;
 }
 

@@ -112,3 +112,13 @@ export function generateSignal(spec: GeneratorSpec, n: number, sampleRate: numbe
       return makeHum(n, sampleRate, spec);
   }
 }
+
+/** The sum of several generated signals, n samples at sampleRate Hz. */
+export function generateSum(specs: readonly GeneratorSpec[], n: number, sampleRate: number): Float64Array {
+  const sum = new Float64Array(n);
+  for (const spec of specs) {
+    const x = generateSignal(spec, n, sampleRate);
+    for (let k = 0; k < n; k++) sum[k] = sum[k]! + x[k]!;
+  }
+  return sum;
+}

@@ -8,8 +8,11 @@ export interface ParsedSignal {
   source: 'wav' | 'csv';
   /** Samples per second, Hz. */
   sampleRate: number;
-  /** The channel being filtered, as numbers (WAV integers scaled to [-1, 1)). */
-  samples: Float64Array;
+  /**
+   * The channel being filtered, as numbers (WAV integers scaled to [-1, 1)); float32 when that holds the
+   * source exactly (8-, 16-, 24-bit and float32 WAV), which halves the memory of a long recording.
+   */
+  samples: Float32Array | Float64Array;
   /** 0-based channel kept and how many the file has (1 for CSV). */
   channel: number;
   channelCount: number;
@@ -20,3 +23,6 @@ export interface ParsedSignal {
   /** What the reader noticed (a time column not quite even, a truncated file, ...). */
   notes: string[];
 }
+
+/** Everything about a parsed signal but its samples, and how many there are. */
+export type ParsedSignalInfo = Omit<ParsedSignal, 'samples'> & { length: number };

@@ -163,18 +163,20 @@ export class WelchAccumulator {
   }
 }
 
+/** The options welch uses for a signal of n samples: as scipy does, one segment of its own length if shorter. */
+export function welchOptionsFor(n: number, options: WelchOptions = {}): WelchOptions {
+  const nperseg = options.nperseg ?? 256;
+  if (n >= nperseg || n === 0) return options;
+  const noverlap = Math.min(options.noverlap ?? Math.floor(n / 2), n - 1);
+  return { ...options, nperseg: n, noverlap, nfft: Math.max(options.nfft ?? n, n) };
+}
+
 /**
  * Welch's averaged spectrum of x at sample rate fs (Hz). As scipy does, a signal shorter than nperseg is
  * taken as one segment of its own length.
  */
 export function welch(x: ArrayLike<number>, sampleRate: number, options: WelchOptions = {}): WelchResult {
-  let o = options;
-  const nperseg = options.nperseg ?? 256;
-  if (x.length < nperseg && x.length > 0) {
-    const noverlap = Math.min(options.noverlap ?? Math.floor(x.length / 2), x.length - 1);
-    o = { ...options, nperseg: x.length, noverlap, nfft: Math.max(options.nfft ?? x.length, x.length) };
-  }
-  const acc = new WelchAccumulator(sampleRate, o);
+  const acc = new WelchAccumulator(sampleRate, welchOptionsFor(x.length, options));
   acc.push(x);
   return acc.result();
 }

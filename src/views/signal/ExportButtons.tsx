@@ -1,43 +1,53 @@
-/** Downloads of the filtered signal: WAV in the input's format (or another) and CSV with a time column. */
+/**
+ * Downloads of the filtered signal: WAV in the input's format (or another) and CSV with time, input and
+ * filtered columns; and of the fixed-point run's output codes. The recording worker writes the files that
+ * need the samples, with progress.
+ */
 import { useState } from 'react';
 import { SAMPLE_FORMATS, describeFormat, type SampleFormat } from '../../core/signal/index.ts';
 import type { LoadedSignal } from '../../store/signal.ts';
-import { selectSignalOutput } from '../../store/signalDerived.ts';
-import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
+import type { ExportResult } from '../../workers/exportJob.ts';
+import type { JobOutcome } from '../../workers/jobs.ts';
 import { downloadBlob } from '../shared/download.ts';
 import {
   defaultExportFormat,
+  exportFiltered,
+  exportFixedCsv,
   exportName,
-  filteredCsv,
-  filteredWav,
-  fixedCsv,
   fixedExportName,
   fixedWav,
 } from './exportSignal.ts';
 import { setFixedRunEnabled, useCurrentFixedRun, useFixedRun } from './fixedRecording.ts';
+import { RunProgress } from './RunProgress.tsx';
+import type { RunStatus } from './recordingWorker.ts';
+
+/** Runs a worker export with its progress and downloads the file under `name`. */
+function useExport(onNotes: (n: string[]) => void) {
+  const [run, setRun] = useState<RunStatus>({ kind: 'idle' });
+  const start = (
+    make: (progress: (f: number) => void) => Promise<JobOutcome<ExportResult>>,
+    name: string,
+  ) => {
+    onNotes([]);
+    setRun({ kind: 'running', fraction: 0 });
+    void make((fraction) => setRun({ kind: 'running', fraction })).then((o) => {
+      if (o.status === 'done') {
+        setRun({ kind: 'idle' });
+        onNotes(o.value.notes);
+        downloadBlob(o.value.blob, name);
+      } else if (o.status === 'error') setRun({ kind: 'error', message: o.message });
+      else setRun({ kind: 'idle' });
+    });
+  };
+  return { run, start };
+}
 
 export function ExportButtons({ signal }: { signal: LoadedSignal }) {
   const [chosen, setChosen] = useState<SampleFormat | 'input'>('input');
   const [notes, setNotes] = useState<string[]>([]);
-  const hasOutput = useWorkbench((s) => s.signal.current !== null);
   const format = chosen === 'input' ? defaultExportFormat(signal) : chosen;
-  const output = () => selectSignalOutput(workbenchStore.getState());
-  const wav = () => {
-    const y = output();
-    if (!y) return;
-    const r = filteredWav(y, signal.sampleRate, format);
-    setNotes(r.notes);
-    downloadBlob(r.blob, exportName(signal, 'wav'));
-  };
-  const csv = () => {
-    const y = output();
-    if (!y) return;
-    setNotes([]);
-    downloadBlob(
-      filteredCsv(signal.samples, y, signal.sampleRate, signal.startTime),
-      exportName(signal, 'csv'),
-    );
-  };
+  const { run, start } = useExport(setNotes);
+  const busy = run.kind === 'running';
   return (
     <div className="pw-signal-export">
       <label>
@@ -56,14 +66,23 @@ export function ExportButtons({ signal }: { signal: LoadedSignal }) {
         </select>
       </label>
       <div className="pw-signal-export-buttons">
-        <button type="button" disabled={!hasOutput} onClick={wav}>
+        <button
+          type="button"
+          disabled={busy}
+          onClick={() => start((p) => exportFiltered(signal, 'wav', format, p), exportName(signal, 'wav'))}
+        >
           Download filtered WAV
         </button>
-        <button type="button" disabled={!hasOutput} onClick={csv}>
+        <button
+          type="button"
+          disabled={busy}
+          onClick={() => start((p) => exportFiltered(signal, 'csv', format, p), exportName(signal, 'csv'))}
+        >
           Download filtered CSV
         </button>
       </div>
-      <FixedDownloads signal={signal} onNotes={setNotes} />
+      <FixedDownloads signal={signal} onNotes={setNotes} busy={busy} start={start} />
+      <RunProgress run={run} what="Writing the file" testId="export-run" />
       {notes.map((n) => (
         <p key={n} className="pw-hint pw-block" role="status">
           {n}
@@ -74,7 +93,17 @@ export function ExportButtons({ signal }: { signal: LoadedSignal }) {
 }
 
 /** Downloads of the fixed-point run's output codes, or the switch that starts the run. */
-function FixedDownloads({ signal, onNotes }: { signal: LoadedSignal; onNotes: (n: string[]) => void }) {
+function FixedDownloads({
+  signal,
+  onNotes,
+  busy,
+  start,
+}: {
+  signal: LoadedSignal;
+  onNotes: (n: string[]) => void;
+  busy: boolean;
+  start: ReturnType<typeof useExport>['start'];
+}) {
   const fixed = useCurrentFixedRun();
   const enabled = useFixedRun((s) => s.enabled);
   const status = useFixedRun((s) => s.status);
@@ -105,19 +134,18 @@ function FixedDownloads({ signal, onNotes }: { signal: LoadedSignal; onNotes: (n
     onNotes(r.notes);
     downloadBlob(r.blob, fixedExportName(signal, 'wav'));
   };
-  const csv = () => {
-    onNotes([]);
-    downloadBlob(
-      fixedCsv(signal.samples, result.output, signal.sampleRate, implementation, signal.startTime),
-      fixedExportName(signal, 'csv'),
-    );
-  };
   return (
     <div className="pw-signal-export-buttons">
       <button type="button" onClick={wav}>
         Download fixed-point WAV
       </button>
-      <button type="button" onClick={csv}>
+      <button
+        type="button"
+        disabled={busy}
+        onClick={() =>
+          start((p) => exportFixedCsv(signal, implementation, p), fixedExportName(signal, 'csv'))
+        }
+      >
         Download fixed-point CSV
       </button>
     </div>

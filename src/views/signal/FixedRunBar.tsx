@@ -20,12 +20,12 @@ export function FixedRunSwitch() {
 /** The run's status and findings, under the toolbar (nothing while off). */
 export function FixedRunSummary() {
   const state = useFixedRun((s) => s);
-  const samples = useWorkbench((s) => s.signal.current?.samples ?? null);
+  const recording = useWorkbench((s) => s.signal.current?.id ?? null);
   const fs = useWorkbench((s) => s.signal.current?.sampleRate ?? 1);
   const dragging = useWorkbench((s) => s.dragging);
   if (!state.enabled) return null;
   const impl = state.implementation;
-  const result = currentResult(state, samples, dragging);
+  const result = currentResult(state, recording, dragging);
   const status = state.status;
   let text: string;
   let warning = '';

@@ -5,7 +5,8 @@
  * tones over the whole recording) and readings near the noise floor are marked.
  */
 import { useId } from 'react';
-import { selectLevelPlan, selectLevelTable, type LevelTableData } from '../../store/signalDerived.ts';
+import { selectLevelPlan, type LevelTableData } from '../../store/signalDerived.ts';
+import { useLevelTable } from './useSpectra.ts';
 import { LEVEL_FLOOR_MARGIN_DB, levelMethod } from '../../core/signal/index.ts';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import type { LevelChoice } from '../../store/signal.ts';
@@ -64,7 +65,7 @@ export function readFrequencyList(text: string, nyquist: number): FieldReading<n
 }
 
 export function LevelTable() {
-  const table = useWorkbench(selectLevelTable);
+  const table = useLevelTable();
   const plan = useWorkbench(selectLevelPlan);
   const readings = table?.report?.readings ?? null;
   const choice = useWorkbench((s) => s.signal.levels);
@@ -160,7 +161,11 @@ export function LevelTable() {
           </tbody>
         </table>
       ) : (
-        <p className="pw-levels-note">No frequency to read below half the sample rate.</p>
+        <p className="pw-levels-note">
+          {table
+            ? 'No frequency to read below half the sample rate.'
+            : 'Levels follow once they are read from the recording.'}
+        </p>
       )}
       <p className="pw-levels-note" data-testid="level-method">
         dB re amplitude 1 (dBFS for audio). {table?.report ? `${levelMethod(table.report)}.` : ''}

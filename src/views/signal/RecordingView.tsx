@@ -7,6 +7,7 @@ import type { LoadedSignal } from '../../store/signal.ts';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import { useElementSize } from '../chart/useElementSize.ts';
 import { SignalChart } from './SignalChart.tsx';
+import { RecordingStatus } from './RecordingStatus.tsx';
 import { ZOOM_STEP, zoomAbout } from './useZoomGestures.ts';
 import { FixedRunSummary, FixedRunSwitch } from './FixedRunBar.tsx';
 import { DifferenceStrip } from './DifferenceStrip.tsx';
@@ -16,7 +17,7 @@ export function RecordingView({ signal }: { signal: LoadedSignal }) {
   const box = useRef<HTMLDivElement>(null);
   const { width, height } = useElementSize(box);
   const zoom = useWorkbench((s) => s.signal.zoom);
-  const duration = signal.samples.length / signal.sampleRate;
+  const duration = signal.length / signal.sampleRate;
   const [t0, t1] = zoom ?? [0, duration];
   const set = (z: readonly [number, number] | null) => workbenchStore.getState().setSignalZoom(z);
   const mid = (t0 + t1) / 2;
@@ -61,6 +62,7 @@ export function RecordingView({ signal }: { signal: LoadedSignal }) {
         </span>
       </div>
       <FixedRunSummary />
+      <RecordingStatus signal={signal} />
       <div className="pw-chart-box" ref={box} title="Wheel zooms, drag pans, double-click shows all">
         <SignalChart width={width} height={height} signal={signal} />
       </div>

@@ -1,10 +1,11 @@
 /**
  * Before and after: the recording (faint), the filtered recording (bold) and, when it has run, the
- * fixed-point filter's output (thin, over it) against time in seconds, one
- * band per pixel column when the samples are dense. Wheel / drag / keys zoom and pan the time axis.
+ * fixed-point filter's output (thin, over it) against time in seconds, one band per pixel column when the
+ * samples are dense, drawn from what the recording worker computes for the plot's width (recordingWorker.ts). The filtered trace is faint while it belongs to an earlier design
+ * (the whole recording is being filtered again); during a root drag, the live preview of the dragged design
+ * replaces it as far as it reaches. Wheel / drag / keys zoom and pan the time axis.
  */
-import { useId, useLayoutEffect, useMemo, useRef } from 'react';
-import { selectSignalOutput, FILTER_MARK } from '../../store/signalDerived.ts';
+import { useEffect, useId, useMemo, useRef } from 'react';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import type { LoadedSignal } from '../../store/signal.ts';
 import { Axis } from '../chart/Axis.tsx';
@@ -13,14 +14,18 @@ import type { AxisMap } from '../chart/pixels.ts';
 import { niceRange } from '../chart/range.ts';
 import { linearTicks, spacedTicks } from '../chart/ticks.ts';
 import { useSettledRange } from '../chart/useSettledRange.ts';
-import { extentOf, tracePath, visibleSamples, type Frame } from './envelope.ts';
-import { useZoomGestures } from './useZoomGestures.ts';
+import {
+  extentOf,
+  spanFor,
+  traceExtent,
+  tracePath,
+  tracePathOf,
+  visibleSamples,
+  type Frame,
+} from './envelope.ts';
 import { useCurrentFixedRun } from './fixedRecording.ts';
-
-/** Performance measure of one drag frame: filter pass to the plot's commit (before paint). */
-export const FRAME_MEASURE = 'pw-signal-frame';
-/** Performance measure of the plot's own work in a frame: envelopes, paths and commit. */
-export const DRAW_MEASURE = 'pw-signal-draw';
+import { setRecordingViewport, useRecordingRuns } from './recordingWorker.ts';
+import { useZoomGestures } from './useZoomGestures.ts';
 
 const PX_PER_X_TICK = 80;
 
@@ -39,61 +44,87 @@ export function SignalChart({
   height: number;
   signal: LoadedSignal;
 }) {
-  const y = useWorkbench(selectSignalOutput);
+  const zoom = useWorkbench((s) => s.signal.zoom);
+  const dragging = useWorkbench((s) => s.dragging);
+  const view = useRecordingRuns((r) => (r.view?.request.id === signal.id ? r.view : null));
+  const outputCurrent = useRecordingRuns(
+    (r) => r.view !== null && r.view.output !== null && r.view.output.version === r.wantedVersion,
+  );
   const fixed = useCurrentFixedRun();
   // Output codes stand for code·2^−(D−1)·G at the design's gain: drawn through a frame scaled by that factor.
   const codeScale = fixed
     ? 2 ** -(fixed.implementation.settings.dataWordLength - 1) * fixed.implementation.cascade.outputGain
     : 1;
   const codes = fixed?.result.output ?? null;
-  const zoom = useWorkbench((s) => s.signal.zoom);
-  const dragging = useWorkbench((s) => s.dragging);
   const svg = useRef<SVGSVGElement>(null);
   const clipId = `pw-sclip-${useId().replace(/:/g, '')}`;
-  const x = signal.samples;
   const fs = signal.sampleRate;
-  const n = x.length;
+  const n = signal.length;
   const duration = n / fs;
   const [t0, t1] = zoom ?? [0, duration];
   const rect = useMemo(() => signalLayout(width, height), [width, height]);
-  const drawStart = useRef(0);
-  drawStart.current = performance.now();
 
-  const [i0, i1] = useMemo(() => {
-    const kx = (rect.right - rect.left) / ((t1 - t0) * fs);
-    return visibleSamples({ ...rect, x0: rect.left - t0 * fs * kx, kx, y0: 0, ky: 1 }, n);
-  }, [rect, t0, t1, fs, n]);
-  const inputExtent = useMemo(() => extentOf(x, i0, i1), [x, i0, i1]);
-  const outputExtent = useMemo(() => (y ? extentOf(y, i0, i1) : inputExtent), [y, i0, i1, inputExtent]);
-  const fixedExtent = useMemo(() => {
-    if (!codes) return outputExtent;
-    const [a, b] = extentOf(codes, i0, i1).map((v) => v * codeScale) as [number, number];
-    return [Math.min(a, b), Math.max(a, b)] as const;
-  }, [codes, codeScale, i0, i1, outputExtent]);
-  const data = useMemo(
-    () =>
-      [
-        Math.min(inputExtent[0], outputExtent[0], fixedExtent[0], 0),
-        Math.max(inputExtent[1], outputExtent[1], fixedExtent[1], 0),
-      ] as const,
-    [inputExtent, outputExtent, fixedExtent],
+  const kx = (rect.right - rect.left) / ((t1 - t0) * fs);
+  const x0 = rect.left - t0 * fs * kx;
+  const span = spanFor({ ...rect, x0, kx, y0: 0, ky: 1 }, n);
+  const visible = width >= 80 && height >= 60;
+  useEffect(() => {
+    setRecordingViewport(visible ? span : null);
+  }, [visible, span.i0, span.i1, span.columns, span.line]); // eslint-disable-line react-hooks/exhaustive-deps
+  useEffect(() => () => setRecordingViewport(null), []);
+
+  const preview = dragging ? (view?.preview ?? null) : null;
+  // Each part depends on its own trace only: during a drag only the preview's change.
+  const request = view?.request ?? null;
+  const input = view?.input ?? null;
+  const output = view?.output ?? null;
+  const inputExtent = useMemo(() => (input ? traceExtent(input) : null), [input]);
+  const outputExtent = useMemo(() => (output ? traceExtent(output.trace) : null), [output]);
+  const previewExtent = useMemo(
+    () => (preview ? traceExtent(preview.trace, preview.filled) : null),
+    [preview],
   );
+  const fixedExtent = useMemo((): [number, number] | null => {
+    if (!codes) return null;
+    const [v0, v1] = visibleSamples({ ...rect, x0, kx, y0: 0, ky: 1 }, n);
+    const [a, b] = extentOf(codes, v0, v1).map((v) => v * codeScale) as [number, number];
+    return [Math.min(a, b), Math.max(a, b)];
+  }, [codes, codeScale, rect, x0, kx, n]);
+  const data = useMemo(() => {
+    let lo = 0;
+    let hi = 0;
+    for (const e of [inputExtent, outputExtent, previewExtent, fixedExtent]) {
+      if (e) [lo, hi] = [Math.min(lo, e[0]), Math.max(hi, e[1])];
+    }
+    return [lo, hi] as const;
+  }, [inputExtent, outputExtent, previewExtent, fixedExtent]);
   const wanted = useMemo(() => {
     const size = Math.max(Math.abs(data[0]), Math.abs(data[1]), 1e-12);
     return niceRange(data[0], data[1], 0.05 * size, 5);
   }, [data]);
-  const range = useSettledRange(`${signal.name}:${zoom?.join() ?? 'all'}`, data, wanted, dragging);
+  const range = useSettledRange(`${signal.id}:${zoom?.join() ?? 'all'}`, data, wanted, dragging);
 
   const frame = useMemo<Frame>(() => {
-    const kx = (rect.right - rect.left) / ((t1 - t0) * fs);
     const ky = (rect.bottom - rect.top) / (range[1] - range[0]);
-    return { ...rect, x0: rect.left - t0 * fs * kx, kx, y0: rect.bottom + range[0] * ky, ky };
-  }, [rect, t0, t1, fs, range]);
-  const inputPath = useMemo(() => tracePath(x, frame), [x, frame]);
-  const outputPath = useMemo(() => (y ? tracePath(y, frame) : null), [y, frame]);
+    return { ...rect, x0, kx, y0: rect.bottom + range[0] * ky, ky };
+  }, [rect, x0, kx, range]);
+  const inputPath = useMemo(
+    () => (input && request ? tracePathOf(input, request, frame) : null),
+    [input, request, frame],
+  );
+  // During a drag the preview covers its live stretch; the last full output shows beyond it only.
+  const outputFrom = preview ? preview.filled : 0;
+  const outputPath = useMemo(
+    () => (output && request ? tracePathOf(output.trace, request, frame, outputFrom) : null),
+    [output, request, frame, outputFrom],
+  );
   const fixedPath = useMemo(
     () => (codes ? tracePath(codes, { ...frame, ky: frame.ky * codeScale }) : null),
     [codes, codeScale, frame],
+  );
+  const previewPath = useMemo(
+    () => (request && preview ? tracePathOf(preview.trace, request, frame, 0, preview.filled) : null),
+    [request, preview, frame],
   );
 
   // Seconds throughout, however far zoomed in: ticks carry as many decimals as their step needs.
@@ -121,7 +152,7 @@ export function SignalChart({
     [range, rect],
   );
 
-  const set = (span: readonly [number, number] | null) => workbenchStore.getState().setSignalZoom(span);
+  const set = (s: readonly [number, number] | null) => workbenchStore.getState().setSignalZoom(s);
   const gestures = useZoomGestures(svg, {
     t0,
     t1,
@@ -130,18 +161,10 @@ export function SignalChart({
     set,
   });
 
-  useLayoutEffect(() => {
-    if (typeof performance.measure !== 'function') return;
-    performance.measure(DRAW_MEASURE, { start: drawStart.current });
-    if (performance.getEntriesByName(`${FILTER_MARK}:start`, 'mark').length > 0) {
-      performance.measure(FRAME_MEASURE, `${FILTER_MARK}:start`);
-      performance.clearMarks(`${FILTER_MARK}:start`);
-    }
-  }, [y]);
-
-  if (width < 80 || height < 60) return <svg ref={svg} width={width} height={height} />;
+  if (!visible) return <svg ref={svg} width={width} height={height} />;
   const zeroY = frame.y0;
   const spanText = `${formatSpan(t0 + signal.startTime)} to ${formatSpan(t1 + signal.startTime)}`;
+  const outputState = preview ? 'beyond-preview' : outputCurrent ? 'current' : 'stale';
   return (
     <svg
       ref={svg}
@@ -159,15 +182,18 @@ export function SignalChart({
         zeroY={zeroY}
       />
       <g clipPath={`url(#${clipId})`}>
-        <path
-          className={`pw-signal-input${inputPath.band ? ' pw-band' : ''}`}
-          data-testid="signal-input-trace"
-          d={inputPath.d}
-        />
+        {inputPath ? (
+          <path
+            className={`pw-signal-input${inputPath.band ? ' pw-band' : ''}`}
+            data-testid="signal-input-trace"
+            d={inputPath.d}
+          />
+        ) : null}
         {outputPath ? (
           <path
-            className={`pw-signal-output${outputPath.band ? ' pw-band' : ''}`}
+            className={`pw-signal-output${outputPath.band ? ' pw-band' : ''}${outputState === 'current' ? '' : ' pw-stale'}`}
             data-testid="signal-output-trace"
+            data-state={outputState}
             d={outputPath.d}
           />
         ) : null}
@@ -176,6 +202,13 @@ export function SignalChart({
             className={`pw-signal-fixed${fixedPath.band ? ' pw-band' : ''}`}
             data-testid="signal-fixed-trace"
             d={fixedPath.d}
+          />
+        ) : null}
+        {previewPath ? (
+          <path
+            className={`pw-signal-output pw-preview${previewPath.band ? ' pw-band' : ''}`}
+            data-testid="signal-preview-trace"
+            d={previewPath.d}
           />
         ) : null}
       </g>

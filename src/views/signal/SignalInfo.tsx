@@ -5,15 +5,15 @@ import { loadChannel, useLoader } from './loader.ts';
 
 export function SignalInfo({ signal }: { signal: LoadedSignal }) {
   const file = useLoader((s) => s.file);
-  const seconds = signal.samples.length / signal.sampleRate;
+  const seconds = signal.length / signal.sampleRate;
   return (
     <span className="pw-signal-info" data-testid="signal-info">
       <span className="pw-signal-name" title={signal.name}>
         {signal.name}
       </span>
       <span>
-        {formatHz(signal.sampleRate)} · {formatSeconds(seconds)} ·{' '}
-        {signal.samples.length.toLocaleString('en')} samples
+        {formatHz(signal.sampleRate)} · {formatSeconds(seconds)} · {signal.length.toLocaleString('en')}{' '}
+        samples
       </span>
       {signal.channelCount > 1 ? (
         <label>

@@ -35,7 +35,7 @@ export function SourceStatus() {
       </div>
     );
   }
-  return <RateQuestion name={status.name} count={status.samples.length} />;
+  return <RateQuestion name={status.name} count={status.count} />;
 }
 
 function RateQuestion({ name, count }: { name: string; count: number }) {

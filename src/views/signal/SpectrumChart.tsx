@@ -33,9 +33,12 @@ export interface SpectrumChartProps {
   height: number;
   before: WelchResult;
   after: WelchResult | null;
+  /** The design's response on its own grid of angles (radians per sample), drawn at the recording's rate. */
   response: FrequencyResponse | null;
   markersHz: readonly number[];
   log: boolean;
+  /** True while `after` is the input's estimate shaped by |H|² rather than the filtered recording's own. */
+  afterShaped: boolean;
 }
 
 export function spectrumLayout(width: number, height: number) {
@@ -50,6 +53,7 @@ export function SpectrumChart({
   response,
   markersHz,
   log,
+  afterShaped,
 }: SpectrumChartProps) {
   const clipId = `pw-spclip-${useId().replace(/:/g, '')}`;
   const rect = useMemo(() => spectrumLayout(width, height), [width, height]);
@@ -90,13 +94,17 @@ export function SpectrumChart({
   );
 
   const px = useMemo(() => toPixels(xMap, before.frequencies), [xMap, before]);
-  const line = (values: Float64Array, map: AxisMap) =>
-    linePath(px, toPixels(map, values), { top: rect.top, bottom: rect.bottom, thin: true });
-  const beforePath = useMemo(() => line(levelsBefore, yMap), [levelsBefore, yMap, px]); // eslint-disable-line react-hooks/exhaustive-deps
-  const afterPath = useMemo(() => (levelsAfter ? line(levelsAfter, yMap) : ''), [levelsAfter, yMap, px]); // eslint-disable-line react-hooks/exhaustive-deps
+  const hx = useMemo(
+    () => (response ? toPixels(xMap, response.omega, fs / (2 * Math.PI)) : null),
+    [xMap, response, fs],
+  );
+  const line = (x: Float64Array, values: Float64Array, map: AxisMap) =>
+    linePath(x, toPixels(map, values), { top: rect.top, bottom: rect.bottom, thin: true });
+  const beforePath = useMemo(() => line(px, levelsBefore, yMap), [levelsBefore, yMap, px]); // eslint-disable-line react-hooks/exhaustive-deps
+  const afterPath = useMemo(() => (levelsAfter ? line(px, levelsAfter, yMap) : ''), [levelsAfter, yMap, px]); // eslint-disable-line react-hooks/exhaustive-deps
   const hPath = useMemo(
-    () => (response && hMap ? line(response.magnitudeDb, hMap) : ''),
-    [response, hMap, px], // eslint-disable-line react-hooks/exhaustive-deps
+    () => (response && hMap && hx ? line(hx, response.magnitudeDb, hMap) : ''),
+    [response, hMap, hx], // eslint-disable-line react-hooks/exhaustive-deps
   );
 
   if (width < 120 || height < 60) return <svg width={width} height={height} />;
@@ -126,7 +134,14 @@ export function SpectrumChart({
           ) : null;
         })}
         <path className="pw-spectrum-before" data-testid="spectrum-before" d={beforePath} />
-        {afterPath ? <path className="pw-spectrum-after" data-testid="spectrum-after" d={afterPath} /> : null}
+        {afterPath ? (
+          <path
+            className={`pw-spectrum-after${afterShaped ? ' pw-estimated' : ''}`}
+            data-testid="spectrum-after"
+            data-measured={afterShaped ? 'false' : 'true'}
+            d={afterPath}
+          />
+        ) : null}
         {hPath ? <path className="pw-spectrum-response" data-testid="spectrum-response" d={hPath} /> : null}
       </g>
       <Axis side="left" map={yMap} ticks={yTicks} at={rect.left} title="Level (dB re 1)" />

@@ -2,19 +2,15 @@
 import { useRef, useState } from 'react';
 import { WINDOW_NAMES, type WindowName } from '../../core/signal/index.ts';
 import type { LoadedSignal } from '../../store/signal.ts';
-import {
-  segmentLength,
-  selectInputSpectrum,
-  selectLevelPlan,
-  selectOutputSpectrum,
-  selectSignalResponse,
-} from '../../store/signalDerived.ts';
+import { segmentLength, selectLevelPlan } from '../../store/signalDerived.ts';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import { Segmented } from '../chart/Segmented.tsx';
 import { useElementSize } from '../chart/useElementSize.ts';
 import { formatHz } from '../shared/format.ts';
 import { LevelTable } from './LevelTable.tsx';
 import { SpectrumChart } from './SpectrumChart.tsx';
+import { RunProgress } from './RunProgress.tsx';
+import { useSpectra } from './useSpectra.ts';
 
 /** Segment lengths offered besides 'auto'. */
 export const SEGMENT_CHOICES = [256, 512, 1024, 2048, 4096, 8192, 16384, 32768, 65536] as const;
@@ -24,14 +20,13 @@ export const LOG_AXIS_FROM_HZ = 8000;
 export function SpectrumView({ signal }: { signal: LoadedSignal }) {
   const box = useRef<HTMLDivElement>(null);
   const { width, height } = useElementSize(box);
-  const before = useWorkbench(selectInputSpectrum);
-  const after = useWorkbench(selectOutputSpectrum);
-  const response = useWorkbench(selectSignalResponse);
+  const { before, after, afterMeasured, response, inputRun, outputRun } = useSpectra();
+  const dragging = useWorkbench((s) => s.dragging);
   const plan = useWorkbench(selectLevelPlan);
   const settings = useWorkbench((s) => s.signal.spectrum);
   const [log, setLog] = useState(signal.sampleRate >= LOG_AXIS_FROM_HZ);
   const set = workbenchStore.getState().setSpectrumSettings;
-  const n = signal.samples.length;
+  const n = signal.length;
   const seg = segmentLength(settings, signal.sampleRate, n);
   return (
     <div className="pw-signal-body">
@@ -78,6 +73,20 @@ export function SpectrumView({ signal }: { signal: LoadedSignal }) {
           onChange={(v) => setLog(v === 'log')}
         />
       </div>
+      <RunProgress
+        run={inputRun}
+        what="Computing the recording's spectrum"
+        testId="spectrum-input-progress"
+      />
+      {!afterMeasured && before ? (
+        <p className="pw-signal-note" role="status" data-testid="spectrum-estimate-note">
+          {dragging
+            ? 'While you drag, “after” is the recording’s spectrum × |H|²; it is measured on release.'
+            : outputRun.kind === 'running'
+              ? `“After” is the recording’s spectrum × |H|² until the filtered recording is measured (${Math.round(100 * outputRun.fraction)} %).`
+              : '“After” is the recording’s spectrum × |H|².'}
+        </p>
+      ) : null}
       <div className="pw-signal-split">
         <div className="pw-chart-box" ref={box}>
           <span className="pw-signal-legend pw-signal-legend-over">
@@ -94,6 +103,7 @@ export function SpectrumView({ signal }: { signal: LoadedSignal }) {
               response={response}
               markersHz={plan?.frequenciesHz ?? []}
               log={log}
+              afterShaped={!afterMeasured}
             />
           ) : null}
         </div>

@@ -1,67 +1,54 @@
 /**
- * The filtered recording as files: WAV in the input's sample format (or another), and CSV with time, input
- * and output columns; the fixed-point run's output codes as an integer WAV and as CSV of input and output
- * codes. Built as Blobs (CSV in slices, so ten minutes of samples never become one giant string).
+ * The filtered recording as files: WAV in the input's sample format (or another), CSV with time, input and
+ * output columns, and the fixed-point run's output codes as an integer WAV and as CSV of input and output
+ * codes. The recording worker builds the ones that need the samples slice by slice
+ * (workers/exportJob.ts), so an hour of samples never becomes one array or one string on the page.
  */
-import {
-  csvHeaderLine,
-  csvRows,
-  describeFormat,
-  sampleTimes,
-  writeWav,
-  type SampleFormat,
-} from '../../core/signal/index.ts';
+import { describeFormat, writeWav, type SampleFormat } from '../../core/signal/index.ts';
+import { containerBits, containerFormat, type Implementation } from '../../core/fixed/index.ts';
 import type { LoadedSignal } from '../../store/signal.ts';
-import {
-  containerBits,
-  containerFormat,
-  quantizeValue,
-  type Implementation,
-} from '../../core/fixed/index.ts';
+import { selectSections } from '../../store/derived.ts';
+import { workbenchStore } from '../../store/useWorkbench.ts';
+import { EXPORT_JOB, type ExportRequest, type ExportResult } from '../../workers/exportJob.ts';
+import type { JobOutcome } from '../../workers/jobs.ts';
 import { fileStem } from '../shared/fileName.ts';
-
-/** Rows per CSV slice. */
-export const CSV_SLICE_ROWS = 1 << 16;
+import { recordingClient } from './recordingWorker.ts';
 
 /** The format the WAV export uses unless told otherwise: the input file's, else 32-bit float. */
 export function defaultExportFormat(signal: LoadedSignal): SampleFormat {
   return signal.format ?? 'f32';
 }
 
-/** A WAV file of the samples, with what a user should know (clipping, a rounded sample rate). */
-export function filteredWav(
-  samples: Float64Array,
-  sampleRate: number,
+/** The recording through the design on show, as a WAV or CSV (time, input, filtered) file built in the worker. */
+export function exportFiltered(
+  signal: LoadedSignal,
+  kind: 'wav' | 'csv',
   format: SampleFormat,
-): { blob: Blob; notes: string[] } {
-  const rate = Math.max(1, Math.round(sampleRate));
-  const notes: string[] = [];
-  if (rate !== sampleRate)
-    notes.push(`WAV stores whole hertz: the sample rate ${sampleRate} Hz was written as ${rate} Hz.`);
-  const { bytes, clipped } = writeWav({ format, sampleRate: rate, channels: [samples] });
-  if (clipped > 0) {
-    notes.push(
-      `${clipped} sample(s) beyond ±1 were clipped to fit ${describeFormat(format)}; export as 32-bit float to keep them.`,
-    );
-  }
-  return { blob: new Blob([bytes as BlobPart], { type: 'audio/wav' }), notes };
+  onProgress: (fraction: number) => void,
+): Promise<JobOutcome<ExportResult>> {
+  const request: ExportRequest = {
+    id: signal.id,
+    kind,
+    sections: selectSections(workbenchStore.getState()),
+    format,
+    startTime: signal.startTime,
+  };
+  return recordingClient().run<ExportResult>(EXPORT_JOB, request, onProgress);
 }
 
-/** A CSV file: time in seconds, the recording and the filtered samples, one row per sample. */
-export function filteredCsv(
-  input: Float64Array,
-  samples: Float64Array,
-  sampleRate: number,
-  startTime = 0,
-): Blob {
-  const parts: string[] = [csvHeaderLine(['time_s', 'input', 'filtered'])];
-  for (let first = 0; first < samples.length; first += CSV_SLICE_ROWS) {
-    const count = Math.min(CSV_SLICE_ROWS, samples.length - first);
-    const t = sampleTimes(first, count, sampleRate, startTime);
-    const end = first + count;
-    parts.push(csvRows([t, input.subarray(first, end), samples.subarray(first, end)], 0, count));
-  }
-  return new Blob(parts, { type: 'text/csv' });
+/** The fixed-point run as CSV of time, input codes and output codes, built in the worker. */
+export function exportFixedCsv(
+  signal: LoadedSignal,
+  implementation: Implementation,
+  onProgress: (fraction: number) => void,
+): Promise<JobOutcome<ExportResult>> {
+  const request: ExportRequest = {
+    id: signal.id,
+    kind: 'fixed-csv',
+    implementation,
+    startTime: signal.startTime,
+  };
+  return recordingClient().run<ExportResult>(EXPORT_JOB, request, onProgress);
 }
 
 /**
@@ -88,26 +75,6 @@ export function fixedWav(
   const integers = shift === 1 ? codes : Int32Array.from(codes, (c) => c * shift);
   const { bytes } = writeWav({ format, sampleRate: rate, channels: [], integers: [integers] });
   return { blob: new Blob([bytes as BlobPart], { type: 'audio/wav' }), notes };
-}
-
-/** A CSV file of the fixed-point run: time in seconds, the input codes and the output codes, one row per sample. */
-export function fixedCsv(
-  input: Float64Array,
-  codes: Int32Array,
-  sampleRate: number,
-  impl: Implementation,
-  startTime = 0,
-): Blob {
-  const parts: string[] = [csvHeaderLine(['time_s', 'input_code', 'output_code'])];
-  const inCodes = new Int32Array(CSV_SLICE_ROWS);
-  for (let first = 0; first < codes.length; first += CSV_SLICE_ROWS) {
-    const count = Math.min(CSV_SLICE_ROWS, codes.length - first);
-    for (let i = 0; i < count; i++)
-      inCodes[i] = quantizeValue(input[first + i]!, impl.dataFormat, impl.settings.rounding).code;
-    const t = sampleTimes(first, count, sampleRate, startTime);
-    parts.push(csvRows([t, inCodes.subarray(0, count), codes.subarray(first, first + count)], 0, count));
-  }
-  return new Blob(parts, { type: 'text/csv' });
 }
 
 /** Name of a fixed-point export: the input's name without its extension, "-fixed", the new extension. */

@@ -1,6 +1,6 @@
 /**
  * The recording run through the fixed-point implementation in force, in the recording worker (see
- * src/workers/jobs.ts). While "fixed point" is on, every settled change of the implementation or the
+ * src/workers/jobs.ts; the recording is already there, read or made by the loader). While "fixed point" is on, every settled change of the implementation or the
  * recording starts a new run (the newest wins; nothing runs during a root drag). The status is page state
  * kept here, beside the loader's, because only the recording views use it.
  */
@@ -10,8 +10,9 @@ import type { Implementation } from '../../core/fixed/index.ts';
 import { selectImplementation } from '../../store/implementationDerived.ts';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import type { WorkbenchState } from '../../store/store.ts';
-import { JobClient, type Endpoint, type JobRequest, type JobResponse } from '../../workers/jobs.ts';
 import { FIXED_RUN_JOB, type FixedRecordingResult } from '../../workers/fixedRecordingJob.ts';
+import { RECORDING_KEY } from '../../workers/recordingKeys.ts';
+import { recordingClient } from './recordingWorker.ts';
 
 /** Where the run stands. */
 export type FixedRunStatus =
@@ -24,16 +25,16 @@ export type FixedRunStatus =
 export interface FixedRunState {
   enabled: boolean;
   status: FixedRunStatus;
-  /** What the shown status was computed for: the implementation and the recording's samples. */
+  /** What the shown status was computed for: the implementation and the recording (its number). */
   implementation: Implementation | null;
-  samples: Float64Array | null;
+  recording: number | null;
 }
 
 export const fixedRunStore = createStore<FixedRunState>()(() => ({
   enabled: false,
   status: { kind: 'off' },
   implementation: null,
-  samples: null,
+  recording: null,
 }));
 
 /** Reads the run's state in a component. */
@@ -41,62 +42,43 @@ export function useFixedRun<T>(selector: (s: FixedRunState) => T): T {
   return useStore(fixedRunStore, selector);
 }
 
-const RECORDING_KEY = 'recording';
-let client: JobClient | null = null;
-let sentSamples: Float64Array | null = null;
 let unsubscribe: (() => void) | null = null;
-
-function clientOf(): JobClient {
-  if (!client) {
-    const worker = new Worker(new URL('../../workers/recording.worker.ts', import.meta.url), {
-      type: 'module',
-    });
-    client = new JobClient(worker as unknown as Endpoint<JobResponse, JobRequest>);
-  }
-  return client;
-}
 
 /** Starts a run when the settled implementation or recording differs from the one last run. */
 function follow(s: WorkbenchState): void {
   if (!fixedRunStore.getState().enabled || s.dragging) return;
-  const samples = s.signal.current?.samples ?? null;
+  const recording = s.signal.current?.id ?? null;
   const built = selectImplementation(s);
   const implementation = built.ok ? built.value : null;
   const last = fixedRunStore.getState();
-  if (last.samples === samples && last.implementation === implementation && last.status.kind !== 'off')
+  if (last.recording === recording && last.implementation === implementation && last.status.kind !== 'off')
     return;
-  if (!samples) {
-    clientOf().cancel(FIXED_RUN_JOB);
-    if (sentSamples) clientOf().drop(RECORDING_KEY);
-    sentSamples = null;
+  if (recording === null) {
+    recordingClient().cancel(FIXED_RUN_JOB);
     fixedRunStore.setState({
       status: { kind: 'unavailable', reason: 'No recording.' },
       implementation,
-      samples,
+      recording,
     });
     return;
   }
   if (!built.ok) {
-    clientOf().cancel(FIXED_RUN_JOB);
+    recordingClient().cancel(FIXED_RUN_JOB);
     fixedRunStore.setState({
       status: {
         kind: 'unavailable',
         reason: `The fixed-point settings do not apply: ${built.error.message}.`,
       },
       implementation: null,
-      samples,
+      recording,
     });
     return;
   }
-  const c = clientOf();
-  if (sentSamples !== samples) {
-    c.put(RECORDING_KEY, samples);
-    sentSamples = samples;
-  }
-  fixedRunStore.setState({ status: { kind: 'running', fraction: 0 }, implementation, samples });
+  const c = recordingClient();
+  fixedRunStore.setState({ status: { kind: 'running', fraction: 0 }, implementation, recording });
   const mine = () =>
     fixedRunStore.getState().implementation === implementation &&
-    fixedRunStore.getState().samples === samples;
+    fixedRunStore.getState().recording === recording;
   void c
     .run<FixedRecordingResult>(
       FIXED_RUN_JOB,
@@ -122,8 +104,13 @@ export function setFixedRunEnabled(on: boolean): void {
   if (!on) {
     unsubscribe?.();
     unsubscribe = null;
-    client?.cancel(FIXED_RUN_JOB);
-    fixedRunStore.setState({ enabled: false, status: { kind: 'off' }, implementation: null, samples: null });
+    recordingClient().cancel(FIXED_RUN_JOB);
+    fixedRunStore.setState({
+      enabled: false,
+      status: { kind: 'off' },
+      implementation: null,
+      recording: null,
+    });
     return;
   }
   fixedRunStore.setState({ enabled: true, status: { kind: 'off' } });
@@ -138,10 +125,10 @@ export function setFixedRunEnabled(on: boolean): void {
  */
 export function currentResult(
   state: FixedRunState,
-  samples: Float64Array | null,
+  recording: number | null,
   dragging: boolean,
 ): FixedRecordingResult | null {
-  if (state.status.kind !== 'done' || dragging || state.samples !== samples) return null;
+  if (state.status.kind !== 'done' || dragging || state.recording !== recording) return null;
   return state.status.result;
 }
 
@@ -151,8 +138,8 @@ export function useCurrentFixedRun(): {
   implementation: Implementation;
 } | null {
   const state = useFixedRun((s) => s);
-  const samples = useWorkbench((s) => s.signal.current?.samples ?? null);
+  const recording = useWorkbench((s) => s.signal.current?.id ?? null);
   const dragging = useWorkbench((s) => s.dragging);
-  const result = currentResult(state, samples, dragging);
+  const result = currentResult(state, recording, dragging);
   return result && state.implementation ? { result, implementation: state.implementation } : null;
 }

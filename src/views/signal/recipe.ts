@@ -3,8 +3,7 @@
  * into engine generator specs and summed at the design's sample rate. Presets follow the invented
  * scenarios (hopper scale with 50 Hz hum, bench audio with a 60 Hz ground loop).
  */
-import { generateSignal, type GeneratorSpec } from '../../core/signal/index.ts';
-import type { LoadedSignal } from '../../store/signal.ts';
+import type { GeneratorSpec } from '../../core/signal/index.ts';
 import { readListField, readNumberField, type NumberFieldRule } from '../shared/fieldReading.ts';
 
 export type PartKind = GeneratorSpec['kind'];
@@ -259,38 +258,24 @@ function isErr(x: unknown): x is RecipeError {
   return typeof x === 'object' && x !== null && 'message' in x && 'part' in x;
 }
 
-/** The sum of the parts, n samples at fs Hz. */
-export function makeRecipeSamples(specs: readonly GeneratorSpec[], n: number, fs: number): Float64Array {
-  const sum = new Float64Array(n);
-  for (const spec of specs) {
-    const x = generateSignal(spec, n, fs);
-    for (let k = 0; k < n; k++) sum[k] = sum[k]! + x[k]!;
-  }
-  return sum;
-}
-
 /** A short description of the parts, for the signal's name. */
 export function describeRecipe(recipe: Recipe): string {
   const names = recipe.parts.map((p) => PART_KINDS.find((k) => k.kind === p.kind)!.label.toLowerCase());
   return `${names.join(' + ')} (${recipe.duration} s)`;
 }
 
-/** The recipe made into a signal at fs Hz, or the first problem in the form. */
-export function recipeSignal(recipe: Recipe, fs: number, name?: string): Checked<LoadedSignal> {
+/** What the recording worker needs to make a signal (see loader.ts showGenerated). */
+export interface GeneratedSignal {
+  name: string;
+  sampleRate: number;
+  specs: GeneratorSpec[];
+  /** Number of samples. */
+  n: number;
+}
+
+/** The recipe as a signal to make at fs Hz (generateSum of the parts), or the first problem in the form. */
+export function recipeSignal(recipe: Recipe, fs: number, name?: string): Checked<GeneratedSignal> {
   const r = checkRecipe(recipe, fs);
   if (!r.ok) return r;
-  return {
-    ok: true,
-    value: {
-      name: name ?? describeRecipe(recipe),
-      source: 'generated',
-      sampleRate: fs,
-      samples: makeRecipeSamples(r.value.specs, r.value.n, fs),
-      channel: 0,
-      channelCount: 1,
-      format: null,
-      startTime: 0,
-      notes: [],
-    },
-  };
+  return { ok: true, value: { name: name ?? describeRecipe(recipe), sampleRate: fs, ...r.value } };
 }

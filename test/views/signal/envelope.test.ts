@@ -1,51 +1,81 @@
 import { describe, expect, it } from 'vitest';
-import { columnEnvelope, extentOf, tracePath, visibleSamples } from '../../../src/views/signal/envelope.ts';
-import { mulberry32 } from '../../../src/core/random.ts';
+import { spanFor, traceExtent, tracePathOf, visibleSamples } from '../../../src/views/signal/envelope.ts';
 
-describe('columnEnvelope', () => {
-  it('holds the min and max of every column, so a one-sample spike survives (seeded invariant)', () => {
-    const next = mulberry32(7);
-    for (let trial = 0; trial < 20; trial++) {
-      const n = 1000 + Math.floor(next() * 50000);
-      const x = Float64Array.from({ length: n }, () => next() * 2 - 1);
-      const spike = Math.floor(next() * n);
-      x[spike] = 5;
-      const columns = 50 + Math.floor(next() * 700);
-      const { min, max } = columnEnvelope(x, 0, n, columns);
-      expect(Math.max(...max)).toBe(5);
-      // Every sample lies within the extremes of its own column.
-      for (let i = 0; i < n; i += 97) {
-        const c = Math.min(columns - 1, Math.floor((i * columns) / n));
-        const cc = [c - 1, c, c + 1].filter((k) => k >= 0 && k < columns);
-        expect(cc.some((k) => x[i]! >= min[k]! && x[i]! <= max[k]!)).toBe(true);
-      }
-    }
-  });
-
-  it('extentOf ignores nothing finite and returns [0, 0] for an empty range', () => {
-    expect(extentOf([3, -1, 2], 0, 3)).toEqual([-1, 3]);
-    expect(extentOf([3, -1, 2], 1, 1)).toEqual([0, 0]);
-  });
+const frame = (kx: number, x0 = 10) => ({
+  left: 10,
+  right: 110,
+  top: 0,
+  bottom: 100,
+  x0,
+  kx,
+  y0: 50,
+  ky: 10,
 });
 
-describe('tracePath', () => {
-  const frame = (kx: number) => ({ left: 10, right: 110, top: 0, bottom: 100, x0: 10, kx, y0: 50, ky: 10 });
-
-  it('draws a line through the samples when they are sparse, a closed band when dense', () => {
-    const sparse = tracePath([0, 1, -1, 0], frame(25));
-    expect(sparse.band).toBe(false);
-    expect(sparse.d).toBe('M10 50L35 40L60 60L85 50');
-    const x = Float64Array.from({ length: 10000 }, (_, i) => Math.sin(i));
-    const dense = tracePath(x, frame(0.01));
-    expect(dense.band).toBe(true);
-    expect(dense.d.endsWith('Z')).toBe(true);
-    // Two points per column (top and bottom), 100 columns.
-    expect(dense.d.match(/[ML]/g)).toHaveLength(200);
+describe('spanFor', () => {
+  it('asks for the samples themselves when they are sparse, one band per column when dense', () => {
+    expect(spanFor(frame(25), 4)).toEqual({ i0: 0, i1: 4, columns: 100, line: true });
+    expect(spanFor(frame(0.01), 100_000)).toEqual({ i0: 0, i1: 10_000, columns: 100, line: false });
+    // Scrolled: the band covers the samples inside the plot only.
+    expect(spanFor(frame(0.01, -990), 100_000)).toEqual({
+      i0: 100_000,
+      i1: 100_000,
+      columns: 100,
+      line: true,
+    });
+    expect(spanFor(frame(0.01, -90), 100_000)).toEqual({ i0: 10_000, i1: 20_000, columns: 100, line: false });
   });
 
   it('the visible samples cover the frame with one to spare on each side', () => {
-    expect(
-      visibleSamples({ left: 10, right: 110, top: 0, bottom: 1, x0: -90, kx: 1, y0: 0, ky: 1 }, 1000),
-    ).toEqual([100, 201]);
+    expect(visibleSamples(frame(1, -90), 1000)).toEqual([100, 201]);
+  });
+});
+
+describe('tracePathOf', () => {
+  it('draws a line through the samples at their own places', () => {
+    const line = { kind: 'line' as const, values: Float32Array.of(0, 1, -1, 0) };
+    const d = tracePathOf(line, { id: 1, i0: 0, i1: 4, columns: 100, line: true }, frame(25)).d;
+    expect(d).toBe('M10 50L35 40L60 60L85 50');
+  });
+
+  it('draws a closed band, two points per column, skipping empty columns; a range of columns on request', () => {
+    const min = Float32Array.from({ length: 100 }, (_, c) => (c === 7 ? NaN : -1));
+    const max = Float32Array.from({ length: 100 }, (_, c) => (c === 7 ? NaN : 1));
+    const span = { id: 1, i0: 0, i1: 10_000, columns: 100, line: false };
+    const band = tracePathOf({ kind: 'band', min, max }, span, frame(0.01));
+    expect(band.band).toBe(true);
+    expect(band.d.endsWith('Z')).toBe(true);
+    expect(band.d.match(/[ML]/g)).toHaveLength(2 * 99);
+    // Column c's middle sample (c + 0.5)·100 sits at 10 + (c + 0.5) px.
+    expect(band.d.startsWith('M10.5 40L11.5 40')).toBe(true);
+    const part = tracePathOf({ kind: 'band', min, max }, span, frame(0.01), 50, 60);
+    expect(part.d.match(/[ML]/g)).toHaveLength(20);
+    expect(part.d.startsWith('M60.5 40')).toBe(true);
+  });
+
+  it('draws a trace asked for an older frame at its samples’ places in the new one', () => {
+    const max = Float32Array.from({ length: 10 }, () => 1);
+    const min = Float32Array.from({ length: 10 }, () => -1);
+    // Asked for samples 0..1000 over 10 columns; now samples 0..2000 span the 100 px.
+    const d = tracePathOf(
+      { kind: 'band', min, max },
+      { id: 1, i0: 0, i1: 1000, columns: 10, line: false },
+      frame(0.05),
+    ).d;
+    expect(d.startsWith('M12.5 40L17.5 40')).toBe(true);
+  });
+});
+
+describe('traceExtent', () => {
+  it('reads finite values of the first entries only; null for none', () => {
+    expect(traceExtent({ kind: 'line', values: Float32Array.of(3, -1, 2) })).toEqual([-1, 3]);
+    expect(traceExtent({ kind: 'line', values: Float32Array.of(3, -1, 2) }, 1)).toEqual([3, 3]);
+    const band = {
+      kind: 'band' as const,
+      min: Float32Array.of(-2, NaN, -Infinity),
+      max: Float32Array.of(1, NaN, Infinity),
+    };
+    expect(traceExtent(band)).toEqual([-2, 1]);
+    expect(traceExtent({ kind: 'line', values: new Float32Array(0) })).toBeNull();
   });
 });

@@ -1,0 +1,22 @@
+/** The recording's own Welch spectrum (before the filter), in slices with progress, once per setting. */
+import type { WelchResult } from '../core/signal/index.ts';
+import type { JobContext } from './jobs.ts';
+import { spectrumAccumulator, type SpectrumRequest } from './outputJob.ts';
+import { recordingOf } from './recordingKeys.ts';
+
+export const INPUT_SPECTRUM_JOB = 'input-spectrum';
+/** Samples per slice between checks for newer requests. */
+const SLICE = 1 << 18;
+
+export async function inputSpectrumJob(
+  req: SpectrumRequest & { id: number },
+  ctx: JobContext,
+): Promise<{ value: WelchResult }> {
+  const { samples: x, info } = recordingOf(ctx, req.id);
+  const acc = spectrumAccumulator(x.length, info.sampleRate, req);
+  for (let i = 0; i < x.length; i += SLICE) {
+    acc.push(x.subarray(i, i + SLICE));
+    await ctx.checkpoint(Math.min(1, (i + SLICE) / x.length));
+  }
+  return { value: acc.result() };
+}
