@@ -29,6 +29,8 @@ export interface TraceEvent {
   /** Microseconds. */
   ts: number;
   dur?: number;
+  /** Thread CPU time of a complete event, microseconds (what the thread spent running it). */
+  tdur?: number;
   args?: Record<string, unknown>;
 }
 
@@ -41,10 +43,14 @@ function isDevToolsMessage(e: TraceEvent): boolean {
   return info?.mojo_interface_tag?.includes('DevTools') ?? false;
 }
 
-/** Main-thread milliseconds per move, in move order, from the trace events. */
-export function workPerMove(events: readonly TraceEvent[]): number[] {
+/**
+ * Main-thread milliseconds per move, in move order, from the trace events: `cpu` sums the tasks' thread CPU
+ * time (what the thread spent running them, whatever else the machine was doing), `wall` their durations
+ * (which also count the time the thread was preempted by other work on a loaded machine).
+ */
+export function workPerMove(events: readonly TraceEvent[]): { cpu: number[]; wall: number[] } {
   const marks = events.filter((e) => e.name === MOVE_MARK && (e.ph === 'R' || e.ph === 'I' || e.ph === 'n'));
-  if (marks.length === 0) return [];
+  if (marks.length === 0) return { cpu: [], wall: [] };
   const { pid, tid } = marks[0]!;
   const tasks = events
     .filter(
@@ -69,12 +75,14 @@ export function workPerMove(events: readonly TraceEvent[]): number[] {
       return holder ? holder.ts : m.ts;
     })
     .sort((a, b) => a - b);
-  const out = new Array<number>(starts.length).fill(0);
+  const cpu = new Array<number>(starts.length).fill(0);
+  const wall = new Array<number>(starts.length).fill(0);
   let k = 0;
   for (const t of top) {
     while (k + 1 < starts.length && t.ts >= starts[k + 1]!) k++;
     if (t.ts < starts[0]!) continue;
-    out[k]! += t.dur! / 1000;
+    cpu[k]! += (t.tdur ?? t.dur!) / 1000;
+    wall[k]! += t.dur! / 1000;
   }
-  return out;
+  return { cpu, wall };
 }

@@ -16,7 +16,8 @@ import type { ViewSettings } from './view.ts';
 import type { WorkbenchState } from './store.ts';
 import { memoLast } from './memo.ts';
 import { evaluateMask, type MaskResult } from '../core/mask/index.ts';
-import { runDesigner, type DesignerSpec } from '../core/design/index.ts';
+import { runDesigner, type DesignerSpec, type DesignResult } from '../core/design/index.ts';
+import type { Result } from '../core/types.ts';
 import { differsFromDesigner } from './designer.ts';
 import { hzToOmega } from '../core/units.ts';
 
@@ -42,6 +43,21 @@ const responseOf = memoLast((zpk: Zpk, omega: Float64Array) => responseZpk(zpk, 
 const displayResponseOf = memoLast(refineAtRoots);
 const stabilityOf = memoLast(stabilityOfZpk);
 const readoutsOf = memoLast((zpk: Zpk, fs: number) => rootReadouts(zpk, fs));
+
+/** Fewest response points while a root is dragged. */
+export const DRAG_RESPONSE_MIN_POINTS = 256;
+
+/**
+ * Points of the frequency grid: the setting, or while a root is dragged about one per pixel column of the
+ * plots (at least DRAG_RESPONSE_MIN_POINTS), since the traces keep at most that much detail anyway and the
+ * display response adds the exact angle of every root (so peaks and notch depths stay true). On release the
+ * full grid comes back.
+ */
+export function responsePointsOf(s: WorkbenchState): number {
+  const columns = s.view.responseColumns;
+  if (!s.dragging || columns === undefined) return s.view.responsePoints;
+  return Math.min(s.view.responsePoints, Math.max(DRAG_RESPONSE_MIN_POINTS, columns));
+}
 
 /** The time-view input signal for the current settings. */
 function timeInput(view: ViewSettings, fs: number): Float64Array {
@@ -82,7 +98,7 @@ export const selectZpk = (s: WorkbenchState): Zpk => zpkOf(s.design);
 export const selectTf = (s: WorkbenchState): TransferFunction => tfOf(s.design, zpkOf(s.design));
 export const selectSections = (s: WorkbenchState): Section[] => sectionsOf(zpkOf(s.design));
 export const selectResponse = (s: WorkbenchState): FrequencyResponse =>
-  responseOf(zpkOf(s.design), gridOf(s.view.responsePoints, s.view.frequencyAxis));
+  responseOf(zpkOf(s.design), gridOf(responsePointsOf(s), s.view.frequencyAxis));
 /** The response on the display grid plus the exact angles of the roots near the circle (true notch depth). */
 export const selectDisplayResponse = (s: WorkbenchState): FrequencyResponse =>
   displayResponseOf(zpkOf(s.design), selectResponse(s));
@@ -122,12 +138,23 @@ export const selectMaskResult = (s: WorkbenchState): MaskResult | null =>
   maskResultOf(s.design.mask, zpkOf(s.design), s.design.sampleRate, s.dragging);
 
 const designerOutputOf = memoLast((spec: DesignerSpec | undefined) => (spec ? runDesigner(spec) : null));
+/** One status object per (spec, edited) pair, so a root drag does not make a new one per move. */
+const statusObjectOf = memoLast((spec: DesignerSpec, editedByHand: boolean) => ({ spec, editedByHand }));
 const designerStatusOf = memoLast((design: Design) =>
   design.designer
-    ? { spec: design.designer, editedByHand: differsFromDesigner(design, designerOutputOf(design.designer)) }
+    ? statusObjectOf(design.designer, differsFromDesigner(design, designerOutputOf(design.designer)))
     : null,
 );
-/** The designer behind the design and whether the roots were edited by hand since it ran, or null. */
+/**
+ * The designer behind the design and whether the roots were edited by hand since it ran, or null. The
+ * same object while neither changes (a drag changes it once, at its first move).
+ */
 export const selectDesignerStatus = (
   s: WorkbenchState,
 ): { spec: DesignerSpec; editedByHand: boolean } | null => designerStatusOf(s.design);
+/**
+ * What the design's designer gives (its roots, note, estimated order and margins), keyed on the designer's
+ * description: run once per description, never per root move.
+ */
+export const selectDesignerResult = (s: WorkbenchState): Result<DesignResult> | null =>
+  designerOutputOf(s.design.designer);

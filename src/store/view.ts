@@ -25,6 +25,11 @@ export interface ViewSettings extends DocumentView {
   angleUnit: 'deg' | 'rad' | 'hz';
   /** Draw the fixed-point filter over the ideal one (plane, magnitude) while the design has implementation settings; absent = true. */
   showQuantized?: boolean;
+  /**
+   * Pixel columns of the frequency plots, as the plot last measured them (absent before it is drawn): during a
+   * root drag the response is computed on about one point per column (see derived.ts selectResponse).
+   */
+  responseColumns?: number;
 }
 
 export const defaultView: ViewSettings = {

@@ -2,9 +2,9 @@
  * The frequency plots (magnitude on top, phase and group delay below) on one shared frequency axis, with
  * the cross-hair (pointer or arrow keys) and the selected root's marker.
  */
-import { useId, useMemo, useState } from 'react';
+import { useEffect, useId, useMemo, useState } from 'react';
 import { selectDisplayResponse } from '../../store/derived.ts';
-import { useWorkbench } from '../../store/useWorkbench.ts';
+import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import { Axis } from '../chart/Axis.tsx';
 import { CursorArea } from '../chart/CursorArea.tsx';
 import { fromPixel, toPixel, toPixels, type AxisMap } from '../chart/pixels.ts';
@@ -71,6 +71,11 @@ export function FrequencyChart({ width, height, reading, onCursor, marker }: Fre
   const response = useWorkbench(selectDisplayResponse);
   const layout = useMemo(() => frequencyLayout(width, height, second), [width, height, second]);
   const area = layout.plots[0]!.rect;
+  const columns = Math.max(1, Math.round(area.right - area.left));
+  useEffect(() => {
+    const st = workbenchStore.getState();
+    if (st.view.responseColumns !== columns) st.setView({ responseColumns: columns });
+  }, [columns]);
   const hz = useMemo(() => omegaGridToHz(response.omega, fs), [response.omega, fs]);
   const [d0, d1] = frequencyDomain(hz, fs, axis);
   const xMap = useMemo<AxisMap>(

@@ -3,7 +3,7 @@
  * its multiplicity, split/join and delete. Enter applies the typed position as one undo step; text that is
  * not a number shows a message and changes nothing.
  */
-import { useEffect, useState, type FormEvent } from 'react';
+import { useState, type FormEvent } from 'react';
 import type { Root } from '../../core/types.ts';
 import type { RootRef } from '../../core/model/design.ts';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
@@ -30,10 +30,14 @@ function Editor({ target: ref, root }: { target: RootRef; root: Root }) {
   const [a, setA] = useState(f0);
   const [b, setB] = useState(f1);
   const [error, setError] = useState<string | null>(null);
-  useEffect(() => {
+  // The fields follow the root as it moves: adjusted while rendering (React's way to derive state from
+  // changing props), so a drag commits once per move rather than once more from an effect.
+  const [shown, setShown] = useState<[string, string]>([f0, f1]);
+  if (shown[0] !== f0 || shown[1] !== f1) {
+    setShown([f0, f1]);
     setA(f0);
     setB(f1);
-  }, [f0, f1]);
+  }
   const real = root.im === 0;
   const st = workbenchStore.getState;
 

@@ -35,27 +35,37 @@ export const RootRow = memo(function RootRow({ row, selected, onSelect }: Props)
         </span>{' '}
         {r.kind}
         {m > 1 && <span className="pw-mult"> ×{m}</span>}
-        <span className="pw-root-pos">{positionText(r.root.re, r.root.im)}</span>
+        <span className="pw-root-pos">
+          <span className="pw-cell pw-cell-pos">{positionText(r.root.re, r.root.im)}</span>
+        </span>
       </th>
-      <td>{formatHz(r.frequencyHz)}</td>
-      <td>{formatNumber(r.radius, 5)}</td>
+      <td>
+        <span className="pw-cell">{formatHz(r.frequencyHz)}</span>
+      </td>
+      <td>
+        <span className="pw-cell">{formatNumber(r.radius, 5)}</span>
+      </td>
       {pole ? (
         <>
           <td>
-            {r.q !== undefined ? formatNumber(r.q, 3) : dash}
-            {r.bandwidthHz !== undefined && <span className="pw-sub">{formatHz(r.bandwidthHz, 3)}</span>}
+            <span className="pw-cell pw-cell-2">
+              {r.q !== undefined ? formatNumber(r.q, 3) : dash}
+              {r.bandwidthHz !== undefined && <span className="pw-sub">{formatHz(r.bandwidthHz, 3)}</span>}
+            </span>
           </td>
           <td>
-            {r.timeConstantSeconds !== undefined ? (
-              <>
-                {formatSeconds(r.timeConstantSeconds)}
-                <span className="pw-sub">{formatSeconds(r.decay40dBSeconds ?? NaN)}</span>
-              </>
-            ) : (
-              <span className={r.radius > 1 ? 'pw-grows' : 'pw-sustained'}>
-                {r.radius > 1 ? 'grows' : 'no decay'}
-              </span>
-            )}
+            <span className="pw-cell pw-cell-2">
+              {r.timeConstantSeconds !== undefined ? (
+                <>
+                  {formatSeconds(r.timeConstantSeconds)}
+                  <span className="pw-sub">{formatSeconds(r.decay40dBSeconds ?? NaN)}</span>
+                </>
+              ) : (
+                <span className={r.radius > 1 ? 'pw-grows' : 'pw-sustained'}>
+                  {r.radius > 1 ? 'grows' : 'no decay'}
+                </span>
+              )}
+            </span>
           </td>
         </>
       ) : (
@@ -64,7 +74,9 @@ export const RootRow = memo(function RootRow({ row, selected, onSelect }: Props)
           className="pw-notch"
           title={r.notchFrequencyHz !== undefined ? `Notch at ${formatHz(r.notchFrequencyHz)}` : undefined}
         >
-          {r.notchDepthDb !== undefined ? <>notch {formatDb(r.notchDepthDb, 3)}</> : dash}
+          <span className="pw-cell pw-cell-notch">
+            {r.notchDepthDb !== undefined ? <>notch {formatDb(r.notchDepthDb, 3)}</> : dash}
+          </span>
         </td>
       )}
     </tr>

@@ -21,6 +21,13 @@ export function RootTable() {
       ) : (
         <div className="pw-table-wrap">
           <table className="pw-root-table" data-testid="root-table" aria-labelledby="pw-roots-h">
+            <colgroup>
+              <col className="pw-col-root" />
+              <col className="pw-col-f" />
+              <col className="pw-col-r" />
+              <col className="pw-col-q" />
+              <col className="pw-col-tau" />
+            </colgroup>
             <thead>
               <tr>
                 <th scope="col">Root</th>

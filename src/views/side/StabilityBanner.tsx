@@ -27,9 +27,14 @@ export function StabilityBanner() {
         <strong className="pw-stability-title" role="status" aria-live="polite" aria-atomic="true">
           {TITLE[verdict]}
         </strong>
-        <span className="pw-stability-radius">
-          {hasPoles ? ` · largest pole radius ${formatNumber(s.maxPoleRadius, 6)}` : ' · no poles (FIR)'}
-        </span>
+        {hasPoles ? (
+          <>
+            {' · largest pole radius '}
+            <span className="pw-stability-radius">{formatNumber(s.maxPoleRadius, 6)}</span>
+          </>
+        ) : (
+          ' · no poles (FIR)'
+        )}
         {verdict !== 'stable' && (
           <p className="pw-stability-reason">
             {sentence(s.reason)}

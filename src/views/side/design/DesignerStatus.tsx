@@ -2,9 +2,7 @@
  * What produced the roots: the designer and its parameters, the order it estimated and the margins it
  * reached, whether the roots were edited by hand since, and the buttons to change parameters or release.
  */
-import { useMemo } from 'react';
-import { runDesigner } from '../../../core/design/index.ts';
-import { selectDesignerStatus } from '../../../store/derived.ts';
+import { selectDesignerResult, selectDesignerStatus } from '../../../store/derived.ts';
 import { useWorkbench, workbenchStore } from '../../../store/useWorkbench.ts';
 import { formatDb, formatNumber } from '../../shared/format.ts';
 import { describeDesigner } from './describe.ts';
@@ -13,8 +11,8 @@ const signed = (db: number) => `${db >= 0 ? '+' : ''}${formatDb(db, 3)}`;
 
 export function DesignerStatus({ onChangeParameters }: { onChangeParameters: () => void }) {
   const status = useWorkbench(selectDesignerStatus);
-  // The designer's own output (cheap; runs once per designer description) for the order and margins.
-  const result = useMemo(() => (status ? runDesigner(status.spec) : null), [status]);
+  // The designer's own output for the order and margins: computed once per designer description.
+  const result = useWorkbench(selectDesignerResult);
   if (!status) return null;
   const words = describeDesigner(status.spec);
   const value = result?.ok ? result.value : null;

@@ -2,7 +2,7 @@
  * The requirement mask by number: one row per region (kind, range in Hz, limits in dB, its live verdict),
  * buttons to add regions, to build the mask from the designer's requirement, and to remove it.
  */
-import { useMemo, useState } from 'react';
+import { memo, useMemo, useState } from 'react';
 import type { MaskRegion, MaskRegionKind, MaskRegionPatch } from '../../../core/mask/index.ts';
 import { selectDesignerStatus, selectMaskResult } from '../../../store/derived.ts';
 import { useWorkbench, workbenchStore } from '../../../store/useWorkbench.ts';
@@ -21,10 +21,31 @@ function kindPatch(region: MaskRegion, kind: MaskRegionKind): MaskRegionPatch {
   return { kind };
 }
 
-function RegionRow({ region, index }: { region: MaskRegion; index: number }) {
-  const verdict = useWorkbench((s) => selectMaskResult(s)?.regions.find((r) => r.id === region.id));
-  const [error, setError] = useState<string | null>(null);
-  const name = `Region ${index + 1}`;
+/** The region's own verdict: the only part of a row that changes while a root is dragged. */
+function RegionVerdict({ id }: { id: string }) {
+  const verdict = useWorkbench((s) => selectMaskResult(s)?.regions.find((r) => r.id === id));
+  if (!verdict) return null;
+  return (
+    <span
+      className={verdict.pass ? 'pw-dz-ok' : 'pw-dz-bad'}
+      data-testid={`mask-verdict-${id}`}
+      data-pass={verdict.pass}
+    >
+      {verdict.pass ? '✓' : '✗'} {regionVerdictText(verdict)}
+    </span>
+  );
+}
+
+/** The region's fields; drawn again only when the region itself changes. */
+const RegionFields = memo(function RegionFields({
+  region,
+  name,
+  onError,
+}: {
+  region: MaskRegion;
+  name: string;
+  onError: (message: string | null) => void;
+}) {
   const commit = (patch: MaskRegionPatch) => {
     const r = store().updateRegion(region.id, patch);
     return r.ok ? null : errorText(r.error);
@@ -37,11 +58,47 @@ function RegionRow({ region, index }: { region: MaskRegion; index: number }) {
         value={region[key]}
         optional={key === 'lowerDb' || key === 'upperDb'}
         onCommit={(v) => commit({ [key]: v })}
-        onError={setError}
+        onError={onError}
       />
     </td>
   );
-  const failing = verdict ? !verdict.pass : false;
+  return (
+    <>
+      <td>
+        <select
+          aria-label={`${name} kind`}
+          value={region.kind}
+          onChange={(e) => onError(commit(kindPatch(region, e.target.value as MaskRegionKind)))}
+        >
+          <option value="pass">pass</option>
+          <option value="stop">stop</option>
+          <option value="band">band</option>
+        </select>
+      </td>
+      {cell('fromHz', 'from (Hz)')}
+      {cell('toHz', 'to (Hz)')}
+      {cell('lowerDb', 'lower limit (dB)')}
+      {cell('upperDb', 'upper limit (dB)')}
+      <td>
+        <button
+          type="button"
+          className="pw-dz-x"
+          aria-label={`Delete ${name.toLowerCase()}`}
+          title="Delete this region"
+          onClick={() => store().deleteRegion(region.id)}
+        >
+          ×
+        </button>
+      </td>
+    </>
+  );
+});
+
+function RegionRow({ region, index }: { region: MaskRegion; index: number }) {
+  const failing = useWorkbench(
+    (s) => selectMaskResult(s)?.regions.find((r) => r.id === region.id)?.pass === false,
+  );
+  const [error, setError] = useState<string | null>(null);
   return (
     <>
       <tr
@@ -49,44 +106,11 @@ function RegionRow({ region, index }: { region: MaskRegion; index: number }) {
         data-testid={`mask-row-${region.id}`}
         title={region.label}
       >
-        <td>
-          <select
-            aria-label={`${name} kind`}
-            value={region.kind}
-            onChange={(e) => setError(commit(kindPatch(region, e.target.value as MaskRegionKind)))}
-          >
-            <option value="pass">pass</option>
-            <option value="stop">stop</option>
-            <option value="band">band</option>
-          </select>
-        </td>
-        {cell('fromHz', 'from (Hz)')}
-        {cell('toHz', 'to (Hz)')}
-        {cell('lowerDb', 'lower limit (dB)')}
-        {cell('upperDb', 'upper limit (dB)')}
-        <td>
-          <button
-            type="button"
-            className="pw-dz-x"
-            aria-label={`Delete ${name.toLowerCase()}`}
-            title="Delete this region"
-            onClick={() => store().deleteRegion(region.id)}
-          >
-            ×
-          </button>
-        </td>
+        <RegionFields region={region} name={`Region ${index + 1}`} onError={setError} />
       </tr>
       <tr className={`pw-dz-verdict-row${failing ? ' pw-dz-fail' : ''}`}>
         <td colSpan={6}>
-          {verdict && (
-            <span
-              className={verdict.pass ? 'pw-dz-ok' : 'pw-dz-bad'}
-              data-testid={`mask-verdict-${region.id}`}
-              data-pass={verdict.pass}
-            >
-              {verdict.pass ? '✓' : '✗'} {regionVerdictText(verdict)}
-            </span>
-          )}
+          <RegionVerdict id={region.id} />
           {error && (
             <span role="alert" className="pw-field-error pw-block">
               {error}
@@ -98,10 +122,38 @@ function RegionRow({ region, index }: { region: MaskRegion; index: number }) {
   );
 }
 
+/** The mask's overall verdict chip and sentence, live during a drag. */
+function MaskHead({ hasRegions }: { hasRegions: boolean }) {
+  const result = useWorkbench(selectMaskResult);
+  return (
+    <>
+      <div className="pw-section-head">
+        <h2 id="pw-dz-mask-h">Requirement mask</h2>
+        {result && hasRegions && (
+          <span
+            className={`pw-dz-chip ${result.pass ? 'pw-dz-ok' : 'pw-dz-bad'}`}
+            data-testid="mask-overall"
+            data-pass={result.pass}
+          >
+            {result.pass ? 'passes' : 'fails'}
+          </span>
+        )}
+      </div>
+      {result && hasRegions ? (
+        <p className="pw-dz-note">{maskVerdictText(result)}</p>
+      ) : (
+        <p className="pw-hint pw-dz-note">
+          No mask. Add pass and stop regions (frequency range and limits in dB) and the response is judged
+          live, also while you drag roots; drag a region's edges on the magnitude plot.
+        </p>
+      )}
+    </>
+  );
+}
+
 export function MaskSection() {
   const mask = useWorkbench((s) => s.design.mask);
   const fs = useWorkbench((s) => s.design.sampleRate);
-  const result = useWorkbench(selectMaskResult);
   const status = useWorkbench(selectDesignerStatus);
   const implied = useMemo(() => (status ? maskFromDesigner(status.spec) : null), [status]);
   const [error, setError] = useState<string | null>(null);
@@ -116,26 +168,7 @@ export function MaskSection() {
   const regions = mask?.regions ?? [];
   return (
     <section className="pw-side-section pw-dz" aria-labelledby="pw-dz-mask-h" data-testid="mask-section">
-      <div className="pw-section-head">
-        <h2 id="pw-dz-mask-h">Requirement mask</h2>
-        {result && regions.length > 0 && (
-          <span
-            className={`pw-dz-chip ${result.pass ? 'pw-dz-ok' : 'pw-dz-bad'}`}
-            data-testid="mask-overall"
-            data-pass={result.pass}
-          >
-            {result.pass ? 'passes' : 'fails'}
-          </span>
-        )}
-      </div>
-      {result && regions.length > 0 ? (
-        <p className="pw-dz-note">{maskVerdictText(result)}</p>
-      ) : (
-        <p className="pw-hint pw-dz-note">
-          No mask. Add pass and stop regions (frequency range and limits in dB) and the response is judged
-          live, also while you drag roots; drag a region's edges on the magnitude plot.
-        </p>
-      )}
+      <MaskHead hasRegions={regions.length > 0} />
       {regions.length > 0 && (
         <table className="pw-dz-mask">
           <colgroup>

@@ -11,7 +11,10 @@ import { showLinkUntilEdit } from './linkFragment.ts';
 const CONFIRM_MS = 2500;
 
 export function LinkSection() {
-  const design = useWorkbench((s) => s.design);
+  // While a root is dragged the link stays the one from before the drag (said below), so the page does not
+  // encode a link per pointer move; it follows on release.
+  const design = useWorkbench((s) => (s.dragging ? (s.history.gestureStart ?? s.design) : s.design));
+  const dragging = useWorkbench((s) => s.dragging);
   const view = useWorkbench((s) => s.view);
   const [state, setState] = useState<'idle' | 'copied' | 'failed'>('idle');
   // Only view settings that differ from the defaults travel: shorter links, same picture.
@@ -47,7 +50,7 @@ export function LinkSection() {
             ? `Copied · ${url.length} characters`
             : state === 'failed'
               ? 'Copying was blocked: select the link below and copy it.'
-              : `${url.length} characters`}
+              : `${url.length} characters${dragging ? ' (updates on release)' : ''}`}
         </span>
       </div>
       {state === 'failed' ? (
