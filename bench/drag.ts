@@ -9,7 +9,7 @@
  * `PW_DIST=<dir>` serves that already built directory instead; `PW_DISTS=before=<dir>,after=<dir>` serves
  * several and alternates between them configuration by configuration in one session, so a comparison sees
  * the same machine load. Narrower runs: PW_DRAG_ORDERS=8,32, PW_DRAG_TABS=system,design,
- * PW_DRAG_RECORDING=off|on, PW_DRAG_SHADING=off|on, PW_DRAG_STEPS=120, PW_BENCH_PORT=4412 (first port), PW_DRAG_TRACE_DIR=<dir> keeps the traces.
+ * PW_DRAG_RECORDING=off|on, PW_DRAG_SHADING=off|on, PW_DRAG_STEPS=120, PW_BENCH_PORT=4412 (first port), PW_DRAG_TRACE_DIR=<dir> keeps the traces, PW_DRAG_CSS='<rules>' tries extra style rules.
  */
 import { spawn, execFileSync, type ChildProcess } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
@@ -213,10 +213,17 @@ export async function openPage(
   order: number,
   recording: string | null,
 ): Promise<Page> {
-  const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
+  const css = env('PW_DRAG_CSS');
+  // PW_DRAG_CSS: extra style rules to try (the page's content security policy is bypassed for them).
+  const context = await browser.newContext({
+    viewport: { width: 1440, height: 900 },
+    bypassCSP: css !== undefined,
+  });
+  const page = await context.newPage();
   const link = encodeLink({ design: designOfOrder(order), view: {} });
   await page.goto(`http://127.0.0.1:${b.port}/#${link}`);
   await page.waitForFunction((n) => window.__polewright?.design().poles.length === n, order / 2);
+  if (css) await page.addStyleTag({ content: css });
   if (recording) {
     await page.getByRole('tab', { name: 'Signal' }).click();
     await page.getByTestId('recording-file-input').first().setInputFiles(recording);
@@ -279,7 +286,7 @@ export async function benchDrag(): Promise<string> {
             }
           }
         }
-        for (const p of pages.values()) await p.close();
+        for (const p of pages.values()) await p.context().close();
       }
     }
     const version = browser.version();

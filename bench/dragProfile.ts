@@ -159,7 +159,7 @@ try {
           );
         }
       }
-      await page.close();
+      await page.context().close();
     }
   }
 } finally {

@@ -31,6 +31,14 @@ if (want('bounds')) {
   const { benchBounds } = await import('./bounds.ts');
   parts.push('## Bounded work (largest accepted inputs, refusals)', '', await benchBounds(), '');
 }
+if (want('kernels')) {
+  const { benchKernels } = await import('./kernels.ts');
+  parts.push('## Signal kernels against scipy', '', await benchKernels(), '');
+}
+if (want('memory')) {
+  const { benchMemory } = await import('./memory.ts');
+  parts.push('## Browser memory with a long recording', '', await benchMemory(), '');
+}
 if (want('signal')) {
   const { benchSignal } = await import('./signal.ts');
   parts.push('## Real signals: 10 minutes at 48 kHz', '', await benchSignal(), '');

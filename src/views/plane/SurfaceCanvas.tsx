@@ -21,7 +21,7 @@ function gridSize(cells: number, width: number, height: number): [number, number
     : [short((cells * width) / height), cells];
 }
 
-/** Paints dB values on the nx × ny scratch canvas and stretches it over the visible canvas. */
+/** Paints dB values on the nx × ny scratch canvas and stretches it (smoothed) over the visible canvas. */
 function draw(
   canvas: HTMLCanvasElement,
   grid: HTMLCanvasElement,
@@ -29,7 +29,6 @@ function draw(
   nx: number,
   ny: number,
   s: PlaneScale,
-  smooth: boolean,
 ) {
   const ctx = canvas.getContext('2d');
   grid.width = nx;
@@ -47,8 +46,26 @@ function draw(
     canvas.height = ch;
   }
   ctx.imageSmoothingEnabled = true;
-  ctx.imageSmoothingQuality = smooth ? 'high' : 'low';
+  ctx.imageSmoothingQuality = 'high';
   ctx.drawImage(grid, 0, 0, cw, ch);
+}
+
+/**
+ * Paints the coarse grid (at once, and on every move of a drag) as the canvas's own pixels: the canvas
+ * then holds nx × ny pixels and its CSS size stretches them over the plane, so a move costs a few thousand
+ * pixels on the main thread and in the compositor rather than the whole plane's (the picture is the one a
+ * low-quality stretch of the grid gave before).
+ */
+function drawCoarse(canvas: HTMLCanvasElement, db: Float32Array, nx: number, ny: number) {
+  if (canvas.width !== nx || canvas.height !== ny) {
+    canvas.width = nx;
+    canvas.height = ny;
+  }
+  const ctx = canvas.getContext('2d');
+  if (!ctx) return;
+  const img = ctx.createImageData(nx, ny);
+  paintLevels(db, img.data, nx * ny);
+  ctx.putImageData(img, 0, 0);
 }
 
 function rectOf(s: PlaneScale): SurfaceRect {
@@ -71,10 +88,10 @@ export function SurfaceCanvas({ scale }: { scale: PlaneScale }) {
     const rect = rectOf(scale);
     const [nx, ny] = gridSize(SURFACE_CELLS_DRAGGING, scale.width, scale.height);
     sc.db = surfaceDb(zpk, rect, nx, ny, sc.db);
-    draw(canvas, sc.grid, sc.db, nx, ny, scale, false);
+    drawCoarse(canvas, sc.db, nx, ny);
     if (dragging) return;
     const [fx, fy] = gridSize(SURFACE_CELLS_AT_REST, scale.width, scale.height);
-    return surfaceInSlices(zpk, rect, fx, fy, (db) => draw(canvas, sc.grid, db, fx, fy, scale, true));
+    return surfaceInSlices(zpk, rect, fx, fy, (db) => draw(canvas, sc.grid, db, fx, fy, scale));
   }, [zpk, dragging, scale]);
 
   return (

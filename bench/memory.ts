@@ -1,0 +1,189 @@
+/**
+ * Browser memory with a long recording (not a test): writes a 1-hour 48 kHz 16-bit WAV (invented hum and
+ * pink noise, 346 MB), serves the built page, and reads the proportional set size (PSS: shared pages split
+ * between the processes sharing them) summed over every Chromium process, from /proc, while the page reads
+ * the file, filters it, computes its spectra and follows a root drag. Reports the figures above the empty
+ * page (the same page before the file), and the peak sampled every 100 ms.
+ * Run: `npx tsx bench/memory.ts` (or `npm run bench -- memory`); PW_DIST=<dir> serves a built directory,
+ * PW_MEMORY_MINUTES=60 sets the length.
+ */
+import { execFileSync } from 'node:child_process';
+import { closeSync, mkdtempSync, openSync, readFileSync, readdirSync, rmSync, writeSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { chromium, type Page } from '@playwright/test';
+import { CHROMIUM_ARGS, CHROMIUM_PATH } from '../e2e/support/chromium.ts';
+import { makeHum, makePinkNoise, encodeWavBlock, wavHeaderBytes } from '../src/core/signal/index.ts';
+import { serve, waitForServer } from './drag.ts';
+
+const ROOT = fileURLToPath(new URL('..', import.meta.url));
+const FS = 48000;
+const MINUTES = Number(process.env.PW_MEMORY_MINUTES ?? 60);
+const PORT = Number(process.env.PW_BENCH_PORT ?? 4412);
+
+/** Writes the WAV a minute at a time (the whole signal never exists in memory here). */
+function writeLongWav(dir: string): string {
+  const path = join(dir, `hopper-${MINUTES}min.wav`);
+  const n = FS * 60 * MINUTES;
+  const fd = openSync(path, 'w');
+  writeSync(fd, wavHeaderBytes({ format: 'i16', channelCount: 1, sampleRate: FS, frameCount: n }));
+  const block = FS * 60;
+  for (let m = 0; m < MINUTES; m++) {
+    const x = makeHum(block, FS, { fundamentalHz: 50, harmonicAmplitudes: [0.2, 0.05, 0.03], driftHz: 0.1 });
+    const noise = makePinkNoise(block, 100 + m, 0.05);
+    for (let i = 0; i < block; i++) x[i] = x[i]! + noise[i]!;
+    writeSync(fd, encodeWavBlock([x], 'i16').bytes);
+  }
+  closeSync(fd);
+  return path;
+}
+
+/** PIDs of a process and all its descendants. */
+function processTree(root: number): number[] {
+  const children = new Map<number, number[]>();
+  for (const d of readdirSync('/proc')) {
+    if (!/^\d+$/.test(d)) continue;
+    try {
+      const stat = readFileSync(`/proc/${d}/stat`, 'utf8');
+      const ppid = Number(stat.slice(stat.lastIndexOf(')') + 2).split(' ')[1]);
+      const list = children.get(ppid) ?? [];
+      list.push(Number(d));
+      children.set(ppid, list);
+    } catch {
+      // The process ended while being read.
+    }
+  }
+  const out: number[] = [];
+  const walk = (p: number) => {
+    out.push(p);
+    for (const c of children.get(p) ?? []) walk(c);
+  };
+  walk(root);
+  return out;
+}
+
+/** Sum of PSS over the process tree, MB. */
+function pssMb(root: number): number {
+  let kb = 0;
+  for (const pid of processTree(root)) {
+    try {
+      const m = /^Pss:\s+(\d+) kB/m.exec(readFileSync(`/proc/${pid}/smaps_rollup`, 'utf8'));
+      if (m) kb += Number(m[1]);
+    } catch {
+      // Gone, or not ours to read.
+    }
+  }
+  return kb / 1024;
+}
+
+async function settle(page: Page, ms = 1500): Promise<void> {
+  await page.waitForTimeout(ms);
+}
+
+/** Runs the measurement and returns a markdown table. */
+export async function benchMemory(): Promise<string> {
+  const dist = process.env.PW_DIST;
+  if (!dist) execFileSync('npx', ['vite', 'build', '--logLevel', 'error'], { cwd: ROOT, stdio: 'inherit' });
+  const tmp = mkdtempSync(join(tmpdir(), 'pw-memory-'));
+  const wav = writeLongWav(tmp);
+  const build = { name: 'this', dir: dist, port: PORT };
+  const server = serve(build);
+  const browser = await chromium.launch({
+    executablePath: CHROMIUM_PATH,
+    args: [...CHROMIUM_ARGS, `--explicitly-allowed-ports=${PORT}`],
+  });
+  // Playwright starts Chromium itself: the browser process is the child of this one running the binary.
+  const rootPid = processTree(process.pid).find((p) => {
+    try {
+      return (
+        readFileSync(`/proc/${p}/cmdline`, 'utf8').startsWith(CHROMIUM_PATH) &&
+        !readFileSync(`/proc/${p}/cmdline`, 'utf8').includes('--type=')
+      );
+    } catch {
+      return false;
+    }
+  });
+  if (rootPid === undefined) throw new Error('bench: Chromium process not found');
+  let peak = 0;
+  const sampler = setInterval(() => (peak = Math.max(peak, pssMb(rootPid))), 100);
+  const rows: string[] = [];
+  try {
+    await waitForServer(`http://127.0.0.1:${PORT}/`, 30_000);
+    const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
+    await page.goto(`http://127.0.0.1:${PORT}/`);
+    await settle(page);
+    const empty = pssMb(rootPid);
+    peak = empty;
+    const row = (stage: string, ms: number | null) => {
+      const now = pssMb(rootPid);
+      rows.push(
+        `| ${stage} | ${ms === null ? '–' : (ms / 1000).toFixed(1)} | ${(now - empty).toFixed(0)} | ${(peak - empty).toFixed(0)} |`,
+      );
+    };
+    rows.push(`| empty page (${empty.toFixed(0)} MB PSS) | – | 0 | 0 |`);
+    let t0 = Date.now();
+    await page.getByRole('tab', { name: 'Signal' }).click();
+    await page.getByTestId('recording-file-input').first().setInputFiles(wav);
+    const panel = page.locator('section[aria-label="recording"]');
+    await panel.getByTestId('signal-info').waitFor({ timeout: 600_000 });
+    row(
+      `read the ${MINUTES}-minute WAV (${(FS * 60 * MINUTES).toLocaleString('en')} samples)`,
+      Date.now() - t0,
+    );
+    t0 = Date.now();
+    await panel
+      .locator('[data-testid="signal-output-trace"][data-state="current"]')
+      .waitFor({ timeout: 600_000 });
+    row('filtered through the design (demo notches)', Date.now() - t0);
+    t0 = Date.now();
+    await page
+      .getByRole('radiogroup', { name: 'Time region shows' })
+      .getByRole('radio', { name: 'Spectrum' })
+      .click();
+    await page.locator('[data-testid="spectrum-after"][data-measured="true"]').waitFor({ timeout: 600_000 });
+    row('spectra before and after (Welch, 65 536-sample segments)', Date.now() - t0);
+    await page
+      .getByRole('radiogroup', { name: 'Time region shows' })
+      .getByRole('radio', { name: 'Recording' })
+      .click();
+    t0 = Date.now();
+    const pole = await page.evaluate(() => window.__polewright!.design().poles[0]!);
+    const at = await page.evaluate((z) => {
+      const svg = document.querySelector('svg.pw-plane-svg')!;
+      const c = svg.querySelector('circle.pw-unit-circle')!;
+      const box = svg.getBoundingClientRect();
+      const r = Number(c.getAttribute('r'));
+      return {
+        x: box.left + Number(c.getAttribute('cx')) + z.re * r,
+        y: box.top + Number(c.getAttribute('cy')) - z.im * r,
+      };
+    }, pole);
+    await page.mouse.move(at.x, at.y);
+    await page.mouse.down();
+    await page.mouse.move(at.x - 20, at.y - 10, { steps: 30 });
+    await page.mouse.up();
+    await panel
+      .locator('[data-testid="signal-output-trace"][data-state="current"]')
+      .waitFor({ timeout: 600_000 });
+    row('a 30-step root drag, then the whole recording filtered again', Date.now() - t0);
+    await settle(page, 3000);
+    row('settled', null);
+  } finally {
+    clearInterval(sampler);
+    await browser.close();
+    if (server.pid) process.kill(-server.pid, 'SIGTERM');
+    rmSync(tmp, { recursive: true, force: true });
+  }
+  return [
+    `Browser memory (PSS of every Chromium process, from /proc) with a ${MINUTES}-minute 48 kHz 16-bit WAV, headless Chromium, 1440×900; MB above the empty page.`,
+    '',
+    '| stage | time (s) | now (MB) | peak so far (MB) |',
+    '| --- | --: | --: | --: |',
+    ...rows,
+  ].join('\n');
+}
+
+if (process.argv[1] && fileURLToPath(import.meta.url) === process.argv[1]) {
+  console.log(await benchMemory());
+}
