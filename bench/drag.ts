@@ -137,6 +137,15 @@ export function serve(b: Build): ChildProcess {
   );
 }
 
+/** Stops a server started by serve() (its whole process group), if it is still running. */
+export function stopServer(server: ChildProcess): void {
+  try {
+    if (server.pid) process.kill(-server.pid, 'SIGTERM');
+  } catch {
+    // Already gone.
+  }
+}
+
 /** Reads a trace returned as a stream by Tracing.end. */
 async function traceDrag(page: Page, drag: () => Promise<void>): Promise<TraceEvent[]> {
   const cdp = await page.context().newCDPSession(page);
@@ -301,7 +310,7 @@ export async function benchDrag(): Promise<string> {
     ].join('\n');
   } finally {
     await browser.close();
-    for (const b of builds) if (b.server?.pid) process.kill(-b.server.pid, 'SIGTERM');
+    for (const b of builds) if (b.server) stopServer(b.server);
     rmSync(tmp, { recursive: true, force: true });
   }
 }

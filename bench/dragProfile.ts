@@ -11,7 +11,16 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium } from '@playwright/test';
 import { CHROMIUM_ARGS, CHROMIUM_PATH } from '../e2e/support/chromium.ts';
-import { TAB_LABEL, TABS, dragOnce, openPage, serve, waitForServer, writeRecording } from './drag.ts';
+import {
+  TAB_LABEL,
+  TABS,
+  dragOnce,
+  openPage,
+  serve,
+  stopServer,
+  waitForServer,
+  writeRecording,
+} from './drag.ts';
 import { MOVE_MARK, type TraceEvent } from './dragTrace.ts';
 import { cell, median } from './timing.ts';
 
@@ -164,6 +173,6 @@ try {
   }
 } finally {
   await browser.close();
-  if (server.pid) process.kill(-server.pid, 'SIGTERM');
+  stopServer(server);
   rmSync(tmp, { recursive: true, force: true });
 }

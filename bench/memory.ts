@@ -15,7 +15,7 @@ import { fileURLToPath } from 'node:url';
 import { chromium, type Page } from '@playwright/test';
 import { CHROMIUM_ARGS, CHROMIUM_PATH } from '../e2e/support/chromium.ts';
 import { makeHum, makePinkNoise, encodeWavBlock, wavHeaderBytes } from '../src/core/signal/index.ts';
-import { serve, waitForServer } from './drag.ts';
+import { serve, stopServer, waitForServer } from './drag.ts';
 
 const ROOT = fileURLToPath(new URL('..', import.meta.url));
 const FS = 48000;
@@ -63,10 +63,10 @@ function processTree(root: number): number[] {
   return out;
 }
 
-/** Sum of PSS over the process tree, MB. */
-function pssMb(root: number): number {
+/** PSS of a process (and, with `tree`, its descendants), MB. */
+function pssMb(root: number, tree = true): number {
   let kb = 0;
-  for (const pid of processTree(root)) {
+  for (const pid of tree ? processTree(root) : [root]) {
     try {
       const m = /^Pss:\s+(\d+) kB/m.exec(readFileSync(`/proc/${pid}/smaps_rollup`, 'utf8'));
       if (m) kb += Number(m[1]);
@@ -93,30 +93,30 @@ export async function benchMemory(): Promise<string> {
     executablePath: CHROMIUM_PATH,
     args: [...CHROMIUM_ARGS, `--explicitly-allowed-ports=${PORT}`],
   });
-  // Playwright starts Chromium itself: the browser process is the child of this one running the binary.
-  const rootPid = processTree(process.pid).find((p) => {
-    try {
-      return (
-        readFileSync(`/proc/${p}/cmdline`, 'utf8').startsWith(CHROMIUM_PATH) &&
-        !readFileSync(`/proc/${p}/cmdline`, 'utf8').includes('--type=')
-      );
-    } catch {
-      return false;
-    }
-  });
-  if (rootPid === undefined) throw new Error('bench: Chromium process not found');
+  // Playwright starts Chromium as a child of this process (Debian's /usr/bin/chromium is a script that runs
+  // /usr/lib/chromium/chromium): every descendant running Chromium counts.
+  const chromiumPids = () =>
+    processTree(process.pid).filter((p) => {
+      try {
+        return readFileSync(`/proc/${p}/cmdline`, 'utf8').includes('chromium');
+      } catch {
+        return false;
+      }
+    });
+  if (chromiumPids().length === 0) throw new Error('bench: Chromium process not found');
+  const browserPss = () => chromiumPids().reduce((sum, p) => sum + pssMb(p, false), 0);
   let peak = 0;
-  const sampler = setInterval(() => (peak = Math.max(peak, pssMb(rootPid))), 100);
+  const sampler = setInterval(() => (peak = Math.max(peak, browserPss())), 100);
   const rows: string[] = [];
   try {
     await waitForServer(`http://127.0.0.1:${PORT}/`, 30_000);
     const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
     await page.goto(`http://127.0.0.1:${PORT}/`);
     await settle(page);
-    const empty = pssMb(rootPid);
+    const empty = browserPss();
     peak = empty;
     const row = (stage: string, ms: number | null) => {
-      const now = pssMb(rootPid);
+      const now = browserPss();
       rows.push(
         `| ${stage} | ${ms === null ? '–' : (ms / 1000).toFixed(1)} | ${(now - empty).toFixed(0)} | ${(peak - empty).toFixed(0)} |`,
       );
@@ -172,7 +172,7 @@ export async function benchMemory(): Promise<string> {
   } finally {
     clearInterval(sampler);
     await browser.close();
-    if (server.pid) process.kill(-server.pid, 'SIGTERM');
+    stopServer(server);
     rmSync(tmp, { recursive: true, force: true });
   }
   return [

@@ -55,7 +55,7 @@ const plans = new Map<number, Plan>();
 const FAST_RADICES = [4, 2, 3, 5];
 /** Rough cost per sample of one pass of each radix, in units of a radix-2 pass (for choosing Bluestein). */
 function passCost(radix: number): number {
-  return radix === 2 ? 1 : radix === 3 ? 1.6 : radix === 4 ? 1.5 : radix === 5 ? 2.2 : radix;
+  return radix === 2 ? 1 : radix === 3 ? 1.6 : radix === 4 ? 1.5 : radix === 5 ? 2.2 : 0.5 * radix;
 }
 
 /** True when n is a power of two (1, 2, 4, ...). */
@@ -338,5 +338,60 @@ export function realFft(x: ArrayLike<number>, outRe: Float64Array, outIm: Float6
     const sn = t[2 * k + 1]!;
     outRe[k] = er + or * c - oi * sn;
     outIm[k] = ei + or * sn + oi * c;
+  }
+}
+
+/**
+ * A real transform of one length that adds |X_k|², k ≤ ⌊n/2⌋, to an accumulator: the inner step of Welch's
+ * method without copies. Fill `input` (n samples), then call addPower; `input` is left as it was.
+ */
+export class RealPowerTransform {
+  readonly input: Float64Array;
+  private readonly n: number;
+  private readonly complex: Float64Array | null;
+
+  constructor(n: number) {
+    if (!(Number.isInteger(n) && n >= 1))
+      throw new Error(`RealPowerTransform: length ${n}; a whole number ≥ 1`);
+    this.n = n;
+    // Even lengths: the samples read as n/2 interleaved complex values are the packed transform's input.
+    this.input = new Float64Array(n);
+    this.complex = n % 2 === 1 || n < 4 ? new Float64Array(2 * n) : null;
+  }
+
+  /** Adds |X_k|² of the current input to sum[k], k ≤ ⌊n/2⌋. */
+  addPower(sum: Float64Array): void {
+    const n = this.n;
+    const bins = (n >> 1) + 1;
+    if (this.complex) {
+      const c = this.complex;
+      for (let j = 0; j < n; j++) {
+        c[2 * j] = this.input[j]!;
+        c[2 * j + 1] = 0;
+      }
+      const X = n === 1 ? c : transform(n, c);
+      for (let k = 0; k < bins; k++) sum[k] = sum[k]! + X[2 * k]! ** 2 + X[2 * k + 1]! ** 2;
+      return;
+    }
+    const h = n >> 1;
+    const Z = transform(h, this.input);
+    const t = untangleTable(n);
+    for (let k = 0; k <= h; k++) {
+      const k1 = k === h ? 0 : k;
+      const k2 = k === 0 ? 0 : h - k;
+      const z1r = Z[2 * k1]!;
+      const z1i = Z[2 * k1 + 1]!;
+      const z2r = Z[2 * k2]!;
+      const z2i = Z[2 * k2 + 1]!;
+      const er = (z1r + z2r) / 2;
+      const ei = (z1i - z2i) / 2;
+      const or = (z1i + z2i) / 2;
+      const oi = -(z1r - z2r) / 2;
+      const c = t[2 * k]!;
+      const sn = t[2 * k + 1]!;
+      const xr = er + or * c - oi * sn;
+      const xi = ei + or * sn + oi * c;
+      sum[k] = sum[k]! + xr * xr + xi * xi;
+    }
   }
 }

@@ -5,7 +5,7 @@
  * so a sinusoid of amplitude A centred on a bin reads A²/2). The accumulator takes the signal in pieces of
  * any size and gives the same numbers as one call on the whole signal.
  */
-import { nextPowerOfTwo, realFft } from './fft.ts';
+import { RealPowerTransform, nextPowerOfTwo } from './fft.ts';
 import { makeWindow, windowFigures, type WindowName } from './windows.ts';
 
 /** 'density': power spectral density in units²/Hz; 'spectrum': power per bin in units² (sinusoid → A²/2). */
@@ -75,9 +75,7 @@ export class WelchAccumulator {
   private readonly sampleRate: number;
   private readonly win: Float64Array;
   private readonly segment: Float64Array;
-  private readonly work: Float64Array;
-  private readonly re: Float64Array;
-  private readonly im: Float64Array;
+  private readonly transform: RealPowerTransform;
   private readonly sum: Float64Array;
   private fill = 0;
   private segments = 0;
@@ -87,11 +85,8 @@ export class WelchAccumulator {
     this.sampleRate = sampleRate;
     this.win = makeWindow(this.o.window, this.o.nperseg);
     this.segment = new Float64Array(this.o.nperseg);
-    this.work = new Float64Array(this.o.nfft);
-    const bins = (this.o.nfft >> 1) + 1;
-    this.re = new Float64Array(bins);
-    this.im = new Float64Array(bins);
-    this.sum = new Float64Array(bins);
+    this.transform = new RealPowerTransform(this.o.nfft);
+    this.sum = new Float64Array((this.o.nfft >> 1) + 1);
   }
 
   /** Adds samples; every completed segment is transformed at once, so memory stays one segment. */
@@ -118,10 +113,10 @@ export class WelchAccumulator {
       for (let k = 0; k < nperseg; k++) mean += this.segment[k]!;
       mean /= nperseg;
     }
-    for (let k = 0; k < nperseg; k++) this.work[k] = (this.segment[k]! - mean) * this.win[k]!;
-    realFft(this.work, this.re, this.im);
-    for (let k = 0; k < this.sum.length; k++)
-      this.sum[k] = this.sum[k]! + this.re[k]! ** 2 + this.im[k]! ** 2;
+    // The transform's input beyond nperseg (zero padding up to nfft) is never written, so stays zero.
+    const work = this.transform.input;
+    for (let k = 0; k < nperseg; k++) work[k] = (this.segment[k]! - mean) * this.win[k]!;
+    this.transform.addPower(this.sum);
     this.segments++;
   }
 

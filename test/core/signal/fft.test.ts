@@ -4,6 +4,7 @@ import {
   fft,
   ifft,
   realFft,
+  RealPowerTransform,
   isPowerOfTwo,
   nextPowerOfTwo,
   smoothLength,
@@ -137,6 +138,23 @@ describe('fft', () => {
       realFft(re, outRe, outIm);
       expectClose(outRe, a.subarray(0, bins), { abs: 1e-14 * n }, `re n=${n}`);
       expectClose(outIm, b.subarray(0, bins), { abs: 1e-14 * n }, `im n=${n}`);
+    }
+  });
+
+  it('RealPowerTransform adds |X_k|² of the real transform and leaves its input as it was', () => {
+    for (const n of [1, 2, 3, 8, 15, 6000, 4096]) {
+      const { re } = fftTestSignal(n);
+      const t = new RealPowerTransform(n);
+      t.input.set(re);
+      const sum = new Float64Array((n >> 1) + 1).fill(1);
+      t.addPower(sum);
+      t.addPower(sum);
+      const outRe = new Float64Array(sum.length);
+      const outIm = new Float64Array(sum.length);
+      realFft(re, outRe, outIm);
+      const want = Array.from(sum, (_, k) => 1 + 2 * (outRe[k]! ** 2 + outIm[k]! ** 2));
+      expectClose(sum, want, { rel: 1e-12, abs: 1e-9 }, `n=${n}`);
+      expect(Array.from(t.input)).toEqual(Array.from(re));
     }
   });
 
