@@ -4,8 +4,8 @@
 Usage: python3 bench/scipy_kernels.py SIGNAL.f64 SECTIONS.json, then one request per line on standard input:
 "sos NAME N" filters the first N samples with the cascade NAME once and answers the seconds it took;
 "welch NPERSEG N" runs welch (Hann, half overlap, 'spectrum' scaling, constant detrend) on the first N
-samples at 48 kHz once and answers the seconds; "quit" ends. A long-lived process lets the caller alternate
-our runs with scipy's, so both see the same machine load.
+samples at 48 kHz once and answers the seconds; "quit" ends. Times are the process's CPU time (steadier than
+wall time on a shared machine). A long-lived process lets the caller alternate our runs with scipy's.
 """
 import json
 import sys
@@ -31,13 +31,13 @@ def main():
         n = int(parts[2])
         if parts[0] == "sos":
             sos = cascades[parts[1]]
-            t0 = time.perf_counter()
+            t0 = time.process_time()
             signal.sosfilt(sos, x[:n])
         else:
             nperseg = int(parts[1])
-            t0 = time.perf_counter()
+            t0 = time.process_time()
             signal.welch(x[:n], 48000.0, window="hann", nperseg=nperseg, scaling="spectrum")
-        print(repr(time.perf_counter() - t0), flush=True)
+        print(repr(time.process_time() - t0), flush=True)
 
 
 if __name__ == "__main__":
