@@ -93,29 +93,37 @@ export class WelchAccumulator {
   push(x: ArrayLike<number>): void {
     const { nperseg, noverlap } = this.o;
     const seg = this.segment;
-    for (let i = 0; i < x.length;) {
+    let i = 0;
+    // Whole segments inside x are read where they are (no copy); only a partial one is kept between pushes.
+    if (this.fill === 0) {
+      const step = nperseg - noverlap;
+      for (; i + nperseg <= x.length; i += step) this.addSegment(x, i);
+    }
+    while (i < x.length) {
       const take = Math.min(nperseg - this.fill, x.length - i);
       for (let k = 0; k < take; k++) seg[this.fill + k] = x[i + k]!;
       this.fill += take;
       i += take;
       if (this.fill === nperseg) {
-        this.addSegment();
+        this.addSegment(seg, 0);
         seg.copyWithin(0, nperseg - noverlap, nperseg);
         this.fill = noverlap;
       }
     }
   }
 
-  private addSegment(): void {
+  /** Transforms the segment x[start .. start + nperseg) and adds its power. */
+  private addSegment(x: ArrayLike<number>, start: number): void {
     const { nperseg, detrend } = this.o;
     let mean = 0;
     if (detrend === 'constant') {
-      for (let k = 0; k < nperseg; k++) mean += this.segment[k]!;
+      for (let k = 0; k < nperseg; k++) mean += x[start + k]!;
       mean /= nperseg;
     }
     // The transform's input beyond nperseg (zero padding up to nfft) is never written, so stays zero.
     const work = this.transform.input;
-    for (let k = 0; k < nperseg; k++) work[k] = (this.segment[k]! - mean) * this.win[k]!;
+    const win = this.win;
+    for (let k = 0; k < nperseg; k++) work[k] = (x[start + k]! - mean) * win[k]!;
     this.transform.addPower(this.sum);
     this.segments++;
   }
