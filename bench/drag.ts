@@ -44,7 +44,8 @@ export const TAB_LABEL: Record<(typeof TABS)[number], string> = {
 const env = (k: string) => process.env[k]?.trim() || undefined;
 const list = (k: string, all: readonly string[]) => env(k)?.split(',') ?? [...all];
 const STEPS = Number(env('PW_DRAG_STEPS') ?? 120);
-const ORDERS = list('PW_DRAG_ORDERS', ['2', '8', '32', '64']).map(Number);
+/** Orders to drag at; 'auto' is an auto-order elliptic design (the costliest designer to run again). */
+const ORDERS = list('PW_DRAG_ORDERS', ['2', '8', '32', '64']).map((o) => (o === 'auto' ? 'auto' : Number(o)));
 const TAB_IDS = list('PW_DRAG_TABS', TABS) as (typeof TABS)[number][];
 const RECORDING = list('PW_DRAG_RECORDING', ['off', 'on']);
 const SHADING = list('PW_DRAG_SHADING', ['off', 'on']);
@@ -54,19 +55,32 @@ const FIRST_PORT = Number(env('PW_BENCH_PORT') ?? 4412);
  * An order-N Butterworth low-pass at 48 kHz (N/2 pole pairs, N zeros at z = −1) designed by the engine with
  * its requirement (pass band to 4 kHz, stop band from 8 kHz), so the designer's status and the mask are live.
  */
-function designOfOrder(order: number): Design {
-  const spec: DesignerSpec = {
-    kind: 'iir',
-    fs: FS,
-    family: 'butterworth',
-    response: 'lowpass',
-    order,
-    edgesHz: [6000],
-    passbandHz: [4000],
-    stopbandHz: [8000],
-    rippleDb: 1,
-    attenuationDb: 40,
-  };
+function designOfOrder(order: number | 'auto'): Design {
+  const spec: DesignerSpec =
+    order === 'auto'
+      ? {
+          kind: 'iir',
+          fs: FS,
+          family: 'elliptic',
+          response: 'lowpass',
+          order: 'auto',
+          passbandHz: [4000],
+          stopbandHz: [4400],
+          rippleDb: 0.5,
+          attenuationDb: 80,
+        }
+      : {
+          kind: 'iir',
+          fs: FS,
+          family: 'butterworth',
+          response: 'lowpass',
+          order,
+          edgesHz: [6000],
+          passbandHz: [4000],
+          stopbandHz: [8000],
+          rippleDb: 1,
+          attenuationDb: 40,
+        };
   const r = runDesigner(spec);
   if (!r.ok) throw new Error(`bench design of order ${order}: ${r.error.message}`);
   const mask = maskFromDesigner(spec);
@@ -94,17 +108,21 @@ export function writeRecording(dir: string): string {
   return path;
 }
 
-/** Resolves once the server answers 200 (node:http, since fetch refuses some local ports as "bad"). */
+/** True when something answers 200 at the address (node:http, since fetch refuses some local ports). */
+function answers(url: string): Promise<boolean> {
+  return new Promise<boolean>((resolve) => {
+    const req = get(url, (res) => {
+      res.resume();
+      resolve(res.statusCode === 200);
+    });
+    req.on('error', () => resolve(false));
+  });
+}
+
+/** Resolves once the server answers 200. */
 export async function waitForServer(url: string, ms: number): Promise<void> {
   const until = Date.now() + ms;
-  const ok = () =>
-    new Promise<boolean>((resolve) => {
-      const req = get(url, (res) => {
-        res.resume();
-        resolve(res.statusCode === 200);
-      });
-      req.on('error', () => resolve(false));
-    });
+  const ok = () => answers(url);
   while (Date.now() < until) {
     if (await ok()) return;
     await new Promise((r) => setTimeout(r, 200));
@@ -119,8 +137,14 @@ export interface Build {
   server?: ChildProcess;
 }
 
-/** Serves a build with vite preview (in its own process group). */
-export function serve(b: Build): ChildProcess {
+/** Serves a build with vite preview (in its own process group); refuses a port something already answers on. */
+export async function serve(b: Build): Promise<ChildProcess> {
+  if (await answers(`http://127.0.0.1:${b.port}/`))
+    throw new Error(`bench: port ${b.port} is already serving something; stop it or set PW_BENCH_PORT`);
+  return spawnPreview(b);
+}
+
+function spawnPreview(b: Build): ChildProcess {
   return spawn(
     'npx',
     [
@@ -219,7 +243,7 @@ export async function dragOnce(
 export async function openPage(
   browser: Browser,
   b: Build,
-  order: number,
+  order: number | 'auto',
   recording: string | null,
 ): Promise<Page> {
   const css = env('PW_DRAG_CSS');
@@ -229,9 +253,10 @@ export async function openPage(
     bypassCSP: css !== undefined,
   });
   const page = await context.newPage();
-  const link = encodeLink({ design: designOfOrder(order), view: {} });
+  const design = designOfOrder(order);
+  const link = encodeLink({ design, view: {} });
   await page.goto(`http://127.0.0.1:${b.port}/#${link}`);
-  await page.waitForFunction((n) => window.__polewright?.design().poles.length === n, order / 2);
+  await page.waitForFunction((n) => window.__polewright?.design().poles.length === n, design.poles.length);
   if (css) await page.addStyleTag({ content: css });
   if (recording) {
     await page.getByRole('tab', { name: 'Signal' }).click();
@@ -247,7 +272,14 @@ export async function openPage(
 
 const stats = (xs: number[]) => `${cell(median(xs))} | ${cell(percentile(xs, 95))}`;
 
-function row(build: string, order: number, tab: string, shading: string, rec: string, r: Result): string {
+function row(
+  build: string,
+  order: number | string,
+  tab: string,
+  shading: string,
+  rec: string,
+  r: Result,
+): string {
   const drawn = r.samples.filter((x) => x.drawn).length;
   const probe = (k: 'work' | 'latency') => stats(r.samples.map((x) => x[k]));
   return `| ${build} | ${rec} | ${order} | ${tab} | ${shading} | ${stats(r.cpu)} | ${stats(r.wall)} | ${probe('work')} | ${probe('latency')} | ${drawn}/${r.samples.length} | ${r.load.toFixed(1)} |`;
@@ -269,7 +301,7 @@ export async function benchDrag(): Promise<string> {
   }
   const tmp = mkdtempSync(join(tmpdir(), 'pw-drag-'));
   const recording = RECORDING.includes('on') ? writeRecording(tmp) : null;
-  for (const b of builds) b.server = serve(b);
+  for (const b of builds) b.server = await serve(b);
   const browser = await chromium.launch({
     executablePath: CHROMIUM_PATH,
     args: [...CHROMIUM_ARGS, `--explicitly-allowed-ports=${builds.map((b) => b.port).join(',')}`],
@@ -289,7 +321,8 @@ export async function benchDrag(): Promise<string> {
               await page.getByRole('tab', { name: TAB_LABEL[tab] }).click();
               await page.getByLabel('|H| shading').setChecked(shading === 'on');
               const r = await dragOnce(page);
-              const line = row(b.name, order, tab, shading, rec, r);
+              const label = order === 'auto' ? `auto (${2 * designOfOrder('auto').poles.length})` : order;
+              const line = row(b.name, label, tab, shading, rec, r);
               rows.push(line);
               console.error(line);
             }

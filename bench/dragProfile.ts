@@ -79,7 +79,7 @@ const build = { name: 'profile', dir: dist, port };
 const tmp = mkdtempSync(join(tmpdir(), 'pw-prof-'));
 const rec = list('PW_DRAG_RECORDING', ['off']);
 const recording = rec.includes('on') ? writeRecording(tmp) : null;
-const server = serve(build);
+const server = await serve(build);
 const browser = await chromium.launch({
   executablePath: CHROMIUM_PATH,
   args: [...CHROMIUM_ARGS, `--explicitly-allowed-ports=${port}`],

@@ -88,7 +88,7 @@ export async function benchMemory(): Promise<string> {
   const tmp = mkdtempSync(join(tmpdir(), 'pw-memory-'));
   const wav = writeLongWav(tmp);
   const build = { name: 'this', dir: dist, port: PORT };
-  const server = serve(build);
+  const server = await serve(build);
   const browser = await chromium.launch({
     executablePath: CHROMIUM_PATH,
     args: [...CHROMIUM_ARGS, `--explicitly-allowed-ports=${PORT}`],
