@@ -3,7 +3,8 @@
  * pink noise, 346 MB), serves the built page, and reads the proportional set size (PSS: shared pages split
  * between the processes sharing them) summed over every Chromium process, from /proc, while the page reads
  * the file, filters it, computes its spectra and follows a root drag. Reports the figures above the empty
- * page (the same page before the file), and the peak sampled every 100 ms.
+ * page (the same page before the file), and the peak sampled every 100 ms; and the gaps between animation
+ * frames while the time region switches to the spectra of the whole recording (computed in the worker).
  * Run: `npx tsx bench/memory.ts` (or `npm run bench -- memory`); PW_DIST=<dir> serves a built directory,
  * PW_MEMORY_MINUTES=60 sets the length.
  */
@@ -16,6 +17,7 @@ import { chromium, type Page } from '@playwright/test';
 import { CHROMIUM_ARGS, CHROMIUM_PATH } from '../e2e/support/chromium.ts';
 import { makeHum, makePinkNoise, encodeWavBlock, wavHeaderBytes } from '../src/core/signal/index.ts';
 import { serve, stopServer, waitForServer } from './drag.ts';
+import { cell, median } from './timing.ts';
 
 const ROOT = fileURLToPath(new URL('..', import.meta.url));
 const FS = 48000;
@@ -108,6 +110,7 @@ export async function benchMemory(): Promise<string> {
   let peak = 0;
   const sampler = setInterval(() => (peak = Math.max(peak, browserPss())), 100);
   const rows: string[] = [];
+  let gaps: number[] = [];
   try {
     await waitForServer(`http://127.0.0.1:${PORT}/`, 30_000);
     const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
@@ -136,6 +139,19 @@ export async function benchMemory(): Promise<string> {
       .locator('[data-testid="signal-output-trace"][data-state="current"]')
       .waitFor({ timeout: 600_000 });
     row('filtered through the design (demo notches)', Date.now() - t0);
+    // Frame gaps while the page switches to the spectra and they are computed (in the worker).
+    await page.evaluate(() => {
+      const w = window as unknown as { __gaps: number[]; __gapsStop: boolean };
+      w.__gaps = [];
+      w.__gapsStop = false;
+      let last = performance.now();
+      const frame = (t: number) => {
+        w.__gaps.push(t - last);
+        last = t;
+        if (!w.__gapsStop) requestAnimationFrame(frame);
+      };
+      requestAnimationFrame(frame);
+    });
     t0 = Date.now();
     await page
       .getByRole('radiogroup', { name: 'Time region shows' })
@@ -143,6 +159,11 @@ export async function benchMemory(): Promise<string> {
       .click();
     await page.locator('[data-testid="spectrum-after"][data-measured="true"]').waitFor({ timeout: 600_000 });
     row('spectra before and after (Welch, 65 536-sample segments)', Date.now() - t0);
+    gaps = await page.evaluate(() => {
+      const w = window as unknown as { __gaps: number[]; __gapsStop: boolean };
+      w.__gapsStop = true;
+      return w.__gaps;
+    });
     await page
       .getByRole('radiogroup', { name: 'Time region shows' })
       .getByRole('radio', { name: 'Recording' })
@@ -181,6 +202,8 @@ export async function benchMemory(): Promise<string> {
     '| stage | time (s) | now (MB) | peak so far (MB) |',
     '| --- | --: | --: | --: |',
     ...rows,
+    '',
+    `Switching the time region to the spectra (computed in the worker, ${(FS * 60 * MINUTES).toLocaleString('en')} samples): ${gaps.length} frames, gap between frames median ${cell(median(gaps))} ms, longest ${cell(Math.max(...gaps))} ms, ${gaps.filter((g) => g > 1.5 * (1000 / 60)).length} gaps longer than a frame and a half (25 ms).`,
   ].join('\n');
 }
 
