@@ -48,25 +48,27 @@ export function normLength(radius: number, sections = 1): { samples: number; con
 
 /**
  * One pass of a section over the running impulse response h, in place, summing |y| and y² as it goes: the
- * transposed direct form II step of signal/sectionFilter.ts (the same operations in the same order, so the
- * same numbers — a test holds the two together), fused with the sums so the long response is read once.
+ * section step of signal/sectionFilter.ts (transposed direct form II with the output folded out of the state
+ * update; the same operations in the same order, so the same numbers — a test holds the two together), fused
+ * with the sums so the long response is read once.
  */
 export function passWithSums(section: Section, h: Float64Array): { l1: number; energy: number } {
   const c = createSectionFilter([section]).coefficients;
   const b0 = c[0]!;
-  const b1 = c[1]!;
-  const b2 = c[2]!;
   const a1 = c[3]!;
   const a2 = c[4]!;
-  let z0 = 0;
-  let z1 = 0;
+  const c1 = c[1]! - a1 * b0;
+  const c2 = c[2]! - a2 * b0;
+  let s0 = 0;
+  let s1 = 0;
   let l1 = 0;
   let energy = 0;
   for (let i = 0; i < h.length; i++) {
     const xi = h[i]!;
-    const yi = b0 * xi + z0;
-    z0 = b1 * xi + z1 - a1 * yi;
-    z1 = b2 * xi - a2 * yi;
+    const yi = b0 * xi + s0;
+    const t = c1 * xi - a1 * s0 + s1;
+    s1 = c2 * xi - a2 * s0;
+    s0 = t;
     h[i] = yi;
     l1 += Math.abs(yi);
     energy += yi * yi;
