@@ -2,7 +2,7 @@
  * Discrete Fourier transform of any length, on separate real and imaginary Float64Arrays (and, for Welch,
  * of real signals). Internally a self-sorting mixed-radix Cooley–Tukey transform (Cooley & Tukey 1965) in
  * the Stockham arrangement (no bit reversal: each pass reads one buffer and writes the other in order), on
- * interleaved re/im data, with written-out butterflies for radices 4, 2, 3 and 5 and a direct one for any
+ * interleaved re/im data, with written-out butterflies for radices 4, 2, 3, 5 and 7 and a direct one for any
  * other prime factor. A length whose prime factors make that slow uses Bluestein's chirp-z algorithm
  * (Bluestein 1970) instead: the DFT as a convolution done with transforms of a nearby length with small
  * factors, the chirp and its transform computed once per length and kept in the plan.
@@ -51,11 +51,21 @@ type Plan = DirectPlan | BluesteinPlan;
 const MAX_CACHED_PLANS = 32;
 const plans = new Map<number, Plan>();
 
-/** Radices the transform writes out; any other prime factor goes through the direct (slower) butterfly. */
+/** Radices taken first when factoring (7 is written out too, and comes after 5 in the ascending primes). */
 const FAST_RADICES = [4, 2, 3, 5];
 /** Rough cost per sample of one pass of each radix, in units of a radix-2 pass (for choosing Bluestein). */
 function passCost(radix: number): number {
-  return radix === 2 ? 1 : radix === 3 ? 1.6 : radix === 4 ? 1.5 : radix === 5 ? 2.2 : 0.5 * radix;
+  return radix === 2
+    ? 1
+    : radix === 3
+      ? 1.6
+      : radix === 4
+        ? 1.5
+        : radix === 5
+          ? 2.2
+          : radix === 7
+            ? 3
+            : 0.5 * radix;
 }
 
 /** True when n is a power of two (1, 2, 4, ...). */

@@ -26,6 +26,8 @@ export function butterflyPass(
       return pass3(ido, l1, cc, ch, tw, twOff);
     case 5:
       return pass5(ido, l1, cc, ch, tw, twOff);
+    case 7:
+      return pass7(ido, l1, cc, ch, tw, twOff);
     default:
       return passGeneral(radix, ido, l1, cc, ch, tw, twOff);
   }
@@ -269,6 +271,87 @@ function out5(ch: Float64Array, o: number, xr: number, xi: number, tw: Float64Ar
   const wi = tw[w + 1]!;
   ch[o] = xr * wr - xi * wi;
   ch[o + 1] = xr * wi + xi * wr;
+}
+
+/** cos and sin of 2πk/7, k = 1, 2, 3. */
+const C71 = Math.cos((2 * Math.PI) / 7);
+const S71 = Math.sin((2 * Math.PI) / 7);
+const C72 = Math.cos((4 * Math.PI) / 7);
+const S72 = Math.sin((4 * Math.PI) / 7);
+const C73 = Math.cos((6 * Math.PI) / 7);
+const S73 = Math.sin((6 * Math.PI) / 7);
+
+/**
+ * Radix 7 written out (44 100 = 2²·3²·5²·7² and 22 050, its packed half, have two such passes): the general
+ * butterfly's pairing a_j ± a_{7−j} with the angles folded into three cosines and three sines,
+ * cos(2π·jm/7) and sin(2π·jm/7) taken from the table C7k/S7k by jm mod 7.
+ */
+function pass7(
+  ido: number,
+  l1: number,
+  cc: Float64Array,
+  ch: Float64Array,
+  tw: Float64Array,
+  t0: number,
+): void {
+  const sIn = 2 * ido;
+  const sOut = 2 * ido * l1;
+  for (let k = 0; k < l1; k++) {
+    const inK = 14 * ido * k;
+    const outK = 2 * ido * k;
+    for (let i = 0; i < ido; i++) {
+      const a = inK + 2 * i;
+      const o = outK + 2 * i;
+      const a0r = cc[a]!;
+      const a0i = cc[a + 1]!;
+      const a1r = cc[a + sIn]!;
+      const a1i = cc[a + sIn + 1]!;
+      const a2r = cc[a + 2 * sIn]!;
+      const a2i = cc[a + 2 * sIn + 1]!;
+      const a3r = cc[a + 3 * sIn]!;
+      const a3i = cc[a + 3 * sIn + 1]!;
+      const a4r = cc[a + 4 * sIn]!;
+      const a4i = cc[a + 4 * sIn + 1]!;
+      const a5r = cc[a + 5 * sIn]!;
+      const a5i = cc[a + 5 * sIn + 1]!;
+      const a6r = cc[a + 6 * sIn]!;
+      const a6i = cc[a + 6 * sIn + 1]!;
+      const s1r = a1r + a6r;
+      const s1i = a1i + a6i;
+      const d1r = a1r - a6r;
+      const d1i = a1i - a6i;
+      const s2r = a2r + a5r;
+      const s2i = a2i + a5i;
+      const d2r = a2r - a5r;
+      const d2i = a2i - a5i;
+      const s3r = a3r + a4r;
+      const s3i = a3i + a4i;
+      const d3r = a3r - a4r;
+      const d3i = a3i - a4i;
+      ch[o] = a0r + s1r + s2r + s3r;
+      ch[o + 1] = a0i + s1i + s2i + s3i;
+      // X_m = C_m − i·S_m and X_{7−m} = C_m + i·S_m: C_m = a0 + Σ cos(2πjm/7)·s_j, S_m = Σ sin(2πjm/7)·d_j.
+      const c1r = a0r + C71 * s1r + C72 * s2r + C73 * s3r;
+      const c1i = a0i + C71 * s1i + C72 * s2i + C73 * s3i;
+      const c2r = a0r + C72 * s1r + C73 * s2r + C71 * s3r;
+      const c2i = a0i + C72 * s1i + C73 * s2i + C71 * s3i;
+      const c3r = a0r + C73 * s1r + C71 * s2r + C72 * s3r;
+      const c3i = a0i + C73 * s1i + C71 * s2i + C72 * s3i;
+      const q1r = S71 * d1r + S72 * d2r + S73 * d3r;
+      const q1i = S71 * d1i + S72 * d2i + S73 * d3i;
+      const q2r = S72 * d1r - S73 * d2r - S71 * d3r;
+      const q2i = S72 * d1i - S73 * d2i - S71 * d3i;
+      const q3r = S73 * d1r - S71 * d2r + S72 * d3r;
+      const q3i = S73 * d1i - S71 * d2i + S72 * d3i;
+      const w = t0 + 2 * i;
+      out5(ch, o + sOut, c1r + q1i, c1i - q1r, tw, w);
+      out5(ch, o + 2 * sOut, c2r + q2i, c2i - q2r, tw, w + 2 * ido);
+      out5(ch, o + 3 * sOut, c3r + q3i, c3i - q3r, tw, w + 4 * ido);
+      out5(ch, o + 4 * sOut, c3r - q3i, c3i + q3r, tw, w + 6 * ido);
+      out5(ch, o + 5 * sOut, c2r - q2i, c2i + q2r, tw, w + 8 * ido);
+      out5(ch, o + 6 * sOut, c1r - q1i, c1i + q1r, tw, w + 10 * ido);
+    }
+  }
 }
 
 /** cos(2πq/p) and sin(2πq/p), q < p, per odd radix p of the general butterfly. */
