@@ -353,12 +353,18 @@ export function realFft(x: ArrayLike<number>, outRe: Float64Array, outIm: Float6
 
 /**
  * A real transform of one length that adds |X_k|², k ≤ ⌊n/2⌋, to an accumulator: the inner step of Welch's
- * method without copies. Fill `input` (n samples), then call addPower; `input` is left as it was.
+ * method without copies. Fill `input` (n samples), then call addPower; `input` is left as it was. Call
+ * flush before reading the accumulator: an odd length (no half-length packing there) takes its inputs two
+ * at a time, one as the real part and one as the imaginary part of one complex transform Z, and
+ * |X_k|² + |Y_k|² = (|Z_k|² + |Z_{n−k}|²) / 2 for the two real inputs' transforms X and Y, so two segments
+ * cost one transform; flush transforms an input still waiting for its partner.
  */
 export class RealPowerTransform {
   readonly input: Float64Array;
   private readonly n: number;
   private readonly complex: Float64Array | null;
+  /** An odd length's first input of a pair is in the complex buffer's real parts. */
+  private waiting = false;
 
   constructor(n: number) {
     if (!(Number.isInteger(n) && n >= 1))
@@ -369,20 +375,52 @@ export class RealPowerTransform {
     this.complex = n % 2 === 1 || n < 4 ? new Float64Array(2 * n) : null;
   }
 
-  /** Adds |X_k|² of the current input to sum[k], k ≤ ⌊n/2⌋. */
+  /** Adds |X_k|² of the current input to sum[k], k ≤ ⌊n/2⌋ (for an odd length, at the latest at flush). */
   addPower(sum: Float64Array): void {
     const n = this.n;
-    const bins = (n >> 1) + 1;
-    if (this.complex) {
-      const c = this.complex;
-      for (let j = 0; j < n; j++) {
-        c[2 * j] = this.input[j]!;
-        c[2 * j + 1] = 0;
+    const c = this.complex;
+    if (c) {
+      if (n < 3) {
+        for (let j = 0; j < n; j++) {
+          c[2 * j] = this.input[j]!;
+          c[2 * j + 1] = 0;
+        }
+        const X = n === 1 ? c : transform(n, c);
+        for (let k = 0; k <= n >> 1; k++) sum[k] = sum[k]! + X[2 * k]! ** 2 + X[2 * k + 1]! ** 2;
+        return;
       }
-      const X = n === 1 ? c : transform(n, c);
-      for (let k = 0; k < bins; k++) sum[k] = sum[k]! + X[2 * k]! ** 2 + X[2 * k + 1]! ** 2;
+      if (!this.waiting) {
+        for (let j = 0; j < n; j++) c[2 * j] = this.input[j]!;
+        this.waiting = true;
+        return;
+      }
+      for (let j = 0; j < n; j++) c[2 * j + 1] = this.input[j]!;
+      this.waiting = false;
+      const Z = transform(n, c);
+      sum[0] = sum[0]! + Z[0]! ** 2 + Z[1]! ** 2;
+      for (let k = 1; k <= n >> 1; k++) {
+        const m = n - k;
+        const p = Z[2 * k]! ** 2 + Z[2 * k + 1]! ** 2 + Z[2 * m]! ** 2 + Z[2 * m + 1]! ** 2;
+        sum[k] = sum[k]! + 0.5 * p;
+      }
       return;
     }
+    this.addPacked(sum);
+  }
+
+  /** Adds the power of an input still waiting for its partner (odd lengths); nothing otherwise. */
+  flush(sum: Float64Array): void {
+    const c = this.complex;
+    if (!c || !this.waiting) return;
+    const n = this.n;
+    for (let j = 0; j < n; j++) c[2 * j + 1] = 0;
+    this.waiting = false;
+    const X = transform(n, c);
+    for (let k = 0; k <= n >> 1; k++) sum[k] = sum[k]! + X[2 * k]! ** 2 + X[2 * k + 1]! ** 2;
+  }
+
+  private addPacked(sum: Float64Array): void {
+    const n = this.n;
     const h = n >> 1;
     const Z = transform(h, this.input);
     const t = untangleTable(n);

@@ -132,6 +132,7 @@ export class WelchAccumulator {
   result(): WelchResult {
     const { nfft, nperseg, noverlap, window, scaling } = this.o;
     const fs = this.sampleRate;
+    this.transform.flush(this.sum);
     let sw = 0;
     let sw2 = 0;
     for (let k = 0; k < nperseg; k++) {

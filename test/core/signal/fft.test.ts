@@ -150,12 +150,39 @@ describe('fft', () => {
       const sum = new Float64Array((n >> 1) + 1).fill(1);
       t.addPower(sum);
       t.addPower(sum);
+      t.flush(sum);
       const outRe = new Float64Array(sum.length);
       const outIm = new Float64Array(sum.length);
       realFft(re, outRe, outIm);
       const want = Array.from(sum, (_, k) => 1 + 2 * (outRe[k]! ** 2 + outIm[k]! ** 2));
       expectClose(sum, want, { rel: 1e-12, abs: 1e-9 }, `n=${n}`);
       expect(Array.from(t.input)).toEqual(Array.from(re));
+    }
+  });
+
+  it('RealPowerTransform of an odd length pairs its inputs in one transform, and flush adds the last alone', () => {
+    const next = mulberry32(21);
+    for (const n of [3, 15, 1001, 10007]) {
+      for (const count of [1, 2, 3, 4, 5]) {
+        const t = new RealPowerTransform(n);
+        const bins = (n >> 1) + 1;
+        const sum = new Float64Array(bins);
+        const want = new Float64Array(bins);
+        const outRe = new Float64Array(bins);
+        const outIm = new Float64Array(bins);
+        for (let c = 0; c < count; c++) {
+          const x = Float64Array.from({ length: n }, () => next() - 0.5);
+          t.input.set(x);
+          t.addPower(sum);
+          // Each input's own power from the real transform (checked against the definition above).
+          realFft(x, outRe, outIm);
+          for (let k = 0; k < bins; k++) want[k] = want[k]! + outRe[k]! ** 2 + outIm[k]! ** 2;
+        }
+        t.flush(sum);
+        t.flush(sum); // a second flush adds nothing
+        const top = Math.max(...want);
+        expectClose(sum, want, { abs: 1e-12 * top }, `n=${n}, ${count} inputs`);
+      }
     }
   });
 
