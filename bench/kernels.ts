@@ -5,7 +5,8 @@
  * of scipy's in a long-lived python3 process (bench/scipy_kernels.py), so both see the same machine load,
  * and both are timed by their process's CPU time (steadier than wall time on a shared machine); the table
  * gives medians and the ratio of medians (ours / scipy: below 1 is faster).
- * Run alone: `npx tsx bench/kernels.ts` (PW_KERNEL_ROUNDS=7 sets the alternations per cell).
+ * Run alone: `npx tsx bench/kernels.ts` (PW_KERNEL_ROUNDS=7 sets the alternations per cell;
+ * PW_KERNELS_BEFORE=<checkout> adds another checkout's kernels to the alternation, see beforeKernels).
  */
 import { spawn } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
@@ -54,20 +55,48 @@ async function startScipy(signalFile: string, sectionsFile: string): Promise<Sci
   };
 }
 
-/** Alternates ours and scipy's `rounds` times; medians in ms. */
-async function alternate(ours: () => void, theirs: () => Promise<number>): Promise<[number, number]> {
+/** The cascade and Welch kernels of one tree (ours, or PW_KERNELS_BEFORE's). */
+interface Kernels {
+  createSectionFilter: typeof createSectionFilter;
+  runSectionFilter: typeof runSectionFilter;
+  welch: typeof welch;
+}
+
+/**
+ * PW_KERNELS_BEFORE=<checkout>: the same kernels from another checkout of the project (the commit before a
+ * change, e.g. `git archive` into a folder with node_modules linked), run in the same alternation.
+ */
+async function beforeKernels(): Promise<Kernels | null> {
+  const dir = process.env.PW_KERNELS_BEFORE?.trim();
+  if (!dir) return null;
+  return (await import(join(dir, 'src/core/signal/index.ts'))) as Kernels;
+}
+
+const cpuMs = (run: () => void): number => {
+  const t0 = process.cpuUsage();
+  run();
+  const d = process.cpuUsage(t0);
+  return (d.user + d.system) / 1000;
+};
+
+/** Alternates ours, the before tree's (when given) and scipy's `rounds` times; medians in ms. */
+async function alternate(
+  ours: () => void,
+  theirs: () => Promise<number>,
+  before: (() => void) | null,
+): Promise<[number, number, number]> {
   ours();
+  before?.();
   await theirs();
   const a: number[] = [];
   const b: number[] = [];
+  const c: number[] = [];
   for (let r = 0; r < ROUNDS; r++) {
-    const t0 = process.cpuUsage();
-    ours();
-    const d = process.cpuUsage(t0);
-    a.push((d.user + d.system) / 1000);
+    a.push(cpuMs(ours));
+    if (before) c.push(cpuMs(before));
     b.push(await theirs());
   }
-  return [median(a), median(b)];
+  return [median(a), median(b), before ? median(c) : NaN];
 }
 
 /** Runs the benchmark and returns two markdown tables. */
@@ -87,6 +116,7 @@ export async function benchKernels(): Promise<string> {
   writeFileSync(signalFile, new Uint8Array(x.buffer));
   writeFileSync(sectionsFile, JSON.stringify(cascades));
   const scipy = await startScipy(signalFile, sectionsFile);
+  const prev = await beforeKernels();
   const load0 = loadavg()[0]!;
   try {
     const sosRows: string[] = [];
@@ -98,13 +128,14 @@ export async function benchKernels(): Promise<string> {
         );
         const xs = x.subarray(0, len);
         const ys = out.subarray(0, len);
-        const [ours, theirs] = await alternate(
+        const [ours, theirs, was] = await alternate(
           () => runSectionFilter(createSectionFilter(sections), xs, ys),
           () => scipy.time(`sos ${order} ${len}`),
+          prev ? () => prev.runSectionFilter(prev.createSectionFilter(sections), xs, ys) : null,
         );
         const ns = (ms: number) => cell((ms * 1e6) / (len * sections.length));
         sosRows.push(
-          `| ${len.toExponential(0)} | ${order} | ${cell(ours)} | ${cell(theirs)} | ${ns(ours)} | ${ns(theirs)} | ${cell(ours / theirs)} |`,
+          `| ${len.toExponential(0)} | ${order} | ${cell(ours)} | ${cell(theirs)} | ${ns(ours)} | ${ns(theirs)} | ${cell(ours / theirs)} |${prev ? ` ${cell(was)} | ${cell(was / theirs)} |` : ''}`,
         );
       }
     }
@@ -112,24 +143,28 @@ export async function benchKernels(): Promise<string> {
     const wn = WELCH_SECONDS * FS;
     const xw = x.subarray(0, wn);
     for (const seg of SEGMENTS) {
-      const [ours, theirs] = await alternate(
-        () => welch(xw, FS, { window: 'hann', nperseg: seg, scaling: 'spectrum' }),
+      const options = { window: 'hann', nperseg: seg, scaling: 'spectrum' } as const;
+      const [ours, theirs, was] = await alternate(
+        () => welch(xw, FS, options),
         () => scipy.time(`welch ${seg} ${wn}`),
+        prev ? () => prev.welch(xw, FS, options) : null,
       );
-      welchRows.push(`| ${seg} | ${cell(ours)} | ${cell(theirs)} | ${cell(ours / theirs)} |`);
+      welchRows.push(
+        `| ${seg} | ${cell(ours)} | ${cell(theirs)} | ${cell(ours / theirs)} |${prev ? ` ${cell(was)} | ${cell(was / theirs)} |` : ''}`,
+      );
     }
     const load = ((load0 + loadavg()[0]!) / 2).toFixed(1);
     return [
       `Biquad cascade, runSectionFilter vs scipy.signal.sosfilt (${scipy.version}), Node ${process.version}; Butterworth low-pass sections, medians of ${ROUNDS} alternated runs (process CPU time), load average ${load}.`,
       '',
-      '| samples | order | ours (ms) | scipy (ms) | ours (ns per sample·section) | scipy (ns) | ours / scipy |',
-      '| --- | --: | --: | --: | --: | --: | --: |',
+      `| samples | order | ours (ms) | scipy (ms) | ours (ns per sample·section) | scipy (ns) | ours / scipy |${prev ? ' before (ms) | before / scipy |' : ''}`,
+      `| --- | --: | --: | --: | --: | --: | --: |${prev ? ' --: | --: |' : ''}`,
       ...sosRows,
       '',
       `Welch (Hann, half overlap, 'spectrum' scaling, constant detrend) of ${WELCH_SECONDS} s at 48 kHz (${wn} samples), welch vs scipy.signal.welch, medians of ${ROUNDS} alternated runs (process CPU time).`,
       '',
-      '| segment | ours (ms) | scipy (ms) | ours / scipy |',
-      '| --: | --: | --: | --: |',
+      `| segment | ours (ms) | scipy (ms) | ours / scipy |${prev ? ' before (ms) | before / scipy |' : ''}`,
+      `| --: | --: | --: | --: |${prev ? ' --: | --: |' : ''}`,
       ...welchRows,
     ].join('\n');
   } finally {
