@@ -43,6 +43,8 @@ export interface DesignActions {
   /**
    * Replaces the roots and gain by a system the user typed, keeping the typed coefficients; `about`
    * optionally replaces the name and note in the same undo step (the old note described other roots).
+   * The previous design's designer and requirement mask described other roots and go with them (one undo
+   * step brings them back), unless `keep.mask` says the user chose to judge the new system by the same mask.
    */
   loadTyped(
     zeros: Root[],
@@ -50,6 +52,7 @@ export interface DesignActions {
     gain: number,
     typed: TypedCoefficients,
     about?: { name?: string; note?: string },
+    keep?: { mask?: boolean },
   ): DesignProblem | null;
   /** Replaces the whole design (demo, empty, opened file or link); one undo step. */
   replaceDesign(design: Design): void;
@@ -140,15 +143,19 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
         if (!(hz > 0 && hz <= MAX_SAMPLE_RATE)) return;
         edit((d) => (d.sampleRate === hz ? d : { ...d, sampleRate: hz }));
       },
-      loadTyped: (zeros, poles, gain, typed, about) => {
-        const problem = apply((d) => ({
-          ...d,
-          ...about,
-          zeros,
-          poles,
-          gainRule: { kind: 'fixed', value: gain },
-          typed,
-        }));
+      loadTyped: (zeros, poles, gain, typed, about, keep = {}) => {
+        const problem = apply((d) => {
+          const { mask, designer: _designer, ...rest } = d;
+          return {
+            ...rest,
+            ...about,
+            zeros,
+            poles,
+            gainRule: { kind: 'fixed', value: gain },
+            typed,
+            ...(keep.mask && mask && { mask }),
+          };
+        });
         if (!problem) set({ selection: null });
         return problem;
       },

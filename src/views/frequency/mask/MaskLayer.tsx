@@ -87,20 +87,27 @@ export function MaskLayer({ rect, xMap, yMap, db }: MagnitudeOverlayProps) {
         const cy = Math.min(rect.bottom - 4, Math.max(rect.top + 4, y));
         const right = x < (rect.left + rect.right) / 2;
         const text = `${r.worstMarginDb >= 0 ? '+' : ''}${formatNumber(r.worstMarginDb, 3)} dB`;
+        // Only the worst region's margin is written beside its point, so labels never overlap; the other
+        // failing points carry theirs as a tooltip, and the Design tab lists every region's verdict.
+        const labelled = r.id === result.worstRegionId;
         return (
           <g
             key={r.id}
             className={`pw-mask-worst ${r.pass ? 'pw-mask-ok' : 'pw-mask-fail'}`}
             data-testid={`mask-worst-${r.id}`}
           >
-            <circle cx={x} cy={cy} r={4.5} />
-            <text
-              x={right ? x + 8 : x - 8}
-              y={cy - 6 < rect.top + 12 ? cy + 16 : cy - 6}
-              textAnchor={right ? 'start' : 'end'}
-            >
-              {text}
-            </text>
+            <circle cx={x} cy={cy} r={labelled ? 4.5 : 3.5}>
+              {!labelled && <title>{`${r.id}: ${text} at ${formatNumber(r.worstAtHz, 4)} Hz`}</title>}
+            </circle>
+            {labelled && (
+              <text
+                x={right ? x + 8 : x - 8}
+                y={cy - 6 < rect.top + 12 ? cy + 16 : cy - 6}
+                textAnchor={right ? 'start' : 'end'}
+              >
+                {text}
+              </text>
+            )}
           </g>
         );
       })}
