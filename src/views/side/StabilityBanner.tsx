@@ -1,5 +1,12 @@
-/** The stability verdict as a banner no one can miss: green stable, amber marginal, red unstable. */
+/**
+ * The stability verdict as a banner no one can miss: green stable, amber marginal, red unstable. With a
+ * fixed-point target set, a second banner as prominent gives the verdict of the quantized coefficients, and
+ * each says which filter it judges.
+ */
+import type { Stability } from '../../core/stability.ts';
+import { qName } from '../../core/fixed/index.ts';
 import { selectStability } from '../../store/derived.ts';
+import { selectHasImplementation, selectImplementation } from '../../store/implementationDerived.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 import { formatNumber } from '../shared/format.ts';
 import { positionText } from './rootRows.ts';
@@ -13,16 +20,25 @@ function sentence(reason: string): string {
   return t.endsWith('.') ? t : `${t}.`;
 }
 
-export function StabilityBanner() {
-  const s = useWorkbench(selectStability);
-  const hasPoles = useWorkbench((st) => st.design.poles.length > 0);
+function Banner({
+  s,
+  hasPoles,
+  who,
+  testId,
+}: {
+  s: Stability;
+  hasPoles: boolean;
+  who: string | null;
+  testId: string;
+}) {
   const verdict = s.verdict;
   return (
-    <div className={`pw-stability pw-stability-${verdict}`} data-testid="stability">
+    <div className={`pw-stability pw-stability-${verdict}`} data-testid={testId}>
       <span className="pw-stability-icon" aria-hidden="true">
         {ICON[verdict]}
       </span>
       <div>
+        {who && <span className="pw-stability-who">{who}: </span>}
         {/* Only the verdict is live: the radius changes on every pointer move while dragging. */}
         <strong className="pw-stability-title" role="status" aria-live="polite" aria-atomic="true">
           {TITLE[verdict]}
@@ -45,5 +61,28 @@ export function StabilityBanner() {
         )}
       </div>
     </div>
+  );
+}
+
+export function StabilityBanner() {
+  const s = useWorkbench(selectStability);
+  const hasPoles = useWorkbench((st) => st.design.poles.length > 0);
+  const hasTarget = useWorkbench(selectHasImplementation);
+  const impl = useWorkbench((st) => {
+    const r = selectImplementation(st);
+    return hasTarget && r.ok ? r.value : null;
+  });
+  if (!impl) return <Banner s={s} hasPoles={hasPoles} who={null} testId="stability" />;
+  const format = `${impl.settings.wordLength}-bit ${qName(impl.quantized.format)}`;
+  return (
+    <>
+      <Banner s={s} hasPoles={hasPoles} who="Ideal filter" testId="stability" />
+      <Banner
+        s={impl.stability}
+        hasPoles={hasPoles}
+        who={`Quantized ${format}`}
+        testId="stability-quantized"
+      />
+    </>
   );
 }

@@ -1,31 +1,71 @@
-/** The mask's verdict in the magnitude plot's title row: pass or fail, the worst margin and where. */
+/**
+ * The mask's verdicts in the magnitude plot's title row, saying which filter each judges: the ideal filter,
+ * and, when a fixed-point target is set, the quantized implementation in force beside it, just as prominent.
+ * Each says pass or fail, the worst margin, where, and which limit it is measured against.
+ */
+import type { MaskRegionResult, MaskResult } from '../../../core/mask/index.ts';
+import { qName } from '../../../core/fixed/index.ts';
 import { selectMaskResult } from '../../../store/derived.ts';
+import {
+  selectHasImplementation,
+  selectImplementation,
+  selectQuantizedMaskResult,
+} from '../../../store/implementationDerived.ts';
 import { useWorkbench } from '../../../store/useWorkbench.ts';
 import { formatHz, formatNumber } from '../../shared/format.ts';
 import type { PlotRect } from '../layout.ts';
 
-export function MaskChip({ rect }: { rect: PlotRect }) {
-  const result = useWorkbench(selectMaskResult);
-  if (!result || result.regions.length === 0) return null;
+/** "above the upper limit of pass" / "below the lower limit of stop-2", for the worst region. */
+function limitWords(r: MaskRegionResult | undefined): string {
+  if (!r || r.problem) return '';
+  return r.limit === 'upper' ? `, upper limit of ${r.id}` : `, lower limit of ${r.id}`;
+}
+
+function Chip({ result, who, testId }: { result: MaskResult; who: string; testId: string }) {
   const failing = result.regions.filter((r) => !r.pass).length;
   const m = result.worstMarginDb;
-  const margin = Number.isFinite(m) ? `${m >= 0 ? '+' : ''}${formatNumber(m, 3)} dB` : '';
+  const worst = result.regions.find((r) => r.id === result.worstRegionId);
+  const margin = Number.isFinite(m)
+    ? `${m >= 0 ? '+' : ''}${formatNumber(m, 3)} dB`
+    : worst && Number.isFinite(worst.worstDb)
+      ? `${formatNumber(worst.worstDb, 3)} dB`
+      : (worst?.problem ?? '');
   const where = Number.isFinite(result.worstAtHz) ? ` at ${formatHz(result.worstAtHz)}` : '';
   return (
     <div
       className={`pw-mask-chip ${result.pass ? 'pw-mask-ok' : 'pw-mask-fail'}`}
-      style={{ left: rect.right, top: rect.top - 19 }}
-      data-testid="mask-chip"
+      data-testid={testId}
       data-pass={result.pass}
-      title="Requirement mask: the worst margin (positive = inside the limits) and where it occurs"
+      title={`Requirement mask judged on the ${who}: the worst margin (positive = inside the limits), where it occurs and which limit`}
     >
+      <span className="pw-mask-who">{who}</span>
       <b role="status">
         {result.pass ? '✓ Mask passes' : `✗ Mask fails (${failing} of ${result.regions.length})`}
       </b>
       <span>
         {margin}
         {where}
+        {limitWords(worst)}
       </span>
+    </div>
+  );
+}
+
+export function MaskChip({ rect }: { rect: PlotRect }) {
+  const ideal = useWorkbench(selectMaskResult);
+  const hasTarget = useWorkbench(selectHasImplementation);
+  const quantized = useWorkbench(selectQuantizedMaskResult);
+  const format = useWorkbench((s) => {
+    const r = selectImplementation(s);
+    return r.ok ? `${r.value.settings.wordLength}-bit ${qName(r.value.quantized.format)}` : null;
+  });
+  if (!ideal || ideal.regions.length === 0) return null;
+  return (
+    <div className="pw-mask-chips" style={{ left: rect.right, top: rect.top - 19 }}>
+      <Chip result={ideal} who="ideal" testId="mask-chip" />
+      {hasTarget && quantized && format && (
+        <Chip result={quantized} who={`quantized ${format}`} testId="mask-chip-quantized" />
+      )}
     </div>
   );
 }

@@ -9,13 +9,16 @@ export function marginText(marginDb: number, atHz: number): string {
   return Number.isFinite(atHz) ? `${m} at ${formatHz(atHz)}` : m;
 }
 
-/** One region's verdict in a few words. */
+/** One region's verdict in a few words, naming the limit the worst point is measured against. */
 export function regionVerdictText(r: MaskRegionResult): string {
   if (r.problem) return `not judged: ${r.problem}`;
   const where = marginText(r.worstMarginDb, r.worstAtHz);
-  return r.pass
-    ? `passes, margin ${where}`
-    : `fails by ${formatNumber(-r.worstMarginDb, 3)} dB at ${formatHz(r.worstAtHz)}`;
+  const limit = r.limit === 'upper' ? 'upper limit' : 'lower limit';
+  if (r.pass) return `passes, margin ${where} (${limit})`;
+  // A margin of −∞ is a response of ±∞ dB (a zero or a pole on the circle): say the level, not "by ∞ dB".
+  if (!Number.isFinite(r.worstMarginDb))
+    return `fails: the response is ${formatNumber(r.worstDb, 3)} dB at ${formatHz(r.worstAtHz)}, beyond its ${limit}`;
+  return `fails by ${formatNumber(-r.worstMarginDb, 3)} dB at ${formatHz(r.worstAtHz)}, ${r.limit === 'upper' ? 'above' : 'below'} its ${limit}`;
 }
 
 /** The whole mask's verdict in a few words. */
