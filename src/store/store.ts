@@ -21,6 +21,7 @@ import * as edits from './rootEdits.ts';
 import { defaultView, type ViewSettings, type ViewState } from './view.ts';
 import { designerActions, rerunDesignerOn, type DesignerActions } from './designer.ts';
 import type { DesignResult } from '../core/design/index.ts';
+import { designAtRate, type RateChoice } from './sampleRate.ts';
 import { implementationActions, type ImplementationActions } from './implementation.ts';
 import { defaultSignalView, signalActions, type SignalActions, type SignalState } from './signal.ts';
 
@@ -33,6 +34,13 @@ export interface DesignActions {
   joinPair(ref: RootRef): void;
   setGainRule(rule: GainRule): void;
   setSampleRate(hz: number): void;
+  /**
+   * Changes the sample rate keeping the design in hertz (store/sampleRate.ts): a design as its designer
+   * made it is designed again at the new rate; hand-placed roots keep their frequencies in Hz, or their
+   * places in the plane when `choice` says so. One undo step. Returns what happened in a sentence, or why
+   * nothing changed.
+   */
+  changeSampleRate(hz: number, choice?: RateChoice): Result<string>;
   /**
    * Takes a sample rate for the design (a recording's) and re-runs its designer at that rate, so a notch
    * designed at 50 Hz stays at 50 Hz; one undo step. Returns the re-run's result (null when the design has
@@ -142,6 +150,20 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
       setSampleRate: (hz) => {
         if (!(hz > 0 && hz <= MAX_SAMPLE_RATE)) return;
         edit((d) => (d.sampleRate === hz ? d : { ...d, sampleRate: hz }));
+      },
+      changeSampleRate: (hz, choice) => {
+        if (!(hz > 0 && hz <= MAX_SAMPLE_RATE))
+          return {
+            ok: false,
+            error: { message: `sample rate ${hz} Hz is not accepted`, expected: 'a rate above 0 Hz' },
+          };
+        const r = designAtRate(get().design, hz, choice);
+        if (!r.ok) return r;
+        const problem = apply(() => r.value.design);
+        if (problem)
+          return { ok: false, error: { message: describeProblem(problem), expected: problem.expected } };
+        set({ selection: null });
+        return { ok: true, value: r.value.said };
       },
       loadTyped: (zeros, poles, gain, typed, about, keep = {}) => {
         const problem = apply((d) => {
