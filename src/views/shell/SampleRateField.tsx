@@ -29,7 +29,21 @@ function RateQuestion({
   onDone: (m: string | null) => void;
 }) {
   const first = useRef<HTMLButtonElement>(null);
-  useEffect(() => first.current?.focus(), []);
+  // Focus the default answer only once the key that committed the field is released: Enter's keypress
+  // would otherwise land on the focused button and answer the question unasked.
+  useEffect(() => {
+    const focus = () => first.current?.focus();
+    const timer = setTimeout(focus, 400);
+    const up = () => {
+      clearTimeout(timer);
+      focus();
+    };
+    window.addEventListener('keyup', up, { once: true });
+    return () => {
+      clearTimeout(timer);
+      window.removeEventListener('keyup', up);
+    };
+  }, []);
   const unit = (hz: number) => rateText(hz, preferredUnit(hz)) + ' ' + preferredUnit(hz);
   const factor = Number((to / from).toPrecision(3));
   return (
