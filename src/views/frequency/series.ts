@@ -47,6 +47,8 @@ function scaled(ext: Range | null, scale: number, fallback: Range): Range {
 
 /** How far above the curve's top a mask's upper limit may lift the dB axis so it is drawn, dB. */
 export const MASK_LIMIT_HEADROOM_DB = 20;
+/** A limit this close above the top is drawn on the top edge instead (the axis is not lifted for it), dB. */
+export const MASK_LIMIT_EDGE_DB = 0.5;
 
 /**
  * The magnitude plot: dB (floor at most DB_FLOOR_BELOW_PEAK under the peak) or linear from zero. In dB the
@@ -60,7 +62,7 @@ export function magnitudeSeries(
 ): Series {
   if (scale === 'db') {
     const data = dbExtent(r.magnitudeDb);
-    const lift = limitTopDb > data[1] && limitTopDb <= data[1] + MASK_LIMIT_HEADROOM_DB;
+    const lift = limitTopDb > data[1] + MASK_LIMIT_EDGE_DB && limitTopDb <= data[1] + MASK_LIMIT_HEADROOM_DB;
     const withLimit: Range = lift ? [data[0], limitTopDb] : data;
     return {
       key: 'db',

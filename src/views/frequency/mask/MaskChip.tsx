@@ -21,7 +21,18 @@ function limitWords(r: MaskRegionResult | undefined): string {
   return r.limit === 'upper' ? `, upper limit of ${r.id}` : `, lower limit of ${r.id}`;
 }
 
-function Chip({ result, who, testId }: { result: MaskResult; who: string; testId: string }) {
+function Chip({
+  result,
+  who,
+  testId,
+  compact,
+}: {
+  result: MaskResult;
+  who: string;
+  testId: string;
+  /** Two chips share the title row: the place of the worst point is left to the tooltip. */
+  compact: boolean;
+}) {
   const failing = result.regions.filter((r) => !r.pass).length;
   const m = result.worstMarginDb;
   const worst = result.regions.find((r) => r.id === result.worstRegionId);
@@ -36,16 +47,13 @@ function Chip({ result, who, testId }: { result: MaskResult; who: string; testId
       className={`pw-mask-chip ${result.pass ? 'pw-mask-ok' : 'pw-mask-fail'}`}
       data-testid={testId}
       data-pass={result.pass}
-      title={`Requirement mask judged on the ${who}: the worst margin (positive = inside the limits), where it occurs and which limit`}
+      title={`Requirement mask judged on the ${who} filter: worst margin ${margin}${where}${limitWords(worst)} (positive = inside the limits)`}
     >
       <span className="pw-mask-who">{who}</span>
-      <b role="status">
-        {result.pass ? '✓ Mask passes' : `✗ Mask fails (${failing} of ${result.regions.length})`}
-      </b>
+      <b role="status">{result.pass ? '✓ passes' : `✗ fails ${failing}/${result.regions.length}`}</b>
       <span>
         {margin}
-        {where}
-        {limitWords(worst)}
+        {!compact && where}
       </span>
     </div>
   );
@@ -57,15 +65,14 @@ export function MaskChip({ rect }: { rect: PlotRect }) {
   const quantized = useWorkbench(selectQuantizedMaskResult);
   const format = useWorkbench((s) => {
     const r = selectImplementation(s);
-    return r.ok ? `${r.value.settings.wordLength}-bit ${qName(r.value.quantized.format)}` : null;
+    return r.ok ? `quantized ${r.value.settings.wordLength}-bit ${qName(r.value.quantized.format)}` : null;
   });
   if (!ideal || ideal.regions.length === 0) return null;
+  const both = hasTarget && quantized !== null && format !== null;
   return (
     <div className="pw-mask-chips" style={{ left: rect.right, top: rect.top - 19 }}>
-      <Chip result={ideal} who="ideal" testId="mask-chip" />
-      {hasTarget && quantized && format && (
-        <Chip result={quantized} who={`quantized ${format}`} testId="mask-chip-quantized" />
-      )}
+      <Chip result={ideal} who="ideal" testId="mask-chip" compact={both} />
+      {both && <Chip result={quantized} who={format} testId="mask-chip-quantized" compact />}
     </div>
   );
 }

@@ -14,6 +14,8 @@ import './mask.css';
 
 /** Depth of the hatched strip along a limit line, on its forbidden side, px. */
 const HATCH_PX = 14;
+/** A limit line this far above the plot's top is still drawn, on the top edge, px. */
+const EDGE_PX = 4;
 
 export function MaskLayer({ rect, xMap, yMap, db }: MagnitudeOverlayProps) {
   const mask = useWorkbench((s) => s.design.mask);
@@ -71,8 +73,15 @@ export function MaskLayer({ rect, xMap, yMap, db }: MagnitudeOverlayProps) {
                       />
                     </>
                   )}
-                  {l.y >= rect.top && l.y <= rect.bottom && (
-                    <line className="pw-mask-limit" x1={s.x0} x2={s.x1} y1={l.y} y2={l.y} />
+                  {/* A limit just above the top (within the axis' edge allowance) is drawn on the edge. */}
+                  {l.y >= rect.top - EDGE_PX && l.y <= rect.bottom && (
+                    <line
+                      className="pw-mask-limit"
+                      x1={s.x0}
+                      x2={s.x1}
+                      y1={Math.max(l.y, rect.top)}
+                      y2={Math.max(l.y, rect.top)}
+                    />
                   )}
                 </g>
               );

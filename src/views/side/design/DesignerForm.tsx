@@ -35,7 +35,8 @@ export function DesignerForm({ form, setForm }: DesignerFormProps) {
   const status = useWorkbench(selectDesignerStatus);
   const [errors, setErrors] = useState<FieldErrors>({});
   const [general, setGeneral] = useState<string | null>(null);
-  const [done, setDone] = useState<{ note: string; replacedEdits: boolean } | null>(null);
+  // The last run's words, shown while the design still holds that run's designer (not after a rate change).
+  const [done, setDone] = useState<{ note: string; replacedEdits: boolean; spec: unknown } | null>(null);
   const [withMask, setWithMask] = useState(true);
 
   const { entry, variant } = kindOf(form.kind);
@@ -72,7 +73,7 @@ export function DesignerForm({ form, setForm }: DesignerFormProps) {
     if (r.ok) {
       setErrors({});
       setGeneral(null);
-      setDone({ note: r.value.note, replacedEdits });
+      setDone({ note: r.value.note, replacedEdits, spec: workbenchStore.getState().design.designer });
       return;
     }
     const field = errorField(r.error, form);
@@ -247,7 +248,7 @@ export function DesignerForm({ form, setForm }: DesignerFormProps) {
           {general}
         </p>
       )}
-      {done && (
+      {done && done.spec === status?.spec && (
         <p role="status" className="pw-dz-done" data-testid="designer-done">
           {done.replacedEdits ? 'Hand edits replaced by: ' : 'Designed: '}
           {done.note}.{' '}
