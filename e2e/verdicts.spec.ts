@@ -83,13 +83,19 @@ test('with 16-bit coefficients the quantized verdict shows beside the ideal one,
   await setCoefficientBits(page, 16);
   await expect(maskChip(page)).toContainText('ideal');
   await expect(maskChip(page)).toHaveAttribute('data-pass', 'true');
-  await expect(quantizedChip(page)).toContainText('quantized 16-bit');
+  await expect(quantizedChip(page)).toContainText('16-bit Q1.14');
+  await expect(quantizedChip(page)).toHaveAttribute(
+    'title',
+    /judged on the quantized \(16-bit Q1\.14\) filter/,
+  );
   await expect(quantizedChip(page)).toHaveAttribute('data-pass', 'false');
   await expect(quantizedChip(page)).toContainText('✗ fails');
   // The chips are the same size of type: neither is the footnote of the other.
   const size = (l: ReturnType<typeof maskChip>) => l.evaluate((e) => getComputedStyle(e).fontSize);
   expect(await size(quantizedChip(page))).toBe(await size(maskChip(page)));
   // Both stability verdicts, each saying which filter it judges.
+  // The dB/linear choice stays reachable beside the two chips.
+  await frequencyPanel(page).getByRole('radio', { name: 'linear' }).first().click({ trial: true });
   await expect(page.getByTestId('stability')).toContainText('Ideal filter');
   await expect(page.getByTestId('stability-quantized')).toContainText('Quantized 16-bit');
   await saveScreenshot(page, info, 'ideal-and-quantized');

@@ -37,17 +37,17 @@ function Chip({
   const m = result.worstMarginDb;
   const worst = result.regions.find((r) => r.id === result.worstRegionId);
   const margin = Number.isFinite(m)
-    ? `${m >= 0 ? '+' : ''}${formatNumber(m, 3)} dB`
+    ? `${m >= 0 ? '+' : ''}${formatNumber(m, compact ? 2 : 3)} dB`
     : worst && Number.isFinite(worst.worstDb)
       ? `${formatNumber(worst.worstDb, 3)} dB`
       : (worst?.problem ?? '');
   const where = Number.isFinite(result.worstAtHz) ? ` at ${formatHz(result.worstAtHz)}` : '';
   return (
     <div
-      className={`pw-mask-chip ${result.pass ? 'pw-mask-ok' : 'pw-mask-fail'}`}
+      className={`pw-mask-chip ${result.pass ? 'pw-mask-ok' : 'pw-mask-fail'}${compact ? ' pw-mask-compact' : ''}`}
       data-testid={testId}
       data-pass={result.pass}
-      title={`Requirement mask judged on the ${who} filter: worst margin ${margin}${where}${limitWords(worst)} (positive = inside the limits)`}
+      title={`Requirement mask judged on the ${who === 'ideal' ? 'ideal' : `quantized (${who})`} filter: worst margin ${margin}${where}${limitWords(worst)} (positive = inside the limits)`}
     >
       <span className="pw-mask-who">{who}</span>
       <b role="status">{result.pass ? '✓ passes' : `✗ fails ${failing}/${result.regions.length}`}</b>
@@ -59,18 +59,28 @@ function Chip({
   );
 }
 
+/** Width kept free at the left of the title row for the plot's name and its dB/linear choice, px. */
+const TITLE_CONTROLS_PX = 160;
+
 export function MaskChip({ rect }: { rect: PlotRect }) {
   const ideal = useWorkbench(selectMaskResult);
   const hasTarget = useWorkbench(selectHasImplementation);
   const quantized = useWorkbench(selectQuantizedMaskResult);
   const format = useWorkbench((s) => {
     const r = selectImplementation(s);
-    return r.ok ? `quantized ${r.value.settings.wordLength}-bit ${qName(r.value.quantized.format)}` : null;
+    return r.ok ? `${r.value.settings.wordLength}-bit ${qName(r.value.quantized.format)}` : null;
   });
   if (!ideal || ideal.regions.length === 0) return null;
   const both = hasTarget && quantized !== null && format !== null;
   return (
-    <div className="pw-mask-chips" style={{ left: rect.right, top: rect.top - 19 }}>
+    <div
+      className="pw-mask-chips"
+      style={{
+        left: rect.right,
+        top: rect.top - 19,
+        maxWidth: Math.max(0, rect.right - rect.left - TITLE_CONTROLS_PX),
+      }}
+    >
       <Chip result={ideal} who="ideal" testId="mask-chip" compact={both} />
       {both && <Chip result={quantized} who={format} testId="mask-chip-quantized" compact />}
     </div>
