@@ -19,6 +19,8 @@ import { linkFragment } from '../../share/link/index.ts';
 
 /** Exit code of an export that carries warnings and was not told to accept them. */
 export const EXPORT_WARNINGS_EXIT = 3;
+/** Warnings listed one by one on stderr; the output itself lists every one. */
+const STDERR_WARNINGS = 20;
 /** The switch that takes an export with warnings as it is (exit 0). */
 export const ACCEPT_WARNINGS = 'accept-warnings';
 
@@ -86,7 +88,9 @@ export function runExport(argv: string[], io: CliIo): number {
   for (const line of maskLines(impl, mask)) io.stderr(`${line}\n`);
   const warnings = exportWarnings(impl, mask);
   if (warnings.length === 0) return 0;
-  for (const w of warnings) io.stderr(`warning: ${warningLine(w)}\n`);
+  for (const w of warnings.slice(0, STDERR_WARNINGS)) io.stderr(`warning: ${warningLine(w)}\n`);
+  if (warnings.length > STDERR_WARNINGS)
+    io.stderr(`… and ${warnings.length - STDERR_WARNINGS} more warning(s), all listed in the output\n`);
   const accepted = args.switches.has(ACCEPT_WARNINGS);
   io.stderr(
     `${warnings.length} warning(s) are written into ${where}` +

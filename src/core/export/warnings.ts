@@ -96,7 +96,7 @@ export function exportWarnings(impl: Implementation, mask?: RequirementMask): Ex
     out.push({
       key: 'coefficients-clamped',
       where: `section ${k}`,
-      message: `${names.join(', ')} ${names.length === 1 ? 'does' : 'do'} not fit ${q} and were clamped to ${min}…${max}: the section is not the designed one`,
+      message: `${names.join(', ')} ${names.length === 1 ? 'does' : 'do'} not fit ${q} and ${names.length === 1 ? 'was' : 'were'} clamped to ${min}…${max}: the section is not the designed one`,
     });
   });
   impl.quantized.codes.forEach((c, k) => {
