@@ -6,7 +6,10 @@
  */
 import {
   DESIGNER_VARIANTS,
+  FAMILY_OPTIONS,
+  FAMILY_TIE_BREAK,
   isRequired,
+  type FamilyChoice,
   runDesigner,
   textFor,
   type DesignValues,
@@ -142,9 +145,26 @@ export function designerFromArgs(argv: string[]): { spec: DesignerSpec; args: Pa
   return { spec: readDescription(kind, v, args), args, kind };
 }
 
+/** "Any family": the family picked, every family's least order, and how a tie was broken. */
+function familyLines(choice: FamilyChoice): string[] {
+  const words = (f: string) => FAMILY_OPTIONS.find((o) => o.value === f)!.label;
+  return [
+    `family: ${words(choice.picked)}, the least order of any family${choice.tieBroken ? ` (tied on order; ${FAMILY_TIE_BREAK} decided)` : ''}`,
+    ...choice.trials.map(
+      (t) =>
+        `  ${words(t.family).padEnd(13)} ${
+          t.order === undefined
+            ? `not designable: ${t.refused ?? ''}`
+            : `order ${t.order}, group-delay spread across the pass band ${fmt(t.delaySpreadSamples!)} samples`
+        }${t.family === choice.picked ? '  <- picked' : ''}`,
+    ),
+  ];
+}
+
 function requirementLines(result: DesignResult, verdict: MaskResult | null): string[] {
   const lines: string[] = [];
   if (result.estimate) lines.push(`order: ${result.estimate.order} (least order meeting the requirement)`);
+  if (result.family) lines.push(...familyLines(result.family));
   const m = result.margin;
   if (m) {
     lines.push(
@@ -234,6 +254,7 @@ export function runDesign(argv: string[], io: CliIo): number {
     note: result.note,
     ...(result.estimate && { estimate: result.estimate }),
     ...(result.margin && { margin: result.margin }),
+    ...(result.family && { family: { ...result.family, tieBreak: FAMILY_TIE_BREAK } }),
     ...(mask && { mask, maskResult: verdict }),
   };
   const design: Design = {

@@ -22,3 +22,5 @@ export type { RequirementMargin } from './margin.ts';
 export { requirementRegions } from './requirement.ts';
 export type { Requirement } from './requirement.ts';
 export { MAX_DESIGN_ORDER } from './validate.ts';
+export { chooseFamily, passbandDelaySpread, FAMILY_TIE_BREAK } from './familyChoice.ts';
+export type { FamilyChoice, FamilyTrial } from './familyChoice.ts';

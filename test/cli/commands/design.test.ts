@@ -436,3 +436,40 @@ describe('polewright design --out', () => {
     }
   });
 });
+
+describe('design --family any', () => {
+  it('prints the family picked, every family’s order beside it and how a tie was broken', async () => {
+    const argv = ['design', 'lowpass', '--fs', '1000', '--family', 'any', '--order', 'auto'];
+    const req = ['--passband', '100', '--stopband', '200', '--ripple', '1', '--attenuation', '20'];
+    const r = await runCli([...argv, ...req]);
+    expect(r.code).toBe(0);
+    // scipy.signal buttord/cheb1ord/cheb2ord/ellipord 1.17: 4, 3, 3, 3
+    expect(r.stdout).toMatch(
+      /family: Chebyshev II, the least order of any family \(tied on order; least group-delay spread across the pass band decided\)/,
+    );
+    expect(r.stdout).toMatch(/Butterworth +order 4,/);
+    expect(r.stdout).toMatch(/Elliptic +order 3,/);
+    expect(r.stdout).toMatch(/Chebyshev II +order 3, .* <- picked/);
+    const out = await json([...argv, ...req]);
+    expect(out.family.picked).toBe('chebyshev2');
+    expect(out.family.tieBreak).toBe('least group-delay spread across the pass band');
+    expect(out.family.trials.map((t: { order: number }) => t.order)).toEqual([4, 3, 3, 3]);
+  });
+
+  it('refuses any family with a given order and says what to give', async () => {
+    const r = await runCli([
+      'design',
+      'lowpass',
+      '--fs',
+      '1000',
+      '--family',
+      'any',
+      '--order',
+      '4',
+      '--edge',
+      '100',
+    ]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/order auto/);
+  });
+});

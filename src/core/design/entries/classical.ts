@@ -70,7 +70,9 @@ export const iirDesigner = defineDesigner({
     group: 'Classical filters',
     fixed: { response: value },
     title: (v: DesignValues) =>
-      `${FAMILY_OPTIONS.find((f) => f.value === v.family)?.label ?? String(v.family)} ${label.toLowerCase()}`,
+      v.family === 'any'
+        ? `${label}, family of least order`
+        : `${FAMILY_OPTIONS.find((f) => f.value === v.family)?.label ?? String(v.family)} ${label.toLowerCase()}`,
     example: (given: DesignValues) => example(value, given),
     start: (fs: number) => ({
       family: 'butterworth',

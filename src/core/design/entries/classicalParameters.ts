@@ -5,12 +5,16 @@
 import type { DesignValues, SpecOf } from '../parameters.ts';
 import { MAX_DESIGN_ORDER } from '../validate.ts';
 
-/** The four classical families, with their names in notes. */
+/**
+ * The four classical families, with their names in notes, and "any family": the one of least order for a
+ * requirement (runIir.ts, familyChoice.ts).
+ */
 export const FAMILY_OPTIONS = [
   { value: 'butterworth', label: 'Butterworth', words: 'Butterworth' },
   { value: 'chebyshev1', label: 'Chebyshev I', words: 'Chebyshev I' },
   { value: 'chebyshev2', label: 'Chebyshev II', words: 'Chebyshev II' },
   { value: 'elliptic', label: 'Elliptic', words: 'elliptic' },
+  { value: 'any', label: 'Any family (least order)', words: 'any family' },
 ] as const;
 
 /** The four band shapes. */
@@ -36,6 +40,7 @@ const EDGE_MEANING: Record<string, string> = {
   chebyshev1: 'where the ripple band ends',
   chebyshev2: 'where the stop band starts',
   elliptic: 'where the ripple band ends',
+  any: 'chosen with the family',
 };
 
 const PASS_LABEL: Record<string, string> = {

@@ -56,7 +56,12 @@ export function DesignerForm({ form, setForm }: DesignerFormProps) {
     update({ values: { ...form.values, [id]: text } });
     if (errors[id]) setErrors({ ...errors, [id]: undefined });
   };
-  const setChoice = (key: string, value: string) => update({ choices: { ...form.choices, [key]: value } });
+  const setChoice = (key: string, value: string) =>
+    // "Any family" picks the family by least order, so it asks for the least order.
+    update({
+      choices: { ...form.choices, [key]: value },
+      ...(key === 'family' && value === 'any' && { autoOrder: true }),
+    });
   const submit = () => {
     setDone(null);
     if (!reading.ok) {

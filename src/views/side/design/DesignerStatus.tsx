@@ -6,6 +6,7 @@ import { selectDesignerResult, selectDesignerStatus } from '../../../store/deriv
 import { useWorkbench, workbenchStore } from '../../../store/useWorkbench.ts';
 import { formatDb, formatNumber } from '../../shared/format.ts';
 import { describeDesigner } from './describe.ts';
+import { FamilyTable } from './FamilyTable.tsx';
 
 const signed = (db: number) => `${db >= 0 ? '+' : ''}${formatDb(db, 3)}`;
 
@@ -36,6 +37,7 @@ export function DesignerStatus({ onChangeParameters }: { onChangeParameters: () 
           {!value.estimate.converged && ' (edge search did not fully converge)'}
         </p>
       )}
+      {value?.family && <FamilyTable choice={value.family} />}
       {value?.margin && (
         <p className="pw-dz-note" data-testid="designer-margin">
           {status.editedByHand ? 'As designed: p' : 'P'}ass-band loss{' '}
