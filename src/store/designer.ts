@@ -14,6 +14,7 @@ import { designerEntry, runDesigner, type DesignerSpec, type DesignResult } from
 import * as masks from '../core/mask/index.ts';
 import type { MaskRegion, MaskRegionPatch, RegionEdge, RequirementMask } from '../core/mask/index.ts';
 import type { Design } from '../core/model/design.ts';
+import { addPart, partsOf, removePart, replacePart } from '../core/model/parts.ts';
 import { problemPlace, type DesignProblem } from '../core/model/check.ts';
 
 /** What happens to the mask when a designer runs. */
@@ -51,7 +52,7 @@ function withDesigned(
   result: DesignResult,
   policy: DesignerMaskPolicy,
 ): Design {
-  const { typed: _typed, mask, ...rest } = design;
+  const { typed: _typed, mask, parts: _parts, ...rest } = design;
   const implied = policy === 'keep' ? null : masks.maskFromDesigner(spec);
   const nextMask = policy === 'keep' ? mask : policy === 'replace' ? implied : (mask ?? implied);
   const copy = (roots: Root[]) => roots.map((r) => ({ ...r }));
@@ -94,11 +95,123 @@ export function rerunDesignerOn(
   return applyDesigner(design, spec, 'keep');
 }
 
-/** The design without its designer (roots, gain and mask stay), for free editing. */
+/** The design without its designer or parts (roots, gain and mask stay), for free editing. */
 export function releaseDesignerOf(design: Design): Design {
-  if (!design.designer) return design;
-  const { designer: _designer, ...rest } = design;
+  if (!design.designer && !design.parts) return design;
+  const { designer: _designer, parts: _parts, ...rest } = design;
   return rest;
+}
+
+/** The whole design's mask after adding a part with this description, by the policy (see DesignerMaskPolicy). */
+function maskAfterAdding(design: Design, spec: DesignerSpec, policy: DesignerMaskPolicy): Design['mask'] {
+  if (policy === 'keep') return design.mask;
+  const implied = masks.maskFromDesigner(spec);
+  if (!implied) return policy === 'replace' ? undefined : design.mask;
+  return design.mask ? masks.composeMask(design.mask, implied, design.sampleRate) : implied;
+}
+
+/**
+ * Adds a designed part to the cascade (a notch on top of a low-pass), after the designed parts and before
+ * the roots placed by hand; the design keeps its sample rate, so the part is designed there. The mask
+ * ('fill' and 'replace': the whole's mask with the part's stop regions carved in; 'keep': unchanged).
+ */
+export function addDesignerPart(
+  design: Design,
+  spec: DesignerSpec,
+  policy: DesignerMaskPolicy = 'fill',
+): Result<{ design: Design; result: DesignResult }> {
+  const atRate = { ...spec, fs: design.sampleRate } as DesignerSpec;
+  const r = runDesigner(atRate);
+  if (!r.ok) return r;
+  const added = addPart(design, atRate, r.value.zpk);
+  const mask = maskAfterAdding(design, atRate, policy);
+  const { mask: _mask, ...rest } = added;
+  return { ok: true, value: { design: mask ? { ...rest, mask } : rest, result: r.value } };
+}
+
+/** Re-runs designed part `index` with changed parameters at the design's sample rate (its roots only). */
+export function rerunPartOn(
+  design: Design,
+  index: number,
+  patch: DesignerPatch = {},
+): Result<{ design: Design; result: DesignResult }> {
+  const part = partsOf(design)[index];
+  if (!part?.designer)
+    return {
+      ok: false,
+      error: { message: `part ${index + 1} has no designer to re-run`, expected: 'a designed part' },
+    };
+  const spec = mergeDesignerPatch({ ...part.designer, fs: design.sampleRate }, patch);
+  const r = runDesigner(spec);
+  if (!r.ok) return r;
+  return { ok: true, value: { design: replacePart(design, index, spec, r.value.zpk), result: r.value } };
+}
+
+/**
+ * Re-runs every designed part at the design's sample rate (after a sample-rate change: each part's
+ * description is in Hz, so a notch at 50 Hz stays at 50 Hz). The first part that cannot be re-run
+ * there stops it, with its error.
+ */
+export function rerunAllPartsOn(design: Design): Result<{ design: Design; result: DesignResult }> {
+  let d = design;
+  let last: DesignResult | null = null;
+  const parts = partsOf(design);
+  for (let i = 0; i < parts.length; i++) {
+    if (!parts[i]!.designer) continue;
+    const r = rerunPartOn(d, i);
+    if (!r.ok) return { ok: false, error: { ...r.error, message: `part ${i + 1}: ${r.error.message}` } };
+    d = r.value.design;
+    last = r.value.result;
+  }
+  return last
+    ? { ok: true, value: { design: d, result: last } }
+    : {
+        ok: false,
+        error: { message: 'this design has no designer to re-run', expected: 'run a designer first' },
+      };
+}
+
+/** What one part of the cascade is and whether its roots were edited by hand since it was designed. */
+export interface PartStatus {
+  index: number;
+  /** Absent for the roots placed by hand. */
+  designer?: DesignerSpec;
+  zeros: number;
+  poles: number;
+  /** The roots of a designed part differ from what its designer gives now (moved or removed by hand). */
+  editedByHand: boolean;
+}
+
+/** The status of every part, re-running each designer through `run` (memoised by the caller). */
+export function partStatuses(
+  design: Design,
+  run: (spec: DesignerSpec) => Result<DesignResult>,
+): PartStatus[] {
+  const parts = partsOf(design);
+  let z = 0;
+  let p = 0;
+  return parts.map((part, index) => {
+    const zeros = design.zeros.slice(z, z + part.zeros);
+    const poles = design.poles.slice(p, p + part.poles);
+    z += part.zeros;
+    p += part.poles;
+    let editedByHand = false;
+    if (part.designer) {
+      const r = run(part.designer);
+      editedByHand =
+        !r.ok ||
+        part.designer.fs !== design.sampleRate ||
+        !sameRoots(zeros, r.value.zpk.zeros) ||
+        !sameRoots(poles, r.value.zpk.poles);
+    }
+    return {
+      index,
+      ...(part.designer && { designer: part.designer }),
+      zeros: part.zeros,
+      poles: part.poles,
+      editedByHand,
+    };
+  });
 }
 
 const sameRoots = (a: readonly Root[], b: readonly Root[]) =>
@@ -146,6 +259,15 @@ export interface DesignerActions {
   rerunDesigner(patch: DesignerPatch): Result<DesignResult>;
   /** Forgets the designer and keeps the roots, for free editing (one undo step). */
   releaseDesigner(): void;
+  /**
+   * Adds a designed part to the cascade at the design's sample rate (one undo step); the mask follows
+   * `policy` (see addDesignerPart). On bad parameters nothing changes.
+   */
+  addDesignerPart(spec: DesignerSpec, policy?: DesignerMaskPolicy): Result<DesignResult>;
+  /** Re-runs designed part `index` with changed parameters (one undo step; its hand edits are replaced). */
+  rerunPart(index: number, patch?: DesignerPatch): Result<DesignResult>;
+  /** Removes part `index` and its roots from the cascade (one undo step). */
+  removePart(index: number): void;
   /** Sets (validated) or removes (null) the whole mask; one undo step. */
   setMask(mask: RequirementMask | null): Result<RequirementMask | null>;
   /** Adds a region (an id is chosen when none is given) and returns its id; one undo step. */
@@ -198,6 +320,20 @@ export function designerActions(
       return r;
     },
     releaseDesigner: () => edit(releaseDesignerOf),
+    addDesignerPart: (spec, policy = 'fill') => {
+      const r = attempt((d) => designed(addDesignerPart(d, spec, policy)));
+      if (r.ok) rootsReplaced();
+      return r;
+    },
+    rerunPart: (index, patch = {}) => {
+      const r = attempt((d) => designed(rerunPartOn(d, index, patch)));
+      if (r.ok) rootsReplaced();
+      return r;
+    },
+    removePart: (index) => {
+      edit((d) => removePart(d, index));
+      rootsReplaced();
+    },
     setMask: (mask) =>
       attempt((d) => {
         const r = withMask(d, mask);

@@ -19,7 +19,7 @@ import { postNotice } from './notices.ts';
 import { closeGesture, emptyHistory, recordEdit, type History } from './history.ts';
 import * as edits from './rootEdits.ts';
 import { defaultView, type ViewSettings, type ViewState } from './view.ts';
-import { designerActions, rerunDesignerOn, type DesignerActions } from './designer.ts';
+import { designerActions, rerunAllPartsOn, rerunDesignerOn, type DesignerActions } from './designer.ts';
 import type { DesignResult } from '../core/design/index.ts';
 import { implementationActions, type ImplementationActions } from './implementation.ts';
 import { defaultSignalView, signalActions, type SignalActions, type SignalState } from './signal.ts';
@@ -141,7 +141,8 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
         edit((d) => (d.sampleRate === hz ? d : { ...d, sampleRate: hz }));
       },
       loadTyped: (zeros, poles, gain, typed, about) => {
-        const problem = apply((d) => ({
+        // Typed coefficients replace the whole cascade: no part owns their roots.
+        const problem = apply(({ parts: _parts, ...d }) => ({
           ...d,
           ...about,
           zeros,
@@ -161,8 +162,9 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
         let rerun: Result<DesignResult> | null = null;
         edit((d) => {
           const rated = d.sampleRate === hz ? d : { ...d, sampleRate: hz };
-          if (!rated.designer) return rated;
-          const r = rerunDesignerOn(rated, {});
+          if (!rated.designer && !rated.parts) return rated;
+          // A composed design re-runs each designed part's description (in Hz) at the new rate.
+          const r = rated.parts ? rerunAllPartsOn(rated) : rerunDesignerOn(rated, {});
           rerun = r.ok ? { ok: true, value: r.value.result } : r;
           return r.ok ? r.value.design : rated;
         });

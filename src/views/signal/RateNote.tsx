@@ -21,7 +21,7 @@ function adoptSignalRate(hz: number): void {
 export function RateNote() {
   const signalRate = useWorkbench((s) => s.signal.current?.sampleRate ?? null);
   const designRate = useWorkbench((s) => s.design.sampleRate);
-  const hasDesigner = useWorkbench((s) => s.design.designer !== undefined);
+  const hasDesigner = useWorkbench((s) => s.design.designer !== undefined || s.design.parts !== undefined);
   if (signalRate === null || signalRate === designRate) return null;
   return (
     <div className="pw-signal-rate" role="note" data-testid="rate-mismatch">
