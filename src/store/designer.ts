@@ -129,6 +129,37 @@ export function addDesignerPart(
   return { ok: true, value: { design: mask ? { ...rest, mask } : rest, result: r.value } };
 }
 
+/**
+ * The mask the parts imply together: the first designed part's own, with each later part's carved in (as
+ * adding them one by one makes it), or null when no part implies one.
+ */
+export function maskOfParts(design: Design): RequirementMask | null {
+  let mask: RequirementMask | null = null;
+  for (const part of partsOf(design)) {
+    const implied = part.designer ? masks.maskFromDesigner(part.designer) : null;
+    if (implied) mask = mask ? masks.composeMask(mask, implied, design.sampleRate) : implied;
+  }
+  return mask;
+}
+
+/**
+ * The design after a part was changed or removed, with its mask following the parts when it was the one
+ * they implied (nothing edited by hand in it); a mask edited by hand is kept as it is.
+ */
+function withPartsMask(before: Design, after: Design): Design {
+  const derived = maskOfParts(before);
+  if (!before.mask || !derived || JSON.stringify(before.mask) !== JSON.stringify(derived)) return after;
+  const next = maskOfParts(after);
+  const { mask: _mask, ...rest } = after;
+  return next ? { ...rest, mask: next } : rest;
+}
+
+/** The design without part `index`; the mask follows the parts when it was theirs (withPartsMask). */
+export function removePartOf(design: Design, index: number): Design {
+  const after = removePart(design, index);
+  return after === design ? design : withPartsMask(design, after);
+}
+
 /** Re-runs designed part `index` with changed parameters at the design's sample rate (its roots only). */
 export function rerunPartOn(
   design: Design,
@@ -144,7 +175,8 @@ export function rerunPartOn(
   const spec = mergeDesignerPatch({ ...part.designer, fs: design.sampleRate }, patch);
   const r = runDesigner(spec);
   if (!r.ok) return r;
-  return { ok: true, value: { design: replacePart(design, index, spec, r.value.zpk), result: r.value } };
+  const after = replacePart(design, index, spec, r.value.zpk);
+  return { ok: true, value: { design: withPartsMask(design, after), result: r.value } };
 }
 
 /**
@@ -331,7 +363,7 @@ export function designerActions(
       return r;
     },
     removePart: (index) => {
-      edit((d) => removePart(d, index));
+      edit((d) => removePartOf(d, index));
       rootsReplaced();
     },
     setMask: (mask) =>

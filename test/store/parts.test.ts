@@ -52,6 +52,13 @@ describe('composing a design in the store', () => {
     expect(s().design.parts![2]!.designer).toMatchObject({ f0: 70 });
     expect(s().design.zeros.slice(0, -1)).toEqual(before.zeros.slice(0, -1));
     expectClose(angleHz(s().design.zeros.at(-1)!, FS), 70, { abs: 1e-9 }, 'notch moved to 70 Hz');
+    // The mask was the one the parts imply, so it follows the edit: the stop region moves to 70 Hz.
+    const stops = () =>
+      s()
+        .design.mask!.regions.filter((r) => r.kind === 'stop')
+        .map((r) => r.id);
+    expect(stops()).toEqual(['stop', 'notch-50', 'notch-70']);
+    expect(selectMaskResult(s())!.pass).toBe(true);
     s().undo();
     expect(s().design).toBe(before);
     s().redo();
@@ -74,8 +81,14 @@ describe('composing a design in the store', () => {
     const three = s().design;
     s().removePart(1);
     expect(kinds(store)).toEqual(['iir', 'notch', 'hand']);
+    expect(stops()).toEqual(['stop', 'notch-70']);
     s().undo();
     expect(s().design).toBe(three);
+    // A mask edited by hand is the user's: changing a part leaves it as it is.
+    s().updateRegion('stop', { upperDb: -45 });
+    const handMask = s().design.mask;
+    s().removePart(1);
+    expect(s().design.mask).toBe(handMask);
   });
 
   it('judges the whole cascade: a notch’s skirt can use up a low-pass’s pass-band margin', () => {
