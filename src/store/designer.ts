@@ -14,7 +14,10 @@ import { designerEntry, runDesigner, type DesignerSpec, type DesignResult } from
 import * as masks from '../core/mask/index.ts';
 import type { MaskRegion, MaskRegionPatch, RegionEdge, RequirementMask } from '../core/mask/index.ts';
 import type { Design } from '../core/model/design.ts';
-import { addPart, partsOf, removePart, replacePart } from '../core/model/parts.ts';
+import { partsOf, removePart, replacePart } from '../core/model/parts.ts';
+import { addDesignerPart, maskOfParts } from '../core/model/compose.ts';
+
+export { addDesignerPart, maskOfParts };
 import { problemPlace, type DesignProblem } from '../core/model/check.ts';
 
 /** What happens to the mask when a designer runs. */
@@ -100,46 +103,6 @@ export function releaseDesignerOf(design: Design): Design {
   if (!design.designer && !design.parts) return design;
   const { designer: _designer, parts: _parts, ...rest } = design;
   return rest;
-}
-
-/** The whole design's mask after adding a part with this description, by the policy (see DesignerMaskPolicy). */
-function maskAfterAdding(design: Design, spec: DesignerSpec, policy: DesignerMaskPolicy): Design['mask'] {
-  if (policy === 'keep') return design.mask;
-  const implied = masks.maskFromDesigner(spec);
-  if (!implied) return policy === 'replace' ? undefined : design.mask;
-  return design.mask ? masks.composeMask(design.mask, implied, design.sampleRate) : implied;
-}
-
-/**
- * Adds a designed part to the cascade (a notch on top of a low-pass), after the designed parts and before
- * the roots placed by hand; the design keeps its sample rate, so the part is designed there. The mask
- * ('fill' and 'replace': the whole's mask with the part's stop regions carved in; 'keep': unchanged).
- */
-export function addDesignerPart(
-  design: Design,
-  spec: DesignerSpec,
-  policy: DesignerMaskPolicy = 'fill',
-): Result<{ design: Design; result: DesignResult }> {
-  const atRate = { ...spec, fs: design.sampleRate } as DesignerSpec;
-  const r = runDesigner(atRate);
-  if (!r.ok) return r;
-  const added = addPart(design, atRate, r.value.zpk);
-  const mask = maskAfterAdding(design, atRate, policy);
-  const { mask: _mask, ...rest } = added;
-  return { ok: true, value: { design: mask ? { ...rest, mask } : rest, result: r.value } };
-}
-
-/**
- * The mask the parts imply together: the first designed part's own, with each later part's carved in (as
- * adding them one by one makes it), or null when no part implies one.
- */
-export function maskOfParts(design: Design): RequirementMask | null {
-  let mask: RequirementMask | null = null;
-  for (const part of partsOf(design)) {
-    const implied = part.designer ? masks.maskFromDesigner(part.designer) : null;
-    if (implied) mask = mask ? masks.composeMask(mask, implied, design.sampleRate) : implied;
-  }
-  return mask;
 }
 
 /**
