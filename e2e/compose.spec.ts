@@ -108,6 +108,12 @@ test('a second notch on a low-pass: parts are added, edited, re-run and removed,
   expect(three.mask!.regions.filter((r) => r.kind === 'stop').length).toBe(3);
   await expectMaskPass(page, true);
   await saveScreenshot(page, info, 'three-parts');
+  // The parts survive a reload (the autosaved session carries them, as files and links do).
+  await page.reload();
+  await page.waitForFunction(() => window.__polewright !== undefined);
+  expect((await readDesign(page)).parts).toEqual(three.parts);
+  await openDesignPage(page);
+  await expect(parts(page)).toHaveCount(3);
 
   // Edit the second notch: its parameters go into the form; Update changes only that part.
   await parts(page)
