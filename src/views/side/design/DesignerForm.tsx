@@ -24,6 +24,7 @@ import { readForm, type FieldErrors } from './designForm.ts';
 import { errorField, errorText } from './designErrors.ts';
 import { FormField, PairField } from './FormField.tsx';
 import { maskFromDesigner } from '../../../core/mask/index.ts';
+import { partsOf } from '../../../core/model/parts.ts';
 
 export interface DesignerFormProps {
   form: DesignFormState;
@@ -40,7 +41,14 @@ export function DesignerForm({ form, setForm, editingPart = null, onStopEditing 
   const status = useWorkbench(selectDesignerStatus);
   const [errors, setErrors] = useState<FieldErrors>({});
   const [general, setGeneral] = useState<string | null>(null);
-  const [done, setDone] = useState<{ note: string; replacedEdits: boolean; what?: string } | null>(null);
+  const [done, setDone] = useState<{
+    note: string;
+    replacedEdits: boolean;
+    what?: string;
+    /** The number of parts it was said for: a note about part 3 goes once the parts change again. */
+    parts: number;
+  } | null>(null);
+  const partCount = useWorkbench((s) => partsOf(s.design).length);
   const [withMask, setWithMask] = useState(true);
 
   const { entry, variant } = kindOf(form.kind);
@@ -95,7 +103,12 @@ export function DesignerForm({ form, setForm, editingPart = null, onStopEditing 
           : how === 'part'
             ? `Part ${editingPart! + 1} changed: `
             : undefined;
-      setDone({ note: r.value.note, replacedEdits, ...(what && { what }) });
+      setDone({
+        note: r.value.note,
+        replacedEdits,
+        ...(what && { what }),
+        parts: partsOf(workbenchStore.getState().design).length,
+      });
       if (how === 'part') onStopEditing?.();
       return;
     }
@@ -300,7 +313,7 @@ export function DesignerForm({ form, setForm, editingPart = null, onStopEditing 
           {general}
         </p>
       )}
-      {done && (
+      {done && done.parts === partCount && (
         <p role="status" className="pw-dz-done" data-testid="designer-done">
           {done.what ?? (done.replacedEdits ? 'Hand edits replaced by: ' : 'Designed: ')}
           {done.note}.{' '}
