@@ -18,6 +18,22 @@ import {
 } from './support/design.ts';
 import { dragRoot, rootAt } from './support/plane.ts';
 
+const parts = (page: Page) => page.getByTestId('design-parts').getByTestId('design-part');
+const undoButton = (page: Page) =>
+  page.getByRole('banner').getByRole('button', { name: 'Undo', exact: true });
+const redoButton = (page: Page) =>
+  page.getByRole('banner').getByRole('button', { name: 'Redo', exact: true });
+/** |H| in dB of the page's current design at hz, by the engine. */
+const dbAt = async (page: Page, hz: number) => {
+  const { zpk, fs } = await designZpk(page);
+  return magnitudeDbHz(zpk, fs, hz);
+};
+const notchAt = async (page: Page, centre: string, width: string) => {
+  await chooseKind(page, 'Notch');
+  await fillField(page, 'Centre', centre);
+  await fillField(page, '−3 dB width', width);
+};
+
 test.beforeEach(async ({ page }) => {
   await openWorkbench(page);
   await openDesignPage(page);
@@ -60,23 +76,15 @@ test('least order, any family: proposes the family of least order and shows the 
   expect(count).toBe(3);
   expect(picked).toBeDefined();
   await saveScreenshot(page, info, 'any-family');
-});
 
-const parts = (page: Page) => page.getByTestId('design-parts').getByTestId('design-part');
-const undoButton = (page: Page) =>
-  page.getByRole('banner').getByRole('button', { name: 'Undo', exact: true });
-const redoButton = (page: Page) =>
-  page.getByRole('banner').getByRole('button', { name: 'Redo', exact: true });
-/** |H| in dB of the page's current design at hz, by the engine. */
-const dbAt = async (page: Page, hz: number) => {
-  const { zpk, fs } = await designZpk(page);
-  return magnitudeDbHz(zpk, fs, hz);
-};
-const notchAt = async (page: Page, centre: string, width: string) => {
-  await chooseKind(page, 'Notch');
-  await fillField(page, 'Centre', centre);
-  await fillField(page, '−3 dB width', width);
-};
+  // As a part of a cascade, it still says which family it picked and the others' orders.
+  await notchAt(page, '50', '4');
+  await designerForm(page).getByRole('button', { name: 'Add to the design' }).click();
+  await expect(parts(page)).toHaveCount(2);
+  await expect(parts(page).nth(0).getByTestId('part-family')).toContainText(
+    'Butterworth 5, Chebyshev I 3, Chebyshev II 3, Elliptic 3',
+  );
+});
 
 test('a second notch on a low-pass: parts are added, edited, re-run and removed, each one undo step', async ({
   page,

@@ -10,7 +10,13 @@
  * output compared with the design, so undoing back to the designed roots reads "as designed" again.
  */
 import type { Result, Root } from '../core/types.ts';
-import { designerEntry, runDesigner, type DesignerSpec, type DesignResult } from '../core/design/index.ts';
+import {
+  designerEntry,
+  runDesigner,
+  type DesignerSpec,
+  type DesignResult,
+  type FamilyChoice,
+} from '../core/design/index.ts';
 import * as masks from '../core/mask/index.ts';
 import type { MaskRegion, MaskRegionPatch, RegionEdge, RequirementMask } from '../core/mask/index.ts';
 import type { Design } from '../core/model/design.ts';
@@ -175,6 +181,8 @@ export interface PartStatus {
   poles: number;
   /** The roots of a designed part differ from what its designer gives now (moved or removed by hand). */
   editedByHand: boolean;
+  /** For "any family": the family its designer picked and every family's order. */
+  family?: FamilyChoice;
 }
 
 /** The status of every part, re-running each designer through `run` (memoised by the caller). */
@@ -191,8 +199,10 @@ export function partStatuses(
     z += part.zeros;
     p += part.poles;
     let editedByHand = false;
+    let family: FamilyChoice | undefined;
     if (part.designer) {
       const r = run(part.designer);
+      family = r.ok ? r.value.family : undefined;
       editedByHand =
         !r.ok ||
         part.designer.fs !== design.sampleRate ||
@@ -205,6 +215,7 @@ export function partStatuses(
       zeros: part.zeros,
       poles: part.poles,
       editedByHand,
+      ...(family && { family }),
     };
   });
 }

@@ -7,7 +7,10 @@ import { selectPartStatuses } from '../../../store/derived.ts';
 import { useWorkbench, workbenchStore } from '../../../store/useWorkbench.ts';
 import type { PartStatus } from '../../../store/designer.ts';
 import { describeDesigner } from './describe.ts';
+import { FAMILY_OPTIONS } from '../../../core/design/index.ts';
 import { postNotice } from '../../../store/notices.ts';
+
+const familyLabel = (f: string) => FAMILY_OPTIONS.find((o) => o.value === f)?.label ?? f;
 
 const rootWords = (p: PartStatus) =>
   `${p.zeros} zero${p.zeros === 1 ? '' : 's'}, ${p.poles} pole${p.poles === 1 ? '' : 's'} stored`;
@@ -56,6 +59,14 @@ export function PartsSection({ onEdit, editing }: PartsSectionProps) {
               <p className="pw-dz-part-params">
                 {words ? words.params.map(([k, v]) => `${k} ${v}`).join(' · ') : rootWords(p)}
               </p>
+              {p.family && (
+                <p className="pw-dz-part-params" data-testid="part-family">
+                  Picked {familyLabel(p.family.picked)}:{' '}
+                  {p.family.trials
+                    .map((t) => `${familyLabel(t.family)} ${t.order ?? 'not designable'}`)
+                    .join(', ')}
+                </p>
+              )}
               <div className="pw-dz-actions">
                 {p.designer && (
                   <>
