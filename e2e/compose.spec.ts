@@ -84,6 +84,7 @@ test('least order, any family: proposes the family of least order and shows the 
   await expect(parts(page).nth(0).getByTestId('part-family')).toContainText(
     'Butterworth 5, Chebyshev I 3, Chebyshev II 3, Elliptic 3',
   );
+  await saveScreenshot(page, info, 'any-family-as-a-part');
 });
 
 test('a second notch on a low-pass: parts are added, edited, re-run and removed, each one undo step', async ({
