@@ -18,7 +18,7 @@ import { memoLast } from './memo.ts';
 import { evaluateMask, type MaskResult } from '../core/mask/index.ts';
 import { runDesigner, type DesignerSpec, type DesignResult } from '../core/design/index.ts';
 import type { Result } from '../core/types.ts';
-import { differsFromDesigner, partStatuses, type PartStatus } from './designer.ts';
+import { differsFromDesigner } from './designer.ts';
 import { hzToOmega } from '../core/units.ts';
 
 /** Highest order for which the closed-form time response is listed (partial fractions grow ill-conditioned). */
@@ -158,17 +158,3 @@ export const selectDesignerStatus = (
  */
 export const selectDesignerResult = (s: WorkbenchState): Result<DesignResult> | null =>
   designerOutputOf(s.design.designer);
-
-/** Designer outputs by description object (a part's description is kept while its roots are dragged). */
-const partOutputs = new WeakMap<DesignerSpec, ReturnType<typeof runDesigner>>();
-const runPartDesigner = (spec: DesignerSpec) => {
-  let r = partOutputs.get(spec);
-  if (!r) partOutputs.set(spec, (r = runDesigner(spec)));
-  return r;
-};
-const partStatusesOf = memoLast((design: Design) => partStatuses(design, runPartDesigner));
-/**
- * The parts of the cascade with whether each designed part was edited by hand; a designer runs once per
- * description, so a drag only compares roots.
- */
-export const selectPartStatuses = (s: WorkbenchState): PartStatus[] => partStatusesOf(s.design);

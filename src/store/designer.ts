@@ -10,20 +10,12 @@
  * output compared with the design, so undoing back to the designed roots reads "as designed" again.
  */
 import type { Result, Root } from '../core/types.ts';
-import {
-  designerEntry,
-  runDesigner,
-  type DesignerSpec,
-  type DesignResult,
-  type FamilyChoice,
-} from '../core/design/index.ts';
+import { designerEntry, runDesigner, type DesignerSpec, type DesignResult } from '../core/design/index.ts';
 import * as masks from '../core/mask/index.ts';
 import type { MaskRegion, MaskRegionPatch, RegionEdge, RequirementMask } from '../core/mask/index.ts';
 import type { Design } from '../core/model/design.ts';
-import { partsOf, removePart, replacePart } from '../core/model/parts.ts';
-import { addDesignerPart, maskOfParts } from '../core/model/compose.ts';
+import { partsOf, replacePart } from '../core/model/parts.ts';
 
-export { addDesignerPart, maskOfParts };
 import { problemPlace, type DesignProblem } from '../core/model/check.ts';
 
 /** What happens to the mask when a designer runs. */
@@ -111,24 +103,6 @@ export function releaseDesignerOf(design: Design): Design {
   return rest;
 }
 
-/**
- * The design after a part was changed or removed, with its mask following the parts when it was the one
- * they implied (nothing edited by hand in it); a mask edited by hand is kept as it is.
- */
-function withPartsMask(before: Design, after: Design): Design {
-  const derived = maskOfParts(before);
-  if (!before.mask || !derived || JSON.stringify(before.mask) !== JSON.stringify(derived)) return after;
-  const next = maskOfParts(after);
-  const { mask: _mask, ...rest } = after;
-  return next ? { ...rest, mask: next } : rest;
-}
-
-/** The design without part `index`; the mask follows the parts when it was theirs (withPartsMask). */
-export function removePartOf(design: Design, index: number): Design {
-  const after = removePart(design, index);
-  return after === design ? design : withPartsMask(design, after);
-}
-
 /** Re-runs designed part `index` with changed parameters at the design's sample rate (its roots only). */
 export function rerunPartOn(
   design: Design,
@@ -144,8 +118,7 @@ export function rerunPartOn(
   const spec = mergeDesignerPatch({ ...part.designer, fs: design.sampleRate }, patch);
   const r = runDesigner(spec);
   if (!r.ok) return r;
-  const after = replacePart(design, index, spec, r.value.zpk);
-  return { ok: true, value: { design: withPartsMask(design, after), result: r.value } };
+  return { ok: true, value: { design: replacePart(design, index, spec, r.value.zpk), result: r.value } };
 }
 
 /**
@@ -170,54 +143,6 @@ export function rerunAllPartsOn(design: Design): Result<{ design: Design; result
         ok: false,
         error: { message: 'this design has no designer to re-run', expected: 'run a designer first' },
       };
-}
-
-/** What one part of the cascade is and whether its roots were edited by hand since it was designed. */
-export interface PartStatus {
-  index: number;
-  /** Absent for the roots placed by hand. */
-  designer?: DesignerSpec;
-  zeros: number;
-  poles: number;
-  /** The roots of a designed part differ from what its designer gives now (moved or removed by hand). */
-  editedByHand: boolean;
-  /** For "any family": the family its designer picked and every family's order. */
-  family?: FamilyChoice;
-}
-
-/** The status of every part, re-running each designer through `run` (memoised by the caller). */
-export function partStatuses(
-  design: Design,
-  run: (spec: DesignerSpec) => Result<DesignResult>,
-): PartStatus[] {
-  const parts = partsOf(design);
-  let z = 0;
-  let p = 0;
-  return parts.map((part, index) => {
-    const zeros = design.zeros.slice(z, z + part.zeros);
-    const poles = design.poles.slice(p, p + part.poles);
-    z += part.zeros;
-    p += part.poles;
-    let editedByHand = false;
-    let family: FamilyChoice | undefined;
-    if (part.designer) {
-      const r = run(part.designer);
-      family = r.ok ? r.value.family : undefined;
-      editedByHand =
-        !r.ok ||
-        part.designer.fs !== design.sampleRate ||
-        !sameRoots(zeros, r.value.zpk.zeros) ||
-        !sameRoots(poles, r.value.zpk.poles);
-    }
-    return {
-      index,
-      ...(part.designer && { designer: part.designer }),
-      zeros: part.zeros,
-      poles: part.poles,
-      editedByHand,
-      ...(family && { family }),
-    };
-  });
 }
 
 const sameRoots = (a: readonly Root[], b: readonly Root[]) =>
@@ -266,14 +191,12 @@ export interface DesignerActions {
   /** Forgets the designer and keeps the roots, for free editing (one undo step). */
   releaseDesigner(): void;
   /**
-   * Adds a designed part to the cascade at the design's sample rate (one undo step); the mask follows
-   * `policy` (see addDesignerPart). On bad parameters nothing changes.
+   * A designer edit of the design (adding, re-running or removing a part: store/partEdits.ts), or its
+   * InputError; one undo step when it succeeds.
    */
-  addDesignerPart(spec: DesignerSpec, policy?: DesignerMaskPolicy): Result<DesignResult>;
-  /** Re-runs designed part `index` with changed parameters (one undo step; its hand edits are replaced). */
-  rerunPart(index: number, patch?: DesignerPatch): Result<DesignResult>;
-  /** Removes part `index` and its roots from the cascade (one undo step). */
-  removePart(index: number): void;
+  designerEdit(fn: (d: Design) => Result<{ design: Design; result: DesignResult }>): Result<DesignResult>;
+  /** An edit of the design's parts that cannot fail (removing a part: store/partEdits.ts); one undo step. */
+  partsEdit(fn: (d: Design) => Design): void;
   /** Sets (validated) or removes (null) the whole mask; one undo step. */
   setMask(mask: RequirementMask | null): Result<RequirementMask | null>;
   /** Adds a region (an id is chosen when none is given) and returns its id; one undo step. */
@@ -326,18 +249,13 @@ export function designerActions(
       return r;
     },
     releaseDesigner: () => edit(releaseDesignerOf),
-    addDesignerPart: (spec, policy = 'fill') => {
-      const r = attempt((d) => designed(addDesignerPart(d, spec, policy)));
+    designerEdit: (fn) => {
+      const r = attempt((d) => designed(fn(d)));
       if (r.ok) rootsReplaced();
       return r;
     },
-    rerunPart: (index, patch = {}) => {
-      const r = attempt((d) => designed(rerunPartOn(d, index, patch)));
-      if (r.ok) rootsReplaced();
-      return r;
-    },
-    removePart: (index) => {
-      edit((d) => removePartOf(d, index));
+    partsEdit: (fn) => {
+      edit(fn);
       rootsReplaced();
     },
     setMask: (mask) =>

@@ -1,7 +1,9 @@
 import { describe, it, expect } from 'vitest';
 import { createWorkbenchStore } from '../../src/store/store.ts';
 import { emptyDesign } from '../../src/core/model/design.ts';
-import { selectMaskResult, selectPartStatuses } from '../../src/store/derived.ts';
+import { selectMaskResult } from '../../src/store/derived.ts';
+import { selectPartStatuses } from '../../src/store/partsDerived.ts';
+import { addPartEdit, removePartEdit, rerunPartEdit } from '../../src/store/partEdits.ts';
 import type { DesignerSpec } from '../../src/core/design/index.ts';
 import { readDesignFile, writeDesignFile } from '../../src/share/designFile.ts';
 import { decodeLink, encodeLink } from '../../src/share/link/index.ts';
@@ -31,8 +33,8 @@ describe('composing a design in the store', () => {
     const store = createWorkbenchStore(emptyDesign(FS));
     const s = () => store.getState();
     expect(s().runDesigner(LOWPASS).ok).toBe(true);
-    expect(s().addDesignerPart(NOTCH(50)).ok).toBe(true);
-    expect(s().addDesignerPart(NOTCH(61.7)).ok).toBe(true);
+    expect(s().designerEdit(addPartEdit(NOTCH(50))).ok).toBe(true);
+    expect(s().designerEdit(addPartEdit(NOTCH(61.7))).ok).toBe(true);
     expect(kinds(store)).toEqual(['iir', 'notch', 'notch']);
     // The whole mask: the low-pass's pass band with both notches carved out, its stop band, both notches.
     const mask = s().design.mask!;
@@ -48,7 +50,7 @@ describe('composing a design in the store', () => {
 
     // Edit the second notch (re-run with a new centre): only its roots move.
     const before = s().design;
-    expect(s().rerunPart(2, { f0: 70 }).ok).toBe(true);
+    expect(s().designerEdit(rerunPartEdit(2, { f0: 70 })).ok).toBe(true);
     expect(s().design.parts![2]!.designer).toMatchObject({ f0: 70 });
     expect(s().design.zeros.slice(0, -1)).toEqual(before.zeros.slice(0, -1));
     expectClose(angleHz(s().design.zeros.at(-1)!, FS), 70, { abs: 1e-9 }, 'notch moved to 70 Hz');
@@ -67,19 +69,19 @@ describe('composing a design in the store', () => {
     // A root placed by hand is a part of its own and survives a re-run of the notch.
     s().addRoot('zero', { re: -0.9, im: 0, multiplicity: 1 });
     expect(kinds(store)).toEqual(['iir', 'notch', 'notch', 'hand']);
-    s().rerunPart(1, { f0: 55 });
+    s().designerEdit(rerunPartEdit(1, { f0: 55 }));
     expect(s().design.zeros.at(-1)).toEqual({ re: -0.9, im: 0, multiplicity: 1 });
 
     // Dragging a notch's root marks that part (only) as edited by hand.
     const zi = s().design.parts![0]!.zeros; // first zero of the 55 Hz notch
     s().moveRoot({ kind: 'zero', index: zi }, 0.5, 0.5);
     expect(selectPartStatuses(s()).map((p) => p.editedByHand)).toEqual([false, true, false, false]);
-    s().rerunPart(1);
+    s().designerEdit(rerunPartEdit(1));
     expect(selectPartStatuses(s()).map((p) => p.editedByHand)).toEqual([false, false, false, false]);
 
     // Remove the first notch: one undo step brings it back.
     const three = s().design;
-    s().removePart(1);
+    s().partsEdit(removePartEdit(1));
     expect(kinds(store)).toEqual(['iir', 'notch', 'hand']);
     expect(stops()).toEqual(['stop', 'notch-70']);
     s().undo();
@@ -87,7 +89,7 @@ describe('composing a design in the store', () => {
     // A mask edited by hand is the user's: changing a part leaves it as it is.
     s().updateRegion('stop', { upperDb: -45 });
     const handMask = s().design.mask;
-    s().removePart(1);
+    s().partsEdit(removePartEdit(1));
     expect(s().design.mask).toBe(handMask);
   });
 
@@ -97,7 +99,7 @@ describe('composing a design in the store', () => {
     // The least order meets the pass band with no margin at its edge (100 Hz).
     s().runDesigner({ ...LOWPASS, order: 'auto' } as DesignerSpec);
     expect(selectMaskResult(s())!.pass).toBe(true);
-    s().addDesignerPart(NOTCH(61.7));
+    s().designerEdit(addPartEdit(NOTCH(61.7)));
     const verdict = selectMaskResult(s())!;
     expect(verdict.pass).toBe(false);
     const failing = verdict.regions.filter((r) => !r.pass);
@@ -109,7 +111,7 @@ describe('composing a design in the store', () => {
     const store = createWorkbenchStore(emptyDesign(FS));
     const s = () => store.getState();
     s().runDesigner(LOWPASS);
-    s().addDesignerPart(NOTCH(50));
+    s().designerEdit(addPartEdit(NOTCH(50)));
     const r = s().adoptSampleRate(2000);
     expect(r?.ok).toBe(true);
     const d = s().design;
@@ -122,8 +124,8 @@ describe('composing a design in the store', () => {
     const store = createWorkbenchStore(emptyDesign(FS));
     const s = () => store.getState();
     s().runDesigner(LOWPASS);
-    s().addDesignerPart(NOTCH(50));
-    s().addDesignerPart(NOTCH(73.3));
+    s().designerEdit(addPartEdit(NOTCH(50)));
+    s().designerEdit(addPartEdit(NOTCH(73.3)));
     const d = s().design;
     const file = readDesignFile(writeDesignFile(d));
     expect(file.ok && file.design.parts).toEqual(d.parts);

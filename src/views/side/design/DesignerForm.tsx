@@ -25,6 +25,7 @@ import { errorField, errorText } from './designErrors.ts';
 import { FormField, PairField } from './FormField.tsx';
 import { maskFromDesigner } from '../../../core/mask/index.ts';
 import { partsOf } from '../../../core/model/parts.ts';
+import { addPartEdit, rerunPartEdit } from '../../../store/partEdits.ts';
 
 export interface DesignerFormProps {
   form: DesignFormState;
@@ -90,9 +91,9 @@ export function DesignerForm({ form, setForm, editingPart = null, onStopEditing 
     // carved into the whole's mask).
     const r =
       how === 'add'
-        ? store.addDesignerPart(spec, withMask && impliedMask ? 'fill' : 'keep')
+        ? store.designerEdit(addPartEdit(spec, withMask && impliedMask ? 'fill' : 'keep'))
         : how === 'part'
-          ? store.rerunPart(editingPart!, () => spec)
+          ? store.designerEdit(rerunPartEdit(editingPart!, () => spec))
           : store.runDesigner(spec, withMask && impliedMask ? 'replace' : 'keep');
     if (r.ok) {
       setErrors({});

@@ -3,10 +3,10 @@
  * hand, and buttons to edit, re-run or remove it; the roots placed by hand as a part of their own. Every
  * button is one undo step.
  */
-import { selectPartStatuses } from '../../../store/derived.ts';
+import { selectPartStatuses, type PartStatus } from '../../../store/partsDerived.ts';
 import { useWorkbench, workbenchStore } from '../../../store/useWorkbench.ts';
-import type { PartStatus } from '../../../store/designer.ts';
 import { describeDesigner } from './describe.ts';
+import { removePartEdit, rerunPartEdit } from '../../../store/partEdits.ts';
 import { FAMILY_OPTIONS } from '../../../core/design/index.ts';
 import { postNotice } from '../../../store/notices.ts';
 
@@ -26,7 +26,7 @@ export function PartsSection({ onEdit, editing }: PartsSectionProps) {
   const parts = useWorkbench(selectPartStatuses);
   if (parts.length < 2) return null;
   const rerun = (i: number) => {
-    const r = workbenchStore.getState().rerunPart(i);
+    const r = workbenchStore.getState().designerEdit(rerunPartEdit(i));
     if (!r.ok) postNotice('error', `Part ${i + 1} could not be re-run: ${r.error.message}.`);
   };
   return (
@@ -92,7 +92,7 @@ export function PartsSection({ onEdit, editing }: PartsSectionProps) {
                 <button
                   type="button"
                   className="pw-small-button"
-                  onClick={() => workbenchStore.getState().removePart(p.index)}
+                  onClick={() => workbenchStore.getState().partsEdit(removePartEdit(p.index))}
                   aria-label={`Remove part ${p.index + 1}, ${name}`}
                   title="Take this part and its roots out of the cascade"
                 >
