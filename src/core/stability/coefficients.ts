@@ -1,0 +1,130 @@
+/**
+ * The stability verdict of a denominator given as coefficients (typed, pasted, or multiplied out from roots),
+ * decided for the exact rational numbers those doubles are, never for rounded roots. Two stages:
+ *
+ * 1. Certified root inclusion: the root finder's approximations get inclusion disks that hold for the exact
+ *    polynomial (roots/inclusion.ts). When every group of touching disks lies strictly inside or strictly
+ *    outside the unit circle, the count of roots inside and outside is proven.
+ * 2. Otherwise the exact Schur–Cohn recursion in integer arithmetic (schurCohn.ts), and at a step with
+ *    |k| = 1 the gcd analysis of the roots on the unit circle (unitCircle.ts).
+ */
+import type { Verdict } from '../stability.ts';
+import { findRoots } from '../roots/index.ts';
+import { inclusionDisks } from '../roots/inclusion.ts';
+import { toIntegers } from './dyadic.ts';
+import { schurCohnExact } from './schurCohn.ts';
+import { unitCircleVerdict } from './unitCircle.ts';
+
+/** The verdict for the coefficients as given, with how it was reached. */
+export interface CoefficientStability {
+  verdict: Verdict;
+  /** Poles (roots of the denominator, counted with multiplicity) strictly inside, on and outside the circle, where proven. */
+  inside: number | null;
+  onCircle: number | null;
+  outside: number | null;
+  /** A pole on the unit circle is repeated (unstable even with none outside). */
+  repeatedOnCircle: boolean;
+  /** 'inclusion': proven by certified root inclusion disks; 'exact': by exact integer arithmetic. */
+  method: 'inclusion' | 'exact';
+  /** One sentence for the user. */
+  reason: string;
+}
+
+/** Slack on |z| computed in double (hypot and the comparison), relative. */
+const MODULUS_SLACK = 4 * Number.EPSILON;
+
+function counted(inside: number, outside: number, method: 'inclusion' | 'exact'): CoefficientStability {
+  const how = method === 'exact' ? 'exact test on the coefficients' : 'certified from the coefficients';
+  const reason =
+    outside === 0
+      ? `every pole is strictly inside the unit circle (${how})`
+      : `${outside} of ${inside + outside} poles lie outside the unit circle (${how})`;
+  return {
+    verdict: outside === 0 ? 'stable' : 'unstable',
+    inside,
+    onCircle: 0,
+    outside,
+    repeatedOnCircle: false,
+    method,
+    reason,
+  };
+}
+
+/** Verdict from the certified inclusion disks, or null when a group of disks touches the circle. */
+function byInclusion(c: Float64Array): CoefficientStability | null {
+  const found = findRoots(c);
+  if (found.re.length !== c.length - 1) return null;
+  const disks = inclusionDisks(c, found.re, found.im);
+  const side = new Map<number, number>(); // component -> +1 outside, -1 inside, 0 touching
+  for (let i = 0; i < found.re.length; i++) {
+    const mod = Math.hypot(found.re[i]!, found.im[i]!);
+    const r = disks.radius[i]!;
+    const s = mod * (1 + MODULUS_SLACK) + r < 1 ? -1 : mod * (1 - MODULUS_SLACK) - r > 1 ? 1 : 0;
+    const id = disks.component[i]!;
+    const was = side.get(id);
+    side.set(id, was === undefined || was === s ? s : 0);
+  }
+  let inside = 0;
+  let outside = 0;
+  for (let i = 0; i < found.re.length; i++) {
+    const s = side.get(disks.component[i]!)!;
+    if (s === 0) return null;
+    if (s < 0) inside++;
+    else outside++;
+  }
+  return counted(inside, outside, 'inclusion');
+}
+
+/**
+ * Stable / marginal / unstable for the denominator a in powers of z^-1 (a[0] multiplies z^0; leading and
+ * trailing zeros allowed), decided for the exact values of the doubles. Throws a RangeError for non-finite
+ * or all-zero coefficients.
+ */
+export function stabilityOfCoefficients(a: ArrayLike<number>): CoefficientStability {
+  const all = Array.from(a);
+  const bad = all.findIndex((v) => !Number.isFinite(v));
+  if (bad >= 0) throw new RangeError(`a[${bad}] is ${all[bad]}; coefficients must be finite numbers`);
+  let first = 0;
+  while (first < all.length && all[first] === 0) first++;
+  if (first === all.length)
+    throw new RangeError('the denominator is all zeros; it needs at least one non-zero coefficient');
+  let last = all.length - 1;
+  while (all[last] === 0) last--;
+  const origin = all.length - 1 - last; // poles at z = 0
+  const c = Float64Array.from(all.slice(first, last + 1));
+  const n = c.length - 1;
+  if (n === 0) return counted(origin, 0, 'exact');
+  const certified = byInclusion(c);
+  if (certified) return withOrigin(certified, origin);
+  const ints = toIntegers(c).reverse(); // ascending powers
+  const count = schurCohnExact(ints);
+  if (count.kind === 'counted') return withOrigin(counted(count.inside, count.outside, 'exact'), origin);
+  const uc = unitCircleVerdict(ints);
+  if (uc.verdict === 'marginal') {
+    return {
+      verdict: 'marginal',
+      inside: uc.inside + origin,
+      onCircle: uc.onCircle,
+      outside: 0,
+      repeatedOnCircle: false,
+      method: 'exact',
+      reason: `${uc.onCircle === 1 ? 'a pole lies' : `${uc.onCircle} poles lie`} exactly on the unit circle, none repeated and none outside, so the response neither decays nor grows (exact test on the coefficients)`,
+    };
+  }
+  const repeated = uc.why === 'repeated-on-circle';
+  return {
+    verdict: 'unstable',
+    inside: null,
+    onCircle: null,
+    outside: repeated ? 0 : null,
+    repeatedOnCircle: repeated,
+    method: 'exact',
+    reason: repeated
+      ? 'a pole on the unit circle is repeated, so the response grows (exact test on the coefficients)'
+      : 'a pole lies outside the unit circle (exact test on the coefficients)',
+  };
+}
+
+function withOrigin(s: CoefficientStability, origin: number): CoefficientStability {
+  return origin === 0 ? s : { ...s, inside: s.inside === null ? null : s.inside + origin };
+}

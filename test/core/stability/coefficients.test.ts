@@ -1,0 +1,119 @@
+import { describe, it, expect } from 'vitest';
+import { stabilityOfCoefficients } from '../../../src/core/stability/coefficients.ts';
+import { schurCohnCertified, schurCohnExact } from '../../../src/core/stability/schurCohn.ts';
+import { splitDouble, toIntegers } from '../../../src/core/stability/dyadic.ts';
+import { gcd, sturmCount, divideExact } from '../../../src/core/stability/bigPoly.ts';
+
+/** Seeded uniform generator on [0, 1) (mulberry32). */
+function uniform(seed: number): () => number {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+/** Ascending integer coefficients of Π (z − r) for integer roots r (exact). */
+function fromIntegerRoots(roots: number[]): bigint[] {
+  let p: bigint[] = [1n];
+  for (const r of roots) {
+    const q = new Array<bigint>(p.length + 1).fill(0n);
+    for (let k = 0; k < p.length; k++) {
+      q[k + 1] = q[k + 1]! + p[k]!;
+      q[k] = q[k]! - BigInt(r) * p[k]!;
+    }
+    p = q;
+  }
+  return p;
+}
+
+describe('exact integers from doubles', () => {
+  it('splits a double into an odd mantissa and a power of two', () => {
+    // IEEE 754: 0.75 = 3·2^-2, 2^-1074 is the smallest subnormal
+    expect(splitDouble(0.75)).toEqual({ mantissa: 3n, exponent: -2 });
+    expect(splitDouble(-6)).toEqual({ mantissa: -3n, exponent: 1 });
+    expect(splitDouble(5e-324)).toEqual({ mantissa: 1n, exponent: -1074 });
+    expect(splitDouble(0.1)).toEqual({ mantissa: 3602879701896397n, exponent: -55 });
+  });
+  it('scales a coefficient list by one power of two', () => {
+    expect(toIntegers([1, -0.5, 0.25, 0])).toEqual([4n, -2n, 1n, 0n]);
+  });
+});
+
+describe('Schur–Cohn counts', () => {
+  it('counts roots of integer polynomials with known roots exactly', () => {
+    // Π (z − r) for integer roots: |r| ≥ 2 lies outside, r = 0 inside (algebra, no reference needed)
+    const r = schurCohnExact(fromIntegerRoots([0, 2, -3, 0, 5]));
+    expect(r).toEqual({ kind: 'counted', inside: 2, outside: 3 });
+  });
+  it('fraction-free rows divide exactly: random polynomials agree with the certified run', () => {
+    const u = uniform(11);
+    for (let t = 0; t < 200; t++) {
+      const n = 2 + Math.floor(u() * 14);
+      const p = Array.from({ length: n + 1 }, () => BigInt(Math.floor(u() * 199) - 99));
+      if (p[n] === 0n) p[n] = 1n;
+      const exact = schurCohnExact(p);
+      const certified = schurCohnCertified(p, 4096);
+      if (certified.kind === 'counted') expect(exact).toEqual(certified);
+    }
+  });
+  it('stops at |k| = 1 exactly, never at a nearby value', () => {
+    // z² + 0.3z − 1: |k| = 1 with no root on the circle (a removable singularity of the recursion)
+    expect(schurCohnExact(toIntegers([-1, 0.3, 1])).kind).toBe('singular');
+    expect(schurCohnExact(toIntegers([-1 + 2 ** -52, 0.3, 1])).kind).toBe('counted');
+  });
+});
+
+describe('exact polynomial helpers', () => {
+  it('gcd and exact division of integer polynomials', () => {
+    const a = fromIntegerRoots([1, 2, 3]);
+    const b = fromIntegerRoots([2, 3, 7]);
+    expect(gcd(a, b)).toEqual(fromIntegerRoots([2, 3]));
+    expect(divideExact(a, fromIntegerRoots([1]))).toEqual(fromIntegerRoots([2, 3]));
+  });
+  it('Sturm counts distinct real roots in (lo, hi]', () => {
+    expect(sturmCount(fromIntegerRoots([-1, 0, 0, 1, 3]), -2n, 2n)).toBe(3);
+    expect(sturmCount([1n, 0n, 1n], -2n, 2n)).toBe(0); // x² + 1
+  });
+});
+
+describe('stabilityOfCoefficients', () => {
+  it('decides the pole pair the fixed-distance merge hid: 0.9999993 and 1.0000001', () => {
+    // 1 − 1.9999994 z^-1 + 0.99999939999993 z^-2 = (1 − 0.9999993 z^-1)(1 − 1.0000001 z^-1) to within the
+    // doubles' rounding, which cannot move a root by 1e-7 (common practice: simple roots move by ~ε·κ)
+    const s = stabilityOfCoefficients([1, -1.9999994, 0.99999939999993]);
+    expect(s).toMatchObject({ verdict: 'unstable', inside: 1, outside: 1 });
+  });
+  it('finds roots exactly on the circle: integrator, oscillator, z³ − 1, comb of 200', () => {
+    expect(stabilityOfCoefficients([1, -1])).toMatchObject({ verdict: 'marginal', onCircle: 1 });
+    // a2 = 1 exactly: the complex pair's product of moduli is 1, so both lie on the circle (algebra)
+    expect(stabilityOfCoefficients([1, -2 * Math.cos(0.3), 1])).toMatchObject({
+      verdict: 'marginal',
+      onCircle: 2,
+    });
+    expect(stabilityOfCoefficients([1, 0, 0, -1])).toMatchObject({ verdict: 'marginal', onCircle: 3 });
+    const comb = [1, ...new Array<number>(199).fill(0), -1];
+    expect(stabilityOfCoefficients(comb)).toMatchObject({ verdict: 'marginal', onCircle: 200 });
+  });
+  it('calls repeated poles on the circle and mirrored pairs unstable', () => {
+    expect(stabilityOfCoefficients([1, -2, 1])).toMatchObject({
+      verdict: 'unstable',
+      repeatedOnCircle: true,
+    });
+    expect(stabilityOfCoefficients([1, 0, 2, 0, 1]).verdict).toBe('unstable'); // (z² + 1)²
+    expect(stabilityOfCoefficients([1, -2.5, 1]).verdict).toBe('unstable'); // poles 2 and 0.5
+    expect(stabilityOfCoefficients([1, -3.5, 3.5, -1]).verdict).toBe('unstable'); // 2, 0.5 and 1
+    expect(stabilityOfCoefficients([1, 0.3, -1]).verdict).toBe('unstable'); // |k| = 1, roots −1.16, 0.86
+  });
+  it('counts poles at the origin as inside and ignores leading zeros', () => {
+    expect(stabilityOfCoefficients([0, 1, -0.5, 0, 0])).toMatchObject({ verdict: 'stable', inside: 3 });
+    expect(stabilityOfCoefficients([2])).toMatchObject({ verdict: 'stable', inside: 0 });
+  });
+  it('rejects non-finite and all-zero denominators', () => {
+    expect(() => stabilityOfCoefficients([1, NaN])).toThrow(/a\[1\]/);
+    expect(() => stabilityOfCoefficients([0, 0])).toThrow(/all zeros/);
+  });
+});
