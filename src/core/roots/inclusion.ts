@@ -9,6 +9,8 @@
  * polynomial the doubles c stand for, not for a rounded one.
  */
 import { compensatedEval } from './compensated.ts';
+import { exactValues, type ExactPoly } from './exactEval.ts';
+import { bitLength } from '../stability/bigMagnitude.ts';
 
 /** Disks and their connected components. */
 export interface InclusionDisks {
@@ -48,25 +50,57 @@ export function inclusionDisks(
   re: ArrayLike<number>,
   im: ArrayLike<number>,
 ): InclusionDisks {
+  const v = new Float64Array(4);
+  const log2Value = Float64Array.from({ length: re.length }, (_, i) =>
+    Math.log2(valueBound(c, re[i]!, im[i]!, v)),
+  );
+  return disksFrom(re, im, log2Value, Math.log2(Math.abs(c[0]!)));
+}
+
+/**
+ * Inclusion disks from exact values of p at the approximations (roots/exactEval.ts): |p(z_i)| is then known
+ * to one rounding, so the disks are as small as the approximations are good.
+ */
+export function exactInclusionDisks(
+  p: ExactPoly,
+  re: ArrayLike<number>,
+  im: ArrayLike<number>,
+): InclusionDisks {
+  const log2Value = Float64Array.from({ length: re.length }, (_, i) => {
+    const v = exactValues(p, re[i]!, im[i]!, false);
+    // Two roundings of the parts and one of the modulus, with margin.
+    return 0.5 * Math.log2(v.pr * v.pr + v.pi * v.pi) + v.scale + 64 * EPS;
+  });
+  const lead = p[0]!;
+  const log2Lead =
+    Math.log2(Math.abs(Number(lead >> BigInt(Math.max(0, bitLength(lead) - 60))))) +
+    Math.max(0, bitLength(lead) - 60);
+  return disksFrom(re, im, log2Value, log2Lead - 64 * EPS);
+}
+
+/** Disks |z − z_i| ≤ n·|p(z_i)| / (|c_0| Π|z_i − z_j|) from upper bounds on log2|p(z_i)| and a lower one on log2|c_0|. */
+function disksFrom(
+  re: ArrayLike<number>,
+  im: ArrayLike<number>,
+  log2Value: Float64Array,
+  log2Lead: number,
+): InclusionDisks {
   const n = re.length;
   const radius = new Float64Array(n);
-  const v = new Float64Array(4);
-  const lead = Math.log(Math.abs(c[0]!));
   // Relative error of the product of n − 1 differences computed in double, and of the logarithms.
   const productSlack = 1 + gamma(4 * n + 8);
   for (let i = 0; i < n; i++) {
-    const bound = valueBound(c, re[i]!, im[i]!, v);
-    if (bound === 0) continue;
-    let logProduct = lead;
+    if (log2Value[i] === -Infinity) continue;
+    let log2Product = log2Lead;
     let coincident = false;
     for (let j = 0; j < n; j++) {
       if (j === i) continue;
       const d = Math.hypot(re[i]! - re[j]!, im[i]! - im[j]!);
       if (d === 0) coincident = true;
-      logProduct += Math.log(d);
+      log2Product += Math.log2(d);
     }
-    const r = coincident ? Infinity : n * Math.exp(Math.log(bound) - logProduct) * productSlack * (1 + 1e-12);
-    radius[i] = Number.isFinite(r) ? r : Infinity;
+    const r = coincident ? Infinity : n * 2 ** (log2Value[i]! - log2Product) * productSlack * (1 + 1e-12);
+    radius[i] = Number.isNaN(r) ? Infinity : r;
   }
   const component = components(re, im, radius);
   const spread = new Float64Array(n);

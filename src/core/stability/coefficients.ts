@@ -6,11 +6,16 @@
  *    polynomial (roots/inclusion.ts). When every group of touching disks lies strictly inside or strictly
  *    outside the unit circle, the count of roots inside and outside is proven.
  * 2. Otherwise the exact Schur–Cohn recursion in integer arithmetic (schurCohn.ts), and at a step with
- *    |k| = 1 the gcd analysis of the roots on the unit circle (unitCircle.ts).
+ *    |k| = 1 the gcd analysis of the roots on the unit circle (unitCircle.ts). The exact recursion's integers
+ *    grow with the degree, so past a work limit the roots are first refined with exact evaluation
+ *    (roots/exactRefine.ts) and the disks formed again from exact values of p; only if a group of them still
+ *    touches the circle does the exact recursion run to the end.
  */
 import type { Verdict } from '../stability.ts';
 import { findRoots } from '../roots/index.ts';
-import { inclusionDisks } from '../roots/inclusion.ts';
+import { exactInclusionDisks, inclusionDisks, type InclusionDisks } from '../roots/inclusion.ts';
+import { exactPoly } from '../roots/exactEval.ts';
+import { refineExactly } from '../roots/exactRefine.ts';
 import { toIntegers } from './dyadic.ts';
 import { schurCohnExact } from './schurCohn.ts';
 import { unitCircleVerdict } from './unitCircle.ts';
@@ -50,14 +55,25 @@ function counted(inside: number, outside: number, method: 'inclusion' | 'exact')
   };
 }
 
-/** Verdict from the certified inclusion disks, or null when a group of disks touches the circle. */
-function byInclusion(c: Float64Array): CoefficientStability | null {
-  const found = findRoots(c);
-  if (found.re.length !== c.length - 1) return null;
-  const disks = inclusionDisks(c, found.re, found.im);
+/**
+ * Work limit of the first exact Schur–Cohn attempt (Σ row length × bits, some tens of milliseconds); past it the roots are
+ * refined with exact evaluation first, which certifies ill-conditioned high-degree cases far sooner.
+ */
+export const EXACT_FIRST_WORK = 1e7;
+
+/** Sweeps allowed to the exact-evaluation refinement. */
+const EXACT_REFINE_SWEEPS = 40;
+
+/** Verdict from inclusion disks around (re, im), or null when a group of disks touches the circle. */
+function byDisks(
+  re: Float64Array,
+  im: Float64Array,
+  disks: InclusionDisks,
+  method: 'inclusion' | 'exact',
+): CoefficientStability | null {
   const side = new Map<number, number>(); // component -> +1 outside, -1 inside, 0 touching
-  for (let i = 0; i < found.re.length; i++) {
-    const mod = Math.hypot(found.re[i]!, found.im[i]!);
+  for (let i = 0; i < re.length; i++) {
+    const mod = Math.hypot(re[i]!, im[i]!);
     const r = disks.radius[i]!;
     const s = mod * (1 + MODULUS_SLACK) + r < 1 ? -1 : mod * (1 - MODULUS_SLACK) - r > 1 ? 1 : 0;
     const id = disks.component[i]!;
@@ -66,13 +82,13 @@ function byInclusion(c: Float64Array): CoefficientStability | null {
   }
   let inside = 0;
   let outside = 0;
-  for (let i = 0; i < found.re.length; i++) {
+  for (let i = 0; i < re.length; i++) {
     const s = side.get(disks.component[i]!)!;
     if (s === 0) return null;
     if (s < 0) inside++;
     else outside++;
   }
-  return counted(inside, outside, 'inclusion');
+  return counted(inside, outside, method);
 }
 
 /**
@@ -94,10 +110,20 @@ export function stabilityOfCoefficients(a: ArrayLike<number>): CoefficientStabil
   const c = Float64Array.from(all.slice(first, last + 1));
   const n = c.length - 1;
   if (n === 0) return counted(origin, 0, 'exact');
-  const certified = byInclusion(c);
+  const found = findRoots(c);
+  const re = Float64Array.from(found.re);
+  const im = Float64Array.from(found.im);
+  const certified = re.length === n ? byDisks(re, im, inclusionDisks(c, re, im), 'inclusion') : null;
   if (certified) return withOrigin(certified, origin);
   const ints = toIntegers(c).reverse(); // ascending powers
-  const count = schurCohnExact(ints);
+  let count = schurCohnExact(ints, EXACT_FIRST_WORK);
+  if (count.kind === 'stopped' && re.length === n) {
+    const p = exactPoly(c);
+    refineExactly(p, re, im, EXACT_REFINE_SWEEPS);
+    const refined = byDisks(re, im, exactInclusionDisks(p, re, im), 'inclusion');
+    if (refined) return withOrigin(refined, origin);
+  }
+  if (count.kind === 'stopped') count = schurCohnExact(ints);
   if (count.kind === 'counted') return withOrigin(counted(count.inside, count.outside, 'exact'), origin);
   const uc = unitCircleVerdict(ints);
   if (uc.verdict === 'marginal') {

@@ -23,7 +23,9 @@ export type SchurCohnCount =
   /** An exact step with |k_i| = 1: a root on the circle, a mirrored pair, or a removable singularity. */
   | { kind: 'singular'; degree: number }
   /** The certified arithmetic could not tell |k_i| from 1 at this precision. */
-  | { kind: 'undecided'; degree: number };
+  | { kind: 'undecided'; degree: number }
+  /** The exact run stopped at its work limit. */
+  | { kind: 'stopped'; degree: number };
 
 const abs = (x: bigint) => (x < 0n ? -x : x);
 
@@ -91,8 +93,12 @@ export function schurCohnCertified(ascending: readonly bigint[], precision: numb
   return { kind: 'counted', inside, outside: n - inside };
 }
 
-/** The recursion in exact integer arithmetic (fraction-free), stopping at the first step with |k_i| = 1. */
-export function schurCohnExact(ascending: readonly bigint[]): SchurCohnCount {
+/**
+ * The recursion in exact integer arithmetic (fraction-free), stopping at the first step with |k_i| = 1, or
+ * once the work (Σ row length × bits of its entries, a proxy for BigInt cost) passes maxWork.
+ */
+export function schurCohnExact(ascending: readonly bigint[], maxWork = Infinity): SchurCohnCount {
+  let work = 0;
   let row = ascending.slice();
   const n = row.length - 1;
   const shrinks = new Array<boolean>(n);
@@ -105,6 +111,8 @@ export function schurCohnExact(ascending: readonly bigint[]): SchurCohnCount {
     const gap = abs(l) - abs(c);
     if (gap === 0n) return { kind: 'singular', degree: d };
     shrinks[d - 1] = gap > 0n;
+    work += d * bitLength(l);
+    if (work > maxWork) return { kind: 'stopped', degree: d };
     const divisor = steps >= 2 ? leadBefore : 1n;
     const next = new Array<bigint>(d);
     for (let j = 0; j < d; j++) next[j] = l * row[j + 1]! - c * row[d - 1 - j]!;
