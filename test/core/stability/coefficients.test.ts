@@ -1,5 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import { stabilityOfCoefficients } from '../../../src/core/stability/coefficients.ts';
+import { stabilityOfTyped } from '../../../src/core/stability.ts';
 import { schurCohnCertified, schurCohnExact } from '../../../src/core/stability/schurCohn.ts';
 import { splitDouble, toIntegers } from '../../../src/core/stability/dyadic.ts';
 import { gcd, sturmCount, divideExact } from '../../../src/core/stability/bigPoly.ts';
@@ -115,5 +116,23 @@ describe('stabilityOfCoefficients', () => {
   it('rejects non-finite and all-zero denominators', () => {
     expect(() => stabilityOfCoefficients([1, NaN])).toThrow(/a\[1\]/);
     expect(() => stabilityOfCoefficients([0, 0])).toThrow(/all zeros/);
+  });
+});
+
+describe('stabilityOfTyped', () => {
+  it('lets the exact coefficient verdict overrule poles that cannot be resolved', () => {
+    // poles given as a double pole at 1 - 1e-6 (stable by the roots) but typed as (1 - z^-1)²: the typed
+    // denominator has a double pole exactly on the circle (algebra), which grows
+    const zpk = { zeros: [], poles: [{ re: 1 - 1e-6, im: 0, multiplicity: 2 }], gain: 1 };
+    const s = stabilityOfTyped(zpk, [1, -2, 1]);
+    expect(s).toMatchObject({ verdict: 'unstable', decidedBy: 'coefficients', rootsSuggested: 'stable' });
+    expect(s.reason).toMatch(/repeated/);
+  });
+  it('confirms an agreeing verdict and says it was checked exactly', () => {
+    const zpk = { zeros: [], poles: [{ re: 0.5, im: 0, multiplicity: 1 }], gain: 1 };
+    const s = stabilityOfTyped(zpk, [1, -0.5]);
+    expect(s).toMatchObject({ verdict: 'stable', decidedBy: 'coefficients' });
+    expect(s.rootsSuggested).toBeUndefined();
+    expect(s.reason).toMatch(/confirmed exactly/);
   });
 });
