@@ -65,3 +65,68 @@ describe('analyze on typed coefficients', () => {
     expect(text.stdout).toMatch(/sections or the roots themselves are the safe form/);
   });
 });
+
+describe('simulate on typed coefficients', () => {
+  it('runs b and a as typed, so the unstable typed elliptic low-pass grows (mpmath: pole radius 1.00225)', async () => {
+    const d = named('ellip(6, 0.5, 60, 20, fs=48000)');
+    const args = ['--b', d.b.coefficients.join(','), '--a', d.a.coefficients.join(',')];
+    const r = await runCli([
+      'simulate',
+      ...args,
+      '--fs',
+      '48000',
+      '--input',
+      'step',
+      '--samples',
+      '20000',
+      '--json',
+    ]);
+    expect(r.stderr).toMatch(/exactly as typed/);
+    const y = JSON.parse(r.stdout).output as number[];
+    // a pole pair at radius 1.00225 grows by 1.00225^20000 ≈ 3e19 over the run (mpmath radius)
+    expect(Math.abs(y[y.length - 1]!)).toBeGreaterThan(1e10);
+  });
+});
+
+describe('design: multiplied-out coefficients that are not the design', () => {
+  it('warns beside the 12th-order elliptic low-pass at 10 Hz of 1 kHz, whose b, a are unstable', async () => {
+    // scipy.signal.ellip(12, 0.5, 60, 10, fs=1000) multiplied out: unstable by mpmath at 60 digits
+    expect(named('ellip(12, 0.5, 60, 10, fs=1000)').a.verdict).toBe('unstable');
+    const args = [
+      'design',
+      'lowpass',
+      '--family',
+      'elliptic',
+      '--order',
+      '12',
+      '--edge',
+      '10',
+      '--fs',
+      '1000',
+    ];
+    const spec = [...args, '--ripple', '0.5', '--attenuation', '60'];
+    const out = JSON.parse((await runCli([...spec, '--json'])).stdout);
+    expect(out.stability.verdict).toBe('stable');
+    expect(out.coefficientWarning.coefficientVerdict).toBe('unstable');
+    expect(out.coefficientWarning.maxResponseErrorDb).toBeGreaterThan(0.1);
+    const text = (await runCli(spec)).stdout;
+    expect(text).toMatch(/warning: the multiplied-out coefficients b, a are unstable/);
+    expect(text).toMatch(/second-order sections/);
+  });
+  it('says nothing for a 4th-order Butterworth low-pass at 100 Hz of 1 kHz', async () => {
+    const r = await runCli([
+      'design',
+      'lowpass',
+      '--family',
+      'butterworth',
+      '--order',
+      '4',
+      '--edge',
+      '100',
+      '--fs',
+      '1000',
+      '--json',
+    ]);
+    expect(JSON.parse(r.stdout).coefficientWarning).toBeUndefined();
+  });
+});

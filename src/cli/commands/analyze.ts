@@ -9,6 +9,7 @@ import {
   type SystemDiagnostics,
 } from '../../core/system/diagnostics.ts';
 import { rootReadouts } from '../../core/readouts.ts';
+import { checkExpandedCoefficients } from '../../core/system/expandedCheck.ts';
 import { parseArgs } from '../args.ts';
 import { DESIGN_FLAGS, readDesign, type CliDesign } from '../designInput.ts';
 import { toJson } from '../json.ts';
@@ -26,6 +27,8 @@ export function normalisedTf(d: CliDesign): TransferFunction {
 export function analysis(d: CliDesign) {
   const stability = d.typed ? stabilityOfTyped(d.zpk, d.typed.a) : stabilityOfZpk(d.zpk);
   const diagnostics = d.typed ? typedDiagnostics(d.typed) : exactDiagnostics(d.zpk);
+  // Roots placed or designed: do their own multiplied-out b, a still describe them?
+  const expanded = d.typed || d.zpk.poles.length === 0 ? null : checkExpandedCoefficients(d.zpk);
   const { b, a } = normalisedTf(d);
   return {
     sampleRate: d.sampleRate,
@@ -45,6 +48,14 @@ export function analysis(d: CliDesign) {
     },
     readouts: rootReadouts(d.zpk, d.sampleRate),
     diagnostics,
+    ...(expanded?.warn && {
+      coefficientWarning: {
+        message: expanded.message,
+        coefficientVerdict: expanded.coefficientVerdict,
+        designVerdict: expanded.designVerdict,
+        maxResponseErrorDb: expanded.maxResponseErrorDb,
+      },
+    }),
   };
 }
 
@@ -103,6 +114,7 @@ export function runAnalyze(argv: string[], io: CliIo): number {
   lines.push(`stability: ${out.stability.verdict.toUpperCase()} — ${out.stability.reason}`);
   lines.push(`largest pole radius: ${fmt(out.stability.maxPoleRadius)}`);
   lines.push(...diagnosticLines(out.diagnostics));
+  if (out.coefficientWarning) lines.push(`warning: ${out.coefficientWarning.message}.`);
   lines.push(...systemLines(out));
   lines.push('roots:');
   for (const r of out.readouts) {

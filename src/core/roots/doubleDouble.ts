@@ -89,6 +89,11 @@ export function ddDiv(ah: number, al: number, bh: number, bl: number, out: Float
   out[1] = q2 - (s - q1);
 }
 
+let bufHi = new Float64Array(64);
+let bufLo = new Float64Array(64);
+const tmpT = new Float64Array(2);
+const tmpQ = new Float64Array(2);
+
 /**
  * The remainder of c (double, descending) divided by f (double-double, descending, f[0] ≠ 0), as the
  * largest remainder coefficient relative to max|c_k|. Division runs from the top, so the remainder is exact
@@ -99,10 +104,18 @@ export function remainderSize(c: ArrayLike<number>, f: DdPoly): number {
   const n = c.length - 1;
   const m = f.hi.length - 1;
   if (m > n) return 0;
-  const hi = Float64Array.from(c);
-  const lo = new Float64Array(c.length);
-  const t = new Float64Array(2);
-  const q = new Float64Array(2);
+  if (bufHi.length < c.length) {
+    bufHi = new Float64Array(2 * c.length);
+    bufLo = new Float64Array(2 * c.length);
+  }
+  const hi = bufHi;
+  const lo = bufLo;
+  for (let k = 0; k <= n; k++) {
+    hi[k] = c[k]!;
+    lo[k] = 0;
+  }
+  const t = tmpT;
+  const q = tmpQ;
   for (let k = 0; k + m <= n; k++) {
     ddDiv(hi[k]!, lo[k]!, f.hi[0]!, f.lo[0]!, q);
     for (let j = 0; j <= m; j++) {

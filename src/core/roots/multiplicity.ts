@@ -35,6 +35,9 @@ export const CLUSTER_ISOLATION = 3;
 export const PREFILTER_RATIO = 16;
 export const PREFILTER_FLOOR = 16;
 
+/** When merging every candidate fails the set test, candidates are tried one by one only up to this many. */
+export const SEPARATE_CHECKS = 4;
+
 /** A merged set may have at most this times the separate set's backward error (plus MERGE_FLOOR·ε). */
 export const MERGE_RATIO = 2;
 
@@ -66,6 +69,7 @@ export function findMultipleRoots(
   const roots: Root[] = [];
   const neighbours = closePairs(re, im, 2 * CLUSTER_RADII[0]!);
   const derivs: Float64Array[] = [c];
+  const reversedC = c.slice().reverse();
   const failedSize = new Int32Array(n);
   for (const rho of CLUSTER_RADII) {
     for (let i = 0; i < n; i++) {
@@ -83,7 +87,7 @@ export function findMultipleRoots(
       const m = members.length;
       if (m < 2 || m === failedSize[i] || !isolated(re, im, members, neighbours[i]!, cx, cy)) continue;
       if (real && members.some((k) => mate[k]! >= 0 && !members.includes(mate[k]!))) continue;
-      const centre = verifiedCentre(c, derivs, re, im, members, real, rho * mod);
+      const centre = verifiedCentre(c, reversedC, derivs, re, im, members, real, rho * mod);
       if (!centre) {
         failedSize[i] = m;
         continue;
@@ -132,7 +136,10 @@ function keepReproducing(
   const limit = MERGE_RATIO * setBackwardError(c, re, im) + MERGE_FLOOR * Number.EPSILON;
   let accepted = new Set(ids);
   if (!(withMerged(accepted) <= limit)) {
-    accepted = new Set(ids.filter((id) => withMerged(new Set([id])) <= limit));
+    // One by one only for a few candidates: each check multiplies the whole set out.
+    accepted = new Set(
+      ids.length <= SEPARATE_CHECKS ? ids.filter((id) => withMerged(new Set([id])) <= limit) : [],
+    );
     if (accepted.size > 1 && !(withMerged(accepted) <= limit)) accepted = new Set();
   }
   const renumber = new Map<number, number>();
@@ -204,6 +211,7 @@ function closePairs(re: Float64Array, im: Float64Array, r: number): number[][] {
 /** Refined centre [re, im] of a cluster if it passes as one m-fold root, else undefined. */
 function verifiedCentre(
   c: Float64Array,
+  reversedC: Float64Array,
   derivs: Float64Array[],
   re: Float64Array,
   im: Float64Array,
@@ -212,6 +220,7 @@ function verifiedCentre(
   radius: number,
 ): [number, number] | undefined {
   const m = members.length;
+  if (m > c.length - 1) return undefined;
   let x0 = 0;
   let y0 = 0;
   for (const k of members) {
@@ -220,7 +229,18 @@ function verifiedCentre(
   }
   x0 /= m;
   y0 = real ? 0 : y0 / m;
-  if (m > c.length - 1) return undefined;
+  const separate: DdPoly[] = [];
+  for (const k of members) if (im[k]! >= 0) separate.push(factor(re[k]!, im[k]!));
+  const outside = Math.hypot(x0, y0) > 1;
+  const size = (f: DdPoly) => (outside ? remainderSize(reversedC, reversedDd(f)) : remainderSize(c, f));
+  const limit = PREFILTER_RATIO * size(product(separate)) + PREFILTER_FLOOR * Number.EPSILON;
+  const merged = (x: number, y: number) => size(product(new Array<DdPoly>(m).fill(factor(x, y))));
+  // The polished members' mean is accurate to about ε for a rounding-split multiple root (the split is
+  // symmetric to first order); an exact multiple root's approximations converge only linearly, and there
+  // Newton on p^(m−1), where the root is simple, finds the centre. The one leaving the smaller remainder
+  // stands.
+  const atMean = merged(x0, y0);
+  if (atMean === 0) return [x0, y0];
   while (derivs.length <= m) derivs.push(derivative(derivs[derivs.length - 1]!));
   const f = derivs[m - 1]!;
   const absF = f.map(Math.abs);
@@ -239,27 +259,10 @@ function verifiedCentre(
     if (Math.hypot(dx, dy) <= 2 * Number.EPSILON * Math.hypot(x, y)) break;
   }
   if (real) y = 0;
-  const separate: DdPoly[] = [];
-  for (const k of members) if (im[k]! >= 0) separate.push(factor(re[k]!, im[k]!));
-  const outside = Math.hypot(x0, y0) > 1;
-  const size = (f: DdPoly) => (outside ? remainderSize(reversed(c), reversedDd(f)) : remainderSize(c, f));
-  const before = size(product(separate));
-  // The polished members' mean is accurate to about ε for a split multiple root (the split is symmetric
-  // to first order); Newton on p^(m−1) in double can be worse. The candidate leaving the smaller remainder
-  // stands.
-  const candidates: [number, number][] = [[x0, y0]];
-  if (Math.hypot(x - x0, y - y0) <= radius) candidates.push([x, y]);
-  let best: [number, number] | undefined;
-  let bestSize = Infinity;
-  for (const [cx, cy] of candidates) {
-    const after = size(product(new Array<DdPoly>(m).fill(factor(cx, cy))));
-    if (after < bestSize) [best, bestSize] = [[cx, cy], after];
-  }
-  return bestSize <= PREFILTER_RATIO * before + PREFILTER_FLOOR * Number.EPSILON ? best : undefined;
-}
-
-function reversed(c: Float64Array): Float64Array {
-  return c.slice().reverse();
+  const atNewton = Math.hypot(x - x0, y - y0) <= radius ? merged(x, y) : Infinity;
+  const [best, size0]: [[number, number], number] =
+    atNewton < atMean ? [[x, y], atNewton] : [[x0, y0], atMean];
+  return size0 <= limit ? best : undefined;
 }
 
 function reversedDd(f: DdPoly): DdPoly {

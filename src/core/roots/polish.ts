@@ -11,11 +11,11 @@
  * compensated residuals.
  */
 import { compensatedEval, derivativeDd } from './compensated.ts';
-import { relativeResidual } from './horner.ts';
+import { logDerivative, relativeResidual } from './horner.ts';
 import { freezeLevel } from './aberth.ts';
 
 /** Polish a root when its condition number times ε (its forward-error estimate, relative) exceeds this. */
-export const POLISH_FORWARD_ERROR = 1e-15;
+export const POLISH_FORWARD_ERROR = 1e-14;
 
 /** Compensated sweeps at most (a multiple root's approximations close in linearly, so clusters need many). */
 export const POLISH_SWEEPS = 60;
@@ -24,7 +24,13 @@ export const POLISH_SWEEPS = 60;
 export const POLISH_GUARD = 64;
 
 /** A root stops once its compensated residual has not improved for this many sweeps. */
-export const POLISH_STALL_SWEEPS = 3;
+export const POLISH_STALL_SWEEPS = 2;
+
+/** A stalled root counts as settled once its last step is below this fraction of its nearest-neighbour distance. */
+const SETTLED = 1e-6;
+
+/** The plain p' is used while its rounding bound is below this fraction of |p'|. */
+const PLAIN_DERIVATIVE_TRUST = 1e-3;
 
 /**
  * Compensated p'/p and relative residual |p(z)| / Σ|c_k||z|^k at z = x + iy, written to out = [Re, Im, res].
@@ -53,13 +59,25 @@ class CompensatedEvaluator {
     const ux = inside ? x : x / mod2;
     const uy = inside ? y : -y / mod2;
     const coeffs = inside ? this.c : this.rev;
-    const deriv = inside ? this.d : this.dRev;
     const abs = inside ? this.absC : this.absRev;
+    // Compensated p with plain p'; p' is recomputed from double-double coefficients only when its plain
+    // rounding bound (2nε Σ k|c_k||z|^(k−1)) is not small against it, as inside a cluster.
     compensatedEval(coeffs, ux, uy, this.v);
-    compensatedEval(deriv.hi, ux, uy, this.w, deriv.lo);
     const mod = Math.sqrt(ux * ux + uy * uy);
     let b = 0;
-    for (let k = 0; k <= n; k++) b = b * mod + abs[k]!;
+    let bd = 0;
+    for (let k = 0; k <= n; k++) {
+      bd = bd * mod + b;
+      b = b * mod + abs[k]!;
+    }
+    if (4 * n * Number.EPSILON * bd > PLAIN_DERIVATIVE_TRUST * Math.hypot(this.v[2]!, this.v[3]!)) {
+      const deriv = inside ? this.d : this.dRev;
+      compensatedEval(deriv.hi, ux, uy, this.w, deriv.lo);
+      this.v[2] = this.w[0]!;
+      this.v[3] = this.w[1]!;
+    }
+    this.w[0] = this.v[2]!;
+    this.w[1] = this.v[3]!;
     const pr = this.v[0]!;
     const pi = this.v[1]!;
     const pd = pr * pr + pi * pi;
@@ -80,34 +98,46 @@ class CompensatedEvaluator {
 }
 
 /**
- * Polishes the badly conditioned approximations in zr/zi (all roots of descending c, conjugates listed) in
- * place and leaves every complex root with its exact mirror; returns the sweeps used.
+ * Polishes the badly conditioned approximations in zr/zi (all roots of descending c, conjugates listed,
+ * exactly symmetric on entry) in place and leaves every complex root with its exact mirror; returns the
+ * sweeps used. A complex root is polished once and its mate mirrors it, until the pair comes so close to
+ * the real axis that it may really be two real roots: then both members go on independently. Real
+ * approximations are polished independently from the start (see unsettleRealRoots).
  */
 export function polishIllConditioned(c: Float64Array, zr: Float64Array, zi: Float64Array): number {
   const n = zr.length;
-  const ev = new CompensatedEvaluator(c);
-  const g = new Float64Array(3);
+  const mate = mates(zr, zi);
+  const absC = c.map(Math.abs);
+  const h = new Float64Array(3);
   const active: number[] = [];
   for (let i = 0; i < n; i++) {
-    // κ = Σ|c_k||z|^k / (|z||p'(z)|) = 1 / (|z| |p'/p| residual), Infinity where p' vanishes.
-    ev.logDerivative(zr[i]!, zi[i]!, g);
-    const kappa = 1 / (Math.hypot(zr[i]!, zi[i]!) * Math.hypot(g[0]!, g[1]!) * g[2]!);
+    if (zi[i]! < 0) continue;
+    // κ = Σ|c_k||z|^k / (|z||p'(z)|) = 1 / (|z| |p'/p| residual), NaN (so polished) where p is exactly 0.
+    logDerivative(c, absC, zr[i]!, zi[i]!, h);
+    const kappa = 1 / (Math.hypot(zr[i]!, zi[i]!) * Math.hypot(h[0]!, h[1]!) * h[2]!);
     if (!(kappa * Number.EPSILON <= POLISH_FORWARD_ERROR)) active.push(i);
   }
   if (active.length === 0) return 0;
+  const ev = new CompensatedEvaluator(c);
+  const g = new Float64Array(3);
   const startR = Float64Array.from(zr);
   const startI = Float64Array.from(zi);
-  const plainBefore = active.map((i) => relativeResidual(c, zr[i]!, zi[i]!));
-  unsettleRealRoots(zr, zi, active);
-  const best = new Map<number, number>();
-  const stale = new Map<number, number>();
-  for (const i of active) {
-    ev.logDerivative(zr[i]!, zi[i]!, g);
-    best.set(i, g[2]!);
-    stale.set(i, 0);
-  }
+  const touched = active.flatMap((i) => (mate[i]! >= 0 ? [i, mate[i]!] : [i]));
+  const plainBefore = touched.map((i) => relativeResidual(c, zr[i]!, zi[i]!));
+  // free[i]: i moves on its own (real approximations, released pairs); otherwise i is the upper member of
+  // a pair whose mate mirrors it.
+  const free = new Uint8Array(n);
+  for (const i of active) if (zi[i] === 0) free[i] = 1;
+  unsettleRealRoots(
+    zr,
+    zi,
+    active.filter((i) => free[i]),
+  );
+  const best = new Float64Array(n).fill(Infinity);
+  const stale = new Int32Array(n);
   // Residual level (relative) below which compensated evaluation is noise: γ_{4n+2}², with margin.
   const noise = 64 * ((4 * n + 2) * Number.EPSILON) ** 2;
+  const lastStep = new Float64Array(n).fill(Infinity);
   let sweeps = 0;
   let list = active;
   while (list.length > 0 && sweeps < POLISH_SWEEPS) {
@@ -117,52 +147,91 @@ export function polishIllConditioned(c: Float64Array, zr: Float64Array, zi: Floa
       const x = zr[i]!;
       const y = zi[i]!;
       ev.logDerivative(x, y, g);
-      if (g[2] === 0) continue; // an exact root
+      const res = g[2]!;
+      if (res === 0) continue; // an exact root
+      if (res < best[i]!) {
+        best[i] = res;
+        stale[i] = 0;
+      } else stale[i]!++;
       // p'/p − Σ_{j≠i} 1/(z_i − z_j)
       let ar = g[0]!;
       let ai = g[1]!;
+      let nearest = Infinity;
       for (let j = 0; j < n; j++) {
         if (j === i) continue;
         const ur = x - zr[j]!;
         const ui = y - zi[j]!;
-        const inv = 1 / (ur * ur + ui * ui);
+        const d2 = ur * ur + ui * ui;
+        const inv = 1 / d2;
         ar -= ur * inv;
         ai += ui * inv;
+        if (d2 < nearest) nearest = d2;
       }
+      // A root whose residual has stopped falling is done once its last step was tiny against the distance to
+      // its nearest neighbour (it sits at its root, moving in the rounding noise); a root still travelling
+      // through a cluster, whose residual need not fall every sweep, goes on.
+      if (stale[i]! >= POLISH_STALL_SWEEPS && (res <= noise || lastStep[i]! < SETTLED * Math.sqrt(nearest)))
+        continue;
       const ad = ar * ar + ai * ai;
       const stepR = ar / ad;
       const stepI = -ai / ad;
       if (!Number.isFinite(stepR) || !Number.isFinite(stepI)) continue;
+      const step = Math.hypot(stepR, stepI);
       zr[i] = x - stepR;
       zi[i] = y - stepI;
-      ev.logDerivative(zr[i]!, zi[i]!, g);
-      const res = g[2]!;
-      if (res < best.get(i)!) {
-        best.set(i, res);
-        stale.set(i, 0);
-      } else stale.set(i, stale.get(i)! + 1);
-      const step = Math.hypot(stepR, stepI);
-      // Stalling only ends the polish once the residual is at the compensated evaluation's noise level;
-      // before that, Aberth's steps inside a cluster need not lower every residual every sweep.
-      const settled = res <= noise && stale.get(i)! >= POLISH_STALL_SWEEPS;
-      if (res > 0 && step > 2 * Number.EPSILON * Math.hypot(x, y) && !settled) next.push(i);
+      lastStep[i] = step;
+      const m = mate[i]!;
+      if (!free[i] && m >= 0) {
+        if (zi[i]! <= step) {
+          // The pair reaches the axis: release both members to move on their own.
+          free[i] = 1;
+          free[m] = 1;
+          next.push(m);
+        } else {
+          zr[m] = zr[i]!;
+          zi[m] = -zi[i]!;
+        }
+      }
+      if (step > 2 * Number.EPSILON * Math.hypot(x, y)) next.push(i);
     }
     list = next;
   }
-  restoreSymmetry(ev, zr, zi, active);
+  restoreSymmetry(ev, zr, zi, touched);
   // Guard against what compensated arithmetic cannot see (products that overflow or underflow at extreme
   // scales): if any polished root's plain residual ends far above both its start and the rounding level,
   // the whole polish is undone.
   const floor = POLISH_GUARD * freezeLevel(n);
-  if (
-    active.some(
-      (i, k) => !(relativeResidual(c, zr[i]!, zi[i]!) <= Math.max(floor, POLISH_GUARD * plainBefore[k]!)),
-    )
-  ) {
+  const worse = touched.some(
+    (i, k) => !(relativeResidual(c, zr[i]!, zi[i]!) <= Math.max(floor, POLISH_GUARD * plainBefore[k]!)),
+  );
+  if (worse) {
     zr.set(startR);
     zi.set(startI);
   }
   return sweeps;
+}
+
+/** mate[i]: the index of i's exact conjugate, or -1 for a real root (the set is exactly symmetric). */
+function mates(zr: Float64Array, zi: Float64Array): Int32Array {
+  const n = zr.length;
+  const mate = new Int32Array(n).fill(-1);
+  const open = new Map<string, number[]>();
+  for (let i = 0; i < n; i++) {
+    if (zi[i]! >= 0) continue;
+    const key = `${zr[i]}:${-zi[i]!}`;
+    const list = open.get(key) ?? [];
+    list.push(i);
+    open.set(key, list);
+  }
+  for (let i = 0; i < n; i++) {
+    if (!(zi[i]! > 0)) continue;
+    const j = open.get(`${zr[i]}:${zi[i]}`)?.pop();
+    if (j !== undefined) {
+      mate[i] = j;
+      mate[j] = i;
+    }
+  }
+  return mate;
 }
 
 /**
@@ -183,6 +252,9 @@ function unsettleRealRoots(zr: Float64Array, zi: Float64Array, active: number[])
     sign = -sign;
   }
 }
+
+/** A polished root with |im| below this fraction of |z| is tested as a real root. */
+const SNAP_CHECK = 1e-4;
 
 /** Fraction of the nearest-neighbour distance by which a real approximation is moved off the axis. */
 const UNSETTLE_FRACTION = 0.1;
@@ -205,25 +277,24 @@ function restoreSymmetry(
   };
   const upper: number[] = [];
   const lower: number[] = [];
-  const residual = new Map<number, number>();
   for (const i of polished) {
     if (zi[i] === 0) continue;
-    const own = residualAt(zr[i]!, zi[i]!);
-    if (residualAt(zr[i]!, 0) <= own) {
-      zi[i] = 0;
-      continue;
+    // Only a root this close to the axis can be a real root whose polish left it slightly off.
+    if (Math.abs(zi[i]!) <= SNAP_CHECK * Math.hypot(zr[i]!, zi[i]!)) {
+      if (residualAt(zr[i]!, 0) <= residualAt(zr[i]!, zi[i]!)) {
+        zi[i] = 0;
+        continue;
+      }
     }
-    residual.set(i, own);
     (zi[i]! > 0 ? upper : lower).push(i);
   }
-  // Roots outside the polished set that pair with polished ones keep their partners via the mirror search.
-  const taken = new Set<number>();
+  const taken = new Uint8Array(zr.length);
   upper.sort((a, b) => zi[b]! - zi[a]!);
   for (const i of upper) {
     let j = -1;
     let dist = Infinity;
     for (const k of lower) {
-      if (taken.has(k)) continue;
+      if (taken[k]) continue;
       const dd = Math.hypot(zr[k]! - zr[i]!, zi[k]! + zi[i]!);
       if (dd < dist) [j, dist] = [k, dd];
     }
@@ -231,8 +302,10 @@ function restoreSymmetry(
       zi[i] = 0;
       continue;
     }
-    taken.add(j);
-    const keepI = residual.get(i)! <= residual.get(j)!;
+    taken[j] = 1;
+    // Mates that agree to the last bits need no comparison; otherwise the better residual wins.
+    const agree = dist <= 4 * Number.EPSILON * Math.hypot(zr[i]!, zi[i]!);
+    const keepI = agree || residualAt(zr[i]!, zi[i]!) <= residualAt(zr[j]!, zi[j]!);
     const r = keepI ? zr[i]! : zr[j]!;
     const m = keepI ? zi[i]! : -zi[j]!;
     zr[i] = r;
@@ -240,5 +313,5 @@ function restoreSymmetry(
     zi[i] = m;
     zi[j] = -m;
   }
-  for (const k of lower) if (!taken.has(k)) zi[k] = 0;
+  for (const k of lower) if (!taken[k]) zi[k] = 0;
 }

@@ -6,7 +6,7 @@
  * precision", Numer. Math. 18, 1971), conjugate pairs as exact real quadratics, and multiplied in an order
  * that interleaves the roots by angle, so partial products stay near the size of the result.
  */
-import { ddAdd, ddMul, factor, product, type DdPoly } from './doubleDouble.ts';
+import { ddAdd, ddMul, factor, type DdPoly } from './doubleDouble.ts';
 
 const tmp = new Float64Array(2);
 
@@ -41,7 +41,10 @@ export function setBackwardError(c: ArrayLike<number>, re: ArrayLike<number>, im
     factors.push({ angle: Math.atan2(im[i]!, re[i]!), f: factor(re[i]!, im[i]!) });
   }
   factors.sort((a, b) => a.angle - b.angle);
-  const q = product(factors.map((x) => x.f));
+  const q = interleavedProduct(
+    factors.map((x) => x.f),
+    coeffs.length,
+  );
   const lead = coeffs[0]!;
   let worst = 0;
   let scale = 0;
@@ -52,4 +55,42 @@ export function setBackwardError(c: ArrayLike<number>, re: ArrayLike<number>, im
     scale = Math.max(scale, Math.abs(coeffs[k]!));
   }
   return worst / scale;
+}
+
+/**
+ * Π factors, taken in bit-reversed order of their angle ranks (the order the even/odd halving would give),
+ * accumulated in place in one double-double buffer of the final length.
+ */
+function interleavedProduct(factors: DdPoly[], length: number): DdPoly {
+  const hi = new Float64Array(length);
+  const lo = new Float64Array(length);
+  hi[0] = 1;
+  let deg = 0;
+  const m = factors.length;
+  let bits = 0;
+  while (1 << bits < m) bits++;
+  const t = new Float64Array(2);
+  const u = new Float64Array(2);
+  for (let r = 0; r < 1 << bits; r++) {
+    let k = 0;
+    for (let b = 0; b < bits; b++) if (r & (1 << b)) k |= 1 << (bits - 1 - b);
+    if (k >= m) continue;
+    const f = factors[k]!;
+    const fd = f.hi.length - 1;
+    // (hi, lo) ← (hi, lo) · f, from the top down so each coefficient is read before it is overwritten.
+    for (let i = deg + fd; i >= 0; i--) {
+      let sh = 0;
+      let sl = 0;
+      for (let j = Math.max(0, i - deg); j <= Math.min(fd, i); j++) {
+        ddMul(hi[i - j]!, lo[i - j]!, f.hi[j]!, f.lo[j]!, t);
+        ddAdd(sh, sl, t[0]!, t[1]!, u);
+        sh = u[0]!;
+        sl = u[1]!;
+      }
+      hi[i] = sh;
+      lo[i] = sl;
+    }
+    deg += fd;
+  }
+  return { hi, lo };
 }
