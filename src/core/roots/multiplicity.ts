@@ -36,7 +36,7 @@ export const PREFILTER_RATIO = 16;
 export const PREFILTER_FLOOR = 16;
 
 /** When merging every candidate fails the set test, candidates are tried one by one only up to this many. */
-export const SEPARATE_CHECKS = 4;
+export const SEPARATE_CHECKS = 2;
 
 /** A merged set may have at most this times the separate set's backward error (plus MERGE_FLOOR·ε). */
 export const MERGE_RATIO = 2;
