@@ -39,6 +39,7 @@ test('coefficients that leave roots uncertain get a plain warning naming them', 
   await applySystem(page, `b = [${binomial.map((c) => 0.37 * c).join(', ')}]\na = [1, -0.5]`);
   const warning = page.getByTestId('typed-warning');
   await expect(warning).toBeVisible();
+  await expect(warning).toContainText('12 roots');
   await expect(warning).toContainText('uncertain by');
   await expect(warning).toContainText('second-order sections');
   await saveScreenshot(page, testInfo, 'typed-warning');
@@ -72,6 +73,7 @@ test('a design whose multiplied-out b, a are not the design says so beside them'
   await expect(note).toBeVisible();
   await expect(note).toContainText('unstable');
   await expect(note).toContainText('sections');
+  await note.scrollIntoViewIfNeeded();
   await expect(page.getByTestId('time-structure')).toHaveText('runs sections from the roots');
   await saveScreenshot(page, testInfo, 'expanded-warning');
 });

@@ -18,6 +18,8 @@ export function TypedWarning() {
   const unsure = uncertainRoots(diag);
   if (diag.converged && unsure.length === 0) return null;
   const worst = unsure.reduce((m, u) => Math.max(m, u.root.errorBound), 0);
+  // Roots counted as the polynomial has them: conjugates and multiplicities included.
+  const count = unsure.reduce((n, u) => n + u.root.multiplicity * (u.root.im === 0 ? 1 : 2), 0);
   return (
     <section className="pw-side-section pw-typed-warning" role="note" data-testid="typed-warning">
       <h2>These coefficients are ill-conditioned</h2>
@@ -27,8 +29,8 @@ export function TypedWarning() {
       {unsure.length > 0 && (
         <>
           <p>
-            The coefficients as typed pin {unsure.length === 1 ? 'one root' : `${unsure.length} roots`} down
-            only to within {formatNumber(worst, 2)}:
+            The coefficients as typed pin {count === 1 ? 'one root' : `${count} roots`} down only to within{' '}
+            {formatNumber(worst, 2)}:
           </p>
           <ul>
             {unsure.slice(0, LISTED).map(({ kind, root }, k) => (
