@@ -13,8 +13,9 @@ build and CPU, so they are checked only to an order of magnitude on regeneration
 - roots_truth_special: pole pairs straddling the unit circle (separations 1e-8 to 1e-3, real and complex),
   pairs just inside it, Wilkinson-type polynomials prod (z - k/n), and (z + 1)^m, (z - 1)^m for m = 1..16.
 
-Per polynomial: the doubles (descending powers of z, i.e. b or a in powers of z^-1), the true roots rounded
-to double, for denominators the true verdict, and numpy.roots' set backward error
+Per polynomial: the doubles (descending powers of z, i.e. b or a in powers of z^-1) and, derived from the
+committed doubles so that every machine checks the same truth, the true roots rounded to double, for
+denominators the true verdict, and numpy.roots' set backward error
 max_k |p_k - q_k| / max_k |p_k| (q = p_0 prod (z - r_i) multiplied out at 60 digits) and forward error
 (largest distance from a true root to its match among numpy's roots).
 """
@@ -24,6 +25,9 @@ from fractions import Fraction
 import mpmath
 import numpy as np
 from scipy import signal
+
+from conditioning import EPS, ULPS
+from fixture import Fixture, Tol
 
 DPS = 60
 FAMILIES = ["butter", "cheby1", "cheby2", "ellip"]
@@ -117,20 +121,30 @@ def as_pairs(roots):
     return {"re": [float(mpmath.re(r)) for r in roots], "im": [float(mpmath.im(r)) for r in roots]}
 
 
-def poly_case(c, role, known_roots=None):
-    c = trimmed(c)
-    truth = known_roots if known_roots is not None else exact_roots(c)
+def poly_input(c, role, known_root=None):
+    """A polynomial as stored: its doubles, its role, and for (z -+ 1)^m the exactly known root."""
+    case = {"role": role, "coefficients": trimmed(c)}
+    if known_root is not None:
+        case["knownRoot"] = known_root
+    return case
+
+
+def poly_outputs(case):
+    """Truth and numpy's figures for one stored polynomial (computed from the committed doubles)."""
+    c = [float(x) for x in case["coefficients"]]
+    if "knownRoot" in case:
+        truth = [mpmath.mpc(case["knownRoot"])] * (len(c) - 1)
+    else:
+        truth = exact_roots(c)
     found = np.roots(c) if len(c) > 1 else np.array([])
-    case = {
-        "role": role,
-        "coefficients": c,
+    out = {
         "roots": as_pairs(truth),
         "numpyBackwardError": set_backward_error(c, found) if len(c) > 1 else 0.0,
         "numpyForwardError": forward_error(truth, found) if len(c) > 1 else 0.0,
     }
-    if role == "a":
-        case["verdict"] = exact_verdict(c, truth)
-    return case
+    if case["role"] == "a":
+        out["verdict"] = exact_verdict(c, truth)
+    return out
 
 
 def designs():
@@ -142,14 +156,14 @@ def designs():
                 order = orders[(3 * fi + 2 * bi + ei) % len(orders)]
                 b, a = design(family, band, order, edge)
                 name = f"{family} {band} order {order} at {edge:g} fs"
-                out.append({"name": name, "b": poly_case(b, "b"), "a": poly_case(a, "a")})
+                out.append({"name": name, "b": poly_input(b, "b"), "a": poly_input(a, "a")})
     named = [
         ("ellip(6, 0.5, 60, 20, fs=48000)", signal.ellip(6, 0.5, 60, 20, fs=48000)),
         ("butter(8, 50, fs=48000)", signal.butter(8, 50, fs=48000)),
         ("ellip(12, 0.5, 60, 10, fs=1000)", signal.ellip(12, 0.5, 60, 10, fs=1000)),
     ]
     for name, (b, a) in named:
-        out.append({"name": name, "b": poly_case(b, "b"), "a": poly_case(a, "a")})
+        out.append({"name": name, "b": poly_input(b, "b"), "a": poly_input(a, "a")})
     return out
 
 
@@ -167,23 +181,50 @@ def multiply_out(roots):
 def special():
     out = []
     for s in SEPARATIONS:
-        out.append({"name": f"real pair 1 -+ {s:g}/2", **poly_case(multiply_out([1 - s / 2, 1 + s / 2]), "a")})
-        out.append({"name": f"real pair inside, 1 - {s:g} and 1 - {s:g}/2", **poly_case(multiply_out([1 - s, 1 - s / 2]), "a")})
+        out.append({"name": f"real pair 1 -+ {s:g}/2", **poly_input(multiply_out([1 - s / 2, 1 + s / 2]), "a")})
+        out.append({"name": f"real pair inside, 1 - {s:g} and 1 - {s:g}/2", **poly_input(multiply_out([1 - s, 1 - s / 2]), "a")})
         t = 0.3
         pair = [(1 - s / 2) * complex(math.cos(t), math.sin(t)), (1 + s / 2) * complex(math.cos(t), math.sin(t))]
-        out.append({"name": f"complex pairs at 0.3 rad, radii 1 -+ {s:g}/2", **poly_case(multiply_out(pair + [z.conjugate() for z in pair]), "a")})
-    out.append({"name": "typed 1, -1.9999994, 0.99999939999993", **poly_case([1, -1.9999994, 0.99999939999993], "a")})
+        out.append({"name": f"complex pairs at 0.3 rad, radii 1 -+ {s:g}/2", **poly_input(multiply_out(pair + [z.conjugate() for z in pair]), "a")})
+    out.append({"name": "typed 1, -1.9999994, 0.99999939999993", **poly_input([1, -1.9999994, 0.99999939999993], "a")})
     for n in (10, 15, 20):
-        out.append({"name": f"Wilkinson type, roots k/{n + 1}", **poly_case(multiply_out([k / (n + 1) for k in range(1, n + 1)]), "a")})
+        out.append({"name": f"Wilkinson type, roots k/{n + 1}", **poly_input(multiply_out([k / (n + 1) for k in range(1, n + 1)]), "a")})
     for n in (10, 20):
-        out.append({"name": f"Wilkinson type, roots k/{n} (one at 1)", **poly_case(multiply_out([k / n for k in range(1, n + 1)]), "a")})
+        out.append({"name": f"Wilkinson type, roots k/{n} (one at 1)", **poly_input(multiply_out([k / n for k in range(1, n + 1)]), "a")})
     for m in range(1, 17):
         for z0 in (-1, 1):
             c = [float(math.comb(m, k) * (-z0) ** k) for k in range(m + 1)]
-            known = [mpmath.mpc(z0)] * m
-            out.append({"name": f"(z {'+' if z0 < 0 else '-'} 1)^{m}", **poly_case(c, "a", known_roots=known)})
+            out.append({"name": f"(z {'+' if z0 < 0 else '-'} 1)^{m}", **poly_input(c, "a", known_root=z0)})
     return out
 
 
+def derive_designs(stored):
+    return [{"b": poly_outputs(d["b"]), "a": poly_outputs(d["a"])} for d in stored]
+
+
+def derive_special(stored):
+    return [poly_outputs(case) for case in stored]
+
+
+# The doubles come from scipy (numpy's sin, cos, exp and products) or from plain Python: a few ulps apart between
+# machines. Everything else is computed from the committed doubles: mpmath's roots are then the same everywhere,
+# while numpy.roots' figures depend on the LAPACK build and the CPU and are kept only as a comparison.
+COEFFICIENTS = Tol(rel=ULPS * EPS, abs=1e-300, why="scipy designs and plain-Python products: ulps of each double")
+TRUTH = Tol(rel=1e-14, abs=1e-15, why="mpmath.polyroots at 60 digits of the committed doubles, rounded to double")
+NUMPY = {
+    "*numpyBackwardError": Tol(
+        rel=9, abs=1e-12, why="numpy.roots depends on LAPACK and the CPU: an order of magnitude, below 1e-12 alike"
+    ),
+    "*numpyForwardError": Tol(
+        rel=9, abs=1e-6, why="numpy.roots depends on LAPACK and the CPU: an order of magnitude, below 1e-6 alike"
+    ),
+}
+
+
 def fixtures():
-    return {"roots_truth_designs": designs(), "roots_truth_special": special()}
+    return {
+        "roots_truth_designs": Fixture(
+            designs(), tol=COEFFICIENTS, fields={"*roots.*": TRUTH, **NUMPY}, derive=derive_designs
+        ),
+        "roots_truth_special": Fixture(special(), tol=COEFFICIENTS, fields={"roots.*": TRUTH, **NUMPY}, derive=derive_special),
+    }
