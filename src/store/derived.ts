@@ -6,7 +6,7 @@ import type { Zpk, TransferFunction, Section } from '../core/types.ts';
 import { zpkToTf, zpkToSections } from '../core/system/index.ts';
 import { responseZpk, frequencyGrid, refineAtRoots, type FrequencyResponse } from '../core/response/index.ts';
 import { resolveGain, type ResolvedGain } from '../core/gainRule.ts';
-import { stabilityOfTyped, stabilityOfZpk, type Stability } from '../core/stability.ts';
+import { stabilityOfTyped, stabilityOfZpk, type Stability } from '../core/stability/index.ts';
 import { typedDiagnostics, type SystemDiagnostics } from '../core/system/diagnostics.ts';
 import { checkExpandedCoefficients, type ExpandedCheck } from '../core/system/expandedCheck.ts';
 import { rootReadouts, type RootReadout } from '../core/readouts.ts';

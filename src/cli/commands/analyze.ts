@@ -1,7 +1,7 @@
 /** `polewright analyze`: roots, gain, coefficients, sections, stability and per-root read-outs. */
 import type { TransferFunction } from '../../core/types.ts';
 import { expandRoots, zpkToTf, zpkToSections } from '../../core/system/index.ts';
-import { stabilityOfTyped, stabilityOfZpk } from '../../core/stability.ts';
+import { stabilityOfTyped, stabilityOfZpk } from '../../core/stability/index.ts';
 import {
   exactDiagnostics,
   typedDiagnostics,

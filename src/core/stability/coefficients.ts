@@ -11,7 +11,7 @@
  *    (roots/exactRefine.ts) and the disks formed again from exact values of p; only if a group of them still
  *    touches the circle does the exact recursion run to the end.
  */
-import type { Verdict } from '../stability.ts';
+import type { Verdict } from './index.ts';
 import { findRoots } from '../roots/index.ts';
 import { exactInclusionDisks, inclusionDisks, type InclusionDisks } from '../roots/inclusion.ts';
 import { exactPoly } from '../roots/exactEval.ts';

@@ -6,7 +6,7 @@
  */
 import type { Zpk } from '../types.ts';
 import { zpkToTf } from './transferFunction.ts';
-import { stabilityOfZpk, type Verdict } from '../stability.ts';
+import { stabilityOfZpk, type Verdict } from '../stability/index.ts';
 import { stabilityOfCoefficients } from '../stability/coefficients.ts';
 import { magnitudeDbZpk } from '../response/magnitude.ts';
 import { frequencyGrid } from '../response/grid.ts';

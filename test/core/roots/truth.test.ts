@@ -7,7 +7,7 @@ import { findRoots } from '../../../src/core/roots/index.ts';
 import { setBackwardError } from '../../../src/core/roots/setBackwardError.ts';
 import { inclusionDisks } from '../../../src/core/roots/inclusion.ts';
 import { stabilityOfCoefficients } from '../../../src/core/stability/coefficients.ts';
-import type { Verdict } from '../../../src/core/stability.ts';
+import type { Verdict } from '../../../src/core/stability/index.ts';
 import { loadFixture } from '../../helpers/fixtures.ts';
 
 interface PolyCase {

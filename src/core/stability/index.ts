@@ -1,8 +1,8 @@
 /** Stability of a system from its poles: inside, on or outside the unit circle. */
-import type { Root, Zpk } from './types.ts';
-import { compressRoots, expandRoots } from './system/rootList.ts';
-import { stabilityOfCoefficients } from './stability/coefficients.ts';
-import { shortNumber } from './shortNumber.ts';
+import type { Root, Zpk } from '../types.ts';
+import { compressRoots, expandRoots } from '../system/rootList.ts';
+import { stabilityOfCoefficients } from './coefficients.ts';
+import { shortNumber } from '../shortNumber.ts';
 
 /** stable: every pole strictly inside; marginal: only simple poles on the circle, none outside; unstable: otherwise. */
 export type Verdict = 'stable' | 'marginal' | 'unstable';
