@@ -198,6 +198,31 @@ def special():
     return out
 
 
+def butterworth_denominator(n, cutoff=0.2):
+    """Order-n digital Butterworth low-pass denominator (cutoff a fraction of Nyquist) by the bilinear transform,
+    its poles multiplied out in plain Python doubles: the polynomial `npm run bench -- roots` times."""
+    wc = math.tan(math.pi * cutoff / 2)
+    poles = []
+    for k in range(n):
+        s = wc * complex(math.cos(math.pi * (2 * k + n + 1) / (2 * n)), math.sin(math.pi * (2 * k + n + 1) / (2 * n)))
+        poles.append((1 + s) / (1 - s))
+    return multiply_out(poles)
+
+
+def high_degree():
+    """Clustered denominators of high degree, where a set must still multiply out to the coefficients."""
+    return [{"name": f"Butterworth denominator, order {n}, cutoff 0.2 of Nyquist", **poly_input(butterworth_denominator(n), "a")} for n in (128, 256, 512)]
+
+
+def derive_high_degree(stored):
+    """numpy.roots' set backward error only (mpmath's polyroots at degree 512 would take hours)."""
+    out = []
+    for case in stored:
+        c = [float(x) for x in case["coefficients"]]
+        out.append({"numpyBackwardError": set_backward_error(c, np.roots(c))})
+    return out
+
+
 def derive_designs(stored):
     return [{"b": poly_outputs(d["b"]), "a": poly_outputs(d["a"])} for d in stored]
 
@@ -227,4 +252,7 @@ def fixtures():
             designs(), tol=COEFFICIENTS, fields={"*roots.*": TRUTH, **NUMPY}, derive=derive_designs
         ),
         "roots_truth_special": Fixture(special(), tol=COEFFICIENTS, fields={"roots.*": TRUTH, **NUMPY}, derive=derive_special),
+        "roots_truth_high_degree": Fixture(
+            high_degree(), tol=COEFFICIENTS, fields={**NUMPY}, derive=derive_high_degree
+        ),
     }

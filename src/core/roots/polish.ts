@@ -133,13 +133,30 @@ export function polishIllConditioned(c: Float64Array, zr: Float64Array, zi: Floa
     zi,
     active.filter((i) => free[i]),
   );
+  // A mirrored member is not repelled by the free roots (its Aberth correction is taken from its mate's), so
+  // a free root could settle on the very point a mirror is put on, and one root of the cluster would go
+  // without an approximation. Once any root moves on its own, every pair does.
+  let mirroring = true;
+  const releaseAll = (into: number[]) => {
+    if (!mirroring) return;
+    mirroring = false;
+    for (const i of touched) {
+      if (free[i]) continue;
+      free[i] = 1;
+      if (zi[i]! < 0) into.push(i);
+    }
+  };
+  let list = active;
+  if (active.some((i) => free[i])) {
+    list = [...active];
+    releaseAll(list);
+  }
   const best = new Float64Array(n).fill(Infinity);
   const stale = new Int32Array(n);
   // Residual level (relative) below which compensated evaluation is noise: γ_{4n+2}², with margin.
   const noise = 64 * ((4 * n + 2) * Number.EPSILON) ** 2;
   const lastStep = new Float64Array(n).fill(Infinity);
   let sweeps = 0;
-  let list = active;
   while (list.length > 0 && sweeps < POLISH_SWEEPS) {
     sweeps++;
     const next: number[] = [];
@@ -183,10 +200,8 @@ export function polishIllConditioned(c: Float64Array, zr: Float64Array, zi: Floa
       const m = mate[i]!;
       if (!free[i] && m >= 0) {
         if (zi[i]! <= step) {
-          // The pair reaches the axis: release both members to move on their own.
-          free[i] = 1;
-          free[m] = 1;
-          next.push(m);
+          // The pair reaches the axis: its members move on their own from now on, and so do all others.
+          releaseAll(next);
         } else {
           zr[m] = zr[i]!;
           zi[m] = -zi[i]!;
@@ -288,21 +303,47 @@ function restoreSymmetry(
     }
     (zi[i]! > 0 ? upper : lower).push(i);
   }
+  // Pairs by mutual nearness (an upper root and the lower one nearest its mirror, each the other's nearest),
+  // round by round: a greedy pass in a fixed order can hand a root its neighbour's mirror, and the two
+  // would then end on the same point.
   const taken = new Uint8Array(zr.length);
-  upper.sort((a, b) => zi[b]! - zi[a]!);
-  for (const i of upper) {
-    let j = -1;
-    let dist = Infinity;
-    for (const k of lower) {
-      if (taken[k]) continue;
-      const dd = Math.hypot(zr[k]! - zr[i]!, zi[k]! + zi[i]!);
-      if (dd < dist) [j, dist] = [k, dd];
+  const pairs: [number, number, number][] = [];
+  let up = upper;
+  while (up.length > 0) {
+    const low = lower.filter((k) => !taken[k]);
+    if (low.length === 0) break;
+    const nearestLow = new Map<number, [number, number]>();
+    for (const i of up) {
+      let j = -1;
+      let dist = Infinity;
+      for (const k of low) {
+        const dd = Math.hypot(zr[k]! - zr[i]!, zi[k]! + zi[i]!);
+        if (dd < dist) [j, dist] = [k, dd];
+      }
+      nearestLow.set(i, [j, dist]);
     }
-    if (j < 0) {
-      zi[i] = 0;
-      continue;
+    const nearestUp = new Map<number, number>();
+    for (const k of low) {
+      let j = -1;
+      let dist = Infinity;
+      for (const i of up) {
+        const dd = Math.hypot(zr[k]! - zr[i]!, zi[k]! + zi[i]!);
+        if (dd < dist) [j, dist] = [i, dd];
+      }
+      nearestUp.set(k, j);
     }
-    taken[j] = 1;
+    const rest: number[] = [];
+    for (const i of up) {
+      const [j, dist] = nearestLow.get(i)!;
+      if (nearestUp.get(j) === i) {
+        taken[j] = 1;
+        pairs.push([i, j, dist]);
+      } else rest.push(i);
+    }
+    up = rest;
+  }
+  for (const i of up) zi[i] = 0; // more roots above the axis than below: the surplus goes onto it
+  for (const [i, j, dist] of pairs) {
     // Mates that agree to the last bits need no comparison; otherwise the better residual wins.
     const agree = dist <= 4 * Number.EPSILON * Math.hypot(zr[i]!, zi[i]!);
     const keepI = agree || residualAt(zr[i]!, zi[i]!) <= residualAt(zr[j]!, zi[j]!);

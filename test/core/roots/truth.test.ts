@@ -98,3 +98,21 @@ describe('typed coefficients against mpmath truth', () => {
     expect(held).toEqual(size);
   });
 });
+
+describe('clustered denominators of high degree', () => {
+  const high = loadFixture<(Named & { numpyBackwardError: number })[]>('roots_truth_high_degree');
+  it.each(high.map((c) => [c.name, c] as const))(
+    '%s: the reported set multiplies out to the coefficients, no root listed twice',
+    (_name, c) => {
+      const r = findRoots(c.coefficients);
+      const seen = new Set<string>();
+      for (let i = 0; i < r.re.length; i++) seen.add(`${r.re[i]}:${r.im[i]}`);
+      expect(seen.size).toBe(r.re.length);
+      const set = reportedSet(c.coefficients);
+      const ours = setBackwardError(c.coefficients, set.re, set.im);
+      // numpy.roots' set backward error on the same doubles, multiplied out by mpmath at 60 digits
+      expect(ours).toBeLessThanOrEqual(Math.max(10 * c.numpyBackwardError, BACKWARD_FLOOR));
+      expect(ours).toBeLessThanOrEqual(1e-12);
+    },
+  );
+});
