@@ -134,82 +134,85 @@ export function polishIllConditioned(c: Float64Array, zr: Float64Array, zi: Floa
     active.filter((i) => free[i]),
   );
   // A mirrored member is not repelled by the free roots (its Aberth correction is taken from its mate's), so
-  // a free root could settle on the very point a mirror is put on, and one root of the cluster would go
-  // without an approximation. Once any root moves on its own, every pair does.
+  // a free root can settle on the very point a mirror is put on, and one root of the cluster is then left
+  // without an approximation. That is rare and cheap to see afterwards (two approximations on one point);
+  // then every pair is released and the sweeps go on, each root repelled by all others.
   let mirroring = true;
-  const releaseAll = (into: number[]) => {
-    if (!mirroring) return;
+  const releaseAll = () => {
     mirroring = false;
-    for (const i of touched) {
-      if (free[i]) continue;
-      free[i] = 1;
-      if (zi[i]! < 0) into.push(i);
-    }
+    for (const i of touched) free[i] = 1;
   };
-  let list = active;
-  if (active.some((i) => free[i])) {
-    list = [...active];
-    releaseAll(list);
-  }
   const best = new Float64Array(n).fill(Infinity);
   const stale = new Int32Array(n);
   // Residual level (relative) below which compensated evaluation is noise: γ_{4n+2}², with margin.
   const noise = 64 * ((4 * n + 2) * Number.EPSILON) ** 2;
   const lastStep = new Float64Array(n).fill(Infinity);
   let sweeps = 0;
-  while (list.length > 0 && sweeps < POLISH_SWEEPS) {
-    sweeps++;
-    const next: number[] = [];
-    for (const i of list) {
-      const x = zr[i]!;
-      const y = zi[i]!;
-      ev.logDerivative(x, y, g);
-      const res = g[2]!;
-      if (res === 0) continue; // an exact root
-      if (res < best[i]!) {
-        best[i] = res;
-        stale[i] = 0;
-      } else stale[i]!++;
-      // p'/p − Σ_{j≠i} 1/(z_i − z_j)
-      let ar = g[0]!;
-      let ai = g[1]!;
-      let nearest = Infinity;
-      for (let j = 0; j < n; j++) {
-        if (j === i) continue;
-        const ur = x - zr[j]!;
-        const ui = y - zi[j]!;
-        const d2 = ur * ur + ui * ui;
-        const inv = 1 / d2;
-        ar -= ur * inv;
-        ai += ui * inv;
-        if (d2 < nearest) nearest = d2;
-      }
-      // A root whose residual has stopped falling is done once its last step was tiny against the distance to
-      // its nearest neighbour (it sits at its root, moving in the rounding noise); a root still travelling
-      // through a cluster, whose residual need not fall every sweep, goes on.
-      if (stale[i]! >= POLISH_STALL_SWEEPS && (res <= noise || lastStep[i]! < SETTLED * Math.sqrt(nearest)))
-        continue;
-      const ad = ar * ar + ai * ai;
-      const stepR = ar / ad;
-      const stepI = -ai / ad;
-      if (!Number.isFinite(stepR) || !Number.isFinite(stepI)) continue;
-      const step = Math.hypot(stepR, stepI);
-      zr[i] = x - stepR;
-      zi[i] = y - stepI;
-      lastStep[i] = step;
-      const m = mate[i]!;
-      if (!free[i] && m >= 0) {
-        if (zi[i]! <= step) {
-          // The pair reaches the axis: its members move on their own from now on, and so do all others.
-          releaseAll(next);
-        } else {
-          zr[m] = zr[i]!;
-          zi[m] = -zi[i]!;
+  let list = active;
+  for (;;) {
+    while (list.length > 0 && sweeps < POLISH_SWEEPS) {
+      sweeps++;
+      const next: number[] = [];
+      for (const i of list) {
+        const x = zr[i]!;
+        const y = zi[i]!;
+        ev.logDerivative(x, y, g);
+        const res = g[2]!;
+        if (res === 0) continue; // an exact root
+        if (res < best[i]!) {
+          best[i] = res;
+          stale[i] = 0;
+        } else stale[i]!++;
+        // p'/p − Σ_{j≠i} 1/(z_i − z_j)
+        let ar = g[0]!;
+        let ai = g[1]!;
+        let nearest = Infinity;
+        for (let j = 0; j < n; j++) {
+          if (j === i) continue;
+          const ur = x - zr[j]!;
+          const ui = y - zi[j]!;
+          const d2 = ur * ur + ui * ui;
+          const inv = 1 / d2;
+          ar -= ur * inv;
+          ai += ui * inv;
+          if (d2 < nearest) nearest = d2;
         }
+        // A root whose residual has stopped falling is done once its last step was tiny against the distance to
+        // its nearest neighbour (it sits at its root, moving in the rounding noise); a root still travelling
+        // through a cluster, whose residual need not fall every sweep, goes on.
+        if (stale[i]! >= POLISH_STALL_SWEEPS && (res <= noise || lastStep[i]! < SETTLED * Math.sqrt(nearest)))
+          continue;
+        const ad = ar * ar + ai * ai;
+        const stepR = ar / ad;
+        const stepI = -ai / ad;
+        if (!Number.isFinite(stepR) || !Number.isFinite(stepI)) continue;
+        const step = Math.hypot(stepR, stepI);
+        zr[i] = x - stepR;
+        zi[i] = y - stepI;
+        lastStep[i] = step;
+        const m = mate[i]!;
+        if (!free[i] && m >= 0) {
+          if (zi[i]! <= step) {
+            // The pair reaches the axis: release both members to move on their own.
+            free[i] = 1;
+            free[m] = 1;
+            next.push(m);
+          } else {
+            zr[m] = zr[i]!;
+            zi[m] = -zi[i]!;
+          }
+        }
+        if (step > 2 * Number.EPSILON * Math.hypot(x, y)) next.push(i);
       }
-      if (step > 2 * Number.EPSILON * Math.hypot(x, y)) next.push(i);
+      list = next;
     }
-    list = next;
+    if (!mirroring || sweeps >= POLISH_SWEEPS) break;
+    const twins = coincident(zr, zi, touched);
+    if (twins.length === 0 || !touched.some((i) => free[i])) break;
+    releaseAll();
+    unsettleRealRoots(zr, zi, twins, true);
+    for (const i of touched) stale[i] = 0;
+    list = touched;
   }
   restoreSymmetry(ev, zr, zi, touched);
   // Guard against what compensated arithmetic cannot see (products that overflow or underflow at extreme
@@ -255,17 +258,40 @@ function mates(zr: Float64Array, zi: Float64Array): Int32Array {
  * polished is pushed off the axis by a tenth of the distance to its nearest neighbour (alternating in
  * sign); a truly real root draws it back.
  */
-function unsettleRealRoots(zr: Float64Array, zi: Float64Array, active: number[]): void {
+function unsettleRealRoots(zr: Float64Array, zi: Float64Array, active: number[], anywhere = false): void {
   let sign = 1;
   for (const i of active) {
-    if (zi[i] !== 0) continue;
+    if (zi[i] !== 0 && !anywhere) continue;
     let near = Infinity;
-    for (let j = 0; j < zr.length; j++)
-      if (j !== i) near = Math.min(near, Math.hypot(zr[i]! - zr[j]!, zi[i]! - zi[j]!));
-    if (!Number.isFinite(near) || near === 0) near = Math.max(1, Math.abs(zr[i]!)) * 1e-3;
-    zi[i] = sign * UNSETTLE_FRACTION * near;
+    for (let j = 0; j < zr.length; j++) {
+      const d = Math.hypot(zr[i]! - zr[j]!, zi[i]! - zi[j]!);
+      if (j !== i && d > 0) near = Math.min(near, d);
+    }
+    if (!Number.isFinite(near)) near = Math.max(1, Math.abs(zr[i]!)) * 1e-3;
+    zi[i] = zi[i]! + sign * UNSETTLE_FRACTION * near;
     sign = -sign;
   }
+}
+
+/**
+ * One member of each group of approximations among `among` that sit on the same point (to within four
+ * rounding units): two approximations settled on one root.
+ */
+function coincident(zr: Float64Array, zi: Float64Array, among: number[]): number[] {
+  const order = [...among].sort((a, b) => zr[a]! - zr[b]! || zi[a]! - zi[b]!);
+  const out: number[] = [];
+  for (let a = 0; a < order.length; a++) {
+    const i = order[a]!;
+    const tol = 4 * Number.EPSILON * Math.hypot(zr[i]!, zi[i]!);
+    for (let b = a + 1; b < order.length && zr[order[b]!]! - zr[i]! <= tol; b++) {
+      const j = order[b]!;
+      if (Math.abs(zi[j]! - zi[i]!) <= tol) {
+        out.push(j);
+        break;
+      }
+    }
+  }
+  return out;
 }
 
 /** A polished root with |im| below this fraction of |z| is tested as a real root. */
