@@ -19,11 +19,23 @@ function roundTo(x: number, bits: number): number {
   return Math.round(x / q) * q;
 }
 
-/** Refines re/im in place towards the roots of the exact polynomial p; at most maxSweeps sweeps. */
-export function refineExactly(p: ExactPoly, re: Float64Array, im: Float64Array, maxSweeps: number): boolean {
+/**
+ * Refines re/im in place towards the roots of the exact polynomial p; at most maxSweeps sweeps. Only the
+ * roots listed in `which` move (all by default; the others stay as they are and only repel); `startBits`
+ * is the precision of the first sweeps (53 for approximations already accurate to their last bits).
+ */
+export function refineExactly(
+  p: ExactPoly,
+  re: Float64Array,
+  im: Float64Array,
+  maxSweeps: number,
+  which?: readonly number[],
+  startBits = START_BITS,
+): boolean {
   const n = re.length;
-  let bits = START_BITS;
-  let active = Array.from({ length: n }, (_, i) => i);
+  const all = which ? [...which] : Array.from({ length: n }, (_, i) => i);
+  let bits = startBits;
+  let active = all;
   for (let sweep = 0; sweep < maxSweeps && active.length > 0; sweep++) {
     const next: number[] = [];
     let largest = 0;
@@ -60,7 +72,7 @@ export function refineExactly(p: ExactPoly, re: Float64Array, im: Float64Array, 
     }
     if (bits < 53 && largest < 4 * 2 ** -bits) {
       bits = Math.min(53, 2 * bits);
-      active = Array.from({ length: n }, (_, i) => i);
+      active = all;
     } else active = next;
   }
   return active.length === 0;

@@ -78,6 +78,33 @@ export function exactInclusionDisks(
   return disksFrom(re, im, log2Value, log2Lead - 64 * EPS);
 }
 
+/**
+ * Inclusion disks with |p(z_i)| known exactly at the approximations listed in `exactAt` (after those were
+ * refined with exact evaluation) and bounded by compensated evaluation of the doubles c elsewhere; each
+ * value is an upper bound either way, so the disks hold for the exact polynomial.
+ */
+export function mixedInclusionDisks(
+  c: Float64Array,
+  p: ExactPoly,
+  re: ArrayLike<number>,
+  im: ArrayLike<number>,
+  exactAt: ReadonlySet<number>,
+): InclusionDisks {
+  const v = new Float64Array(4);
+  // The integer coefficients are c·2^s for one common integer s, so s is the rounded difference of the logs.
+  const lead = p[0]!;
+  const log2LeadP =
+    Math.log2(Math.abs(Number(lead >> BigInt(Math.max(0, bitLength(lead) - 60))))) +
+    Math.max(0, bitLength(lead) - 60);
+  const shift = Math.round(log2LeadP - Math.log2(Math.abs(c[0]!)));
+  const log2Value = Float64Array.from({ length: re.length }, (_, i) => {
+    if (!exactAt.has(i)) return Math.log2(valueBound(c, re[i]!, im[i]!, v)) + shift;
+    const e = exactValues(p, re[i]!, im[i]!, false);
+    return 0.5 * Math.log2(e.pr * e.pr + e.pi * e.pi) + e.scale + 64 * EPS;
+  });
+  return disksFrom(re, im, log2Value, log2LeadP - 64 * EPS);
+}
+
 /** Disks |z − z_i| ≤ n·|p(z_i)| / (|c_0| Π|z_i − z_j|) from upper bounds on log2|p(z_i)| and a lower one on log2|c_0|. */
 function disksFrom(
   re: ArrayLike<number>,

@@ -13,7 +13,12 @@
  */
 import type { Verdict } from './index.ts';
 import { findRoots } from '../roots/index.ts';
-import { exactInclusionDisks, inclusionDisks, type InclusionDisks } from '../roots/inclusion.ts';
+import {
+  exactInclusionDisks,
+  inclusionDisks,
+  mixedInclusionDisks,
+  type InclusionDisks,
+} from '../roots/inclusion.ts';
 import { exactPoly } from '../roots/exactEval.ts';
 import { refineExactly } from '../roots/exactRefine.ts';
 import { toIntegers } from './dyadic.ts';
@@ -113,11 +118,54 @@ export function stabilityOfCoefficients(a: ArrayLike<number>): CoefficientStabil
   const found = findRoots(c);
   const re = Float64Array.from(found.re);
   const im = Float64Array.from(found.im);
-  const certified = re.length === n ? byDisks(re, im, inclusionDisks(c, re, im), 'inclusion') : null;
+  if (re.length !== n) return exactVerdict(c, null, origin);
+  const disks = inclusionDisks(c, re, im);
+  const certified = byDisks(re, im, disks, 'inclusion');
   if (certified) return withOrigin(certified, origin);
+  // Usually a few disks spoil the picture (two approximations of a tight pair a rounding apart, whose disks
+  // then cover everything): refine just those with exact evaluation and form the disks again, exact values at
+  // the refined roots and compensated bounds elsewhere.
+  const loose = looseRoots(re, im, disks);
+  if (loose.length > 0 && loose.length <= Math.max(8, n / 8)) {
+    const p = exactPoly(c);
+    refineExactly(p, re, im, EXACT_REFINE_SWEEPS, loose, 53);
+    const refined = byDisks(re, im, mixedInclusionDisks(c, p, re, im, new Set(loose)), 'inclusion');
+    if (refined) return withOrigin(refined, origin);
+  }
+  return exactVerdict(c, { re, im }, origin);
+}
+
+/**
+ * The roots whose disks keep the verdict open: a disk that reaches the unit circle, or one large against the
+ * distance to the nearest other approximation (it merges components).
+ */
+function looseRoots(re: Float64Array, im: Float64Array, disks: InclusionDisks): number[] {
+  const n = re.length;
+  const out: number[] = [];
+  for (let i = 0; i < n; i++) {
+    const r = disks.radius[i]!;
+    const mod = Math.hypot(re[i]!, im[i]!);
+    let near = Infinity;
+    for (let j = 0; j < n; j++)
+      if (j !== i) near = Math.min(near, Math.hypot(re[i]! - re[j]!, im[i]! - im[j]!));
+    if (!(r < LOOSE_FRACTION * near) || !(Math.abs(mod - 1) > 2 * r)) out.push(i);
+  }
+  return out;
+}
+
+/** A disk counts as loose when its radius reaches this fraction of the distance to the nearest other root. */
+const LOOSE_FRACTION = 0.01;
+
+/** The exact stages: Schur–Cohn in integers (with all roots refined exactly past a work limit), then the circle. */
+function exactVerdict(
+  c: Float64Array,
+  roots: { re: Float64Array; im: Float64Array } | null,
+  origin: number,
+): CoefficientStability {
   const ints = toIntegers(c).reverse(); // ascending powers
   let count = schurCohnExact(ints, EXACT_FIRST_WORK);
-  if (count.kind === 'stopped' && re.length === n) {
+  if (count.kind === 'stopped' && roots) {
+    const { re, im } = roots;
     const p = exactPoly(c);
     refineExactly(p, re, im, EXACT_REFINE_SWEEPS);
     const refined = byDisks(re, im, exactInclusionDisks(p, re, im), 'inclusion');

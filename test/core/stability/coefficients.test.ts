@@ -4,6 +4,33 @@ import { stabilityOfTyped } from '../../../src/core/stability/index.ts';
 import { schurCohnCertified, schurCohnExact } from '../../../src/core/stability/schurCohn.ts';
 import { splitDouble, toIntegers } from '../../../src/core/stability/dyadic.ts';
 import { gcd, sturmCount, divideExact } from '../../../src/core/stability/bigPoly.ts';
+import { findRoots } from '../../../src/core/roots/index.ts';
+import {
+  exactInclusionDisks,
+  inclusionDisks,
+  mixedInclusionDisks,
+} from '../../../src/core/roots/inclusion.ts';
+import { exactPoly } from '../../../src/core/roots/exactEval.ts';
+import { refineExactly } from '../../../src/core/roots/exactRefine.ts';
+import { polyFromRoots } from '../../../src/core/poly.ts';
+import type { Root } from '../../../src/core/types.ts';
+
+/** Order-n digital Butterworth low-pass denominator (bilinear transform), multiplied out in doubles. */
+function butterworthDenominator(n: number, cutoff: number): Float64Array {
+  const wc = Math.tan((Math.PI * cutoff) / 2);
+  const poles: Root[] = [];
+  for (let k = 0; k < n; k++) {
+    const th = (Math.PI * (2 * k + n + 1)) / (2 * n);
+    const sr = wc * Math.cos(th);
+    const si = wc * Math.sin(th);
+    if (si < -1e-12) continue;
+    const dr = 1 - sr;
+    const dd = dr * dr + si * si;
+    const zi = (si * dr + (1 + sr) * si) / dd;
+    poles.push({ re: ((1 + sr) * dr - si * si) / dd, im: Math.abs(zi) < 1e-12 ? 0 : zi, multiplicity: 1 });
+  }
+  return polyFromRoots(poles);
+}
 
 /** Seeded uniform generator on [0, 1) (mulberry32). */
 function uniform(seed: number): () => number {
@@ -134,5 +161,41 @@ describe('stabilityOfTyped', () => {
     expect(s).toMatchObject({ verdict: 'stable', decidedBy: 'coefficients' });
     expect(s.rootsSuggested).toBeUndefined();
     expect(s.reason).toMatch(/confirmed exactly/);
+  });
+
+  it('mixed disks: compensated bounds agree with the plain disks, exact values with the exact disks', () => {
+    const c = butterworthDenominator(24, 0.3);
+    const r = findRoots(c);
+    const p = exactPoly(c);
+    const none = mixedInclusionDisks(c, p, r.re, r.im, new Set());
+    const plain = inclusionDisks(c, r.re, r.im);
+    const every = mixedInclusionDisks(c, p, r.re, r.im, new Set(r.re.map((_, i) => i)));
+    const exact = exactInclusionDisks(p, r.re, r.im);
+    for (let i = 0; i < r.re.length; i++) {
+      expect(none.radius[i]! / plain.radius[i]!).toBeCloseTo(1, 9);
+      expect(every.radius[i]! / exact.radius[i]!).toBeCloseTo(1, 9);
+    }
+  });
+
+  it('a degree-200 Butterworth denominator: the verdict equals the count with every root refined exactly', () => {
+    // Two approximations of a tight pair near the origin lie a rounding apart, so their disks cover the whole
+    // plane; refining those few exactly decides the verdict. The count must equal the slower certified route
+    // (every root refined with exact evaluation, disks from exact values).
+    const c = butterworthDenominator(200, 0.5);
+    const s = stabilityOfCoefficients(c);
+    const r = findRoots(c);
+    const re = Float64Array.from(r.re);
+    const im = Float64Array.from(r.im);
+    const p = exactPoly(c);
+    expect(refineExactly(p, re, im, 40)).toBe(true);
+    const disks = exactInclusionDisks(p, re, im);
+    let outside = 0;
+    for (let i = 0; i < re.length; i++) {
+      const mod = Math.hypot(re[i]!, im[i]!);
+      expect(Math.abs(mod - 1)).toBeGreaterThan(disks.radius[i]!);
+      if (mod > 1) outside++;
+    }
+    expect(s).toMatchObject({ method: 'inclusion', outside, inside: 200 - outside });
+    expect(s.verdict).toBe(outside > 0 ? 'unstable' : 'stable');
   });
 });
