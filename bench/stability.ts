@@ -8,22 +8,11 @@ import { pathToFileURL } from 'node:url';
 import { polyFromRoots } from '../src/core/poly.ts';
 import type { Root } from '../src/core/types.ts';
 import { stabilityOfCoefficients } from '../src/core/stability/coefficients.ts';
-
-/** Seeded uniform generator on [0, 1) (mulberry32). */
-function uniform(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+import { mulberry32 } from '../src/core/random.ts';
 
 /** n/2 seeded conjugate pairs with radii in [0.5, 0.99]: a stable denominator, multiplied out. */
 function stableRandom(n: number): Float64Array {
-  const u = uniform(77 + n);
+  const u = mulberry32(77 + n);
   const roots: Root[] = [];
   for (let k = 0; k < n / 2; k++) {
     const r = 0.5 + 0.49 * u();
@@ -35,7 +24,7 @@ function stableRandom(n: number): Float64Array {
 
 /** Gaussian random coefficients (about half the roots outside the circle). */
 function gaussian(n: number): Float64Array {
-  const u = uniform(99 + n);
+  const u = mulberry32(99 + n);
   return Float64Array.from(
     { length: n + 1 },
     () => Math.sqrt(-2 * Math.log(1 - u())) * Math.cos(2 * Math.PI * u()),
@@ -89,21 +78,25 @@ export function benchStability(): string {
     const a = make();
     const first = stabilityOfCoefficients(a);
     const times: number[] = [];
-    const rounds = 5;
+    const cpu: number[] = [];
+    const rounds = 7;
     for (let r = 0; r < rounds; r++) {
+      const c0 = process.cpuUsage();
       const t0 = performance.now();
       stabilityOfCoefficients(a);
       times.push(performance.now() - t0);
+      const used = process.cpuUsage(c0);
+      cpu.push((used.user + used.system) / 1000);
     }
     rows.push(
-      `| ${name} | ${a.length - 1} | ${first.verdict} | ${first.method} | ${median(times).toFixed(1)} |`,
+      `| ${name} | ${a.length - 1} | ${first.verdict} | ${first.method} | ${median(times).toFixed(1)} | ${median(cpu).toFixed(1)} |`,
     );
   }
   return [
-    'stabilityOfCoefficients on multiplied-out denominators; median ms of 5 calls.',
+    'stabilityOfCoefficients on multiplied-out denominators; median of 7 calls, wall and processor time.',
     '',
-    '| denominator | degree | verdict | decided by | ms |',
-    '| --- | ---: | --- | --- | ---: |',
+    '| denominator | degree | verdict | decided by | wall ms | processor ms |',
+    '| --- | ---: | --- | --- | ---: | ---: |',
     ...rows,
   ].join('\n');
 }
