@@ -102,6 +102,19 @@ function byDisks(
  * or all-zero coefficients.
  */
 export function stabilityOfCoefficients(a: ArrayLike<number>): CoefficientStability {
+  return decide(a, false)!;
+}
+
+/**
+ * As {@link stabilityOfCoefficients}, but within a page's time: null when the certified stages and the
+ * work-limited exact recursion leave the verdict open (a multiplied-out denominator of order 1000 whose
+ * coefficients reach 1e234, say), instead of running the exact recursion to the end.
+ */
+export function boundedStabilityOfCoefficients(a: ArrayLike<number>): CoefficientStability | null {
+  return decide(a, true);
+}
+
+function decide(a: ArrayLike<number>, bounded: boolean): CoefficientStability | null {
   const all = Array.from(a);
   const bad = all.findIndex((v) => !Number.isFinite(v));
   if (bad >= 0) throw new RangeError(`a[${bad}] is ${all[bad]}; coefficients must be finite numbers`);
@@ -118,7 +131,7 @@ export function stabilityOfCoefficients(a: ArrayLike<number>): CoefficientStabil
   const found = findRoots(c);
   const re = Float64Array.from(found.re);
   const im = Float64Array.from(found.im);
-  if (re.length !== n) return exactVerdict(c, null, origin);
+  if (re.length !== n) return exactVerdict(c, null, origin, bounded);
   const disks = inclusionDisks(c, re, im);
   const certified = byDisks(re, im, disks, 'inclusion');
   if (certified) return withOrigin(certified, origin);
@@ -126,14 +139,20 @@ export function stabilityOfCoefficients(a: ArrayLike<number>): CoefficientStabil
   // then cover everything): refine just those with exact evaluation and form the disks again, exact values at
   // the refined roots and compensated bounds elsewhere.
   const loose = looseRoots(re, im, disks);
-  if (loose.length > 0 && loose.length <= Math.max(8, n / 8)) {
+  if (loose.length > 0 && loose.length * n <= LOOSE_WORK) {
     const p = exactPoly(c);
     refineExactly(p, re, im, EXACT_REFINE_SWEEPS, loose, 53);
     const refined = byDisks(re, im, mixedInclusionDisks(c, p, re, im, new Set(loose)), 'inclusion');
     if (refined) return withOrigin(refined, origin);
   }
-  return exactVerdict(c, { re, im }, origin);
+  return exactVerdict(c, { re, im }, origin, bounded);
 }
+
+/**
+ * Bound on (loose roots) × degree for the targeted refinement: an exact evaluation costs about the degree
+ * squared, so this keeps it to tens of milliseconds (20 roots at degree 200, 4 at degree 1000).
+ */
+const LOOSE_WORK = 4000;
 
 /**
  * The roots whose disks keep the verdict open: a disk that reaches the unit circle, or one large against the
@@ -161,9 +180,11 @@ function exactVerdict(
   c: Float64Array,
   roots: { re: Float64Array; im: Float64Array } | null,
   origin: number,
-): CoefficientStability {
+  bounded: boolean,
+): CoefficientStability | null {
   const ints = toIntegers(c).reverse(); // ascending powers
   let count = schurCohnExact(ints, EXACT_FIRST_WORK);
+  if (count.kind === 'stopped' && bounded) return null;
   if (count.kind === 'stopped' && roots) {
     const { re, im } = roots;
     const p = exactPoly(c);
