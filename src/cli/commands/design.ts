@@ -302,6 +302,7 @@ export function runDesign(argv: string[], io: CliIo): number {
   }
   const lines = [`designed: ${result.note}`, ...requirementLines(result, verdict)];
   lines.push(`stability: ${out.stability.verdict.toUpperCase()} — ${out.stability.reason}`);
+  if (out.coefficientWarning) lines.push(`warning: ${out.coefficientWarning.message}.`);
   lines.push(...systemLines(out));
   io.stdout(lines.join('\n') + '\n');
   return 0;

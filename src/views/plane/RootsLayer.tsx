@@ -1,6 +1,6 @@
 /** Every root of the design and its conjugate mirror, zeros under poles, mirrors under stored roots. */
 import type { Root } from '../../core/types.ts';
-import { UNIT_CIRCLE_TOLERANCE } from '../../core/stability.ts';
+import { UNIT_CIRCLE_TOLERANCE } from '../../core/stability/index.ts';
 import type { RootKind, RootRef } from '../../core/model/design.ts';
 import type { PlaneScale } from './geometry.ts';
 import { RootMark } from './RootMark.tsx';

@@ -4,6 +4,7 @@ import { SystemEntry } from './entry/SystemEntry.tsx';
 import { GainRuleControl } from './GainRuleControl.tsx';
 import { RootTable } from './RootTable.tsx';
 import { SystemForms } from './SystemForms.tsx';
+import { TypedWarning } from './TypedWarning.tsx';
 
 export function SystemPage() {
   const [text, setText] = useState('');
@@ -19,6 +20,7 @@ export function SystemPage() {
   return (
     <>
       <SystemEntry text={text} setText={setText} area={area} />
+      <TypedWarning />
       <GainRuleControl />
       <RootTable />
       <SystemForms onEdit={edit} />

@@ -1,6 +1,6 @@
 /** Ideal versus quantized: stability and, when the design has a mask, the mask's verdict, side by side. */
 import type { MaskResult } from '../../../core/mask/index.ts';
-import type { Stability } from '../../../core/stability.ts';
+import type { Stability } from '../../../core/stability/index.ts';
 import { selectMaskResult, selectStability } from '../../../store/derived.ts';
 import {
   selectImplementation,
