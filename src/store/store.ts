@@ -54,6 +54,8 @@ export interface DesignActions {
   /** Replaces the whole design (demo, empty, opened file or link); one undo step. */
   replaceDesign(design: Design): void;
   setName(name: string): void;
+  /** Replaces the design's note (free text); one undo step. */
+  setNote(note: string): void;
 }
 
 export interface HistoryActions {
@@ -170,6 +172,7 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
         return rerun;
       },
       setName: (name) => edit((d) => (d.name === name ? d : { ...d, name })),
+      setNote: (note) => edit((d) => (d.note === note ? d : { ...d, note })),
       ...designerActions(get, apply, edit, () => set({ selection: null })),
       ...implementationActions(get, edit),
       ...signalActions(set, get),
