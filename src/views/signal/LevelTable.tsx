@@ -10,12 +10,15 @@ import { useLevelTable } from './useSpectra.ts';
 import { LEVEL_FLOOR_MARGIN_DB, levelMethod } from '../../core/signal/index.ts';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import type { LevelChoice } from '../../store/signal.ts';
-import { formatHz, formatNumber } from '../shared/format.ts';
+import { formatDb, formatHz } from '../shared/format.ts';
 import { readListField, type FieldReading } from '../shared/fieldReading.ts';
 import { draftInputProps, useDraft } from '../shared/useDraft.ts';
 
+/** A level's figure (the caller writes dB): 3 significant digits by the read-out rule of core/format.ts. */
 function db(x: number): string {
-  return Number.isFinite(x) ? formatNumber(x, 3) : x < 0 ? '−∞' : '∞';
+  return formatDb(x, 3)
+    .replace(/ dB$/, '')
+    .replace(/ dB \(.*\)$/, '');
 }
 
 /** Whether a level is within LEVEL_FLOOR_MARGIN_DB of its noise floor. */
