@@ -62,3 +62,18 @@ test('an empty design offers its note field, and Escape brings the note back', a
   await expect(noteField(page)).toHaveValue('first line\nsecond line');
   await saveScreenshot(page, testInfo, 'drafts-note-two-lines');
 });
+
+test('a half-typed system in the entry box survives a reload and a switch of side page', async ({ page }) => {
+  await openWorkbench(page);
+  const box = page.getByRole('textbox', { name: 'System text' });
+  await box.click();
+  await page.keyboard.type('y[n] = 0.9 y[n-1] + x[n] - x[n-');
+  await page.reload();
+  await page.waitForFunction(() => window.__polewright !== undefined);
+  await expect(box).toHaveValue('y[n] = 0.9 y[n-1] + x[n] - x[n-');
+  await page.getByRole('tab', { name: 'Design' }).click();
+  await page.getByRole('tab', { name: 'System' }).click();
+  await expect(box).toHaveValue('y[n] = 0.9 y[n-1] + x[n] - x[n-');
+  // Typed text is not the design until applied.
+  expect((await readDesign(page)).name).toMatch(/Hopper scale/);
+});
