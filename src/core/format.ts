@@ -31,7 +31,13 @@ export function formatNumber(x: number, digits = 4, style: FormatStyle = {}): st
   if (!Number.isFinite(x)) return styled(Number.isNaN(x) ? 'NaN' : x > 0 ? '∞' : '−∞', style);
   if (x === 0) return '0';
   const ax = Math.abs(x);
-  const s = ax >= 1e6 || ax < 1e-4 ? x.toExponential(digits - 1) : x.toPrecision(digits);
+  // toPrecision writes 4160 to 3 digits as "4.16e+3": below a million, whole numbers read better.
+  const s =
+    ax >= 1e6 || ax < 1e-4
+      ? x.toExponential(digits - 1)
+      : ax >= 1
+        ? String(Number(x.toPrecision(digits)))
+        : x.toPrecision(digits);
   const trimmed = s.includes('e')
     ? s.replace(/\.?0+e/, 'e').replace('e+', 'e')
     : s.includes('.')

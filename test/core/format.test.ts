@@ -19,6 +19,10 @@ describe('numbers people read', () => {
     expect(formatNumber(1.5e-7, 3)).toBe('1.5e-7');
     expect(formatNumber(Infinity)).toBe('∞');
     expect(formatNumber(-2.5, 4, { ascii: true })).toBe('-2.5');
+    // A Q of 4160 to 3 digits: a whole number, not "4.16e3".
+    expect(formatNumber(4163.7, 3)).toBe('4160');
+    expect(formatNumber(-12345.6, 4)).toBe('−12350');
+    expect(formatNumber(999999.9, 4)).toBe('1000000');
   });
   it('chooses Hz or kHz and s, ms or µs', () => {
     expect(formatHz(3150)).toBe('3.15 kHz');
