@@ -91,8 +91,7 @@ export function formatSignedDb(db: number, digits = 4, style: FormatStyle = {}):
 export function formatMargin(marginDb: number, digits = 3, style: FormatStyle = {}): string {
   if (Number.isNaN(marginDb)) return 'not judged';
   if (marginDb === Infinity) return 'passes: no limit applies here';
-  if (marginDb === -Infinity)
-    return 'fails: the response is not finite here (a root on the unit circle meets the limit)';
+  if (marginDb === -Infinity) return 'fails: a root on the unit circle takes the response to ±∞ dB';
   if (Math.abs(marginDb) < DB_RESOLUTION)
     return styled(`passes at the limit (within ${formatNumber(DB_RESOLUTION, 1)} dB)`, style);
   return `${marginDb > 0 ? 'passes' : 'fails'} by ${formatDb(Math.abs(marginDb), digits, style)}`;

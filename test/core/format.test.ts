@@ -85,7 +85,7 @@ describe('numbers people read', () => {
     [3e-9, 'passes at the limit (within 1e-6 dB)'],
     [-3e-9, 'passes at the limit (within 1e-6 dB)'],
     [Infinity, 'passes: no limit applies here'],
-    [-Infinity, 'fails: the response is not finite here (a root on the unit circle meets the limit)'],
+    [-Infinity, 'fails: a root on the unit circle takes the response to ±∞ dB'],
     [NaN, 'not judged'],
   ];
   it.each(MARGINS)('a margin of %s dB reads “%s”', (m, text) => {

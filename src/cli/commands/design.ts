@@ -154,7 +154,7 @@ function requirementLines(result: DesignResult, verdict: MaskResult | null): str
     lines.push(`requirement mask: ${verdict.pass ? 'PASS' : 'FAIL'}`);
     for (const r of verdict.regions)
       lines.push(
-        `  ${r.id}: ${r.pass ? '' : 'FAIL, '}${r.problem ? `not judged: ${r.problem}` : `${formatMargin(r.worstMarginDb, 6, ASCII)}${Number.isFinite(r.worstMarginDb) ? ` at ${fmt(r.worstAtHz)} Hz` : ''}`}`,
+        `  ${r.id}: ${r.pass ? '' : 'FAIL, '}${r.problem ? `not judged: ${r.problem}` : `${formatMargin(r.worstMarginDb, 6, ASCII)}${r.worstMarginDb !== Infinity && Number.isFinite(r.worstAtHz) ? ` at ${fmt(r.worstAtHz)} Hz` : ''}`}`,
       );
   }
   return lines;

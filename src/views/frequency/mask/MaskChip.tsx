@@ -13,7 +13,9 @@ export function MaskChip({ rect }: { rect: PlotRect }) {
   const words = formatMargin(m).replace(/^(passes|fails) (?=by )/, '');
   const margin = Number.isFinite(m) ? words : words.replace(/^(passes|fails): /, '');
   const where =
-    Number.isFinite(m) && Number.isFinite(result.worstAtHz) ? ` at ${formatHz(result.worstAtHz)}` : '';
+    m !== Infinity && !Number.isNaN(m) && Number.isFinite(result.worstAtHz)
+      ? ` at ${formatHz(result.worstAtHz)}`
+      : '';
   return (
     <div
       className={`pw-mask-chip ${result.pass ? 'pw-mask-ok' : 'pw-mask-fail'}`}

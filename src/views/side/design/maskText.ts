@@ -5,7 +5,10 @@ import { formatHz, formatMargin } from '../../shared/format.ts';
 /** "passes by 0.19 dB at 100 Hz" / "fails by 2.01 dB at 120 Hz" (a margin: positive inside the limits). */
 export function marginText(marginDb: number, atHz: number): string {
   const m = formatMargin(marginDb);
-  return Number.isFinite(marginDb) && Number.isFinite(atHz) ? `${m} at ${formatHz(atHz)}` : m;
+  // Where matters for a failure without bound too (which root to move); +∞ and NaN have no place.
+  return marginDb !== Infinity && !Number.isNaN(marginDb) && Number.isFinite(atHz)
+    ? `${m} at ${formatHz(atHz)}`
+    : m;
 }
 
 /** One region's verdict in a few words. */
