@@ -26,6 +26,8 @@ import { defaultSignalView, signalActions, type SignalActions, type SignalState 
 
 export interface DesignActions {
   moveRoot(ref: RootRef, re: number, im: number): void;
+  /** Moves several roots at once (a notch's zeros and poles set by number): one undo step. */
+  moveRoots(moves: readonly { ref: RootRef; re: number; im: number }[]): void;
   addRoot(kind: RootRef['kind'], root: Root): void;
   deleteRoot(ref: RootRef): void;
   setMultiplicity(ref: RootRef, multiplicity: number): void;
@@ -54,6 +56,8 @@ export interface DesignActions {
   /** Replaces the whole design (demo, empty, opened file or link); one undo step. */
   replaceDesign(design: Design): void;
   setName(name: string): void;
+  /** Replaces the design's note (free text); one undo step. */
+  setNote(note: string): void;
 }
 
 export interface HistoryActions {
@@ -123,6 +127,7 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
       signal: defaultSignalView,
 
       moveRoot: (ref, re, im) => edit((d) => edits.moveRoot(d, ref, re, im)),
+      moveRoots: (moves) => edit((d) => moves.reduce((x, m) => edits.moveRoot(x, m.ref, m.re, m.im), d)),
       addRoot: (kind, root) => {
         edit((d) => edits.addRoot(d, kind, root));
         const n = kind === 'zero' ? get().design.zeros.length : get().design.poles.length;
@@ -172,6 +177,7 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
         return rerun;
       },
       setName: (name) => edit((d) => (d.name === name ? d : { ...d, name })),
+      setNote: (note) => edit((d) => (d.note === note ? d : { ...d, note })),
       ...designerActions(get, apply, edit, () => set({ selection: null })),
       ...implementationActions(get, edit),
       ...signalActions(set, get),

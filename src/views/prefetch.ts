@@ -7,10 +7,12 @@ import { loadLinkReader } from '../store/persist.ts';
 import { loadEntryReader } from './side/entry/loadEntryReader.ts';
 import { prefetchSidePages } from './side/sideTabs.ts';
 import { signalRegion } from './time/TimePanel.tsx';
+import { rootNumbers } from './plane/RootEditor.tsx';
 
 function prefetchAll(): void {
   void prefetchSidePages();
   void signalRegion.prefetch();
+  void rootNumbers.prefetch();
   void import('./pictures/savePicture.ts').catch(() => undefined); // retried when a picture is asked for
   // The design reader for files, links and sessions the quick reader leaves to it (share/schema/reader.ts).
   void loadFullReader().catch(() => undefined); // retried when a read needs it

@@ -15,6 +15,9 @@ import { DESIGN_FLAGS, readDesign, type CliDesign } from '../designInput.ts';
 import { toJson } from '../json.ts';
 import type { CliIo } from '../main.ts';
 import { shortNumber } from '../../core/shortNumber.ts';
+import { formatDb } from '../../core/format.ts';
+
+const ASCII = { ascii: true } as const;
 
 /** b and a scaled so that a[0] = 1 (the typed coefficients when the design came as coefficients). */
 export function normalisedTf(d: CliDesign): TransferFunction {
@@ -123,7 +126,7 @@ export function runAnalyze(argv: string[], io: CliIo): number {
     if (r.bandwidthHz !== undefined) parts.push(`bandwidth ${fmt(r.bandwidthHz)} Hz`);
     if (r.timeConstantSeconds !== undefined) parts.push(`tau ${fmt(r.timeConstantSeconds)} s`);
     if (r.decay40dBSeconds !== undefined) parts.push(`40 dB decay ${fmt(r.decay40dBSeconds)} s`);
-    if (r.notchDepthDb !== undefined) parts.push(`notch ${fmt(r.notchDepthDb)} dB`);
+    if (r.notchDepthDb !== undefined) parts.push(`notch ${formatDb(r.notchDepthDb, 10, ASCII)}`);
     lines.push(`  ${parts.join(', ')}`);
   }
   io.stdout(lines.join('\n') + '\n');

@@ -34,6 +34,7 @@ import type { CliIo } from '../main.ts';
 import { writeFileAtomic } from '../output.ts';
 import { analysis, systemLines } from './analyze.ts';
 import { shortNumber } from '../../core/shortNumber.ts';
+import { formatDb, formatMargin } from '../../core/format.ts';
 
 type Variant = (typeof DESIGNER_VARIANTS)[number];
 
@@ -126,12 +127,9 @@ function readDescription(kind: string, v: Variant, args: ParsedArgs, fsOfBase?: 
   return values as DesignerSpec;
 }
 
-/** Margins smaller than this (dB) are printed as 0. */
-export const MARGIN_DISPLAY_ZERO_DB = 1e-9;
-
 const fmt = (x: number) => shortNumber(x, 6);
-/** A margin in dB with its sign; below MARGIN_DISPLAY_ZERO_DB it reads 0 (meets the limit exactly, to rounding). */
-const signed = (x: number) => (Math.abs(x) < MARGIN_DISPLAY_ZERO_DB ? '0' : (x >= 0 ? '+' : '') + fmt(x));
+/** Levels and margins are printed by the one rule of read-outs (core/format.ts), in ASCII. */
+const ASCII = { ascii: true } as const;
 
 /**
  * The designer description a command line asks for (usage errors name the flag and show an example), and
@@ -186,15 +184,15 @@ function requirementLines(result: DesignResult, verdict: MaskResult | null): str
   const m = result.margin;
   if (m) {
     lines.push(
-      `pass band: worst loss ${fmt(m.passbandLossDb)} dB at ${fmt(m.worstPassHz)} Hz, margin ${signed(m.passMarginDb)} dB`,
-      `stop band: least attenuation ${fmt(m.stopbandAttenuationDb)} dB at ${fmt(m.worstStopHz)} Hz, margin ${signed(m.stopMarginDb)} dB`,
+      `pass band: worst loss ${formatDb(m.passbandLossDb, 6, ASCII)} at ${fmt(m.worstPassHz)} Hz, ${formatMargin(m.passMarginDb, 6, ASCII)}`,
+      `stop band: least attenuation ${formatDb(m.stopbandAttenuationDb, 6, ASCII)} at ${fmt(m.worstStopHz)} Hz, ${formatMargin(m.stopMarginDb, 6, ASCII)}`,
     );
   }
   if (verdict) {
     lines.push(`requirement mask: ${verdict.pass ? 'PASS' : 'FAIL'}`);
     for (const r of verdict.regions)
       lines.push(
-        `  ${r.id}: ${r.pass ? 'pass' : 'FAIL'}, worst margin ${signed(r.worstMarginDb)} dB at ${fmt(r.worstAtHz)} Hz`,
+        `  ${r.id}: ${r.pass ? '' : 'FAIL, '}${r.problem ? `not judged: ${r.problem}` : `${formatMargin(r.worstMarginDb, 6, ASCII)}${r.worstMarginDb !== Infinity && Number.isFinite(r.worstAtHz) ? ` at ${fmt(r.worstAtHz)} Hz` : ''}`}`,
       );
   }
   return lines;

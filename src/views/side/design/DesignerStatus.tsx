@@ -4,11 +4,9 @@
  */
 import { selectDesignerResult, selectDesignerStatus } from '../../../store/derived.ts';
 import { useWorkbench, workbenchStore } from '../../../store/useWorkbench.ts';
-import { formatDb, formatNumber } from '../../shared/format.ts';
+import { formatDb, formatMargin } from '../../shared/format.ts';
 import { describeDesigner } from './describe.ts';
 import { FamilyTable } from './FamilyTable.tsx';
-
-const signed = (db: number) => `${db >= 0 ? '+' : ''}${formatDb(db, 3)}`;
 
 export function DesignerStatus({ onChangeParameters }: { onChangeParameters: () => void }) {
   const status = useWorkbench(selectDesignerStatus);
@@ -41,9 +39,8 @@ export function DesignerStatus({ onChangeParameters }: { onChangeParameters: () 
       {value?.margin && (
         <p className="pw-dz-note" data-testid="designer-margin">
           {status.editedByHand ? 'As designed: p' : 'P'}ass-band loss{' '}
-          {formatDb(value.margin.passbandLossDb, 3)} (margin {signed(value.margin.passMarginDb)}), stop band{' '}
-          {formatNumber(value.margin.stopbandAttenuationDb, 3)} dB down (margin{' '}
-          {signed(value.margin.stopMarginDb)})
+          {formatDb(value.margin.passbandLossDb, 3)} ({formatMargin(value.margin.passMarginDb)}), stop band{' '}
+          {formatDb(value.margin.stopbandAttenuationDb, 3)} down ({formatMargin(value.margin.stopMarginDb)})
         </p>
       )}
       {status.editedByHand && (
