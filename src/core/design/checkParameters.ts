@@ -4,7 +4,13 @@
  * throws DesignInputError naming the parameter (and the item of a list), so the page can mark that field.
  */
 import { shortNumber } from '../shortNumber.ts';
-import type { DesignValues, DesignerEntry, ListParameter, Parameter } from './parameters.ts';
+import {
+  orderMax,
+  type DesignValues,
+  type DesignerEntry,
+  type ListParameter,
+  type Parameter,
+} from './parameters.ts';
 import { DesignInputError } from './validate.ts';
 import { MAX_SAMPLE_RATE } from '../model/limits.ts';
 
@@ -91,7 +97,7 @@ export function expectedOf(p: Parameter, values: DesignValues, fs: number): stri
       return `a number greater than ${fmt(typeof lower === 'number' ? lower : 0)}${unitText(p)}`;
     }
     case 'order':
-      return `a whole number from 1 to ${p.max}, or auto`;
+      return `a whole number from 1 to ${orderMax(p, values)}, or auto`;
     case 'list':
       return listExpected(p, p.count.exactly ? p.count.exactly(values) : null, fs);
     case 'choice':
@@ -123,10 +129,10 @@ function checkParameter(p: Parameter, value: unknown, values: DesignValues, fs: 
       return;
     case 'order':
       if (value === 'auto') return;
-      if (typeof value !== 'number' || !Number.isInteger(value) || value < 1 || value > p.max)
+      if (typeof value !== 'number' || !Number.isInteger(value) || value < 1 || value > orderMax(p, values))
         throw new DesignInputError(
           `${name} ${typeof value === 'number' ? fmt(value) : String(value)} is not accepted`,
-          `a whole number from 1 to ${p.max}, or auto`,
+          `a whole number from 1 to ${orderMax(p, values)}, or auto`,
           p.key,
         );
       return;

@@ -6,7 +6,7 @@ export type { DesignerKind, VariantOfEntry } from './registry.ts';
 export { defineDesigner } from './parameters.ts';
 export { FAMILY_OPTIONS, BAND_SHAPE_OPTIONS } from './entries/classicalParameters.ts';
 export type * from './parameters.ts';
-export { textFor } from './parameters.ts';
+export { textFor, orderMax } from './parameters.ts';
 export { isRequired, expectedOf } from './checkParameters.ts';
 export { designNotch, designPeak, designDcBlocker } from './notch.ts';
 export { designComb, designHarmonicNotches } from './comb.ts';

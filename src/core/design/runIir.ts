@@ -2,7 +2,7 @@
  * Runs a classical IIR designer description whose parameters have passed their checks: estimates the order
  * if asked, designs, and judges against the requirement when there is one.
  */
-import type { BandShape } from './iir.ts';
+import type { BandShape, IirFamily } from './iir.ts';
 import { designIir } from './iir.ts';
 import { requirementMargin } from './margin.ts';
 import { estimateOrder } from './orderEstimate.ts';
@@ -16,7 +16,7 @@ import { shortNumber } from '../shortNumber.ts';
 const responseWords = (r: BandShape) => BAND_SHAPE_OPTIONS.find((o) => o.value === r)!.label.toLowerCase();
 
 /** The pass-band/stop-band edges must nest the right way round for the band shape. */
-function checkNesting(r: BandShape, p: number[], s: number[]): void {
+export function checkNesting(r: BandShape, p: number[], s: number[]): void {
   const ok = {
     lowpass: () => p[0]! < s[0]!,
     highpass: () => s[0]! < p[0]!,
@@ -38,7 +38,7 @@ function checkNesting(r: BandShape, p: number[], s: number[]): void {
 }
 
 /** The requirement of a description that gives one (its parameters are checked: both bands, ripple, attenuation). */
-function requirementOf(spec: IirSpec): Requirement | undefined {
+export function requirementOf(spec: IirSpec): Requirement | undefined {
   if (!spec.passbandHz || !spec.stopbandHz) return undefined;
   checkNesting(spec.response, spec.passbandHz, spec.stopbandHz);
   return {
@@ -79,7 +79,8 @@ function beyondPrecision(
 
 /** Designs a classical filter from its checked description (throws DesignInputError on what the checks cannot see). */
 export function runIir(spec: IirSpec): DesignResult {
-  const { fs, family } = spec;
+  const { fs } = spec;
+  const family = spec.family as IirFamily;
   const req = requirementOf(spec);
   const estimate = req && spec.order === 'auto' ? estimateOrder(family, req) : undefined;
   if (estimate && estimate.order > MAX_DESIGN_ORDER)

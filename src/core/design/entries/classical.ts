@@ -1,6 +1,7 @@
 /** The registry entry of the classical IIR designs: its band shapes, examples and starting values. */
 import { defineDesigner, type DesignValues } from '../parameters.ts';
 import { runIir } from '../runIir.ts';
+import { isFirFamily, runFir } from '../fir/runFir.ts';
 import { r3 } from './common.ts';
 import { BAND_SHAPE_OPTIONS, FAMILY_OPTIONS, IIR_PARAMETERS } from './classicalParameters.ts';
 
@@ -79,5 +80,5 @@ export const iirDesigner = defineDesigner({
       ...START[value]!((f) => r3(f * fs)),
     }),
   })),
-  design: (spec) => runIir(spec),
+  design: (spec) => (isFirFamily(spec.family) ? runFir({ ...spec, family: spec.family }) : runIir(spec)),
 });
