@@ -17,12 +17,21 @@ function rampCosIntegral(u: number, w1: number, w2: number): number {
   return f(w2) - f(w1);
 }
 
-/** Solves the symmetric positive definite q·x = r in place by Cholesky; false when q is not positive definite. */
+/**
+ * Smallest pivot of the Cholesky factorisation, relative to the largest diagonal entry, that still
+ * determines the taps: below it the answer depends on rounding (the Gram matrix of cosines over bands
+ * that leave a wide gap is nearly singular).
+ */
+export const LEAST_SQUARES_PIVOT_FLOOR = 1e-12;
+
+/** Solves the symmetric positive definite q·x = r in place by Cholesky; false when q is (nearly) singular. */
 function choleskySolve(q: Float64Array, r: Float64Array, n: number): boolean {
+  let top = 0;
+  for (let j = 0; j < n; j++) top = Math.max(top, q[j * n + j]!);
   for (let j = 0; j < n; j++) {
     let d = q[j * n + j]!;
     for (let k = 0; k < j; k++) d -= q[j * n + k]! ** 2;
-    if (!(d > 0)) return false;
+    if (!(d > LEAST_SQUARES_PIVOT_FLOOR * top)) return false;
     const l = Math.sqrt(d);
     q[j * n + j] = l;
     for (let i = j + 1; i < n; i++) {
@@ -71,7 +80,9 @@ export function leastSquaresTaps(taps: number, bands: readonly FirBand[]): Float
   }
   for (let k = 0; k < n; k++) for (let l = 0; l < k; l++) q[l * n + k] = q[k * n + l]!;
   if (!choleskySolve(q, r, n))
-    throw new RangeError(`the bands leave ${taps} least-squares taps without a unique answer`);
+    throw new RangeError(
+      `the gaps between the bands are too wide for ${taps} least-squares taps: the taps are not determined`,
+    );
   const h = new Float64Array(taps);
   const mid = (taps - 1) / 2;
   for (let k = 0; k < n; k++) {

@@ -226,23 +226,14 @@ function tapsFromCosines(c: Float64Array, taps: number, neg: boolean): Float64Ar
   return h;
 }
 
-/**
- * Equiripple taps over the bands (cycles per sample). For 'bands' each band asks a constant amplitude
- * (`from`); for 'differentiator' the amplitude `from`·f; for 'hilbert' the amplitude `from`. The
- * differentiator and Hilbert transformer are antisymmetric: H = j·A(ω)·e^{−jω(taps−1)/2}.
- */
-export function remezTaps(taps: number, bands: readonly FirBand[], kind: RemezKind = 'bands'): RemezResult {
-  checkBands(bands);
-  const neg = kind !== 'bands';
-  const odd = taps % 2 === 1;
-  const n = !neg ? (odd ? (taps + 1) / 2 : taps / 2) : odd ? (taps - 1) / 2 : taps / 2;
-  if (n < 1) throw new RangeError(`${taps} taps are too few for this design`);
-  const g = makeGrid(taps, bands, kind, n);
+/** The Remez exchange from an evenly spread reference whose points sit `shift` of a step further on. */
+function exchange(g: Grid, n: number, shift: number) {
   const m = g.f.length;
-  if (m < n + 1) throw new RangeError(`the bands are too narrow for ${taps} taps`);
   let ref: Int32Array = new Int32Array(n + 1);
-  for (let j = 0; j < n; j++) ref[j] = Math.floor((j * (m - 1)) / n);
+  for (let j = 0; j < n; j++) ref[j] = Math.min(m - 2, Math.floor(((j + shift) * (m - 1)) / n));
   ref[n] = m - 1;
+  for (let j = 1; j <= n; j++) if (ref[j]! <= ref[j - 1]!) ref[j] = ref[j - 1]! + 1;
+  if (ref[n]! > m - 1) return { p: interpolate(g, ref.subarray(0, 2)), converged: false, iterations: 0 };
   const e = new Float64Array(m);
   let p = interpolate(g, ref);
   let converged = false;
@@ -259,6 +250,32 @@ export function remezTaps(taps: number, bands: readonly FirBand[], kind: RemezKi
     ref = next;
     p = interpolate(g, ref);
   }
+  return { p, converged, iterations };
+}
+
+/**
+ * Equiripple taps over the bands (cycles per sample). For 'bands' each band asks a constant amplitude
+ * (`from`); for 'differentiator' the amplitude `from`·f; for 'hilbert' the amplitude `from`. The
+ * differentiator and Hilbert transformer are antisymmetric: H = j·A(ω)·e^{−jω(taps−1)/2}.
+ */
+export function remezTaps(taps: number, bands: readonly FirBand[], kind: RemezKind = 'bands'): RemezResult {
+  checkBands(bands);
+  const neg = kind !== 'bands';
+  const odd = taps % 2 === 1;
+  const n = !neg ? (odd ? (taps + 1) / 2 : taps / 2) : odd ? (taps - 1) / 2 : taps / 2;
+  if (n < 1) throw new RangeError(`${taps} taps are too few for this design`);
+  const g = makeGrid(taps, bands, kind, n);
+  const m = g.f.length;
+  if (m < n + 1) throw new RangeError(`the bands are too narrow for ${taps} taps`);
+  // The program's start spreads the reference evenly over the grid's indices. A start whose δ is 0 (the
+  // desired values happen to lie on a lower-degree polynomial there) has no alternation to exchange from,
+  // so the exchange is retried from the same spread shifted by a fraction of its step.
+  let run = exchange(g, n, 0);
+  for (const shift of [0.5, 0.25, 0.75]) {
+    if (run.converged) break;
+    run = exchange(g, n, shift);
+  }
+  const { p, converged, iterations } = run;
   // P's coefficients from its values at f_j = j/(2n − 1) (an even sequence of period 2n − 1)
   const len = 2 * n - 1;
   const values = new Float64Array(n);

@@ -117,3 +117,41 @@ describe('FIR families of the classical designer', () => {
     expect(r.value.note).toMatch(/β 5\.65326/);
   });
 });
+
+describe('the differentiator and Hilbert transformer against scipy.signal.remez', () => {
+  const cases =
+    loadFixture<{ kind: string; taps: number; edgesHz: number[]; fs: number; h: number[] }[]>('fir_remez');
+  const taps = (s: DesignerSpec) => {
+    const r = runDesigner(s);
+    if (!r.ok) throw new Error(r.error.message);
+    return zpkToTf(r.value.zpk).b;
+  };
+  const maxAbs = (h: number[]) => Math.max(...h.map(Math.abs));
+
+  it('a differentiator is scipy’s of slope 1 times 2π (gain ω in rad/sample)', () => {
+    for (const c of cases.filter((k) => k.kind === 'differentiator' && k.edgesHz.length === 2)) {
+      const b = taps({
+        kind: 'differentiator',
+        fs: c.fs,
+        order: c.taps - 1,
+        upToHz: c.edgesHz[1]!,
+      } as DesignerSpec);
+      // scipy.signal.remez(type='differentiator') 1.17; taps from our roots, so to 1e-9 of the largest
+      const want = c.h.map((v) => 2 * Math.PI * v);
+      for (let n = 0; n < want.length; n++)
+        expect(Math.abs(b[n]! - want[n]!)).toBeLessThan(1e-9 * maxAbs(want));
+    }
+  });
+
+  it('a Hilbert transformer is scipy’s with the sign of −j on positive frequencies', () => {
+    for (const c of cases.filter((k) => k.kind === 'hilbert' && k.taps === 31)) {
+      const b = taps({ kind: 'hilbert', fs: c.fs, order: c.taps - 1, bandHz: c.edgesHz } as DesignerSpec);
+      // scipy.signal.remez(type='hilbert') 1.17 gives +j; the ideal transformer's taps 2/(πn) at odd n (common
+      // practice) are positive after the middle, as ours are
+      const want = c.h.map((v) => -v);
+      for (let n = 0; n < want.length; n++)
+        expect(Math.abs(b[n]! - want[n]!)).toBeLessThan(1e-9 * maxAbs(want));
+      expect(b[16]).toBeGreaterThan(0.5);
+    }
+  });
+});
