@@ -7,6 +7,7 @@ import { DesignInputError, MAX_FIR_ORDER } from '../validate.ts';
 import { remezTaps } from '../fir/remez.ts';
 import { tfToZpk } from '../../system/transferFunction.ts';
 import type { FirBand } from '../fir/bands.ts';
+import { snapLinearPhaseZeros } from '../fir/linearPhaseZeros.ts';
 import { fmt, r3 } from './common.ts';
 
 const GROUP = 'FIR operators';
@@ -74,7 +75,7 @@ export const differentiatorDesigner = defineDesigner({
       'differentiator',
     );
     return {
-      zpk: tfToZpk({ b: Array.from(r.taps), a: [1] }),
+      zpk: snapLinearPhaseZeros(tfToZpk({ b: Array.from(r.taps), a: [1] })),
       note: `order ${spec.order} equiripple differentiator, gain ω (rad/sample; × fs for per second) within ${fmt((100 * r.deviation) / (2 * Math.PI))} % up to ${fmt(spec.upToHz)} Hz, ${linear(spec.order)}, fs ${fmt(spec.fs)} Hz`,
     };
   },
@@ -120,7 +121,7 @@ export const hilbertDesigner = defineDesigner({
       'hilbert',
     );
     return {
-      zpk: tfToZpk({ b: Array.from(r.taps), a: [1] }),
+      zpk: snapLinearPhaseZeros(tfToZpk({ b: Array.from(r.taps), a: [1] })),
       note: `order ${spec.order} equiripple Hilbert transformer, gain 1 within ±${fmt(r.deviation)} from ${fmt(lo)} to ${fmt(hi)} Hz, ${linear(spec.order)} plus a quarter turn, fs ${fmt(spec.fs)} Hz`,
     };
   },

@@ -19,6 +19,7 @@ import { remezTaps } from './remez.ts';
 import { windowMethodTaps } from './windowMethod.ts';
 import { kaiserBeta, WINDOW_FIGURES, type FirWindow } from './windows.ts';
 import { meetsOnGrid } from './check.ts';
+import { snapLinearPhaseZeros } from './linearPhaseZeros.ts';
 
 /** The FIR methods, as values of the classical designer's family. */
 export const FIR_FAMILIES = ['kaiser', 'hann', 'hamming', 'blackman', 'leastsquares', 'equiripple'] as const;
@@ -194,7 +195,7 @@ export function runFir(spec: IirSpec & { family: FirFamily }): DesignResult {
       );
   }
   let h = tapsAt(plan, order);
-  let zpk = tfToZpk({ b: Array.from(h), a: [1] });
+  let zpk = snapLinearPhaseZeros(tfToZpk({ b: Array.from(h), a: [1] }));
   let margin = req ? requirementMargin(zpk, req) : undefined;
   // the grid check of the search and the refined margin can disagree by a hair at the edge of meeting
   for (
@@ -207,7 +208,7 @@ export function runFir(spec: IirSpec & { family: FirFamily }): DesignResult {
     if (m > MAX_FIR_ORDER) break;
     order = m;
     h = tapsAt(plan, order);
-    zpk = tfToZpk({ b: Array.from(h), a: [1] });
+    zpk = snapLinearPhaseZeros(tfToZpk({ b: Array.from(h), a: [1] }));
     margin = requirementMargin(zpk, req!);
   }
   const fmt = (v: number) => shortNumber(v, 6);

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { runDesigner, type BandShape, type DesignerSpec } from '../../../../src/core/design/index.ts';
 import { zpkToTf } from '../../../../src/core/system/transferFunction.ts';
+import { responseZpk } from '../../../../src/core/response/index.ts';
 import { loadFixture } from '../../../helpers/fixtures.ts';
 
 interface LeastOrderCase {
@@ -152,6 +153,48 @@ describe('the differentiator and Hilbert transformer against scipy.signal.remez'
       for (let n = 0; n < want.length; n++)
         expect(Math.abs(b[n]! - want[n]!)).toBeLessThan(1e-9 * maxAbs(want));
       expect(b[16]).toBeGreaterThan(0.5);
+    }
+  });
+});
+
+describe('linear-phase FIR zeros', () => {
+  it('a zero of the stop band sits exactly on the circle and the group delay is order/2 everywhere', () => {
+    for (const s of [
+      {
+        fs: 2000,
+        family: 'equiripple',
+        response: 'lowpass',
+        order: 'auto',
+        passbandHz: [100],
+        stopbandHz: [150],
+        rippleDb: 1,
+        attenuationDb: 60,
+      },
+      { fs: 1000, family: 'kaiser', response: 'bandstop', order: 80, edgesHz: [45, 55], attenuationDb: 50 },
+      {
+        fs: 1000,
+        family: 'leastsquares',
+        response: 'bandpass',
+        order: 60,
+        passbandHz: [150, 250],
+        stopbandHz: [100, 300],
+        rippleDb: 1,
+        attenuationDb: 40,
+      },
+    ]) {
+      const r = runDesigner(spec(s));
+      if (!r.ok) throw new Error(r.error.message);
+      const order = r.value.zpk.poles[0]!.multiplicity;
+      const onCircle = r.value.zpk.zeros.filter((z) => Math.abs(Math.hypot(z.re, z.im) - 1) < 1e-6);
+      // an equiripple stop band has its zeros on the circle (the error alternates through 0 there)
+      if (s.family === 'equiripple') expect(onCircle.length).toBeGreaterThan(20);
+      for (const z of onCircle)
+        expect(Math.abs(z.re * z.re + z.im * z.im - 1)).toBeLessThanOrEqual(4 * Number.EPSILON);
+      const omega = Float64Array.from({ length: 4096 }, (_, i) => (Math.PI * i) / 4095);
+      const gd = responseZpk(r.value.zpk, omega).groupDelay;
+      // common practice: a linear-phase FIR of order N delays every frequency by N/2 samples
+      for (let i = 0; i < gd.length; i++)
+        expect(Math.abs(gd[i]! - order / 2), `${s.family} at ω ${omega[i]}`).toBeLessThan(1e-6);
     }
   });
 });
