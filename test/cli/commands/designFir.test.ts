@@ -17,18 +17,17 @@ const maxAbs = (h: number[]) => Math.max(...h.map(Math.abs));
 
 describe('polewright design with the FIR families', () => {
   it('designs a Kaiser-window low-pass whose b is scipy’s firwin and whose a is 1', async () => {
-    const cases =
-      loadFixture<
-        {
-          window: string;
-          beta: number;
-          response: string;
-          cutoffsHz: number[];
-          fs: number;
-          taps: number;
-          h: number[];
-        }[]
-      >('fir_firwin');
+    const cases = loadFixture<
+      {
+        window: string;
+        beta: number;
+        response: string;
+        cutoffsHz: number[];
+        fs: number;
+        taps: number;
+        h: number[];
+      }[]
+    >('fir_firwin');
     const c = cases.find(
       (k) => k.window === 'kaiser' && k.response === 'lowpass' && k.fs === 1000 && k.taps === 65,
     )!;
