@@ -6,7 +6,7 @@
  * again, which keeps a drag step cheap.
  */
 import type { Root } from '../types.ts';
-import { designerEntry, orderMax, type DesignerSpec } from '../design/index.ts';
+import { designerEntry, orderMax, type DesignerSpec } from '../design/light.ts';
 import type { RequirementMask } from '../mask/index.ts';
 import { validateSettings } from '../fixed/index.ts';
 import { shortNumber } from '../shortNumber.ts';

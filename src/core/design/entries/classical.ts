@@ -1,7 +1,7 @@
 /** The registry entry of the classical IIR designs: its band shapes, examples and starting values. */
 import { defineDesigner, type DesignValues } from '../parameters.ts';
-import { runIir } from '../runIir.ts';
-import { isFirFamily, runFir } from '../fir/runFir.ts';
+import { designEngine } from '../engineSlot.ts';
+import { isFirFamily } from '../fir/families.ts';
 import { r3 } from './common.ts';
 import { BAND_SHAPE_OPTIONS, FAMILY_OPTIONS, IIR_PARAMETERS } from './classicalParameters.ts';
 
@@ -105,5 +105,5 @@ export const iirDesigner = defineDesigner({
       ...START[value]!((f) => r3(f * fs)),
     }),
   })),
-  design: (spec) => (isFirFamily(spec.family) ? runFir({ ...spec, family: spec.family }) : runIir(spec)),
+  design: (spec) => designEngine().classical(spec),
 });

@@ -20,20 +20,9 @@ import { windowMethodTaps } from './windowMethod.ts';
 import { kaiserBeta, WINDOW_FIGURES, type FirWindow } from './windows.ts';
 import { meetsOnGrid } from './check.ts';
 import { snapLinearPhaseZeros } from './linearPhaseZeros.ts';
+import { designsFromBands, type FirFamily } from './families.ts';
 
-/** The FIR methods, as values of the classical designer's family. */
-export const FIR_FAMILIES = ['kaiser', 'hann', 'hamming', 'blackman', 'leastsquares', 'equiripple'] as const;
-export type FirFamily = (typeof FIR_FAMILIES)[number];
-
-/** Whether a family value is one of the FIR methods. */
-export function isFirFamily(family: unknown): family is FirFamily {
-  return (FIR_FAMILIES as readonly unknown[]).includes(family);
-}
-
-/** Whether the family designs from pass and stop bands (rather than cut-offs). */
-export function designsFromBands(family: unknown): boolean {
-  return family === 'leastsquares' || family === 'equiripple';
-}
+export { FIR_FAMILIES, designsFromBands, isFirFamily, type FirFamily } from './families.ts';
 
 const WORDS: Record<FirFamily, string> = {
   kaiser: 'Kaiser-window',
