@@ -12,6 +12,9 @@ import {
   type Parameter,
 } from './parameters.ts';
 import { DesignInputError } from './validate.ts';
+import { checkInBand } from './checkInBand.ts';
+
+export { checkInBand } from './checkInBand.ts';
 import { MAX_SAMPLE_RATE } from '../model/limits.ts';
 
 const fmt = (v: number) => shortNumber(v, 10);
@@ -21,19 +24,6 @@ const nameOf = (p: Parameter) => p.name ?? p.key;
 /** Whether a parameter must be present for these values. */
 export function isRequired(p: Parameter, values: DesignValues): boolean {
   return p.presence === 'required' || (p.requiredWhen?.(values) ?? false);
-}
-
-/** A frequency strictly inside (0, fs/2), named `name` in messages. */
-export function checkInBand(name: string, f: unknown, fs: number, key: string, index?: number): number {
-  const expected = `a frequency between 0 and ${fmt(fs / 2)} Hz (fs/2), exclusive`;
-  if (typeof f !== 'number' || !Number.isFinite(f) || !(f > 0 && f < fs / 2))
-    throw new DesignInputError(
-      `${name} = ${typeof f === 'number' ? fmt(f) : String(f)} Hz lies outside (0, ${fmt(fs / 2)}) Hz`,
-      expected,
-      key,
-      index,
-    );
-  return f;
 }
 
 /** A finite number above `lower` (0 by default). */

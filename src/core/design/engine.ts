@@ -1,5 +1,6 @@
 /**
- * The heavy design algorithms behind the registry's light entries (engineSlot.ts): the classical designer
+ * The heavy design algorithms behind the registry's light entries (engineSlot.ts): the door that checks a
+ * description's parameters (runDesigner.ts), the classical designer
  * (IIR prototypes and elliptic functions, FIR window / least squares / equiripple, order estimation) and the
  * equiripple FIR operators. Not in the page's first view: store/designEngine.ts loads it after the first
  * paint; index.ts installs it for the command line and the tests.
@@ -9,6 +10,7 @@ import type { DesignResult } from './result.ts';
 import type { IirSpec } from './entries/classicalParameters.ts';
 import { DesignInputError } from './validate.ts';
 import { runIir } from './runIir.ts';
+import { runDesigner } from './runDesigner.ts';
 import { runFir } from './fir/runFir.ts';
 import { isFirFamily } from './fir/families.ts';
 import { remezTaps } from './fir/remez.ts';
@@ -65,4 +67,4 @@ function classical(spec: IirSpec): DesignResult {
 }
 
 /** The engine the registry's entries call through designEngine(). */
-export const DESIGN_ENGINE: DesignEngine = { classical, differentiator, hilbert };
+export const DESIGN_ENGINE: DesignEngine = { run: runDesigner, classical, differentiator, hilbert };

@@ -1,15 +1,19 @@
 /**
- * Where the registry finds the heavy design algorithms (IIR prototypes, elliptic functions, FIR window,
- * least squares and equiripple, order estimation): engine.ts. The registry entries stay light (parameters,
+ * Where the registry finds the heavy design algorithms (the door that checks a description's parameters,
+ * IIR prototypes, elliptic functions, FIR window, least squares and equiripple, order estimation): engine.ts. The registry entries stay light (parameters,
  * checks, examples), so the page's first view carries them without the algorithms; the page installs the
  * engine when its chunk arrives (store/designEngine.ts), the command line and the tests at start (index.ts
  * installs it on import). A design run before then throws DesignEnginePending, which runDesigner lets
  * through: the caller waits for the engine and runs again.
  */
+import type { Result } from '../types.ts';
 import type { DesignResult } from './result.ts';
+import type { DesignerSpec } from './spec.ts';
 import type { IirSpec } from './entries/classicalParameters.ts';
 
 export interface DesignEngine {
+  /** The door: checks a description against its registry entry, designs, refuses roots that merge. */
+  run(spec: DesignerSpec): Result<DesignResult>;
   /** The classical designer: an IIR family or an FIR method. */
   classical(spec: IirSpec): DesignResult;
   differentiator(spec: { kind: 'differentiator'; fs: number; order: number; upToHz: number }): DesignResult;

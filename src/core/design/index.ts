@@ -6,11 +6,29 @@ import { installDesignEngine } from './engineSlot.ts';
 
 installDesignEngine(DESIGN_ENGINE);
 
-export * from './light.ts';
-export { DESIGN_ENGINE } from './engine.ts';
+export { runDesigner, COMB_DIVISOR_TOLERANCE } from './runDesigner.ts'; // directly, not through the slot
+export type { DesignerSpec, DesignResult, IirSpec } from './spec.ts';
+export { DESIGNERS, DESIGNER_VARIANTS, designerEntry, registryOf, variantOf } from './registry.ts';
+export type { DesignerKind, VariantOfEntry } from './registry.ts';
+export { defineDesigner } from './parameters.ts';
+export { FAMILY_OPTIONS, BAND_SHAPE_OPTIONS } from './entries/classicalParameters.ts';
+export type * from './parameters.ts';
+export { textFor, orderMax } from './parameters.ts';
+export { isRequired, expectedOf } from './checkParameters.ts';
+export { designNotch, designPeak, designDcBlocker } from './notch.ts';
+export { designComb, designHarmonicNotches } from './comb.ts';
+export { designPeakingEq, designShelf } from './equaliser.ts';
+export type { EqWidth } from './equaliser.ts';
+export { biquadToZpk } from './biquad.ts';
 export { designIir } from './iir.ts';
 export type { IirFamily, BandShape, IirParameters } from './iir.ts';
 export { estimateOrder } from './orderEstimate.ts';
 export type { OrderEstimate } from './orderEstimate.ts';
 export { requirementMargin, MARGIN_GRID_POINTS, MARGIN_REFINE_TOLERANCE } from './margin.ts';
 export type { RequirementMargin } from './margin.ts';
+export { requirementRegions } from './requirement.ts';
+export type { Requirement } from './requirement.ts';
+export { MAX_DESIGN_ORDER } from './validate.ts';
+export { DESIGN_ENGINE } from './engine.ts';
+export { DesignEnginePending, designEngineReady, installDesignEngine } from './engineSlot.ts';
+export type { DesignEngine } from './engineSlot.ts';

@@ -2,7 +2,7 @@
 import { defineDesigner } from '../parameters.ts';
 import { designComb, designHarmonicNotches } from '../comb.ts';
 import { designDcBlocker, designNotch, designPeak } from '../notch.ts';
-import { checkInBand } from '../checkParameters.ts';
+import { checkInBand } from '../checkInBand.ts';
 import { DesignInputError } from '../validate.ts';
 import { shortNumber } from '../../shortNumber.ts';
 import { MAX_HARMONICS, MAX_ORDER } from '../../model/limits.ts';
