@@ -18,6 +18,9 @@ import { tfToZpk } from '../system/transferFunction.ts';
 import type { FirBand } from './fir/bands.ts';
 import { snapLinearPhaseZeros } from './fir/linearPhaseZeros.ts';
 import { fmt } from './entries/common.ts';
+import { designComb, designHarmonicNotches } from './comb.ts';
+import { designDcBlocker, designNotch, designPeak } from './notch.ts';
+import { designPeakingEq, designShelf } from './equaliser.ts';
 
 /** Equiripple taps of an operator, refusing what the exchange cannot settle. */
 function operatorTaps(order: number, band: FirBand, kind: 'differentiator' | 'hilbert') {
@@ -67,4 +70,16 @@ function classical(spec: IirSpec): DesignResult {
 }
 
 /** The engine the registry's entries call through designEngine(). */
-export const DESIGN_ENGINE: DesignEngine = { run: runDesigner, classical, differentiator, hilbert };
+export const DESIGN_ENGINE: DesignEngine = {
+  run: runDesigner,
+  classical,
+  differentiator,
+  hilbert,
+  designNotch,
+  designPeak,
+  designDcBlocker,
+  designHarmonicNotches,
+  designComb,
+  designPeakingEq,
+  designShelf,
+};

@@ -10,6 +10,9 @@ import type { Result } from '../types.ts';
 import type { DesignResult } from './result.ts';
 import type { DesignerSpec } from './spec.ts';
 import type { IirSpec } from './entries/classicalParameters.ts';
+import type { designComb, designHarmonicNotches } from './comb.ts';
+import type { designDcBlocker, designNotch, designPeak } from './notch.ts';
+import type { designPeakingEq, designShelf } from './equaliser.ts';
 
 export interface DesignEngine {
   /** The door: checks a description against its registry entry, designs, refuses roots that merge. */
@@ -18,6 +21,14 @@ export interface DesignEngine {
   classical(spec: IirSpec): DesignResult;
   differentiator(spec: { kind: 'differentiator'; fs: number; order: number; upToHz: number }): DesignResult;
   hilbert(spec: { kind: 'hilbert'; fs: number; order: number; bandHz: readonly number[] }): DesignResult;
+  /** The small designers' roots (notch.ts, comb.ts, equaliser.ts), which their registry entries call. */
+  designNotch: typeof designNotch;
+  designPeak: typeof designPeak;
+  designDcBlocker: typeof designDcBlocker;
+  designHarmonicNotches: typeof designHarmonicNotches;
+  designComb: typeof designComb;
+  designPeakingEq: typeof designPeakingEq;
+  designShelf: typeof designShelf;
 }
 
 /** Thrown by a design that needs the engine before it is installed. */
