@@ -18,7 +18,12 @@ import type { ViewSettings } from './view.ts';
 import type { WorkbenchState } from './store.ts';
 import { memoLast } from './memo.ts';
 import { evaluateMask, type MaskResult } from '../core/mask/index.ts';
-import { runDesigner, type DesignerSpec, type DesignResult } from '../core/design/index.ts';
+import {
+  DesignEnginePending,
+  runDesigner,
+  type DesignerSpec,
+  type DesignResult,
+} from '../core/design/light.ts';
 import type { Result } from '../core/types.ts';
 import { differsFromDesigner } from './designer.ts';
 import { hzToOmega } from '../core/units.ts';
@@ -167,6 +172,19 @@ const maskResultOf = memoLast(
 export const selectMaskResult = (s: WorkbenchState): MaskResult | null =>
   maskResultOf(s.design.mask, zpkOf(s.design), s.design.sampleRate, s.dragging);
 
+/**
+ * f's value, or null while the design algorithms it needs have not loaded (store/designEngine.ts): no
+ * verdict rather than a wrong one. Nothing is memoised then (the memo keeps only returned values), and the
+ * views that show it come with the Design page, which brings the algorithms with it.
+ */
+function whileEngineLoads<T>(f: () => T): T | null {
+  try {
+    return f();
+  } catch (e) {
+    if (e instanceof DesignEnginePending) return null;
+    throw e;
+  }
+}
 const designerOutputOf = memoLast((spec: DesignerSpec | undefined) => (spec ? runDesigner(spec) : null));
 /** One status object per (spec, edited) pair, so a root drag does not make a new one per move. */
 const statusObjectOf = memoLast((spec: DesignerSpec, editedByHand: boolean) => ({ spec, editedByHand }));
@@ -181,10 +199,10 @@ const designerStatusOf = memoLast((design: Design) =>
  */
 export const selectDesignerStatus = (
   s: WorkbenchState,
-): { spec: DesignerSpec; editedByHand: boolean } | null => designerStatusOf(s.design);
+): { spec: DesignerSpec; editedByHand: boolean } | null => whileEngineLoads(() => designerStatusOf(s.design));
 /**
  * What the design's designer gives (its roots, note, estimated order and margins), keyed on the designer's
  * description: run once per description, never per root move.
  */
 export const selectDesignerResult = (s: WorkbenchState): Result<DesignResult> | null =>
-  designerOutputOf(s.design.designer);
+  whileEngineLoads(() => designerOutputOf(s.design.designer));

@@ -10,7 +10,7 @@
  * output compared with the design, so undoing back to the designed roots reads "as designed" again.
  */
 import type { Result, Root } from '../core/types.ts';
-import { designerEntry, runDesigner, type DesignerSpec, type DesignResult } from '../core/design/index.ts';
+import { designerEntry, runDesigner, type DesignerSpec, type DesignResult } from '../core/design/light.ts';
 import * as masks from '../core/mask/index.ts';
 import type { MaskRegion, MaskRegionPatch, RegionEdge, RequirementMask } from '../core/mask/index.ts';
 import type { Design } from '../core/model/design.ts';
@@ -183,7 +183,9 @@ export interface DesignerActions {
   /**
    * Runs a designer: replaces roots, gain (a fixed k) and sample rate with its output and remembers it;
    * the mask follows `policy` (default 'fill'). One undo step. On bad parameters nothing changes and
-   * the InputError says what to change.
+   * the InputError says what to change. Needs the design algorithms (store/designEngine.ts): the Design
+   * page, which calls it, brings them with its code; before they are installed it throws
+   * DesignEnginePending and changes nothing (whenDesignEngine waits and runs again).
    */
   runDesigner(spec: DesignerSpec, policy?: DesignerMaskPolicy): Result<DesignResult>;
   /** Re-runs the remembered designer with changed parameters (replaces the roots; one undo step). */

@@ -4,6 +4,7 @@
  */
 import { loadFullReader } from '../share/schema/reader.ts';
 import { loadLinkReader } from '../store/persist.ts';
+import { loadDesignEngine } from '../store/designEngine.ts';
 import { loadEntryReader } from './side/entry/loadEntryReader.ts';
 import { prefetchSidePages } from './side/sideTabs.ts';
 import { signalRegion } from './time/TimePanel.tsx';
@@ -18,6 +19,8 @@ function prefetchAll(): void {
   void loadFullReader().catch(() => undefined); // retried when a read needs it
   void loadEntryReader().catch(() => undefined); // retried when the entry is applied
   void loadLinkReader().catch(() => undefined); // retried when a link comes
+  // The design algorithms (classical IIR and FIR, FIR operators) for the store's designer re-runs.
+  void loadDesignEngine().catch(() => undefined); // retried when a re-run needs them
 }
 
 /** Schedules the prefetch after the next paint; returns a function that cancels it if it has not started. */

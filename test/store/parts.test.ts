@@ -107,12 +107,12 @@ describe('composing a design in the store', () => {
     expect(failing[0]!.worstAtHz).toBeGreaterThan(95);
   });
 
-  it('re-runs every designed part at a new sample rate, so each notch stays at its frequency in Hz', () => {
+  it('re-runs every designed part at a new sample rate, so each notch stays at its frequency in Hz', async () => {
     const store = createWorkbenchStore(emptyDesign(FS));
     const s = () => store.getState();
     s().runDesigner(LOWPASS);
     s().designerEdit(addPartEdit(NOTCH(50)));
-    const r = s().adoptSampleRate(2000);
+    const r = await s().adoptSampleRate(2000);
     expect(r?.ok).toBe(true);
     const d = s().design;
     expect(d.sampleRate).toBe(2000);

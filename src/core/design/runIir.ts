@@ -2,7 +2,7 @@
  * Runs a classical IIR designer description whose parameters have passed their checks: estimates the order
  * if asked, designs, and judges against the requirement when there is one.
  */
-import type { BandShape } from './iir.ts';
+import type { BandShape, IirFamily } from './iir.ts';
 import { designIir } from './iir.ts';
 import { requirementMargin } from './margin.ts';
 import { estimateOrder } from './orderEstimate.ts';
@@ -12,7 +12,6 @@ import { BAND_SHAPE_OPTIONS, FAMILY_OPTIONS, type IirSpec } from './entries/clas
 import { DesignInputError, MAX_DESIGN_ORDER } from './validate.ts';
 import { separationProblem } from './separation.ts';
 import { shortNumber } from '../shortNumber.ts';
-import type { IirFamily } from './iir.ts';
 import { chooseFamily, FAMILY_TIE_BREAK, type FamilyChoice } from './familyChoice.ts';
 
 /** The four classical families, in the order "any family" tries them. */
@@ -22,7 +21,7 @@ const familyWordsOf = (f: string) => FAMILY_OPTIONS.find((o) => o.value === f)!.
 const responseWords = (r: BandShape) => BAND_SHAPE_OPTIONS.find((o) => o.value === r)!.label.toLowerCase();
 
 /** The pass-band/stop-band edges must nest the right way round for the band shape. */
-function checkNesting(r: BandShape, p: number[], s: number[]): void {
+export function checkNesting(r: BandShape, p: number[], s: number[]): void {
   const ok = {
     lowpass: () => p[0]! < s[0]!,
     highpass: () => s[0]! < p[0]!,
@@ -44,7 +43,7 @@ function checkNesting(r: BandShape, p: number[], s: number[]): void {
 }
 
 /** The requirement of a description that gives one (its parameters are checked: both bands, ripple, attenuation). */
-function requirementOf(spec: IirSpec): Requirement | undefined {
+export function requirementOf(spec: IirSpec): Requirement | undefined {
   if (!spec.passbandHz || !spec.stopbandHz) return undefined;
   checkNesting(spec.response, spec.passbandHz, spec.stopbandHz);
   return {
@@ -85,7 +84,7 @@ function beyondPrecision(
 
 /** Designs a classical filter from its checked description (throws DesignInputError on what the checks cannot see). */
 export function runIir(spec: IirSpec): DesignResult {
-  return spec.family === 'any' ? runAnyFamily(spec) : runFamily(spec, spec.family);
+  return spec.family === 'any' ? runAnyFamily(spec) : runFamily(spec, spec.family as IirFamily);
 }
 
 /** The families' orders in a note: "Butterworth 9, Chebyshev I 6, …" (a refused family says so). */

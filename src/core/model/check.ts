@@ -6,7 +6,7 @@
  * again, which keeps a drag step cheap.
  */
 import type { Root } from '../types.ts';
-import { designerEntry, type DesignerSpec } from '../design/index.ts';
+import { designerEntry, orderMax, type DesignerSpec } from '../design/light.ts';
 import type { RequirementMask } from '../mask/index.ts';
 import { validateSettings } from '../fixed/index.ts';
 import { shortNumber } from '../shortNumber.ts';
@@ -193,8 +193,12 @@ function designerProblem(spec: DesignerSpec, base: (string | number)[] = ['desig
         break;
       }
       case 'order':
-        if (v !== 'auto' && !whole(v, p.max))
-          return problem(at(p.key), `order ${String(v)} is not accepted`, `1 to ${p.max}, or auto`);
+        if (v !== 'auto' && !whole(v, orderMax(p, values)))
+          return problem(
+            at(p.key),
+            `order ${String(v)} is not accepted`,
+            `1 to ${orderMax(p, values)}, or auto`,
+          );
         break;
       case 'list': {
         const list = Array.isArray(v) ? (v as unknown[]) : null;

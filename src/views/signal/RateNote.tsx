@@ -10,12 +10,14 @@ import { formatHz } from '../shared/format.ts';
 
 /** Takes the recording's rate for the design (one undo step: the store's adoptSampleRate), saying if its designer could not follow. */
 function adoptSignalRate(hz: number): void {
-  const r = workbenchStore.getState().adoptSampleRate(hz);
-  if (r && !r.ok)
-    postNotice(
-      'info',
-      `The design is now at ${formatHz(hz)}, but its designer could not re-run there (${r.error.message}); the roots stay as they were.`,
-    );
+  // a promise when the design algorithms are still loading (the step waits for them)
+  void Promise.resolve(workbenchStore.getState().adoptSampleRate(hz)).then((r) => {
+    if (r && !r.ok)
+      postNotice(
+        'info',
+        `The design is now at ${formatHz(hz)}, but its designer could not re-run there (${r.error.message}); the roots stay as they were.`,
+      );
+  });
 }
 
 export function RateNote() {

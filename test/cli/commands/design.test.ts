@@ -425,7 +425,7 @@ describe('polewright design --out', () => {
     const dir = mkdtempSync(join(tmpdir(), 'polewright-kinds-'));
     const help = (await runCli(['design', '--help'])).stdout;
     const examples = [...help.matchAll(/^ {2}\S+ +polewright (design .*)$/gm)].map((m) => m[1]!.split(' '));
-    expect(examples).toHaveLength(12);
+    expect(examples).toHaveLength(14);
     for (const [i, argv] of examples.entries()) {
       const file = join(dir, `${i}.json`);
       const r = await runCli([...argv, '--out', file, '--json']);

@@ -7,7 +7,7 @@ import { useMemo, useState, type ReactNode } from 'react';
 import { Segmented } from '../../chart/Segmented.tsx';
 import { useWorkbench, workbenchStore } from '../../../store/useWorkbench.ts';
 import { selectDesignerStatus } from '../../../store/derived.ts';
-import { textFor, variantOf, type ChoiceParameter } from '../../../core/design/index.ts';
+import { isRequired, textFor, variantOf, type ChoiceParameter } from '../../../core/design/index.ts';
 import {
   GROUPS,
   KINDS,
@@ -267,7 +267,11 @@ export function DesignerForm({ form, setForm, editingPart = null, onStopEditing 
         <fieldset className="pw-dz-req">
           <legend>Requirement</legend>
           {orderParameter && !form.autoOrder && (
-            <p className="pw-hint pw-dz-note">Optional with a given order: gives margins and a mask.</p>
+            <p className="pw-hint pw-dz-note">
+              {req.some((f) => isRequired(f.parameter, values))
+                ? 'This method designs from the bands: they are needed at a given order too.'
+                : 'Optional with a given order: gives margins and a mask.'}
+            </p>
           )}
           <div className="pw-dz-fields">{req.map(field)}</div>
         </fieldset>
