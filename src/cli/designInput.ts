@@ -12,8 +12,10 @@ import { describeProblem, designProblem } from '../core/model/check.ts';
 import type { Design } from '../core/model/design.ts';
 import type { Root } from '../core/types.ts';
 import { gainKeepingLevel, maskAtRate, rootsKeepingHz } from '../core/model/rate.ts';
+import { partsAtRate } from '../core/model/partsRate.ts';
 import { runDesigner } from '../core/design/index.ts';
 import { maskFromDesigner } from '../core/mask/index.ts';
+import { sameMask } from '../core/mask/same.ts';
 import { shortNumber } from '../core/shortNumber.ts';
 
 /** Flags every design-taking command accepts. */
@@ -53,6 +55,13 @@ function readFileBounded(file: string): Uint8Array {
   }
 }
 
+/** The shared design of a design file (its size checked first); usage errors name the file. */
+export function readDesignFileArg(file: string): SharedDesign {
+  const read = readSharedFileBytes(readFileBounded(file));
+  if (!read.ok) throw new UsageError(`${file}: ${read.message}`);
+  return read.value;
+}
+
 /** Whether a positional argument is a design link (a URL or fragment with #pw…) rather than a file. */
 function isLink(arg: string): boolean {
   return linkFragment(arg) !== null && !existsSync(arg);
@@ -61,7 +70,8 @@ function isLink(arg: string): boolean {
 /**
  * The design at another sample rate, kept in hertz as the page keeps it: a design as its designer made it is
  * designed again at the new rate (its own mask rebuilt); other roots move so their frequencies in Hz stay
- * (core/model/rate.ts); a user's mask is clipped to the new fs/2. The note says which happened.
+ * (core/model/rate.ts); a user's mask is clipped to the new fs/2; a composed design goes part by part
+ * (core/model/partsRate.ts). The note says which happened.
  */
 function atRate(design: Design, fs: number, source: string): { design: Design; note: string } {
   const from = design.sampleRate;
@@ -71,6 +81,18 @@ function atRate(design: Design, fs: number, source: string): { design: Design; n
     const m = maskAtRate(mask, fs).mask;
     return m.regions.length ? { mask: m } : {};
   };
+  if (design.parts) {
+    // A composed design, part by part: its designed parts designed again, other roots keeping their Hz.
+    const r = partsAtRate(design, fs, 'keep-hz');
+    if (!r.ok)
+      throw new UsageError(
+        `--fs ${rate(fs)}: ${source}: ${r.error.message}${r.error.expected ? `; expected ${r.error.expected}` : ''}.`,
+      );
+    return {
+      design: r.value.design,
+      note: `--fs ${rate(fs)}: ${source} (made at ${rate(from)}): ${r.value.said.trim()}`,
+    };
+  }
   const spec = design.designer;
   if (spec) {
     const old = runDesigner(spec);
@@ -91,7 +113,7 @@ function atRate(design: Design, fs: number, source: string): { design: Design; n
         throw new UsageError(
           `--fs ${rate(fs)}: the designer of ${source} cannot make its design at that rate: ${r.error.message}.`,
         );
-      const own = JSON.stringify(design.mask) === JSON.stringify(maskFromDesigner(spec));
+      const own = sameMask(design.mask, maskFromDesigner(spec));
       const mask = own ? maskFromDesigner(next) : undefined;
       const { mask: _m, ...rest } = design;
       return {

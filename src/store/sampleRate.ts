@@ -1,55 +1,66 @@
 /**
  * Changing the sample rate keeps a design in hertz. A design its designer made (roots as designed) is
  * designed again at the new rate from the same specification in Hz; hand-placed roots are moved so their
- * frequencies in Hz stay (core/model/rate.ts), or, if the user says so, keep their places in the plane. The
- * requirement mask is in Hz: the designer's own mask is rebuilt for the new rate, a user's mask stays and is
- * clipped to the new fs/2. Everything happens in one undo step.
+ * frequencies in Hz stay (core/model/rate.ts), or, if the user says so, keep their places in the plane. A
+ * composed design (core/model/parts.ts) is treated part by part: each part still as its designer made it is
+ * designed again at the new rate, and the roots placed by hand, or a designed part edited by hand since, follow
+ * the same choice. The requirement mask is in Hz: the mask the designer (or the parts) implied is rebuilt for
+ * the new rate, a user's mask stays and is clipped to the new fs/2. Everything happens in one undo step.
+ *
+ * Designers run through the design engine's door (core/design/light.ts): before the engine has arrived,
+ * ratePlan and designAtRate throw DesignEnginePending, and the store's action waits for it
+ * (whenDesignEngine).
  */
 import type { Result } from '../core/types.ts';
 import type { Design } from '../core/model/design.ts';
-import { gainKeepingLevel, maskAtRate, rootsKeepingHz } from '../core/model/rate.ts';
+import { MAX_SAMPLE_RATE } from '../core/model/limits.ts';
+import { describeProblem, type DesignProblem } from '../core/model/check.ts';
+import { rootsKeepingHz } from '../core/model/rate.ts';
+import {
+  clippedMask,
+  gainAfterMove,
+  gainRuleWords,
+  partsAsDesigned,
+  partsAtRate,
+  rateText as hzText,
+  type RateChoice,
+} from '../core/model/partsRate.ts';
 import { maskFromDesigner, type RequirementMask } from '../core/mask/index.ts';
-import { shortNumber } from '../core/shortNumber.ts';
-import { runDesigner } from '../core/design/index.ts';
+import { sameMask } from '../core/mask/same.ts';
+import { runDesigner } from '../core/design/light.ts';
 import { applyDesigner, differsFromDesigner } from './designer.ts';
 
 /** What to do with hand-placed roots: keep their frequencies in Hz (default) or their places in the plane. */
-export type RateChoice = 'keep-hz' | 'keep-places';
+export type { RateChoice };
 
-/** How a rate change will go: just the rate (no roots), a re-run of the designer, or a question first. */
+/** How a rate change will go: just the rate (no roots), a re-run of the designer(s), or a question first. */
 export type RatePlan = 'plain' | 'rerun' | 'ask';
 
 /** How a change of sample rate would treat this design. */
 export function ratePlan(design: Design): RatePlan {
-  if (design.zeros.length === 0 && design.poles.length === 0 && !design.designer) return 'plain';
+  if (design.zeros.length === 0 && design.poles.length === 0 && !design.designer && !design.parts)
+    return 'plain';
+  if (design.parts) return partsAsDesigned(design).every(Boolean) ? 'rerun' : 'ask';
   if (design.designer && !differsFromDesigner(design, runDesigner(design.designer))) return 'rerun';
   return 'ask';
 }
 
-const hzText = (hz: number) => (hz >= 1000 ? `${shortNumber(hz / 1000, 6)} kHz` : `${shortNumber(hz, 6)} Hz`);
-const same = (a: unknown, b: unknown) => JSON.stringify(a) === JSON.stringify(b);
-
-/** The mask at the new rate: the designer's own rebuilt from the new specification, any other clipped. */
+/**
+ * The mask at the new rate: the one the designer implied rebuilt from its description at the new rate (in
+ * `after`), any other clipped.
+ */
 function maskFor(
   design: Design,
   hz: number,
-  newDesigner: Design['designer'],
+  after: Design | null,
 ): { mask: RequirementMask | null; words: string } {
   const mask = design.mask;
   if (!mask) return { mask: null, words: '' };
-  if (design.designer && newDesigner && same(mask, maskFromDesigner(design.designer)))
-    return {
-      mask: maskFromDesigner(newDesigner),
-      words: ' The requirement mask was rebuilt for the new rate.',
-    };
-  const r = maskAtRate(mask, hz);
-  const parts: string[] = [];
-  if (r.clipped.length) parts.push(`${r.clipped.join(', ')} clipped at ${hzText(hz / 2)}`);
-  if (r.dropped.length) parts.push(`${r.dropped.join(', ')} removed (above ${hzText(hz / 2)})`);
-  return {
-    mask: r.mask.regions.length ? r.mask : null,
-    words: parts.length ? ` Mask regions ${parts.join('; ')}.` : '',
-  };
+  if (after?.designer && design.designer && sameMask(mask, maskFromDesigner(design.designer))) {
+    const rebuilt = maskFromDesigner(after.designer);
+    if (rebuilt) return { mask: rebuilt, words: ' The requirement mask was rebuilt for the new rate.' };
+  }
+  return clippedMask(mask, hz);
 }
 
 function withMaskOf(d: Design, mask: RequirementMask | null): Design {
@@ -59,7 +70,7 @@ function withMaskOf(d: Design, mask: RequirementMask | null): Design {
 
 /**
  * The design at sample rate hz (one undo step for the caller) and a sentence saying what happened, or why
- * the change cannot be made (the designer refuses the rate, a root lies above the new fs/2).
+ * the change cannot be made (a designer refuses the rate, a root lies above the new fs/2).
  */
 export function designAtRate(
   design: Design,
@@ -70,7 +81,7 @@ export function designAtRate(
   if (hz === from) return { ok: true, value: { design, said: '' } };
   const plan = ratePlan(design);
   if (plan === 'plain') {
-    const m = maskFor(design, hz, undefined);
+    const m = maskFor(design, hz, null);
     return {
       ok: true,
       value: {
@@ -79,6 +90,7 @@ export function designAtRate(
       },
     };
   }
+  if (design.parts) return partsAtRate(design, hz, choice);
   if (plan === 'rerun') {
     const spec = { ...design.designer!, fs: hz };
     const r = applyDesigner(design, spec, 'keep');
@@ -86,11 +98,12 @@ export function designAtRate(
       return {
         ok: false,
         error: {
+          ...r.error,
           message: `the designer cannot make this design at ${hzText(hz)}: ${r.error.message}`,
           expected: r.error.expected ?? 'another sample rate',
         },
       };
-    const m = maskFor(design, hz, spec);
+    const m = maskFor(design, hz, r.value.design);
     return {
       ok: true,
       value: {
@@ -101,7 +114,7 @@ export function designAtRate(
   }
   if (choice === 'keep-places') {
     const { designer: _designer, ...rest } = design;
-    const m = maskFor(design, hz, undefined);
+    const m = maskFor(design, hz, null);
     const f = (hz / from).toPrecision(3);
     return {
       ok: true,
@@ -116,14 +129,14 @@ export function designAtRate(
   const poles = rootsKeepingHz(design.poles, from, hz, 'pole');
   if (!poles.ok) return poles;
   const { typed: _typed, ...rest } = design;
-  let gainRule = design.gainRule;
-  if (gainRule.kind === 'fixed') {
-    const old = { zeros: design.zeros, poles: design.poles, gain: gainRule.value };
-    const moved = { zeros: zeros.value, poles: poles.value, gain: gainRule.value };
-    gainRule = { kind: 'fixed', value: gainKeepingLevel(old, from, moved, hz) };
-  } else if (gainRule.kind === 'frequency' && gainRule.hz >= hz / 2) gainRule = { kind: 'peak' };
+  const gainRule = gainAfterMove(
+    design.gainRule,
+    design,
+    from,
+    { zeros: zeros.value, poles: poles.value },
+    hz,
+  );
   const newDesigner = design.designer && { ...design.designer, fs: hz };
-  const m = maskFor(design, hz, newDesigner);
   const moved: Design = {
     ...rest,
     sampleRate: hz,
@@ -132,11 +145,37 @@ export function designAtRate(
     gainRule,
     ...(newDesigner && { designer: newDesigner }),
   };
+  const m = maskFor(design, hz, moved);
   return {
     ok: true,
     value: {
       design: withMaskOf(moved, m.mask),
-      said: `The roots moved in the plane so that their frequencies in Hz stay.${gainRule.kind === 'peak' && design.gainRule.kind === 'frequency' ? ` The gain rule's ${hzText(design.gainRule.hz)} is above the new fs/2: the gain now sets the peak to 0 dB.` : ''}${m.words}`,
+      said: `The roots moved in the plane so that their frequencies in Hz stay.${gainRuleWords(design, moved)}${m.words}`,
     },
   };
+}
+
+/**
+ * The store's changeSampleRate, once this code has arrived: the design at rate hz applied through the
+ * store's checked edit `apply` (one undo step), and what happened in a sentence, or why nothing changed.
+ */
+export function applyRateChange(
+  design: Design,
+  hz: number,
+  choice: RateChoice | undefined,
+  apply: (fn: (d: Design) => Design) => DesignProblem | null,
+): Result<string> {
+  if (!(hz > 0 && hz <= MAX_SAMPLE_RATE))
+    return {
+      ok: false,
+      error: {
+        message: `sample rate ${hz} Hz is not accepted`,
+        expected: `a rate above 0 Hz, at most ${MAX_SAMPLE_RATE} Hz`,
+      },
+    };
+  const r = designAtRate(design, hz, choice);
+  if (!r.ok) return r;
+  const problem = apply(() => r.value.design);
+  if (problem) return { ok: false, error: { message: describeProblem(problem), expected: problem.expected } };
+  return { ok: true, value: r.value.said };
 }

@@ -19,14 +19,17 @@ import { postNotice } from './notices.ts';
 import { closeGesture, emptyHistory, recordEdit, type History } from './history.ts';
 import * as edits from './rootEdits.ts';
 import { defaultView, type ViewSettings, type ViewState } from './view.ts';
-import { designerActions, rerunDesignerOn, type DesignerActions } from './designer.ts';
-import type { DesignResult } from '../core/design/index.ts';
-import { designAtRate, type RateChoice } from './sampleRate.ts';
+import { designerActions, type DesignerActions } from './designer.ts';
+import { whenDesignEngine } from './designEngine.ts';
+import type { RateChoice } from './sampleRate.ts';
+import { withRateChange } from './rateChange.ts';
 import { implementationActions, type ImplementationActions } from './implementation.ts';
 import { defaultSignalView, signalActions, type SignalActions, type SignalState } from './signal.ts';
 
 export interface DesignActions {
   moveRoot(ref: RootRef, re: number, im: number): void;
+  /** Moves several roots at once (a notch's zeros and poles set by number): one undo step. */
+  moveRoots(moves: readonly { ref: RootRef; re: number; im: number }[]): void;
   addRoot(kind: RootRef['kind'], root: Root): void;
   deleteRoot(ref: RootRef): void;
   setMultiplicity(ref: RootRef, multiplicity: number): void;
@@ -37,17 +40,13 @@ export interface DesignActions {
   /**
    * Changes the sample rate keeping the design in hertz (store/sampleRate.ts): a design as its designer
    * made it is designed again at the new rate; hand-placed roots keep their frequencies in Hz, or their
-   * places in the plane when `choice` says so. One undo step. Returns what happened in a sentence, or why
-   * nothing changed.
+   * places in the plane when `choice` says so; a composed design goes part by part. One undo step, for the
+   * Sample rate field and for taking a recording's rate alike. Returns what happened in a sentence, or why
+   * nothing changed. When a designer must run and the design algorithms have not arrived (the page loads
+   * them after its first paint, store/designEngine.ts), nothing changes until they have: the whole step is
+   * taken then and a promise of its result is returned (nothing changes if they cannot be fetched).
    */
-  changeSampleRate(hz: number, choice?: RateChoice): Result<string>;
-  /**
-   * Takes a sample rate for the design (a recording's) and re-runs its designer at that rate, so a notch
-   * designed at 50 Hz stays at 50 Hz; one undo step. Returns the re-run's result (null when the design has
-   * no designer, or the rate is not accepted); when the designer refuses the new rate, the rate still
-   * changes and the roots stay, and the error says why.
-   */
-  adoptSampleRate(hz: number): Result<DesignResult> | null;
+  changeSampleRate(hz: number, choice?: RateChoice): Result<string> | Promise<Result<string>>;
   /**
    * Replaces the roots and gain by a system the user typed, keeping the typed coefficients; `about`
    * optionally replaces the name and note in the same undo step (the old note described other roots).
@@ -65,6 +64,8 @@ export interface DesignActions {
   /** Replaces the whole design (demo, empty, opened file or link); one undo step. */
   replaceDesign(design: Design): void;
   setName(name: string): void;
+  /** Replaces the design's note (free text); one undo step. */
+  setNote(note: string): void;
 }
 
 export interface HistoryActions {
@@ -134,6 +135,7 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
       signal: defaultSignalView,
 
       moveRoot: (ref, re, im) => edit((d) => edits.moveRoot(d, ref, re, im)),
+      moveRoots: (moves) => edit((d) => moves.reduce((x, m) => edits.moveRoot(x, m.ref, m.re, m.im), d)),
       addRoot: (kind, root) => {
         edit((d) => edits.addRoot(d, kind, root));
         const n = kind === 'zero' ? get().design.zeros.length : get().design.poles.length;
@@ -152,22 +154,30 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
         edit((d) => (d.sampleRate === hz ? d : { ...d, sampleRate: hz }));
       },
       changeSampleRate: (hz, choice) => {
-        if (!(hz > 0 && hz <= MAX_SAMPLE_RATE))
-          return {
-            ok: false,
-            error: { message: `sample rate ${hz} Hz is not accepted`, expected: 'a rate above 0 Hz' },
-          };
-        const r = designAtRate(get().design, hz, choice);
-        if (!r.ok) return r;
-        const problem = apply(() => r.value.design);
-        if (problem)
-          return { ok: false, error: { message: describeProblem(problem), expected: problem.expected } };
-        set({ selection: null });
-        return { ok: true, value: r.value.said };
+        const applied: Apply = (fn) => {
+          const problem = apply(fn);
+          if (!problem) set({ selection: null });
+          return problem;
+        };
+        // The rate-change code and, when a designer must run, the design algorithms: when either has not
+        // arrived, the whole step waits for them, and nothing changes if they cannot be fetched.
+        const done = withRateChange((m) =>
+          whenDesignEngine(() => m.applyRateChange(get().design, hz, choice, applied)),
+        );
+        if (!(done instanceof Promise)) return done;
+        return done.catch((e: unknown): Result<string> => ({
+          ok: false,
+          error: {
+            message: `the design algorithms could not be loaded (${e instanceof Error ? e.message : String(e)})`,
+            expected: 'reload the page and change the rate again',
+          },
+        }));
       },
       loadTyped: (zeros, poles, gain, typed, about, keep = {}) => {
+        // Typed coefficients replace the whole cascade: no part or designer owns their roots, and the
+        // previous design's mask goes with them unless the user chose to keep it.
         const problem = apply((d) => {
-          const { mask, designer: _designer, ...rest } = d;
+          const { mask, designer: _designer, parts: _parts, ...rest } = d;
           return {
             ...rest,
             ...about,
@@ -185,20 +195,8 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
         edit(() => design);
         set({ selection: null });
       },
-      adoptSampleRate: (hz) => {
-        if (!(hz > 0 && hz <= MAX_SAMPLE_RATE)) return null;
-        let rerun: Result<DesignResult> | null = null;
-        edit((d) => {
-          const rated = d.sampleRate === hz ? d : { ...d, sampleRate: hz };
-          if (!rated.designer) return rated;
-          const r = rerunDesignerOn(rated, {});
-          rerun = r.ok ? { ok: true, value: r.value.result } : r;
-          return r.ok ? r.value.design : rated;
-        });
-        if (rerun !== null && (rerun as Result<DesignResult>).ok) set({ selection: null });
-        return rerun;
-      },
       setName: (name) => edit((d) => (d.name === name ? d : { ...d, name })),
+      setNote: (note) => edit((d) => (d.note === note ? d : { ...d, note })),
       ...designerActions(get, apply, edit, () => set({ selection: null })),
       ...implementationActions(get, edit),
       ...signalActions(set, get),

@@ -52,4 +52,39 @@ describe('--fs on a design file', () => {
     expect(low.code).toBe(2);
     expect(low.stderr).toMatch(/the zero at 50 Hz lies above fs\/2 = 40 Hz/);
   });
+
+  it('designs each part of a composed design again at the new rate: the notch part stays at 50 Hz', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'pw-rate-'));
+    const file = join(dir, 'lowpass.json');
+    const lp = [
+      'design',
+      'lowpass',
+      '--fs',
+      '1000',
+      '--family',
+      'butterworth',
+      '--order',
+      '6',
+      '--edge',
+      '125',
+    ];
+    const req = ['--passband', '100', '--stopband', '300', '--ripple', '1', '--attenuation', '40'];
+    expect((await runCli([...lp, ...req, '--out', file])).code).toBe(0);
+    expect((await runCli(['design', 'notch', '--f0', '50', '--bandwidth', '4', '--add-to', file])).code).toBe(
+      0,
+    );
+    const r = await runCli(['analyze', file, '--fs', '4000', '--json']);
+    expect(r.code).toBe(0);
+    expect(r.stderr).toMatch(
+      /--fs 4000 Hz: .*Every part was designed again at 4 kHz from the same specification in Hz/,
+    );
+    expect(r.stderr).toMatch(/mask the parts imply was rebuilt/);
+    const d = JSON.parse(r.stdout);
+    expect(d.sampleRate).toBe(4000);
+    expectClose(Math.abs(angleHz(d.zeros.at(-1), 4000)), 50, { rel: 1e-12 }, 'notch part at 50 Hz');
+    // A rate the low-pass cannot be designed at is refused, naming the part.
+    const low = await runCli(['analyze', file, '--fs', '200']);
+    expect(low.code).toBe(2);
+    expect(low.stderr).toMatch(/part 1 cannot make it at 200 Hz/);
+  });
 });

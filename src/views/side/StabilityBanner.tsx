@@ -3,10 +3,10 @@
  * fixed-point target set, a second banner as prominent gives the verdict of the quantized coefficients, and
  * each says which filter it judges.
  */
-import type { Stability } from '../../core/stability.ts';
-import { qName } from '../../core/fixed/index.ts';
+import type { Stability } from '../../core/stability/index.ts';
 import { selectStability } from '../../store/derived.ts';
-import { selectHasImplementation, selectImplementation } from '../../store/implementationDerived.ts';
+import { selectHasImplementation } from '../../store/implementationDerived.ts';
+import { quantizedStability } from '../verdicts/quantizedViews.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 import { formatNumber } from '../shared/format.ts';
 import { positionText } from './rootRows.ts';
@@ -20,7 +20,8 @@ function sentence(reason: string): string {
   return t.endsWith('.') ? t : `${t}.`;
 }
 
-function Banner({
+/** One stability banner (the quantized one is views/verdicts/QuantizedVerdicts.tsx). */
+export function Banner({
   s,
   hasPoles,
   who,
@@ -51,8 +52,8 @@ function Banner({
         ) : (
           ' · no poles (FIR)'
         )}
-        {verdict !== 'stable' && (
-          <p className="pw-stability-reason">
+        {(verdict !== 'stable' || s.rootsSuggested) && (
+          <p className="pw-stability-reason" data-testid="stability-reason">
             {sentence(s.reason)}
             {s.responsible.length > 2 && (
               <> All of them: {s.responsible.map((p) => positionText(p.re, p.im, 5)).join(', ')}.</>
@@ -68,21 +69,10 @@ export function StabilityBanner() {
   const s = useWorkbench(selectStability);
   const hasPoles = useWorkbench((st) => st.design.poles.length > 0);
   const hasTarget = useWorkbench(selectHasImplementation);
-  const impl = useWorkbench((st) => {
-    const r = selectImplementation(st);
-    return hasTarget && r.ok ? r.value : null;
-  });
-  if (!impl) return <Banner s={s} hasPoles={hasPoles} who={null} testId="stability" />;
-  const format = `${impl.settings.wordLength}-bit ${qName(impl.quantized.format)}`;
   return (
     <>
-      <Banner s={s} hasPoles={hasPoles} who="Ideal filter" testId="stability" />
-      <Banner
-        s={impl.stability}
-        hasPoles={hasPoles}
-        who={`Quantized ${format}`}
-        testId="stability-quantized"
-      />
+      <Banner s={s} hasPoles={hasPoles} who={hasTarget ? 'Ideal filter' : null} testId="stability" />
+      {hasTarget && <quantizedStability.View />}
     </>
   );
 }

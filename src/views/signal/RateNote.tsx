@@ -10,20 +10,22 @@ import { formatHz } from '../shared/format.ts';
 
 /** Takes the recording's rate for the design keeping its hertz (one undo step), saying what happened. */
 function adoptSignalRate(hz: number): void {
-  const r = workbenchStore.getState().changeSampleRate(hz, 'keep-hz');
-  if (!r.ok)
-    postNotice(
-      'error',
-      `The design stays at its rate: ${r.error.message}${r.error.expected ? `; ${r.error.expected}` : ''}.`,
-    );
-  else if (r.value)
-    postNotice('info', `${r.value} Undo restores the previous rate and design.`, { key: 'rate' });
+  // a promise when a designer must run and the design algorithms are still loading (the step waits)
+  void Promise.resolve(workbenchStore.getState().changeSampleRate(hz, 'keep-hz')).then((r) => {
+    if (!r.ok)
+      postNotice(
+        'error',
+        `The design stays at its rate: ${r.error.message}${r.error.expected ? `; ${r.error.expected}` : ''}.`,
+      );
+    else if (r.value)
+      postNotice('info', `${r.value} Undo restores the previous rate and design.`, { key: 'rate' });
+  });
 }
 
 export function RateNote() {
   const signalRate = useWorkbench((s) => s.signal.current?.sampleRate ?? null);
   const designRate = useWorkbench((s) => s.design.sampleRate);
-  const hasDesigner = useWorkbench((s) => s.design.designer !== undefined);
+  const hasDesigner = useWorkbench((s) => s.design.designer !== undefined || s.design.parts !== undefined);
   if (signalRate === null || signalRate === designRate) return null;
   return (
     <div className="pw-signal-rate" role="note" data-testid="rate-mismatch">

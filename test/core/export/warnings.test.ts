@@ -14,6 +14,8 @@ import { exportC, exportCsv, exportJson, exportWarnings } from '../../../src/cor
 import { maskFromDesigner } from '../../../src/core/mask/index.ts';
 import { tfToZpk } from '../../../src/core/system/index.ts';
 import type { Zpk } from '../../../src/core/types.ts';
+import { emptyDesign } from '../../../src/core/model/design.ts';
+import { addDesignerPart, maskOfParts } from '../../../src/core/model/compose.ts';
 
 function designed(spec: DesignerSpec): Zpk {
   const r = runDesigner(spec);
@@ -155,5 +157,75 @@ describe('warnings inside the exported files', () => {
     expect(build(exportC(good))).toBe('compiled');
     expect(build(exportC(bad))).toMatch(/static assertion failed: "warnings"/);
     expect(exportC(bad)).toMatch(/^\/\*\n \* pw_filter\.h - .*\n \*\n \* WARNINGS \(5\)/);
+  });
+});
+
+describe('exportWarnings on FIR and composed designs', () => {
+  it('an equiripple FIR that meets its two-sided mask ideally fails it quantized to 8 bits, and every format says so', () => {
+    const spec = {
+      kind: 'iir',
+      family: 'equiripple',
+      response: 'lowpass',
+      order: 'auto',
+      passbandHz: [1000],
+      stopbandHz: [1400],
+      rippleDb: 0.5,
+      attenuationDb: 60,
+      fs: 8000,
+    } as unknown as DesignerSpec;
+    const zpk = designed(spec);
+    expect(zpk.poles.every((p) => p.re === 0 && p.im === 0)).toBe(true); // an FIR: poles at the origin only
+    const mask = maskFromDesigner(spec)!;
+    expect(mask.regions.find((r) => r.kind === 'pass')).toMatchObject({ lowerDb: -0.5, upperDb: 0.5 });
+    // 24 bits keep it within the mask; 8 bits cannot hold 60 dB of stop band (common practice: about 6 dB
+    // per bit of coefficient word, less for a cascade of many sections).
+    expect(exportWarnings(impl(zpk, 8000, { wordLength: 24 }), mask)).toEqual([]);
+    const eight = impl(zpk, 8000, { wordLength: 8 });
+    const ws = exportWarnings(eight, mask);
+    expect(keys(ws)).toContain('mask-fails-quantized');
+    expect(exportC(eight, { mask })).toMatch(/mask-fails-quantized/);
+    expect(JSON.parse(exportJson(eight, { mask })).warnings.map((w: { key: string }) => w.key)).toContain(
+      'mask-fails-quantized',
+    );
+    expect(exportCsv(eight, { mask })).toMatch(/^#.*mask-fails-quantized/m);
+  });
+
+  it('a composed design (low-pass with a notch part) is judged against the mask its parts imply', () => {
+    const FS = 1000;
+    const lp = {
+      kind: 'iir',
+      family: 'butterworth',
+      response: 'lowpass',
+      order: 6,
+      edgesHz: [125],
+      passbandHz: [100],
+      stopbandHz: [300],
+      rippleDb: 1,
+      attenuationDb: 40,
+      fs: FS,
+    } as unknown as DesignerSpec;
+    const notch: DesignerSpec = { kind: 'notch', f0: 50, bandwidthHz: 4, fs: FS };
+    const design = addDesignerPart(
+      {
+        ...emptyDesign(FS),
+        ...(() => {
+          const z = designed(lp);
+          return {
+            zeros: z.zeros,
+            poles: z.poles,
+            gainRule: { kind: 'fixed' as const, value: z.gain },
+            designer: lp,
+          };
+        })(),
+      },
+      notch,
+    );
+    if (!design.ok) throw new Error(design.error.message);
+    const d = design.value.design;
+    const mask = maskOfParts(d)!;
+    const zpk = { zeros: d.zeros, poles: d.poles, gain: (d.gainRule as { value: number }).value };
+    expect(exportWarnings(impl(zpk, FS, { wordLength: 24 }), mask)).toEqual([]);
+    const ws = exportWarnings(impl(zpk, FS, { wordLength: 8 }), mask);
+    expect(keys(ws)).toContain('mask-fails-quantized');
   });
 });

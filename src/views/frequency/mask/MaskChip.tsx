@@ -4,15 +4,11 @@
  * Each says pass or fail, the worst margin, where, and which limit it is measured against.
  */
 import type { MaskRegionResult, MaskResult } from '../../../core/mask/index.ts';
-import { qName } from '../../../core/fixed/index.ts';
 import { selectMaskResult } from '../../../store/derived.ts';
-import {
-  selectHasImplementation,
-  selectImplementation,
-  selectQuantizedMaskResult,
-} from '../../../store/implementationDerived.ts';
+import { selectHasImplementation } from '../../../store/implementationDerived.ts';
+import { quantizedMaskChip } from '../../verdicts/quantizedViews.ts';
 import { useWorkbench } from '../../../store/useWorkbench.ts';
-import { formatHz, formatNumber } from '../../shared/format.ts';
+import { formatHz, formatMargin } from '../../shared/format.ts';
 import type { PlotRect } from '../layout.ts';
 
 /** "above the upper limit of pass" / "below the lower limit of stop-2", for the worst region. */
@@ -21,7 +17,8 @@ function limitWords(r: MaskRegionResult | undefined): string {
   return r.limit === 'upper' ? `, upper limit of ${r.id}` : `, lower limit of ${r.id}`;
 }
 
-function Chip({
+/** One verdict chip (the quantized one is views/verdicts/QuantizedVerdicts.tsx). */
+export function Chip({
   result,
   who,
   testId,
@@ -36,18 +33,24 @@ function Chip({
   const failing = result.regions.filter((r) => !r.pass).length;
   const m = result.worstMarginDb;
   const worst = result.regions.find((r) => r.id === result.worstRegionId);
-  const margin = Number.isFinite(m)
-    ? `${m >= 0 ? '+' : ''}${formatNumber(m, compact ? 2 : 3)} dB`
-    : worst && Number.isFinite(worst.worstDb)
-      ? `${formatNumber(worst.worstDb, 3)} dB`
-      : (worst?.problem ?? '');
-  const where = Number.isFinite(result.worstAtHz) ? ` at ${formatHz(result.worstAtHz)}` : '';
+  // "passes by 0.0143 dB" after "passes" keeps only "by 0.0143 dB"; other words stay whole.
+  const words = formatMargin(m, compact ? 2 : 3).replace(/^(passes|fails) (?=by )/, '');
+  const margin =
+    Number.isNaN(m) && worst?.problem
+      ? worst.problem
+      : Number.isFinite(m)
+        ? words
+        : words.replace(/^(passes|fails): /, '');
+  const where =
+    m !== Infinity && !Number.isNaN(m) && Number.isFinite(result.worstAtHz)
+      ? ` at ${formatHz(result.worstAtHz)}`
+      : '';
   return (
     <div
       className={`pw-mask-chip ${result.pass ? 'pw-mask-ok' : 'pw-mask-fail'}${compact ? ' pw-mask-compact' : ''}`}
       data-testid={testId}
       data-pass={result.pass}
-      title={`Requirement mask judged on the ${who === 'ideal' ? 'ideal' : `quantized (${who})`} filter: worst margin ${margin}${where}${limitWords(worst)} (positive = inside the limits)`}
+      title={`Requirement mask judged on the ${who === 'ideal' ? 'ideal' : `quantized (${who})`} filter, where the response comes closest to its limits or goes furthest past them: ${formatMargin(m)}${where}${limitWords(worst)}`}
     >
       <span className="pw-mask-who">{who}</span>
       <b role="status">{result.pass ? '✓ passes' : `✗ fails ${failing}/${result.regions.length}`}</b>
@@ -65,13 +68,7 @@ const TITLE_CONTROLS_PX = 160;
 export function MaskChip({ rect }: { rect: PlotRect }) {
   const ideal = useWorkbench(selectMaskResult);
   const hasTarget = useWorkbench(selectHasImplementation);
-  const quantized = useWorkbench(selectQuantizedMaskResult);
-  const format = useWorkbench((s) => {
-    const r = selectImplementation(s);
-    return r.ok ? `${r.value.settings.wordLength}-bit ${qName(r.value.quantized.format)}` : null;
-  });
   if (!ideal || ideal.regions.length === 0) return null;
-  const both = hasTarget && quantized !== null && format !== null;
   return (
     <div
       className="pw-mask-chips"
@@ -81,8 +78,8 @@ export function MaskChip({ rect }: { rect: PlotRect }) {
         maxWidth: Math.max(0, rect.right - rect.left - TITLE_CONTROLS_PX),
       }}
     >
-      <Chip result={ideal} who="ideal" testId="mask-chip" compact={both} />
-      {both && <Chip result={quantized} who={format} testId="mask-chip-quantized" compact />}
+      <Chip result={ideal} who="ideal" testId="mask-chip" compact={hasTarget} />
+      {hasTarget && <quantizedMaskChip.View />}
     </div>
   );
 }

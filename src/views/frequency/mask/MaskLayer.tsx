@@ -7,7 +7,7 @@ import { useId, useMemo } from 'react';
 import { selectMaskResult } from '../../../store/derived.ts';
 import { useWorkbench } from '../../../store/useWorkbench.ts';
 import { toPixel } from '../../chart/pixels.ts';
-import { formatNumber } from '../../shared/format.ts';
+import { formatHz, formatSignedDb } from '../../shared/format.ts';
 import type { MagnitudeOverlayProps } from '../overlays.ts';
 import { levelToY, regionShapes } from './maskGeometry.ts';
 import './mask.css';
@@ -95,7 +95,7 @@ export function MaskLayer({ rect, xMap, yMap, db }: MagnitudeOverlayProps) {
         if (!Number.isFinite(x) || !Number.isFinite(y)) return null;
         const cy = Math.min(rect.bottom - 4, Math.max(rect.top + 4, y));
         const right = x < (rect.left + rect.right) / 2;
-        const text = `${r.worstMarginDb >= 0 ? '+' : ''}${formatNumber(r.worstMarginDb, 3)} dB`;
+        const text = formatSignedDb(r.worstMarginDb, 3);
         // Only the worst region's margin is written beside its point, so labels never overlap; the other
         // failing points carry theirs as a tooltip, and the Design tab lists every region's verdict.
         const labelled = r.id === result.worstRegionId;
@@ -106,7 +106,7 @@ export function MaskLayer({ rect, xMap, yMap, db }: MagnitudeOverlayProps) {
             data-testid={`mask-worst-${r.id}`}
           >
             <circle cx={x} cy={cy} r={labelled ? 4.5 : 3.5}>
-              {!labelled && <title>{`${r.id}: ${text} at ${formatNumber(r.worstAtHz, 4)} Hz`}</title>}
+              {!labelled && <title>{`${r.id}: ${text} at ${formatHz(r.worstAtHz)}`}</title>}
             </circle>
             {labelled && (
               <text

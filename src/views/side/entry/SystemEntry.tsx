@@ -73,7 +73,7 @@ export function SystemEntry({ text, setText, area }: Props) {
     if (hadMask)
       postNotice(
         'info',
-        "The previous design's requirement mask was removed with it (Undo brings it back). Tick “Keep the mask” before Apply to judge a typed system by the same mask.",
+        "The previous design's requirement mask was removed with it (Undo brings it back; tick “Keep the mask” to keep it).",
         { key: 'typed-mask' },
       );
   };
