@@ -179,6 +179,60 @@ test('hand-placed roots: the field asks, keeps Hz by default, or keeps places wh
   await expect(maskChip(page)).toHaveAttribute('data-pass', 'false');
 });
 
+test('a composed design with a part moved by hand: both verdicts, the question, and Hz kept part by part', async ({
+  page,
+}, info) => {
+  await openDesignPage(page);
+  // A low-pass from the form's starting values, with a 50 Hz notch added as a part of its own.
+  await chooseKind(page, 'Low-pass');
+  await pressDesign(page);
+  await chooseKind(page, 'Notch');
+  await fillField(page, 'Centre', '50');
+  await fillField(page, '−3 dB width', '4');
+  await page.getByRole('button', { name: 'Add to the design' }).click();
+  await expect(page.getByTestId('design-parts').getByTestId('design-part')).toHaveCount(2);
+  const composed = await readDesign(page);
+  expect(composed.sampleRate).toBe(2000);
+  // The notch's pole (the last one stored) moved by hand to 52 Hz: its part now reads "edited by hand".
+  const index = composed.poles.length - 1;
+  const pole = composed.poles[index]!;
+  const r = Math.hypot(pole.re, pole.im);
+  const theta = (2 * Math.PI * 52) / 2000;
+  await dragRoot(page, { kind: 'pole', index }, { re: r * Math.cos(theta), im: r * Math.sin(theta) });
+  const moved = await readDesign(page);
+  const movedHz = rootFrequencyHz(moved.poles[index]!, 2000);
+  expect(movedHz).toBeGreaterThan(50.5);
+  // A fixed-point target (16 bits, chosen explicitly): the quantized verdicts beside the ideal ones.
+  await openTarget(page);
+  await setCoefficientBits(page, 15);
+  await setCoefficientBits(page, 16);
+  await expect(maskChip(page)).toContainText('ideal');
+  await expect(quantizedChip(page)).toContainText('16-bit');
+  await expect(page.getByTestId('stability-quantized')).toContainText('Quantized 16-bit');
+
+  await typeRate(page, '4');
+  const question = page.getByTestId('rate-question');
+  await expect(question).toContainText('moved since their part was designed');
+  await expect(question.getByRole('button', { name: /frequencies in Hz/ })).toBeFocused();
+  await saveScreenshot(page, info, 'composed-rate-question');
+  await page.keyboard.press('Enter');
+  await expect(question).toHaveCount(0);
+  const after = await readDesign(page);
+  expect(after.sampleRate).toBe(4000);
+  // The low-pass part is designed again at 4 kHz; the hand-moved pole keeps its Hz; the notch zero its 50 Hz.
+  expect(after.parts!.map((p) => p.designer?.fs)).toEqual([4000, 4000]);
+  expect(rootFrequencyHz(after.poles[index]!, 4000)).toBeCloseTo(movedHz, 9);
+  expect(rootFrequencyHz(after.zeros[after.zeros.length - 1]!, 4000)).toBeCloseTo(50, 9);
+  await expect(
+    page.getByRole('status').filter({ hasText: 'part 2 (edited by hand) moved in the plane' }).first(),
+  ).toBeVisible();
+  await expect(maskChip(page)).toBeVisible();
+  await expect(quantizedChip(page)).toBeVisible();
+  await saveScreenshot(page, info, 'composed-rate-kept');
+  await undo(page);
+  expect((await readDesign(page)).sampleRate).toBe(2000);
+});
+
 test('a typed system does not keep the previous design’s mask; undo brings it back', async ({
   page,
 }, info) => {

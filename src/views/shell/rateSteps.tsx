@@ -5,12 +5,20 @@
  */
 import { useEffect, useRef } from 'react';
 import type { Result } from '../../core/types.ts';
-import { workbenchStore } from '../../store/useWorkbench.ts';
+import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import { postNotice } from '../../store/notices.ts';
 import { whenDesignEngine } from '../../store/designEngine.ts';
 import { withRateChange } from '../../store/rateChange.ts';
 import type { RateChoice, RatePlan } from '../../store/sampleRate.ts';
 import { preferredUnit, rateText } from './sampleRate.ts';
+
+/** Which roots the question is about, in words. */
+const handWords = {
+  placed: 'These roots were placed by hand.',
+  edited: 'These roots were moved by hand since they were designed.',
+  parts:
+    'Some roots were placed by hand, or moved since their part was designed (the parts as designed are designed again at the new rate either way).',
+} as const;
 
 /** What happened, posted as a notice; returns why nothing changed, or null. */
 function said(r: Result<string>): string | null {
@@ -78,6 +86,7 @@ export function RateQuestion({
   onAnswer: (choice: RateChoice | null) => void;
 }) {
   const first = useRef<HTMLButtonElement>(null);
+  const how = useWorkbench((s) => (s.design.parts ? 'parts' : s.design.designer ? 'edited' : 'placed'));
   // Focus the default answer only once the key that committed the field is released: Enter's keypress
   // would otherwise land on the focused button and answer the question unasked.
   useEffect(() => {
@@ -106,7 +115,7 @@ export function RateQuestion({
       }}
     >
       <p id="pw-rate-q">
-        Sample rate {unit(from)} → {unit(to)}. These roots were placed by hand. What should stay the same?
+        Sample rate {unit(from)} → {unit(to)}. {handWords[how]} What should stay the same?
       </p>
       <button type="button" className="pw-primary" ref={first} onClick={() => onAnswer('keep-hz')}>
         Their frequencies in Hz (move the roots)

@@ -27,7 +27,7 @@ export function Chip({
   result: MaskResult;
   who: string;
   testId: string;
-  /** Two chips share the title row: the place of the worst point is left to the tooltip. */
+  /** Two chips share the title row: the place of the worst point and the count of failing regions are left to the tooltip. */
   compact: boolean;
 }) {
   const failing = result.regions.filter((r) => !r.pass).length;
@@ -50,10 +50,12 @@ export function Chip({
       className={`pw-mask-chip ${result.pass ? 'pw-mask-ok' : 'pw-mask-fail'}${compact ? ' pw-mask-compact' : ''}`}
       data-testid={testId}
       data-pass={result.pass}
-      title={`Requirement mask judged on the ${who === 'ideal' ? 'ideal' : `quantized (${who})`} filter, where the response comes closest to its limits or goes furthest past them: ${formatMargin(m)}${where}${limitWords(worst)}`}
+      title={`Requirement mask judged on the ${who === 'ideal' ? 'ideal' : `quantized (${who})`} filter, at its tightest point: ${formatMargin(m)}${where}${limitWords(worst)}${result.pass ? '' : `; ${failing} of ${result.regions.length} regions fail`}`}
     >
       <span className="pw-mask-who">{who}</span>
-      <b role="status">{result.pass ? '✓ passes' : `✗ fails ${failing}/${result.regions.length}`}</b>
+      <b role="status">
+        {result.pass ? '✓ passes' : `✗ fails${compact ? '' : ` ${failing}/${result.regions.length}`}`}
+      </b>
       <span>
         {margin}
         {!compact && where}
