@@ -25,6 +25,7 @@ import { pickSharedView } from '../core/model/view.ts';
 import { browserStorage, consoleWarn, type KeyValueStorage, type Warn } from '../share/storage.ts';
 import type { WorkbenchStore } from './store.ts';
 import { defaultView } from './view.ts';
+import { framed } from './planeFit.ts';
 
 /** What persistence needs from the browser; tests pass a fake. */
 export interface PersistEnv {
@@ -251,7 +252,7 @@ export function installPersistence(store: WorkbenchStore, env: PersistEnv = brow
         store.setState({
           design: session.design,
           history: { past: session.past, future: session.future, gestureStart: null },
-          view: { ...store.getState().view, ...session.view },
+          view: framed({ ...store.getState().view, ...session.view }, session.design),
           selection: null,
         });
       }

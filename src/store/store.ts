@@ -19,6 +19,7 @@ import { postNotice } from './notices.ts';
 import { closeGesture, emptyHistory, recordEdit, type History } from './history.ts';
 import * as edits from './rootEdits.ts';
 import { defaultView, type ViewSettings, type ViewState } from './view.ts';
+import { framed } from './planeFit.ts';
 import { designerActions, rerunDesignerOn, type DesignerActions } from './designer.ts';
 import type { DesignResult } from '../core/design/index.ts';
 import { implementationActions, type ImplementationActions } from './implementation.ts';
@@ -149,12 +150,12 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
           gainRule: { kind: 'fixed', value: gain },
           typed,
         }));
-        if (!problem) set({ selection: null });
+        if (!problem) set({ selection: null, view: framed(get().view, get().design) });
         return problem;
       },
       replaceDesign: (design) => {
         edit(() => design);
-        set({ selection: null });
+        set({ selection: null, view: framed(get().view, get().design) });
       },
       adoptSampleRate: (hz) => {
         if (!(hz > 0 && hz <= MAX_SAMPLE_RATE)) return null;
