@@ -3,6 +3,7 @@ import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { App } from './views/App.tsx';
 import { browserEnv, installPersistence } from './store/persist.ts';
+import { browserAddressEnv, installAddressBar } from './store/addressBar.ts';
 import { workbenchStore } from './store/useWorkbench.ts';
 import { downloadDesignFile } from './views/side/share/saveDesign.ts';
 
@@ -21,4 +22,9 @@ const render = () =>
       <App />
     </StrictMode>,
   );
-void persistence.restored.then(render, render);
+// The address bar follows the design from the restored (or linked) one on.
+const start = () => {
+  render();
+  installAddressBar(workbenchStore, browserAddressEnv());
+};
+void persistence.restored.then(start, start);

@@ -29,7 +29,6 @@ function fakeEnv(storage: KeyValueStorage, hash = '', options: Partial<PersistEn
   } = {
     storage,
     hash: () => hash,
-    clearHash: () => void (hash = ''),
     listen: (event, fn) => {
       listeners.set(event, [...(listeners.get(event) ?? []), fn]);
       return () =>
@@ -85,7 +84,7 @@ describe('page persistence', () => {
     expect(bitwiseDifference(store.getState().design, demoDesign())).toBeNull();
   });
 
-  it('opens a link on top of the restored design, one undo step away, and removes the fragment', async () => {
+  it('opens a link on top of the restored design, one undo step away, and keeps the fragment', async () => {
     const storage = memoryStorage();
     saveSession(
       storage,
@@ -98,7 +97,7 @@ describe('page persistence', () => {
     await installPersistence(store, env).restored;
     expect(bitwiseDifference(store.getState().design, shared.design)).toBeNull();
     expect(store.getState().view.frequencyAxis).toBe('log');
-    expect(env.hashNow()).toBe('');
+    expect(env.hashNow()).toBe('#' + encodeLink(shared));
     expect(notices()[0]!.tone).toBe('info');
     store.getState().undo();
     expect(store.getState().design.name).toBe('before');
