@@ -4,6 +4,9 @@ import { ReferenceReading } from '../compare/ReferenceReading.tsx';
 import { formatDb, formatHz, formatNumber } from '../shared/format.ts';
 import type { FrequencyReading } from '../../core/response/readAt.ts';
 import { DEG_PER_RAD } from './series.ts';
+import { useWorkbench } from '../../store/useWorkbench.ts';
+import { shownBandHz } from '../../store/zoom.ts';
+import { hzDigits } from './cursor.ts';
 
 export interface FrequencyReadoutProps {
   reading: FrequencyReading | null;
@@ -25,6 +28,10 @@ function Item({ label, id, children }: { label: string; id: string; children: st
 export function FrequencyReadout({ reading, phaseMode }: FrequencyReadoutProps) {
   // A pinned reference adds its own line; the height is kept whether or not the cross-hair is on.
   const withRef = useCompare((s) => s.reference !== null) ? ' pw-readout-ref' : '';
+  // On a zoomed band the frequency carries the digits that tell its points apart.
+  const digits = useWorkbench((s) =>
+    hzDigits(shownBandHz(s.view.frequencySpan, s.design.sampleRate, s.view.frequencyAxis)),
+  );
   if (!reading) {
     return (
       <div className={`pw-readout pw-readout-hint${withRef}`} aria-live="off">
@@ -36,7 +43,7 @@ export function FrequencyReadout({ reading, phaseMode }: FrequencyReadoutProps) 
   return (
     <div className={`pw-readout${withRef}`} aria-label="Values at the cross-hair">
       <Item label="f" id="hz">
-        {formatHz(reading.hz, 5)}
+        {formatHz(reading.hz, digits)}
       </Item>
       <span className="pw-readout-item">
         <span className="pw-readout-label">|H|</span>

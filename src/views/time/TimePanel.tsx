@@ -1,6 +1,8 @@
 /** The time view: input and output of the current system, the slowest pole's envelope and the closed form. */
 import { useRef, useState } from 'react';
-import { useWorkbench } from '../../store/useWorkbench.ts';
+import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
+import { clampSamples, shownSamples } from '../../store/zoom.ts';
+import { ZoomControls } from '../chart/ZoomControls.tsx';
 import { Segmented } from '../chart/Segmented.tsx';
 import { useElementSize } from '../chart/useElementSize.ts';
 import { PictureMenu } from '../pictures/PictureMenu.tsx';
@@ -32,6 +34,9 @@ function TestInputPanel() {
   // The first sample of an impulse response is often far larger than the rest: fit the rest by default.
   const [fitTail, setFitTail] = useState(true);
   const samples = useWorkbench((s) => s.view.timeSamples);
+  const timeSpan = useWorkbench((s) => s.view.timeSpan);
+  const zoomed = shownSamples(timeSpan, samples);
+  const span = zoomed ?? ([-0.5, samples - 0.5] as const);
   const envelope = useEnvelope();
   const shown = cursor !== null && cursor < samples ? cursor : null;
   return (
@@ -44,6 +49,13 @@ function TestInputPanel() {
       </header>
       <div className="pw-time-info">
         <TimeReadout cursor={shown} envelope={envelope} />
+        <ZoomControls
+          what="samples"
+          span={span}
+          zoomed={zoomed !== null}
+          spanText={`n ${Math.max(0, Math.ceil(span[0]))}–${Math.min(samples - 1, Math.floor(span[1]))}`}
+          set={(sp) => workbenchStore.getState().setView({ timeSpan: sp ? clampSamples(sp, samples) : null })}
+        />
         <Segmented
           mini
           label="Amplitude axis fits"
