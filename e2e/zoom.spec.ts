@@ -15,6 +15,7 @@ import {
   timeCursor,
   timePanel,
 } from './support/charts.ts';
+import { humRecording, loadRecording, openSignalPage, recordingPanel } from './support/signal.ts';
 
 /** The band the frequency plots show, Hz, or null for the whole axis. */
 async function band(page: Page): Promise<[number, number] | null> {
@@ -155,4 +156,39 @@ test('the time plot zooms in samples the same way', async ({ page }, info) => {
   await expect.poll(() => sampleSpan(page)).not.toBeNull();
   await area.dblclick();
   await expect.poll(() => sampleSpan(page)).toBeNull();
+});
+
+test('the recording zooms with the same piece: wheel, drag pans, keys, double click shows all', async ({
+  page,
+}, info) => {
+  await openWorkbench(page);
+  const rec = humRecording({ sampleRate: 2000, seconds: 4, humHz: 50, humAmplitudes: [0.1], format: 'i16' });
+  await openSignalPage(page);
+  await loadRecording(page, rec.path);
+  const area = recordingPanel(page).locator('rect.pw-signal-pan');
+  /** The visible span in seconds, from the plot's value text ("0.000 s to 4.000 s"). */
+  const span = async (): Promise<[number, number]> => {
+    const [a, b] = (await area.getAttribute('aria-valuetext'))!.split(' to ');
+    return [parseShown(a!), parseShown(b!)];
+  };
+  const whole = await span();
+  const box = (await area.boundingBox())!;
+  await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+  await page.mouse.wheel(0, -100);
+  await expect.poll(async () => (await span())[1] - (await span())[0]).toBeLessThan(whole[1] - whole[0]);
+  const zoomed = await span();
+  // A drag to the left shows later samples.
+  await page.mouse.down();
+  await page.mouse.move(box.x + box.width / 4, box.y + box.height / 2, { steps: 5 });
+  await page.mouse.up();
+  await expect.poll(async () => (await span())[0]).toBeGreaterThan(zoomed[0]);
+  await saveScreenshot(page, info, 'recording-zoomed');
+  await area.focus();
+  await page.keyboard.press('0');
+  await expect.poll(span).toEqual(whole);
+  await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+  await page.mouse.wheel(0, -100);
+  await expect.poll(async () => (await span())[1]).toBeLessThan(whole[1]);
+  await area.dblclick();
+  await expect.poll(span).toEqual(whole);
 });
