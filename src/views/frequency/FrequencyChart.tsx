@@ -41,6 +41,8 @@ export interface FrequencyChartProps {
   marker: { hz: number; kind: 'zero' | 'pole' } | null;
 }
 
+/** Narrowest log-axis band (high/low) labelled by decades; a narrower one gets even steps. */
+const LOG_TICKS_MIN_RATIO = 4;
 /** Horizontal pixels per frequency tick label. */
 const PX_PER_X_TICK = 64;
 const COLOURS: Record<PlotKey, string> = {
@@ -89,7 +91,10 @@ export function FrequencyChart({ width, height, reading, onCursor, marker }: Fre
   );
   const xTicks = useMemo(() => {
     const count = Math.max(2, (xMap.p1 - xMap.p0) / PX_PER_X_TICK);
-    return axis === 'log' ? logTicks(d0, d1, count) : linearTicks(d0, d1, count, formatHzStepTick);
+    // A log axis zoomed to less than a factor of LOG_TICKS_MIN_RATIO has too few 1-2-5 values: even steps read.
+    return axis === 'log' && d1 / d0 >= LOG_TICKS_MIN_RATIO
+      ? logTicks(d0, d1, count)
+      : linearTicks(d0, d1, count, formatHzStepTick);
   }, [axis, d0, d1, xMap]);
   const xPx = useMemo(() => toPixels(xMap, hz), [xMap, hz]);
 

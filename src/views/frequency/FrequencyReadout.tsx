@@ -35,7 +35,7 @@ export function FrequencyReadout({ reading, phaseMode }: FrequencyReadoutProps) 
   if (!reading) {
     return (
       <div className={`pw-readout pw-readout-hint${withRef}`} aria-live="off">
-        Point at the plots (or focus them and use the arrow keys) to read exact values.
+        Point at the plots for exact values (or focus them: arrow keys); wheel or drag across to zoom.
       </div>
     );
   }
