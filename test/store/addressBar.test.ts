@@ -66,6 +66,16 @@ describe('the address bar follows the design', () => {
     expect(r.ok && bitwiseDifference(r.value.design, store.getState().design)).toBeNull();
   });
 
+  it('leaves a link that could not be opened in the address bar until the next change', async () => {
+    const a = fakeAddress();
+    a.entries[0] = '#pw2.AAAA';
+    const store = createWorkbenchStore();
+    await installAddressBar(store, a.env).ready;
+    expect(a.entries).toEqual(['#pw2.AAAA']);
+    store.getState().setName('edited');
+    expect(a.entries[1]).toBe(fragmentOf(store.getState(), link));
+  });
+
   it('adds one entry per committed change; a burst within COALESCE_MS is one entry', async () => {
     const a = fakeAddress();
     const store = createWorkbenchStore();
