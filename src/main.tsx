@@ -3,7 +3,6 @@ import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { App } from './views/App.tsx';
 import { browserEnv, installPersistence } from './store/persist.ts';
-import { browserAddressEnv, installAddressBar } from './store/addressBar.ts';
 import { workbenchStore } from './store/useWorkbench.ts';
 import { downloadDesignFile } from './views/side/share/saveDesign.ts';
 
@@ -22,9 +21,12 @@ const render = () =>
       <App />
     </StrictMode>,
   );
-// The address bar follows the design from the restored (or linked) one on.
+// The address bar follows the design from the restored (or linked) one on; it needs the link codec, which
+// is not in the first view either, so it loads with it after the first paint.
 const start = () => {
   render();
-  installAddressBar(workbenchStore, browserAddressEnv());
+  void import('./store/addressBar.ts').then((m) =>
+    m.installAddressBar(workbenchStore, m.browserAddressEnv()),
+  );
 };
 void persistence.restored.then(start, start);

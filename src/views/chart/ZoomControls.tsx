@@ -21,7 +21,7 @@ export function ZoomControls({ what, span, zoomed, kind = 'linear', spanText, se
         type="button"
         className="pw-toggle"
         aria-label={`Zoom in (${what})`}
-        title="Zoom in (+ on the focused plot, the wheel, or drag across the plot to pick a span)"
+        title="Zoom in (+, wheel, or drag across the plot)"
         onClick={() => set(zoomSpan(span, mid, ZOOM_STEP, kind))}
       >
         +
@@ -30,7 +30,7 @@ export function ZoomControls({ what, span, zoomed, kind = 'linear', spanText, se
         type="button"
         className="pw-toggle"
         aria-label={`Zoom out (${what})`}
-        title="Zoom out (− on the focused plot, or the wheel)"
+        title="Zoom out (−, wheel)"
         disabled={!zoomed}
         onClick={() => set(zoomSpan(span, mid, 1 / ZOOM_STEP, kind))}
       >
@@ -40,7 +40,7 @@ export function ZoomControls({ what, span, zoomed, kind = 'linear', spanText, se
         type="button"
         className="pw-toggle"
         aria-label={`Show all (${what})`}
-        title="Show the whole axis (0 on the focused plot, or double-click it)"
+        title="Whole axis (0, double-click)"
         disabled={!zoomed}
         onClick={() => set(null)}
       >

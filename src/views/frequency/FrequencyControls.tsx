@@ -31,7 +31,7 @@ export function FrequencyControls() {
         type="button"
         className="pw-toggle"
         aria-pressed={holdScale}
-        title="Keep the current axis ranges still while you drag or zoom (off: the magnitude axis follows the band shown)"
+        title="Keep the axis ranges still while you drag or zoom"
         onClick={() => setView({ holdScale: !holdScale })}
       >
         Hold scale
