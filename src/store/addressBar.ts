@@ -30,6 +30,8 @@ export interface AddressEnv {
   now(): number;
   setTimeout(fn: () => void, ms: number): unknown;
   clearTimeout(handle: unknown): void;
+  /** Calls `fn` when the address changes under the page (Back/Forward, a pasted address). */
+  onAddressChange?(fn: () => void): () => void;
 }
 
 /** The browser's address bar through history.pushState/replaceState (neither fires 'hashchange'). */
@@ -44,6 +46,10 @@ export function browserAddressEnv(): AddressEnv {
     now: () => Date.now(),
     setTimeout: (fn, ms) => window.setTimeout(fn, ms),
     clearTimeout: (h) => window.clearTimeout(h as number),
+    onAddressChange: (fn) => {
+      window.addEventListener('popstate', fn);
+      return () => window.removeEventListener('popstate', fn);
+    },
   };
 }
 
@@ -77,6 +83,13 @@ export function installAddressBar(
   let pending: unknown = null;
   let codec: LinkReader | null = null;
   let stopped = false;
+  /** The address changed under the page: the design it brings is already there, not a new entry. */
+  let fromAddress = false;
+  // 'popstate' comes before the 'hashchange' on which the page opens the design the address holds.
+  const offAddress = env.onAddressChange?.(() => {
+    fromAddress = true;
+    env.setTimeout(() => (fromAddress = false), 0);
+  });
 
   const write = (mode: 'push' | 'replace') => {
     if (pending !== null) env.clearTimeout(pending);
@@ -109,7 +122,7 @@ export function installAddressBar(
   const off = store.subscribe((s) => {
     if (s.dragging) return;
     if (s.design !== shown.design) {
-      write('push');
+      write(fromAddress ? 'replace' : 'push');
       return;
     }
     if (!sameSharedView(s.view, shown.view) && pending === null) {
@@ -119,6 +132,7 @@ export function installAddressBar(
   const stop = () => {
     stopped = true;
     off();
+    offAddress?.();
     if (pending !== null) env.clearTimeout(pending);
   };
   return Object.assign(stop, { ready });

@@ -35,6 +35,8 @@ export interface PersistEnv {
   hash(): string;
   /** Whether the current history entry is one the address bar wrote (a 'hashchange' then is Back/Forward). */
   isHistoryStep?(): boolean;
+  /** Whether the page was loaded by a reload (not by following a link, a bookmark or a typed address). */
+  isReload?(): boolean;
   listen(event: 'hashchange' | 'pagehide' | 'hidden', fn: () => void): () => void;
   /** This tab's id as kept across its reloads (sessionStorage), or null in a new tab. */
   tabId?(): string | null;
@@ -77,6 +79,9 @@ export function browserEnv(): PersistEnv {
   return {
     storage: browserStorage(),
     hash: () => window.location.hash,
+    isReload: () =>
+      (performance.getEntriesByType('navigation')[0] as PerformanceNavigationTiming | undefined)?.type ===
+      'reload',
     isHistoryStep: () =>
       (window.history.state as { polewright?: unknown } | null)?.polewright === ADDRESS_STATE.polewright,
     listen: (event, fn) => {
@@ -201,7 +206,7 @@ function openLink(
   const notes = r.notes?.length ? ` ${r.notes.join(' ')}` : '';
   const name = r.value.design.name || 'untitled design';
   const text = historyStep
-    ? `Back/Forward: showing “${name}” as the address holds it. Undo brings back the design you had before.`
+    ? `Back/Forward: “${name}”. Undo brings back the design you had before.`
     : `Opened “${name}” from the link. Undo brings back the design you had before.`;
   // A note (an old link without a check value) stays until read; a plain confirmation fades.
   postNotice('info', `${text}${notes}`, notes ? { persistent: true } : {});
@@ -256,6 +261,8 @@ export function installPersistence(store: WorkbenchStore, env: PersistEnv = brow
   let disposed = false;
   /** Settles once a link in the fragment at start has been opened (or refused). */
   let opening: Promise<unknown> = Promise.resolve();
+  /** Whether this tab's own session was restored (a reload then keeps it over the fragment). */
+  let restoredSession = false;
   /** Restores the session; false when that needs the full reader, which has not loaded yet. */
   const restore = (): boolean => {
     try {
@@ -263,6 +270,7 @@ export function installPersistence(store: WorkbenchStore, env: PersistEnv = brow
       if (restored) {
         const { session } = restored;
         lineage = restored.lineage;
+        restoredSession = true;
         store.setState({
           design: session.design,
           history: { past: session.past, future: session.future, gestureStart: null },
@@ -318,7 +326,9 @@ export function installPersistence(store: WorkbenchStore, env: PersistEnv = brow
       env.setTabId?.(tab);
     }
     lineage ??= newId();
-    opening = Promise.resolve(openLinkFromHash(store, env));
+    // A reload of this tab goes on with its own session (the address bar then shows it again): the fragment
+    // can lag behind it, as when the page went away mid-drag. Following a link or a bookmark opens the link.
+    if (!(restoredSession && env.isReload?.())) opening = Promise.resolve(openLinkFromHash(store, env));
     offs.push(env.listen('hashchange', () => openLinkFromHash(store, env)));
     if (!storage) return;
 

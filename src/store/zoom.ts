@@ -35,24 +35,31 @@ export function shownBandHz(
   return [lo, hi];
 }
 
-/** A band (Hz) clipped to the axis and widened to MIN_BAND_FRACTION about its middle if narrower. */
+/**
+ * A span clipped to [w0, w1] and widened to `min` about its middle if narrower; a span pushed past an end
+ * keeps its width (a pan stops at the edge rather than shrinking). Null when it covers everything.
+ */
+function clampSpan(
+  span: readonly [number, number],
+  w0: number,
+  w1: number,
+  min: number,
+): [number, number] | null {
+  let [lo, hi] = span[0] <= span[1] ? span : [span[1], span[0]];
+  if (hi - lo < min) [lo, hi] = [(lo + hi - min) / 2, (lo + hi + min) / 2];
+  if (lo < w0) [lo, hi] = [w0, Math.min(w1, hi + (w0 - lo))];
+  if (hi > w1) [lo, hi] = [Math.max(w0, lo - (hi - w1)), w1];
+  return lo <= w0 && hi >= w1 ? null : [lo, hi];
+}
+
+/** A band (Hz) clipped to the axis and at least MIN_BAND_FRACTION of it wide. */
 export function clampBandHz(
   band: readonly [number, number],
   fs: number,
   axis: DocumentView['frequencyAxis'],
 ): [number, number] | null {
   const [w0, w1] = wholeBandHz(fs, axis);
-  let [lo, hi] = band[0] <= band[1] ? band : [band[1], band[0]];
-  const min = MIN_BAND_FRACTION * w1;
-  if (hi - lo < min) {
-    const mid = (lo + hi) / 2;
-    lo = mid - min / 2;
-    hi = mid + min / 2;
-  }
-  // A band pushed past an end keeps its width (a pan stops at the edge rather than shrinking).
-  if (lo < w0) [lo, hi] = [w0, Math.min(w1, hi + (w0 - lo))];
-  if (hi > w1) [lo, hi] = [Math.max(w0, lo - (hi - w1)), w1];
-  return lo <= w0 && hi >= w1 ? null : [lo, hi];
+  return clampSpan(band, w0, w1, MIN_BAND_FRACTION * w1);
 }
 
 /** The samples the time plot shows (fractional indices), or null for all n. */
@@ -67,14 +74,5 @@ export function shownSamples(span: DocumentView['timeSpan'], n: number): [number
 
 /** A sample span clipped to [−0.5, n − 0.5] and at least MIN_SAMPLE_SPAN wide. */
 export function clampSamples(span: readonly [number, number], n: number): [number, number] | null {
-  let [lo, hi] = span[0] <= span[1] ? span : [span[1], span[0]];
-  if (hi - lo < MIN_SAMPLE_SPAN) {
-    const mid = (lo + hi) / 2;
-    lo = mid - MIN_SAMPLE_SPAN / 2;
-    hi = mid + MIN_SAMPLE_SPAN / 2;
-  }
-  const [w0, w1] = [-0.5, n - 0.5];
-  if (lo < w0) [lo, hi] = [w0, Math.min(w1, hi + (w0 - lo))];
-  if (hi > w1) [lo, hi] = [Math.max(w0, lo - (hi - w1)), w1];
-  return lo <= w0 && hi >= w1 ? null : [lo, hi];
+  return clampSpan(span, -0.5, n - 0.5, MIN_SAMPLE_SPAN);
 }

@@ -103,6 +103,20 @@ describe('page persistence', () => {
     expect(store.getState().design.name).toBe('before');
   });
 
+  it('a reload of the tab keeps its own session over a fragment that lags behind it', async () => {
+    const storage = memoryStorage();
+    saveSession(
+      storage,
+      stored({ design: { ...emptyDesign(), name: 'mid-drag' }, past: [], future: [], view: {} }),
+    );
+    const shared = { design: demoDesign(), view: {} };
+    const env = fakeEnv(storage, '#' + encodeLink(shared), { isReload: () => true });
+    const store = createWorkbenchStore(emptyDesign());
+    await installPersistence(store, env).restored;
+    expect(store.getState().design.name).toBe('mid-drag');
+    expect(notices()).toHaveLength(0);
+  });
+
   it('leaves the design untouched and posts a message for a malformed link, also on hashchange', async () => {
     const storage = memoryStorage();
     const env = fakeEnv(storage, '#pw1.AAAA');
