@@ -5,7 +5,7 @@
 import type { Root, Zpk } from '../src/core/types.ts';
 import { zpkToTf, zpkToSections } from '../src/core/system/index.ts';
 import { frequencyGrid, responseZpk } from '../src/core/response/index.ts';
-import { stabilityOfZpk } from '../src/core/stability.ts';
+import { stabilityOfZpk } from '../src/core/stability/index.ts';
 import { filterSections } from '../src/core/time/filter.ts';
 import { makeImpulse } from '../src/core/time/inputs.ts';
 import { cell, timeMs } from './timing.ts';

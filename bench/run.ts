@@ -9,6 +9,10 @@ if (want('roots')) {
   const { benchRoots } = await import('./roots.ts');
   parts.push('## Root finding (ours vs numpy.roots)', '', await benchRoots(), '');
 }
+if (want('stability')) {
+  const { benchStability } = await import('./stability.ts');
+  parts.push('## Exact stability verdict for typed coefficients', '', benchStability(), '');
+}
 if (want('response')) parts.push('## Frequency response', '', benchResponse(), '');
 if (want('recompute')) parts.push('## Drag-step recompute (engine)', '', benchDragRecompute(), '');
 if (want('mask')) {

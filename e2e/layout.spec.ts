@@ -20,7 +20,7 @@ const REGIONS = {
   time: 'section[aria-label="time response"]',
   side: 'aside[aria-label="System and checks"]',
   header: 'header.pw-header',
-  note: '.pw-app > .pw-note',
+  note: '.pw-app > .pw-note-line',
   caution: '.pw-caution',
   chip: '.pw-verdict-chip',
 } as const;

@@ -107,7 +107,7 @@ async function holdChunk(page: Page, chunk: string): Promise<() => void> {
   return release;
 }
 
-test('the design reader, link codec and system parser are not in the first view and arrive after it', async ({
+test('the design reader, link codec, system parser and design algorithms are not in the first view and arrive after it', async ({
   page,
 }) => {
   const scripts: string[] = [];
@@ -115,12 +115,16 @@ test('the design reader, link codec and system parser are not in the first view 
     if (r.resourceType() === 'script') scripts.push(new URL(r.url()).pathname);
   });
   const release = await holdChunk(page, 'migrate');
+  const releaseEngine = await holdChunk(page, 'engine');
   await openWorkbench(page);
-  // The first view is drawn while the design reader is still held back.
+  // The first view is drawn while the design reader and the design algorithms are still held back.
   await expect(page.getByRole('textbox', { name: 'System text' })).toBeVisible();
   release();
+  releaseEngine();
   await expect
-    .poll(() => ['migrate', 'link', 'readEntry'].filter((n) => !scripts.some((s) => s.includes(`/${n}-`))))
+    .poll(() =>
+      ['migrate', 'link', 'readEntry', 'engine'].filter((n) => !scripts.some((s) => s.includes(`/${n}-`))),
+    )
     .toEqual([]);
   // The parser came with the prefetch: Apply reads at once.
   await page.getByRole('textbox', { name: 'System text' }).fill('b = [1, 0, -1]\na = [1, -0.5, 0.25]');

@@ -131,7 +131,7 @@ test('markup in a design name and note shows as text', async ({ page }) => {
   await expect(page.getByRole('textbox', { name: 'Design name' })).toHaveValue(
     '<img src=x onerror=alert(1)>',
   );
-  await expect(page.getByLabel('About this design')).toHaveText(shared.design.note);
+  await expect(page.getByLabel('About this design')).toHaveValue(shared.design.note);
   await expect(page.getByRole('status').filter({ hasText: 'from the link' })).toContainText(
     '<img src=x onerror=alert(1)>',
   );

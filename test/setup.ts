@@ -1,15 +1,19 @@
 /**
- * Every test file starts as the command line does: with the full design reader installed (the page loads it
- * after its first paint; test/store/persistPending.test.ts removes it to check the page's path). It is
- * imported in a hook, after the test file's own module mocks are in place (a test that mocks the designer
- * registry gets a reader built on the mocked one).
+ * Every test file starts as the command line does: with the design engine and the full design reader
+ * installed (the page loads them after its first paint; test/store/persistPending.test.ts and
+ * test/store/designEngine.test.ts remove them to check the page's path). They are imported in a hook, after
+ * the test file's own module mocks are in place (a test that mocks the designer registry gets a reader
+ * built on the mocked one).
  */
 import { beforeAll } from 'vitest';
 
 beforeAll(async () => {
-  const [full, reader] = await Promise.all([
+  const [full, reader, engine, slot] = await Promise.all([
     import('../src/share/schema/full.ts'),
     import('../src/share/schema/reader.ts'),
+    import('../src/core/design/engine.ts'),
+    import('../src/core/design/engineSlot.ts'),
   ]);
   reader.installFullReader(full);
+  slot.installDesignEngine(engine.DESIGN_ENGINE);
 });

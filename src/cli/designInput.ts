@@ -47,6 +47,13 @@ function readFileBounded(file: string): Uint8Array {
   }
 }
 
+/** The shared design of a design file (its size checked first); usage errors name the file. */
+export function readDesignFileArg(file: string): SharedDesign {
+  const read = readSharedFileBytes(readFileBounded(file));
+  if (!read.ok) throw new UsageError(`${file}: ${read.message}`);
+  return read.value;
+}
+
 /** Whether a positional argument is a design link (a URL or fragment with #pw…) rather than a file. */
 function isLink(arg: string): boolean {
   return linkFragment(arg) !== null && !existsSync(arg);

@@ -1,6 +1,7 @@
 /** Per-root read-outs in the trade's units: frequency, radius, decay, Q and bandwidth, notch depth. */
 import type { Complex, Root, Zpk } from './types.ts';
 import { responseAt } from './response/pointValue.ts';
+import { widthForPoleRadius } from './rootShape.ts';
 import { omegaToHz, type Hertz, type RadPerSample } from './units.ts';
 
 /** What one stored root (a conjugate pair counts once) means at the design's sample rate. */
@@ -19,7 +20,7 @@ export interface RootReadout {
   decay40dBSeconds?: number;
   /** Complex poles inside the circle: f0 / bandwidth. */
   q?: number;
-  /** Complex poles inside the circle: −3 dB bandwidth estimate (1 − r)·fs/π, Hz. */
+  /** Complex poles inside the circle: the −3 dB width of a second-order section with poles at this radius, Hz. */
   bandwidthHz?: Hertz;
   /** Zeros within NOTCH_RADIUS_BAND of the circle: |H| in dB at the zero's angle. */
   notchDepthDb?: number;
@@ -33,9 +34,9 @@ export interface RootReadout {
 export const NOTCH_RADIUS_BAND = 0.05;
 
 /**
- * Read-outs for every stored pole, then every stored zero, at sample rate fs (Hz). The bandwidth uses the
- * narrow-resonance approximation: a pole at radius r gives a −3 dB width of 2(1 − r) rad/sample, i.e.
- * (1 − r)·fs/π Hz; accurate when 1 − r is small and the pole is well away from 0 and fs/2.
+ * Read-outs for every stored pole, then every stored zero, at sample rate fs (Hz). The bandwidth is the
+ * −3 dB width of the second-order notch or resonator whose poles sit at radius r (rootShape.ts; about
+ * (1 − r)·fs/π near the circle), the same relation the root editor sets a width or Q by.
  */
 export function rootReadouts(zpk: Zpk, fs: Hertz): RootReadout[] {
   const out: RootReadout[] = [];
@@ -47,8 +48,7 @@ export function rootReadouts(zpk: Zpk, fs: Hertz): RootReadout[] {
       r.timeConstantSeconds = tau / fs;
       r.decay40dBSeconds = (Math.log(100) * tau) / fs;
       if (p.im > 0) {
-        // A pole at radius r is 2(1 − r) radians per sample wide at −3 dB.
-        r.bandwidthHz = omegaToHz(2 * (1 - r.radius), fs);
+        r.bandwidthHz = widthForPoleRadius(r.radius, fs)!;
         r.q = r.frequencyHz / r.bandwidthHz;
       }
     }

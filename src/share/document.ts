@@ -30,6 +30,7 @@ export function toDocument(shared: SharedDesign): CurrentDocument {
     gainRule: { ...d.gainRule },
     ...(d.typed ? { typed: { b: [...d.typed.b], a: [...d.typed.a], text: d.typed.text } } : {}),
     ...(d.designer ? { designer: structuredClone(d.designer) } : {}),
+    ...(d.parts ? { parts: structuredClone(d.parts) } : {}),
     ...(d.mask ? { mask: structuredClone(d.mask) } : {}),
     ...(d.implementation ? { implementation: { ...d.implementation } } : {}),
     ...(Object.keys(shared.view).length ? { view: { ...shared.view } } : {}),
@@ -47,6 +48,7 @@ export function fromDocument(doc: CurrentDocument): SharedDesign {
     note: doc.note,
     ...(doc.typed ? { typed: doc.typed } : {}),
     ...(doc.designer ? { designer: doc.designer } : {}),
+    ...(doc.parts ? { parts: doc.parts } : {}),
     ...(doc.mask ? { mask: doc.mask } : {}),
     ...(doc.implementation ? { implementation: doc.implementation } : {}),
   };

@@ -6,9 +6,11 @@ import type { Zpk, TransferFunction, Section } from '../core/types.ts';
 import { zpkToTf, zpkToSections } from '../core/system/index.ts';
 import { responseZpk, frequencyGrid, refineAtRoots, type FrequencyResponse } from '../core/response/index.ts';
 import { resolveGain, type ResolvedGain } from '../core/gainRule.ts';
-import { stabilityOfZpk, type Stability } from '../core/stability.ts';
+import { stabilityOfTyped, stabilityOfZpk, type Stability } from '../core/stability/index.ts';
+import { typedDiagnostics, type SystemDiagnostics } from '../core/system/diagnostics.ts';
+import { checkExpandedCoefficients, type ExpandedCheck } from '../core/system/expandedCheck.ts';
 import { rootReadouts, type RootReadout } from '../core/readouts.ts';
-import { filterSections } from '../core/time/filter.ts';
+import { filterSections, filterTf } from '../core/time/filter.ts';
 import { makeImpulse, makeStep, makeSine, makeWhiteNoise } from '../core/time/inputs.ts';
 import { closedFormResponseZpk, type ClosedForm } from '../core/time/closedForm.ts';
 import type { Design } from '../core/model/design.ts';
@@ -17,7 +19,12 @@ import type { WorkbenchState } from './store.ts';
 import { memoLast } from './memo.ts';
 import { LOG_AXIS_MIN_FRACTION, shownBandHz } from './zoom.ts';
 import { evaluateMask, type MaskResult } from '../core/mask/index.ts';
-import { runDesigner, type DesignerSpec, type DesignResult } from '../core/design/index.ts';
+import {
+  DesignEnginePending,
+  runDesigner,
+  type DesignerSpec,
+  type DesignResult,
+} from '../core/design/light.ts';
 import type { Result } from '../core/types.ts';
 import { differsFromDesigner } from './designer.ts';
 import { hzToOmega } from '../core/units.ts';
@@ -65,7 +72,10 @@ function displayGrid(s: WorkbenchState): Float64Array {
 }
 const responseOf = memoLast((zpk: Zpk, omega: Float64Array) => responseZpk(zpk, omega));
 const displayResponseOf = memoLast(refineAtRoots);
-const stabilityOf = memoLast(stabilityOfZpk);
+const stabilityOf = memoLast((zpk: Zpk, typed: Design['typed']) =>
+  typed ? stabilityOfTyped(zpk, typed.a) : stabilityOfZpk(zpk),
+);
+const typedDiagnosticsOf = memoLast((typed: Design['typed']) => (typed ? typedDiagnostics(typed) : null));
 const readoutsOf = memoLast((zpk: Zpk, fs: number) => rootReadouts(zpk, fs));
 
 /** Fewest response points while a root is dragged. */
@@ -102,6 +112,9 @@ const inputOf = memoLast(
     timeInput({ timeInput: kind, timeSamples: n, sineHz, noiseSeed: seed } as ViewSettings, fs),
 );
 const outputOf = memoLast((sections: Section[], input: Float64Array) => filterSections(sections, input));
+const typedOutputOf = memoLast((typed: NonNullable<Design['typed']>, input: Float64Array) =>
+  filterTf(typed, input),
+);
 const closedFormOf = memoLast(
   (
     zpk: Zpk,
@@ -126,13 +139,35 @@ export const selectResponse = (s: WorkbenchState): FrequencyResponse =>
 /** The response on the display grid plus the exact angles of the roots near the circle (true notch depth). */
 export const selectDisplayResponse = (s: WorkbenchState): FrequencyResponse =>
   displayResponseOf(zpkOf(s.design), selectResponse(s));
-export const selectStability = (s: WorkbenchState): Stability => stabilityOf(zpkOf(s.design));
+/** The verdict: exact from the typed denominator when the design came as coefficients, else from the poles. */
+export const selectStability = (s: WorkbenchState): Stability => stabilityOf(zpkOf(s.design), s.design.typed);
+const expandedCheckOf = memoLast((zpk: Zpk, typed: boolean) =>
+  typed || zpk.poles.length === 0 ? null : checkExpandedCoefficients(zpk),
+);
+/**
+ * For roots placed or designed: whether their multiplied-out b, a still describe them (null for typed
+ * coefficients, which are the design, and for designs without poles).
+ */
+export const selectExpandedCheck = (s: WorkbenchState): ExpandedCheck | null =>
+  expandedCheckOf(zpkOf(s.design), s.design.typed !== undefined);
+/** Error bounds of the roots computed from typed coefficients, or null for roots placed or designed. */
+export const selectTypedDiagnostics = (s: WorkbenchState): SystemDiagnostics | null =>
+  typedDiagnosticsOf(s.design.typed);
 export const selectReadouts = (s: WorkbenchState): RootReadout[] =>
   readoutsOf(zpkOf(s.design), s.design.sampleRate);
 export const selectTimeInput = (s: WorkbenchState): Float64Array =>
   inputOf(s.view.timeInput, s.view.timeSamples, s.view.sineHz, s.view.noiseSeed, s.design.sampleRate);
+/**
+ * The time response: typed coefficients run exactly as typed (direct form II transposed), so an unstable
+ * typed filter visibly grows; a design kept as roots runs as second-order sections.
+ */
 export const selectTimeOutput = (s: WorkbenchState): Float64Array =>
-  outputOf(selectSections(s), selectTimeInput(s));
+  s.design.typed
+    ? typedOutputOf(s.design.typed, selectTimeInput(s))
+    : outputOf(selectSections(s), selectTimeInput(s));
+/** What the time response runs through: 'typed' b, a as given, or 'sections' from the roots. */
+export const selectTimeStructure = (s: WorkbenchState): 'typed' | 'sections' =>
+  s.design.typed ? 'typed' : 'sections';
 /** Number of poles (with conjugates and multiplicity) or zeros, whichever is larger. */
 export const selectOrder = (s: WorkbenchState): number => {
   const count = (rs: Design['zeros']) => rs.reduce((n, r) => n + r.multiplicity * (r.im === 0 ? 1 : 2), 0);
@@ -161,6 +196,19 @@ const maskResultOf = memoLast(
 export const selectMaskResult = (s: WorkbenchState): MaskResult | null =>
   maskResultOf(s.design.mask, zpkOf(s.design), s.design.sampleRate, s.dragging);
 
+/**
+ * f's value, or null while the design algorithms it needs have not loaded (store/designEngine.ts): no
+ * verdict rather than a wrong one. Nothing is memoised then (the memo keeps only returned values), and the
+ * views that show it come with the Design page, which brings the algorithms with it.
+ */
+function whileEngineLoads<T>(f: () => T): T | null {
+  try {
+    return f();
+  } catch (e) {
+    if (e instanceof DesignEnginePending) return null;
+    throw e;
+  }
+}
 const designerOutputOf = memoLast((spec: DesignerSpec | undefined) => (spec ? runDesigner(spec) : null));
 /** One status object per (spec, edited) pair, so a root drag does not make a new one per move. */
 const statusObjectOf = memoLast((spec: DesignerSpec, editedByHand: boolean) => ({ spec, editedByHand }));
@@ -175,10 +223,10 @@ const designerStatusOf = memoLast((design: Design) =>
  */
 export const selectDesignerStatus = (
   s: WorkbenchState,
-): { spec: DesignerSpec; editedByHand: boolean } | null => designerStatusOf(s.design);
+): { spec: DesignerSpec; editedByHand: boolean } | null => whileEngineLoads(() => designerStatusOf(s.design));
 /**
  * What the design's designer gives (its roots, note, estimated order and margins), keyed on the designer's
  * description: run once per description, never per root move.
  */
 export const selectDesignerResult = (s: WorkbenchState): Result<DesignResult> | null =>
-  designerOutputOf(s.design.designer);
+  whileEngineLoads(() => designerOutputOf(s.design.designer));

@@ -10,10 +10,12 @@
  * output compared with the design, so undoing back to the designed roots reads "as designed" again.
  */
 import type { Result, Root } from '../core/types.ts';
-import { designerEntry, runDesigner, type DesignerSpec, type DesignResult } from '../core/design/index.ts';
+import { designerEntry, runDesigner, type DesignerSpec, type DesignResult } from '../core/design/light.ts';
 import * as masks from '../core/mask/index.ts';
 import type { MaskRegion, MaskRegionPatch, RegionEdge, RequirementMask } from '../core/mask/index.ts';
 import type { Design } from '../core/model/design.ts';
+import { partsOf, replacePart } from '../core/model/parts.ts';
+
 import { problemPlace, type DesignProblem } from '../core/model/check.ts';
 
 /** What happens to the mask when a designer runs. */
@@ -51,7 +53,7 @@ function withDesigned(
   result: DesignResult,
   policy: DesignerMaskPolicy,
 ): Design {
-  const { typed: _typed, mask, ...rest } = design;
+  const { typed: _typed, mask, parts: _parts, ...rest } = design;
   const implied = policy === 'keep' ? null : masks.maskFromDesigner(spec);
   const nextMask = policy === 'keep' ? mask : policy === 'replace' ? implied : (mask ?? implied);
   const copy = (roots: Root[]) => roots.map((r) => ({ ...r }));
@@ -94,11 +96,53 @@ export function rerunDesignerOn(
   return applyDesigner(design, spec, 'keep');
 }
 
-/** The design without its designer (roots, gain and mask stay), for free editing. */
+/** The design without its designer or parts (roots, gain and mask stay), for free editing. */
 export function releaseDesignerOf(design: Design): Design {
-  if (!design.designer) return design;
-  const { designer: _designer, ...rest } = design;
+  if (!design.designer && !design.parts) return design;
+  const { designer: _designer, parts: _parts, ...rest } = design;
   return rest;
+}
+
+/** Re-runs designed part `index` with changed parameters at the design's sample rate (its roots only). */
+export function rerunPartOn(
+  design: Design,
+  index: number,
+  patch: DesignerPatch = {},
+): Result<{ design: Design; result: DesignResult }> {
+  const part = partsOf(design)[index];
+  if (!part?.designer)
+    return {
+      ok: false,
+      error: { message: `part ${index + 1} has no designer to re-run`, expected: 'a designed part' },
+    };
+  const spec = mergeDesignerPatch({ ...part.designer, fs: design.sampleRate }, patch);
+  const r = runDesigner(spec);
+  if (!r.ok) return r;
+  return { ok: true, value: { design: replacePart(design, index, spec, r.value.zpk), result: r.value } };
+}
+
+/**
+ * Re-runs every designed part at the design's sample rate (after a sample-rate change: each part's
+ * description is in Hz, so a notch at 50 Hz stays at 50 Hz). The first part that cannot be re-run
+ * there stops it, with its error.
+ */
+export function rerunAllPartsOn(design: Design): Result<{ design: Design; result: DesignResult }> {
+  let d = design;
+  let last: DesignResult | null = null;
+  const parts = partsOf(design);
+  for (let i = 0; i < parts.length; i++) {
+    if (!parts[i]!.designer) continue;
+    const r = rerunPartOn(d, i);
+    if (!r.ok) return { ok: false, error: { ...r.error, message: `part ${i + 1}: ${r.error.message}` } };
+    d = r.value.design;
+    last = r.value.result;
+  }
+  return last
+    ? { ok: true, value: { design: d, result: last } }
+    : {
+        ok: false,
+        error: { message: 'this design has no designer to re-run', expected: 'run a designer first' },
+      };
 }
 
 const sameRoots = (a: readonly Root[], b: readonly Root[]) =>
@@ -139,13 +183,22 @@ export interface DesignerActions {
   /**
    * Runs a designer: replaces roots, gain (a fixed k) and sample rate with its output and remembers it;
    * the mask follows `policy` (default 'fill'). One undo step. On bad parameters nothing changes and
-   * the InputError says what to change.
+   * the InputError says what to change. Needs the design algorithms (store/designEngine.ts): the Design
+   * page, which calls it, brings them with its code; before they are installed it throws
+   * DesignEnginePending and changes nothing (whenDesignEngine waits and runs again).
    */
   runDesigner(spec: DesignerSpec, policy?: DesignerMaskPolicy): Result<DesignResult>;
   /** Re-runs the remembered designer with changed parameters (replaces the roots; one undo step). */
   rerunDesigner(patch: DesignerPatch): Result<DesignResult>;
   /** Forgets the designer and keeps the roots, for free editing (one undo step). */
   releaseDesigner(): void;
+  /**
+   * A designer edit of the design (adding, re-running or removing a part: store/partEdits.ts), or its
+   * InputError; one undo step when it succeeds.
+   */
+  designerEdit(fn: (d: Design) => Result<{ design: Design; result: DesignResult }>): Result<DesignResult>;
+  /** An edit of the design's parts that cannot fail (removing a part: store/partEdits.ts); one undo step. */
+  partsEdit(fn: (d: Design) => Design): void;
   /** Sets (validated) or removes (null) the whole mask; one undo step. */
   setMask(mask: RequirementMask | null): Result<RequirementMask | null>;
   /** Adds a region (an id is chosen when none is given) and returns its id; one undo step. */
@@ -198,6 +251,15 @@ export function designerActions(
       return r;
     },
     releaseDesigner: () => edit(releaseDesignerOf),
+    designerEdit: (fn) => {
+      const r = attempt((d) => designed(fn(d)));
+      if (r.ok) rootsReplaced();
+      return r;
+    },
+    partsEdit: (fn) => {
+      edit(fn);
+      rootsReplaced();
+    },
     setMask: (mask) =>
       attempt((d) => {
         const r = withMask(d, mask);

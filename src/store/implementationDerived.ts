@@ -19,7 +19,7 @@ import {
 } from '../core/fixed/index.ts';
 import { buildCascade, type Cascade } from '../core/sections/index.ts';
 import { refineAtRoots, type FrequencyResponse } from '../core/response/index.ts';
-import type { Stability } from '../core/stability.ts';
+import type { Stability } from '../core/stability/index.ts';
 import type { Result, Zpk } from '../core/types.ts';
 import { evaluateMask, type MaskResult, type RequirementMask } from '../core/mask/index.ts';
 import { memoLast } from './memo.ts';

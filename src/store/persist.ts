@@ -21,6 +21,7 @@ import {
 import type { SharedDesign } from '../share/document.ts';
 import { sameDesign } from '../core/model/design.ts';
 import { FullReaderPending, loadFullReader, readWhenReady } from '../share/schema/reader.ts';
+import { commitDrafts } from './drafts.ts';
 import { dismissKey, hasNotice, postNotice, type NoticeAction } from './notices.ts';
 import { pickSharedView } from '../core/model/view.ts';
 import { browserStorage, consoleWarn, type KeyValueStorage, type Warn } from '../share/storage.ts';
@@ -375,6 +376,8 @@ export function installPersistence(store: WorkbenchStore, env: PersistEnv = brow
     // goes away mid-drag.
     let heldByDrag = false;
     const flush = () => {
+      // Text still being typed into the name or note goes into the design first, so this write keeps it.
+      commitDrafts();
       if (heldByDrag) schedule();
       heldByDrag = false;
       if (ready) saver.flush();

@@ -20,13 +20,16 @@ import { closeGesture, emptyHistory, recordEdit, type History } from './history.
 import * as edits from './rootEdits.ts';
 import { defaultView, type ViewSettings, type ViewState } from './view.ts';
 import { framed } from './planeFit.ts';
-import { designerActions, rerunDesignerOn, type DesignerActions } from './designer.ts';
-import type { DesignResult } from '../core/design/index.ts';
+import { designerActions, rerunAllPartsOn, rerunDesignerOn, type DesignerActions } from './designer.ts';
+import { whenDesignEngine } from './designEngine.ts';
+import type { DesignResult } from '../core/design/light.ts';
 import { implementationActions, type ImplementationActions } from './implementation.ts';
 import { defaultSignalView, signalActions, type SignalActions, type SignalState } from './signal.ts';
 
 export interface DesignActions {
   moveRoot(ref: RootRef, re: number, im: number): void;
+  /** Moves several roots at once (a notch's zeros and poles set by number): one undo step. */
+  moveRoots(moves: readonly { ref: RootRef; re: number; im: number }[]): void;
   addRoot(kind: RootRef['kind'], root: Root): void;
   deleteRoot(ref: RootRef): void;
   setMultiplicity(ref: RootRef, multiplicity: number): void;
@@ -38,9 +41,11 @@ export interface DesignActions {
    * Takes a sample rate for the design (a recording's) and re-runs its designer at that rate, so a notch
    * designed at 50 Hz stays at 50 Hz; one undo step. Returns the re-run's result (null when the design has
    * no designer, or the rate is not accepted); when the designer refuses the new rate, the rate still
-   * changes and the roots stay, and the error says why.
+   * changes and the roots stay, and the error says why. When the design has a designer and the design
+   * algorithms have not arrived (the page loads them after its first paint, store/designEngine.ts), nothing
+   * changes until they have: the whole step is taken then and a promise of its result is returned.
    */
-  adoptSampleRate(hz: number): Result<DesignResult> | null;
+  adoptSampleRate(hz: number): Result<DesignResult> | null | Promise<Result<DesignResult> | null>;
   /**
    * Replaces the roots and gain by a system the user typed, keeping the typed coefficients; `about`
    * optionally replaces the name and note in the same undo step (the old note described other roots).
@@ -55,6 +60,8 @@ export interface DesignActions {
   /** Replaces the whole design (demo, empty, opened file or link); one undo step. */
   replaceDesign(design: Design): void;
   setName(name: string): void;
+  /** Replaces the design's note (free text); one undo step. */
+  setNote(note: string): void;
 }
 
 export interface HistoryActions {
@@ -124,6 +131,7 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
       signal: defaultSignalView,
 
       moveRoot: (ref, re, im) => edit((d) => edits.moveRoot(d, ref, re, im)),
+      moveRoots: (moves) => edit((d) => moves.reduce((x, m) => edits.moveRoot(x, m.ref, m.re, m.im), d)),
       addRoot: (kind, root) => {
         edit((d) => edits.addRoot(d, kind, root));
         const n = kind === 'zero' ? get().design.zeros.length : get().design.poles.length;
@@ -142,7 +150,8 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
         edit((d) => (d.sampleRate === hz ? d : { ...d, sampleRate: hz }));
       },
       loadTyped: (zeros, poles, gain, typed, about) => {
-        const problem = apply((d) => ({
+        // Typed coefficients replace the whole cascade: no part owns their roots.
+        const problem = apply(({ parts: _parts, ...d }) => ({
           ...d,
           ...about,
           zeros,
@@ -159,18 +168,36 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
       },
       adoptSampleRate: (hz) => {
         if (!(hz > 0 && hz <= MAX_SAMPLE_RATE)) return null;
-        let rerun: Result<DesignResult> | null = null;
-        edit((d) => {
-          const rated = d.sampleRate === hz ? d : { ...d, sampleRate: hz };
-          if (!rated.designer) return rated;
-          const r = rerunDesignerOn(rated, {});
-          rerun = r.ok ? { ok: true, value: r.value.result } : r;
-          return r.ok ? r.value.design : rated;
+        const adopt = () => {
+          let rerun: Result<DesignResult> | null = null;
+          edit((d) => {
+            const rated = d.sampleRate === hz ? d : { ...d, sampleRate: hz };
+            if (!rated.designer && !rated.parts) return rated;
+            // A composed design re-runs each designed part's description (in Hz) at the new rate.
+            // Either throws DesignEnginePending before any change.
+            const r = rated.parts ? rerunAllPartsOn(rated) : rerunDesignerOn(rated, {});
+            rerun = r.ok ? { ok: true, value: r.value.result } : r;
+            return r.ok ? r.value.design : rated;
+          });
+          if (rerun !== null && (rerun as Result<DesignResult>).ok) set({ selection: null });
+          return rerun;
+        };
+        const done = whenDesignEngine(adopt);
+        if (!(done instanceof Promise)) return done;
+        // the design algorithms had not arrived: the whole step waits for them
+        return done.catch((e: unknown): Result<DesignResult> => {
+          edit((d) => (d.sampleRate === hz ? d : { ...d, sampleRate: hz }));
+          return {
+            ok: false,
+            error: {
+              message: `the design algorithms could not be loaded (${e instanceof Error ? e.message : String(e)})`,
+              expected: 'reload the page and take the rate again',
+            },
+          };
         });
-        if (rerun !== null && (rerun as Result<DesignResult>).ok) set({ selection: null });
-        return rerun;
       },
       setName: (name) => edit((d) => (d.name === name ? d : { ...d, name })),
+      setNote: (note) => edit((d) => (d.note === note ? d : { ...d, note })),
       ...designerActions(get, apply, edit, () => set({ selection: null })),
       ...implementationActions(get, edit),
       ...signalActions(set, get),

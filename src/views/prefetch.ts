@@ -4,18 +4,23 @@
  */
 import { loadFullReader } from '../share/schema/reader.ts';
 import { loadLinkReader } from '../store/persist.ts';
+import { loadDesignEngine } from '../store/designEngine.ts';
 import { loadEntryReader } from './side/entry/loadEntryReader.ts';
 import { prefetchSidePages } from './side/sideTabs.ts';
 import { signalRegion } from './time/TimePanel.tsx';
+import { rootNumbers } from './plane/RootEditor.tsx';
 
 function prefetchAll(): void {
   void prefetchSidePages();
   void signalRegion.prefetch();
+  void rootNumbers.prefetch();
   void import('./pictures/savePicture.ts').catch(() => undefined); // retried when a picture is asked for
   // The design reader for files, links and sessions the quick reader leaves to it (share/schema/reader.ts).
   void loadFullReader().catch(() => undefined); // retried when a read needs it
   void loadEntryReader().catch(() => undefined); // retried when the entry is applied
   void loadLinkReader().catch(() => undefined); // retried when a link comes
+  // The design algorithms (classical IIR and FIR, FIR operators) for the store's designer re-runs.
+  void loadDesignEngine().catch(() => undefined); // retried when a re-run needs them
 }
 
 /** Schedules the prefetch after the next paint; returns a function that cancels it if it has not started. */

@@ -11,6 +11,8 @@ export interface KeyPress {
   metaKey?: boolean;
   shiftKey?: boolean;
   altKey?: boolean;
+  /** The physical key (KeyboardEvent.code), for keys whose character depends on the layout and Shift. */
+  code?: string;
 }
 
 /** Where a shortcut acts: anywhere on the page, in the z-plane, on a plot with a cross-hair, etc. */
@@ -29,7 +31,8 @@ export interface Shortcut<A extends string = string> {
 const ARROWS = new Set(['ArrowLeft', 'ArrowRight', 'ArrowUp', 'ArrowDown']);
 /** Ctrl on Linux/Windows or ⌘ on a Mac, without Alt. */
 const command = (e: KeyPress) => (e.ctrlKey || e.metaKey) === true && !e.altKey;
-const plain = (e: KeyPress) => !e.ctrlKey && !e.metaKey;
+/** No Ctrl, ⌘ or Alt: the browser keeps those combinations (Alt+← is Back, Ctrl+PageUp the previous tab). */
+const plain = (e: KeyPress) => !e.ctrlKey && !e.metaKey && !e.altKey;
 const key =
   (...keys: string[]) =>
   (e: KeyPress) =>
@@ -55,9 +58,10 @@ export const SHORTCUTS = [
   {
     scope: 'plane',
     action: 'nudge-fine',
-    keys: 'Shift or Alt + arrow',
+    keys: 'Shift + arrow',
     does: 'move the selected root by 0.001, or pan the view when none is selected',
-    matches: (e: KeyPress) => plain(e) && ARROWS.has(e.key) && (e.shiftKey === true || e.altKey === true),
+    // Never with Alt: Alt+← and Alt+→ are the browser's Back and Forward.
+    matches: (e: KeyPress) => plain(e) && ARROWS.has(e.key) && e.shiftKey === true,
   },
   {
     scope: 'plane',
@@ -65,6 +69,49 @@ export const SHORTCUTS = [
     keys: 'arrow',
     does: 'move the selected root by 0.01, or pan the view when none is selected',
     matches: (e: KeyPress) => plain(e) && ARROWS.has(e.key),
+  },
+  {
+    scope: 'plane',
+    action: 'radius-out',
+    keys: 'Page Up (Shift: finer)',
+    does: 'move the selected root towards the unit circle from inside (away from it outside) by a tenth of its distance to it',
+    matches: key('PageUp'),
+  },
+  {
+    scope: 'plane',
+    action: 'radius-in',
+    keys: 'Page Down (Shift: finer)',
+    does: 'move the selected root towards the origin by a tenth of its distance to the unit circle',
+    matches: key('PageDown'),
+  },
+  {
+    scope: 'plane',
+    action: 'frequency-up',
+    keys: '. or > (Shift: a tenth of the step)',
+    does: 'raise the selected pair’s frequency by one step (0.1 Hz at a 1–10 kHz sample rate)',
+    matches: (e: KeyPress) => plain(e) && (e.key === '.' || e.key === '>' || e.code === 'Period'),
+  },
+  {
+    scope: 'plane',
+    action: 'frequency-down',
+    keys: ', or < (Shift: a tenth of the step)',
+    does: 'lower the selected pair’s frequency by one step',
+    matches: (e: KeyPress) => plain(e) && (e.key === ',' || e.key === '<' || e.code === 'Comma'),
+  },
+  {
+    scope: 'plane',
+    action: 'next-root',
+    keys: 'N',
+    does: 'select the next root (the order of the root table)',
+    matches: (e: KeyPress) => plain(e) && !e.shiftKey && e.key.toLowerCase() === 'n',
+  },
+  {
+    scope: 'plane',
+    action: 'previous-root',
+    keys: 'Shift+N, P',
+    does: 'select the previous root',
+    matches: (e: KeyPress) =>
+      plain(e) && ((e.key.toLowerCase() === 'n' && e.shiftKey === true) || e.key.toLowerCase() === 'p'),
   },
   {
     scope: 'plane',

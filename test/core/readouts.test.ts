@@ -25,8 +25,12 @@ describe('rootReadouts', () => {
     expectClose(r!.timeConstantSamples!, 99.4991624, { rel: 1e-8 });
     expectClose(r!.timeConstantSeconds!, 99.4991624 / fs, { rel: 1e-8 });
     expectClose(r!.decay40dBSeconds!, (Math.log(100) * 99.4991624) / fs, { rel: 1e-8 });
-    expectClose(r!.bandwidthHz!, (0.01 * fs) / Math.PI, { rel: 1e-12 });
-    expectClose(r!.q!, 1000 / ((0.01 * fs) / Math.PI), { rel: 1e-12 });
+    // scipy.signal.iirnotch's pole radius r² = (1 − β)/(1 + β), β = tan(πB/fs), solved for B
+    const width = (fs / Math.PI) * Math.atan((1 - 0.99 ** 2) / (1 + 0.99 ** 2));
+    expectClose(r!.bandwidthHz!, width, { rel: 1e-12 });
+    expectClose(r!.q!, 1000 / width, { rel: 1e-12 });
+    // common practice: near the circle that is (1 − r)·fs/π
+    expectClose(r!.bandwidthHz!, (0.01 * fs) / Math.PI, { rel: 0.01 });
   });
   it('the bandwidth estimate is within 2% of the measured -3 dB width of the resonance', () => {
     const grid = Float64Array.from({ length: 40001 }, (_, i) => t - 0.04 + (0.08 * i) / 40000);

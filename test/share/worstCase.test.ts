@@ -92,6 +92,7 @@ describe('one step past a bound is refused by the door and by the readers alike'
       { ...base, mask: { regions: [...base.mask!.regions, { ...base.mask!.regions[0]!, id: 'extra' }] } },
     ],
     ['a sample rate above 1 GHz', { ...base, sampleRate: 1.000000001e9 }],
+    ['one more part', { ...base, parts: [...base.parts!, { ...base.parts!.at(-1)! }] }],
   ];
   it.each(past)('%s', (_, design) => {
     const problem = designProblem(design);

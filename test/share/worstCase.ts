@@ -16,6 +16,7 @@ import {
   MAX_REGION_LABEL_CHARS,
   MAX_TYPED_TEXT_CHARS,
   MAX_HARMONICS,
+  MAX_PARTS,
 } from '../../src/core/model/limits.ts';
 
 /** A long double, and one that is not short in the link's decimal packing either. */
@@ -45,13 +46,21 @@ export function worstCaseDesign(c: string): Design {
       a: Array.from({ length: MAX_COEFFICIENTS }, (_, i) => long(-i)),
       text: text(c, MAX_TYPED_TEXT_CHARS),
     },
-    designer: {
-      kind: 'harmonicNotch',
-      fs: LONG,
-      f0: LONG,
-      harmonics: Array.from({ length: MAX_HARMONICS }, (_, i) => 999_999 - i),
-      bandwidthHz: LONG,
-    },
+    // A composed design of the most parts, each with the longest designer description (a design holds
+    // either one `designer` or its `parts`, and the parts are the larger): the stored roots are spread over
+    // the parts, 8 per part and none for the last.
+    parts: Array.from({ length: MAX_PARTS }, (_, p) => ({
+      designer: {
+        kind: 'harmonicNotch' as const,
+        fs: LONG,
+        f0: long(p),
+        harmonics: Array.from({ length: MAX_HARMONICS }, (_, i) => 999_999 - i),
+        bandwidthHz: LONG,
+      },
+      zeros: p < MAX_PARTS - 1 ? MAX_ORDER / 2 / (MAX_PARTS - 1) : 0,
+      poles: p < MAX_PARTS - 1 ? MAX_ORDER / 2 / (MAX_PARTS - 1) : 0,
+      gain: long(p),
+    })),
     mask: {
       regions: Array.from({ length: MAX_MASK_REGIONS }, (_, i) => ({
         id: idOf(i),

@@ -12,6 +12,7 @@ import {
   type PersistEnv,
 } from '../../src/store/persist.ts';
 import { createWorkbenchStore } from '../../src/store/store.ts';
+import { heldDraftCount, holdDraft } from '../../src/store/drafts.ts';
 import { bitwiseDifference } from '../share/arbitraries.ts';
 
 /** A fake page: a fragment, listeners, a tab id kept across "reloads", and timers that run when told. */
@@ -149,6 +150,30 @@ describe('page persistence', () => {
     expect(next.getState().design.name).toBe('edited');
     expect(next.getState().design.sampleRate).toBe(4000);
     expect(next.getState().history.past).toHaveLength(2);
+  });
+
+  it('commits a name and note still being typed before the pagehide write, so a reload keeps them', () => {
+    for (const event of ['pagehide', 'hidden'] as const) {
+      const storage = memoryStorage();
+      const env = fakeEnv(storage);
+      const store = createWorkbenchStore();
+      installPersistence(store, env);
+      env.runTimers();
+      // Two fields hold text that no Enter or blur has committed yet; one of them lets go (Escape) first.
+      const releaseName = holdDraft('name', () => store.getState().setName('Half-typed name'));
+      holdDraft('note', () => store.getState().setNote('Half-typed note'));
+      const releaseOther = holdDraft('other', () => store.getState().setName('reverted, must not win'));
+      releaseOther();
+      env.fire(event);
+      expect(heldDraftCount()).toBe(0);
+      releaseName(); // releasing after the commit is harmless
+      const next = createWorkbenchStore(emptyDesign());
+      installPersistence(next, fakeEnv(storage));
+      expect(next.getState().design.name).toBe('Half-typed name');
+      expect(next.getState().design.note).toBe('Half-typed note');
+      // Each commit is an undo step of its own, as Enter would have made it.
+      expect(next.getState().history.past).toHaveLength(2);
+    }
   });
 
   it('holds the autosave during a root drag and writes the dropped root on release or pagehide', () => {

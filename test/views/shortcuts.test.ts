@@ -19,7 +19,18 @@ describe('the shortcut table', () => {
   it("gives the plane's keys their actions, the fine nudge before the plain one", () => {
     expect(shortcutAction('plane', press('ArrowUp'))).toBe('nudge');
     expect(shortcutAction('plane', press('ArrowUp', { shiftKey: true }))).toBe('nudge-fine');
-    expect(shortcutAction('plane', press('ArrowUp', { altKey: true }))).toBe('nudge-fine');
+    // Alt+arrows are the browser's (Alt+← is Back): the plane leaves them alone.
+    expect(shortcutAction('plane', press('ArrowUp', { altKey: true }))).toBeNull();
+    expect(shortcutAction('plane', press('ArrowLeft', { altKey: true }))).toBeNull();
+    expect(shortcutAction('plane', press('PageUp'))).toBe('radius-out');
+    expect(shortcutAction('plane', press('PageDown', { shiftKey: true }))).toBe('radius-in');
+    expect(shortcutAction('plane', press('.'))).toBe('frequency-up');
+    expect(shortcutAction('plane', press('>', { shiftKey: true, code: 'Period' }))).toBe('frequency-up');
+    expect(shortcutAction('plane', press(':', { shiftKey: true, code: 'Period' }))).toBe('frequency-up');
+    expect(shortcutAction('plane', press(','))).toBe('frequency-down');
+    expect(shortcutAction('plane', press('n'))).toBe('next-root');
+    expect(shortcutAction('plane', press('N', { shiftKey: true }))).toBe('previous-root');
+    expect(shortcutAction('plane', press('p'))).toBe('previous-root');
     expect(shortcutAction('plane', press('ArrowUp', { ctrlKey: true }))).toBeNull();
     expect(shortcutAction('plane', press('Backspace'))).toBe('delete-root');
     expect(shortcutAction('plane', press('='))).toBe('zoom-in');
@@ -43,6 +54,13 @@ describe('the shortcut table', () => {
       ' ',
       'Home',
       '0',
+      'PageUp',
+      'PageDown',
+      '.',
+      ',',
+      'n',
+      'N',
+      'p',
     ];
     const mods: Partial<KeyPress>[] = [
       {},
@@ -61,6 +79,45 @@ describe('the shortcut table', () => {
               `${scope} ${key}`,
             ).toEqual(['nudge-fine', 'nudge']);
         }
+  });
+
+  it("leaves the browser's own shortcuts to the browser", () => {
+    // common practice: the keys Chromium, Firefox and Safari keep for themselves (history, tabs, page zoom,
+    // find, reload, address bar), on Linux/Windows and on a Mac.
+    const reserved: KeyPress[] = [
+      press('ArrowLeft', { altKey: true }), // Back
+      press('ArrowRight', { altKey: true }), // Forward
+      press('ArrowLeft', { metaKey: true }), // Back (Mac)
+      press('ArrowRight', { metaKey: true }), // Forward (Mac)
+      press('[', { metaKey: true }),
+      press(']', { metaKey: true }),
+      press('PageUp', { ctrlKey: true }), // previous tab
+      press('PageDown', { ctrlKey: true }), // next tab
+      press('Tab', { ctrlKey: true }),
+      press('Home', { altKey: true }), // home page
+      press('F5'),
+      press('r', { ctrlKey: true }),
+      press('l', { ctrlKey: true }),
+      press('t', { ctrlKey: true }),
+      press('w', { ctrlKey: true }),
+      press('n', { ctrlKey: true }),
+      press('f', { ctrlKey: true }),
+      press('p', { ctrlKey: true }),
+      press('d', { ctrlKey: true }),
+      press('h', { ctrlKey: true }),
+      press('+', { ctrlKey: true }),
+      press('-', { ctrlKey: true }),
+      press('0', { ctrlKey: true }),
+      press('/'), // Firefox quick find
+      press("'"), // Firefox quick find (links)
+      press('F6'),
+      press('F11'),
+      press('F12'),
+    ];
+    for (const k of reserved) {
+      const hits = SHORTCUTS.filter((s) => s.matches(k)).map((s) => `${s.scope} ${s.action}`);
+      expect(hits, JSON.stringify(k)).toEqual([]);
+    }
   });
 
   it('is the one place that names shortcut keys: elsewhere a control reads only its own keys', () => {

@@ -1,13 +1,23 @@
 /** `polewright analyze`: roots, gain, coefficients, sections, stability and per-root read-outs. */
 import type { TransferFunction } from '../../core/types.ts';
 import { expandRoots, zpkToTf, zpkToSections } from '../../core/system/index.ts';
-import { stabilityOfZpk } from '../../core/stability.ts';
+import { stabilityOfTyped, stabilityOfZpk } from '../../core/stability/index.ts';
+import {
+  exactDiagnostics,
+  typedDiagnostics,
+  uncertainRoots,
+  type SystemDiagnostics,
+} from '../../core/system/diagnostics.ts';
 import { rootReadouts } from '../../core/readouts.ts';
+import { checkExpandedCoefficients } from '../../core/system/expandedCheck.ts';
 import { parseArgs } from '../args.ts';
 import { DESIGN_FLAGS, readDesign, type CliDesign } from '../designInput.ts';
 import { toJson } from '../json.ts';
 import type { CliIo } from '../main.ts';
 import { shortNumber } from '../../core/shortNumber.ts';
+import { formatDb } from '../../core/format.ts';
+
+const ASCII = { ascii: true } as const;
 
 /** b and a scaled so that a[0] = 1 (the typed coefficients when the design came as coefficients). */
 export function normalisedTf(d: CliDesign): TransferFunction {
@@ -18,7 +28,10 @@ export function normalisedTf(d: CliDesign): TransferFunction {
 
 /** The analysis object printed by `analyze --json`. */
 export function analysis(d: CliDesign) {
-  const stability = stabilityOfZpk(d.zpk);
+  const stability = d.typed ? stabilityOfTyped(d.zpk, d.typed.a) : stabilityOfZpk(d.zpk);
+  const diagnostics = d.typed ? typedDiagnostics(d.typed) : exactDiagnostics(d.zpk);
+  // Roots placed or designed: do their own multiplied-out b, a still describe them?
+  const expanded = d.typed || d.zpk.poles.length === 0 ? null : checkExpandedCoefficients(d.zpk);
   const { b, a } = normalisedTf(d);
   return {
     sampleRate: d.sampleRate,
@@ -33,9 +46,41 @@ export function analysis(d: CliDesign) {
       maxPoleRadius: stability.maxPoleRadius,
       reason: stability.reason,
       responsible: stability.responsible,
+      decidedBy: stability.decidedBy,
+      ...(stability.rootsSuggested && { rootsSuggested: stability.rootsSuggested }),
     },
     readouts: rootReadouts(d.zpk, d.sampleRate),
+    diagnostics,
+    ...(expanded?.warn && {
+      coefficientWarning: {
+        message: expanded.message,
+        coefficientVerdict: expanded.coefficientVerdict,
+        designVerdict: expanded.designVerdict,
+        maxResponseErrorDb: expanded.maxResponseErrorDb,
+      },
+    }),
   };
+}
+
+/** Readable warnings about the computed roots: non-convergence and roots the coefficients leave uncertain. */
+export function diagnosticLines(diag: SystemDiagnostics): string[] {
+  const lines: string[] = [];
+  if (!diag.converged)
+    lines.push(
+      'warning: the root search did not converge for every root; the roots listed are approximations.',
+    );
+  const unsure = uncertainRoots(diag);
+  if (unsure.length > 0) {
+    const shown = unsure
+      .slice(0, 4)
+      .map(({ kind, root }) => `${kind} ${fmtRoot(root)} (within ±${shortNumber(root.errorBound, 2)})`);
+    const more = unsure.length > 4 ? `, and ${unsure.length - 4} more` : '';
+    lines.push(
+      `warning: the coefficients as typed are ill-conditioned: ${unsure.length} root${unsure.length > 1 ? 's are' : ' is'} uncertain: ${shown.join(', ')}${more}. ` +
+        'Second-order sections or the roots themselves are the safe form to work in.',
+    );
+  }
+  return lines;
 }
 
 const fmt = (x: number) => shortNumber(x, 10);
@@ -71,6 +116,8 @@ export function runAnalyze(argv: string[], io: CliIo): number {
   lines.push(`design: ${d.source}, sample rate ${fmt(d.sampleRate)} Hz`);
   lines.push(`stability: ${out.stability.verdict.toUpperCase()} — ${out.stability.reason}`);
   lines.push(`largest pole radius: ${fmt(out.stability.maxPoleRadius)}`);
+  lines.push(...diagnosticLines(out.diagnostics));
+  if (out.coefficientWarning) lines.push(`warning: ${out.coefficientWarning.message}.`);
   lines.push(...systemLines(out));
   lines.push('roots:');
   for (const r of out.readouts) {
@@ -79,7 +126,7 @@ export function runAnalyze(argv: string[], io: CliIo): number {
     if (r.bandwidthHz !== undefined) parts.push(`bandwidth ${fmt(r.bandwidthHz)} Hz`);
     if (r.timeConstantSeconds !== undefined) parts.push(`tau ${fmt(r.timeConstantSeconds)} s`);
     if (r.decay40dBSeconds !== undefined) parts.push(`40 dB decay ${fmt(r.decay40dBSeconds)} s`);
-    if (r.notchDepthDb !== undefined) parts.push(`notch ${fmt(r.notchDepthDb)} dB`);
+    if (r.notchDepthDb !== undefined) parts.push(`notch ${formatDb(r.notchDepthDb, 10, ASCII)}`);
     lines.push(`  ${parts.join(', ')}`);
   }
   io.stdout(lines.join('\n') + '\n');

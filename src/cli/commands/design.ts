@@ -6,7 +6,10 @@
  */
 import {
   DESIGNER_VARIANTS,
+  FAMILY_OPTIONS,
+  FAMILY_TIE_BREAK,
   isRequired,
+  type FamilyChoice,
   runDesigner,
   textFor,
   type DesignValues,
@@ -16,17 +19,22 @@ import {
   type Parameter,
 } from '../../core/design/index.ts';
 import { evaluateMask, maskFromDesigner, type MaskResult } from '../../core/mask/index.ts';
-import { writeDesignFile } from '../../share/designFile.ts';
+import { writeDesignFile, writeSharedFile } from '../../share/designFile.ts';
+import type { SharedDesign } from '../../share/document.ts';
+import { addDesignerPart } from '../../core/model/compose.ts';
+import { partsOf } from '../../core/model/parts.ts';
+import { resolveGain } from '../../core/gainRule.ts';
 import type { Design } from '../../core/model/design.ts';
 import { describeProblem, designProblem } from '../../core/model/check.ts';
 import { MAX_NAME_CHARS } from '../../core/model/limits.ts';
 import { UsageError, parseArgs, readFlagList, readFlagNumber, type ParsedArgs } from '../args.ts';
-import type { CliDesign } from '../designInput.ts';
+import { readDesignFileArg, type CliDesign } from '../designInput.ts';
 import { toJson } from '../json.ts';
 import type { CliIo } from '../main.ts';
 import { writeFileAtomic } from '../output.ts';
 import { analysis, systemLines } from './analyze.ts';
 import { shortNumber } from '../../core/shortNumber.ts';
+import { formatDb, formatMargin } from '../../core/format.ts';
 
 type Variant = (typeof DESIGNER_VARIANTS)[number];
 
@@ -35,7 +43,7 @@ const KINDS = new Map<string, Variant>(DESIGNER_VARIANTS.map((v) => [v.variant.c
 
 /** Every kind the command knows, in the order the usage lists them. */
 export const DESIGN_KINDS = [...KINDS.keys()];
-const COMMON_FLAGS = ['fs', 'out', 'name'];
+const COMMON_FLAGS = ['fs', 'out', 'name', 'add-to'];
 
 /** The parameters a kind takes on the command line (those its variant does not fix). */
 const parametersOf = ({ entry, variant }: Variant): Parameter[] =>
@@ -89,7 +97,7 @@ function readParameter(p: Parameter, raw: string, kind: string, values: DesignVa
 }
 
 /** The description a kind's flags give: each parameter read, the choices' defaults, then what is missing. */
-function readDescription(kind: string, v: Variant, args: ParsedArgs): DesignerSpec {
+function readDescription(kind: string, v: Variant, args: ParsedArgs, fsOfBase?: number): DesignerSpec {
   const { entry, variant } = v;
   const values: Record<string, unknown> = { kind: entry.kind, ...variant.fixed };
   const missing = (p: { flag: string }, what: string) =>
@@ -100,8 +108,12 @@ function readDescription(kind: string, v: Variant, args: ParsedArgs): DesignerSp
     else if (p.type === 'choice' && p.fallback !== undefined) values[p.key] = p.fallback;
   }
   const fs = args.flags.get('fs');
-  if (fs === undefined) throw missing({ flag: 'fs' }, 'sample rate in Hz');
-  values.fs = readFlagNumber('fs', fs, 'sample rate in Hz', 'Hz');
+  if (fs === undefined && fsOfBase === undefined) throw missing({ flag: 'fs' }, 'sample rate in Hz');
+  values.fs = fs === undefined ? fsOfBase : readFlagNumber('fs', fs, 'sample rate in Hz', 'Hz');
+  if (fsOfBase !== undefined && values.fs !== fsOfBase)
+    throw new UsageError(
+      `--fs ${fs} differs from the sample rate of the design added to (${fmt(fsOfBase)} Hz); a part is designed at its design's rate: leave --fs out.`,
+    );
   for (const alt of entry.alternatives ?? []) {
     const [a, b] = alt.keys.map((k) => entry.parameters.find((p) => p.key === k)!);
     if (values[a!.key] !== undefined && values[b!.key] !== undefined)
@@ -115,15 +127,20 @@ function readDescription(kind: string, v: Variant, args: ParsedArgs): DesignerSp
   return values as DesignerSpec;
 }
 
-/** Margins smaller than this (dB) are printed as 0. */
-export const MARGIN_DISPLAY_ZERO_DB = 1e-9;
-
 const fmt = (x: number) => shortNumber(x, 6);
-/** A margin in dB with its sign; below MARGIN_DISPLAY_ZERO_DB it reads 0 (meets the limit exactly, to rounding). */
-const signed = (x: number) => (Math.abs(x) < MARGIN_DISPLAY_ZERO_DB ? '0' : (x >= 0 ? '+' : '') + fmt(x));
+/** Levels and margins are printed by the one rule of read-outs (core/format.ts), in ASCII. */
+const ASCII = { ascii: true } as const;
 
-/** The designer description a command line asks for (usage errors name the flag and show an example). */
-export function designerFromArgs(argv: string[]): { spec: DesignerSpec; args: ParsedArgs; kind: string } {
+/**
+ * The designer description a command line asks for (usage errors name the flag and show an example), and
+ * the design it is added to with --add-to.
+ */
+export function designerFromArgs(argv: string[]): {
+  spec: DesignerSpec;
+  args: ParsedArgs;
+  kind: string;
+  base: { file: string; shared: SharedDesign } | null;
+} {
   const [kind, ...rest] = argv;
   const kinds = DESIGN_KINDS.join(', ');
   if (kind === undefined || kind.startsWith('--'))
@@ -139,24 +156,43 @@ export function designerFromArgs(argv: string[]): { spec: DesignerSpec; args: Pa
       throw new UsageError(
         `--${flag} does not apply to ${kind}; it takes ${flags.map((f) => `--${f}`).join(', ')}.`,
       );
-  return { spec: readDescription(kind, v, args), args, kind };
+  const file = args.flags.get('add-to');
+  const base = file === undefined ? null : { file, shared: readDesignFileArg(file) };
+  return { spec: readDescription(kind, v, args, base?.shared.design.sampleRate), args, kind, base };
+}
+
+/** "Any family": the family picked, every family's least order, and how a tie was broken. */
+function familyLines(choice: FamilyChoice): string[] {
+  const words = (f: string) => FAMILY_OPTIONS.find((o) => o.value === f)!.label;
+  return [
+    `family: ${words(choice.picked)}, the least order of any family${choice.tieBroken ? ` (tied on order; ${FAMILY_TIE_BREAK} decided)` : ''}`,
+    ...choice.trials.map(
+      (t) =>
+        `  ${words(t.family).padEnd(13)} ${
+          t.order === undefined
+            ? `not designable: ${t.refused ?? ''}`
+            : `order ${t.order}, group-delay spread across the pass band ${fmt(t.delaySpreadSamples!)} samples`
+        }${t.family === choice.picked ? '  <- picked' : ''}`,
+    ),
+  ];
 }
 
 function requirementLines(result: DesignResult, verdict: MaskResult | null): string[] {
   const lines: string[] = [];
   if (result.estimate) lines.push(`order: ${result.estimate.order} (least order meeting the requirement)`);
+  if (result.family) lines.push(...familyLines(result.family));
   const m = result.margin;
   if (m) {
     lines.push(
-      `pass band: worst loss ${fmt(m.passbandLossDb)} dB at ${fmt(m.worstPassHz)} Hz, margin ${signed(m.passMarginDb)} dB`,
-      `stop band: least attenuation ${fmt(m.stopbandAttenuationDb)} dB at ${fmt(m.worstStopHz)} Hz, margin ${signed(m.stopMarginDb)} dB`,
+      `pass band: worst loss ${formatDb(m.passbandLossDb, 6, ASCII)} at ${fmt(m.worstPassHz)} Hz, ${formatMargin(m.passMarginDb, 6, ASCII)}`,
+      `stop band: least attenuation ${formatDb(m.stopbandAttenuationDb, 6, ASCII)} at ${fmt(m.worstStopHz)} Hz, ${formatMargin(m.stopMarginDb, 6, ASCII)}`,
     );
   }
   if (verdict) {
     lines.push(`requirement mask: ${verdict.pass ? 'PASS' : 'FAIL'}`);
     for (const r of verdict.regions)
       lines.push(
-        `  ${r.id}: ${r.pass ? 'pass' : 'FAIL'}, worst margin ${signed(r.worstMarginDb)} dB at ${fmt(r.worstAtHz)} Hz`,
+        `  ${r.id}: ${r.pass ? '' : 'FAIL, '}${r.problem ? `not judged: ${r.problem}` : `${formatMargin(r.worstMarginDb, 6, ASCII)}${r.worstMarginDb !== Infinity && Number.isFinite(r.worstAtHz) ? ` at ${fmt(r.worstAtHz)} Hz` : ''}`}`,
       );
   }
   return lines;
@@ -186,7 +222,7 @@ export function designUsage(): string {
       alternatives.add(`--${a} or --${b}`);
     }
   const lines = [
-    'polewright design <kind> [parameters] [--json] [--out design.json] [--name <title>]',
+    'polewright design <kind> [parameters] [--json] [--out design.json] [--name <title>] [--add-to design.json]',
     '',
     'kinds, with an example each:',
     ...DESIGN_KINDS.map((k) => `  ${k.padEnd(15)} ${exampleLine(k, KINDS.get(k)!, {})}`),
@@ -202,6 +238,8 @@ export function designUsage(): string {
     `give one of each pair: ${[...alternatives].join('; ')}.`,
     'numbers read as in the workbench: 0.5 or 0,5, −2, 1e-3, 1/3, and a unit after a frequency (1.2kHz);',
     'lists take commas: --edge 100,200.',
+    '--add-to design.json adds the filter to that design as a part of its cascade (a notch on a low-pass), at',
+    "the design's sample rate (--fs may be left out); the result goes to --out, or back into the file.",
   ];
   return lines.join('\n') + '\n';
 }
@@ -212,7 +250,8 @@ export function runDesign(argv: string[], io: CliIo): number {
     io.stdout(designUsage());
     return 0;
   }
-  const { spec, args, kind } = designerFromArgs(argv);
+  const { spec, args, kind, base } = designerFromArgs(argv);
+  if (base) return runAddTo(spec, args, kind, base, io);
   const r = runDesigner(spec);
   if (!r.ok) {
     const accepted = r.error.expected ? ` Accepted: ${r.error.expected}.` : '';
@@ -234,6 +273,7 @@ export function runDesign(argv: string[], io: CliIo): number {
     note: result.note,
     ...(result.estimate && { estimate: result.estimate }),
     ...(result.margin && { margin: result.margin }),
+    ...(result.family && { family: { ...result.family, tieBreak: FAMILY_TIE_BREAK } }),
     ...(mask && { mask, maskResult: verdict }),
   };
   const design: Design = {
@@ -259,6 +299,71 @@ export function runDesign(argv: string[], io: CliIo): number {
     return 0;
   }
   const lines = [`designed: ${result.note}`, ...requirementLines(result, verdict)];
+  lines.push(`stability: ${out.stability.verdict.toUpperCase()} — ${out.stability.reason}`);
+  if (out.coefficientWarning) lines.push(`warning: ${out.coefficientWarning.message}.`);
+  lines.push(...systemLines(out));
+  io.stdout(lines.join('\n') + '\n');
+  return 0;
+}
+
+/** The parts of a composed design, one line each. */
+function partLines(design: Design): string[] {
+  return partsOf(design).map((p, i) => {
+    const what = p.designer
+      ? `${p.designer.kind} ${Object.entries(p.designer)
+          .filter(([k]) => k !== 'kind' && k !== 'fs')
+          .map(([k, v]) => `${k}=${flagValue(v)}`)
+          .join(' ')}`
+      : 'placed by hand';
+    return `  ${i + 1}. ${what} (${p.zeros} zeros, ${p.poles} poles stored)`;
+  });
+}
+
+/**
+ * `design <kind> … --add-to file.json`: designs the part at the file's sample rate, adds it to the file's
+ * design as a part of the cascade (the whole mask gets the part's requirement carved in), prints the whole,
+ * and writes the result to --out, or back into the file (atomically) when no --out is given.
+ */
+function runAddTo(
+  spec: DesignerSpec,
+  args: ParsedArgs,
+  kind: string,
+  base: { file: string; shared: SharedDesign },
+  io: CliIo,
+): number {
+  const r = addDesignerPart(base.shared.design, spec, 'fill');
+  if (!r.ok) {
+    const accepted = r.error.expected ? ` Accepted: ${r.error.expected}.` : '';
+    throw new UsageError(`${r.error.message}.${accepted}`);
+  }
+  const { design, result } = r.value;
+  const problem = designProblem(design);
+  if (problem) throw new UsageError(`the design cannot be kept: ${describeProblem(problem)}.`);
+  const { gain } = resolveGain(design.zeros, design.poles, design.gainRule, design.sampleRate);
+  const zpk = { zeros: design.zeros, poles: design.poles, gain };
+  const verdict = design.mask ? evaluateMask(design.mask, zpk, design.sampleRate) : null;
+  const cli: CliDesign = {
+    zpk,
+    typed: null,
+    sampleRate: design.sampleRate,
+    source: `polewright design ${kind} --add-to ${base.file}`,
+    notes: [],
+  };
+  const target = args.flags.get('out') ?? base.file;
+  writeFileAtomic(target, writeSharedFile({ design, view: base.shared.view }));
+  io.stderr(`note: wrote ${target}\n`);
+  const out = {
+    ...analysis(cli),
+    added: { designer: { ...spec, fs: design.sampleRate }, note: result.note },
+    parts: partsOf(design),
+    ...(design.mask && { mask: design.mask, maskResult: verdict }),
+  };
+  if (args.switches.has('json')) {
+    io.stdout(toJson(out));
+    return 0;
+  }
+  const lines = [`added: ${result.note}`, 'parts of the design (a cascade):', ...partLines(design)];
+  lines.push(...requirementLines({ zpk, note: '' }, verdict));
   lines.push(`stability: ${out.stability.verdict.toUpperCase()} — ${out.stability.reason}`);
   lines.push(...systemLines(out));
   io.stdout(lines.join('\n') + '\n');

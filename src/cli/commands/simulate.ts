@@ -4,7 +4,7 @@
  * bounded memory; without it the output samples are printed.
  */
 import { readFileSync } from 'node:fs';
-import { filterSections } from '../../core/time/filter.ts';
+import { filterSections, filterTf } from '../../core/time/filter.ts';
 import { makeImpulse, makeSine, makeStep } from '../../core/time/inputs.ts';
 import { zpkToSections } from '../../core/system/index.ts';
 import {
@@ -16,6 +16,7 @@ import {
   writeWav,
   type SampleFormat,
 } from '../../core/signal/index.ts';
+import type { Section, TransferFunction } from '../../core/types.ts';
 import { UsageError, intFlag, parseArgs, rateFlag, sineInputHz, type ParsedArgs } from '../args.ts';
 import { DESIGN_FLAGS, readDesign, type CliDesign } from '../designInput.ts';
 import { toJson } from '../json.ts';
@@ -172,7 +173,6 @@ async function streamToFile(
   const maxFrames = args.flags.has('samples')
     ? intFlag(args, 'samples', 1, 1, Number.MAX_SAFE_INTEGER)
     : undefined;
-  const sections = zpkToSections(d.zpk);
   const source = wavIn ? new WavFileSource(input, channel) : new CsvFileSource(input);
   const fallbackRate = inputRate ?? d.sampleRate;
   let format: SampleFormat = chosen ?? 'f32';
@@ -189,8 +189,9 @@ async function streamToFile(
     ...(maxFrames ? { maxFrames } : {}),
   };
   // Written beside --output and renamed over it only when the whole run succeeded.
+  const system = filterSystem(d, io);
   const summary: StreamRunSummary = await writeAtomically(output, (path) =>
-    filterStream(source, makeSink(path), sections, opts),
+    filterStream(source, makeSink(path), system, opts),
   );
   for (const note of summary.source.notes) io.stderr(`note: ${note}\n`);
   const rate = summary.source.sampleRate ?? fallbackRate;
@@ -252,6 +253,20 @@ function inputRateFlag(args: ParsedArgs): number | null {
   return args.flags.has('input-rate') ? rateFlag(args, 'input-rate', 0, MAX_SAMPLE_RATE) : null;
 }
 
+/**
+ * What the signal runs through: the coefficients exactly as typed (direct form II transposed, so an
+ * unstable typed filter visibly grows), or sections built from the roots for a design kept as roots.
+ */
+function filterSystem(d: CliDesign, io: CliIo): readonly Section[] | TransferFunction {
+  if (d.typed) {
+    io.stderr(
+      'note: filtering with b and a exactly as typed (direct form II transposed), not with sections.\n',
+    );
+    return d.typed;
+  }
+  return zpkToSections(d.zpk);
+}
+
 /** Runs `simulate`; resolves to the exit code. */
 export async function runSimulate(argv: string[], io: CliIo): Promise<number> {
   const args = parseArgs(
@@ -273,7 +288,10 @@ export async function runSimulate(argv: string[], io: CliIo): Promise<number> {
   for (const note of x.notes) io.stderr(`note: ${note}\n`);
   const mismatch = rateNote(d, args, x.sampleRate);
   if (mismatch) io.stderr(`note: ${mismatch}\n`);
-  const y = filterSections(zpkToSections(d.zpk), x.samples);
+  const system = filterSystem(d, io);
+  const y = Array.isArray(system)
+    ? filterSections(system, x.samples)
+    : filterTf(system as TransferFunction, x.samples);
   const rate = x.sampleRate ?? d.sampleRate;
   if (output !== undefined) {
     writeInMemory(args, y, rate, output, io);

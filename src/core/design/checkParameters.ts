@@ -4,8 +4,17 @@
  * throws DesignInputError naming the parameter (and the item of a list), so the page can mark that field.
  */
 import { shortNumber } from '../shortNumber.ts';
-import type { DesignValues, DesignerEntry, ListParameter, Parameter } from './parameters.ts';
+import {
+  orderMax,
+  type DesignValues,
+  type DesignerEntry,
+  type ListParameter,
+  type Parameter,
+} from './parameters.ts';
 import { DesignInputError } from './validate.ts';
+import { checkInBand } from './checkInBand.ts';
+
+export { checkInBand } from './checkInBand.ts';
 import { MAX_SAMPLE_RATE } from '../model/limits.ts';
 
 const fmt = (v: number) => shortNumber(v, 10);
@@ -15,19 +24,6 @@ const nameOf = (p: Parameter) => p.name ?? p.key;
 /** Whether a parameter must be present for these values. */
 export function isRequired(p: Parameter, values: DesignValues): boolean {
   return p.presence === 'required' || (p.requiredWhen?.(values) ?? false);
-}
-
-/** A frequency strictly inside (0, fs/2), named `name` in messages. */
-export function checkInBand(name: string, f: unknown, fs: number, key: string, index?: number): number {
-  const expected = `a frequency between 0 and ${fmt(fs / 2)} Hz (fs/2), exclusive`;
-  if (typeof f !== 'number' || !Number.isFinite(f) || !(f > 0 && f < fs / 2))
-    throw new DesignInputError(
-      `${name} = ${typeof f === 'number' ? fmt(f) : String(f)} Hz lies outside (0, ${fmt(fs / 2)}) Hz`,
-      expected,
-      key,
-      index,
-    );
-  return f;
 }
 
 /** A finite number above `lower` (0 by default). */
@@ -91,7 +87,7 @@ export function expectedOf(p: Parameter, values: DesignValues, fs: number): stri
       return `a number greater than ${fmt(typeof lower === 'number' ? lower : 0)}${unitText(p)}`;
     }
     case 'order':
-      return `a whole number from 1 to ${p.max}, or auto`;
+      return `a whole number from 1 to ${orderMax(p, values)}, or auto`;
     case 'list':
       return listExpected(p, p.count.exactly ? p.count.exactly(values) : null, fs);
     case 'choice':
@@ -123,10 +119,10 @@ function checkParameter(p: Parameter, value: unknown, values: DesignValues, fs: 
       return;
     case 'order':
       if (value === 'auto') return;
-      if (typeof value !== 'number' || !Number.isInteger(value) || value < 1 || value > p.max)
+      if (typeof value !== 'number' || !Number.isInteger(value) || value < 1 || value > orderMax(p, values))
         throw new DesignInputError(
           `${name} ${typeof value === 'number' ? fmt(value) : String(value)} is not accepted`,
-          `a whole number from 1 to ${p.max}, or auto`,
+          `a whole number from 1 to ${orderMax(p, values)}, or auto`,
           p.key,
         );
       return;

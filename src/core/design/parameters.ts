@@ -57,7 +57,9 @@ export interface NumberParameter<K extends string = string> extends ParameterBas
 /** A filter order: a whole number from 1 to max, or 'auto' for the least order meeting a requirement. */
 export interface OrderParameter<K extends string = string> extends ParameterBase<K> {
   readonly type: 'order';
+  /** The largest order of any description; `maxFor` may lower it for some values (an IIR family's). */
   readonly max: number;
+  readonly maxFor?: (values: DesignValues) => number;
   /** The form's words for 'auto'. */
   readonly autoLabel: string;
 }
@@ -163,6 +165,11 @@ export function defineDesigner<const K extends string, const Ps extends readonly
 
 /** The description type of a registry entry. */
 export type SpecOfEntry<E> = E extends DesignerEntry<infer K, infer Ps> ? SpecOf<K, Ps> : never;
+
+/** The largest order an order parameter accepts for these values. */
+export function orderMax(p: OrderParameter, values: DesignValues): number {
+  return p.maxFor ? Math.min(p.max, p.maxFor(values)) : p.max;
+}
 
 /** A text that may depend on the other parameters, for these values. */
 export function textFor(text: ValueText | undefined, values: DesignValues): string | undefined {

@@ -12,6 +12,7 @@ import {
 } from './entries/notches.ts';
 import { highShelfDesigner, lowShelfDesigner, peakingEqDesigner } from './entries/equalisers.ts';
 import { iirDesigner } from './entries/classical.ts';
+import { differentiatorDesigner, hilbertDesigner } from './entries/firOperators.ts';
 import type { DesignerEntry, DesignerVariant } from './parameters.ts';
 
 export const DESIGNERS = [
@@ -24,6 +25,8 @@ export const DESIGNERS = [
   lowShelfDesigner,
   highShelfDesigner,
   iirDesigner,
+  differentiatorDesigner,
+  hilbertDesigner,
 ] as const;
 
 /** A designer kind of the registry. */

@@ -2,7 +2,7 @@
  * Runs a classical IIR designer description whose parameters have passed their checks: estimates the order
  * if asked, designs, and judges against the requirement when there is one.
  */
-import type { BandShape } from './iir.ts';
+import type { BandShape, IirFamily } from './iir.ts';
 import { designIir } from './iir.ts';
 import { requirementMargin } from './margin.ts';
 import { estimateOrder } from './orderEstimate.ts';
@@ -12,11 +12,16 @@ import { BAND_SHAPE_OPTIONS, FAMILY_OPTIONS, type IirSpec } from './entries/clas
 import { DesignInputError, MAX_DESIGN_ORDER } from './validate.ts';
 import { separationProblem } from './separation.ts';
 import { shortNumber } from '../shortNumber.ts';
+import { chooseFamily, FAMILY_TIE_BREAK, type FamilyChoice } from './familyChoice.ts';
+
+/** The four classical families, in the order "any family" tries them. */
+const CLASSICAL_FAMILIES: readonly IirFamily[] = ['butterworth', 'chebyshev1', 'chebyshev2', 'elliptic'];
+const familyWordsOf = (f: string) => FAMILY_OPTIONS.find((o) => o.value === f)!.words;
 
 const responseWords = (r: BandShape) => BAND_SHAPE_OPTIONS.find((o) => o.value === r)!.label.toLowerCase();
 
 /** The pass-band/stop-band edges must nest the right way round for the band shape. */
-function checkNesting(r: BandShape, p: number[], s: number[]): void {
+export function checkNesting(r: BandShape, p: number[], s: number[]): void {
   const ok = {
     lowpass: () => p[0]! < s[0]!,
     highpass: () => s[0]! < p[0]!,
@@ -38,7 +43,7 @@ function checkNesting(r: BandShape, p: number[], s: number[]): void {
 }
 
 /** The requirement of a description that gives one (its parameters are checked: both bands, ripple, attenuation). */
-function requirementOf(spec: IirSpec): Requirement | undefined {
+export function requirementOf(spec: IirSpec): Requirement | undefined {
   if (!spec.passbandHz || !spec.stopbandHz) return undefined;
   checkNesting(spec.response, spec.passbandHz, spec.stopbandHz);
   return {
@@ -79,7 +84,43 @@ function beyondPrecision(
 
 /** Designs a classical filter from its checked description (throws DesignInputError on what the checks cannot see). */
 export function runIir(spec: IirSpec): DesignResult {
-  const { fs, family } = spec;
+  return spec.family === 'any' ? runAnyFamily(spec) : runFamily(spec, spec.family as IirFamily);
+}
+
+/** The families' orders in a note: "Butterworth 9, Chebyshev I 6, …" (a refused family says so). */
+function trialWords(choice: FamilyChoice): string {
+  return choice.trials
+    .map((t) => `${familyWordsOf(t.family)} ${t.order === undefined ? 'not designable' : t.order}`)
+    .join(', ');
+}
+
+/**
+ * "Any family": every family at its least order for the requirement; the least order wins, ties broken by
+ * the least group-delay spread across the pass band (familyChoice.ts).
+ */
+function runAnyFamily(spec: IirSpec): DesignResult {
+  if (spec.order !== 'auto')
+    throw new DesignInputError(
+      'any family picks the family needing the least order, so it needs the order left to the requirement',
+      "order auto ('least order that meets the requirement') with pass and stop bands",
+      'order',
+    );
+  const req = requirementOf(spec)!;
+  const r = chooseFamily(CLASSICAL_FAMILIES, req, (family) => {
+    const d = runFamily(spec, family);
+    return { ...d, order: d.estimate!.order };
+  });
+  if (!r.choice) throw r.errors[0];
+  const { choice, picked } = r;
+  const tie = choice.tieBroken ? `; tied on order, ${FAMILY_TIE_BREAK} decided` : '';
+  const note = `${picked.note}, picked from any family (${trialWords(choice)}${tie})`;
+  const { order: _order, ...result } = picked;
+  return { ...result, note, family: choice };
+}
+
+/** One family's design from the description (its family replaced by `family`). */
+function runFamily(spec: IirSpec, family: IirFamily): DesignResult {
+  const { fs } = spec;
   const req = requirementOf(spec);
   const estimate = req && spec.order === 'auto' ? estimateOrder(family, req) : undefined;
   if (estimate && estimate.order > MAX_DESIGN_ORDER)
@@ -107,7 +148,7 @@ export function runIir(spec: IirSpec): DesignResult {
   if (beyond) throw beyondPrecision(order, beyond, at, estimate !== undefined);
   const margin = req ? requirementMargin(zpk, req) : undefined;
   const fmt = (v: number) => shortNumber(v, 6);
-  const familyWords = FAMILY_OPTIONS.find((f) => f.value === family)!.words;
+  const familyWords = familyWordsOf(family);
   let note = `order ${order} ${familyWords} ${responseWords(spec.response)}, edges ${edgesHz.map(fmt).join(', ')} Hz`;
   if (needRipple) note += `, ${fmt(spec.rippleDb!)} dB ripple`;
   if (needAtten) note += `, ${fmt(spec.attenuationDb!)} dB stop band`;

@@ -7,7 +7,7 @@
  */
 import type { Root, Zpk } from '../types.ts';
 import { expandRoots } from '../system/index.ts';
-import { UNIT_CIRCLE_TOLERANCE } from '../stability.ts';
+import { UNIT_CIRCLE_TOLERANCE } from '../stability/index.ts';
 import { shortNumber } from '../shortNumber.ts';
 
 /** √ε for doubles (2⁻²⁶): the least distance, relative to max(1, |z|), at which two roots stay apart. */

@@ -3,6 +3,8 @@ import type { InputError, Result } from '../types.ts';
 
 /** Highest order the classical designers accept. */
 export const MAX_DESIGN_ORDER = 64;
+/** Highest order (taps − 1) the FIR designers accept: well inside the root finder's accurate range. */
+export const MAX_FIR_ORDER = 512;
 
 /**
  * Thrown inside a designer run and turned into an InputError result at its door. `parameter` names the

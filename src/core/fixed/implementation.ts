@@ -5,7 +5,7 @@
 import type { Result, Root, Section, Zpk } from '../types.ts';
 import { buildCascade, type Cascade } from '../sections/index.ts';
 import { sectionsToZpk } from '../system/index.ts';
-import { stabilityOfZpk, type Stability } from '../stability.ts';
+import { stabilityOfZpk, type Stability } from '../stability/index.ts';
 import { responseZpk, type FrequencyResponse } from '../response/index.ts';
 import { quantizeCascade, type QuantizedCoefficients } from './quantize.ts';
 import { qName, type QFormat } from './qformat.ts';

@@ -41,3 +41,4 @@ export {
   MIN_REGION_WIDTH_FRACTION,
 } from './edit.ts';
 export type { MaskRegionPatch, RegionEdge } from './edit.ts';
+export { composeMask, CARVE_SLIVER_FRACTION } from './compose.ts';

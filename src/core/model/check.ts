@@ -6,7 +6,7 @@
  * again, which keeps a drag step cheap.
  */
 import type { Root } from '../types.ts';
-import { designerEntry, type DesignerSpec } from '../design/index.ts';
+import { designerEntry, orderMax, type DesignerSpec } from '../design/light.ts';
 import type { RequirementMask } from '../mask/index.ts';
 import { validateSettings } from '../fixed/index.ts';
 import { shortNumber } from '../shortNumber.ts';
@@ -18,6 +18,7 @@ import {
   MAX_NAME_CHARS,
   MAX_NOTE_CHARS,
   MAX_ORDER,
+  MAX_PARTS,
   MAX_REGION_ID_CHARS,
   MAX_REGION_LABEL_CHARS,
   MAX_SAMPLE_RATE,
@@ -163,8 +164,8 @@ function typedProblem(typed: NonNullable<Design['typed']>): DesignProblem | null
 }
 
 /** A designer description as its registry entry describes it: kinds, numbers, lists, orders and choices. */
-function designerProblem(spec: DesignerSpec): DesignProblem | null {
-  const at = (k: string, i?: number) => (i === undefined ? ['designer', k] : ['designer', k, i]);
+function designerProblem(spec: DesignerSpec, base: (string | number)[] = ['designer']): DesignProblem | null {
+  const at = (k: string, i?: number) => (i === undefined ? [...base, k] : [...base, k, i]);
   const entry = designerEntry(spec.kind);
   if (!entry)
     return problem(
@@ -192,8 +193,12 @@ function designerProblem(spec: DesignerSpec): DesignProblem | null {
         break;
       }
       case 'order':
-        if (v !== 'auto' && !whole(v, p.max))
-          return problem(at(p.key), `order ${String(v)} is not accepted`, `1 to ${p.max}, or auto`);
+        if (v !== 'auto' && !whole(v, orderMax(p, values)))
+          return problem(
+            at(p.key),
+            `order ${String(v)} is not accepted`,
+            `1 to ${orderMax(p, values)}, or auto`,
+          );
         break;
       case 'list': {
         const list = Array.isArray(v) ? (v as unknown[]) : null;
@@ -244,6 +249,48 @@ function maskProblem(mask: RequirementMask): DesignProblem | null {
 }
 
 /**
+ * The parts of a composed design (parts.ts): two to MAX_PARTS, each a designer description or the one hand
+ * part (last), owning runs of roots that add up to the design's lists, with a finite gain.
+ */
+function partsProblem(design: Design): DesignProblem | null {
+  const parts = design.parts!;
+  if (parts.length < 2 || parts.length > MAX_PARTS)
+    return problem(
+      ['parts'],
+      `${parts.length} parts`,
+      `2 to ${MAX_PARTS} parts (one designed part is kept as "designer")`,
+    );
+  if (design.designer)
+    return problem(['designer'], 'a composed design has a designer of its own', 'the designers in its parts');
+  let zeros = 0;
+  let poles = 0;
+  for (let i = 0; i < parts.length; i++) {
+    const p = parts[i]!;
+    const at = (k: string) => ['parts', i, k];
+    const count = (v: unknown) => typeof v === 'number' && Number.isInteger(v) && v >= 0 && v <= MAX_ORDER;
+    if (!count(p.zeros))
+      return problem(at('zeros'), `${String(p.zeros)} is not a count of roots`, 'a whole number ≥ 0');
+    if (!count(p.poles))
+      return problem(at('poles'), `${String(p.poles)} is not a count of roots`, 'a whole number ≥ 0');
+    const bad =
+      finiteProblem(p.gain, at('gain')) ??
+      (p.designer ? designerProblem(p.designer, ['parts', i, 'designer']) : null);
+    if (bad) return bad;
+    if (!p.designer && i !== parts.length - 1)
+      return problem(['parts', i], 'the roots placed by hand are not the last part', 'the hand part last');
+    zeros += p.zeros;
+    poles += p.poles;
+  }
+  if (zeros !== design.zeros.length || poles !== design.poles.length)
+    return problem(
+      ['parts'],
+      `the parts own ${zeros} zeros and ${poles} poles but the design stores ${design.zeros.length} and ${design.poles.length}`,
+      "parts whose roots add up to the design's",
+    );
+  return null;
+}
+
+/**
  * The first way the design breaks the workbench's bounds, or null when it is within them. With `accepted`
  * (a design already checked), parts that are the very same objects are skipped.
  */
@@ -283,5 +330,8 @@ export function designProblem(design: Design, accepted?: Design): DesignProblem 
     const bad = check([key]);
     if (bad) return bad;
   }
+  // The parts are checked against the root lists too, so a change of either checks them again.
+  if (design.parts && !(same('parts') && same('zeros') && same('poles') && same('designer')))
+    return partsProblem(design);
   return null;
 }

@@ -7,6 +7,7 @@ import type { GainRule } from '../gainRule.ts';
 import type { DesignerSpec } from '../design/index.ts';
 import type { RequirementMask } from '../mask/index.ts';
 import type { ImplementationSettings } from '../fixed/index.ts';
+import { partsAfterRootEdit, type DesignPart } from './parts.ts';
 
 export type { GainRule } from '../gainRule.ts';
 
@@ -31,6 +32,11 @@ export interface Design {
   note: string;
   /** The designer that produced the roots, kept so it can be re-run with new values (see store/designer.ts). */
   designer?: DesignerSpec;
+  /**
+   * A composed design: the cascade's parts, each owning a run of the root lists (parts.ts). Present for two
+   * parts or more, and then `designer` is absent.
+   */
+  parts?: DesignPart[];
   /** The requirement mask the magnitude response is judged against. */
   mask?: RequirementMask;
   /** How the design is taken to the target (sections, fixed point); absent while only the ideal filter matters. */
@@ -50,9 +56,12 @@ export function rootsOf(design: Design, kind: RootKind): Root[] {
   return kind === 'zero' ? design.zeros : design.poles;
 }
 
-/** A copy of the design with one root list replaced and typed coefficients released. */
+/**
+ * A copy of the design with one root list replaced and typed coefficients released; the parts of a
+ * composed design follow the edit (parts.ts: a root added by hand joins the hand part).
+ */
 export function withRoots(design: Design, kind: RootKind, roots: Root[]): Design {
-  const { typed: _typed, ...rest } = design;
+  const { typed: _typed, ...rest } = partsAfterRootEdit(design, kind, roots);
   return kind === 'zero' ? { ...rest, zeros: roots } : { ...rest, poles: roots };
 }
 

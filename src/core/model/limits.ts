@@ -31,6 +31,11 @@ export const MAX_TYPED_TEXT_CHARS = TYPED_CHARS_PER_COEFFICIENT * 2 * MAX_COEFFI
 export const MAX_HARMONICS = 64;
 /** Most edges of a designer's band (low, high). */
 export const MAX_EDGES = 2;
+/**
+ * Most parts of a composed design (parts.ts): room for a classical filter with a notch at every hum
+ * harmonic a harmonic-notch designer may list, each as a part of its own; the order limit bounds the whole.
+ */
+export const MAX_PARTS = MAX_HARMONICS + 1;
 /** Largest harmonic number (or other whole-number item of a designer's list). */
 export const MAX_WHOLE_ITEM = 1_000_000;
 /**

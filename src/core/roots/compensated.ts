@@ -11,9 +11,15 @@ const SPLIT = 134217729;
 
 /**
  * Writes p(z) (compensated) and p'(z) (plain Horner) for descending coefficients c at z = x + i·y into
- * out = [Re p, Im p, Re p', Im p'].
+ * out = [Re p, Im p, Re p', Im p']. With `lo`, the coefficients are the double-double values c_k + lo_k.
  */
-export function compensatedEval(c: Float64Array, x: number, y: number, out: Float64Array): void {
+export function compensatedEval(
+  c: Float64Array,
+  x: number,
+  y: number,
+  out: Float64Array,
+  lo?: Float64Array,
+): void {
   const n = c.length - 1;
   const xh = x * SPLIT - (x * SPLIT - x);
   const xl = x - xh;
@@ -21,7 +27,7 @@ export function compensatedEval(c: Float64Array, x: number, y: number, out: Floa
   const yl = y - yh;
   let sr = c[0]!;
   let si = 0;
-  let er = 0;
+  let er = lo ? lo[0]! : 0;
   let ei = 0;
   let dr = 0;
   let di = 0;
@@ -53,7 +59,7 @@ export function compensatedEval(c: Float64Array, x: number, y: number, out: Floa
     const z3 = q2 - p3;
     const f2 = p3 - (q2 - z3) + (p4 - z3);
     // The error polynomial, by plain Horner.
-    const ter = er * x - ei * y + (e1 - e2 + f1 + g1);
+    const ter = er * x - ei * y + (e1 - e2 + f1 + g1 + (lo ? lo[k]! : 0));
     ei = er * y + ei * x + (e3 + e4 + f2);
     er = ter;
     sr = r1;
@@ -63,4 +69,23 @@ export function compensatedEval(c: Float64Array, x: number, y: number, out: Floa
   out[1] = si + ei;
   out[2] = dr;
   out[3] = di;
+}
+
+/** The derivative's coefficients as double-double (hi, lo): k·c_k exactly. */
+export function derivativeDd(c: Float64Array): { hi: Float64Array; lo: Float64Array } {
+  const n = c.length - 1;
+  const hi = new Float64Array(Math.max(1, n));
+  const lo = new Float64Array(Math.max(1, n));
+  for (let i = 0; i < n; i++) {
+    const a = c[i]!;
+    const b = n - i;
+    const p = a * b;
+    const ah = a * SPLIT - (a * SPLIT - a);
+    const al = a - ah;
+    const bh = b * SPLIT - (b * SPLIT - b);
+    const bl = b - bh;
+    hi[i] = p;
+    lo[i] = al * bl - (p - ah * bh - al * bh - ah * bl);
+  }
+  return { hi, lo };
 }

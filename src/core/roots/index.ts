@@ -6,7 +6,7 @@
  */
 import type { Root } from '../types.ts';
 import type { Poly } from '../poly.ts';
-import { aberthIterate, freezeLevel } from './aberth.ts';
+import { aberthIterate } from './aberth.ts';
 import { startingPoints } from './start.ts';
 import { polishIllConditioned } from './polish.ts';
 import { symmetrizeConjugates } from './conjugate.ts';
@@ -59,13 +59,16 @@ export function findRoots(p: Poly, options: RootsOptions = {}): RootsResult {
   const origin = p.length - 1 - tail;
   const n = tail - lead;
   const c = new Float64Array(n + 1);
-  for (let k = 0; k <= n; k++) c[k] = p[lead + k]! / p[lead]!;
+  // Scale by a power of two only, which is exact: dividing by the leading coefficient would round every
+  // coefficient and can turn a tight cluster of distinct roots into an exact multiple root.
+  const scale = 2 ** -Math.round(Math.log2(Math.abs(p[lead]!)));
+  for (let k = 0; k <= n; k++) c[k] = p[lead + k]! * scale;
   const re = new Float64Array(n + origin);
   const im = new Float64Array(n + origin);
   let converged = true;
   let iterations = 0;
-  if (n === 1) re[0] = -c[1]!;
-  else if (n === 2) quadratic(c[1]!, c[2]!, re, im);
+  if (n === 1) re[0] = -c[1]! / c[0]!;
+  else if (n === 2) quadratic(c[1]! / c[0]!, c[2]! / c[0]!, re, im);
   else if (n > 2) {
     const zr = re.subarray(0, n);
     const zi = im.subarray(0, n);
@@ -74,12 +77,10 @@ export function findRoots(p: Poly, options: RootsOptions = {}): RootsResult {
   }
   const zr = re.subarray(0, n);
   const zi = im.subarray(0, n);
+  symmetrizeConjugates(c, zr, zi);
+  if (n > 2) iterations += polishIllConditioned(c, zr, zi);
   const mate = symmetrizeConjugates(c, zr, zi);
   const multiple = findMultipleRoots(c, zr, zi, mate);
-  if (n > 2 && converged) {
-    const floor = freezeLevel(n);
-    iterations += polishIllConditioned(c, zr, zi, mate, (i) => multiple.group[i]! >= 0, floor);
-  }
   const grouped = listGrouped(zr, zi, multiple);
   if (origin > 0) grouped.push({ re: 0, im: 0, multiplicity: origin });
   return { re, im, grouped, atInfinity: lead, zeroPolynomial: false, converged, iterations };

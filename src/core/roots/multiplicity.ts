@@ -4,17 +4,21 @@
  * cluster becomes one root of multiplicity m whose value is the cluster centroid refined by Newton's method
  * on p^(m−1), where the root is simple (the classical deflation-free multiple-root refinement, see e.g.
  * Z. Zeng, "Computing multiple roots of inexact polynomials", Math. Comp. 74, 2005). A cluster is merged
- * only after verification: p, p', …, p^(m−2) must vanish at the refined value to within rounding, so
- * distinct roots that are merely close (farther apart than working precision can blur) stay separate.
+ * only when the merged root reproduces the polynomial as well as the separate approximations do: the
+ * remainder of p divided by (z − c)^m, formed in double-double, must be no larger than the remainder of p
+ * divided by the product of the cluster's own factors (within MERGE_RATIO and one rounding). A small
+ * residual at the centre is not enough: it is small at any point inside a cluster of distinct roots.
  */
 import type { Root } from '../types.ts';
-import { logDerivative, relativeResidual } from './horner.ts';
+import { logDerivative } from './horner.ts';
+import { factor, product, remainderSize, type DdPoly } from './doubleDouble.ts';
+import { setBackwardError } from './setBackwardError.ts';
 
 /**
  * Cluster radii tried, relative to the root modulus, largest first. An m-fold root spreads over about
  * ε^(1/m)·(condition), e.g. 1e-8 for m = 2 and 1e-4 for m = 4; the largest radius admits m ≈ 6.
  */
-export const CLUSTER_RADII = [3e-2, 5e-3, 1e-3, 2e-4, 3e-5, 3e-6, 3e-7];
+export const CLUSTER_RADII = [1e-1, 3e-2, 5e-3, 1e-3, 2e-4, 3e-5, 3e-6, 3e-7];
 
 /**
  * A candidate cluster is verified only if no other root lies within CLUSTER_ISOLATION times its radius of
@@ -24,10 +28,21 @@ export const CLUSTER_RADII = [3e-2, 5e-3, 1e-3, 2e-4, 3e-5, 3e-6, 3e-7];
 export const CLUSTER_ISOLATION = 3;
 
 /**
- * A merged root must make p, …, p^(m−2) vanish to within this many (degree · ε) of Σ|coefficients||z|^k:
- * the rounding error of Horner's rule plus that of coefficients formed by multiplying out factors.
+ * The cluster-alone remainder test is a cheap first filter (it rejects two distinct roots 1e-7 apart at
+ * once); it may pass up to this times the separate remainder, plus PREFILTER_FLOOR·ε, because the
+ * set-level test below decides.
  */
-export const MULTIPLICITY_RESIDUAL_PER_DEGREE = 64;
+export const PREFILTER_RATIO = 16;
+export const PREFILTER_FLOOR = 16;
+
+/** When merging every candidate fails the set test, candidates are tried one by one only up to this many. */
+export const SEPARATE_CHECKS = 2;
+
+/** A merged set may have at most this times the separate set's backward error (plus MERGE_FLOOR·ε). */
+export const MERGE_RATIO = 2;
+
+/** Remainders below this many ε (relative to max|c_k|) are rounding: a merge adding no more is accepted. */
+export const MERGE_FLOOR = 2;
 
 /** Newton steps allowed when refining a cluster centre on p^(m−1). */
 const REFINE_STEPS = 12;
@@ -53,8 +68,8 @@ export function findMultipleRoots(
   const group = new Int32Array(n).fill(-1);
   const roots: Root[] = [];
   const neighbours = closePairs(re, im, 2 * CLUSTER_RADII[0]!);
-  const tol = MULTIPLICITY_RESIDUAL_PER_DEGREE * Math.max(1, c.length - 1) * Number.EPSILON;
   const derivs: Float64Array[] = [c];
+  const reversedC = c.slice().reverse();
   const failedSize = new Int32Array(n);
   for (const rho of CLUSTER_RADII) {
     for (let i = 0; i < n; i++) {
@@ -72,7 +87,7 @@ export function findMultipleRoots(
       const m = members.length;
       if (m < 2 || m === failedSize[i] || !isolated(re, im, members, neighbours[i]!, cx, cy)) continue;
       if (real && members.some((k) => mate[k]! >= 0 && !members.includes(mate[k]!))) continue;
-      const centre = verifiedCentre(c, derivs, re, im, members, real, rho * mod, tol);
+      const centre = verifiedCentre(c, reversedC, derivs, re, im, members, real, rho * mod);
       if (!centre) {
         failedSize[i] = m;
         continue;
@@ -86,7 +101,56 @@ export function findMultipleRoots(
       }
     }
   }
-  return { group, clusters: roots };
+  return keepReproducing(c, re, im, group, roots);
+}
+
+/**
+ * Keeps the merges whose root set still multiplies out to the polynomial as well as the separate roots
+ * (setBackwardError, double-double): all at once when that passes, else each on its own, then together.
+ * The remainder test of verifiedCentre looks at the cluster alone; inside a wide cluster of pseudo-roots
+ * (the zeros of k·(z + 1)^20 rounded to doubles spread over a ring of radius 0.3) it passes merges that
+ * leave the rest of the set unable to reproduce p.
+ */
+function keepReproducing(
+  c: Float64Array,
+  re: Float64Array,
+  im: Float64Array,
+  group: Int32Array,
+  roots: Root[],
+): MultipleRoots {
+  if (roots.length === 0) return { group, clusters: roots };
+  const lead = roots.map((r, id) => (r.im < 0 && id > 0 && roots[id - 1]!.im === -r.im ? id - 1 : id));
+  const ids = [...new Set(lead)];
+  const withMerged = (accepted: Set<number>) => {
+    const r = Float64Array.from(re);
+    const i = Float64Array.from(im);
+    for (let k = 0; k < re.length; k++) {
+      const id = group[k]!;
+      if (id >= 0 && accepted.has(lead[id]!)) {
+        r[k] = roots[id]!.re;
+        i[k] = roots[id]!.im;
+      }
+    }
+    return setBackwardError(c, r, i);
+  };
+  const limit = MERGE_RATIO * setBackwardError(c, re, im) + MERGE_FLOOR * Number.EPSILON;
+  let accepted = new Set(ids);
+  if (!(withMerged(accepted) <= limit)) {
+    // One by one only for a few candidates: each check multiplies the whole set out.
+    accepted = new Set(
+      ids.length <= SEPARATE_CHECKS ? ids.filter((id) => withMerged(new Set([id])) <= limit) : [],
+    );
+    if (accepted.size > 1 && !(withMerged(accepted) <= limit)) accepted = new Set();
+  }
+  const renumber = new Map<number, number>();
+  const kept: Root[] = [];
+  for (let id = 0; id < roots.length; id++) {
+    if (!accepted.has(lead[id]!)) continue;
+    renumber.set(id, kept.length);
+    kept.push(roots[id]!);
+  }
+  const out = Int32Array.from(group, (id) => (id >= 0 && renumber.has(id) ? renumber.get(id)! : -1));
+  return { group: out, clusters: kept };
 }
 
 /** The roots listed once per group: clusters with their multiplicity, simple roots with multiplicity 1. */
@@ -147,15 +211,16 @@ function closePairs(re: Float64Array, im: Float64Array, r: number): number[][] {
 /** Refined centre [re, im] of a cluster if it passes as one m-fold root, else undefined. */
 function verifiedCentre(
   c: Float64Array,
+  reversedC: Float64Array,
   derivs: Float64Array[],
   re: Float64Array,
   im: Float64Array,
   members: number[],
   real: boolean,
   radius: number,
-  tol: number,
 ): [number, number] | undefined {
   const m = members.length;
+  if (m > c.length - 1) return undefined;
   let x0 = 0;
   let y0 = 0;
   for (const k of members) {
@@ -164,7 +229,18 @@ function verifiedCentre(
   }
   x0 /= m;
   y0 = real ? 0 : y0 / m;
-  if (m > c.length - 1) return undefined;
+  const separate: DdPoly[] = [];
+  for (const k of members) if (im[k]! >= 0) separate.push(factor(re[k]!, im[k]!));
+  const outside = Math.hypot(x0, y0) > 1;
+  const size = (f: DdPoly) => (outside ? remainderSize(reversedC, reversedDd(f)) : remainderSize(c, f));
+  const limit = PREFILTER_RATIO * size(product(separate)) + PREFILTER_FLOOR * Number.EPSILON;
+  const merged = (x: number, y: number) => size(product(new Array<DdPoly>(m).fill(factor(x, y))));
+  // The polished members' mean is accurate to about ε for a rounding-split multiple root (the split is
+  // symmetric to first order); an exact multiple root's approximations converge only linearly, and there
+  // Newton on p^(m−1), where the root is simple, finds the centre. The one leaving the smaller remainder
+  // stands.
+  const atMean = merged(x0, y0);
+  if (atMean === 0) return [x0, y0];
   while (derivs.length <= m) derivs.push(derivative(derivs[derivs.length - 1]!));
   const f = derivs[m - 1]!;
   const absF = f.map(Math.abs);
@@ -182,10 +258,15 @@ function verifiedCentre(
     y -= dy;
     if (Math.hypot(dx, dy) <= 2 * Number.EPSILON * Math.hypot(x, y)) break;
   }
-  if (!(Math.hypot(x - x0, y - y0) <= radius)) return undefined;
   if (real) y = 0;
-  for (let j = 0; j < m - 1; j++) if (!(relativeResidual(derivs[j]!, x, y) <= tol)) return undefined;
-  return [x, y];
+  const atNewton = Math.hypot(x - x0, y - y0) <= radius ? merged(x, y) : Infinity;
+  const [best, size0]: [[number, number], number] =
+    atNewton < atMean ? [[x, y], atNewton] : [[x0, y0], atMean];
+  return size0 <= limit ? best : undefined;
+}
+
+function reversedDd(f: DdPoly): DdPoly {
+  return { hi: f.hi.slice().reverse(), lo: f.lo.slice().reverse() };
 }
 
 function derivative(p: Float64Array): Float64Array {

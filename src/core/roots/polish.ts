@@ -1,106 +1,384 @@
 /**
- * Final polish of badly conditioned roots: a few Aberth–Ehrlich sweeps in which p(z) comes from the
+ * Final polish of badly conditioned roots: Aberth–Ehrlich sweeps in which p(z) and p'(z) come from the
  * compensated Horner scheme, so the iteration converges to the roots of the given coefficients as if the
  * arithmetic had twice the precision (the refinement strategy of e.g. Graillat, "Accurate simple zeros of
  * polynomials in floating point arithmetic", 2008, with Aberth's correction keeping clustered roots apart).
- * Only roots whose estimated forward error exceeds POLISH_FORWARD_ERROR are touched, since compensated
- * evaluation costs several plain ones.
+ * Inside a cluster the plain residual is rounding noise at every point, so a plain-precision stop leaves
+ * approximations anywhere in the cluster and the set no longer multiplies out to the polynomial; here every
+ * root runs until its compensated step reaches its last bits or stops falling, and keeps its best point.
+ * The roots are polished without forcing conjugate symmetry (two real roots that came out of the plain
+ * iteration as a conjugate pair must be free to split), and made symmetric again afterwards by comparing
+ * compensated residuals.
  */
-import { compensatedEval } from './compensated.ts';
-import { logDerivative } from './horner.ts';
+import { compensatedEval, derivativeDd } from './compensated.ts';
+import { logDerivative, relativeResidual } from './horner.ts';
+import { freezeLevel } from './aberth.ts';
 
 /** Polish a root when its condition number times ε (its forward-error estimate, relative) exceeds this. */
-export const POLISH_FORWARD_ERROR = 1e-12;
+export const POLISH_FORWARD_ERROR = 1e-14;
 
-/** A root stops polishing once a step is not below this fraction of the one before (noise reached). */
-export const POLISH_STALL_RATIO = 0.5;
+/** Compensated sweeps at most (a multiple root's approximations close in linearly, so clusters need many). */
+export const POLISH_SWEEPS = 60;
 
-/** Compensated sweeps at most. */
-export const POLISH_SWEEPS = 6;
+/** The polish is undone if a plain residual ends above this many times its start (or the rounding level). */
+export const POLISH_GUARD = 64;
+
+/** A root stops once its compensated residual has not improved for this many sweeps. */
+export const POLISH_STALL_SWEEPS = 2;
+
+/** A stalled root counts as settled once its last step is below this fraction of its nearest-neighbour distance. */
+const SETTLED = 1e-6;
+
+/** The plain p' is used while its rounding bound is below this fraction of |p'|. */
+const PLAIN_DERIVATIVE_TRUST = 1e-3;
 
 /**
- * Polishes the badly conditioned approximations in zr/zi (roots of descending c) in place, skipping those
- * with skip(i) true (members of a merged multiple root); returns sweeps used. Conjugate symmetry is kept:
- * a root's mate (mate[i], -1 for real roots) follows it, and real roots stay real. A polished root whose
- * plain residual ends above both its old one and the rounding level `floor` (a sweep budget running out
- * mid-cluster) goes back to where it was, so the backward error never grows.
+ * Compensated p'/p and relative residual |p(z)| / Σ|c_k||z|^k at z = x + iy, written to out = [Re, Im, res].
+ * For |z| > 1 the reversed polynomial q(w) = w^n p(1/w) is evaluated at w = 1/z and p'/p = w(n − w q'/q)
+ * (as roots/horner.ts does), so no power of |z| overflows at high degree.
  */
-export function polishIllConditioned(
-  c: Float64Array,
-  zr: Float64Array,
-  zi: Float64Array,
-  mate: Int32Array,
-  skip: (i: number) => boolean,
-  floor: number,
-): number {
-  const n = zr.length;
-  const absC = c.map(Math.abs);
-  const g = new Float64Array(3);
-  const active: number[] = [];
-  const before = new Map<number, [number, number, number]>();
-  for (let i = 0; i < n; i++) {
-    if (zi[i]! < 0 || skip(i)) continue;
-    logDerivative(c, absC, zr[i]!, zi[i]!, g);
-    // κ = Σ|c_k||z|^k / (|z||p'(z)|) = 1 / (|z| |p'/p| residual).
-    const kappa = 1 / (Math.hypot(zr[i]!, zi[i]!) * Math.hypot(g[0]!, g[1]!) * g[2]!);
-    if (kappa * Number.EPSILON <= POLISH_FORWARD_ERROR) continue;
-    active.push(i);
-    before.set(i, [zr[i]!, zi[i]!, g[2]!]);
+class CompensatedEvaluator {
+  private readonly rev: Float64Array;
+  private readonly d: { hi: Float64Array; lo: Float64Array };
+  private readonly dRev: { hi: Float64Array; lo: Float64Array };
+  private readonly absC: Float64Array;
+  private readonly absRev: Float64Array;
+  private readonly v = new Float64Array(4);
+  private readonly w = new Float64Array(4);
+  constructor(private readonly c: Float64Array) {
+    this.rev = c.slice().reverse();
+    this.d = derivativeDd(c);
+    this.dRev = derivativeDd(this.rev);
+    this.absC = c.map(Math.abs);
+    this.absRev = this.rev.map(Math.abs);
   }
-  const v = new Float64Array(4);
+  logDerivative(x: number, y: number, out: Float64Array): void {
+    const n = this.c.length - 1;
+    const mod2 = x * x + y * y;
+    const inside = mod2 <= 1;
+    const ux = inside ? x : x / mod2;
+    const uy = inside ? y : -y / mod2;
+    const coeffs = inside ? this.c : this.rev;
+    const abs = inside ? this.absC : this.absRev;
+    // Compensated p with plain p'; p' is recomputed from double-double coefficients only when its plain
+    // rounding bound (2nε Σ k|c_k||z|^(k−1)) is not small against it, as inside a cluster.
+    compensatedEval(coeffs, ux, uy, this.v);
+    const mod = Math.sqrt(ux * ux + uy * uy);
+    let b = 0;
+    let bd = 0;
+    for (let k = 0; k <= n; k++) {
+      bd = bd * mod + b;
+      b = b * mod + abs[k]!;
+    }
+    if (4 * n * Number.EPSILON * bd > PLAIN_DERIVATIVE_TRUST * Math.hypot(this.v[2]!, this.v[3]!)) {
+      const deriv = inside ? this.d : this.dRev;
+      compensatedEval(deriv.hi, ux, uy, this.w, deriv.lo);
+      this.v[2] = this.w[0]!;
+      this.v[3] = this.w[1]!;
+    }
+    this.w[0] = this.v[2]!;
+    this.w[1] = this.v[3]!;
+    const pr = this.v[0]!;
+    const pi = this.v[1]!;
+    const pd = pr * pr + pi * pi;
+    out[2] = b === 0 ? 0 : Math.sqrt(pd) / b;
+    const hr = (this.w[0]! * pr + this.w[1]! * pi) / pd;
+    const hi = (this.w[1]! * pr - this.w[0]! * pi) / pd;
+    if (inside) {
+      out[0] = hr;
+      out[1] = hi;
+      return;
+    }
+    // p'/p = w (n − w h)
+    const tr = n - (ux * hr - uy * hi);
+    const ti = -(ux * hi + uy * hr);
+    out[0] = ux * tr - uy * ti;
+    out[1] = ux * ti + uy * tr;
+  }
+}
+
+/**
+ * Polishes the badly conditioned approximations in zr/zi (all roots of descending c, conjugates listed,
+ * exactly symmetric on entry) in place and leaves every complex root with its exact mirror; returns the
+ * sweeps used. A complex root is polished once and its mate mirrors it, until the pair comes so close to
+ * the real axis that it may really be two real roots: then both members go on independently. Real
+ * approximations are polished independently from the start (see unsettleRealRoots).
+ */
+export function polishIllConditioned(c: Float64Array, zr: Float64Array, zi: Float64Array): number {
+  const n = zr.length;
+  const mate = mates(zr, zi);
+  const absC = c.map(Math.abs);
+  const h = new Float64Array(3);
+  const active: number[] = [];
+  for (let i = 0; i < n; i++) {
+    if (zi[i]! < 0) continue;
+    // κ = Σ|c_k||z|^k / (|z||p'(z)|) = 1 / (|z| |p'/p| residual), NaN (so polished) where p is exactly 0.
+    logDerivative(c, absC, zr[i]!, zi[i]!, h);
+    const kappa = 1 / (Math.hypot(zr[i]!, zi[i]!) * Math.hypot(h[0]!, h[1]!) * h[2]!);
+    if (!(kappa * Number.EPSILON <= POLISH_FORWARD_ERROR)) active.push(i);
+  }
+  if (active.length === 0) return 0;
+  const ev = new CompensatedEvaluator(c);
+  const g = new Float64Array(3);
+  const startR = Float64Array.from(zr);
+  const startI = Float64Array.from(zi);
+  const touched = active.flatMap((i) => (mate[i]! >= 0 ? [i, mate[i]!] : [i]));
+  const plainBefore = touched.map((i) => relativeResidual(c, zr[i]!, zi[i]!));
+  // free[i]: i moves on its own (real approximations, released pairs); otherwise i is the upper member of
+  // a pair whose mate mirrors it.
+  const free = new Uint8Array(n);
+  for (const i of active) if (zi[i] === 0) free[i] = 1;
+  unsettleRealRoots(
+    zr,
+    zi,
+    active.filter((i) => free[i]),
+  );
+  // A mirrored member is not repelled by the free roots (its Aberth correction is taken from its mate's), so
+  // a free root can settle on the very point a mirror is put on, and one root of the cluster is then left
+  // without an approximation. That is rare and cheap to see afterwards (two approximations on one point);
+  // then every pair is released and the sweeps go on, each root repelled by all others.
+  let mirroring = true;
+  const releaseAll = () => {
+    mirroring = false;
+    for (const i of touched) free[i] = 1;
+  };
+  const best = new Float64Array(n).fill(Infinity);
+  const stale = new Int32Array(n);
+  // Residual level (relative) below which compensated evaluation is noise: γ_{4n+2}², with margin.
+  const noise = 64 * ((4 * n + 2) * Number.EPSILON) ** 2;
   const lastStep = new Float64Array(n).fill(Infinity);
   let sweeps = 0;
   let list = active;
-  while (list.length > 0 && sweeps < POLISH_SWEEPS) {
-    sweeps++;
-    const next: number[] = [];
-    for (const i of list) {
-      const x = zr[i]!;
-      const y = zi[i]!;
-      compensatedEval(c, x, y, v);
-      const pd = v[0]! * v[0]! + v[1]! * v[1]!;
-      if (pd === 0) continue;
-      // p'/p − Σ_{j≠i} 1/(z_i − z_j)
-      let ar = (v[2]! * v[0]! + v[3]! * v[1]!) / pd;
-      let ai = (v[3]! * v[0]! - v[2]! * v[1]!) / pd;
-      for (let j = 0; j < n; j++) {
-        if (j === i) continue;
-        const ur = x - zr[j]!;
-        const ui = y - zi[j]!;
-        const inv = 1 / (ur * ur + ui * ui);
-        ar -= ur * inv;
-        ai += ui * inv;
-      }
-      const ad = ar * ar + ai * ai;
-      const stepR = ar / ad;
-      const stepI = -ai / ad;
-      if (!Number.isFinite(stepR) || !Number.isFinite(stepI)) continue;
-      zr[i] = x - stepR;
-      const q = mate[i]!;
-      if (q >= 0) {
+  for (;;) {
+    while (list.length > 0 && sweeps < POLISH_SWEEPS) {
+      sweeps++;
+      const next: number[] = [];
+      for (const i of list) {
+        const x = zr[i]!;
+        const y = zi[i]!;
+        ev.logDerivative(x, y, g);
+        const res = g[2]!;
+        if (res === 0) continue; // an exact root
+        if (res < best[i]!) {
+          best[i] = res;
+          stale[i] = 0;
+        } else stale[i]!++;
+        // p'/p − Σ_{j≠i} 1/(z_i − z_j)
+        let ar = g[0]!;
+        let ai = g[1]!;
+        let nearest = Infinity;
+        for (let j = 0; j < n; j++) {
+          if (j === i) continue;
+          const ur = x - zr[j]!;
+          const ui = y - zi[j]!;
+          const d2 = ur * ur + ui * ui;
+          const inv = 1 / d2;
+          ar -= ur * inv;
+          ai += ui * inv;
+          if (d2 < nearest) nearest = d2;
+        }
+        // A root whose residual has stopped falling is done once its last step was tiny against the distance to
+        // its nearest neighbour (it sits at its root, moving in the rounding noise); a root still travelling
+        // through a cluster, whose residual need not fall every sweep, goes on.
+        if (stale[i]! >= POLISH_STALL_SWEEPS && (res <= noise || lastStep[i]! < SETTLED * Math.sqrt(nearest)))
+          continue;
+        const ad = ar * ar + ai * ai;
+        const stepR = ar / ad;
+        const stepI = -ai / ad;
+        if (!Number.isFinite(stepR) || !Number.isFinite(stepI)) continue;
+        const step = Math.hypot(stepR, stepI);
+        zr[i] = x - stepR;
         zi[i] = y - stepI;
-        zr[q] = zr[i]!;
-        zi[q] = -zi[i]!;
+        lastStep[i] = step;
+        const m = mate[i]!;
+        if (!free[i] && m >= 0) {
+          if (zi[i]! <= step) {
+            // The pair reaches the axis: release both members to move on their own.
+            free[i] = 1;
+            free[m] = 1;
+            next.push(m);
+          } else {
+            zr[m] = zr[i]!;
+            zi[m] = -zi[i]!;
+          }
+        }
+        if (step > 2 * Number.EPSILON * Math.hypot(x, y)) next.push(i);
       }
-      // Continue only while the steps are above rounding and still shrinking fast (quadratic or better).
-      const step = Math.hypot(stepR, stepI);
-      if (step > 4 * Number.EPSILON * Math.hypot(x, y) && step < POLISH_STALL_RATIO * lastStep[i]!)
-        next.push(i);
-      lastStep[i] = step;
+      list = next;
     }
-    list = next;
+    if (!mirroring || sweeps >= POLISH_SWEEPS) break;
+    const twins = coincident(zr, zi, touched);
+    if (twins.length === 0 || !touched.some((i) => free[i])) break;
+    releaseAll();
+    unsettleRealRoots(zr, zi, twins, true);
+    for (const i of touched) stale[i] = 0;
+    list = touched;
   }
-  for (const [i, [x, y, residual]] of before) {
-    logDerivative(c, absC, zr[i]!, zi[i]!, g);
-    if (g[2]! > Math.max(floor, residual)) {
-      zr[i] = x;
-      zi[i] = y;
-      const q = mate[i]!;
-      if (q >= 0) {
-        zr[q] = x;
-        zi[q] = -y;
-      }
-    }
+  restoreSymmetry(ev, zr, zi, touched);
+  // Guard against what compensated arithmetic cannot see (products that overflow or underflow at extreme
+  // scales): if any polished root's plain residual ends far above both its start and the rounding level,
+  // the whole polish is undone.
+  const floor = POLISH_GUARD * freezeLevel(n);
+  const worse = touched.some(
+    (i, k) => !(relativeResidual(c, zr[i]!, zi[i]!) <= Math.max(floor, POLISH_GUARD * plainBefore[k]!)),
+  );
+  if (worse) {
+    zr.set(startR);
+    zi.set(startI);
   }
   return sweeps;
+}
+
+/** mate[i]: the index of i's exact conjugate, or -1 for a real root (the set is exactly symmetric). */
+function mates(zr: Float64Array, zi: Float64Array): Int32Array {
+  const n = zr.length;
+  const mate = new Int32Array(n).fill(-1);
+  const open = new Map<string, number[]>();
+  for (let i = 0; i < n; i++) {
+    if (zi[i]! >= 0) continue;
+    const key = `${zr[i]}:${-zi[i]!}`;
+    const list = open.get(key) ?? [];
+    list.push(i);
+    open.set(key, list);
+  }
+  for (let i = 0; i < n; i++) {
+    if (!(zi[i]! > 0)) continue;
+    const j = open.get(`${zr[i]}:${zi[i]}`)?.pop();
+    if (j !== undefined) {
+      mate[i] = j;
+      mate[j] = i;
+    }
+  }
+  return mate;
+}
+
+/**
+ * With real coefficients and a conjugate-symmetric set, Aberth's step at a real point is real: two real
+ * approximations standing in for a complex pair could never leave the axis. Each real approximation to be
+ * polished is pushed off the axis by a tenth of the distance to its nearest neighbour (alternating in
+ * sign); a truly real root draws it back.
+ */
+function unsettleRealRoots(zr: Float64Array, zi: Float64Array, active: number[], anywhere = false): void {
+  let sign = 1;
+  for (const i of active) {
+    if (zi[i] !== 0 && !anywhere) continue;
+    let near = Infinity;
+    for (let j = 0; j < zr.length; j++) {
+      const d = Math.hypot(zr[i]! - zr[j]!, zi[i]! - zi[j]!);
+      if (j !== i && d > 0) near = Math.min(near, d);
+    }
+    if (!Number.isFinite(near)) near = Math.max(1, Math.abs(zr[i]!)) * 1e-3;
+    zi[i] = zi[i]! + sign * UNSETTLE_FRACTION * near;
+    sign = -sign;
+  }
+}
+
+/**
+ * One member of each group of approximations among `among` that sit on the same point (to within four
+ * rounding units): two approximations settled on one root.
+ */
+function coincident(zr: Float64Array, zi: Float64Array, among: number[]): number[] {
+  const order = [...among].sort((a, b) => zr[a]! - zr[b]! || zi[a]! - zi[b]!);
+  const out: number[] = [];
+  for (let a = 0; a < order.length; a++) {
+    const i = order[a]!;
+    const tol = 4 * Number.EPSILON * Math.hypot(zr[i]!, zi[i]!);
+    for (let b = a + 1; b < order.length && zr[order[b]!]! - zr[i]! <= tol; b++) {
+      const j = order[b]!;
+      if (Math.abs(zi[j]! - zi[i]!) <= tol) {
+        out.push(j);
+        break;
+      }
+    }
+  }
+  return out;
+}
+
+/** A polished root with |im| below this fraction of |z| is tested as a real root. */
+const SNAP_CHECK = 1e-4;
+
+/** Fraction of the nearest-neighbour distance by which a real approximation is moved off the axis. */
+const UNSETTLE_FRACTION = 0.1;
+
+/**
+ * After an unsymmetric polish: a root whose projection onto the real axis has a compensated residual no
+ * larger than its own becomes real; the others pair with their nearest mirror, both taking the better
+ * member's value; a complex root left without a partner goes onto the real axis.
+ */
+function restoreSymmetry(
+  ev: CompensatedEvaluator,
+  zr: Float64Array,
+  zi: Float64Array,
+  polished: number[],
+): void {
+  const g = new Float64Array(3);
+  const residualAt = (x: number, y: number) => {
+    ev.logDerivative(x, y, g);
+    return g[2]!;
+  };
+  const upper: number[] = [];
+  const lower: number[] = [];
+  for (const i of polished) {
+    if (zi[i] === 0) continue;
+    // Only a root this close to the axis can be a real root whose polish left it slightly off.
+    if (Math.abs(zi[i]!) <= SNAP_CHECK * Math.hypot(zr[i]!, zi[i]!)) {
+      if (residualAt(zr[i]!, 0) <= residualAt(zr[i]!, zi[i]!)) {
+        zi[i] = 0;
+        continue;
+      }
+    }
+    (zi[i]! > 0 ? upper : lower).push(i);
+  }
+  // Pairs by mutual nearness (an upper root and the lower one nearest its mirror, each the other's nearest),
+  // round by round: a greedy pass in a fixed order can hand a root its neighbour's mirror, and the two
+  // would then end on the same point.
+  const taken = new Uint8Array(zr.length);
+  const pairs: [number, number, number][] = [];
+  let up = upper;
+  while (up.length > 0) {
+    const low = lower.filter((k) => !taken[k]);
+    if (low.length === 0) break;
+    const nearestLow = new Map<number, [number, number]>();
+    for (const i of up) {
+      let j = -1;
+      let dist = Infinity;
+      for (const k of low) {
+        const dd = Math.hypot(zr[k]! - zr[i]!, zi[k]! + zi[i]!);
+        if (dd < dist) [j, dist] = [k, dd];
+      }
+      nearestLow.set(i, [j, dist]);
+    }
+    const nearestUp = new Map<number, number>();
+    for (const k of low) {
+      let j = -1;
+      let dist = Infinity;
+      for (const i of up) {
+        const dd = Math.hypot(zr[k]! - zr[i]!, zi[k]! + zi[i]!);
+        if (dd < dist) [j, dist] = [i, dd];
+      }
+      nearestUp.set(k, j);
+    }
+    const rest: number[] = [];
+    for (const i of up) {
+      const [j, dist] = nearestLow.get(i)!;
+      if (nearestUp.get(j) === i) {
+        taken[j] = 1;
+        pairs.push([i, j, dist]);
+      } else rest.push(i);
+    }
+    up = rest;
+  }
+  for (const i of up) zi[i] = 0; // more roots above the axis than below: the surplus goes onto it
+  for (const [i, j, dist] of pairs) {
+    // Mates that agree to the last bits need no comparison; otherwise the better residual wins.
+    const agree = dist <= 4 * Number.EPSILON * Math.hypot(zr[i]!, zi[i]!);
+    const keepI = agree || residualAt(zr[i]!, zi[i]!) <= residualAt(zr[j]!, zi[j]!);
+    const r = keepI ? zr[i]! : zr[j]!;
+    const m = keepI ? zi[i]! : -zi[j]!;
+    zr[i] = r;
+    zr[j] = r;
+    zi[i] = m;
+    zi[j] = -m;
+  }
+  for (const k of lower) if (!taken[k]) zi[k] = 0;
 }

@@ -5,12 +5,12 @@
 import type { Root, Zpk } from '../types.ts';
 
 /**
- * Relative distance below which two computed roots count as one repeated root: |a - b| <= tol·max(1, |a|).
- * Rounding in the coefficients splits an m-fold root into a cluster of radius about eps^(1/m)·scale; 1e-6
- * gathers double roots (spread ~1e-8) with room to spare while staying far below the spacing of distinct
- * roots in practical designs (a 40th-order low-pass at 0.001·fs still spaces its poles ~1e-4 apart).
+ * Distance below which two roots count as one repeated root in compressRoots: 0, so only identical roots
+ * merge. Computed roots arrive already grouped (findRoots merges a cluster only when the merged root
+ * reproduces the polynomial as well as the separate ones), and two distinct roots 1e-7 apart on either side
+ * of the unit circle must never become one double root inside it.
  */
-export const ROOT_MERGE_TOLERANCE = 1e-6;
+export const ROOT_MERGE_TOLERANCE = 0;
 
 /** Lists every root and, for im != 0, its conjugate as a separate entry; each entry keeps its multiplicity. */
 export function expandRoots(roots: readonly Root[]): Root[] {
@@ -23,9 +23,8 @@ export function expandRoots(roots: readonly Root[]): Root[] {
 }
 
 /**
- * Inverse of expandRoots for a conjugate-symmetric list: roots within ROOT_MERGE_TOLERANCE are merged
- * (multiplicity-weighted mean, multiplicities added); a cluster straddling the real axis becomes one real
- * root; only clusters with im > 0 are kept for complex roots.
+ * Inverse of expandRoots for a conjugate-symmetric list: roots within `tolerance` (default
+ * ROOT_MERGE_TOLERANCE: identical only) are merged, multiplicities added; only roots with im ≥ 0 are kept.
  */
 export function compressRoots(roots: readonly Root[], tolerance = ROOT_MERGE_TOLERANCE): Root[] {
   const n = roots.length;

@@ -17,7 +17,9 @@
  *           distance of im from sqrt((1 − re)(1 + re)) (predict.ts)
  *   string  name, string note (when flagged)
  *   typed   varint count + numbers for b, the same for a, string text (when flagged)
- *   value   an object with the extra parts: designer, mask, implementation, view (when flagged)
+ *   value   an object with the extra parts: designer, mask, implementation, view, and the parts of a
+ *           composed design (when flagged; a reader from before composed designs refuses such a link as
+ *           having an unknown part rather than opening a cascade it cannot re-run)
  */
 import type { Root } from '../../core/types.ts';
 import type { GainRule } from '../../core/gainRule.ts';
@@ -54,7 +56,7 @@ const HAS_TYPED = 4;
 const HAS_EXTRAS = 8;
 const KNOWN_FLAGS = HAS_NAME | HAS_NOTE | HAS_TYPED | HAS_EXTRAS;
 /** Parts of the document carried in the extras object. */
-const EXTRA_KEYS = ['designer', 'mask', 'implementation', 'view'] as const;
+const EXTRA_KEYS = ['designer', 'mask', 'implementation', 'view', 'parts'] as const;
 const GAIN_KINDS = ['fixed', 'dc', 'nyquist', 'frequency', 'peak'] as const;
 
 const REAL = 0;

@@ -76,7 +76,15 @@ export const VIEW_WORDS: readonly string[] = [
 /** The design's other open-ended parts. */
 const PART_WORDS: readonly string[] = ['mask', 'implementation'];
 
-export const LINK_DICTIONARY: readonly string[] = [...DESIGNER_WORDS, ...VIEW_WORDS, ...PART_WORDS];
+/** Words added after the first release, at the end (append only): "any family", and composed designs' parts. */
+export const LATER_WORDS: readonly string[] = ['any', 'parts', 'zeros', 'poles', 'gain'];
+
+export const LINK_DICTIONARY: readonly string[] = [
+  ...DESIGNER_WORDS,
+  ...VIEW_WORDS,
+  ...PART_WORDS,
+  ...LATER_WORDS,
+];
 
 const INDEX = new Map(LINK_DICTIONARY.map((s, i) => [s, i]));
 

@@ -4,7 +4,14 @@
  * numbers are only bounded here, runDesigner checks their sense.
  */
 import { z } from 'zod';
-import { DESIGNERS, type DesignerEntry, type DesignerSpec, type Parameter } from '../../core/design/index.ts';
+import {
+  DESIGNERS,
+  orderMax,
+  type DesignerEntry,
+  type DesignerSpec,
+  type OrderParameter,
+  type Parameter,
+} from '../../core/design/index.ts';
 import { MAX_WHOLE_ITEM } from '../../core/model/limits.ts';
 import { finite } from './common.ts';
 
@@ -35,7 +42,21 @@ function entrySchema(entry: DesignerEntry) {
     const v = valueSchema(p);
     shape[p.key] = p.presence === 'required' ? v : v.exactOptional();
   }
-  return z.object(shape);
+  const orders = entry.parameters.filter((p) => p.type === 'order' && p.maxFor);
+  if (orders.length === 0) return z.object(shape);
+  // an order within the parameter's bound may still be above the bound for these values (an IIR family)
+  return z.object(shape).superRefine((values, ctx) => {
+    for (const p of orders) {
+      const v = values[p.key];
+      const max = orderMax(p as OrderParameter, values);
+      if (typeof v === 'number' && v > max)
+        ctx.addIssue({
+          code: 'custom',
+          path: [p.key],
+          message: `order ${v} is above ${max} for these values`,
+        });
+    }
+  });
 }
 
 const entries = (DESIGNERS as readonly DesignerEntry[]).map(entrySchema);

@@ -12,20 +12,22 @@ interface Props {
   x: number;
   y: number;
   multiplicity: number;
-  /** The conjugate mirror of a stored pair (drawn lighter, not a tab stop). */
+  /** The conjugate mirror of a stored pair (drawn lighter, never focused). */
   mirror: boolean;
   selected: boolean;
+  /** The roots' one tab stop (tabindex 0); the others are reached by N and P (tabindex −1). */
+  tabStop: boolean;
   /** A pole on or outside the unit circle. */
   danger: boolean;
   label: string;
 }
 
-function RootMarkImpl({ kind, index, x, y, multiplicity, mirror, selected, danger, label }: Props) {
+function RootMarkImpl({ kind, index, x, y, multiplicity, mirror, selected, tabStop, danger, label }: Props) {
   const s = MARK_SIZE;
   const cls = `pw-root pw-root-${kind}${mirror ? ' pw-root-mirror' : ''}${selected ? ' pw-root-selected' : ''}`;
   const focusable = mirror
     ? {}
-    : { tabIndex: 0, role: 'button', 'aria-label': label, 'aria-pressed': selected };
+    : { tabIndex: tabStop ? 0 : -1, role: 'button', 'aria-label': label, 'aria-pressed': selected };
   return (
     <g
       className={cls}

@@ -1,6 +1,6 @@
 /** Every root of the design and its conjugate mirror, zeros under poles, mirrors under stored roots. */
 import type { Root } from '../../core/types.ts';
-import { UNIT_CIRCLE_TOLERANCE } from '../../core/stability.ts';
+import { UNIT_CIRCLE_TOLERANCE } from '../../core/stability/index.ts';
 import type { RootKind, RootRef } from '../../core/model/design.ts';
 import type { PlaneScale } from './geometry.ts';
 import { RootMark } from './RootMark.tsx';
@@ -21,6 +21,11 @@ export function poleAtRisk(root: Root): boolean {
 
 export function RootsLayer({ zeros, poles, sampleRate, selection, scale }: Props) {
   const isSelected = (kind: RootKind, i: number) => selection?.kind === kind && selection.index === i;
+  // One tab stop for all the roots (a roving tabindex): the selected root, else the first of the table's
+  // order; N and P walk the others.
+  const stop: RootRef | null =
+    selection ??
+    (poles.length ? { kind: 'pole', index: 0 } : zeros.length ? { kind: 'zero', index: 0 } : null);
   const marks = (kind: RootKind, roots: Root[], mirror: boolean) =>
     roots.map((r, i) =>
       mirror && r.im === 0 ? null : (
@@ -33,6 +38,7 @@ export function RootsLayer({ zeros, poles, sampleRate, selection, scale }: Props
           multiplicity={r.multiplicity}
           mirror={mirror}
           selected={isSelected(kind, i)}
+          tabStop={!mirror && stop?.kind === kind && stop.index === i}
           danger={kind === 'pole' && poleAtRisk(r)}
           label={mirror ? '' : rootAriaLabel(kind, r, sampleRate)}
         />

@@ -2,7 +2,7 @@
  * The z-plane panel: toolbar, the plane (|H| shading canvas under an SVG of grid and roots) and the
  * number strip for the selected root. Roots drag with any pointer, and the plane works by keyboard alone.
  */
-import { useCallback, useMemo, useRef, useState } from 'react';
+import { useCallback, useMemo, useRef, useState, type FocusEvent } from 'react';
 import { selectStability } from '../../store/derived.ts';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import { planeScale, type PlaneScale } from './geometry.ts';
@@ -16,6 +16,7 @@ import { SurfaceLegend } from './SurfaceLegend.tsx';
 import { useElementSize } from '../chart/useElementSize.ts';
 import { NUDGE_FINE_STEP, NUDGE_STEP } from './nudge.ts';
 import { usePlaneKeys } from './usePlaneKeys.ts';
+import { rootTargetOf } from './rootTarget.ts';
 import { usePlanePointer, type Placement } from './usePlanePointer.ts';
 import { useWheelZoom } from './useWheelZoom.ts';
 import { ZoomButtons } from './ZoomButtons.tsx';
@@ -46,10 +47,19 @@ export function ZPlanePanel() {
   scaleRef.current = scale;
 
   const pointer = usePlanePointer({ svgRef, scaleRef, placingRef, onPlaced: () => setPlacing(null) });
+  const [keyNote, say] = useState<string | null>(null);
   const onKeyDown = usePlaneKeys({
     svgRef,
     cancelPlacing: () => (placingRef.current ? (setPlacing(null), true) : false),
+    say,
   });
+  // Tab (or N/P, or a click) onto a root selects it, so the number strip and the keys act on it.
+  const onFocus = (e: FocusEvent) => {
+    const hit = rootTargetOf(e.target);
+    const sel = workbenchStore.getState().selection;
+    if (hit && !hit.mirror && !(sel && sel.kind === hit.ref.kind && sel.index === hit.ref.index))
+      workbenchStore.getState().select(hit.ref);
+  };
   useWheelZoom(svgRef, scaleRef);
 
   // Stable, so the memoised toolbar skips the re-render every root move brings to this panel.
@@ -81,7 +91,8 @@ export function ZPlanePanel() {
           tabIndex={0}
           role="application"
           aria-roledescription="z-plane"
-          aria-label="z-plane: Tab to reach each root; arrows move the selected root, or pan when none is selected; + and − zoom"
+          aria-label="z-plane: Tab reaches the roots, N and P walk them; arrows move the selected root (or pan when none is selected), Page Up/Down step its radius, comma and period its frequency; + and − zoom"
+          onFocus={onFocus}
           {...pointer}
         >
           {ready && <PlaneGrid scale={scale} sampleRate={fs} unstable={unstable} />}
@@ -101,7 +112,8 @@ export function ZPlanePanel() {
         <p className="pw-plane-hint" aria-live="polite">
           {placing
             ? `Click in the plane to place a ${placing.pair ? `${placing.kind} pair` : `real ${placing.kind}`} — Esc cancels`
-            : `Drag roots · wheel zooms · arrows nudge ${NUDGE_STEP} (Shift/Alt ${NUDGE_FINE_STEP})`}
+            : (keyNote ??
+              `N/P roots · arrows ${NUDGE_STEP} (Shift ${NUDGE_FINE_STEP}) · PgUp/Dn radius · , . freq`)}
         </p>
       </div>
       <RootEditor />

@@ -1,6 +1,10 @@
-/** The design's name, editable in place; committed on Enter or when the field loses focus. */
+/**
+ * The design's name, editable in place; committed on Enter or when the field loses focus, and — if the page
+ * is reloaded or closed while it is being typed — before the autosave that goes with the page.
+ */
 import { useState } from 'react';
 import { useWorkbench } from '../../store/useWorkbench.ts';
+import { useHeldDraft } from '../shared/useHeldDraft.ts';
 
 /** Longest name kept. */
 const MAX_NAME = 120;
@@ -15,6 +19,7 @@ export function DesignName() {
     if (t) setName(t.slice(0, MAX_NAME));
     setDraft(null);
   };
+  useHeldDraft('name', draft !== null, commit);
   return (
     <input
       className="pw-name"

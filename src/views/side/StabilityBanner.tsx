@@ -35,8 +35,8 @@ export function StabilityBanner() {
         ) : (
           ' · no poles (FIR)'
         )}
-        {verdict !== 'stable' && (
-          <p className="pw-stability-reason">
+        {(verdict !== 'stable' || s.rootsSuggested) && (
+          <p className="pw-stability-reason" data-testid="stability-reason">
             {sentence(s.reason)}
             {s.responsible.length > 2 && (
               <> All of them: {s.responsible.map((p) => positionText(p.re, p.im, 5)).join(', ')}.</>

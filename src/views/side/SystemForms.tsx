@@ -4,7 +4,7 @@
  * keep their text from before it and catch up on release.
  */
 import { useMemo, useState } from 'react';
-import { selectTf, selectZpk } from '../../store/derived.ts';
+import { selectExpandedCheck, selectTf, selectZpk } from '../../store/derived.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 import { CopyButton } from '../shared/CopyButton.tsx';
 import { useSettled } from '../shared/useSettled.ts';
@@ -19,6 +19,7 @@ export function SystemForms({ onEdit }: { onEdit: (text: string) => void }) {
   const dragging = useWorkbench((s) => s.dragging);
   const [digits, setDigits] = useState<DigitChoice>('6');
   const forms = useMemo(() => systemForms(tf, zpk, DIGIT_CHOICES[digits]), [tf, zpk, digits]);
+  const expanded = useSettled(selectExpandedCheck);
   return (
     <section className="pw-side-section" aria-labelledby="pw-forms-h" data-testid="system-forms">
       <div className="pw-section-head">
@@ -37,6 +38,13 @@ export function SystemForms({ onEdit }: { onEdit: (text: string) => void }) {
           </select>
         </label>
       </div>
+      {expanded?.warn && (
+        <p className="pw-forms-warning" role="note" data-testid="expanded-warning">
+          {expanded.message.charAt(0).toUpperCase() + expanded.message.slice(1)}. The forms below that
+          multiply the roots out (difference equations, H(z), b and a) carry that error; the factored form,
+          the roots and the sections on the Target page do not.
+        </p>
+      )}
       <dl className="pw-forms">
         {forms.map((f) => (
           <div key={f.label} className="pw-form">

@@ -10,12 +10,15 @@ import { useLevelTable } from './useSpectra.ts';
 import { LEVEL_FLOOR_MARGIN_DB, levelMethod } from '../../core/signal/index.ts';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import type { LevelChoice } from '../../store/signal.ts';
-import { formatHz, formatNumber } from '../shared/format.ts';
+import { formatDb, formatDbFigure, formatHz } from '../shared/format.ts';
 import { readListField, type FieldReading } from '../shared/fieldReading.ts';
 import { draftInputProps, useDraft } from '../shared/useDraft.ts';
 
+/** A level's figure (the caller writes dB): 3 significant digits by the read-out rule of core/format.ts. */
 function db(x: number): string {
-  return Number.isFinite(x) ? formatNumber(x, 3) : x < 0 ? '−∞' : '∞';
+  return formatDb(x, 3)
+    .replace(/ dB$/, '')
+    .replace(/ dB \(.*\)$/, '');
 }
 
 /** Whether a level is within LEVEL_FLOOR_MARGIN_DB of its noise floor. */
@@ -51,10 +54,10 @@ function LevelCell({ level, floor }: { level: number | null; floor: number | nul
   );
 }
 
+/** A change of level with its sign to 0.1 dB ("+3.2", "−40.1", "0.0", never "−0.0"): core/format.ts's rule. */
 function changeDb(x: number): string {
-  if (!Number.isFinite(x)) return x < 0 ? '−∞' : '+∞';
-  const t = x.toFixed(1).replace('-', '−');
-  return x > 0 ? `+${t}` : t;
+  const t = formatDbFigure(x, 1);
+  return x > 0 && t !== '0.0' ? `+${t}` : t;
 }
 
 /** Reads "50, 150, 250" into frequencies in Hz (the list policy of typed numbers); a message when it is not such a list. */

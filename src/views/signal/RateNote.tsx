@@ -10,18 +10,20 @@ import { formatHz } from '../shared/format.ts';
 
 /** Takes the recording's rate for the design (one undo step: the store's adoptSampleRate), saying if its designer could not follow. */
 function adoptSignalRate(hz: number): void {
-  const r = workbenchStore.getState().adoptSampleRate(hz);
-  if (r && !r.ok)
-    postNotice(
-      'info',
-      `The design is now at ${formatHz(hz)}, but its designer could not re-run there (${r.error.message}); the roots stay as they were.`,
-    );
+  // a promise when the design algorithms are still loading (the step waits for them)
+  void Promise.resolve(workbenchStore.getState().adoptSampleRate(hz)).then((r) => {
+    if (r && !r.ok)
+      postNotice(
+        'info',
+        `The design is now at ${formatHz(hz)}, but its designer could not re-run there (${r.error.message}); the roots stay as they were.`,
+      );
+  });
 }
 
 export function RateNote() {
   const signalRate = useWorkbench((s) => s.signal.current?.sampleRate ?? null);
   const designRate = useWorkbench((s) => s.design.sampleRate);
-  const hasDesigner = useWorkbench((s) => s.design.designer !== undefined);
+  const hasDesigner = useWorkbench((s) => s.design.designer !== undefined || s.design.parts !== undefined);
   if (signalRate === null || signalRate === designRate) return null;
   return (
     <div className="pw-signal-rate" role="note" data-testid="rate-mismatch">

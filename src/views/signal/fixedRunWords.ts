@@ -1,9 +1,9 @@
 /** The fixed-point run of a recording in plain sentences. */
 import { qName, type Implementation } from '../../core/fixed/index.ts';
 import type { FixedRecordingResult } from '../../workers/fixedRecordingJob.ts';
-import { formatNumber } from '../shared/format.ts';
+import { formatDbFigure, formatNumber } from '../shared/format.ts';
 
-const db1 = (x: number) => (Number.isFinite(x) ? x.toFixed(1).replace('-', '−') : x < 0 ? '−∞' : '∞');
+const db1 = (x: number) => formatDbFigure(x, 1);
 
 /** "Q1.14 coefficients, 16-bit data (Q0.15), transposed direct form II". */
 export function implementationWords(impl: Implementation): string {

@@ -1,6 +1,7 @@
 /** The time view: input and output of the current system, the slowest pole's envelope and the closed form. */
 import { useRef, useState } from 'react';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
+import { selectTimeStructure } from '../../store/derived.ts';
 import { clampSamples, shownSamples } from '../../store/zoom.ts';
 import { ZoomControls } from '../chart/ZoomControls.tsx';
 import { Segmented } from '../chart/Segmented.tsx';
@@ -38,6 +39,7 @@ function TestInputPanel() {
   const zoomed = shownSamples(timeSpan, samples);
   const span = zoomed ?? ([-0.5, samples - 0.5] as const);
   const envelope = useEnvelope();
+  const structure = useWorkbench(selectTimeStructure);
   const shown = cursor !== null && cursor < samples ? cursor : null;
   return (
     <section aria-label="time response" className="pw-panel pw-view pw-time">
@@ -49,6 +51,17 @@ function TestInputPanel() {
       </header>
       <div className="pw-time-info">
         <TimeReadout cursor={shown} envelope={envelope} />
+        <span
+          className="pw-hint pw-time-structure"
+          data-testid="time-structure"
+          title={
+            structure === 'typed'
+              ? 'The output is computed from b and a exactly as typed (direct form II transposed), so a typed filter that is unstable grows here'
+              : 'The output is computed through second-order sections made from the roots'
+          }
+        >
+          {structure === 'typed' ? 'runs b, a as typed' : 'runs sections from the roots'}
+        </span>
         <ZoomControls
           what="samples"
           span={span}

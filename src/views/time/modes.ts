@@ -4,7 +4,7 @@
  */
 import type { ClosedForm } from '../../core/time/closedForm.ts';
 import { NEGLIGIBLE_TERM_RATIO } from '../../core/time/closedFormText.ts';
-import { UNIT_CIRCLE_TOLERANCE } from '../../core/stability.ts';
+import { UNIT_CIRCLE_TOLERANCE } from '../../core/stability/index.ts';
 import { SAME_RADIUS_REL } from './envelope.ts';
 
 export interface Mode {

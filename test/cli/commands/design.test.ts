@@ -260,7 +260,7 @@ describe('polewright design: classical families', () => {
     ]);
     expect(r.code).toBe(0);
     expect(r.stdout).toMatch(/^order: 4 \(least order meeting the requirement\)$/m); // scipy.signal.buttord 1.17
-    expect(r.stdout).toMatch(/^stop band: least attenuation [\d.]+ dB at 400 Hz, margin \+[\d.]+ dB$/m);
+    expect(r.stdout).toMatch(/^stop band: least attenuation [\d.]+ dB at 400 Hz, passes by [\d.]+ dB$/m);
     expect(r.stdout).toMatch(/^requirement mask: PASS$/m);
   });
 });
@@ -425,7 +425,7 @@ describe('polewright design --out', () => {
     const dir = mkdtempSync(join(tmpdir(), 'polewright-kinds-'));
     const help = (await runCli(['design', '--help'])).stdout;
     const examples = [...help.matchAll(/^ {2}\S+ +polewright (design .*)$/gm)].map((m) => m[1]!.split(' '));
-    expect(examples).toHaveLength(12);
+    expect(examples).toHaveLength(14);
     for (const [i, argv] of examples.entries()) {
       const file = join(dir, `${i}.json`);
       const r = await runCli([...argv, '--out', file, '--json']);
@@ -434,5 +434,140 @@ describe('polewright design --out', () => {
       if (!read.ok) throw new Error(`${argv.join(' ')}: ${read.message}`);
       expect(read.design.designer, argv.join(' ')).toEqual(JSON.parse(r.stdout).designer);
     }
+  });
+});
+
+describe('design --family any', () => {
+  it('prints the family picked, every family’s order beside it and how a tie was broken', async () => {
+    const argv = ['design', 'lowpass', '--fs', '1000', '--family', 'any', '--order', 'auto'];
+    const req = ['--passband', '100', '--stopband', '200', '--ripple', '1', '--attenuation', '20'];
+    const r = await runCli([...argv, ...req]);
+    expect(r.code).toBe(0);
+    // scipy.signal buttord/cheb1ord/cheb2ord/ellipord 1.17: 4, 3, 3, 3
+    expect(r.stdout).toMatch(
+      /family: Chebyshev II, the least order of any family \(tied on order; least group-delay spread across the pass band decided\)/,
+    );
+    expect(r.stdout).toMatch(/Butterworth +order 4,/);
+    expect(r.stdout).toMatch(/Elliptic +order 3,/);
+    expect(r.stdout).toMatch(/Chebyshev II +order 3, .* <- picked/);
+    const out = await json([...argv, ...req]);
+    expect(out.family.picked).toBe('chebyshev2');
+    expect(out.family.tieBreak).toBe('least group-delay spread across the pass band');
+    expect(out.family.trials.map((t: { order: number }) => t.order)).toEqual([4, 3, 3, 3]);
+  });
+
+  it('refuses any family with a given order and says what to give', async () => {
+    const r = await runCli([
+      'design',
+      'lowpass',
+      '--fs',
+      '1000',
+      '--family',
+      'any',
+      '--order',
+      '4',
+      '--edge',
+      '100',
+    ]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/order auto/);
+  });
+});
+
+describe('design --add-to: a part added to a design file', () => {
+  it('adds a notch to a low-pass file as a part of its cascade, keeps the file readable, and judges the whole', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'pw-add-to-'));
+    const file = join(dir, 'lowpass.json');
+    const lp = [
+      'design',
+      'lowpass',
+      '--fs',
+      '1000',
+      '--family',
+      'butterworth',
+      '--order',
+      '6',
+      '--edge',
+      '125',
+    ];
+    const req = ['--passband', '100', '--stopband', '300', '--ripple', '1', '--attenuation', '40'];
+    expect((await runCli([...lp, ...req, '--out', file])).code).toBe(0);
+    // No --fs: the part is designed at the file's rate. The file is updated in place.
+    const first = await runCli(['design', 'notch', '--f0', '50', '--bandwidth', '4', '--add-to', file]);
+    expect(first.code).toBe(0);
+    expect(first.stdout).toMatch(/parts of the design \(a cascade\):\n {2}1\. iir .*\n {2}2\. notch f0=50/);
+    const both = join(dir, 'both.json');
+    const added = await runCli([
+      'design',
+      'notch',
+      '--f0',
+      '73.3',
+      '--bandwidth',
+      '2',
+      '--add-to',
+      file,
+      '--out',
+      both,
+      '--json',
+    ]);
+    expect(added.code).toBe(0);
+    expect(added.stderr).toBe(`note: wrote ${both}\n`);
+    const out = JSON.parse(added.stdout);
+    expect(out.parts.map((p: { designer?: { kind: string } }) => p.designer?.kind)).toEqual([
+      'iir',
+      'notch',
+      'notch',
+    ]);
+    expect(out.maskResult.pass).toBe(true);
+    const read = readDesignFile(readFileSync(both, 'utf8'));
+    expect(read.ok).toBe(true);
+    if (!read.ok) return;
+    expect(read.design.parts).toHaveLength(3);
+    // The whole has a zero pair on the unit circle at each notch: |H| there is below −100 dB, evaluated here
+    // from the printed b/a by Horner's rule (common practice: a notch's zeros sit on the circle at f0).
+    expect(dbFromBa(out.b, out.a, 50, 1000)).toBeLessThan(-100);
+    expect(dbFromBa(out.b, out.a, 73.3, 1000)).toBeLessThan(-100);
+    // The low-pass alone, from scipy.signal.butter(6, 125, fs=1000) + freqz 1.17: −62.5818 dB at 300 Hz; the
+    // notches add < 0.01 dB there.
+    const low = readDesignFile(readFileSync(file, 'utf8'));
+    expect(low.ok && low.design.parts).toHaveLength(2);
+    expect(Math.abs(dbFromBa(out.b, out.a, 300, 1000) - -62.5818)).toBeLessThan(0.02);
+  });
+
+  it('refuses an --fs that differs from the design’s rate, and a file that is not there, leaving files alone', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'pw-add-to-'));
+    const file = join(dir, 'notch.json');
+    expect(
+      (await runCli(['design', 'notch', '--fs', '1000', '--f0', '50', '--bandwidth', '4', '--out', file]))
+        .code,
+    ).toBe(0);
+    const before = readFileSync(file, 'utf8');
+    const r = await runCli([
+      'design',
+      'notch',
+      '--fs',
+      '2000',
+      '--f0',
+      '60',
+      '--bandwidth',
+      '4',
+      '--add-to',
+      file,
+    ]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/--fs 2000 differs from the sample rate of the design added to \(1000 Hz\)/);
+    expect(readFileSync(file, 'utf8')).toBe(before);
+    const missing = await runCli([
+      'design',
+      'notch',
+      '--f0',
+      '60',
+      '--bandwidth',
+      '4',
+      '--add-to',
+      join(dir, 'nope.json'),
+    ]);
+    expect(missing.code).toBe(2);
+    expect(missing.stderr).toMatch(/nope\.json/);
   });
 });

@@ -247,16 +247,23 @@ describe('invariants (seeded random systems)', () => {
       expectClose(back.a, tf.a, { abs: 1e-10 }, `case ${t} a`);
     }
   });
-  it('compressRoots undoes expandRoots and merges rounding-split repeated roots', () => {
+  it('compressRoots undoes expandRoots and merges only identical roots', () => {
     const roots: Root[] = [
       { re: 0.3, im: 0.4, multiplicity: 2 },
       { re: -1, im: 0, multiplicity: 1 },
     ];
     expect(compressRoots(expandRoots(roots))).toEqual(roots);
-    // a double real root split by rounding into a conjugate pair becomes one real root of multiplicity 2
+    // no fixed distance merges roots (issue 10): a pair 1e-9 off the axis stays a pair, and two real roots
+    // 1e-7 apart stay two; identical entries still add up
     expect(compressRoots(expandRoots([{ re: -1, im: 1e-9, multiplicity: 1 }]))).toEqual([
-      { re: -1, im: 0, multiplicity: 2 },
+      { re: -1, im: 1e-9, multiplicity: 1 },
     ]);
+    const pair = [
+      { re: 0.9999999, im: 0, multiplicity: 1 },
+      { re: 1.0000001, im: 0, multiplicity: 1 },
+    ];
+    expect(compressRoots(pair)).toEqual(pair);
+    expect(compressRoots([pair[0]!, pair[0]!])).toEqual([{ ...pair[0]!, multiplicity: 2 }]);
     expect(systemOrder({ zeros: roots, poles: [], gain: 1 })).toBe(5);
   });
 });

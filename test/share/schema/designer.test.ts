@@ -33,4 +33,14 @@ describe('the designer schema, built from the registry', () => {
     ];
     for (const b of bad) expect(designerSpec.safeParse(b).success, JSON.stringify(b)).toBe(false);
   });
+
+  it('takes an FIR family up to its own order limit, an IIR family only to 64', () => {
+    const fir = { kind: 'iir', fs: 1000, family: 'equiripple', response: 'lowpass', order: 300 };
+    const more = { passbandHz: [100], stopbandHz: [150], rippleDb: 1, attenuationDb: 60 };
+    expect(designerSpec.safeParse({ ...fir, ...more }).success).toBe(true);
+    expect(designerSpec.safeParse({ ...fir, order: 513 }).success).toBe(false);
+    const iir = designerSpec.safeParse({ ...fir, family: 'butterworth', edgesHz: [100] });
+    expect(iir.success).toBe(false);
+    expect(iir.error?.issues[0]?.path).toEqual(['order']);
+  });
 });

@@ -13,6 +13,9 @@ import { quickReadDocument, quickReadView } from '../../../src/share/schema/quic
 import { readView } from '../../../src/share/schema/full.ts';
 import { parseStrictJson } from '../../../src/share/strictJson.ts';
 import { demoDesign } from '../../../src/store/demo.ts';
+import { emptyDesign } from '../../../src/core/model/design.ts';
+import { addDesignerPart } from '../../../src/core/model/compose.ts';
+import type { DesignerSpec } from '../../../src/core/design/index.ts';
 import { mutatedText } from '../../helpers/mutate.ts';
 import { anySharedDesign, bitwiseDifference } from '../arbitraries.ts';
 
@@ -126,6 +129,45 @@ describe('the quick design reader', () => {
         if (json.ok) agrees(json.value);
       }),
       { seed: 14004, numRuns: RUNS },
+    );
+  });
+
+  it('leaves a composed design (its parts) to the full reader, which keeps them', () => {
+    const fs = 1000;
+    let design = emptyDesign(fs);
+    const lowpass = {
+      kind: 'iir',
+      family: 'any',
+      response: 'lowpass',
+      order: 'auto',
+      passbandHz: [100],
+      stopbandHz: [200],
+      rippleDb: 1,
+      attenuationDb: 20,
+      fs,
+    } as DesignerSpec;
+    for (const spec of [
+      lowpass,
+      { kind: 'notch', f0: 50, bandwidthHz: 4, fs },
+      { kind: 'notch', f0: 73.3, q: 30, fs },
+    ] as DesignerSpec[]) {
+      const r = addDesignerPart(design, spec);
+      if (!r.ok) throw new Error(r.error.message);
+      design = r.value.design;
+    }
+    const doc = toDocument({ design, view: {} });
+    expect(doc.parts).toHaveLength(3);
+    expect(quickReadDocument(JSON.parse(stringifyExact(doc)))).toBeNull();
+    const full = readDocument(JSON.parse(stringifyExact(doc)));
+    expect(full.ok && full.document.parts).toEqual(doc.parts);
+    const mutated = fc.record({
+      path: fc.constantFrom(...places(doc).filter((p) => p[0] === 'parts')),
+      how: fc.constantFrom('set', 'delete', 'add') as fc.Arbitrary<'set' | 'delete' | 'add'>,
+      value: strange,
+    });
+    fc.assert(
+      fc.property(mutated, ({ path, how, value }) => void agrees(mutate(doc, path, how, value))),
+      { seed: 14005, numRuns: 1000 },
     );
   });
 

@@ -1,6 +1,7 @@
 /** The registry entry of the classical IIR designs: its band shapes, examples and starting values. */
 import { defineDesigner, type DesignValues } from '../parameters.ts';
-import { runIir } from '../runIir.ts';
+import { designEngine } from '../engineSlot.ts';
+import { isFirFamily } from '../fir/families.ts';
 import { r3 } from './common.ts';
 import { BAND_SHAPE_OPTIONS, FAMILY_OPTIONS, IIR_PARAMETERS } from './classicalParameters.ts';
 
@@ -31,6 +32,27 @@ const START: Record<string, (at: (f: number) => number) => DesignValues> = {
 function example(response: string, given: DesignValues): DesignValues {
   const family = given.family ?? 'butterworth';
   const band = response === 'bandpass' || response === 'bandstop';
+  // least squares and equiripple design from the bands; an FIR's order is its taps − 1, even for these shapes
+  if (
+    isFirFamily(family) &&
+    (given.order === 'auto' || family === 'leastsquares' || family === 'equiripple')
+  ) {
+    // transition bands an FIR of modest order spans (the IIR examples' are too wide for least squares)
+    const [pass, stop] = {
+      lowpass: [[100], [150]],
+      highpass: [[400], [300]],
+      bandpass: [
+        [150, 250],
+        [100, 300],
+      ],
+      bandstop: [
+        [100, 300],
+        [150, 250],
+      ],
+    }[response]!;
+    const order = given.order === 'auto' ? 'auto' : 40;
+    return { family, order, passbandHz: pass, stopbandHz: stop, rippleDb: 1, attenuationDb: 40, fs: 1000 };
+  }
   if (given.order === 'auto') {
     const [pass, stop] = {
       lowpass: [[120], [400]],
@@ -55,6 +77,10 @@ function example(response: string, given: DesignValues): DesignValues {
     };
   }
   const edgesHz = band ? (response === 'bandpass' ? [100, 200] : [45, 55]) : [120];
+  if (isFirFamily(family))
+    return family === 'kaiser'
+      ? { family, order: 60, edgesHz, attenuationDb: 60, fs: 1000 }
+      : { family, order: 60, edgesHz, fs: 1000 };
   return family === 'butterworth' && given.family === undefined
     ? { fs: 1000, family, order: 4, edgesHz }
     : { family, order: 4, edgesHz, rippleDb: 1, attenuationDb: 60, fs: 1000 };
@@ -70,7 +96,9 @@ export const iirDesigner = defineDesigner({
     group: 'Classical filters',
     fixed: { response: value },
     title: (v: DesignValues) =>
-      `${FAMILY_OPTIONS.find((f) => f.value === v.family)?.label ?? String(v.family)} ${label.toLowerCase()}`,
+      v.family === 'any'
+        ? `${label}, family of least order`
+        : `${FAMILY_OPTIONS.find((f) => f.value === v.family)?.label ?? String(v.family)} ${label.toLowerCase()}`,
     example: (given: DesignValues) => example(value, given),
     start: (fs: number) => ({
       family: 'butterworth',
@@ -79,5 +107,5 @@ export const iirDesigner = defineDesigner({
       ...START[value]!((f) => r3(f * fs)),
     }),
   })),
-  design: (spec) => runIir(spec),
+  design: (spec) => designEngine().classical(spec),
 });

@@ -3,15 +3,31 @@
  * shapes: of a given order at given edges, or of the least order meeting a requirement.
  */
 import type { DesignValues, SpecOf } from '../parameters.ts';
-import { MAX_DESIGN_ORDER } from '../validate.ts';
+import { MAX_DESIGN_ORDER, MAX_FIR_ORDER } from '../validate.ts';
 
-/** The four classical families, with their names in notes. */
+/**
+ * The four classical families, with their names in notes, and "any family": the one of least order for a
+ * requirement (runIir.ts, familyChoice.ts).
+ */
 export const FAMILY_OPTIONS = [
   { value: 'butterworth', label: 'Butterworth', words: 'Butterworth' },
   { value: 'chebyshev1', label: 'Chebyshev I', words: 'Chebyshev I' },
   { value: 'chebyshev2', label: 'Chebyshev II', words: 'Chebyshev II' },
   { value: 'elliptic', label: 'Elliptic', words: 'elliptic' },
+  { value: 'any', label: 'Any family (least order)', words: 'any family' },
+  { value: 'kaiser', label: 'FIR, Kaiser window', words: 'Kaiser-window FIR' },
+  { value: 'hann', label: 'FIR, Hann window', words: 'Hann-window FIR' },
+  { value: 'hamming', label: 'FIR, Hamming window', words: 'Hamming-window FIR' },
+  { value: 'blackman', label: 'FIR, Blackman window', words: 'Blackman-window FIR' },
+  { value: 'leastsquares', label: 'FIR, least squares', words: 'least-squares FIR' },
+  { value: 'equiripple', label: 'FIR, equiripple', words: 'equiripple FIR' },
 ] as const;
+
+/** FIR methods among the families (runFir designs them). */
+const FIR_VALUES: readonly string[] = ['kaiser', 'hann', 'hamming', 'blackman', 'leastsquares', 'equiripple'];
+const isFir = (v: DesignValues) => FIR_VALUES.includes(String(v.family));
+/** Least squares and equiripple design from the pass and stop bands, not from cut-offs. */
+const fromBands = (v: DesignValues) => v.family === 'leastsquares' || v.family === 'equiripple';
 
 /** The four band shapes. */
 export const BAND_SHAPE_OPTIONS = [
@@ -25,9 +41,10 @@ const isBand = (v: DesignValues) => v.response === 'bandpass' || v.response === 
 const edgeCount = (v: DesignValues) => (isBand(v) ? 2 : 1);
 /** A requirement is given: asked for by order 'auto', or begun with either band. */
 const hasRequirement = (v: DesignValues) =>
-  v.order === 'auto' || v.passbandHz !== undefined || v.stopbandHz !== undefined;
+  v.order === 'auto' || v.passbandHz !== undefined || v.stopbandHz !== undefined || fromBands(v);
 const needsRipple = (v: DesignValues) => v.family === 'chebyshev1' || v.family === 'elliptic';
-const needsAttenuation = (v: DesignValues) => v.family === 'chebyshev2' || v.family === 'elliptic';
+const needsAttenuation = (v: DesignValues) =>
+  v.family === 'chebyshev2' || v.family === 'elliptic' || v.family === 'kaiser';
 const pairWords = (v: DesignValues) =>
   isBand(v) ? 'low,high in Hz' : v.response === undefined ? 'in Hz (low,high for band shapes)' : 'in Hz';
 
@@ -36,6 +53,11 @@ const EDGE_MEANING: Record<string, string> = {
   chebyshev1: 'where the ripple band ends',
   chebyshev2: 'where the stop band starts',
   elliptic: 'where the ripple band ends',
+  any: 'chosen with the family',
+  kaiser: 'half amplitude (−6 dB)',
+  hann: 'half amplitude (−6 dB)',
+  hamming: 'half amplitude (−6 dB)',
+  blackman: 'half amplitude (−6 dB)',
 };
 
 const PASS_LABEL: Record<string, string> = {
@@ -106,9 +128,11 @@ export const IIR_PARAMETERS = [
     flag: 'order',
     label: 'Order',
     short: 'order',
-    what: 'a whole number from 1, or auto',
+    what: `a whole number from 1, or auto (IIR up to ${MAX_DESIGN_ORDER}, FIR up to ${MAX_FIR_ORDER}: taps − 1)`,
+    hint: (v: DesignValues) => (isFir(v) ? 'taps − 1' : ''),
     type: 'order',
-    max: MAX_DESIGN_ORDER,
+    max: MAX_FIR_ORDER,
+    maxFor: (v: DesignValues) => (isFir(v) ? MAX_FIR_ORDER : MAX_DESIGN_ORDER),
     autoLabel: 'Least order that meets the requirement',
     presence: 'required',
   },
@@ -123,8 +147,8 @@ export const IIR_PARAMETERS = [
     pairLabel: 'Edge',
     ...EDGE_LIST,
     presence: 'optional',
-    requiredWhen: (v: DesignValues) => v.order !== 'auto',
-    shownWhen: (v: DesignValues) => v.order !== 'auto',
+    requiredWhen: (v: DesignValues) => v.order !== 'auto' && !fromBands(v),
+    shownWhen: (v: DesignValues) => v.order !== 'auto' && !fromBands(v),
   },
   bandEdges('passbandHz'),
   bandEdges('stopbandHz'),
@@ -148,7 +172,7 @@ export const IIR_PARAMETERS = [
     flag: 'attenuation',
     label: 'Stop band down by at least',
     short: 'attenuation',
-    what: 'stop-band attenuation in dB, for Chebyshev II, elliptic and a requirement',
+    what: 'stop-band attenuation in dB, for Chebyshev II, elliptic, the Kaiser window and a requirement',
     unit: 'dB',
     type: 'number',
     range: 'positive',

@@ -1,6 +1,7 @@
 /** Registry entries of the equaliser sections: peaking EQ and low/high shelves. */
 import { defineDesigner } from '../parameters.ts';
-import { designPeakingEq, designShelf, type EqWidth } from '../equaliser.ts';
+import type { EqWidth } from '../equaliser.ts';
+import { designEngine } from '../engineSlot.ts';
 import { DesignInputError } from '../validate.ts';
 import { centre, fmt, gainDb, quality, r3 } from './common.ts';
 
@@ -40,7 +41,7 @@ export const peakingEqDesigner = defineDesigner({
     const width: EqWidth =
       spec.q !== undefined ? { q: spec.q } : { bandwidthOctaves: spec.bandwidthOctaves! };
     return {
-      zpk: designPeakingEq(spec.f0, spec.gainDb, width, spec.fs),
+      zpk: designEngine().designPeakingEq(spec.f0, spec.gainDb, width, spec.fs),
       note: `peaking EQ ${fmt(spec.gainDb)} dB at ${fmt(spec.f0)} Hz${tail(spec.fs)}`,
     };
   },
@@ -88,7 +89,7 @@ function shelfDesigner<const K extends 'lowShelf' | 'highShelf'>(kind: K) {
         );
       const width: EqWidth = spec.q !== undefined ? { q: spec.q } : { slope: spec.slope! };
       return {
-        zpk: designShelf(low, spec.f0, g, width, spec.fs),
+        zpk: designEngine().designShelf(low, spec.f0, g, width, spec.fs),
         note: `${low ? 'low' : 'high'} shelf ${fmt(g)} dB, midpoint ${fmt(spec.f0)} Hz${tail(spec.fs)}`,
       };
     },

@@ -1,8 +1,7 @@
 /** Registry entries of the designers that remove or pick out a frequency: notch, resonator, harmonics, comb, DC blocker. */
 import { defineDesigner } from '../parameters.ts';
-import { designComb, designHarmonicNotches } from '../comb.ts';
-import { designDcBlocker, designNotch, designPeak } from '../notch.ts';
-import { checkInBand } from '../checkParameters.ts';
+import { designEngine } from '../engineSlot.ts';
+import { checkInBand } from '../checkInBand.ts';
 import { DesignInputError } from '../validate.ts';
 import { shortNumber } from '../../shortNumber.ts';
 import { MAX_HARMONICS, MAX_ORDER } from '../../model/limits.ts';
@@ -34,7 +33,7 @@ function resonanceDesigner<const K extends 'notch' | 'peak'>(kind: K) {
     design(spec) {
       const bw = widthHz(spec, spec.f0, spec.fs / 2, `a ${kind} at fs ${fmt(spec.fs)} Hz`);
       return {
-        zpk: (notch ? designNotch : designPeak)(spec.f0, bw, spec.fs),
+        zpk: (notch ? designEngine().designNotch : designEngine().designPeak)(spec.f0, bw, spec.fs),
         note: `${kind} at ${fmt(spec.f0)} Hz, −3 dB width ${fmt(bw)} Hz (Q ${fmt(spec.f0 / bw)})${tail(spec.fs)}`,
       };
     },
@@ -69,7 +68,7 @@ export const dcBlockerDesigner = defineDesigner({
     },
   ],
   design: (spec) => ({
-    zpk: designDcBlocker(spec.cutoffHz, spec.fs),
+    zpk: designEngine().designDcBlocker(spec.cutoffHz, spec.fs),
     note: `DC blocker, −3 dB at ${fmt(spec.cutoffHz)} Hz${tail(spec.fs)}`,
   }),
 });
@@ -113,7 +112,7 @@ export const harmonicNotchDesigner = defineDesigner({
     const widths = hs.map((h) =>
       widthHz(spec.q === undefined ? spec : { q: spec.q }, h * f0, fs / 2, `harmonic ${h}`),
     );
-    const zpk = designHarmonicNotches(f0, hs, (h) => widths[hs.indexOf(h)]!, fs);
+    const zpk = designEngine().designHarmonicNotches(f0, hs, (h) => widths[hs.indexOf(h)]!, fs);
     const width = spec.q === undefined ? `width ${fmt(widths[0]!)} Hz each` : `Q ${fmt(spec.q)} each`;
     return { zpk, note: `notches at harmonics ${hs.join(', ')} of ${fmt(f0)} Hz, ${width}${tail(fs)}` };
   },
@@ -174,7 +173,7 @@ export const combDesigner = defineDesigner({
       );
     const bw = widthHz(spec, f0, f0, `a comb whose teeth are ${fmt(f0)} Hz apart`);
     return {
-      zpk: designComb(f0, bw, spec.type, fs),
+      zpk: designEngine().designComb(f0, bw, spec.type, fs),
       note: `${spec.type} comb of order ${n} at every multiple of ${fmt(f0)} Hz, −3 dB width ${fmt(bw)} Hz${tail(fs)}`,
     };
   },

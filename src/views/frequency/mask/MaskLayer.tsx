@@ -7,7 +7,7 @@ import { useId, useMemo } from 'react';
 import { selectMaskResult } from '../../../store/derived.ts';
 import { useWorkbench } from '../../../store/useWorkbench.ts';
 import { toPixel } from '../../chart/pixels.ts';
-import { formatNumber } from '../../shared/format.ts';
+import { formatSignedDb } from '../../shared/format.ts';
 import type { MagnitudeOverlayProps } from '../overlays.ts';
 import { levelToY, regionShapes } from './maskGeometry.ts';
 import './mask.css';
@@ -86,7 +86,7 @@ export function MaskLayer({ rect, xMap, yMap, db }: MagnitudeOverlayProps) {
         if (!Number.isFinite(x) || !Number.isFinite(y)) return null;
         const cy = Math.min(rect.bottom - 4, Math.max(rect.top + 4, y));
         const right = x < (rect.left + rect.right) / 2;
-        const text = `${r.worstMarginDb >= 0 ? '+' : ''}${formatNumber(r.worstMarginDb, 3)} dB`;
+        const text = formatSignedDb(r.worstMarginDb, 3);
         return (
           <g
             key={r.id}

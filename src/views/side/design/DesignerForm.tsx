@@ -7,7 +7,7 @@ import { useMemo, useState, type ReactNode } from 'react';
 import { Segmented } from '../../chart/Segmented.tsx';
 import { useWorkbench, workbenchStore } from '../../../store/useWorkbench.ts';
 import { selectDesignerStatus } from '../../../store/derived.ts';
-import { textFor, variantOf, type ChoiceParameter } from '../../../core/design/index.ts';
+import { isRequired, textFor, variantOf, type ChoiceParameter } from '../../../core/design/index.ts';
 import {
   GROUPS,
   KINDS,
@@ -24,18 +24,32 @@ import { readForm, type FieldErrors } from './designForm.ts';
 import { errorField, errorText } from './designErrors.ts';
 import { FormField, PairField } from './FormField.tsx';
 import { maskFromDesigner } from '../../../core/mask/index.ts';
+import { partsOf } from '../../../core/model/parts.ts';
+import { addPartEdit, rerunPartEdit } from '../../../store/partEdits.ts';
 
 export interface DesignerFormProps {
   form: DesignFormState;
   setForm: (f: DesignFormState) => void;
+  /** The part of a composed design the form changes (its index), or null for a new design or part. */
+  editingPart?: number | null;
+  /** Leaves the editing of a part. */
+  onStopEditing?: () => void;
 }
 
-export function DesignerForm({ form, setForm }: DesignerFormProps) {
+export function DesignerForm({ form, setForm, editingPart = null, onStopEditing }: DesignerFormProps) {
   const fs = useWorkbench((s) => s.design.sampleRate);
+  const hasRoots = useWorkbench((s) => s.design.zeros.length + s.design.poles.length > 0);
   const status = useWorkbench(selectDesignerStatus);
   const [errors, setErrors] = useState<FieldErrors>({});
   const [general, setGeneral] = useState<string | null>(null);
-  const [done, setDone] = useState<{ note: string; replacedEdits: boolean } | null>(null);
+  const [done, setDone] = useState<{
+    note: string;
+    replacedEdits: boolean;
+    what?: string;
+    /** The number of parts it was said for: a note about part 3 goes once the parts change again. */
+    parts: number;
+  } | null>(null);
+  const partCount = useWorkbench((s) => partsOf(s.design).length);
   const [withMask, setWithMask] = useState(true);
 
   const { entry, variant } = kindOf(form.kind);
@@ -56,23 +70,47 @@ export function DesignerForm({ form, setForm }: DesignerFormProps) {
     update({ values: { ...form.values, [id]: text } });
     if (errors[id]) setErrors({ ...errors, [id]: undefined });
   };
-  const setChoice = (key: string, value: string) => update({ choices: { ...form.choices, [key]: value } });
-  const submit = () => {
+  const setChoice = (key: string, value: string) =>
+    // "Any family" picks the family by least order, so it asks for the least order.
+    update({
+      choices: { ...form.choices, [key]: value },
+      ...(key === 'family' && value === 'any' && { autoOrder: true }),
+    });
+  /** Runs the form's description: replaces the design, adds it as a part, or changes the part being edited. */
+  const submit = (how: 'replace' | 'add' | 'part' = editingPart !== null ? 'part' : 'replace') => {
     setDone(null);
     if (!reading.ok) {
       setErrors(reading.errors);
       setGeneral('Some values are not accepted; see the messages above.');
       return;
     }
-    const replacedEdits = status?.editedByHand ?? false;
-    // One undo step: the roots, and the mask when asked (the one its requirement implies).
-    const r = workbenchStore
-      .getState()
-      .runDesigner(reading.spec, withMask && impliedMask ? 'replace' : 'keep');
+    const replacedEdits = how === 'replace' && (status?.editedByHand ?? false);
+    const store = workbenchStore.getState();
+    const spec = reading.spec;
+    // One undo step each: the roots, and the mask when asked (the one its requirement implies; for a part,
+    // carved into the whole's mask).
+    const r =
+      how === 'add'
+        ? store.designerEdit(addPartEdit(spec, withMask && impliedMask ? 'fill' : 'keep'))
+        : how === 'part'
+          ? store.designerEdit(rerunPartEdit(editingPart!, () => spec))
+          : store.runDesigner(spec, withMask && impliedMask ? 'replace' : 'keep');
     if (r.ok) {
       setErrors({});
       setGeneral(null);
-      setDone({ note: r.value.note, replacedEdits });
+      const what =
+        how === 'add'
+          ? `Added as part ${workbenchStore.getState().design.parts?.length ?? 2}: `
+          : how === 'part'
+            ? `Part ${editingPart! + 1} changed: `
+            : undefined;
+      setDone({
+        note: r.value.note,
+        replacedEdits,
+        ...(what && { what }),
+        parts: partsOf(workbenchStore.getState().design).length,
+      });
+      if (how === 'part') onStopEditing?.();
       return;
     }
     const field = errorField(r.error, form);
@@ -96,7 +134,7 @@ export function DesignerForm({ form, setForm }: DesignerFormProps) {
           errors={[errors[f.id], errors[second]]}
           unit={info.unit ?? ''}
           onChange={(i, t) => setValue(i === 0 ? f.id : second, t)}
-          onEnter={submit}
+          onEnter={() => submit()}
         />
       );
     }
@@ -108,7 +146,7 @@ export function DesignerForm({ form, setForm }: DesignerFormProps) {
         error={errors[f.id]}
         wide={p.type === 'list' && !p.count.exactly}
         onChange={(t) => setValue(f.id, t)}
-        onEnter={submit}
+        onEnter={() => submit()}
         hint={f.item !== undefined ? undefined : info.hint}
         {...(info.unit !== undefined && { unit: info.unit })}
       />
@@ -126,7 +164,13 @@ export function DesignerForm({ form, setForm }: DesignerFormProps) {
 
   return (
     <section className="pw-side-section pw-dz" aria-labelledby="pw-dz-form-h" data-testid="designer-form">
-      <h2 id="pw-dz-form-h">{status ? 'Change or replace the design' : 'Design from a requirement'}</h2>
+      <h2 id="pw-dz-form-h">
+        {editingPart !== null
+          ? `Change part ${editingPart + 1}`
+          : status || hasRoots
+            ? 'Change, replace or add to the design'
+            : 'Design from a requirement'}
+      </h2>
       <div className="pw-dz-row">
         <label className="pw-dz-field">
           <span>Kind</span>
@@ -223,7 +267,11 @@ export function DesignerForm({ form, setForm }: DesignerFormProps) {
         <fieldset className="pw-dz-req">
           <legend>Requirement</legend>
           {orderParameter && !form.autoOrder && (
-            <p className="pw-hint pw-dz-note">Optional with a given order: gives margins and a mask.</p>
+            <p className="pw-hint pw-dz-note">
+              {req.some((f) => isRequired(f.parameter, values))
+                ? 'This method designs from the bands: they are needed at a given order too.'
+                : 'Optional with a given order: gives margins and a mask.'}
+            </p>
           )}
           <div className="pw-dz-fields">{req.map(field)}</div>
         </fieldset>
@@ -234,22 +282,45 @@ export function DesignerForm({ form, setForm }: DesignerFormProps) {
           Set the mask from this requirement ({impliedMask.regions.length} regions)
         </label>
       )}
-      <div className="pw-dz-actions">
-        <button type="button" className="pw-primary" onClick={submit}>
-          {sameKind ? 'Re-run' : 'Design'}
-        </button>
-        <span className="pw-hint">
-          {status ? 'replaces the roots · one undo step' : 'puts the filter on the plane · one undo step'}
-        </span>
-      </div>
+      {editingPart !== null ? (
+        <div className="pw-dz-actions">
+          <button type="button" className="pw-primary" onClick={() => submit('part')}>
+            Update part {editingPart + 1}
+          </button>
+          <button type="button" onClick={onStopEditing}>
+            Stop editing
+          </button>
+          <span className="pw-hint">changes only this part&apos;s roots · one undo step</span>
+        </div>
+      ) : (
+        <div className="pw-dz-actions">
+          <button type="button" className="pw-primary" onClick={() => submit('replace')}>
+            {sameKind ? 'Re-run' : 'Design'}
+          </button>
+          {hasRoots && (
+            <button
+              type="button"
+              onClick={() => submit('add')}
+              title="Keep the design and add this filter to it as a part of the cascade"
+            >
+              Add to the design
+            </button>
+          )}
+          <span className="pw-hint">
+            {hasRoots
+              ? 'Design replaces the roots; Add keeps them and cascades · one undo step'
+              : 'puts the filter on the plane · one undo step'}
+          </span>
+        </div>
+      )}
       {general && (
         <p role="alert" className="pw-field-error pw-dz-general">
           {general}
         </p>
       )}
-      {done && (
+      {done && done.parts === partCount && (
         <p role="status" className="pw-dz-done" data-testid="designer-done">
-          {done.replacedEdits ? 'Hand edits replaced by: ' : 'Designed: '}
+          {done.what ?? (done.replacedEdits ? 'Hand edits replaced by: ' : 'Designed: ')}
           {done.note}.{' '}
           {done.replacedEdits && (
             <button

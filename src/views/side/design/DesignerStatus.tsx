@@ -4,10 +4,9 @@
  */
 import { selectDesignerResult, selectDesignerStatus } from '../../../store/derived.ts';
 import { useWorkbench, workbenchStore } from '../../../store/useWorkbench.ts';
-import { formatDb, formatNumber } from '../../shared/format.ts';
+import { formatDb, formatMargin } from '../../shared/format.ts';
 import { describeDesigner } from './describe.ts';
-
-const signed = (db: number) => `${db >= 0 ? '+' : ''}${formatDb(db, 3)}`;
+import { FamilyTable } from './FamilyTable.tsx';
 
 export function DesignerStatus({ onChangeParameters }: { onChangeParameters: () => void }) {
   const status = useWorkbench(selectDesignerStatus);
@@ -36,12 +35,12 @@ export function DesignerStatus({ onChangeParameters }: { onChangeParameters: () 
           {!value.estimate.converged && ' (edge search did not fully converge)'}
         </p>
       )}
+      {value?.family && <FamilyTable choice={value.family} />}
       {value?.margin && (
         <p className="pw-dz-note" data-testid="designer-margin">
           {status.editedByHand ? 'As designed: p' : 'P'}ass-band loss{' '}
-          {formatDb(value.margin.passbandLossDb, 3)} (margin {signed(value.margin.passMarginDb)}), stop band{' '}
-          {formatNumber(value.margin.stopbandAttenuationDb, 3)} dB down (margin{' '}
-          {signed(value.margin.stopMarginDb)})
+          {formatDb(value.margin.passbandLossDb, 3)} ({formatMargin(value.margin.passMarginDb)}), stop band{' '}
+          {formatDb(value.margin.stopbandAttenuationDb, 3)} down ({formatMargin(value.margin.stopMarginDb)})
         </p>
       )}
       {status.editedByHand && (

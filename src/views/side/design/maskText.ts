@@ -1,28 +1,29 @@
-/** Words for a mask verdict: pass or fail, the margin in dB and where it is smallest. */
+/** Words for a mask verdict: pass or fail, by how much and where (the margin words are core/format.ts's). */
 import type { MaskRegionResult, MaskResult } from '../../../core/mask/index.ts';
-import { formatHz, formatNumber } from '../../shared/format.ts';
+import { formatHz, formatMargin } from '../../shared/format.ts';
 
-/** "+0.19 dB at 100 Hz" / "−2.01 dB at 120 Hz" (a margin: positive inside the limits). */
+/** "passes by 0.19 dB at 100 Hz" / "fails by 2.01 dB at 120 Hz" (a margin: positive inside the limits). */
 export function marginText(marginDb: number, atHz: number): string {
-  if (!Number.isFinite(marginDb)) return 'no limit';
-  const m = `${marginDb >= 0 ? '+' : ''}${formatNumber(marginDb, 3)} dB`;
-  return Number.isFinite(atHz) ? `${m} at ${formatHz(atHz)}` : m;
+  const m = formatMargin(marginDb);
+  // Where matters for a failure without bound too (which root to move); +∞ and NaN have no place.
+  return marginDb !== Infinity && !Number.isNaN(marginDb) && Number.isFinite(atHz)
+    ? `${m} at ${formatHz(atHz)}`
+    : m;
 }
 
 /** One region's verdict in a few words. */
 export function regionVerdictText(r: MaskRegionResult): string {
   if (r.problem) return `not judged: ${r.problem}`;
-  const where = marginText(r.worstMarginDb, r.worstAtHz);
-  return r.pass
-    ? `passes, margin ${where}`
-    : `fails by ${formatNumber(-r.worstMarginDb, 3)} dB at ${formatHz(r.worstAtHz)}`;
+  return marginText(r.worstMarginDb, r.worstAtHz);
 }
 
-/** The whole mask's verdict in a few words. */
+/** The whole mask's verdict in a few words: how many regions pass, and the tightest one. */
 export function maskVerdictText(m: MaskResult): string {
   const n = m.regions.length;
-  if (n === 0) return 'no regions';
+  if (n === 0) return 'no regions: add one to judge the response';
   const failing = m.regions.filter((r) => !r.pass).length;
   const head = failing ? `fails (${failing} of ${n} regions)` : `passes (${n} regions)`;
-  return `${head}, worst ${marginText(m.worstMarginDb, m.worstAtHz)}`;
+  const worst = m.regions.find((r) => r.id === m.worstRegionId);
+  if (worst?.problem) return `${head}; region “${worst.id}” is not judged: ${worst.problem}`;
+  return `${head}; tightest${worst ? ` (${worst.id})` : ''}: ${marginText(m.worstMarginDb, m.worstAtHz)}`;
 }

@@ -1,6 +1,6 @@
 /** The cascade as a table: per section its coefficients (values or stored codes), peak gain, pole radius, scale. */
 import { qName, type Implementation } from '../../../core/fixed/index.ts';
-import { formatNumber } from '../../shared/format.ts';
+import { formatDb, formatNumber } from '../../shared/format.ts';
 
 /** Significant digits of a coefficient in the table (the exports carry all 17). */
 const COEF_DIGITS = 6;
@@ -12,8 +12,7 @@ interface Props {
 
 /** A peak gain to 0.01 dB: the scaled sections sit at 0 dB up to rounding, which should read as 0. */
 function peakText(db: number): string {
-  const r = Math.round(db * 100) / 100;
-  return `${formatNumber(r === 0 ? 0 : r, 4)} dB`;
+  return formatDb(Math.round(db * 100) / 100);
 }
 
 function Coefs({ name, values }: { name: string; values: readonly (number | string)[] }) {

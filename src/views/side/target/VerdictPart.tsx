@@ -1,6 +1,6 @@
 /** Ideal versus quantized: stability and, when the design has a mask, the mask's verdict, side by side. */
 import type { MaskResult } from '../../../core/mask/index.ts';
-import type { Stability } from '../../../core/stability.ts';
+import type { Stability } from '../../../core/stability/index.ts';
 import { selectMaskResult, selectStability } from '../../../store/derived.ts';
 import {
   selectImplementation,
@@ -8,7 +8,8 @@ import {
   selectQuantizedStability,
 } from '../../../store/implementationDerived.ts';
 import { useWorkbench } from '../../../store/useWorkbench.ts';
-import { formatDb, formatHz, formatNumber } from '../../shared/format.ts';
+import { formatNumber } from '../../shared/format.ts';
+import { maskVerdictText } from '../design/maskText.ts';
 import { useSettings, useSettled } from './useTarget.ts';
 import { qName } from '../../../core/fixed/index.ts';
 
@@ -26,12 +27,11 @@ function StabilityCell({ s }: { s: Stability | null }) {
 
 function MaskCell({ m }: { m: MaskResult | null }) {
   if (!m) return <td>—</td>;
-  const where = Number.isFinite(m.worstAtHz) ? ` at ${formatHz(m.worstAtHz)}` : '';
   return (
     <td className={`pw-verdict pw-verdict-${m.pass ? 'stable' : 'unstable'}`}>
       <strong>{m.pass ? 'inside' : 'outside'}</strong>
       <span className="pw-hint pw-block">
-        {Number.isFinite(m.worstMarginDb) ? `margin ${formatDb(m.worstMarginDb, 3)}${where}` : 'no limits'}
+        {m.regions.length ? maskVerdictText(m).replace(/^[^;]*; /, '') : 'no regions to judge'}
       </span>
     </td>
   );

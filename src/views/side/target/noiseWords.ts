@@ -1,10 +1,10 @@
 /** Round-off noise figures and arrangement verdicts in words. */
 import type { Arrangement, Headroom, RoundoffNoise } from '../../../core/fixed/index.ts';
-import { formatNumber } from '../../shared/format.ts';
+import { formatDbFigure, formatNumber } from '../../shared/format.ts';
 
-/** "−86.9" (dB with one decimal, a true minus sign), "−∞" / "∞". */
+/** "−86.9" (dB with one decimal, a true minus sign), "−∞" / "∞": the read-out rule of core/format.ts. */
 export function db1(x: number): string {
-  return Number.isFinite(x) ? x.toFixed(1).replace('-', '−') : x < 0 ? '−∞' : '∞';
+  return formatDbFigure(x, 1);
 }
 
 /** One sentence: the total noise, its rms in LSBs, the SNR of a full-scale sine and the effective bits. */

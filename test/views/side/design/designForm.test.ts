@@ -34,7 +34,8 @@ describe('defaultForm', () => {
     for (const fs of RATES)
       for (const { id: kind } of KINDS)
         for (const family of classical(kind) ? FAMILIES : [FAMILIES[0]!])
-          for (const autoOrder of classical(kind) ? [false, true] : [false]) {
+          // "Any family" picks by least order: the form ticks the least order with it (a given order is refused, below).
+          for (const autoOrder of classical(kind) ? (family === 'any' ? [true] : [false, true]) : [false]) {
             const r = readForm(formWith(kind, fs, family, autoOrder), fs);
             expect(r.ok, `${kind} ${family} at ${fs} Hz`).toBe(true);
             if (!r.ok) continue;
@@ -44,6 +45,15 @@ describe('defaultForm', () => {
               `${kind} ${family} auto=${autoOrder} at ${fs} Hz: ${d.ok ? '' : d.error.message}`,
             ).toBe(true);
           }
+  });
+
+  it('refuses "any family" with a given order, marking the order', () => {
+    const r = readForm(formWith('lowpass', 1000, 'any', false), 1000);
+    expect(r.ok).toBe(true);
+    if (!r.ok) return;
+    const d = runDesigner(r.spec);
+    expect(d.ok).toBe(false);
+    if (!d.ok) expect(d.error.parameter).toBe('order');
   });
 
   it('starts from designs that meet their own requirement mask (notches, Butterworth, any least order)', () => {

@@ -1,12 +1,12 @@
 import { describe, it, expect } from 'vitest';
-import { stabilityOfZpk, UNIT_CIRCLE_TOLERANCE } from '../../src/core/stability.ts';
-import type { Verdict } from '../../src/core/stability.ts';
-import { juryTest } from '../../src/core/jury.ts';
-import { tfToZpk } from '../../src/core/system/index.ts';
-import { polyFromRoots } from '../../src/core/poly.ts';
-import type { Root, Zpk } from '../../src/core/types.ts';
-import { expectClose } from '../helpers/expectClose.ts';
-import { loadFixture } from '../helpers/fixtures.ts';
+import { stabilityOfZpk, UNIT_CIRCLE_TOLERANCE } from '../../../src/core/stability/index.ts';
+import type { Verdict } from '../../../src/core/stability/index.ts';
+import { juryTest } from '../../../src/core/jury.ts';
+import { tfToZpk } from '../../../src/core/system/index.ts';
+import { polyFromRoots } from '../../../src/core/poly.ts';
+import type { Root, Zpk } from '../../../src/core/types.ts';
+import { expectClose } from '../../helpers/expectClose.ts';
+import { loadFixture } from '../../helpers/fixtures.ts';
 
 interface RandomCase {
   a: number[];

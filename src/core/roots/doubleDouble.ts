@@ -1,0 +1,133 @@
+/**
+ * Double-double arithmetic (T. J. Dekker, "A floating-point technique for extending the available
+ * precision", Numer. Math. 18, 1971) for polynomials: products of root factors and long division, used
+ * where a root set must be compared with the coefficients beyond double precision.
+ */
+
+/** Veltkamp's splitting constant 2^27 + 1. */
+const SPLIT = 134217729;
+
+/** A polynomial in double-double: hi + lo per coefficient, descending. */
+export interface DdPoly {
+  hi: Float64Array;
+  lo: Float64Array;
+}
+
+export function twoProd(a: number, b: number, out: Float64Array): void {
+  const p = a * b;
+  const ah = a * SPLIT - (a * SPLIT - a);
+  const al = a - ah;
+  const bh = b * SPLIT - (b * SPLIT - b);
+  const bl = b - bh;
+  out[0] = p;
+  out[1] = al * bl - (p - ah * bh - al * bh - ah * bl);
+}
+
+/** (ah + al) + (bh + bl) into out, renormalised. */
+export function ddAdd(ah: number, al: number, bh: number, bl: number, out: Float64Array): void {
+  const s = ah + bh;
+  const z = s - ah;
+  const e = ah - (s - z) + (bh - z) + al + bl;
+  out[0] = s + e;
+  out[1] = e - (out[0] - s);
+}
+
+const tmp = new Float64Array(2);
+const tmp2 = new Float64Array(2);
+
+/** (ah + al)(bh + bl) into out. */
+export function ddMul(ah: number, al: number, bh: number, bl: number, out: Float64Array): void {
+  twoProd(ah, bh, tmp2);
+  const e = tmp2[1]! + (ah * bl + al * bh);
+  const s = tmp2[0]! + e;
+  out[0] = s;
+  out[1] = e - (s - tmp2[0]!);
+}
+
+export function multiply(a: DdPoly, b: DdPoly): DdPoly {
+  const n = a.hi.length + b.hi.length - 1;
+  const hi = new Float64Array(n);
+  const lo = new Float64Array(n);
+  for (let i = 0; i < a.hi.length; i++) {
+    for (let j = 0; j < b.hi.length; j++) {
+      ddMul(a.hi[i]!, a.lo[i]!, b.hi[j]!, b.lo[j]!, tmp);
+      ddAdd(hi[i + j]!, lo[i + j]!, tmp[0]!, tmp[1]!, tmp);
+      hi[i + j] = tmp[0]!;
+      lo[i + j] = tmp[1]!;
+    }
+  }
+  return { hi, lo };
+}
+
+/** z − r, or z² − 2·re·z + (re² + im²) for a pair, with the constant exact in double-double. */
+export function factor(re: number, im: number): DdPoly {
+  if (im === 0) return { hi: Float64Array.of(1, -re), lo: Float64Array.of(0, 0) };
+  const q = new Float64Array(2);
+  twoProd(re, re, tmp);
+  twoProd(im, im, q);
+  ddAdd(tmp[0]!, tmp[1]!, q[0]!, q[1]!, q);
+  return { hi: Float64Array.of(1, -2 * re, q[0]!), lo: Float64Array.of(0, 0, q[1]!) };
+}
+
+/** Product of the factors, interleaved: the even- and odd-indexed halves (by angle) recursively. */
+export function product(factors: DdPoly[]): DdPoly {
+  if (factors.length === 0) return { hi: Float64Array.of(1), lo: Float64Array.of(0) };
+  if (factors.length === 1) return factors[0]!;
+  const even = factors.filter((_, i) => i % 2 === 0);
+  const odd = factors.filter((_, i) => i % 2 === 1);
+  return multiply(product(even), product(odd));
+}
+
+/** (ah + al) / (bh + bl) into out. */
+export function ddDiv(ah: number, al: number, bh: number, bl: number, out: Float64Array): void {
+  const q1 = ah / bh;
+  ddMul(q1, 0, bh, bl, out);
+  ddAdd(ah, al, -out[0]!, -out[1]!, out);
+  const q2 = out[0]! / bh;
+  const s = q1 + q2;
+  out[0] = s;
+  out[1] = q2 - (s - q1);
+}
+
+let bufHi = new Float64Array(64);
+let bufLo = new Float64Array(64);
+const tmpT = new Float64Array(2);
+const tmpQ = new Float64Array(2);
+
+/**
+ * The remainder of c (double, descending) divided by f (double-double, descending, f[0] ≠ 0), as the
+ * largest remainder coefficient relative to max|c_k|. Division runs from the top, so the remainder is exact
+ * up to double-double rounding when f's roots lie in the closed unit disk; callers pass reversed
+ * polynomials for factors with roots outside it.
+ */
+export function remainderSize(c: ArrayLike<number>, f: DdPoly): number {
+  const n = c.length - 1;
+  const m = f.hi.length - 1;
+  if (m > n) return 0;
+  if (bufHi.length < c.length) {
+    bufHi = new Float64Array(2 * c.length);
+    bufLo = new Float64Array(2 * c.length);
+  }
+  const hi = bufHi;
+  const lo = bufLo;
+  for (let k = 0; k <= n; k++) {
+    hi[k] = c[k]!;
+    lo[k] = 0;
+  }
+  const t = tmpT;
+  const q = tmpQ;
+  for (let k = 0; k + m <= n; k++) {
+    ddDiv(hi[k]!, lo[k]!, f.hi[0]!, f.lo[0]!, q);
+    for (let j = 0; j <= m; j++) {
+      ddMul(q[0]!, q[1]!, f.hi[j]!, f.lo[j]!, t);
+      ddAdd(hi[k + j]!, lo[k + j]!, -t[0]!, -t[1]!, t);
+      hi[k + j] = t[0]!;
+      lo[k + j] = t[1]!;
+    }
+  }
+  let worst = 0;
+  let scale = 0;
+  for (let k = 0; k <= n; k++) scale = Math.max(scale, Math.abs(c[k]!));
+  for (let k = n - m + 1; k <= n; k++) worst = Math.max(worst, Math.abs(hi[k]! + lo[k]!));
+  return scale === 0 ? 0 : worst / scale;
+}

@@ -1,0 +1,2 @@
+/** The dynamic import of the design algorithms, alone in a module so tests can hold it back. */
+export const importDesignEngine = () => import('../core/design/engine.ts');
