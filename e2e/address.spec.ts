@@ -8,6 +8,7 @@ import { decodeLink } from '../src/share/link/index.ts';
 import { bitwiseDifference } from '../test/share/arbitraries.ts';
 import { applySystem, openWorkbench, readDesign, saveScreenshot } from './support/app.ts';
 import { dragRoot } from './support/plane.ts';
+import { chooseKind, designerForm, fillField, openDesignPage } from './support/design.ts';
 import type { Design } from '../src/core/model/design.ts';
 
 /** The design the address bar holds. */
@@ -78,4 +79,42 @@ test('Back and Forward step through committed changes; a copied address opens th
   expect(page.url()).toBe(address);
   await expect(page.getByRole('status').filter({ hasText: 'from the link' })).toHaveCount(0);
   await saveScreenshot(page, info, 'address-after-reload');
+});
+
+test('a composed design travels in the address: its parts open elsewhere, and Back takes the added part away', async ({
+  page,
+  browser,
+}, info) => {
+  await openWorkbench(page);
+  await openDesignPage(page);
+  await chooseKind(page, 'Low-pass');
+  await designerForm(page).getByRole('button', { name: 'Design', exact: true }).click();
+  await page.waitForTimeout(PAUSE_MS);
+  const lowpass = await readDesign(page);
+  await chooseKind(page, 'Notch');
+  await fillField(page, 'Centre', '50');
+  await fillField(page, '−3 dB width', '4');
+  await designerForm(page).getByRole('button', { name: 'Add to the design' }).click();
+  await expect(page.getByTestId('design-parts').getByTestId('design-part')).toHaveCount(2);
+  const composed = await readDesign(page);
+  expect(composed.parts!.map((p) => p.designer?.kind)).toEqual(['iir', 'notch']);
+  // The address holds the cascade, parts and all.
+  await expect.poll(() => bitwiseDifference(addressDesign(page), composed)).toBeNull();
+  await saveScreenshot(page, info, 'address-composed');
+
+  // Opened in a fresh browser, the address gives the same parts (each still re-runnable there).
+  const address = page.url();
+  const elsewhere = await browser.newContext();
+  const other = await elsewhere.newPage();
+  await other.goto(address);
+  await other.waitForFunction(() => window.__polewright !== undefined);
+  await expect.poll(async () => bitwiseDifference(await readDesign(other), composed)).toBeNull();
+  await openDesignPage(other);
+  await expect(other.getByTestId('design-parts').getByTestId('design-part')).toHaveCount(2);
+  await elsewhere.close();
+
+  // Back is the low-pass alone again.
+  await page.goBack();
+  await expect.poll(async () => bitwiseDifference(await readDesign(page), lowpass)).toBeNull();
+  expect((await readDesign(page)).parts).toBeUndefined();
 });

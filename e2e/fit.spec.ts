@@ -3,6 +3,7 @@ import { expect, test, type Page } from '@playwright/test';
 import { applySystem, openWorkbench, readDesign, saveScreenshot } from './support/app.ts';
 import { openDesignFile, openKeepShare, saveDesignFile } from './support/files.ts';
 import { planeSvg, rootMark } from './support/plane.ts';
+import { chooseKind, designerForm, fillField, openDesignPage } from './support/design.ts';
 
 /** Whether the marker's box lies inside the plane's SVG box. */
 async function insidePlane(page: Page, what: ReturnType<typeof rootMark>): Promise<boolean> {
@@ -42,4 +43,30 @@ test('a pole at z = 2 applied or opened is in view together with the unit circle
   await expect.poll(() => insidePlane(page, pole)).toBe(true);
   expect(await insidePlane(page, planeSvg(page).locator('circle.pw-unit-circle'))).toBe(true);
   await saveScreenshot(page, info, 'fit-after-open');
+});
+
+test('a part added to the design is framed with the unit circle, as after Apply', async ({ page }, info) => {
+  await openWorkbench(page);
+  const circle = planeSvg(page).locator('circle.pw-unit-circle');
+  // Zoomed in on the middle of the plane: the unit circle runs off its edges.
+  const zoomIn = page
+    .getByRole('group', { name: 'Zoom', exact: true })
+    .getByRole('button', { name: 'Zoom in' });
+  for (let i = 0; i < 4; i++) await zoomIn.click();
+  await expect.poll(() => insidePlane(page, circle)).toBe(false);
+  await openDesignPage(page);
+  await chooseKind(page, 'Notch');
+  await fillField(page, 'Centre', '300');
+  await fillField(page, '−3 dB width', '4');
+  await designerForm(page).getByRole('button', { name: 'Add to the design' }).click();
+  await expect(page.getByTestId('design-parts').getByTestId('design-part')).toHaveCount(2);
+  await expect.poll(() => insidePlane(page, circle)).toBe(true);
+  const d = await readDesign(page);
+  for (const [kind, list] of [
+    ['zero', d.zeros],
+    ['pole', d.poles],
+  ] as const)
+    for (let i = 0; i < list.length; i++)
+      expect(await insidePlane(page, rootMark(page, { kind, index: i }))).toBe(true);
+  await saveScreenshot(page, info, 'fit-after-adding-a-part');
 });

@@ -198,7 +198,13 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
       },
       setName: (name) => edit((d) => (d.name === name ? d : { ...d, name })),
       setNote: (note) => edit((d) => (d.note === note ? d : { ...d, note })),
-      ...designerActions(get, apply, edit, () => set({ selection: null })),
+      ...designerActions(
+        get,
+        apply,
+        edit,
+        () => set({ selection: null }),
+        () => set({ view: framed(get().view, get().design) }),
+      ),
       ...implementationActions(get, edit),
       ...signalActions(set, get),
 

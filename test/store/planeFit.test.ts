@@ -3,6 +3,8 @@ import { framed, HOME_VIEW, viewForDesign, viewShows } from '../../src/store/pla
 import { createWorkbenchStore } from '../../src/store/store.ts';
 import { emptyDesign } from '../../src/core/model/design.ts';
 import { defaultView } from '../../src/store/view.ts';
+import { addPartEdit, removePartEdit } from '../../src/store/partEdits.ts';
+import type { DesignerSpec } from '../../src/core/design/index.ts';
 
 const root = (re: number, im = 0) => ({ re, im, multiplicity: 1 });
 const circle = [
@@ -64,5 +66,42 @@ describe('store: a design that arrives whole is framed', () => {
 
   it('framed returns the same settings object when nothing needs to move', () => {
     expect(framed(defaultView, { zeros: [], poles: [root(0.9)] })).toBe(defaultView);
+  });
+
+  it('a designer run and a part added to a composed design are framed too; removing a part is not', () => {
+    const fs = 1000;
+    const lowpass: DesignerSpec = {
+      kind: 'iir',
+      family: 'butterworth',
+      response: 'lowpass',
+      order: 4,
+      edgesHz: [125],
+      fs,
+    };
+    const notch: DesignerSpec = { kind: 'notch', f0: 300, bandwidthHz: 4, fs };
+    const store = createWorkbenchStore(emptyDesign(fs));
+    const s = () => store.getState();
+    const shown = () => ({ span: s().view.planeSpan, centre: s().view.planeCentre });
+    const allRoots = () =>
+      [...s().design.zeros, ...s().design.poles].flatMap((r) => [
+        { re: r.re, im: r.im },
+        { re: r.re, im: -r.im },
+      ]);
+    // Zoomed in far from where the designs put their roots.
+    const away = { planeSpan: 0.05, planeCentre: { re: -0.5, im: -0.5 } };
+    s().setView(away);
+    expect(s().runDesigner(lowpass).ok).toBe(true);
+    expect(viewShows(shown(), [...allRoots(), ...circle])).toBe(true);
+    s().setView(away);
+    // The notch at 300 Hz (angle 108°) is a part of its own, added on top of the low-pass.
+    expect(s().designerEdit(addPartEdit(notch)).ok).toBe(true);
+    expect(s().design.parts).toHaveLength(2);
+    expect(viewShows(shown(), [...allRoots(), ...circle])).toBe(true);
+    // Taking a part away only removes roots: a view the user zoomed stays.
+    s().setView(away);
+    const before = s().view;
+    s().partsEdit(removePartEdit(1));
+    expect(s().design.parts).toBeUndefined();
+    expect(s().view).toBe(before);
   });
 });
