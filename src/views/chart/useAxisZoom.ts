@@ -1,12 +1,19 @@
 /**
  * Zoom and pan of a plot's horizontal axis, one piece for every plot that has one (the frequency plots, the
- * time plot, the recording): the wheel zooms about the pointer, a drag selects a span to zoom to (or pans,
- * where panning is the plot's drag), Shift+drag or the middle button pans, a double click shows everything,
- * and keys on the focused plot zoom (+ −), pan and show everything (0), as the shortcut table says.
+ * time plot, the recording). The gestures themselves (axisZoomGestures.ts) and the zoom buttons load after
+ * the first paint (loadZoomKit, also fetched by prefetch.ts): a plot drawn zoomed (from a link) needs only
+ * its span, and the gestures are there well before a person reaches for them.
  */
-import { useEffect, useRef, useState, type KeyboardEvent, type PointerEvent, type RefObject } from 'react';
-import { shortcutAction } from '../shortcuts.ts';
-import { PAN_STEP, panBy, panSpan, spanMiddle, ZOOM_STEP, zoomSpan, type Span } from './zoom.ts';
+import {
+  useEffect,
+  useMemo,
+  useRef,
+  useState,
+  type KeyboardEvent,
+  type PointerEvent,
+  type RefObject,
+} from 'react';
+import type { Span } from './zoom.ts';
 
 export interface AxisZoomTarget {
   /** The visible span, in the axis unit. */
@@ -27,98 +34,98 @@ export interface AxisZoomOptions {
   scope: 'cursor' | 'recording';
 }
 
-/** A drag shorter than this (px) is a click, not a selection. */
-export const SELECT_MIN_PX = 5;
+/** What the gestures read of their plot at each event. */
+export interface AxisZoomHost {
+  target(): AxisZoomTarget;
+  options(): AxisZoomOptions;
+  /** The SVG's left edge in client pixels. */
+  left(): number;
+  /** Shows (or with null hides) the selection band being dragged, in SVG pixels. */
+  setBand(band: readonly [number, number] | null): void;
+}
 
-type Gesture = { mode: 'pan'; x: number; span: Span } | { mode: 'select'; x: number; to: number };
+export interface AxisZoomGestures {
+  wheel: (e: WheelEvent) => void;
+  onPointerDown: (e: PointerEvent<SVGElement>) => void;
+  onPointerMove: (e: PointerEvent<SVGElement>) => void;
+  onPointerUp: (e: PointerEvent<SVGElement>) => void;
+  onPointerCancel: (e: PointerEvent<SVGElement>) => void;
+  onDoubleClick: () => void;
+  /** Runs the zoom key the press asks for; returns whether it was one. */
+  onKey: (e: KeyboardEvent<SVGElement>) => boolean;
+}
+
+type ZoomKit = typeof import('./zoomKit.ts');
+let kit: ZoomKit | null = null;
+let pending: Promise<ZoomKit> | null = null;
+
+/** The zoom gestures and buttons, loaded once (a failed load is tried again on the next call). */
+export function loadZoomKit(): Promise<ZoomKit> {
+  return (pending ??= import('./zoomKit.ts').then(
+    (m) => (kit = m),
+    (e: unknown) => {
+      pending = null;
+      throw e;
+    },
+  ));
+}
+
+/** The zoom kit once loaded (null before), re-rendering the caller when it arrives. */
+export function useZoomKit(): ZoomKit | null {
+  const [loaded, setLoaded] = useState(() => kit);
+  useEffect(() => {
+    if (loaded) return;
+    let live = true;
+    loadZoomKit().then(
+      (m) => live && setLoaded(() => m),
+      () => undefined, // the plot still shows its span; the next plot mounted tries again
+    );
+    return () => {
+      live = false;
+    };
+  }, [loaded]);
+  return loaded;
+}
+
+const ignore = () => {};
 
 export function useAxisZoom(
   svg: RefObject<SVGSVGElement | null>,
   target: AxisZoomTarget,
   opts: AxisZoomOptions,
 ) {
-  const latest = useRef(target);
-  latest.current = target;
-  const gesture = useRef<Gesture | null>(null);
+  const latest = useRef({ target, opts });
+  latest.current = { target, opts };
   /** The selection band being dragged, in SVG pixels. */
   const [band, setBand] = useState<readonly [number, number] | null>(null);
+  const loaded = useZoomKit();
+  const gestures = useMemo(
+    () =>
+      loaded?.axisZoomGestures({
+        target: () => latest.current.target,
+        options: () => latest.current.opts,
+        left: () => svg.current?.getBoundingClientRect().left ?? 0,
+        setBand,
+      }) ?? null,
+    [loaded, svg],
+  );
 
   useEffect(() => {
     const el = svg.current;
-    if (!el) return;
-    // A wheel listener must be non-passive to keep the page from scrolling while the plot zooms.
-    const onWheel = (e: WheelEvent) => {
-      e.preventDefault();
-      const t = latest.current;
-      const at = t.valueAt(e.clientX - el.getBoundingClientRect().left);
-      t.set(zoomSpan(t.span, at, e.deltaY < 0 ? ZOOM_STEP : 1 / ZOOM_STEP, t.kind));
-    };
-    el.addEventListener('wheel', onWheel, { passive: false });
-    return () => el.removeEventListener('wheel', onWheel);
-  }, [svg]);
-
-  const xOf = (e: PointerEvent<SVGElement>) => e.clientX - (svg.current?.getBoundingClientRect().left ?? 0);
-  const onPointerDown = (e: PointerEvent<SVGElement>) => {
-    if (e.button !== 0 && e.button !== 1) return;
-    const pan = opts.drag === 'pan' || e.shiftKey || e.button === 1;
-    e.currentTarget.setPointerCapture(e.pointerId);
-    const x = xOf(e);
-    gesture.current = pan ? { mode: 'pan', x, span: target.span } : { mode: 'select', x, to: x };
-  };
-  const onPointerMove = (e: PointerEvent<SVGElement>) => {
-    const g = gesture.current;
-    if (!g) return;
-    const x = xOf(e);
-    if (g.mode === 'pan') {
-      target.set(panSpan(g.span, target.valueAt(g.x), target.valueAt(x), target.kind));
-      return;
-    }
-    g.to = x;
-    setBand(Math.abs(x - g.x) >= SELECT_MIN_PX ? [Math.min(g.x, x), Math.max(g.x, x)] : null);
-  };
-  const onPointerUp = () => {
-    const g = gesture.current;
-    gesture.current = null;
-    setBand(null);
-    if (g?.mode !== 'select' || Math.abs(g.to - g.x) < SELECT_MIN_PX) return;
-    const a = target.valueAt(Math.min(g.x, g.to));
-    const b = target.valueAt(Math.max(g.x, g.to));
-    target.set([a, b]);
-  };
-  const onPointerCancel = () => {
-    gesture.current = null;
-    setBand(null);
-  };
-
-  /** Runs the zoom key the press asks for; returns whether it was one. */
-  const onKey = (e: KeyboardEvent<SVGElement>): boolean => {
-    const { span, kind, focus } = target;
-    const about = focus != null && focus >= span[0] && focus <= span[1] ? focus : spanMiddle(span, kind);
-    const pan = e.shiftKey ? 1 : PAN_STEP;
-    const action = shortcutAction(opts.scope, e);
-    const run: Record<string, () => void> = {
-      'zoom-in': () => target.set(zoomSpan(span, about, ZOOM_STEP, kind)),
-      'zoom-out': () => target.set(zoomSpan(span, about, 1 / ZOOM_STEP, kind)),
-      'pan-back': () => target.set(panBy(span, -pan, kind)),
-      'pan-forward': () => target.set(panBy(span, pan, kind)),
-      'zoom-all': () => target.set(null),
-    };
-    const act = action ? run[action] : undefined;
-    if (!act) return false;
-    e.preventDefault();
-    act();
-    return true;
-  };
+    if (!el || !gestures) return;
+    el.addEventListener('wheel', gestures.wheel, { passive: false });
+    return () => el.removeEventListener('wheel', gestures.wheel);
+  }, [svg, gestures]);
 
   return {
     handlers: {
-      onPointerDown,
-      onPointerMove,
-      onPointerUp,
-      onPointerCancel,
-      onDoubleClick: () => target.set(null),
+      onPointerDown: gestures?.onPointerDown ?? ignore,
+      onPointerMove: gestures?.onPointerMove ?? ignore,
+      onPointerUp: gestures?.onPointerUp ?? ignore,
+      onPointerCancel: gestures?.onPointerCancel ?? ignore,
+      onDoubleClick: gestures?.onDoubleClick ?? ignore,
     },
-    onKey,
+    onKey: gestures?.onKey ?? (() => false),
     band,
   };
 }

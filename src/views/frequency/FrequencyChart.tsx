@@ -21,7 +21,8 @@ import type { FrequencyReading } from '../../core/response/readAt.ts';
 import { RootMarker } from './RootMarker.tsx';
 import { PLOT_OVERLAYS } from './overlays.ts';
 import { MaskChip } from './mask/MaskChip.tsx';
-import { MaskHandles } from './mask/MaskHandles.tsx';
+import { lazyPart } from '../shared/lazyPart.tsx';
+import type { MaskHandlesProps } from './mask/MaskHandles.tsx';
 import {
   DEG_PER_RAD,
   delaySeries,
@@ -32,6 +33,12 @@ import {
 } from './series.ts';
 import { TracePlot, yMapOf } from './TracePlot.tsx';
 import { omegaGridToHz } from '../../core/units.ts';
+
+/** The mask's drag handles are invisible grab strips: they load after the first paint (prefetch.ts). */
+export const maskHandles = lazyPart<MaskHandlesProps>(() =>
+  import('./mask/MaskHandles.tsx').then((m) => m.MaskHandles),
+);
+const MaskHandles = maskHandles.Part;
 
 export interface FrequencyChartProps {
   width: number;

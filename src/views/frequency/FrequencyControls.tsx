@@ -2,7 +2,7 @@
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import type { ViewSettings } from '../../store/view.ts';
 import { Segmented } from '../chart/Segmented.tsx';
-import { ZoomControls } from '../chart/ZoomControls.tsx';
+import { LazyZoomControls as ZoomControls } from '../chart/LazyZoomControls.tsx';
 import { clampBandHz, shownBandHz, wholeBandHz } from '../../store/zoom.ts';
 import { formatHzSpan } from './cursor.ts';
 

@@ -1,6 +1,6 @@
 /** The cross-hair read-out: exact values at the cross-hair frequency, in every unit the plots offer. */
 import { useCompare } from '../../store/compare.ts';
-import { ReferenceReading } from '../compare/ReferenceReading.tsx';
+import { LazyReferenceReading as ReferenceReading } from '../compare/LazyReferenceReading.tsx';
 import { formatDb, formatHz, formatNumber } from '../shared/format.ts';
 import type { FrequencyReading } from '../../core/response/readAt.ts';
 import { DEG_PER_RAD } from './series.ts';

@@ -3,7 +3,7 @@ import { useRef, useState } from 'react';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import { selectTimeStructure } from '../../store/derived.ts';
 import { clampSamples, shownSamples } from '../../store/zoom.ts';
-import { ZoomControls } from '../chart/ZoomControls.tsx';
+import { LazyZoomControls as ZoomControls } from '../chart/LazyZoomControls.tsx';
 import { Segmented } from '../chart/Segmented.tsx';
 import { useElementSize } from '../chart/useElementSize.ts';
 import { PictureMenu } from '../pictures/PictureMenu.tsx';
