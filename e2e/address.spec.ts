@@ -10,6 +10,12 @@ import { applySystem, openWorkbench, readDesign, saveScreenshot } from './suppor
 import { dragRoot } from './support/plane.ts';
 import { chooseKind, designerForm, fillField, openDesignPage } from './support/design.ts';
 import type { Design } from '../src/core/model/design.ts';
+import * as fullReader from '../src/share/schema/full.ts';
+import { installFullReader } from '../src/share/schema/reader.ts';
+
+// The test reads links as the command line does, with the full design reader (a composed design's parts
+// are left to it by the quick reader).
+installFullReader(fullReader);
 
 /** The design the address bar holds. */
 function addressDesign(page: Page): Design {

@@ -46,11 +46,6 @@ function TestInputPanel() {
       <header className="pw-view-head">
         <h2>Time</h2>
         <RegionSwitch />
-        <TimeControls />
-        <PictureMenu view="time" />
-      </header>
-      <div className="pw-time-info">
-        <TimeReadout cursor={shown} envelope={envelope} />
         <span
           className="pw-hint pw-time-structure"
           data-testid="time-structure"
@@ -62,6 +57,11 @@ function TestInputPanel() {
         >
           {structure === 'typed' ? 'runs b, a as typed' : 'runs sections from the roots'}
         </span>
+        <TimeControls />
+        <PictureMenu view="time" />
+      </header>
+      <div className="pw-time-info">
+        <TimeReadout cursor={shown} envelope={envelope} />
         <ZoomControls
           what="samples"
           span={span}
