@@ -17,6 +17,7 @@ import type { Design } from '../core/model/design.ts';
 import type { ViewSettings } from './view.ts';
 import type { WorkbenchState } from './store.ts';
 import { memoLast } from './memo.ts';
+import { LOG_AXIS_MIN_FRACTION, shownBandHz } from './zoom.ts';
 import { evaluateMask, type MaskResult } from '../core/mask/index.ts';
 import {
   DesignEnginePending,
@@ -30,8 +31,7 @@ import { hzToOmega } from '../core/units.ts';
 
 /** Highest order for which the closed-form time response is listed (partial fractions grow ill-conditioned). */
 export const CLOSED_FORM_MAX_ORDER = 24;
-/** Lowest frequency of a log frequency axis, as a fraction of the sample rate (5e-4: three decades below Nyquist). */
-export const LOG_AXIS_MIN_FRACTION = 5e-4;
+export { LOG_AXIS_MIN_FRACTION } from './zoom.ts';
 
 const gainOf = memoLast((d: Design) => resolveGain(d.zeros, d.poles, d.gainRule, d.sampleRate));
 const zpkOf = memoLast((design: Design): Zpk => ({
@@ -43,9 +43,33 @@ const tfOf = memoLast((design: Design, zpk: Zpk): TransferFunction =>
   design.typed ? { b: design.typed.b, a: design.typed.a } : zpkToTf(zpk),
 );
 const sectionsOf = memoLast((zpk: Zpk): Section[] => zpkToSections(zpk));
-const gridOf = memoLast((points: number, axis: ViewSettings['frequencyAxis']) =>
-  frequencyGrid(points, axis === 'log' ? { log: true, fMin: 2 * Math.PI * LOG_AXIS_MIN_FRACTION } : {}),
+const gridOf = memoLast(
+  (points: number, axis: ViewSettings['frequencyAxis'], loHz: number, hiHz: number, fs: number) => {
+    // A zoomed band gets the same number of points as the whole axis: evaluated there, not interpolated,
+    // at the same cost per redraw.
+    if (hiHz > loHz)
+      return frequencyGrid(points, {
+        log: axis === 'log',
+        fMin: hzToOmega(loHz, fs),
+        fMax: Math.min(Math.PI, hzToOmega(hiHz, fs)),
+      });
+    return frequencyGrid(
+      points,
+      axis === 'log' ? { log: true, fMin: 2 * Math.PI * LOG_AXIS_MIN_FRACTION } : {},
+    );
+  },
 );
+/** The display grid (rad/sample) for the view's point count, axis and zoomed band. */
+function displayGrid(s: WorkbenchState): Float64Array {
+  const { frequencyAxis, frequencySpan } = s.view;
+  const responsePoints = responsePointsOf(s);
+  const fs = s.design.sampleRate;
+  const band = shownBandHz(frequencySpan, fs, frequencyAxis);
+  // Without a band the grid does not depend on the sample rate: 0s keep the memo across rate changes.
+  return band
+    ? gridOf(responsePoints, frequencyAxis, band[0], band[1], fs)
+    : gridOf(responsePoints, frequencyAxis, 0, 0, 0);
+}
 const responseOf = memoLast((zpk: Zpk, omega: Float64Array) => responseZpk(zpk, omega));
 const displayResponseOf = memoLast(refineAtRoots);
 const stabilityOf = memoLast((zpk: Zpk, typed: Design['typed']) =>
@@ -111,7 +135,7 @@ export const selectZpk = (s: WorkbenchState): Zpk => zpkOf(s.design);
 export const selectTf = (s: WorkbenchState): TransferFunction => tfOf(s.design, zpkOf(s.design));
 export const selectSections = (s: WorkbenchState): Section[] => sectionsOf(zpkOf(s.design));
 export const selectResponse = (s: WorkbenchState): FrequencyResponse =>
-  responseOf(zpkOf(s.design), gridOf(responsePointsOf(s), s.view.frequencyAxis));
+  responseOf(zpkOf(s.design), displayGrid(s));
 /** The response on the display grid plus the exact angles of the roots near the circle (true notch depth). */
 export const selectDisplayResponse = (s: WorkbenchState): FrequencyResponse =>
   displayResponseOf(zpkOf(s.design), selectResponse(s));

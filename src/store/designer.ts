@@ -213,14 +213,17 @@ export interface DesignerActions {
 
 /**
  * The designer and mask actions of a store: its design reader, its checked edit (which returns the problem
- * of a result outside the design's bounds), its edit that reports such a problem itself, and a hook for new
- * roots.
+ * of a result outside the design's bounds), its edit that reports such a problem itself, a hook for new
+ * roots, and one for a design that a designer made (run, re-run, a part added or re-run), after which the
+ * store frames the plane on every root as after Apply or Open (store/planeFit.ts). Removing a part only
+ * takes roots away, so it frames nothing.
  */
 export function designerActions(
   get: () => { design: Design },
   apply: (fn: (d: Design) => Design) => DesignProblem | null,
   edit: (fn: (d: Design) => Design) => void,
   rootsReplaced: () => void = () => {},
+  designArrived: () => void = () => {},
 ): DesignerActions {
   /** Applies an edit that may fail; records one step when it succeeds and changes something. */
   const attempt = <T>(fn: (d: Design) => Result<{ design: Design; out: T }>): Result<T> => {
@@ -242,18 +245,27 @@ export function designerActions(
   return {
     runDesigner: (spec, policy = 'fill') => {
       const r = attempt((d) => designed(applyDesigner(d, spec, policy)));
-      if (r.ok) rootsReplaced();
+      if (r.ok) {
+        rootsReplaced();
+        designArrived();
+      }
       return r;
     },
     rerunDesigner: (patch) => {
       const r = attempt((d) => designed(rerunDesignerOn(d, patch)));
-      if (r.ok) rootsReplaced();
+      if (r.ok) {
+        rootsReplaced();
+        designArrived();
+      }
       return r;
     },
     releaseDesigner: () => edit(releaseDesignerOf),
     designerEdit: (fn) => {
       const r = attempt((d) => designed(fn(d)));
-      if (r.ok) rootsReplaced();
+      if (r.ok) {
+        rootsReplaced();
+        designArrived();
+      }
       return r;
     },
     partsEdit: (fn) => {

@@ -19,6 +19,7 @@ import { postNotice } from './notices.ts';
 import { closeGesture, emptyHistory, recordEdit, type History } from './history.ts';
 import * as edits from './rootEdits.ts';
 import { defaultView, type ViewSettings, type ViewState } from './view.ts';
+import { framed } from './planeFit.ts';
 import { designerActions, rerunAllPartsOn, rerunDesignerOn, type DesignerActions } from './designer.ts';
 import { whenDesignEngine } from './designEngine.ts';
 import type { DesignResult } from '../core/design/light.ts';
@@ -158,12 +159,12 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
           gainRule: { kind: 'fixed', value: gain },
           typed,
         }));
-        if (!problem) set({ selection: null });
+        if (!problem) set({ selection: null, view: framed(get().view, get().design) });
         return problem;
       },
       replaceDesign: (design) => {
         edit(() => design);
-        set({ selection: null });
+        set({ selection: null, view: framed(get().view, get().design) });
       },
       adoptSampleRate: (hz) => {
         if (!(hz > 0 && hz <= MAX_SAMPLE_RATE)) return null;
@@ -197,7 +198,13 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
       },
       setName: (name) => edit((d) => (d.name === name ? d : { ...d, name })),
       setNote: (note) => edit((d) => (d.note === note ? d : { ...d, note })),
-      ...designerActions(get, apply, edit, () => set({ selection: null })),
+      ...designerActions(
+        get,
+        apply,
+        edit,
+        () => set({ selection: null }),
+        () => set({ view: framed(get().view, get().design) }),
+      ),
       ...implementationActions(get, edit),
       ...signalActions(set, get),
 

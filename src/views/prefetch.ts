@@ -9,6 +9,10 @@ import { loadEntryReader } from './side/entry/loadEntryReader.ts';
 import { prefetchSidePages } from './side/sideTabs.ts';
 import { signalRegion } from './time/TimePanel.tsx';
 import { rootNumbers } from './plane/RootEditor.tsx';
+import { loadZoomKit } from './chart/useAxisZoom.ts';
+import { referenceReading } from './compare/LazyReferenceReading.tsx';
+import { maskHandles } from './frequency/FrequencyChart.tsx';
+import { typedWarning } from './side/SystemPage.tsx';
 
 function prefetchAll(): void {
   void prefetchSidePages();
@@ -21,6 +25,11 @@ function prefetchAll(): void {
   void loadLinkReader().catch(() => undefined); // retried when a link comes
   // The design algorithms (classical IIR and FIR, FIR operators) for the store's designer re-runs.
   void loadDesignEngine().catch(() => undefined); // retried when a re-run needs them
+  // The plots' zoom gestures and buttons (a plot drawn zoomed needs only its span).
+  void loadZoomKit().catch(() => undefined); // retried when a plot is mounted
+  void referenceReading.prefetch().catch(() => undefined); // retried when a reference is pinned
+  void maskHandles.prefetch().catch(() => undefined); // retried when the magnitude plot is drawn
+  void typedWarning.prefetch().catch(() => undefined); // retried when the System page is drawn
 }
 
 /** Schedules the prefetch after the next paint; returns a function that cancels it if it has not started. */

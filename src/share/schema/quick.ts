@@ -128,6 +128,18 @@ function implementation(v: unknown): ImplementationSettings {
   return validateSettings(s).ok ? s : unsure();
 }
 
+/** A zoomed span [low, high] with `min` ≤ low < high, or null (the whole axis); as view.ts's schema. */
+const span =
+  (min: number) =>
+  (v: unknown): readonly [number, number] | null => {
+    if (v === null) return null;
+    const l = list(v);
+    if (l.length !== 2) unsure();
+    const a = finite(l[0]);
+    const b = finite(l[1]);
+    return a >= min && a < b ? [a, b] : unsure();
+  };
+
 function view(v: unknown): SharedView {
   const o = object(v);
   const out: Obj = {};
@@ -141,6 +153,8 @@ function view(v: unknown): SharedView {
   optional(o, 'timeSamples', (x) => whole(x, TIME_SAMPLES_MIN, TIME_SAMPLES_MAX), out);
   optional(o, 'timeStyle', (x) => oneOf(x, ['stems', 'line'] as const), out);
   optional(o, 'noiseSeed', (x) => whole(x, 0, 0xffff_ffff), out);
+  optional(o, 'frequencySpan', span(0), out);
+  optional(o, 'timeSpan', span(-1), out);
   return out as SharedView;
 }
 
