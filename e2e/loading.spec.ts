@@ -155,6 +155,20 @@ test('the first view draws while the exact stability test is held back, says it 
   await saveScreenshot(page, testInfo, 'stability-checked');
 });
 
+test('when the exact stability test cannot be fetched the banner says so, and Try again brings the verdict', async ({
+  page,
+}, testInfo) => {
+  await page.route(/\/exactChecks-[\w-]+\.js$/, (route) => route.abort('connectionfailed'));
+  await openWorkbench(page);
+  const banner = stabilityBanner(page);
+  await expect(banner.getByRole('status')).toHaveText('Stability not checked');
+  await expect(banner).toContainText('could not be fetched');
+  await saveScreenshot(page, testInfo, 'stability-not-checked');
+  await page.unroute(/\/exactChecks-[\w-]+\.js$/);
+  await banner.getByRole('button', { name: 'Try again' }).click();
+  await expect(banner.getByRole('status')).toHaveText('Stable');
+});
+
 test('a reload restores the autosaved session; one only the full reader can read waits for it and is never overwritten', async ({
   page,
 }, testInfo) => {

@@ -25,15 +25,15 @@ function Unjudged() {
   return (
     <div className="pw-stability pw-stability-checking" data-testid="stability">
       <span className="pw-stability-icon" aria-hidden="true">
-        …
+        {failed ? '?' : '…'}
       </span>
       <div>
         <strong className="pw-stability-title" role="status" aria-live="polite" aria-atomic="true">
           {failed ? 'Stability not checked' : 'Checking stability…'}
         </strong>
         {failed ? (
-          <p className="pw-stability-reason" data-testid="stability-reason">
-            The exact stability test could not be loaded ({status.message}), so there is no verdict yet.{' '}
+          <p className="pw-stability-reason" data-testid="stability-reason" title={status.message}>
+            The exact stability test could not be fetched from the server, so there is no verdict yet.{' '}
             <button type="button" onClick={() => void loadExactChecks().catch(() => undefined)}>
               Try again
             </button>
