@@ -6,9 +6,10 @@ import type { Zpk, TransferFunction, Section } from '../core/types.ts';
 import { zpkToTf, zpkToSections } from '../core/system/index.ts';
 import { responseZpk, frequencyGrid, refineAtRoots, type FrequencyResponse } from '../core/response/index.ts';
 import { resolveGain, type ResolvedGain } from '../core/gainRule.ts';
-import { stabilityOfTyped, stabilityOfZpk, type Stability } from '../core/stability/index.ts';
-import { typedDiagnostics, type SystemDiagnostics } from '../core/system/diagnostics.ts';
-import { checkExpandedCoefficients, type ExpandedCheck } from '../core/system/expandedCheck.ts';
+import { stabilityOfZpk, type Stability } from '../core/stability/index.ts';
+import { exactChecks, type ExactChecks } from '../core/stability/exactChecksSlot.ts';
+import type { SystemDiagnostics } from '../core/system/diagnostics.ts';
+import type { ExpandedCheck } from '../core/system/expandedCheck.ts';
 import { rootReadouts, type RootReadout } from '../core/readouts.ts';
 import { filterSections, filterTf } from '../core/time/filter.ts';
 import { makeImpulse, makeStep, makeSine, makeWhiteNoise } from '../core/time/inputs.ts';
@@ -72,10 +73,12 @@ function displayGrid(s: WorkbenchState): Float64Array {
 }
 const responseOf = memoLast((zpk: Zpk, omega: Float64Array) => responseZpk(zpk, omega));
 const displayResponseOf = memoLast(refineAtRoots);
-const stabilityOf = memoLast((zpk: Zpk, typed: Design['typed']) =>
-  typed ? stabilityOfTyped(zpk, typed.a) : stabilityOfZpk(zpk),
+const stabilityOf = memoLast((zpk: Zpk, typed: Design['typed'], checks: ExactChecks) =>
+  typed ? checks.stabilityOfTyped(zpk, typed.a) : stabilityOfZpk(zpk),
 );
-const typedDiagnosticsOf = memoLast((typed: Design['typed']) => (typed ? typedDiagnostics(typed) : null));
+const typedDiagnosticsOf = memoLast((typed: Design['typed'], checks: ExactChecks) =>
+  typed ? checks.typedDiagnostics(typed) : null,
+);
 const readoutsOf = memoLast((zpk: Zpk, fs: number) => rootReadouts(zpk, fs));
 
 /** Fewest response points while a root is dragged. */
@@ -139,20 +142,39 @@ export const selectResponse = (s: WorkbenchState): FrequencyResponse =>
 /** The response on the display grid plus the exact angles of the roots near the circle (true notch depth). */
 export const selectDisplayResponse = (s: WorkbenchState): FrequencyResponse =>
   displayResponseOf(zpkOf(s.design), selectResponse(s));
-/** The verdict: exact from the typed denominator when the design came as coefficients, else from the poles. */
-export const selectStability = (s: WorkbenchState): Stability => stabilityOf(zpkOf(s.design), s.design.typed);
-const expandedCheckOf = memoLast((zpk: Zpk, typed: boolean) =>
-  typed || zpk.poles.length === 0 ? null : checkExpandedCoefficients(zpk),
+/**
+ * The exact checks once they have arrived (store/exactChecks.ts), else null. Read through the store's
+ * status, so every selector below gives a new value (and the views draw again) when they arrive.
+ */
+const checksOf = (s: WorkbenchState): ExactChecks | null =>
+  s.exactChecks.state === 'ready' ? exactChecks() : null;
+/**
+ * The verdict: exact from the typed denominator when the design came as coefficients, else from the poles;
+ * null until the exact checks have arrived (a verdict is given only once the exact test can run).
+ */
+export const selectStability = (s: WorkbenchState): Stability | null => {
+  const checks = checksOf(s);
+  return checks && stabilityOf(zpkOf(s.design), s.design.typed, checks);
+};
+const expandedCheckOf = memoLast((zpk: Zpk, typed: boolean, checks: ExactChecks) =>
+  typed || zpk.poles.length === 0 ? null : checks.checkExpandedCoefficients(zpk),
 );
 /**
  * For roots placed or designed: whether their multiplied-out b, a still describe them (null for typed
- * coefficients, which are the design, and for designs without poles).
+ * coefficients, which are the design, for designs without poles, and until the exact checks arrive).
  */
-export const selectExpandedCheck = (s: WorkbenchState): ExpandedCheck | null =>
-  expandedCheckOf(zpkOf(s.design), s.design.typed !== undefined);
-/** Error bounds of the roots computed from typed coefficients, or null for roots placed or designed. */
-export const selectTypedDiagnostics = (s: WorkbenchState): SystemDiagnostics | null =>
-  typedDiagnosticsOf(s.design.typed);
+export const selectExpandedCheck = (s: WorkbenchState): ExpandedCheck | null => {
+  const checks = checksOf(s);
+  return checks && expandedCheckOf(zpkOf(s.design), s.design.typed !== undefined, checks);
+};
+/**
+ * Error bounds of the roots computed from typed coefficients, or null for roots placed or designed (and
+ * until the exact checks arrive).
+ */
+export const selectTypedDiagnostics = (s: WorkbenchState): SystemDiagnostics | null => {
+  const checks = checksOf(s);
+  return checks && typedDiagnosticsOf(s.design.typed, checks);
+};
 export const selectReadouts = (s: WorkbenchState): RootReadout[] =>
   readoutsOf(zpkOf(s.design), s.design.sampleRate);
 export const selectTimeInput = (s: WorkbenchState): Float64Array =>

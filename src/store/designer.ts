@@ -10,7 +10,7 @@
  * output compared with the design, so undoing back to the designed roots reads "as designed" again.
  */
 import type { Result, Root } from '../core/types.ts';
-import { designerEntry, runDesigner, type DesignerSpec, type DesignResult } from '../core/design/light.ts';
+import { designerShape, runDesigner, type DesignerSpec, type DesignResult } from '../core/design/light.ts';
 import * as masks from '../core/mask/index.ts';
 import type { MaskRegion, MaskRegionPatch, RegionEdge, RequirementMask } from '../core/mask/index.ts';
 import type { Design } from '../core/model/design.ts';
@@ -32,7 +32,7 @@ export type DesignerPatch = Partial<DesignerSpec> | ((spec: DesignerSpec) => Des
 
 /** Parameters that are alternatives to each other (from the designer registry): giving one drops the other. */
 function alternativesOf(kind: string): readonly (readonly [string, string])[] {
-  return designerEntry(kind)?.alternatives?.map((a) => a.keys) ?? [];
+  return designerShape(kind)?.alternatives?.map((a) => a.keys) ?? [];
 }
 
 /** The designer description with a patch applied; a parameter given drops its alternative (q vs bandwidth). */

@@ -22,6 +22,7 @@ import { defaultView, type ViewSettings, type ViewState } from './view.ts';
 import { framed } from './planeFit.ts';
 import { designerActions, rerunAllPartsOn, rerunDesignerOn, type DesignerActions } from './designer.ts';
 import { whenDesignEngine } from './designEngine.ts';
+import { exactChecksStatus, watchExactChecks, type ExactChecksStatus } from './exactChecks.ts';
 import type { DesignResult } from '../core/design/light.ts';
 import { implementationActions, type ImplementationActions } from './implementation.ts';
 import { defaultSignalView, signalActions, type SignalActions, type SignalState } from './signal.ts';
@@ -89,6 +90,8 @@ export interface WorkbenchState
     SignalActions {
   design: Design;
   history: History;
+  /** Whether the exact checks have arrived (exactChecks.ts); the verdicts wait for them. */
+  exactChecks: ExactChecksStatus;
 }
 
 export type WorkbenchStore = StoreApi<WorkbenchState>;
@@ -104,6 +107,7 @@ export type Apply = (fn: (d: Design) => Design) => DesignProblem | null;
 /** Creates a store holding the given design (the demo design by default). */
 export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchStore {
   return createStore<WorkbenchState>()((set, get) => {
+    watchExactChecks((status) => set({ exactChecks: status }));
     /**
      * Applies a pure edit; records one undo step unless inside a gesture. A result outside the design's
      * bounds is not applied and its problem returned, so nothing the page holds is lost on reload.
@@ -129,6 +133,7 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
       selection: null,
       dragging: false,
       signal: defaultSignalView,
+      exactChecks: exactChecksStatus(),
 
       moveRoot: (ref, re, im) => edit((d) => edits.moveRoot(d, ref, re, im)),
       moveRoots: (moves) => edit((d) => moves.reduce((x, m) => edits.moveRoot(x, m.ref, m.re, m.im), d)),

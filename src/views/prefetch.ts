@@ -5,6 +5,7 @@
 import { loadFullReader } from '../share/schema/reader.ts';
 import { loadLinkReader } from '../store/persist.ts';
 import { loadDesignEngine } from '../store/designEngine.ts';
+import { loadExactChecks } from '../store/exactChecks.ts';
 import { loadEntryReader } from './side/entry/loadEntryReader.ts';
 import { prefetchSidePages } from './side/sideTabs.ts';
 import { signalRegion } from './time/TimePanel.tsx';
@@ -15,6 +16,8 @@ import { maskHandles } from './frequency/FrequencyChart.tsx';
 import { typedWarning } from './side/SystemPage.tsx';
 
 function prefetchAll(): void {
+  // First the exact checks: the stability banner waits for them (store/exactChecks.ts).
+  void loadExactChecks().catch(() => undefined); // the banner offers to try again
   void prefetchSidePages();
   void signalRegion.prefetch();
   void rootNumbers.prefetch();

@@ -7,7 +7,7 @@
  * of v2.ts, mask.ts, designer.ts and view.ts describe it; the bounds by the design door (core/model/check.ts),
  * which the full reader runs as well. test/share/schema/quick.test.ts holds the two readers to agreeing.
  */
-import { designerEntry, type DesignerSpec } from '../../core/design/light.ts';
+import { designerShape, type DesignerSpec } from '../../core/design/light.ts';
 import type { ImplementationSettings } from '../../core/fixed/index.ts';
 import { validateSettings } from '../../core/fixed/index.ts';
 import type { RequirementMask } from '../../core/mask/index.ts';
@@ -74,7 +74,7 @@ function typed(v: unknown): NonNullable<Design['typed']> {
 /** A designer as its registry entry describes it: kind, fs and its parameters in the entry's order. */
 function designer(v: unknown): DesignerSpec {
   const o = object(v);
-  const entry = typeof o.kind === 'string' ? designerEntry(o.kind) : undefined;
+  const entry = typeof o.kind === 'string' ? designerShape(o.kind) : undefined;
   if (!entry || entry.kind !== o.kind) return unsure();
   const out: Obj = { kind: entry.kind, fs: finite(o.fs) };
   for (const p of entry.parameters) {

@@ -1,5 +1,10 @@
-/** The stability verdict as a banner no one can miss: green stable, amber marginal, red unstable. */
+/**
+ * The stability verdict as a banner no one can miss: green stable, amber marginal, red unstable; grey while
+ * the exact test has not arrived (it loads right after the first paint, store/exactChecks.ts), since a
+ * verdict is given only once it has run.
+ */
 import { selectStability } from '../../store/derived.ts';
+import { loadExactChecks } from '../../store/exactChecks.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 import { formatNumber } from '../shared/format.ts';
 import { positionText } from './rootRows.ts';
@@ -13,9 +18,38 @@ function sentence(reason: string): string {
   return t.endsWith('.') ? t : `${t}.`;
 }
 
+/** The banner before there is a verdict: being checked, or the exact test could not be fetched. */
+function Unjudged() {
+  const status = useWorkbench((st) => st.exactChecks);
+  const failed = status.state === 'failed';
+  return (
+    <div className="pw-stability pw-stability-checking" data-testid="stability">
+      <span className="pw-stability-icon" aria-hidden="true">
+        {failed ? '?' : '…'}
+      </span>
+      <div>
+        <strong className="pw-stability-title" role="status" aria-live="polite" aria-atomic="true">
+          {failed ? 'Stability not checked' : 'Checking stability…'}
+        </strong>
+        {failed ? (
+          <p className="pw-stability-reason" data-testid="stability-reason" title={status.message}>
+            The exact stability test could not be fetched from the server, so there is no verdict yet.{' '}
+            <button type="button" onClick={() => void loadExactChecks().catch(() => undefined)}>
+              Try again
+            </button>
+          </p>
+        ) : (
+          ' · the exact test is loading'
+        )}
+      </div>
+    </div>
+  );
+}
+
 export function StabilityBanner() {
   const s = useWorkbench(selectStability);
   const hasPoles = useWorkbench((st) => st.design.poles.length > 0);
+  if (!s) return <Unjudged />;
   const verdict = s.verdict;
   return (
     <div className={`pw-stability pw-stability-${verdict}`} data-testid="stability">
