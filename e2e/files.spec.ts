@@ -61,7 +61,7 @@ test.beforeEach(async ({ page }) => {
   await openKeepShare(page);
 });
 
-test('Copy link shows the link in the address bar until the next edit; it opens the same design elsewhere', async ({
+test('Copy link copies the address bar, which holds the design; the next edit is a new entry; it opens the same design elsewhere', async ({
   page,
   context,
   browser,
@@ -80,8 +80,9 @@ test('Copy link shows the link in the address bar until the next edit; it opens 
   expect(await page.evaluate(() => history.length)).toBe(entries);
 
   await startEmpty(page);
-  expect(new URL(page.url()).hash).toBe('');
-  expect(await page.evaluate(() => history.length)).toBe(entries);
+  await expect.poll(() => page.url()).not.toBe(copied);
+  expect(new URL(page.url()).hash).toMatch(/^#pw2\./);
+  expect(await page.evaluate(() => history.length)).toBe(entries + 1);
 
   const elsewhere = await browser.newContext();
   const other = await elsewhere.newPage();

@@ -6,7 +6,7 @@
 import { expect, test, type Page } from '@playwright/test';
 import { encodeLink } from '../src/share/link/index.ts';
 import { demoDesign } from '../src/store/demo.ts';
-import { openWorkbench, readDesign, saveScreenshot } from './support/app.ts';
+import { openWorkbench, readDesign, saveScreenshot, stabilityBanner } from './support/app.ts';
 import { dropFile } from './support/files.ts';
 
 /** Records whether a "Loading the …" placeholder is ever put into the page from now on. */
@@ -131,6 +131,42 @@ test('the design reader, link codec, system parser and design algorithms are not
   await page.getByRole('button', { name: 'Apply' }).click();
   await expect(page.getByTestId('read-as')).toBeVisible();
   expect((await readDesign(page)).typed?.b).toEqual([1, 0, -1]);
+});
+
+test('the first view draws while the exact stability test is held back, says it is checking, then gives the verdict', async ({
+  page,
+}, testInfo) => {
+  const release = await holdChunk(page, 'exactChecks');
+  await openWorkbench(page);
+  const banner = stabilityBanner(page);
+  // Drawn: the plots and the side column are there, and the banner promises nothing yet.
+  await expect(page.getByRole('region', { name: 'z-plane' })).toBeVisible();
+  await expect(page.getByTestId('plot-magnitude').locator('path[clip-path]').first()).toBeVisible();
+  await expect(page.getByRole('textbox', { name: 'System text' })).toBeVisible();
+  await expect(banner.getByRole('status')).toHaveText('Checking stability…');
+  await expect(banner).toHaveClass(/checking/);
+  await page.waitForTimeout(400);
+  await expect(banner).not.toContainText('Stable');
+  await saveScreenshot(page, testInfo, 'stability-checking');
+  release();
+  await expect(banner.getByRole('status')).toHaveText('Stable');
+  await expect(banner).toHaveClass(/pw-stability-stable/);
+  await expect(banner).toContainText('largest pole radius');
+  await saveScreenshot(page, testInfo, 'stability-checked');
+});
+
+test('when the exact stability test cannot be fetched the banner says so, and Try again brings the verdict', async ({
+  page,
+}, testInfo) => {
+  await page.route(/\/exactChecks-[\w-]+\.js$/, (route) => route.abort('connectionfailed'));
+  await openWorkbench(page);
+  const banner = stabilityBanner(page);
+  await expect(banner.getByRole('status')).toHaveText('Stability not checked');
+  await expect(banner).toContainText('could not be fetched');
+  await saveScreenshot(page, testInfo, 'stability-not-checked');
+  await page.unroute(/\/exactChecks-[\w-]+\.js$/);
+  await banner.getByRole('button', { name: 'Try again' }).click();
+  await expect(banner.getByRole('status')).toHaveText('Stable');
 });
 
 test('a reload restores the autosaved session; one only the full reader can read waits for it and is never overwritten', async ({

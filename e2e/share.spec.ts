@@ -53,8 +53,9 @@ test('a link opens the identical design in a fresh browser', async ({ browser })
   const design = await readDesign(page);
   expect(bitwiseDifference(design, shared.design)).toBeNull();
   expect(Object.is(design.zeros.at(-1)!.re, -0)).toBe(true);
-  // The fragment is consumed, the previous design (the demo) is one undo away, and the page says so.
-  expect(new URL(page.url()).hash).toBe('');
+  // The fragment stays (the address bar holds the open design), the previous design (the demo) is one
+  // undo away, and the page says so.
+  expect(new URL(page.url()).hash).toBe(`#${encodeLink(shared)}`);
   expect(await canUndo(page)).toBe(true);
   await expect(page.getByRole('status').filter({ hasText: 'from the link' })).toBeVisible();
   expect(problems).toEqual([]);

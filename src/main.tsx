@@ -21,4 +21,12 @@ const render = () =>
       <App />
     </StrictMode>,
   );
-void persistence.restored.then(render, render);
+// The address bar follows the design from the restored (or linked) one on; it needs the link codec, which
+// is not in the first view either, so it loads with it after the first paint.
+const start = () => {
+  render();
+  void import('./store/addressBar.ts').then((m) =>
+    m.installAddressBar(workbenchStore, m.browserAddressEnv()),
+  );
+};
+void persistence.restored.then(start, start);

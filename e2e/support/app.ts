@@ -22,6 +22,9 @@ export function entryBox(page: Page) {
 
 /** Types a system into the entry box and applies it with the button. */
 export async function applySystem(page: Page, text: string): Promise<void> {
+  // The parser of typed systems arrives with the chunks fetched after the first paint; once they are all
+  // there, Apply takes effect before the click returns, so the caller can read the design at once.
+  await page.waitForLoadState('networkidle');
   await entryBox(page).fill(text);
   await page.getByRole('button', { name: 'Apply' }).click();
 }

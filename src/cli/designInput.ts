@@ -2,7 +2,8 @@
 import { existsSync, readFileSync, statSync } from 'node:fs';
 import type { TransferFunction, Zpk } from '../core/types.ts';
 import { parseCoefficients, parseDifferenceEquation, parseSystem } from '../core/parse/index.ts';
-import { tfToZpk, compressRoots } from '../core/system/index.ts';
+import { compressRoots } from '../core/system/index.ts';
+import { tfToZpk } from '../core/system/fromCoefficients.ts';
 import { resolveGain } from '../core/gainRule.ts';
 import { MAX_FILE_BYTES, readSharedFileBytes, tooLarge } from '../share/designFile.ts';
 import type { SharedDesign } from '../share/document.ts';

@@ -14,13 +14,13 @@ import { readDesignFile, writeDesignFile } from '../share/designFile.ts';
 import { FullReaderPending, loadFullReader } from '../share/schema/reader.ts';
 import { browserStorage, consoleWarn, type KeyValueStorage, type Warn } from '../share/storage.ts';
 import type { Design } from '../core/model/design.ts';
-import { LOG_AXIS_MIN_FRACTION } from './derived.ts';
+import { LOG_AXIS_MIN_FRACTION, shownBandHz } from './zoom.ts';
 import { memoLast } from './memo.ts';
 import type { ViewSettings } from './view.ts';
 // Pure engine calls that merge the root angles into a grid; it lives beside the design's own curve.
 import { refineAtRoots } from '../core/response/index.ts';
 import { readAt, type FrequencyReading } from '../core/response/readAt.ts';
-import { omegaGridToHz } from '../core/units.ts';
+import { hzToOmega, omegaGridToHz } from '../core/units.ts';
 
 export const REFERENCE_KEY = 'polewright.reference';
 
@@ -140,11 +140,21 @@ export interface ReferenceResponse {
 }
 
 const responseOf = memoLast(
-  (d: Design, points: number, axis: ViewSettings['frequencyAxis']): ReferenceResponse => {
-    const omega = frequencyGrid(
-      points,
-      axis === 'log' ? { log: true, fMin: 2 * Math.PI * LOG_AXIS_MIN_FRACTION } : {},
-    );
+  (
+    d: Design,
+    points: number,
+    axis: ViewSettings['frequencyAxis'],
+    span: ViewSettings['frequencySpan'],
+  ): ReferenceResponse => {
+    // The band the plots show, read at the reference's own rate (so evaluated there, not interpolated).
+    const band = shownBandHz(span, d.sampleRate, axis);
+    const omega = band
+      ? frequencyGrid(points, {
+          log: axis === 'log',
+          fMin: hzToOmega(band[0], d.sampleRate),
+          fMax: Math.min(Math.PI, hzToOmega(band[1], d.sampleRate)),
+        })
+      : frequencyGrid(points, axis === 'log' ? { log: true, fMin: 2 * Math.PI * LOG_AXIS_MIN_FRACTION } : {});
     const response = responseZpk(zpkOf(d), omega);
     const hz = omegaGridToHz(omega, d.sampleRate);
     return { response, hz };
@@ -153,7 +163,7 @@ const responseOf = memoLast(
 
 /** The reference's frequency response on the grid the frequency view uses (same point count and axis). */
 export function selectReferenceResponse(ref: Reference, view: ViewSettings): ReferenceResponse {
-  return responseOf(ref.design, view.responsePoints, view.frequencyAxis);
+  return responseOf(ref.design, view.responsePoints, view.frequencyAxis, view.frequencySpan);
 }
 
 const DEG_PER_RAD = 180 / Math.PI;
@@ -175,12 +185,13 @@ const curvesOf = memoLast(
     d: Design,
     points: number,
     axis: ViewSettings['frequencyAxis'],
+    span: ViewSettings['frequencySpan'],
     scale: ViewSettings['magnitudeScale'],
     phaseMode: ViewSettings['phaseMode'],
     delayUnit: ViewSettings['delayUnit'],
   ): ReferenceCurves => {
     // Refined at the roots like the design's own curve, so a notch or a resonance shows in full in both.
-    const r = refineAtRoots(zpkOf(d), responseOf(d, points, axis).response);
+    const r = refineAtRoots(zpkOf(d), responseOf(d, points, axis, span).response);
 
     const perSample = delayUnit === 'ms' ? 1000 / d.sampleRate : 1;
     const phase = phaseMode === 'wrapped' ? r.phase : r.phaseUnwrapped;
@@ -199,6 +210,7 @@ export function selectReferenceCurves(ref: Reference, view: ViewSettings): Refer
     ref.design,
     view.responsePoints,
     view.frequencyAxis,
+    view.frequencySpan,
     view.magnitudeScale,
     view.phaseMode,
     view.delayUnit,

@@ -6,9 +6,10 @@ import type { Zpk, TransferFunction, Section } from '../core/types.ts';
 import { zpkToTf, zpkToSections } from '../core/system/index.ts';
 import { responseZpk, frequencyGrid, refineAtRoots, type FrequencyResponse } from '../core/response/index.ts';
 import { resolveGain, type ResolvedGain } from '../core/gainRule.ts';
-import { stabilityOfTyped, stabilityOfZpk, type Stability } from '../core/stability/index.ts';
-import { typedDiagnostics, type SystemDiagnostics } from '../core/system/diagnostics.ts';
-import { checkExpandedCoefficients, type ExpandedCheck } from '../core/system/expandedCheck.ts';
+import { stabilityOfZpk, type Stability } from '../core/stability/index.ts';
+import { exactChecks, type ExactChecks } from '../core/stability/exactChecksSlot.ts';
+import type { SystemDiagnostics } from '../core/system/diagnostics.ts';
+import type { ExpandedCheck } from '../core/system/expandedCheck.ts';
 import { rootReadouts, type RootReadout } from '../core/readouts.ts';
 import { filterSections, filterTf } from '../core/time/filter.ts';
 import { makeImpulse, makeStep, makeSine, makeWhiteNoise } from '../core/time/inputs.ts';
@@ -17,6 +18,7 @@ import type { Design } from '../core/model/design.ts';
 import type { ViewSettings } from './view.ts';
 import type { WorkbenchState } from './store.ts';
 import { memoLast } from './memo.ts';
+import { LOG_AXIS_MIN_FRACTION, shownBandHz } from './zoom.ts';
 import { evaluateMask, type MaskResult } from '../core/mask/index.ts';
 import {
   DesignEnginePending,
@@ -30,8 +32,7 @@ import { hzToOmega } from '../core/units.ts';
 
 /** Highest order for which the closed-form time response is listed (partial fractions grow ill-conditioned). */
 export const CLOSED_FORM_MAX_ORDER = 24;
-/** Lowest frequency of a log frequency axis, as a fraction of the sample rate (5e-4: three decades below Nyquist). */
-export const LOG_AXIS_MIN_FRACTION = 5e-4;
+export { LOG_AXIS_MIN_FRACTION } from './zoom.ts';
 
 const gainOf = memoLast((d: Design) => resolveGain(d.zeros, d.poles, d.gainRule, d.sampleRate));
 const zpkOf = memoLast((design: Design): Zpk => ({
@@ -43,15 +44,41 @@ const tfOf = memoLast((design: Design, zpk: Zpk): TransferFunction =>
   design.typed ? { b: design.typed.b, a: design.typed.a } : zpkToTf(zpk),
 );
 const sectionsOf = memoLast((zpk: Zpk): Section[] => zpkToSections(zpk));
-const gridOf = memoLast((points: number, axis: ViewSettings['frequencyAxis']) =>
-  frequencyGrid(points, axis === 'log' ? { log: true, fMin: 2 * Math.PI * LOG_AXIS_MIN_FRACTION } : {}),
+const gridOf = memoLast(
+  (points: number, axis: ViewSettings['frequencyAxis'], loHz: number, hiHz: number, fs: number) => {
+    // A zoomed band gets the same number of points as the whole axis: evaluated there, not interpolated,
+    // at the same cost per redraw.
+    if (hiHz > loHz)
+      return frequencyGrid(points, {
+        log: axis === 'log',
+        fMin: hzToOmega(loHz, fs),
+        fMax: Math.min(Math.PI, hzToOmega(hiHz, fs)),
+      });
+    return frequencyGrid(
+      points,
+      axis === 'log' ? { log: true, fMin: 2 * Math.PI * LOG_AXIS_MIN_FRACTION } : {},
+    );
+  },
 );
+/** The display grid (rad/sample) for the view's point count, axis and zoomed band. */
+function displayGrid(s: WorkbenchState): Float64Array {
+  const { frequencyAxis, frequencySpan } = s.view;
+  const responsePoints = responsePointsOf(s);
+  const fs = s.design.sampleRate;
+  const band = shownBandHz(frequencySpan, fs, frequencyAxis);
+  // Without a band the grid does not depend on the sample rate: 0s keep the memo across rate changes.
+  return band
+    ? gridOf(responsePoints, frequencyAxis, band[0], band[1], fs)
+    : gridOf(responsePoints, frequencyAxis, 0, 0, 0);
+}
 const responseOf = memoLast((zpk: Zpk, omega: Float64Array) => responseZpk(zpk, omega));
 const displayResponseOf = memoLast(refineAtRoots);
-const stabilityOf = memoLast((zpk: Zpk, typed: Design['typed']) =>
-  typed ? stabilityOfTyped(zpk, typed.a) : stabilityOfZpk(zpk),
+const stabilityOf = memoLast((zpk: Zpk, typed: Design['typed'], checks: ExactChecks) =>
+  typed ? checks.stabilityOfTyped(zpk, typed.a) : stabilityOfZpk(zpk),
 );
-const typedDiagnosticsOf = memoLast((typed: Design['typed']) => (typed ? typedDiagnostics(typed) : null));
+const typedDiagnosticsOf = memoLast((typed: Design['typed'], checks: ExactChecks) =>
+  typed ? checks.typedDiagnostics(typed) : null,
+);
 const readoutsOf = memoLast((zpk: Zpk, fs: number) => rootReadouts(zpk, fs));
 
 /** Fewest response points while a root is dragged. */
@@ -111,24 +138,43 @@ export const selectZpk = (s: WorkbenchState): Zpk => zpkOf(s.design);
 export const selectTf = (s: WorkbenchState): TransferFunction => tfOf(s.design, zpkOf(s.design));
 export const selectSections = (s: WorkbenchState): Section[] => sectionsOf(zpkOf(s.design));
 export const selectResponse = (s: WorkbenchState): FrequencyResponse =>
-  responseOf(zpkOf(s.design), gridOf(responsePointsOf(s), s.view.frequencyAxis));
+  responseOf(zpkOf(s.design), displayGrid(s));
 /** The response on the display grid plus the exact angles of the roots near the circle (true notch depth). */
 export const selectDisplayResponse = (s: WorkbenchState): FrequencyResponse =>
   displayResponseOf(zpkOf(s.design), selectResponse(s));
-/** The verdict: exact from the typed denominator when the design came as coefficients, else from the poles. */
-export const selectStability = (s: WorkbenchState): Stability => stabilityOf(zpkOf(s.design), s.design.typed);
-const expandedCheckOf = memoLast((zpk: Zpk, typed: boolean) =>
-  typed || zpk.poles.length === 0 ? null : checkExpandedCoefficients(zpk),
+/**
+ * The exact checks once they have arrived (store/exactChecks.ts), else null. Read through the store's
+ * status, so every selector below gives a new value (and the views draw again) when they arrive.
+ */
+const checksOf = (s: WorkbenchState): ExactChecks | null =>
+  s.exactChecks.state === 'ready' ? exactChecks() : null;
+/**
+ * The verdict: exact from the typed denominator when the design came as coefficients, else from the poles;
+ * null until the exact checks have arrived (a verdict is given only once the exact test can run).
+ */
+export const selectStability = (s: WorkbenchState): Stability | null => {
+  const checks = checksOf(s);
+  return checks && stabilityOf(zpkOf(s.design), s.design.typed, checks);
+};
+const expandedCheckOf = memoLast((zpk: Zpk, typed: boolean, checks: ExactChecks) =>
+  typed || zpk.poles.length === 0 ? null : checks.checkExpandedCoefficients(zpk),
 );
 /**
  * For roots placed or designed: whether their multiplied-out b, a still describe them (null for typed
- * coefficients, which are the design, and for designs without poles).
+ * coefficients, which are the design, for designs without poles, and until the exact checks arrive).
  */
-export const selectExpandedCheck = (s: WorkbenchState): ExpandedCheck | null =>
-  expandedCheckOf(zpkOf(s.design), s.design.typed !== undefined);
-/** Error bounds of the roots computed from typed coefficients, or null for roots placed or designed. */
-export const selectTypedDiagnostics = (s: WorkbenchState): SystemDiagnostics | null =>
-  typedDiagnosticsOf(s.design.typed);
+export const selectExpandedCheck = (s: WorkbenchState): ExpandedCheck | null => {
+  const checks = checksOf(s);
+  return checks && expandedCheckOf(zpkOf(s.design), s.design.typed !== undefined, checks);
+};
+/**
+ * Error bounds of the roots computed from typed coefficients, or null for roots placed or designed (and
+ * until the exact checks arrive).
+ */
+export const selectTypedDiagnostics = (s: WorkbenchState): SystemDiagnostics | null => {
+  const checks = checksOf(s);
+  return checks && typedDiagnosticsOf(s.design.typed, checks);
+};
 export const selectReadouts = (s: WorkbenchState): RootReadout[] =>
   readoutsOf(zpkOf(s.design), s.design.sampleRate);
 export const selectTimeInput = (s: WorkbenchState): Float64Array =>

@@ -10,7 +10,7 @@
  * output compared with the design, so undoing back to the designed roots reads "as designed" again.
  */
 import type { Result, Root } from '../core/types.ts';
-import { designerEntry, runDesigner, type DesignerSpec, type DesignResult } from '../core/design/light.ts';
+import { designerShape, runDesigner, type DesignerSpec, type DesignResult } from '../core/design/light.ts';
 import * as masks from '../core/mask/index.ts';
 import type { MaskRegion, MaskRegionPatch, RegionEdge, RequirementMask } from '../core/mask/index.ts';
 import type { Design } from '../core/model/design.ts';
@@ -32,7 +32,7 @@ export type DesignerPatch = Partial<DesignerSpec> | ((spec: DesignerSpec) => Des
 
 /** Parameters that are alternatives to each other (from the designer registry): giving one drops the other. */
 function alternativesOf(kind: string): readonly (readonly [string, string])[] {
-  return designerEntry(kind)?.alternatives?.map((a) => a.keys) ?? [];
+  return designerShape(kind)?.alternatives?.map((a) => a.keys) ?? [];
 }
 
 /** The designer description with a patch applied; a parameter given drops its alternative (q vs bandwidth). */
@@ -189,14 +189,17 @@ export interface DesignerActions {
 
 /**
  * The designer and mask actions of a store: its design reader, its checked edit (which returns the problem
- * of a result outside the design's bounds), its edit that reports such a problem itself, and a hook for new
- * roots.
+ * of a result outside the design's bounds), its edit that reports such a problem itself, a hook for new
+ * roots, and one for a design that a designer made (run, re-run, a part added or re-run), after which the
+ * store frames the plane on every root as after Apply or Open (store/planeFit.ts). Removing a part only
+ * takes roots away, so it frames nothing.
  */
 export function designerActions(
   get: () => { design: Design },
   apply: (fn: (d: Design) => Design) => DesignProblem | null,
   edit: (fn: (d: Design) => Design) => void,
   rootsReplaced: () => void = () => {},
+  designArrived: () => void = () => {},
 ): DesignerActions {
   /** Applies an edit that may fail; records one step when it succeeds and changes something. */
   const attempt = <T>(fn: (d: Design) => Result<{ design: Design; out: T }>): Result<T> => {
@@ -218,18 +221,27 @@ export function designerActions(
   return {
     runDesigner: (spec, policy = 'fill') => {
       const r = attempt((d) => designed(applyDesigner(d, spec, policy)));
-      if (r.ok) rootsReplaced();
+      if (r.ok) {
+        rootsReplaced();
+        designArrived();
+      }
       return r;
     },
     rerunDesigner: (patch) => {
       const r = attempt((d) => designed(rerunDesignerOn(d, patch)));
-      if (r.ok) rootsReplaced();
+      if (r.ok) {
+        rootsReplaced();
+        designArrived();
+      }
       return r;
     },
     releaseDesigner: () => edit(releaseDesignerOf),
     designerEdit: (fn) => {
       const r = attempt((d) => designed(fn(d)));
-      if (r.ok) rootsReplaced();
+      if (r.ok) {
+        rootsReplaced();
+        designArrived();
+      }
       return r;
     },
     partsEdit: (fn) => {

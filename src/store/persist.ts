@@ -1,7 +1,8 @@
 /**
  * Wires the share layer into the page's store: restore this tab's autosaved session (or continue the newest
  * one in a new tab), open a design link from the URL fragment (one undo step on top, so the previous design
- * stays reachable), open later links on `hashchange`, and autosave every change (throttled, flushed on
+ * stays reachable), open later links on `hashchange` (a pasted link, or Back/Forward through the address
+ * bar's entries), and autosave every change (throttled, flushed on
  * pagehide). Work that is not saved is never silent: a lasting notice says why, with the design one click
  * away as a file, and a tab says when another tab changed the same design, offering to keep its own copy.
  */
@@ -26,14 +27,17 @@ import { pickSharedView } from '../core/model/view.ts';
 import { browserStorage, consoleWarn, type KeyValueStorage, type Warn } from '../share/storage.ts';
 import type { WorkbenchStore } from './store.ts';
 import { defaultView } from './view.ts';
+import { framed } from './planeFit.ts';
 
 /** What persistence needs from the browser; tests pass a fake. */
 export interface PersistEnv {
   storage: KeyValueStorage | null;
   /** The URL fragment including '#', or ''. */
   hash(): string;
-  /** Removes the fragment without reloading or adding a browser-history entry. */
-  clearHash(): void;
+  /** Whether the current history entry is one the address bar wrote (a 'hashchange' then is Back/Forward). */
+  isHistoryStep?(): boolean;
+  /** Whether the page was loaded by a reload (not by following a link, a bookmark or a typed address). */
+  isReload?(): boolean;
   listen(event: 'hashchange' | 'pagehide' | 'hidden', fn: () => void): () => void;
   /** This tab's id as kept across its reloads (sessionStorage), or null in a new tab. */
   tabId?(): string | null;
@@ -76,12 +80,11 @@ export function browserEnv(): PersistEnv {
   return {
     storage: browserStorage(),
     hash: () => window.location.hash,
-    clearHash: () =>
-      window.history.replaceState(
-        window.history.state,
-        '',
-        window.location.pathname + window.location.search,
-      ),
+    isReload: () =>
+      (performance.getEntriesByType('navigation')[0] as PerformanceNavigationTiming | undefined)?.type ===
+      'reload',
+    isHistoryStep: () =>
+      (window.history.state as { polewright?: unknown } | null)?.polewright === ADDRESS_STATE.polewright,
     listen: (event, fn) => {
       if (event === 'hidden') {
         const onVis = () => {
@@ -128,7 +131,10 @@ export function browserEnv(): PersistEnv {
   };
 }
 
-type LinkReader = typeof import('../share/link/index.ts');
+/** The history-entry state that marks an entry the address bar wrote (src/store/addressBar.ts). */
+export const ADDRESS_STATE = { polewright: 'design' } as const;
+
+export type LinkReader = typeof import('../share/link/index.ts');
 let linkReader: LinkReader | null = null;
 let linkLoading: Promise<LinkReader> | null = null;
 
@@ -149,12 +155,14 @@ export function loadLinkReader(): Promise<LinkReader> {
 
 /**
  * Opens the design link in the fragment, if there is one; returns whether a design was opened, or a promise
- * of it when the link codec or the full design reader has not loaded yet (the fragment is taken at once).
+ * of it when the link codec or the full design reader has not loaded yet. The fragment stays (the address
+ * bar holds the open design, src/store/addressBar.ts); a link to the design and view already open, as after
+ * a reload, changes nothing and says nothing.
  */
 export function openLinkFromHash(store: WorkbenchStore, env: PersistEnv): boolean | Promise<boolean> {
   const hash = env.hash();
   if (!/^#pw/.test(hash)) return false;
-  env.clearHash();
+  const historyStep = env.isHistoryStep?.() ?? false;
   const notLoaded = (err: unknown) => {
     postNotice(
       'error',
@@ -164,33 +172,45 @@ export function openLinkFromHash(store: WorkbenchStore, env: PersistEnv): boolea
   };
   if (linkReader) {
     try {
-      return openLink(store, hash, linkReader);
+      return openLink(store, hash, linkReader, historyStep);
     } catch (e) {
       if (!(e instanceof FullReaderPending)) throw e;
     }
   }
   return loadLinkReader()
-    .then((reader) => readWhenReady(() => openLink(store, hash, reader)))
+    .then((reader) => readWhenReady(() => openLink(store, hash, reader, historyStep)))
     .catch(notLoaded);
 }
 
-function openLink(store: WorkbenchStore, hash: string, { decodeLink }: LinkReader): boolean {
+function openLink(
+  store: WorkbenchStore,
+  hash: string,
+  { decodeLink }: LinkReader,
+  historyStep: boolean,
+): boolean {
   const r = decodeLink(hash);
   if (!r.ok) {
     postNotice('error', `The design link could not be opened, so your design is unchanged. ${r.message}`);
     return false;
   }
   const state = store.getState();
+  const view = { ...pickSharedView(defaultView), ...r.value.view };
+  const sameView = Object.entries(view).every(([k, v]) => Object.is(state.view[k as keyof typeof view], v));
   // Reopening the design already open would only add an undo step that changes nothing.
-  if (!sameDesign(r.value.design, state.design)) state.replaceDesign(r.value.design);
-  state.setView({ ...pickSharedView(defaultView), ...r.value.view });
+  if (sameDesign(r.value.design, state.design)) {
+    if (!sameView) state.setView(view);
+    return false;
+  }
+  // The view first: the address bar then finds the design it already shows and adds no entry.
+  state.setView(view);
+  state.replaceDesign(r.value.design);
   const notes = r.notes?.length ? ` ${r.notes.join(' ')}` : '';
+  const name = r.value.design.name || 'untitled design';
+  const text = historyStep
+    ? `Back/Forward: “${name}”. Undo brings back the design you had before.`
+    : `Opened “${name}” from the link. Undo brings back the design you had before.`;
   // A note (an old link without a check value) stays until read; a plain confirmation fades.
-  postNotice(
-    'info',
-    `Opened “${r.value.design.name || 'untitled design'}” from the link. Undo brings back the design you had before.${notes}`,
-    notes ? { persistent: true } : {},
-  );
+  postNotice('info', `${text}${notes}`, notes ? { persistent: true } : {});
   return true;
 }
 
@@ -242,6 +262,8 @@ export function installPersistence(store: WorkbenchStore, env: PersistEnv = brow
   let disposed = false;
   /** Settles once a link in the fragment at start has been opened (or refused). */
   let opening: Promise<unknown> = Promise.resolve();
+  /** Whether this tab's own session was restored (a reload then keeps it over the fragment). */
+  let restoredSession = false;
   /** Restores the session; false when that needs the full reader, which has not loaded yet. */
   const restore = (): boolean => {
     try {
@@ -249,10 +271,11 @@ export function installPersistence(store: WorkbenchStore, env: PersistEnv = brow
       if (restored) {
         const { session } = restored;
         lineage = restored.lineage;
+        restoredSession = true;
         store.setState({
           design: session.design,
           history: { past: session.past, future: session.future, gestureStart: null },
-          view: { ...store.getState().view, ...session.view },
+          view: framed({ ...store.getState().view, ...session.view }, session.design),
           selection: null,
         });
       }
@@ -304,7 +327,9 @@ export function installPersistence(store: WorkbenchStore, env: PersistEnv = brow
       env.setTabId?.(tab);
     }
     lineage ??= newId();
-    opening = Promise.resolve(openLinkFromHash(store, env));
+    // A reload of this tab goes on with its own session (the address bar then shows it again): the fragment
+    // can lag behind it, as when the page went away mid-drag. Following a link or a bookmark opens the link.
+    if (!(restoredSession && env.isReload?.())) opening = Promise.resolve(openLinkFromHash(store, env));
     offs.push(env.listen('hashchange', () => openLinkFromHash(store, env)));
     if (!storage) return;
 

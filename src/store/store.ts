@@ -19,8 +19,10 @@ import { postNotice } from './notices.ts';
 import { closeGesture, emptyHistory, recordEdit, type History } from './history.ts';
 import * as edits from './rootEdits.ts';
 import { defaultView, type ViewSettings, type ViewState } from './view.ts';
+import { framed } from './planeFit.ts';
 import { designerActions, type DesignerActions } from './designer.ts';
 import { whenDesignEngine } from './designEngine.ts';
+import { exactChecksStatus, watchExactChecks, type ExactChecksStatus } from './exactChecks.ts';
 import type { RateChoice } from './sampleRate.ts';
 import { withRateChange } from './rateChange.ts';
 import { implementationActions, type ImplementationActions } from './implementation.ts';
@@ -93,6 +95,8 @@ export interface WorkbenchState
     SignalActions {
   design: Design;
   history: History;
+  /** Whether the exact checks have arrived (exactChecks.ts); the verdicts wait for them. */
+  exactChecks: ExactChecksStatus;
 }
 
 export type WorkbenchStore = StoreApi<WorkbenchState>;
@@ -108,6 +112,7 @@ export type Apply = (fn: (d: Design) => Design) => DesignProblem | null;
 /** Creates a store holding the given design (the demo design by default). */
 export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchStore {
   return createStore<WorkbenchState>()((set, get) => {
+    watchExactChecks((status) => set({ exactChecks: status }));
     /**
      * Applies a pure edit; records one undo step unless inside a gesture. A result outside the design's
      * bounds is not applied and its problem returned, so nothing the page holds is lost on reload.
@@ -133,6 +138,7 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
       selection: null,
       dragging: false,
       signal: defaultSignalView,
+      exactChecks: exactChecksStatus(),
 
       moveRoot: (ref, re, im) => edit((d) => edits.moveRoot(d, ref, re, im)),
       moveRoots: (moves) => edit((d) => moves.reduce((x, m) => edits.moveRoot(x, m.ref, m.re, m.im), d)),
@@ -188,16 +194,22 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
             ...(keep.mask && mask && { mask }),
           };
         });
-        if (!problem) set({ selection: null });
+        if (!problem) set({ selection: null, view: framed(get().view, get().design) });
         return problem;
       },
       replaceDesign: (design) => {
         edit(() => design);
-        set({ selection: null });
+        set({ selection: null, view: framed(get().view, get().design) });
       },
       setName: (name) => edit((d) => (d.name === name ? d : { ...d, name })),
       setNote: (note) => edit((d) => (d.note === note ? d : { ...d, note })),
-      ...designerActions(get, apply, edit, () => set({ selection: null })),
+      ...designerActions(
+        get,
+        apply,
+        edit,
+        () => set({ selection: null }),
+        () => set({ view: framed(get().view, get().design) }),
+      ),
       ...implementationActions(get, edit),
       ...signalActions(set, get),
 

@@ -6,14 +6,21 @@ import { loadFullReader } from '../share/schema/reader.ts';
 import { loadLinkReader } from '../store/persist.ts';
 import { loadDesignEngine } from '../store/designEngine.ts';
 import { loadRateChange } from '../store/rateChange.ts';
+import { loadExactChecks } from '../store/exactChecks.ts';
 import { loadEntryReader } from './side/entry/loadEntryReader.ts';
 import { prefetchSidePages } from './side/sideTabs.ts';
 import { signalRegion } from './time/TimePanel.tsx';
 import { rootNumbers } from './plane/RootEditor.tsx';
 import { loadRateSteps } from './shell/SampleRateField.tsx';
 import { quantizedMaskChip } from './verdicts/quantizedViews.ts';
+import { loadZoomKit } from './chart/useAxisZoom.ts';
+import { referenceReading } from './compare/LazyReferenceReading.tsx';
+import { maskHandles } from './frequency/FrequencyChart.tsx';
+import { typedWarning } from './side/SystemPage.tsx';
 
 function prefetchAll(): void {
+  // First the exact checks: the stability banner waits for them (store/exactChecks.ts).
+  void loadExactChecks().catch(() => undefined); // the banner offers to try again
   void prefetchSidePages();
   void signalRegion.prefetch();
   void rootNumbers.prefetch();
@@ -27,7 +34,12 @@ function prefetchAll(): void {
   // Changing the sample rate keeping the design in hertz (store/sampleRate.ts).
   void loadRateChange().catch(() => undefined); // retried when the rate is changed
   void loadRateSteps().catch(() => undefined); // retried when a rate is committed
-  void quantizedMaskChip.prefetch(); // the quantized verdicts, with the stability banner's
+  void quantizedMaskChip.prefetch().catch(() => undefined); // the quantized verdicts, with the banner's
+  // The plots' zoom gestures and buttons (a plot drawn zoomed needs only its span).
+  void loadZoomKit().catch(() => undefined); // retried when a plot is mounted
+  void referenceReading.prefetch().catch(() => undefined); // retried when a reference is pinned
+  void maskHandles.prefetch().catch(() => undefined); // retried when the magnitude plot is drawn
+  void typedWarning.prefetch().catch(() => undefined); // retried when the System page is drawn
 }
 
 /** Schedules the prefetch after the next paint; returns a function that cancels it if it has not started. */

@@ -129,6 +129,21 @@ const view = fc.record(
     sineHz: anyFinite.map(Math.abs),
     timeSamples: fc.integer({ min: 8, max: 65536 }),
     noiseSeed: fc.integer({ min: 0, max: 0xffffffff }),
+    // Zoomed bands: [low, high] with low < high (low ≥ 0 in Hz, ≥ −1 in samples), or the whole axis.
+    frequencySpan: fc.option(
+      fc
+        .tuple(anyFinite.map(Math.abs), anyFinite.map(Math.abs))
+        .filter(([a, b]) => a !== b)
+        .map(([a, b]) => (a < b ? ([a, b] as const) : ([b, a] as const))),
+      { nil: null },
+    ),
+    timeSpan: fc.option(
+      fc
+        .tuple(fc.double({ min: -1, max: 1e6, noNaN: true }), fc.double({ min: -1, max: 1e6, noNaN: true }))
+        .filter(([a, b]) => a !== b)
+        .map(([a, b]) => (a < b ? ([a, b] as const) : ([b, a] as const))),
+      { nil: null },
+    ),
   },
   { requiredKeys: [] },
 );

@@ -157,7 +157,6 @@ function page(storage: ReturnType<typeof memoryStorage>, tab: string): PersistEn
   return {
     storage,
     hash: () => '',
-    clearHash: () => {},
     listen: () => () => {},
     tabId: () => id,
     setTabId: (t) => void (id = t),

@@ -30,7 +30,6 @@ function fakeEnv(storage: KeyValueStorage, hash = '', options: Partial<PersistEn
   } = {
     storage,
     hash: () => hash,
-    clearHash: () => void (hash = ''),
     listen: (event, fn) => {
       listeners.set(event, [...(listeners.get(event) ?? []), fn]);
       return () =>
@@ -86,7 +85,7 @@ describe('page persistence', () => {
     expect(bitwiseDifference(store.getState().design, demoDesign())).toBeNull();
   });
 
-  it('opens a link on top of the restored design, one undo step away, and removes the fragment', async () => {
+  it('opens a link on top of the restored design, one undo step away, and keeps the fragment', async () => {
     const storage = memoryStorage();
     saveSession(
       storage,
@@ -99,10 +98,24 @@ describe('page persistence', () => {
     await installPersistence(store, env).restored;
     expect(bitwiseDifference(store.getState().design, shared.design)).toBeNull();
     expect(store.getState().view.frequencyAxis).toBe('log');
-    expect(env.hashNow()).toBe('');
+    expect(env.hashNow()).toBe('#' + encodeLink(shared));
     expect(notices()[0]!.tone).toBe('info');
     store.getState().undo();
     expect(store.getState().design.name).toBe('before');
+  });
+
+  it('a reload of the tab keeps its own session over a fragment that lags behind it', async () => {
+    const storage = memoryStorage();
+    saveSession(
+      storage,
+      stored({ design: { ...emptyDesign(), name: 'mid-drag' }, past: [], future: [], view: {} }),
+    );
+    const shared = { design: demoDesign(), view: {} };
+    const env = fakeEnv(storage, '#' + encodeLink(shared), { isReload: () => true });
+    const store = createWorkbenchStore(emptyDesign());
+    await installPersistence(store, env).restored;
+    expect(store.getState().design.name).toBe('mid-drag');
+    expect(notices()).toHaveLength(0);
   });
 
   it('leaves the design untouched and posts a message for a malformed link, also on hashchange', async () => {

@@ -29,7 +29,6 @@ function env(storage: ReturnType<typeof memoryStorage>, tab: string, hash = '') 
   const e: PersistEnv & { runTimers(): void } = {
     storage,
     hash: () => hash,
-    clearHash: () => void (hash = ''),
     listen: () => () => {},
     tabId: () => tab,
     setTabId: () => {},

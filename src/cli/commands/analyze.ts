@@ -1,7 +1,8 @@
 /** `polewright analyze`: roots, gain, coefficients, sections, stability and per-root read-outs. */
 import type { TransferFunction } from '../../core/types.ts';
 import { expandRoots, zpkToTf, zpkToSections } from '../../core/system/index.ts';
-import { stabilityOfTyped, stabilityOfZpk } from '../../core/stability/index.ts';
+import { stabilityOfZpk } from '../../core/stability/index.ts';
+import { stabilityOfTyped } from '../../core/stability/typed.ts';
 import {
   exactDiagnostics,
   typedDiagnostics,

@@ -14,7 +14,7 @@ import { runDesigner } from './runDesigner.ts';
 import { runFir } from './fir/runFir.ts';
 import { isFirFamily } from './fir/families.ts';
 import { remezTaps } from './fir/remez.ts';
-import { tfToZpk } from '../system/transferFunction.ts';
+import { tfToZpk } from '../system/fromCoefficients.ts';
 import type { FirBand } from './fir/bands.ts';
 import { snapLinearPhaseZeros } from './fir/linearPhaseZeros.ts';
 import { fmt } from './entries/common.ts';

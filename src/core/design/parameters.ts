@@ -167,7 +167,7 @@ export function defineDesigner<const K extends string, const Ps extends readonly
 export type SpecOfEntry<E> = E extends DesignerEntry<infer K, infer Ps> ? SpecOf<K, Ps> : never;
 
 /** The largest order an order parameter accepts for these values. */
-export function orderMax(p: OrderParameter, values: DesignValues): number {
+export function orderMax(p: Pick<OrderParameter, 'max' | 'maxFor'>, values: DesignValues): number {
   return p.maxFor ? Math.min(p.max, p.maxFor(values)) : p.max;
 }
 

@@ -6,7 +6,7 @@
  * again, which keeps a drag step cheap.
  */
 import type { Root } from '../types.ts';
-import { designerEntry, orderMax, type DesignerSpec } from '../design/light.ts';
+import { designerShape, orderMax, type DesignerSpec } from '../design/light.ts';
 import type { RequirementMask } from '../mask/index.ts';
 import { validateSettings } from '../fixed/index.ts';
 import { shortNumber } from '../shortNumber.ts';
@@ -166,7 +166,7 @@ function typedProblem(typed: NonNullable<Design['typed']>): DesignProblem | null
 /** A designer description as its registry entry describes it: kinds, numbers, lists, orders and choices. */
 function designerProblem(spec: DesignerSpec, base: (string | number)[] = ['designer']): DesignProblem | null {
   const at = (k: string, i?: number) => (i === undefined ? [...base, k] : [...base, k, i]);
-  const entry = designerEntry(spec.kind);
+  const entry = designerShape(spec.kind);
   if (!entry)
     return problem(
       at('kind'),

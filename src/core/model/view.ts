@@ -1,6 +1,7 @@
 /**
  * The view settings that travel with a design in links, files and saved sessions: how its responses are
- * shown (scales, units, the time view's input), never panning, snapping or selection.
+ * shown (scales, units, the zoomed bands of the response plots, the time view's input), never the plane's
+ * panning, snapping or selection.
  */
 
 export type TimeInput = 'impulse' | 'step' | 'sine' | 'noise';
@@ -11,13 +12,17 @@ export interface DocumentView {
   phaseMode: 'wrapped' | 'unwrapped';
   delayUnit: 'samples' | 'ms';
   frequencyAxis: 'linear' | 'log';
-  /** Number of frequency points on [0, fs/2]. */
+  /** Number of frequency points on [0, fs/2] (or on the zoomed band). */
   responsePoints: number;
+  /** The frequency band the plots show, Hz (low, high); null shows the whole axis. */
+  frequencySpan: readonly [number, number] | null;
   /** Time view. */
   timeInput: TimeInput;
   /** Sinusoid frequency for the time view, Hz. */
   sineHz: number;
   timeSamples: number;
+  /** The samples the time plot shows (first, last, fractional); null shows them all. */
+  timeSpan: readonly [number, number] | null;
   timeStyle: 'stems' | 'line';
   noiseSeed: number;
 }
@@ -34,6 +39,8 @@ export const SHARED_VIEW_KEYS = [
   'timeSamples',
   'timeStyle',
   'noiseSeed',
+  'frequencySpan',
+  'timeSpan',
 ] as const satisfies readonly (keyof DocumentView)[];
 
 export type SharedViewKey = (typeof SHARED_VIEW_KEYS)[number];

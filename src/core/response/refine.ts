@@ -9,13 +9,13 @@ import type { Zpk } from '../types.ts';
 /** Roots farther than this from the unit circle (in radius) add no point: their features are broad. */
 export const REFINE_RADIUS_BAND = 0.2;
 
-/** Angles (rad/sample, in [lo, π]) of the roots near the unit circle, sorted, without duplicates. */
-export function rootAngles(zpk: Zpk, lo: number): number[] {
+/** Angles (rad/sample, in [lo, hi]) of the roots near the unit circle, sorted, without duplicates. */
+export function rootAngles(zpk: Zpk, lo: number, hi = Math.PI): number[] {
   const out: number[] = [];
   for (const r of [...zpk.zeros, ...zpk.poles]) {
     if (Math.abs(Math.hypot(r.re, r.im) - 1) > REFINE_RADIUS_BAND) continue;
     const w = Math.atan2(r.im, r.re);
-    if (w >= lo && w <= Math.PI) out.push(w);
+    if (w >= lo && w <= hi) out.push(w);
   }
   out.sort((a, b) => a - b);
   return out.filter((w, i) => i === 0 || w !== out[i - 1]);
@@ -36,7 +36,8 @@ const FIELDS = [
 export function refineAtRoots(zpk: Zpk, grid: FrequencyResponse): FrequencyResponse {
   const g = grid.omega;
   if (g.length === 0) return grid;
-  const extra = rootAngles(zpk, g[0]!).filter((w) => !gridHas(g, w));
+  // Only the grid's own band: a zoomed grid gets no points outside what it shows.
+  const extra = rootAngles(zpk, g[0]!, g[g.length - 1]!).filter((w) => !gridHas(g, w));
   if (extra.length === 0) return grid;
   const add = responseZpk(zpk, Float64Array.from(extra));
   const n = g.length + extra.length;

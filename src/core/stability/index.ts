@@ -1,7 +1,10 @@
-/** Stability of a system from its poles: inside, on or outside the unit circle. */
+/**
+ * Stability of a system from its poles: inside, on or outside the unit circle. The exact verdict on typed
+ * coefficients is typed.ts (with coefficients.ts), which the page loads after its first paint
+ * (store/exactChecks.ts).
+ */
 import type { Root, Zpk } from '../types.ts';
 import { compressRoots, expandRoots } from '../system/rootList.ts';
-import { stabilityOfCoefficients } from './coefficients.ts';
 import { shortNumber } from '../shortNumber.ts';
 
 /** stable: every pole strictly inside; marginal: only simple poles on the circle, none outside; unstable: otherwise. */
@@ -102,37 +105,4 @@ export function stabilityOfZpk(zpk: Zpk): Stability {
   const largest = poles.filter((p) => radius(p) === maxPoleRadius);
   const reason = `every pole is inside the unit circle; the largest radius is ${radiusText(maxPoleRadius)} (${describePole(largest[0]!)})`;
   return { verdict: 'stable', maxPoleRadius, responsible: largest, reason, decidedBy: 'roots' };
-}
-
-const TITLE: Record<Verdict, string> = {
-  stable: 'stable',
-  marginal: 'marginally stable',
-  unstable: 'unstable',
-};
-
-/**
- * The verdict for a design that came as typed coefficients: the exact test on the denominator a (powers
- * of z^-1, as typed) decides; the computed poles give the radius and the poles to point at. Where the two
- * disagree, the coefficients win and the reason says what the computed poles suggested.
- */
-export function stabilityOfTyped(zpk: Zpk, a: ArrayLike<number>): Stability {
-  const byRoots = stabilityOfZpk(zpk);
-  const exact = stabilityOfCoefficients(a);
-  if (exact.verdict === byRoots.verdict)
-    return {
-      ...byRoots,
-      reason: `${byRoots.reason} (confirmed exactly from the coefficients)`,
-      decidedBy: 'coefficients',
-    };
-  const near = [...expandRoots(zpk.poles)]
-    .filter((p) => p.im >= 0)
-    .sort((p, q) => Math.abs(radius(q) - 1) - Math.abs(radius(p) - 1));
-  return {
-    verdict: exact.verdict,
-    maxPoleRadius: byRoots.maxPoleRadius,
-    responsible: near.length > 0 ? [near[near.length - 1]!] : [],
-    reason: `${exact.reason}; the computed poles alone looked ${TITLE[byRoots.verdict]}, but they cannot be resolved that finely from these coefficients`,
-    decidedBy: 'coefficients',
-    rootsSuggested: byRoots.verdict,
-  };
 }

@@ -7,6 +7,8 @@ import type { Root, TransferFunction, Zpk } from '../types.ts';
 import { diagnoseRoots, type PolynomialDiagnostics, type RootDiagnostic } from '../roots/diagnostics.ts';
 import { expandRoots } from './rootList.ts';
 
+export { uncertainRoots } from './uncertainRoots.ts';
+
 /** Diagnostics for a whole system. */
 export interface SystemDiagnostics {
   /** 'typed': roots computed from coefficients as typed; 'roots': roots as placed or designed (exact). */
@@ -59,12 +61,4 @@ export function exactDiagnostics(zpk: Zpk): SystemDiagnostics {
     zeros: exact(zpk.zeros),
     poles: exact(zpk.poles),
   };
-}
-
-/** The uncertain roots of a diagnosis, zeros then poles, with what they are. */
-export function uncertainRoots(d: SystemDiagnostics): { kind: 'zero' | 'pole'; root: RootDiagnostic }[] {
-  return [
-    ...d.zeros.filter((r) => r.uncertain).map((root) => ({ kind: 'zero' as const, root })),
-    ...d.poles.filter((r) => r.uncertain).map((root) => ({ kind: 'pole' as const, root })),
-  ];
 }

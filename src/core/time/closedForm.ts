@@ -3,18 +3,10 @@
  *   y[n] = Σ c·n^k·p^n  (n ≥ 0)  +  direct[n],
  * from the partial fractions of H(z)X(z). An input pole that lands on a pole of H (a step into a pole at
  * z = 1, a cosine at a pole's frequency on the unit circle) becomes a repeated pole, hence the n^k terms.
+ * From the stored roots here; from b/a (the root finder first) in fromCoefficients.ts.
  */
-import type { Complex, Root, TransferFunction, Zpk } from '../types.ts';
-import { polyMul } from '../poly.ts';
-import { findPoleGroups } from './poleSearch.ts';
-import {
-  expandOverPoles,
-  normalizeTf,
-  partialFractionsZpk,
-  type PartialFractions,
-  type RationalFactor,
-} from './partialFractions.ts';
-import { mergeRepeatedPoles } from './repeatedPoles.ts';
+import type { Complex, Root, Zpk } from '../types.ts';
+import { partialFractionsZpk, type PartialFractions, type RationalFactor } from './partialFractions.ts';
 
 export { describeTerm, formatClosedForm } from './closedFormText.ts';
 
@@ -39,18 +31,6 @@ export interface ClosedForm {
 export type TimeInput =
   { kind: 'impulse' } | { kind: 'step' } | { kind: 'sine'; omega: number; phase?: number };
 
-/** Closed form of the zero-state response of H(z) to an impulse, step or cosine input. */
-export function closedFormResponse(tf: TransferFunction, input: TimeInput): ClosedForm {
-  const { b, a } = normalizeTf(tf);
-  const x = inputTransform(input);
-  const poles = findPoleGroups(a);
-  const groups: Root[] = [...poles.groups, ...x.poles];
-  const aTotal = polyMul(a, x.a);
-  const bTotal = polyMul(b, x.b);
-  const pf = expandOverPoles(bTotal, aTotal, mergeRepeatedPoles(aTotal, groups), poles.converged);
-  return toClosedForm(pf);
-}
-
 /**
  * Closed form of the zero-state response for H given by zeros, poles and gain (b/a aligned as zpkToTf). The
  * stored poles are used directly, so this stays accurate at high order where coefficients lose the poles.
@@ -60,7 +40,7 @@ export function closedFormResponseZpk(zpk: Zpk, input: TimeInput): ClosedForm {
 }
 
 /** X(z) = B(z^-1)/A(z^-1) of an input with its poles listed (conjugates included). */
-function inputTransform(input: TimeInput): RationalFactor & { poles: Root[] } {
+export function inputTransform(input: TimeInput): RationalFactor & { poles: Root[] } {
   if (input.kind === 'impulse') return { b: [1], a: [1], poles: [] };
   if (input.kind === 'step') return { b: [1], a: [1, -1], poles: [{ re: 1, im: 0, multiplicity: 1 }] };
   // Fold omega into [0, pi]: cos((2π − ω)n − φ) = cos(ωn + φ).

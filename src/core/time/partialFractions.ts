@@ -10,8 +10,6 @@ import { polyMul } from '../poly.ts';
 import { zpkToTf } from '../system/transferFunction.ts';
 import { expandRoots, rootCount } from '../system/rootList.ts';
 import type { Poly } from '../poly.ts';
-import { findPoleGroups } from './poleSearch.ts';
-import { mergeRepeatedPoles } from './repeatedPoles.ts';
 import { taylorAt } from './taylor.ts';
 import { factorSeries, seriesDiv, seriesMulInPlace, type Series } from './series.ts';
 
@@ -35,13 +33,6 @@ export interface PartialFractions {
   direct: number[];
   /** Whether the pole search converged. */
   converged: boolean;
-}
-
-/** Partial-fraction expansion of H(z) in powers of z^-1 (scipy.signal.residuez convention). */
-export function partialFractions(tf: TransferFunction): PartialFractions {
-  const { b, a } = normalizeTf(tf);
-  const poles = findPoleGroups(a);
-  return expandOverPoles(b, a, mergeRepeatedPoles(a, poles.groups), poles.converged);
 }
 
 /**

@@ -7,7 +7,7 @@
  * of v2.ts, mask.ts, designer.ts and view.ts describe it; the bounds by the design door (core/model/check.ts),
  * which the full reader runs as well. test/share/schema/quick.test.ts holds the two readers to agreeing.
  */
-import { designerEntry, type DesignerSpec } from '../../core/design/light.ts';
+import { designerShape, type DesignerSpec } from '../../core/design/light.ts';
 import type { ImplementationSettings } from '../../core/fixed/index.ts';
 import { validateSettings } from '../../core/fixed/index.ts';
 import type { RequirementMask } from '../../core/mask/index.ts';
@@ -74,7 +74,7 @@ function typed(v: unknown): NonNullable<Design['typed']> {
 /** A designer as its registry entry describes it: kind, fs and its parameters in the entry's order. */
 function designer(v: unknown): DesignerSpec {
   const o = object(v);
-  const entry = typeof o.kind === 'string' ? designerEntry(o.kind) : undefined;
+  const entry = typeof o.kind === 'string' ? designerShape(o.kind) : undefined;
   if (!entry || entry.kind !== o.kind) return unsure();
   const out: Obj = { kind: entry.kind, fs: finite(o.fs) };
   for (const p of entry.parameters) {
@@ -128,6 +128,18 @@ function implementation(v: unknown): ImplementationSettings {
   return validateSettings(s).ok ? s : unsure();
 }
 
+/** A zoomed span [low, high] with `min` ≤ low < high, or null (the whole axis); as view.ts's schema. */
+const span =
+  (min: number) =>
+  (v: unknown): readonly [number, number] | null => {
+    if (v === null) return null;
+    const l = list(v);
+    if (l.length !== 2) unsure();
+    const a = finite(l[0]);
+    const b = finite(l[1]);
+    return a >= min && a < b ? [a, b] : unsure();
+  };
+
 function view(v: unknown): SharedView {
   const o = object(v);
   const out: Obj = {};
@@ -141,6 +153,8 @@ function view(v: unknown): SharedView {
   optional(o, 'timeSamples', (x) => whole(x, TIME_SAMPLES_MIN, TIME_SAMPLES_MAX), out);
   optional(o, 'timeStyle', (x) => oneOf(x, ['stems', 'line'] as const), out);
   optional(o, 'noiseSeed', (x) => whole(x, 0, 0xffff_ffff), out);
+  optional(o, 'frequencySpan', span(0), out);
+  optional(o, 'timeSpan', span(-1), out);
   return out as SharedView;
 }
 

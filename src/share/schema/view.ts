@@ -9,6 +9,15 @@ import {
 } from '../../core/model/limits.ts';
 import type { SharedView } from '../../core/model/view.ts';
 
+/** A shown band (low, high) with low < high, or null for the whole axis. */
+const span = (low: number, what: string) =>
+  z
+    .tuple([finite, finite])
+    .refine(([a, b]) => a >= low && a < b, `${what}: the first value must be ≥ ${low} and below the second`)
+    .readonly()
+    .nullable()
+    .exactOptional();
+
 /** Schema of the shared view settings (SharedView in src/core/model/view.ts). */
 export const sharedView = z.object({
   magnitudeScale: z.enum(['db', 'linear']).exactOptional(),
@@ -21,6 +30,8 @@ export const sharedView = z.object({
   timeSamples: z.number().int().min(TIME_SAMPLES_MIN).max(TIME_SAMPLES_MAX).exactOptional(),
   timeStyle: z.enum(['stems', 'line']).exactOptional(),
   noiseSeed: z.number().int().min(0).max(0xffff_ffff).exactOptional(),
+  frequencySpan: span(0, 'frequency band (Hz)'),
+  timeSpan: span(-1, 'sample span'),
 });
 
 type Parsed = z.output<typeof sharedView>;

@@ -2,8 +2,20 @@
  * The invisible, focusable area over a plot that moves its cross-hair: pointer (mouse, touch, pen) and keys.
  * It is a slider to assistive technology, valued in the plot's x unit, with a focus ring drawn around it.
  */
-import type { KeyboardEvent } from 'react';
+import type { KeyboardEvent, PointerEvent } from 'react';
 import { shortcutAction } from '../shortcuts.ts';
+
+/** The zoom gestures of the plot (useAxisZoom), run alongside the cross-hair's own. */
+export interface CursorZoom {
+  handlers: {
+    onPointerDown: (e: PointerEvent<SVGElement>) => void;
+    onPointerMove: (e: PointerEvent<SVGElement>) => void;
+    onPointerUp: (e: PointerEvent<SVGElement>) => void;
+    onPointerCancel: (e: PointerEvent<SVGElement>) => void;
+    onDoubleClick: () => void;
+  };
+  onKey: (e: KeyboardEvent<SVGElement>) => boolean;
+}
 
 export interface CursorAreaProps {
   rect: { left: number; right: number; top: number; bottom: number };
@@ -20,6 +32,8 @@ export interface CursorAreaProps {
   /** Where the cross-hair goes when the area gets focus with no cross-hair shown. */
   start: number;
   onChange: (value: number | null) => void;
+  /** Zoom and pan of the plot's axis on the same area. */
+  zoom?: CursorZoom;
 }
 
 export function CursorArea(p: CursorAreaProps) {
@@ -30,6 +44,7 @@ export function CursorArea(p: CursorAreaProps) {
   };
   const onKeyDown = (e: KeyboardEvent<SVGRectElement>) => {
     if (shortcutAction('cursor', e) === 'cursor-off') return onChange(null);
+    if (p.zoom?.onKey(e)) return;
     const to = p.keyTarget(e.key, e.shiftKey, p.value);
     if (to === undefined) return;
     e.preventDefault();
@@ -53,11 +68,18 @@ export function CursorArea(p: CursorAreaProps) {
         aria-valuemax={p.max}
         aria-valuenow={p.value ?? undefined}
         aria-valuetext={p.valueText}
-        onPointerMove={(e) => onChange(fromPointer(e))}
+        onPointerMove={(e) => {
+          onChange(fromPointer(e));
+          p.zoom?.handlers.onPointerMove(e);
+        }}
         onPointerDown={(e) => {
           e.currentTarget.focus();
           onChange(fromPointer(e));
+          p.zoom?.handlers.onPointerDown(e);
         }}
+        onPointerUp={p.zoom?.handlers.onPointerUp}
+        onPointerCancel={p.zoom?.handlers.onPointerCancel}
+        onDoubleClick={p.zoom?.handlers.onDoubleClick}
         onPointerLeave={(e) => {
           // A focused plot keeps its cross-hair for the keys; an unfocused one lets it go.
           if (document.activeElement !== e.currentTarget) onChange(null);

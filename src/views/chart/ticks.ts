@@ -63,6 +63,14 @@ export function formatHzTick(hz: number): string {
   return formatNumber(hz, 3);
 }
 
+/**
+ * A frequency tick label at a linear step: compact (50, 2.5k) while the step is 100 Hz or more, and with the
+ * decimals the step needs on a zoomed axis (49.995, 50.000, 50.005), so neighbouring labels never read alike.
+ */
+export function formatHzStepTick(hz: number, step: number): string {
+  return step >= 100 ? formatHzTick(hz) : formatTickValue(hz, step);
+}
+
 /** Steps that read well for angles in degrees (multiples of 15° up to whole turns and beyond). */
 export const DEGREE_STEPS = [15, 30, 45, 90, 180, 360, 720, 1440, 2880, 5760, 11520] as const;
 

@@ -2,13 +2,15 @@
  * The frequency plots (magnitude on top, phase and group delay below) on one shared frequency axis, with
  * the cross-hair (pointer or arrow keys) and the selected root's marker.
  */
-import { useEffect, useId, useMemo, useState } from 'react';
+import { useEffect, useId, useMemo, useRef, useState } from 'react';
 import { selectDisplayResponse } from '../../store/derived.ts';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
+import { clampBandHz, shownBandHz } from '../../store/zoom.ts';
+import { useAxisZoom } from '../chart/useAxisZoom.ts';
 import { Axis } from '../chart/Axis.tsx';
 import { CursorArea } from '../chart/CursorArea.tsx';
 import { fromPixel, toPixel, toPixels, type AxisMap } from '../chart/pixels.ts';
-import { formatHzTick, linearTicks, logTicks } from '../chart/ticks.ts';
+import { formatHzStepTick, linearTicks, logTicks } from '../chart/ticks.ts';
 import { useSettledRange } from '../chart/useSettledRange.ts';
 import { formatHz } from '../shared/format.ts';
 import { Crosshair } from './Crosshair.tsx';
@@ -19,7 +21,8 @@ import type { FrequencyReading } from '../../core/response/readAt.ts';
 import { RootMarker } from './RootMarker.tsx';
 import { PLOT_OVERLAYS } from './overlays.ts';
 import { MaskChip } from './mask/MaskChip.tsx';
-import { MaskHandles } from './mask/MaskHandles.tsx';
+import { lazyPart } from '../shared/lazyPart.tsx';
+import type { MaskHandlesProps } from './mask/MaskHandles.tsx';
 import {
   DEG_PER_RAD,
   delaySeries,
@@ -31,6 +34,12 @@ import {
 import { TracePlot, yMapOf } from './TracePlot.tsx';
 import { omegaGridToHz } from '../../core/units.ts';
 
+/** The mask's drag handles are invisible grab strips: they load after the first paint (prefetch.ts). */
+export const maskHandles = lazyPart<MaskHandlesProps>(() =>
+  import('./mask/MaskHandles.tsx').then((m) => m.MaskHandles),
+);
+const MaskHandles = maskHandles.Part;
+
 export interface FrequencyChartProps {
   width: number;
   height: number;
@@ -39,6 +48,8 @@ export interface FrequencyChartProps {
   marker: { hz: number; kind: 'zero' | 'pole' } | null;
 }
 
+/** Narrowest log-axis band (high/low) labelled by decades; a narrower one gets even steps. */
+const LOG_TICKS_MIN_RATIO = 4;
 /** Horizontal pixels per frequency tick label. */
 const PX_PER_X_TICK = 64;
 const COLOURS: Record<PlotKey, string> = {
@@ -65,6 +76,8 @@ export function FrequencyChart({ width, height, reading, onCursor, marker }: Fre
   const delayUnit = useWorkbench((s) => s.view.delayUnit);
   const axis = useWorkbench((s) => s.view.frequencyAxis);
   const hold = useWorkbench((s) => s.view.holdScale);
+  const span = useWorkbench((s) => s.view.frequencySpan);
+  const svg = useRef<SVGSVGElement>(null);
   const [second, setSecond] = useState<'phase' | 'delay'>('phase');
   const overlayClip = `pw-overlay-clip-${useId().replace(/:/g, '')}`;
 
@@ -77,14 +90,18 @@ export function FrequencyChart({ width, height, reading, onCursor, marker }: Fre
     if (st.view.responseColumns !== columns) st.setView({ responseColumns: columns });
   }, [columns]);
   const hz = useMemo(() => omegaGridToHz(response.omega, fs), [response.omega, fs]);
-  const [d0, d1] = frequencyDomain(hz, fs, axis);
+  const band = useMemo(() => shownBandHz(span, fs, axis), [span, fs, axis]);
+  const [d0, d1] = frequencyDomain(hz, fs, axis, band);
   const xMap = useMemo<AxisMap>(
     () => ({ kind: axis, d0, d1, p0: area.left, p1: area.right }),
     [axis, d0, d1, area.left, area.right],
   );
   const xTicks = useMemo(() => {
     const count = Math.max(2, (xMap.p1 - xMap.p0) / PX_PER_X_TICK);
-    return axis === 'log' ? logTicks(d0, d1, count) : linearTicks(d0, d1, count, (v) => formatHzTick(v));
+    // A log axis zoomed to less than a factor of LOG_TICKS_MIN_RATIO has too few 1-2-5 values: even steps read.
+    return axis === 'log' && d1 / d0 >= LOG_TICKS_MIN_RATIO
+      ? logTicks(d0, d1, count)
+      : linearTicks(d0, d1, count, formatHzStepTick);
   }, [axis, d0, d1, xMap]);
   const xPx = useMemo(() => toPixels(xMap, hz), [xMap, hz]);
 
@@ -130,18 +147,33 @@ export function FrequencyChart({ width, height, reading, onCursor, marker }: Fre
       }))
     : [];
 
+  const zoom = useAxisZoom(
+    svg,
+    {
+      span: [d0, d1],
+      kind: axis,
+      valueAt: (px) => fromPixel(xMap, px),
+      set: (sp) =>
+        workbenchStore.getState().setView({ frequencySpan: sp ? clampBandHz(sp, fs, axis) : null }),
+      focus: reading?.hz ?? null,
+    },
+    { drag: 'select', scope: 'cursor' },
+  );
+
   const magnitudePlot = layout.plots.find((p) => p.key === 'magnitude');
-  if (width < 80 || height < 80) return <svg width={width} height={height} />;
+  if (width < 80 || height < 80) return <svg ref={svg} width={width} height={height} />;
   const bottom = layout.axisY;
   const markerX = marker ? toPixel(xMap, marker.hz) : NaN;
   return (
     <>
       <svg
+        ref={svg}
         className="pw-chart"
         width={width}
         height={height}
         role="group"
         aria-label="Magnitude, phase and group delay"
+        data-band={band ? `${band[0]} ${band[1]}` : 'all'}
       >
         {layout.plots.map(({ key, rect }) => (
           <TracePlot
@@ -187,6 +219,16 @@ export function FrequencyChart({ width, height, reading, onCursor, marker }: Fre
           <RootMarker x={markerX} hz={marker.hz} kind={marker.kind} rects={rects} />
         ) : null}
         {reading ? <Crosshair x={toPixel(xMap, reading.hz)} rects={rects} points={points} /> : null}
+        {zoom.band ? (
+          <rect
+            className="pw-zoom-band"
+            data-testid="zoom-band"
+            x={zoom.band[0]}
+            y={area.top}
+            width={zoom.band[1] - zoom.band[0]}
+            height={bottom - area.top}
+          />
+        ) : null}
         <CursorArea
           rect={{ left: area.left, right: area.right, top: area.top, bottom }}
           label="Cross-hair frequency"
@@ -202,6 +244,7 @@ export function FrequencyChart({ width, height, reading, onCursor, marker }: Fre
           }}
           start={startHz([d0, d1], axis)}
           onChange={onCursor}
+          zoom={zoom}
         />
         {magnitudePlot ? (
           <MaskHandles

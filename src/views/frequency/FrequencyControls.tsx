@@ -2,12 +2,19 @@
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import type { ViewSettings } from '../../store/view.ts';
 import { Segmented } from '../chart/Segmented.tsx';
+import { LazyZoomControls as ZoomControls } from '../chart/LazyZoomControls.tsx';
+import { clampBandHz, shownBandHz, wholeBandHz } from '../../store/zoom.ts';
+import { formatHzSpan } from './cursor.ts';
 
 const setView = (patch: Partial<ViewSettings>) => workbenchStore.getState().setView(patch);
 
 export function FrequencyControls() {
   const frequencyAxis = useWorkbench((s) => s.view.frequencyAxis);
   const holdScale = useWorkbench((s) => s.view.holdScale);
+  const span = useWorkbench((s) => s.view.frequencySpan);
+  const fs = useWorkbench((s) => s.design.sampleRate);
+  const band = shownBandHz(span, fs, frequencyAxis);
+  const shown = band ?? wholeBandHz(fs, frequencyAxis);
   return (
     <div className="pw-view-controls">
       <Segmented
@@ -24,11 +31,19 @@ export function FrequencyControls() {
         type="button"
         className="pw-toggle"
         aria-pressed={holdScale}
-        title="Keep the current axis ranges still while you drag"
+        title="Keep the axis ranges still while you drag or zoom"
         onClick={() => setView({ holdScale: !holdScale })}
       >
         Hold scale
       </button>
+      <ZoomControls
+        what="frequency"
+        span={shown}
+        zoomed={band !== null}
+        kind={frequencyAxis}
+        spanText={formatHzSpan(shown)}
+        set={(sp) => setView({ frequencySpan: sp ? clampBandHz(sp, fs, frequencyAxis) : null })}
+      />
     </div>
   );
 }

@@ -1,9 +1,12 @@
 /** The cross-hair read-out: exact values at the cross-hair frequency, in every unit the plots offer. */
 import { useCompare } from '../../store/compare.ts';
-import { ReferenceReading } from '../compare/ReferenceReading.tsx';
+import { LazyReferenceReading as ReferenceReading } from '../compare/LazyReferenceReading.tsx';
 import { formatDb, formatHz, formatNumber } from '../shared/format.ts';
 import type { FrequencyReading } from '../../core/response/readAt.ts';
 import { DEG_PER_RAD } from './series.ts';
+import { useWorkbench } from '../../store/useWorkbench.ts';
+import { shownBandHz } from '../../store/zoom.ts';
+import { hzDigits } from './cursor.ts';
 
 export interface FrequencyReadoutProps {
   reading: FrequencyReading | null;
@@ -25,10 +28,14 @@ function Item({ label, id, children }: { label: string; id: string; children: st
 export function FrequencyReadout({ reading, phaseMode }: FrequencyReadoutProps) {
   // A pinned reference adds its own line; the height is kept whether or not the cross-hair is on.
   const withRef = useCompare((s) => s.reference !== null) ? ' pw-readout-ref' : '';
+  // On a zoomed band the frequency carries the digits that tell its points apart.
+  const digits = useWorkbench((s) =>
+    hzDigits(shownBandHz(s.view.frequencySpan, s.design.sampleRate, s.view.frequencyAxis)),
+  );
   if (!reading) {
     return (
       <div className={`pw-readout pw-readout-hint${withRef}`} aria-live="off">
-        Point at the plots (or focus them and use the arrow keys) to read exact values.
+        Point at the plots for exact values (or focus them: arrow keys); wheel or drag across to zoom.
       </div>
     );
   }
@@ -36,7 +43,7 @@ export function FrequencyReadout({ reading, phaseMode }: FrequencyReadoutProps) 
   return (
     <div className={`pw-readout${withRef}`} aria-label="Values at the cross-hair">
       <Item label="f" id="hz">
-        {formatHz(reading.hz, 5)}
+        {formatHz(reading.hz, digits)}
       </Item>
       <span className="pw-readout-item">
         <span className="pw-readout-label">|H|</span>

@@ -55,3 +55,24 @@ export function startHz(domain: Range, axis: 'linear' | 'log'): number {
   const [lo, hi] = domain;
   return axis === 'log' ? Math.sqrt(lo * hi) : (lo + hi) / 2;
 }
+
+/** Significant digits a frequency read-out needs to tell points of the band apart (5 on the whole axis). */
+export function hzDigits(band: Range | null): number {
+  if (!band) return 5;
+  const [lo, hi] = band;
+  return Math.min(
+    12,
+    Math.max(5, Math.ceil(Math.log10(Math.max(Math.abs(lo), Math.abs(hi)) / (hi - lo))) + 4),
+  );
+}
+
+/** A band in words with the digits that tell its ends apart: "49.99–50.01 Hz", "1.2–3.4 kHz". */
+export function formatHzSpan(band: Range): string {
+  const [lo, hi] = band;
+  const kilo = hi >= 1000;
+  const k = kilo ? 1000 : 1;
+  const step = (hi - lo) / k;
+  const decimals = Math.min(9, Math.max(0, -Math.floor(Math.log10(step)) + 1));
+  const f = (v: number) => (v / k).toFixed(decimals);
+  return `${f(lo)}–${f(hi)} ${kilo ? 'kHz' : 'Hz'}`;
+}

@@ -125,8 +125,17 @@ export function delaySeries(r: FrequencyResponse, unit: ViewSettings['delayUnit'
   };
 }
 
-/** The frequency axis domain in Hz: [0, fs/2] on a linear axis; from the lowest positive grid point on a log axis. */
-export function frequencyDomain(hz: Float64Array, fs: number, axis: ViewSettings['frequencyAxis']): Range {
+/**
+ * The frequency axis domain in Hz: the zoomed band when there is one; otherwise [0, fs/2] on a linear axis,
+ * from the lowest positive grid point on a log axis.
+ */
+export function frequencyDomain(
+  hz: Float64Array,
+  fs: number,
+  axis: ViewSettings['frequencyAxis'],
+  band: Range | null = null,
+): Range {
+  if (band) return band;
   const top = fs / 2;
   if (axis === 'linear') return [0, top];
   for (let i = 0; i < hz.length; i++) if (hz[i]! > 0) return [hz[i]!, top];

@@ -41,7 +41,7 @@ export function ZPlanePanel() {
   const poles = useWorkbench((s) => s.design.poles);
   const fs = useWorkbench((s) => s.design.sampleRate);
   const selection = useWorkbench((s) => s.selection);
-  const unstable = useWorkbench((s) => selectStability(s).verdict === 'unstable');
+  const unstable = useWorkbench((s) => selectStability(s)?.verdict === 'unstable');
 
   const scale = useMemo(() => planeScale({ span, centre }, width, height), [span, centre, width, height]);
   scaleRef.current = scale;

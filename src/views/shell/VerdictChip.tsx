@@ -5,10 +5,11 @@
 import { selectStability } from '../../store/derived.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 
-const WORD = { stable: 'Stable', marginal: 'Marginal', unstable: 'Unstable' } as const;
+const WORD = { stable: 'Stable', marginal: 'Marginal', unstable: 'Unstable', checking: 'Checking…' } as const;
 
 export function VerdictChip() {
-  const verdict = useWorkbench((s) => selectStability(s).verdict);
+  // 'checking' until the exact test has arrived (store/exactChecks.ts)
+  const verdict = useWorkbench((s) => selectStability(s)?.verdict ?? 'checking');
   return (
     <span className={`pw-verdict-chip pw-stability-${verdict}`} aria-hidden="true">
       {WORD[verdict]}

@@ -1,10 +1,12 @@
 /**
- * The stability verdict as a banner no one can miss: green stable, amber marginal, red unstable. With a
- * fixed-point target set, a second banner as prominent gives the verdict of the quantized coefficients, and
- * each says which filter it judges.
+ * The stability verdict as a banner no one can miss: green stable, amber marginal, red unstable; grey while
+ * the exact test has not arrived (it loads right after the first paint, store/exactChecks.ts), since a
+ * verdict is given only once it has run. With a fixed-point target set, a second banner as prominent gives
+ * the verdict of the quantized coefficients, and each says which filter it judges.
  */
 import type { Stability } from '../../core/stability/index.ts';
 import { selectStability } from '../../store/derived.ts';
+import { loadExactChecks } from '../../store/exactChecks.ts';
 import { selectHasImplementation } from '../../store/implementationDerived.ts';
 import { quantizedStability } from '../verdicts/quantizedViews.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
@@ -18,6 +20,34 @@ const ICON = { stable: '✓', marginal: '!', unstable: '✕' } as const;
 function sentence(reason: string): string {
   const t = reason.charAt(0).toUpperCase() + reason.slice(1);
   return t.endsWith('.') ? t : `${t}.`;
+}
+
+/** The banner before there is a verdict: being checked, or the exact test could not be fetched. */
+function Unjudged() {
+  const status = useWorkbench((st) => st.exactChecks);
+  const failed = status.state === 'failed';
+  return (
+    <div className="pw-stability pw-stability-checking" data-testid="stability">
+      <span className="pw-stability-icon" aria-hidden="true">
+        {failed ? '?' : '…'}
+      </span>
+      <div>
+        <strong className="pw-stability-title" role="status" aria-live="polite" aria-atomic="true">
+          {failed ? 'Stability not checked' : 'Checking stability…'}
+        </strong>
+        {failed ? (
+          <p className="pw-stability-reason" data-testid="stability-reason" title={status.message}>
+            The exact stability test could not be fetched from the server, so there is no verdict yet.{' '}
+            <button type="button" onClick={() => void loadExactChecks().catch(() => undefined)}>
+              Try again
+            </button>
+          </p>
+        ) : (
+          ' · the exact test is loading'
+        )}
+      </div>
+    </div>
+  );
 }
 
 /** One stability banner (the quantized one is views/verdicts/QuantizedVerdicts.tsx). */
@@ -69,6 +99,7 @@ export function StabilityBanner() {
   const s = useWorkbench(selectStability);
   const hasPoles = useWorkbench((st) => st.design.poles.length > 0);
   const hasTarget = useWorkbench(selectHasImplementation);
+  if (!s) return <Unjudged />;
   return (
     <>
       <Banner s={s} hasPoles={hasPoles} who={hasTarget ? 'Ideal filter' : null} testId="stability" />

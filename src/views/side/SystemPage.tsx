@@ -5,7 +5,11 @@ import { keepEntryDraft, readEntryDraft } from './entry/entryDraft.ts';
 import { GainRuleControl } from './GainRuleControl.tsx';
 import { RootTable } from './RootTable.tsx';
 import { SystemForms } from './SystemForms.tsx';
-import { TypedWarning } from './TypedWarning.tsx';
+import { lazyPart } from '../shared/lazyPart.tsx';
+
+/** The warning about ill-conditioned typed coefficients shows only for typed designs: it loads after the first paint (prefetch.ts). */
+export const typedWarning = lazyPart<object>(() => import('./TypedWarning.tsx').then((m) => m.TypedWarning));
+const TypedWarning = typedWarning.Part;
 
 export function SystemPage() {
   const [text, setTextState] = useState(readEntryDraft);

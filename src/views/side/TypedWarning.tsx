@@ -5,7 +5,7 @@
  */
 import { selectTypedDiagnostics } from '../../store/derived.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
-import { uncertainRoots } from '../../core/system/diagnostics.ts';
+import { uncertainRoots } from '../../core/system/uncertainRoots.ts';
 import { formatNumber } from '../shared/format.ts';
 import { positionText } from './rootRows.ts';
 

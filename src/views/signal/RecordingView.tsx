@@ -8,7 +8,7 @@ import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import { useElementSize } from '../chart/useElementSize.ts';
 import { SignalChart } from './SignalChart.tsx';
 import { RecordingStatus } from './RecordingStatus.tsx';
-import { ZOOM_STEP, zoomAbout } from './useZoomGestures.ts';
+import { ZOOM_STEP, zoomSpan } from '../chart/zoom.ts';
 import { FixedRunSummary, FixedRunSwitch } from './FixedRunBar.tsx';
 import { DifferenceStrip } from './DifferenceStrip.tsx';
 import { useCurrentFixedRun } from './fixedRecording.ts';
@@ -39,14 +39,14 @@ export function RecordingView({ signal }: { signal: LoadedSignal }) {
           <button
             type="button"
             className="pw-small-button"
-            onClick={() => set(zoomAbout(t0, t1, mid, ZOOM_STEP))}
+            onClick={() => set(zoomSpan([t0, t1], mid, ZOOM_STEP))}
           >
             Zoom in
           </button>
           <button
             type="button"
             className="pw-small-button"
-            onClick={() => set(zoomAbout(t0, t1, mid, 1 / ZOOM_STEP))}
+            onClick={() => set(zoomSpan([t0, t1], mid, 1 / ZOOM_STEP))}
             disabled={zoom === null}
           >
             Zoom out

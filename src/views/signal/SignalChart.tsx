@@ -23,9 +23,9 @@ import {
   visibleSamples,
   type Frame,
 } from './envelope.ts';
+import { useAxisZoom } from '../chart/useAxisZoom.ts';
 import { useCurrentFixedRun } from './fixedRecording.ts';
 import { setRecordingViewport, useRecordingRuns } from './recordingWorker.ts';
-import { useZoomGestures } from './useZoomGestures.ts';
 
 const PX_PER_X_TICK = 80;
 
@@ -152,14 +152,17 @@ export function SignalChart({
     [range, rect],
   );
 
-  const set = (s: readonly [number, number] | null) => workbenchStore.getState().setSignalZoom(s);
-  const gestures = useZoomGestures(svg, {
-    t0,
-    t1,
-    timeAt: (px) => t0 + ((px - rect.left) / (rect.right - rect.left)) * (t1 - t0),
-    pxPerSecond: (rect.right - rect.left) / (t1 - t0),
-    set,
-  });
+  const set = (span: readonly [number, number] | null) => workbenchStore.getState().setSignalZoom(span);
+  const gestures = useAxisZoom(
+    svg,
+    {
+      span: [t0, t1],
+      kind: 'linear',
+      valueAt: (px) => t0 + ((px - rect.left) / (rect.right - rect.left)) * (t1 - t0),
+      set,
+    },
+    { drag: 'pan', scope: 'recording' },
+  );
 
   if (!visible) return <svg ref={svg} width={width} height={height} />;
   const zeroY = frame.y0;
@@ -228,7 +231,8 @@ export function SignalChart({
         aria-valuemax={duration}
         aria-valuenow={(t0 + t1) / 2}
         aria-valuetext={spanText}
-        {...gestures}
+        {...gestures.handlers}
+        onKeyDown={gestures.onKey}
       />
     </svg>
   );

@@ -2,9 +2,11 @@
  * The time plot: input (faint) and output (bold) against the sample index, seconds on a second axis, the
  * slowest pole's decay envelope dashed, and a cross-hair that reads one sample (pointer or arrow keys).
  */
-import { useId, useMemo } from 'react';
+import { useId, useMemo, useRef } from 'react';
 import { selectTimeInput, selectTimeOutput } from '../../store/derived.ts';
-import { useWorkbench } from '../../store/useWorkbench.ts';
+import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
+import { clampSamples, shownSamples } from '../../store/zoom.ts';
+import { useAxisZoom } from '../chart/useAxisZoom.ts';
 import { Axis } from '../chart/Axis.tsx';
 import { CursorArea } from '../chart/CursorArea.tsx';
 import { PlotFrame } from '../chart/PlotFrame.tsx';
@@ -32,10 +34,10 @@ export interface TimeChartProps {
 const PX_PER_X_TICK = 70;
 const PX_PER_Y_TICK = 32;
 
-/** y range of input and output together from sample `from` on, always including 0 (the baseline). */
-export function valueRange(x: Float64Array, y: Float64Array, from: number): Range {
-  const a = finiteExtent(x.subarray(from)) ?? [0, 0];
-  const b = finiteExtent(y.subarray(from)) ?? [0, 0];
+/** y range of input and output together over samples from … to−1, always including 0 (the baseline). */
+export function valueRange(x: Float64Array, y: Float64Array, from: number, to = y.length): Range {
+  const a = finiteExtent(x.subarray(from, to)) ?? [0, 0];
+  const b = finiteExtent(y.subarray(from, to)) ?? [0, 0];
   return [Math.min(a[0], b[0], 0), Math.max(a[1], b[1], 0)];
 }
 
@@ -49,34 +51,58 @@ export function TimeChart({ width, height, cursor, onCursor, envelope, fitTail }
   const fs = useWorkbench((s) => s.design.sampleRate);
   const style = useWorkbench((s) => s.view.timeStyle);
   const kind = useWorkbench((s) => s.view.timeInput);
+  const spanSetting = useWorkbench((s) => s.view.timeSpan);
   const clipId = `pw-clip-${useId().replace(/:/g, '')}`;
+  const svg = useRef<SVGSVGElement>(null);
   const n = y.length;
+  const zoomed = useMemo(() => shownSamples(spanSetting, n), [spanSetting, n]);
+  const [s0, s1] = zoomed ?? [-0.5, n - 0.5];
 
   const rect = useMemo(() => timeLayout(width, height), [width, height]);
   const xMap = useMemo<AxisMap>(
-    () => ({ kind: 'linear', d0: -0.5, d1: n - 0.5, p0: rect.left, p1: rect.right }),
-    [n, rect.left, rect.right],
+    () => ({ kind: 'linear', d0: s0, d1: s1, p0: rect.left, p1: rect.right }),
+    [s0, s1, rect.left, rect.right],
   );
   const xTicks = useMemo(
     () =>
-      linearTicks(0, n - 1, Math.max(2, (rect.right - rect.left) / PX_PER_X_TICK)).filter((t) =>
-        Number.isInteger(t.value),
-      ),
-    [n, rect.left, rect.right],
+      linearTicks(
+        Math.max(0, s0),
+        Math.min(n - 1, s1),
+        Math.max(2, (rect.right - rect.left) / PX_PER_X_TICK),
+      ).filter((t) => Number.isInteger(t.value)),
+    [n, s0, s1, rect.left, rect.right],
   );
   const seconds = useMemo(() => {
-    const { unit, factor } = timeUnit(n / fs);
+    const { unit, factor } = timeUnit((s1 - s0) / fs);
     const k = factor / fs;
-    const map: AxisMap = { kind: 'linear', d0: -0.5 * k, d1: (n - 0.5) * k, p0: rect.left, p1: rect.right };
-    const ticks = linearTicks(0, (n - 1) * k, Math.max(2, (rect.right - rect.left) / PX_PER_X_TICK));
+    const map: AxisMap = { kind: 'linear', d0: s0 * k, d1: s1 * k, p0: rect.left, p1: rect.right };
+    const ticks = linearTicks(
+      Math.max(0, s0) * k,
+      Math.min(n - 1, s1) * k,
+      Math.max(2, (rect.right - rect.left) / PX_PER_X_TICK),
+    );
     return { unit, map, ticks };
-  }, [n, fs, rect.left, rect.right]);
+  }, [n, fs, s0, s1, rect.left, rect.right]);
+  const zoom = useAxisZoom(
+    svg,
+    {
+      span: [s0, s1],
+      kind: 'linear',
+      valueAt: (px) => fromPixel(xMap, px),
+      set: (sp) => workbenchStore.getState().setView({ timeSpan: sp ? clampSamples(sp, n) : null }),
+      focus: cursor,
+    },
+    { drag: 'select', scope: 'cursor' },
+  );
 
   const data = useMemo(() => {
-    const tail = fitTail ? valueRange(x, y, Math.min(1, n - 1)) : null;
+    // Zoomed in, the axis follows the samples shown.
+    const first = Math.max(0, Math.ceil(s0));
+    const end = Math.min(n, Math.floor(s1) + 1);
+    const tail = fitTail ? valueRange(x, y, Math.min(Math.max(1, first), end - 1), end) : null;
     // Nothing after the first sample (e.g. a pure gain): fit everything rather than an empty axis.
-    return tail && (tail[0] !== 0 || tail[1] !== 0) ? tail : valueRange(x, y, 0);
-  }, [x, y, fitTail, n]);
+    return tail && (tail[0] !== 0 || tail[1] !== 0) ? tail : valueRange(x, y, first, end);
+  }, [x, y, fitTail, n, s0, s1]);
   const wanted = useMemo(() => {
     const size = Math.max(Math.abs(data[0]), Math.abs(data[1]));
     return niceRange(data[0], data[1], Math.max(MIN_SPAN_ABSOLUTE, MIN_SPAN_RELATIVE * size), 5);
@@ -120,16 +146,18 @@ export function TimeChart({ width, height, cursor, onCursor, envelope, fitTail }
     return a.line + b.line;
   }, [envelope, n, px, yMap, rect]);
 
-  if (width < 80 || height < 60 || n === 0) return <svg width={width} height={height} />;
+  if (width < 80 || height < 60 || n === 0) return <svg ref={svg} width={width} height={height} />;
   const cx = cursor === null ? NaN : toPixel(xMap, cursor);
   const zeroY = toPixel(yMap, 0);
   return (
     <svg
+      ref={svg}
       className="pw-chart"
       width={width}
       height={height}
       role="group"
       aria-label="Input and output against time"
+      data-span={zoomed ? `${s0} ${s1}` : 'all'}
     >
       <PlotFrame
         rect={rect}
@@ -152,7 +180,7 @@ export function TimeChart({ width, height, cursor, onCursor, envelope, fitTail }
           <path className="pw-time-envelope" data-testid="time-envelope" d={envelopePaths} />
         ) : null}
       </g>
-      <OffScaleNote x={toPixel(xMap, 0)} value={y[0]} range={range} rect={rect} />
+      {s0 <= 0 ? <OffScaleNote x={toPixel(xMap, 0)} value={y[0]} range={range} rect={rect} /> : null}
       <Axis side="left" map={yMap} ticks={yTicks} at={rect.left} title="Amplitude" />
       <Axis side="bottom" map={xMap} ticks={xTicks} at={rect.bottom} title="Sample n" />
       <Axis
@@ -165,6 +193,16 @@ export function TimeChart({ width, height, cursor, onCursor, envelope, fitTail }
       {cursor !== null ? (
         <SampleCrosshair x={cx} yMap={yMap} input={x[cursor] ?? 0} output={y[cursor] ?? 0} rect={rect} />
       ) : null}
+      {zoom.band ? (
+        <rect
+          className="pw-zoom-band"
+          data-testid="zoom-band"
+          x={zoom.band[0]}
+          y={rect.top}
+          width={zoom.band[1] - zoom.band[0]}
+          height={rect.bottom - rect.top}
+        />
+      ) : null}
       <CursorArea
         rect={rect}
         label="Sample under the cross-hair"
@@ -172,10 +210,17 @@ export function TimeChart({ width, height, cursor, onCursor, envelope, fitTail }
         max={n - 1}
         value={cursor}
         valueText={cursor === null ? 'off' : `sample ${cursor}`}
-        valueAt={(px) => Math.min(n - 1, Math.max(0, Math.round(fromPixel(xMap, px))))}
+        valueAt={(px) =>
+          Math.min(
+            Math.floor(s1 + 0.5),
+            n - 1,
+            Math.max(Math.ceil(s0 - 0.5), 0, Math.round(fromPixel(xMap, px))),
+          )
+        }
         keyTarget={(key, shift, from) => sampleAfterKey(key, shift, from, n)}
-        start={0}
+        start={Math.max(0, Math.ceil(s0))}
         onChange={onCursor}
+        zoom={zoom}
       />
     </svg>
   );

@@ -1,7 +1,9 @@
 /** The time view: input and output of the current system, the slowest pole's envelope and the closed form. */
 import { useRef, useState } from 'react';
-import { useWorkbench } from '../../store/useWorkbench.ts';
+import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import { selectTimeStructure } from '../../store/derived.ts';
+import { clampSamples, shownSamples } from '../../store/zoom.ts';
+import { LazyZoomControls as ZoomControls } from '../chart/LazyZoomControls.tsx';
 import { Segmented } from '../chart/Segmented.tsx';
 import { useElementSize } from '../chart/useElementSize.ts';
 import { PictureMenu } from '../pictures/PictureMenu.tsx';
@@ -33,6 +35,9 @@ function TestInputPanel() {
   // The first sample of an impulse response is often far larger than the rest: fit the rest by default.
   const [fitTail, setFitTail] = useState(true);
   const samples = useWorkbench((s) => s.view.timeSamples);
+  const timeSpan = useWorkbench((s) => s.view.timeSpan);
+  const zoomed = shownSamples(timeSpan, samples);
+  const span = zoomed ?? ([-0.5, samples - 0.5] as const);
   const envelope = useEnvelope();
   const structure = useWorkbench(selectTimeStructure);
   const shown = cursor !== null && cursor < samples ? cursor : null;
@@ -41,11 +46,6 @@ function TestInputPanel() {
       <header className="pw-view-head">
         <h2>Time</h2>
         <RegionSwitch />
-        <TimeControls />
-        <PictureMenu view="time" />
-      </header>
-      <div className="pw-time-info">
-        <TimeReadout cursor={shown} envelope={envelope} />
         <span
           className="pw-hint pw-time-structure"
           data-testid="time-structure"
@@ -57,6 +57,18 @@ function TestInputPanel() {
         >
           {structure === 'typed' ? 'runs b, a as typed' : 'runs sections from the roots'}
         </span>
+        <TimeControls />
+        <PictureMenu view="time" />
+      </header>
+      <div className="pw-time-info">
+        <TimeReadout cursor={shown} envelope={envelope} />
+        <ZoomControls
+          what="samples"
+          span={span}
+          zoomed={zoomed !== null}
+          spanText={`n ${Math.max(0, Math.ceil(span[0]))}–${Math.min(samples - 1, Math.floor(span[1]))}`}
+          set={(sp) => workbenchStore.getState().setView({ timeSpan: sp ? clampSamples(sp, samples) : null })}
+        />
         <Segmented
           mini
           label="Amplitude axis fits"

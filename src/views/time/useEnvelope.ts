@@ -23,10 +23,11 @@ export function useEnvelope(): EnvelopeResult {
   const input = useWorkbench((s) => s.view.timeInput);
   const readouts = useWorkbench(selectReadouts);
   return useMemo((): EnvelopeResult => {
-    const r = stability.maxPoleRadius;
     if (input === 'sine' || input === 'noise') {
       return { shown: false, note: 'Decay envelope: shown for impulse and step inputs.' };
     }
+    if (!stability) return { shown: false, note: 'Decay envelope: after the stability check.' };
+    const r = stability.maxPoleRadius;
     if (stability.verdict !== 'stable') {
       return { shown: false, note: `No decay envelope: the system is ${stability.verdict}.` };
     }

@@ -5,7 +5,7 @@ import { join } from 'node:path';
 import { runCli } from '../../helpers/cli.ts';
 import { compileFilter } from '../../helpers/cProgram.ts';
 import { buildImplementation, DEFAULT_IMPLEMENTATION, runFixedCodes } from '../../../src/core/fixed/index.ts';
-import { tfToZpk } from '../../../src/core/system/index.ts';
+import { tfToZpk } from '../../../src/core/system/fromCoefficients.ts';
 
 const NOTCH = ['--b', '0.95,-1.8,0.95', '--a', '1,-1.7,0.9', '--fs', '2000'];
 

@@ -14,7 +14,7 @@ import { readCsvSignal, readWav, writeWav } from '../../../src/core/signal/index
 import { makeWhiteNoise } from '../../../src/core/time/inputs.ts';
 import { writeSharedFile } from '../../../src/share/designFile.ts';
 import { DEFAULT_IMPLEMENTATION } from '../../../src/core/fixed/index.ts';
-import { tfToZpk } from '../../../src/core/system/index.ts';
+import { tfToZpk } from '../../../src/core/system/fromCoefficients.ts';
 
 beforeAll(() => requireToolchain('host'));
 

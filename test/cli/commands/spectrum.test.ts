@@ -12,7 +12,8 @@ import { expectClose } from '../../helpers/expectClose.ts';
 import { makeTones, measureLevels, readWav, welch, writeWav } from '../../../src/core/signal/index.ts';
 import { makeWhiteNoise } from '../../../src/core/time/inputs.ts';
 import { filterSections } from '../../../src/core/time/filter.ts';
-import { tfToZpk, zpkToSections, compressRoots } from '../../../src/core/system/index.ts';
+import { zpkToSections, compressRoots } from '../../../src/core/system/index.ts';
+import { tfToZpk } from '../../../src/core/system/fromCoefficients.ts';
 
 const dir = mkdtempSync(join(tmpdir(), 'pw-spectrum-'));
 const path = (name: string) => join(dir, name);

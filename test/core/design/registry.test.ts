@@ -1,7 +1,9 @@
 /**
- * A new designer kind is one registry entry plus its engine function. This test adds one — a moving average
- * of N taps, the simplest FIR filter — to the registry and finds it designed, checked, typed on the command
- * line, offered by the Design form, stored in files and links, and described, with nothing else written.
+ * A new designer kind is one registry entry plus its engine function, and its shape for the page's first
+ * view (shapes.ts: the checks' view of its parameters; test/core/design/shapes.test.ts fails without it).
+ * This test adds one — a moving average of N taps, the simplest FIR filter — to the registry and its
+ * shapes and finds it designed, checked, typed on the command line, offered by the Design form, stored in
+ * files and links, and described, with nothing else written.
  */
 import { describe, it, expect, vi } from 'vitest';
 import type { DesignerEntry } from '../../../src/core/design/parameters.ts';
@@ -53,6 +55,23 @@ vi.mock('../../../src/core/design/registry.ts', async (importOriginal) => {
     DESIGNER_VARIANTS: r.variants,
     designerEntry: r.entry,
     variantOf: r.variantOf,
+  };
+});
+
+// Its shape: what the first view's checks read of its parameters.
+vi.mock('../../../src/core/design/shapes.ts', async (importOriginal) => {
+  const original = await importOriginal<typeof import('../../../src/core/design/shapes.ts')>();
+  const shapes = [
+    ...original.DESIGNER_SHAPES,
+    {
+      kind: 'movingAverage',
+      parameters: [{ key: 'taps', type: 'number', range: 'whole', max: 256, presence: 'required' }],
+    } as const,
+  ];
+  return {
+    ...original,
+    DESIGNER_SHAPES: shapes,
+    designerShape: (k: string) => shapes.find((s) => s.kind === k),
   };
 });
 

@@ -15,7 +15,7 @@ import {
   fnv1a64,
   float17,
 } from '../../../src/core/export/index.ts';
-import { tfToZpk } from '../../../src/core/system/index.ts';
+import { tfToZpk } from '../../../src/core/system/fromCoefficients.ts';
 
 const zpk = tfToZpk({ b: [0.1, 0.2, 0.1], a: [1, -1.6, 0.8] });
 function implement(over: Partial<ImplementationSettings> = {}, fs = 48000): Implementation {

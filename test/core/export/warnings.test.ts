@@ -12,7 +12,7 @@ import {
 } from '../../../src/core/fixed/index.ts';
 import { exportC, exportCsv, exportJson, exportWarnings } from '../../../src/core/export/index.ts';
 import { maskFromDesigner } from '../../../src/core/mask/index.ts';
-import { tfToZpk } from '../../../src/core/system/index.ts';
+import { tfToZpk } from '../../../src/core/system/fromCoefficients.ts';
 import type { Zpk } from '../../../src/core/types.ts';
 import { emptyDesign } from '../../../src/core/model/design.ts';
 import { addDesignerPart, maskOfParts } from '../../../src/core/model/compose.ts';

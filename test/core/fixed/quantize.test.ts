@@ -11,7 +11,7 @@ import {
   type ImplementationSettings,
 } from '../../../src/core/fixed/index.ts';
 import type { Section, Zpk } from '../../../src/core/types.ts';
-import { tfToZpk } from '../../../src/core/system/index.ts';
+import { tfToZpk } from '../../../src/core/system/fromCoefficients.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 
 const Q1_14 = { wordLength: 16, fractionBits: 14 };

@@ -11,7 +11,7 @@ import {
   type ImplementationSettings,
 } from '../../../src/core/fixed/index.ts';
 import type { Zpk } from '../../../src/core/types.ts';
-import { tfToZpk } from '../../../src/core/system/index.ts';
+import { tfToZpk } from '../../../src/core/system/fromCoefficients.ts';
 import { makeWhiteNoise } from '../../../src/core/time/inputs.ts';
 import { mulberry32 } from '../../../src/core/random.ts';
 

@@ -5,6 +5,7 @@ import {
   groupDelaySeconds,
   responseAt,
   responseSections,
+  refineAtRoots,
   responseZpk,
   wrapPhase,
 } from '../../../src/core/response/index.ts';
@@ -236,5 +237,71 @@ describe('frequencyGrid and groupDelaySeconds', () => {
   });
   it('converts samples to seconds', () => {
     expectClose(groupDelaySeconds(Float64Array.from([48, 4.8]), 48000), [1e-3, 1e-4], { rel: 1e-15 });
+  });
+});
+
+describe('frequencyGrid on a band (a zoomed view)', () => {
+  it('puts every point inside the band, ends exact, steps even', () => {
+    const lo = (2 * Math.PI * 49.99) / 2000;
+    const hi = (2 * Math.PI * 50.01) / 2000;
+    const g = frequencyGrid(101, { fMin: lo, fMax: hi });
+    expect(g[0]).toBe(lo);
+    expect(g[100]).toBe(hi);
+    for (let i = 1; i < g.length; i++) expectClose(g[i]! - g[i - 1]!, (hi - lo) / 100, { rel: 1e-9 });
+    const lg = frequencyGrid(50, { log: true, fMin: 0.01, fMax: 0.1 });
+    expect(lg[0]).toBe(0.01);
+    expect(lg[49]).toBe(0.1);
+    expectClose(lg[1]! / lg[0]!, lg[49]! / lg[48]!, { rel: 1e-12 });
+  });
+
+  it('refuses a band outside [0, π] or empty', () => {
+    expect(() => frequencyGrid(4, { fMin: 1, fMax: 1 })).toThrow(RangeError);
+    expect(() => frequencyGrid(4, { fMax: 4 })).toThrow(RangeError);
+    expect(() => frequencyGrid(4, { log: true, fMin: 0, fMax: 1 })).toThrow(RangeError);
+  });
+
+  it('evaluates a 4 Hz-wide 50 Hz notch at fs = 2 kHz within ±0.01 Hz, matching direct evaluation of b/a', () => {
+    // The 50 Hz notch with a −3 dB width of 4 Hz: zeros on the circle at ±w0, poles at radius
+    // r = 1 − Δω/2 with Δω = 2π·4/2000 (the narrow-notch width relation, common practice).
+    const fs = 2000;
+    const w0 = (2 * Math.PI * 50) / fs;
+    const r = 1 - (2 * Math.PI * 4) / fs / 2;
+    const zpk: Zpk = {
+      zeros: [{ re: Math.cos(w0), im: Math.sin(w0), multiplicity: 1 }],
+      poles: [{ re: r * Math.cos(w0), im: r * Math.sin(w0), multiplicity: 1 }],
+      gain: 1,
+    };
+    const lo = (2 * Math.PI * 49.99) / fs;
+    const hi = (2 * Math.PI * 50.01) / fs;
+    const resp = refineAtRoots(zpk, responseZpk(zpk, frequencyGrid(201, { fMin: lo, fMax: hi })));
+    // b = [1, −2cos w0, 1], a = [1, −2r cos w0, r²], evaluated at e^{jω} by complex Horner in z⁻¹.
+    const b = [1, -2 * Math.cos(w0), 1];
+    const a = [1, -2 * r * Math.cos(w0), r * r];
+    const at = (c: number[], w: number) => {
+      let re = 0;
+      let im = 0;
+      for (const k of [2, 1, 0]) {
+        // (re + j·im)·e^{−jω} + c[k]
+        const nr = re * Math.cos(w) + im * Math.sin(w) + c[k]!;
+        const ni = im * Math.cos(w) - re * Math.sin(w);
+        re = nr;
+        im = ni;
+      }
+      return Math.hypot(re, im);
+    };
+    let deepest = Infinity;
+    for (let i = 0; i < resp.omega.length; i++) {
+      const w = resp.omega[i]!;
+      expect(w).toBeGreaterThanOrEqual(lo);
+      expect(w).toBeLessThanOrEqual(hi);
+      const direct = at(b, w) / at(a, w);
+      // Next to a zero on the circle b/a loses digits to cancellation (about eps/|b|); the product form not.
+      if (Math.abs(w - w0) > 1e-9) expectClose(resp.magnitude[i]!, direct, { rel: 1e-7 });
+      deepest = Math.min(deepest, resp.magnitudeDb[i]!);
+    }
+    // The exact root angle is one of the points: the notch floor itself, not a shallow dip.
+    expect(deepest).toBeLessThan(-250);
+    // ±0.01 Hz from the notch: |H| ≈ 0.01/2 (half-width 2 Hz), about −46 dB (narrow-notch model, common practice).
+    expectClose(resp.magnitudeDb[0]!, 20 * Math.log10(0.01 / 2), { abs: 0.1 });
   });
 });

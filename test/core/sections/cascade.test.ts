@@ -6,7 +6,7 @@ import { createSectionFilter, runSectionFilter } from '../../../src/core/signal/
 import { responseSections, responseZpk, frequencyGrid } from '../../../src/core/response/index.ts';
 import { expectClose } from '../../helpers/expectClose.ts';
 import { loadFixture } from '../../helpers/fixtures.ts';
-import { tfToZpk } from '../../../src/core/system/index.ts';
+import { tfToZpk } from '../../../src/core/system/fromCoefficients.ts';
 
 interface NormCase {
   name: string;

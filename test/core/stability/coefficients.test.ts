@@ -1,6 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import { stabilityOfCoefficients } from '../../../src/core/stability/coefficients.ts';
-import { stabilityOfTyped } from '../../../src/core/stability/index.ts';
+import { stabilityOfTyped } from '../../../src/core/stability/typed.ts';
 import { schurCohnCertified, schurCohnExact } from '../../../src/core/stability/schurCohn.ts';
 import { splitDouble, toIntegers } from '../../../src/core/stability/dyadic.ts';
 import { gcd, sturmCount, divideExact } from '../../../src/core/stability/bigPoly.ts';

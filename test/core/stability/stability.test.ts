@@ -2,7 +2,7 @@ import { describe, it, expect } from 'vitest';
 import { stabilityOfZpk, UNIT_CIRCLE_TOLERANCE } from '../../../src/core/stability/index.ts';
 import type { Verdict } from '../../../src/core/stability/index.ts';
 import { juryTest } from '../../../src/core/jury.ts';
-import { tfToZpk } from '../../../src/core/system/index.ts';
+import { tfToZpk } from '../../../src/core/system/fromCoefficients.ts';
 import { polyFromRoots } from '../../../src/core/poly.ts';
 import type { Root, Zpk } from '../../../src/core/types.ts';
 import { expectClose } from '../../helpers/expectClose.ts';

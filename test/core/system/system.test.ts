@@ -6,10 +6,10 @@ import {
   sectionsToTf,
   sectionsToZpk,
   systemOrder,
-  tfToZpk,
   zpkToSections,
   zpkToTf,
 } from '../../../src/core/system/index.ts';
+import { tfToZpk } from '../../../src/core/system/fromCoefficients.ts';
 import { responseSections, responseZpk } from '../../../src/core/response/index.ts';
 import { polyEvalComplex } from '../../../src/core/poly.ts';
 import type { Root, Section, TransferFunction, Zpk } from '../../../src/core/types.ts';

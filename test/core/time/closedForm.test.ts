@@ -1,7 +1,6 @@
 import { describe, it, expect } from 'vitest';
 import {
   binomialInN,
-  closedFormResponse,
   closedFormResponseZpk,
   describeTerm,
   evaluateClosedForm,
@@ -9,6 +8,7 @@ import {
   type ClosedForm,
   type TimeInput,
 } from '../../../src/core/time/closedForm.ts';
+import { closedFormResponse } from '../../../src/core/time/fromCoefficients.ts';
 import { filterSections, filterTf } from '../../../src/core/time/filter.ts';
 import { zpkToTf } from '../../../src/core/system/transferFunction.ts';
 import { makeImpulse, makeSine, makeStep } from '../../../src/core/time/inputs.ts';

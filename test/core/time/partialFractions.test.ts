@@ -1,5 +1,6 @@
 import { describe, it, expect } from 'vitest';
-import { partialFractions, type PartialFractions } from '../../../src/core/time/partialFractions.ts';
+import type { PartialFractions } from '../../../src/core/time/partialFractions.ts';
+import { partialFractions } from '../../../src/core/time/fromCoefficients.ts';
 import { polyFromRoots, polyEvalComplex } from '../../../src/core/poly.ts';
 import type { Complex, Root, TransferFunction } from '../../../src/core/types.ts';
 import { mulberry32 } from '../../../src/core/random.ts';

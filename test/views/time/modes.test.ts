@@ -1,5 +1,6 @@
 import { describe, it, expect } from 'vitest';
-import { closedFormResponse, evaluateClosedForm } from '../../../src/core/time/closedForm.ts';
+import { evaluateClosedForm } from '../../../src/core/time/closedForm.ts';
+import { closedFormResponse } from '../../../src/core/time/fromCoefficients.ts';
 import { impulseResponse } from '../../../src/core/time/filter.ts';
 import type { TransferFunction } from '../../../src/core/types.ts';
 import { closedFormModes, type Mode } from '../../../src/views/time/modes.ts';

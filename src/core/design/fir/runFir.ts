@@ -10,7 +10,7 @@ import { requirementMargin } from '../margin.ts';
 import { BAND_SHAPE_OPTIONS, type IirSpec } from '../entries/classicalParameters.ts';
 import { requirementOf } from '../runIir.ts';
 import { DesignInputError, MAX_FIR_ORDER } from '../validate.ts';
-import { tfToZpk } from '../../system/transferFunction.ts';
+import { tfToZpk } from '../../system/fromCoefficients.ts';
 import { shortNumber } from '../../shortNumber.ts';
 import type { FirBand } from './bands.ts';
 import { firOrderGuess, passDeviation, stopDeviation, windowAttenuationDb } from './estimate.ts';

@@ -3,7 +3,8 @@
  * coefficients exactly as typed. Anything that goes wrong comes back as an InputError, never a throw.
  */
 import { parseSystem } from '../../../core/parse/index.ts';
-import { compressRoots, tfToZpk } from '../../../core/system/index.ts';
+import { compressRoots } from '../../../core/system/index.ts';
+import { tfToZpk } from '../../../core/system/fromCoefficients.ts';
 import type { InputError, Root, Zpk } from '../../../core/types.ts';
 import type { TypedCoefficients } from '../../../core/model/design.ts';
 

@@ -5,7 +5,6 @@ import { pickSharedView } from '../../../core/model/view.ts';
 import { useWorkbench } from '../../../store/useWorkbench.ts';
 import { defaultView } from '../../../store/view.ts';
 import { copyText } from '../../shared/copyText.ts';
-import { showLinkUntilEdit } from './linkFragment.ts';
 
 /** How long "Copied" stays, ms. */
 const CONFIRM_MS = 2500;
@@ -31,7 +30,6 @@ export function LinkSection() {
   useEffect(() => setState('idle'), [fragment]);
 
   const copy = () => {
-    showLinkUntilEdit(fragment);
     void copyText(url).then((ok) => setState(ok ? 'copied' : 'failed'));
   };
   return (

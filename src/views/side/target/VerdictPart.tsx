@@ -15,8 +15,8 @@ import { qName } from '../../../core/fixed/index.ts';
 
 const STABILITY_WORDS = { stable: 'stable', marginal: 'marginally stable', unstable: 'unstable' } as const;
 
-function StabilityCell({ s }: { s: Stability | null }) {
-  if (!s) return <td>—</td>;
+function StabilityCell({ s, missing = '—' }: { s: Stability | null; missing?: string }) {
+  if (!s) return <td>{missing}</td>;
   return (
     <td className={`pw-verdict pw-verdict-${s.verdict}`}>
       <strong>{STABILITY_WORDS[s.verdict]}</strong>
@@ -65,7 +65,8 @@ export function VerdictPart() {
         <tbody>
           <tr data-testid="verdict-stability">
             <th scope="row">Stability</th>
-            <StabilityCell s={ideal} />
+            {/* the ideal verdict waits for the exact checks (store/exactChecks.ts) */}
+            <StabilityCell s={ideal} missing="checking…" />
             <StabilityCell s={quantized} />
           </tr>
           {idealMask && (
