@@ -15,7 +15,9 @@ test('the demo reads 0 dB at DC, its notches as exact zeros and its mask margin 
 }, testInfo) => {
   await openWorkbench(page);
   const chip = page.getByTestId('mask-chip');
-  await expect(chip).toContainText('Mask passes');
+  // The chip says which filter it judges (the ideal one: no fixed-point target is set) and its verdict.
+  await expect(chip).toContainText('ideal');
+  await expect(chip).toContainText('✓ passes');
   await expect(chip).toContainText(/by 0\.0143 dB at 250 Hz/);
   await expect(chip).not.toContainText('+');
   // The root table's notch column: the zeros on the circle give an exact zero, not −322 dB.

@@ -45,3 +45,14 @@ export async function saveScreenshot(page: Page, testInfo: TestInfo, name: strin
   await page.screenshot({ path, fullPage: true });
   await testInfo.attach(name, { path, contentType: 'image/png' });
 }
+
+/**
+ * Answers the question the sample-rate field asks for hand-placed roots (the demo's): keep their
+ * frequencies in Hz, the default.
+ */
+export async function keepHzOnRateChange(page: Page): Promise<void> {
+  await page
+    .getByTestId('rate-question')
+    .getByRole('button', { name: /frequencies in Hz/ })
+    .click();
+}

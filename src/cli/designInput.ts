@@ -10,6 +10,14 @@ import type { SharedDesign } from '../share/document.ts';
 import { decodeLink, linkFragment } from '../share/link/index.ts';
 import { UsageError, numberFlag, type ParsedArgs } from './args.ts';
 import { describeProblem, designProblem } from '../core/model/check.ts';
+import type { Design } from '../core/model/design.ts';
+import type { Root } from '../core/types.ts';
+import { gainKeepingLevel, maskAtRate, rootsKeepingHz } from '../core/model/rate.ts';
+import { partsAtRate } from '../core/model/partsRate.ts';
+import { runDesigner } from '../core/design/index.ts';
+import { maskFromDesigner } from '../core/mask/index.ts';
+import { sameMask } from '../core/mask/same.ts';
+import { shortNumber } from '../core/shortNumber.ts';
 
 /** Flags every design-taking command accepts. */
 export const DESIGN_FLAGS = ['b', 'a', 'eq', 'tf', 'fs'] as const;
@@ -60,16 +68,107 @@ function isLink(arg: string): boolean {
   return linkFragment(arg) !== null && !existsSync(arg);
 }
 
-/** The command's design from a file's or a link's shared design; --fs overrides the sample rate. */
+/**
+ * The design at another sample rate, kept in hertz as the page keeps it: a design as its designer made it is
+ * designed again at the new rate (its own mask rebuilt); other roots move so their frequencies in Hz stay
+ * (core/model/rate.ts); a user's mask is clipped to the new fs/2; a composed design goes part by part
+ * (core/model/partsRate.ts). The note says which happened.
+ */
+function atRate(design: Design, fs: number, source: string): { design: Design; note: string } {
+  const from = design.sampleRate;
+  const rate = (hz: number) => `${shortNumber(hz, 10)} Hz`;
+  const clip = (mask: Design['mask']) => {
+    if (!mask) return {};
+    const m = maskAtRate(mask, fs).mask;
+    return m.regions.length ? { mask: m } : {};
+  };
+  if (design.parts) {
+    // A composed design, part by part: its designed parts designed again, other roots keeping their Hz.
+    const r = partsAtRate(design, fs, 'keep-hz');
+    if (!r.ok)
+      throw new UsageError(
+        `--fs ${rate(fs)}: ${source}: ${r.error.message}${r.error.expected ? `; expected ${r.error.expected}` : ''}.`,
+      );
+    return {
+      design: r.value.design,
+      note: `--fs ${rate(fs)}: ${source} (made at ${rate(from)}): ${r.value.said.trim()}`,
+    };
+  }
+  const spec = design.designer;
+  if (spec) {
+    const old = runDesigner(spec);
+    const zpk = old.ok ? old.value.zpk : null;
+    const same = (a: readonly Root[], b: readonly Root[]) =>
+      a.length === b.length && a.every((r, i) => r.re === b[i]!.re && r.im === b[i]!.im);
+    const asDesigned =
+      zpk !== null &&
+      spec.fs === from &&
+      design.gainRule.kind === 'fixed' &&
+      design.gainRule.value === zpk.gain &&
+      same(design.zeros, zpk.zeros) &&
+      same(design.poles, zpk.poles);
+    if (asDesigned) {
+      const next = { ...spec, fs };
+      const r = runDesigner(next);
+      if (!r.ok)
+        throw new UsageError(
+          `--fs ${rate(fs)}: the designer of ${source} cannot make its design at that rate: ${r.error.message}.`,
+        );
+      const own = sameMask(design.mask, maskFromDesigner(spec));
+      const mask = own ? maskFromDesigner(next) : undefined;
+      const { mask: _m, ...rest } = design;
+      return {
+        design: {
+          ...rest,
+          sampleRate: fs,
+          zeros: r.value.zpk.zeros,
+          poles: r.value.zpk.poles,
+          gainRule: { kind: 'fixed', value: r.value.zpk.gain },
+          designer: next,
+          ...(own ? (mask ? { mask } : {}) : clip(design.mask)),
+        },
+        note: `--fs ${rate(fs)}: ${source} was designed again at ${rate(fs)} from its designer's specification in Hz (it was made at ${rate(from)}), so its response stays where it was in Hz`,
+      };
+    }
+  }
+  const zeros = rootsKeepingHz(design.zeros, from, fs, 'zero');
+  const poles = zeros.ok ? rootsKeepingHz(design.poles, from, fs, 'pole') : zeros;
+  if (!zeros.ok || !poles.ok) {
+    const e = !zeros.ok ? zeros.error : !poles.ok ? poles.error : null;
+    throw new UsageError(`--fs ${rate(fs)}: ${e!.message}; expected ${e!.expected}.`);
+  }
+  const { typed: _t, mask: _m, designer: _d, ...rest } = design;
+  let gainRule = design.gainRule;
+  if (gainRule.kind === 'fixed') {
+    const old = { zeros: design.zeros, poles: design.poles, gain: gainRule.value };
+    const moved = { zeros: zeros.value, poles: poles.value, gain: gainRule.value };
+    gainRule = { kind: 'fixed', value: gainKeepingLevel(old, from, moved, fs) };
+  }
+  return {
+    design: {
+      ...rest,
+      sampleRate: fs,
+      zeros: zeros.value,
+      poles: poles.value,
+      gainRule,
+      ...(spec && { designer: { ...spec, fs } }),
+      ...clip(design.mask),
+    },
+    note: `--fs ${rate(fs)}: the roots of ${source} (made at ${rate(from)}) were moved so their frequencies in Hz stay`,
+  };
+}
+
+/** The command's design from a file's or a link's shared design; --fs changes the rate, keeping Hz. */
 function fromShared(shared: SharedDesign, source: string, fs: number | null): CliDesign {
-  const d = fs === null ? shared.design : { ...shared.design, sampleRate: fs };
+  const moved = fs === null || fs === shared.design.sampleRate ? null : atRate(shared.design, fs, source);
+  const d = moved ? moved.design : shared.design;
   const { gain } = resolveGain(d.zeros, d.poles, d.gainRule, d.sampleRate);
   return {
     zpk: { zeros: d.zeros, poles: d.poles, gain },
     typed: d.typed ? { b: d.typed.b, a: d.typed.a } : null,
     sampleRate: d.sampleRate,
     source,
-    notes: [],
+    notes: moved ? [moved.note] : [],
     shared: { design: d, view: shared.view },
   };
 }

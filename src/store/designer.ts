@@ -121,30 +121,6 @@ export function rerunPartOn(
   return { ok: true, value: { design: replacePart(design, index, spec, r.value.zpk), result: r.value } };
 }
 
-/**
- * Re-runs every designed part at the design's sample rate (after a sample-rate change: each part's
- * description is in Hz, so a notch at 50 Hz stays at 50 Hz). The first part that cannot be re-run
- * there stops it, with its error.
- */
-export function rerunAllPartsOn(design: Design): Result<{ design: Design; result: DesignResult }> {
-  let d = design;
-  let last: DesignResult | null = null;
-  const parts = partsOf(design);
-  for (let i = 0; i < parts.length; i++) {
-    if (!parts[i]!.designer) continue;
-    const r = rerunPartOn(d, i);
-    if (!r.ok) return { ok: false, error: { ...r.error, message: `part ${i + 1}: ${r.error.message}` } };
-    d = r.value.design;
-    last = r.value.result;
-  }
-  return last
-    ? { ok: true, value: { design: d, result: last } }
-    : {
-        ok: false,
-        error: { message: 'this design has no designer to re-run', expected: 'run a designer first' },
-      };
-}
-
 const sameRoots = (a: readonly Root[], b: readonly Root[]) =>
   a.length === b.length &&
   a.every((r, i) => r.re === b[i]!.re && r.im === b[i]!.im && r.multiplicity === b[i]!.multiplicity);

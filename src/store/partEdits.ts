@@ -9,13 +9,15 @@ import type { Design } from '../core/model/design.ts';
 import { removePart } from '../core/model/parts.ts';
 import { addDesignerPart, maskOfParts, type PartMaskPolicy } from '../core/model/compose.ts';
 import { rerunPartOn, type DesignerPatch } from './designer.ts';
+// directly: core/mask/index.ts is in the first view, and sameMask is not needed there
+import { sameMask } from '../core/mask/same.ts';
 
 type DesignerEdit = (d: Design) => Result<{ design: Design; result: DesignResult }>;
 
 /** The design after a part changed, with its mask following the parts when it was the one they implied. */
 export function withPartsMask(before: Design, after: Design): Design {
   const derived = maskOfParts(before);
-  if (!before.mask || !derived || JSON.stringify(before.mask) !== JSON.stringify(derived)) return after;
+  if (!before.mask || !derived || !sameMask(before.mask, derived)) return after;
   const next = maskOfParts(after);
   const { mask: _mask, ...rest } = after;
   return next ? { ...rest, mask: next } : rest;

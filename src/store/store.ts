@@ -20,10 +20,11 @@ import { closeGesture, emptyHistory, recordEdit, type History } from './history.
 import * as edits from './rootEdits.ts';
 import { defaultView, type ViewSettings, type ViewState } from './view.ts';
 import { framed } from './planeFit.ts';
-import { designerActions, rerunAllPartsOn, rerunDesignerOn, type DesignerActions } from './designer.ts';
+import { designerActions, type DesignerActions } from './designer.ts';
 import { whenDesignEngine } from './designEngine.ts';
 import { exactChecksStatus, watchExactChecks, type ExactChecksStatus } from './exactChecks.ts';
-import type { DesignResult } from '../core/design/light.ts';
+import type { RateChoice } from './sampleRate.ts';
+import { withRateChange } from './rateChange.ts';
 import { implementationActions, type ImplementationActions } from './implementation.ts';
 import { defaultSignalView, signalActions, type SignalActions, type SignalState } from './signal.ts';
 
@@ -39,17 +40,20 @@ export interface DesignActions {
   setGainRule(rule: GainRule): void;
   setSampleRate(hz: number): void;
   /**
-   * Takes a sample rate for the design (a recording's) and re-runs its designer at that rate, so a notch
-   * designed at 50 Hz stays at 50 Hz; one undo step. Returns the re-run's result (null when the design has
-   * no designer, or the rate is not accepted); when the designer refuses the new rate, the rate still
-   * changes and the roots stay, and the error says why. When the design has a designer and the design
-   * algorithms have not arrived (the page loads them after its first paint, store/designEngine.ts), nothing
-   * changes until they have: the whole step is taken then and a promise of its result is returned.
+   * Changes the sample rate keeping the design in hertz (store/sampleRate.ts): a design as its designer
+   * made it is designed again at the new rate; hand-placed roots keep their frequencies in Hz, or their
+   * places in the plane when `choice` says so; a composed design goes part by part. One undo step, for the
+   * Sample rate field and for taking a recording's rate alike. Returns what happened in a sentence, or why
+   * nothing changed. When a designer must run and the design algorithms have not arrived (the page loads
+   * them after its first paint, store/designEngine.ts), nothing changes until they have: the whole step is
+   * taken then and a promise of its result is returned (nothing changes if they cannot be fetched).
    */
-  adoptSampleRate(hz: number): Result<DesignResult> | null | Promise<Result<DesignResult> | null>;
+  changeSampleRate(hz: number, choice?: RateChoice): Result<string> | Promise<Result<string>>;
   /**
    * Replaces the roots and gain by a system the user typed, keeping the typed coefficients; `about`
    * optionally replaces the name and note in the same undo step (the old note described other roots).
+   * The previous design's designer and requirement mask described other roots and go with them (one undo
+   * step brings them back), unless `keep.mask` says the user chose to judge the new system by the same mask.
    */
   loadTyped(
     zeros: Root[],
@@ -57,6 +61,7 @@ export interface DesignActions {
     gain: number,
     typed: TypedCoefficients,
     about?: { name?: string; note?: string },
+    keep?: { mask?: boolean },
   ): DesignProblem | null;
   /** Replaces the whole design (demo, empty, opened file or link); one undo step. */
   replaceDesign(design: Design): void;
@@ -154,52 +159,47 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
         if (!(hz > 0 && hz <= MAX_SAMPLE_RATE)) return;
         edit((d) => (d.sampleRate === hz ? d : { ...d, sampleRate: hz }));
       },
-      loadTyped: (zeros, poles, gain, typed, about) => {
-        // Typed coefficients replace the whole cascade: no part owns their roots.
-        const problem = apply(({ parts: _parts, ...d }) => ({
-          ...d,
-          ...about,
-          zeros,
-          poles,
-          gainRule: { kind: 'fixed', value: gain },
-          typed,
+      changeSampleRate: (hz, choice) => {
+        const applied: Apply = (fn) => {
+          const problem = apply(fn);
+          if (!problem) set({ selection: null });
+          return problem;
+        };
+        // The rate-change code and, when a designer must run, the design algorithms: when either has not
+        // arrived, the whole step waits for them, and nothing changes if they cannot be fetched.
+        const done = withRateChange((m) =>
+          whenDesignEngine(() => m.applyRateChange(get().design, hz, choice, applied)),
+        );
+        if (!(done instanceof Promise)) return done;
+        return done.catch((e: unknown): Result<string> => ({
+          ok: false,
+          error: {
+            message: `the design algorithms could not be loaded (${e instanceof Error ? e.message : String(e)})`,
+            expected: 'reload the page and change the rate again',
+          },
         }));
+      },
+      loadTyped: (zeros, poles, gain, typed, about, keep = {}) => {
+        // Typed coefficients replace the whole cascade: no part or designer owns their roots, and the
+        // previous design's mask goes with them unless the user chose to keep it.
+        const problem = apply((d) => {
+          const { mask, designer: _designer, parts: _parts, ...rest } = d;
+          return {
+            ...rest,
+            ...about,
+            zeros,
+            poles,
+            gainRule: { kind: 'fixed', value: gain },
+            typed,
+            ...(keep.mask && mask && { mask }),
+          };
+        });
         if (!problem) set({ selection: null, view: framed(get().view, get().design) });
         return problem;
       },
       replaceDesign: (design) => {
         edit(() => design);
         set({ selection: null, view: framed(get().view, get().design) });
-      },
-      adoptSampleRate: (hz) => {
-        if (!(hz > 0 && hz <= MAX_SAMPLE_RATE)) return null;
-        const adopt = () => {
-          let rerun: Result<DesignResult> | null = null;
-          edit((d) => {
-            const rated = d.sampleRate === hz ? d : { ...d, sampleRate: hz };
-            if (!rated.designer && !rated.parts) return rated;
-            // A composed design re-runs each designed part's description (in Hz) at the new rate.
-            // Either throws DesignEnginePending before any change.
-            const r = rated.parts ? rerunAllPartsOn(rated) : rerunDesignerOn(rated, {});
-            rerun = r.ok ? { ok: true, value: r.value.result } : r;
-            return r.ok ? r.value.design : rated;
-          });
-          if (rerun !== null && (rerun as Result<DesignResult>).ok) set({ selection: null });
-          return rerun;
-        };
-        const done = whenDesignEngine(adopt);
-        if (!(done instanceof Promise)) return done;
-        // the design algorithms had not arrived: the whole step waits for them
-        return done.catch((e: unknown): Result<DesignResult> => {
-          edit((d) => (d.sampleRate === hz ? d : { ...d, sampleRate: hz }));
-          return {
-            ok: false,
-            error: {
-              message: `the design algorithms could not be loaded (${e instanceof Error ? e.message : String(e)})`,
-              expected: 'reload the page and take the rate again',
-            },
-          };
-        });
       },
       setName: (name) => edit((d) => (d.name === name ? d : { ...d, name })),
       setNote: (note) => edit((d) => (d.note === note ? d : { ...d, note })),

@@ -5,11 +5,14 @@
 import { loadFullReader } from '../share/schema/reader.ts';
 import { loadLinkReader } from '../store/persist.ts';
 import { loadDesignEngine } from '../store/designEngine.ts';
+import { loadRateChange } from '../store/rateChange.ts';
 import { loadExactChecks } from '../store/exactChecks.ts';
 import { loadEntryReader } from './side/entry/loadEntryReader.ts';
 import { prefetchSidePages } from './side/sideTabs.ts';
 import { signalRegion } from './time/TimePanel.tsx';
 import { rootNumbers } from './plane/RootEditor.tsx';
+import { loadRateSteps } from './shell/SampleRateField.tsx';
+import { quantizedMaskChip } from './verdicts/quantizedViews.ts';
 import { loadZoomKit } from './chart/useAxisZoom.ts';
 import { referenceReading } from './compare/LazyReferenceReading.tsx';
 import { maskHandles } from './frequency/FrequencyChart.tsx';
@@ -28,6 +31,10 @@ function prefetchAll(): void {
   void loadLinkReader().catch(() => undefined); // retried when a link comes
   // The design algorithms (classical IIR and FIR, FIR operators) for the store's designer re-runs.
   void loadDesignEngine().catch(() => undefined); // retried when a re-run needs them
+  // Changing the sample rate keeping the design in hertz (store/sampleRate.ts).
+  void loadRateChange().catch(() => undefined); // retried when the rate is changed
+  void loadRateSteps().catch(() => undefined); // retried when a rate is committed
+  void quantizedMaskChip.prefetch().catch(() => undefined); // the quantized verdicts, with the banner's
   // The plots' zoom gestures and buttons (a plot drawn zoomed needs only its span).
   void loadZoomKit().catch(() => undefined); // retried when a plot is mounted
   void referenceReading.prefetch().catch(() => undefined); // retried when a reference is pinned

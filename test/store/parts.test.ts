@@ -112,8 +112,8 @@ describe('composing a design in the store', () => {
     const s = () => store.getState();
     s().runDesigner(LOWPASS);
     s().designerEdit(addPartEdit(NOTCH(50)));
-    const r = await s().adoptSampleRate(2000);
-    expect(r?.ok).toBe(true);
+    const r = await s().changeSampleRate(2000);
+    expect(r.ok).toBe(true);
     const d = s().design;
     expect(d.sampleRate).toBe(2000);
     expect(d.parts!.every((p) => p.designer!.fs === 2000)).toBe(true);

@@ -62,10 +62,10 @@ describe('compound edits are named store actions of one undo step', () => {
     return store;
   };
 
-  it("adopting a recording's rate re-runs the designer there: the notch stays at 50 Hz, and one undo restores all", () => {
+  it("taking a recording's rate re-runs the designer there: the notch stays at 50 Hz, and one undo restores all", () => {
     const store = hopper();
     const before = store.getState().design;
-    const r = store.getState().adoptSampleRate(48000);
+    const r = store.getState().changeSampleRate(48000, 'keep-hz');
     expect(r).toMatchObject({ ok: true }); // at once: the design algorithms are installed
     const d = store.getState().design;
     expect(d.sampleRate).toBe(48000);
@@ -76,20 +76,20 @@ describe('compound edits are named store actions of one undo step', () => {
     expect(store.getState().design).toBe(before);
   });
 
-  it('adopting a rate the designer cannot follow still takes the rate, keeps the roots and says why', () => {
+  it('a rate the designer cannot follow, or no rate at all, changes nothing and says why', () => {
     const store = hopper();
-    const zeros = store.getState().design.zeros;
-    const r = store.getState().adoptSampleRate(80);
+    const before = store.getState().design;
+    const r = store.getState().changeSampleRate(80);
     expect(r).toMatchObject({ ok: false, error: { parameter: 'f0' } });
-    expect(store.getState().design.sampleRate).toBe(80);
-    expect(store.getState().design.zeros).toBe(zeros);
-    expect(store.getState().history.past).toHaveLength(2);
-    expect(store.getState().adoptSampleRate(-1)).toBeNull();
+    expect(store.getState().design).toBe(before);
+    expect(store.getState().history.past).toHaveLength(1);
+    expect(store.getState().changeSampleRate(-1)).toMatchObject({ ok: false });
+    expect(store.getState().design).toBe(before);
   });
 
-  it('without a designer, adopting a rate is just the rate, one step', () => {
+  it('without a designer or roots, a rate change is just the rate, one step', () => {
     const store = createWorkbenchStore(emptyDesign(1000));
-    expect(store.getState().adoptSampleRate(8000)).toBeNull();
+    expect(store.getState().changeSampleRate(8000)).toEqual({ ok: true, value: 'Sample rate 8 kHz.' });
     expect(store.getState().design.sampleRate).toBe(8000);
     store.getState().undo();
     expect(store.getState().design.sampleRate).toBe(1000);

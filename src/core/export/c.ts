@@ -9,11 +9,15 @@ import type { Implementation } from '../fixed/index.ts';
 import { conventionLines, structureName } from './conventions.ts';
 import { cInteger, float17 } from './numbers.ts';
 import { noiseLines } from './noise.ts';
+import type { RequirementMask } from '../mask/index.ts';
+import { exportWarnings, warningLine } from './warnings.ts';
 
 /** Options of the C export. */
 export interface CExportOptions {
   /** Prefix of every name in the header, a C identifier (default "pw_filter"). */
   name?: string;
+  /** The design's requirement mask: the quantized filter failing it is a warning in the file. */
+  mask?: RequirementMask;
 }
 
 const IDENT = /^[A-Za-z_][A-Za-z0-9_]*$/;
@@ -139,8 +143,19 @@ export function exportC(impl: Implementation, options: CExportOptions = {}): str
   });
   const fixedRows = impl.quantized.codes.map((c) => `  { ${[...c.b, ...c.a].map(cInteger).join(', ')} }`);
   const comment = [...conventionLines(impl), ...noiseLines(impl)].map((l) => ` * ${l}`).join('\n');
+  const warnings = exportWarnings(impl, options.mask);
+  const warningBlock = warnings.length
+    ? ` *
+ * WARNINGS (${warnings.length}): this implementation is not safe to use as it stands.
+${warnings.map((w) => ` *   ${warningLine(w).replace(/\*\//g, '* /')}`).join('\n')}
+ * ${P}_WARNINGS holds their number; a build can refuse this file with
+ *   _Static_assert(${P}_WARNINGS == 0, "${p}.h carries warnings");
+`
+    : ` * No warnings (${P}_WARNINGS is 0).
+`;
   return `/*
  * ${p}.h - second-order sections exported by Polewright.
+${warningBlock} *
 ${comment}
  *
  * ${p}_float_process: the unquantized coefficients in double precision, same structure.
@@ -154,6 +169,7 @@ ${comment}
 #include <stddef.h>
 #include <stdint.h>
 
+#define ${P}_WARNINGS ${warnings.length}
 #define ${P}_SECTIONS ${n}
 #define ${P}_SAMPLE_RATE ${float17(impl.sampleRate)}
 #define ${P}_OUTPUT_GAIN ${float17(impl.cascade.outputGain)}

@@ -3,9 +3,14 @@ import type { Implementation } from '../fixed/index.ts';
 import { conventionLines } from './conventions.ts';
 import { float17 } from './numbers.ts';
 import { noiseLines } from './noise.ts';
+import type { RequirementMask } from '../mask/index.ts';
+import { exportWarnings, warningLine } from './warnings.ts';
 
-/** The CSV export text: '#' lines, a header row, then one row per section in cascade order. */
-export function exportCsv(impl: Implementation): string {
+/**
+ * The CSV export text: '#' lines (first the warnings, "# warnings: N" and one "# warning: …" line each, judged
+ * against `opts.mask` when given), a header row, then one row per section in cascade order.
+ */
+export function exportCsv(impl: Implementation, opts: { mask?: RequirementMask } = {}): string {
   const neg = impl.settings.feedbackSign === 'negated';
   const sign = neg ? -1 : 1;
   const names = neg ? ['b0', 'b1', 'b2', 'neg_a1', 'neg_a2'] : ['b0', 'b1', 'b2', 'a1', 'a2'];
@@ -29,9 +34,13 @@ export function exportCsv(impl: Implementation): string {
       float17(sec.peakGainDb),
     ].join(',');
   });
+  const warnings = exportWarnings(impl, opts.mask);
+  const top = [`warnings: ${warnings.length}`, ...warnings.map((w) => `warning: ${warningLine(w)}`)];
   return (
-    [...[...conventionLines(impl), ...noiseLines(impl)].map((l) => `# ${l}`), header.join(','), ...rows].join(
-      '\n',
-    ) + '\n'
+    [
+      ...[...top, ...conventionLines(impl), ...noiseLines(impl)].map((l) => `# ${l}`),
+      header.join(','),
+      ...rows,
+    ].join('\n') + '\n'
   );
 }

@@ -7,3 +7,5 @@ export { conventionLines, structureName } from './conventions.ts';
 export { designHash, fnv1a64, canonicalJson } from './hash.ts';
 export { float17, cInteger } from './numbers.ts';
 export { noiseLines, noiseJson, NOISE_MODEL } from './noise.ts';
+export { exportWarnings, warningLine } from './warnings.ts';
+export type { ExportWarning, ExportWarningKey } from './warnings.ts';

@@ -4,6 +4,8 @@ import { conventionLines, structureName } from './conventions.ts';
 import { designHash } from './hash.ts';
 import { float17 } from './numbers.ts';
 import { noiseJson } from './noise.ts';
+import type { RequirementMask } from '../mask/index.ts';
+import { exportWarnings } from './warnings.ts';
 
 /** A value of the JSON writer: floats are written with 17 significant digits, integers as they are. */
 type Json = null | boolean | string | { float: number } | number | Json[] | { [k: string]: Json };
@@ -27,8 +29,11 @@ function write(v: Json, indent: string): string {
 
 const f = (x: number) => ({ float: x });
 
-/** The JSON export text (format "polewright-sections", version 1). */
-export function exportJson(impl: Implementation): string {
+/**
+ * The JSON export text (format "polewright-sections", version 1); `warnings` lists what makes the
+ * implementation unsafe as it stands (empty when nothing does), judged against `opts.mask` when given.
+ */
+export function exportJson(impl: Implementation, opts: { mask?: RequirementMask } = {}): string {
   const s = impl.settings;
   const q = impl.quantized.format;
   const sign = s.feedbackSign === 'negated' ? -1 : 1;
@@ -36,6 +41,11 @@ export function exportJson(impl: Implementation): string {
     format: 'polewright-sections',
     version: 1,
     designHash: designHash(impl),
+    warnings: exportWarnings(impl, opts.mask).map((w) => ({
+      key: w.key,
+      where: w.where,
+      message: w.message,
+    })),
     conventions: conventionLines(impl),
     sampleRate: f(impl.sampleRate),
     structure: s.structure,

@@ -10,14 +10,16 @@ import { shortNumber } from '../shortNumber.ts';
 const fmt = (v: number) => shortNumber(v, 6);
 
 /**
- * The mask of a classical requirement: each pass band must lose at most rippleDb (lowerDb = −rippleDb),
- * each stop band must be at least attenuationDb down (upperDb = −attenuationDb). The requirement says
- * nothing above 0 dB, so pass regions have no upper limit unless `passUpperDb` is given; the margins then
- * equal requirementMargin's. Region ids: 'pass', 'stop', or 'pass-1', 'pass-2' … when there are several.
+ * The mask of a classical requirement, with both limits where the requirement implies them: each pass band
+ * lies between a ceiling of +rippleDb (or `passUpperDb` when given: the user's stated limit) and a floor of
+ * −rippleDb (at most rippleDb of loss), and each stop band lies below −attenuationDb. Designs normalised to a
+ * 0 dB peak (Butterworth, Chebyshev, elliptic) swing between 0 and −rippleDb, so they pass; a bump above the
+ * pass band fails at its top. Region ids: 'pass', 'stop', or 'pass-1', 'pass-2' … when there are several.
  */
 export function maskFromRequirement(req: Requirement, opts: { passUpperDb?: number } = {}): RequirementMask {
   const { pass, stop } = requirementRegions(req);
   const name = (kind: string, i: number, n: number) => (n === 1 ? kind : `${kind}-${i + 1}`);
+  const ceiling = opts.passUpperDb ?? req.rippleDb;
   const regions: MaskRegion[] = [
     ...pass.map(([fromHz, toHz], i): MaskRegion => ({
       id: name('pass', i, pass.length),
@@ -25,8 +27,8 @@ export function maskFromRequirement(req: Requirement, opts: { passUpperDb?: numb
       fromHz,
       toHz,
       lowerDb: -req.rippleDb,
-      ...(opts.passUpperDb !== undefined && { upperDb: opts.passUpperDb }),
-      label: `pass band, at most ${fmt(req.rippleDb)} dB loss`,
+      upperDb: ceiling,
+      label: `pass band, at most ${fmt(req.rippleDb)} dB loss, at most ${fmt(ceiling)} dB gain`,
     })),
     ...stop.map(([fromHz, toHz], i): MaskRegion => ({
       id: name('stop', i, stop.length),

@@ -3,7 +3,7 @@
  * and the mask the parts imply together. Used by the store's actions and by `polewright design --add-to`.
  */
 import type { Result } from '../types.ts';
-import { runDesigner, type DesignerSpec, type DesignResult } from '../design/index.ts';
+import { runDesigner, type DesignerSpec, type DesignResult } from '../design/light.ts';
 import * as masks from '../mask/index.ts';
 import type { RequirementMask } from '../mask/index.ts';
 import type { Design } from './design.ts';

@@ -105,8 +105,15 @@ export function FrequencyChart({ width, height, reading, onCursor, marker }: Fre
   }, [axis, d0, d1, xMap]);
   const xPx = useMemo(() => toPixels(xMap, hz), [xMap, hz]);
 
+  // The highest upper limit of the mask: the dB axis reaches it, so a pass-band ceiling is drawn.
+  const maskTopDb = useWorkbench((s) =>
+    Math.max(-Infinity, ...(s.design.mask?.regions.map((r) => r.upperDb ?? -Infinity) ?? [])),
+  );
   const series: Record<PlotKey, Series> = {
-    magnitude: useMemo(() => magnitudeSeries(response, magnitudeScale), [response, magnitudeScale]),
+    magnitude: useMemo(
+      () => magnitudeSeries(response, magnitudeScale, maskTopDb),
+      [response, magnitudeScale, maskTopDb],
+    ),
     phase: useMemo(() => phaseSeries(response, phaseMode), [response, phaseMode]),
     delay: useMemo(() => delaySeries(response, delayUnit, fs), [response, delayUnit, fs]),
   };

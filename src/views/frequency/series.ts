@@ -4,7 +4,15 @@
  */
 import type { FrequencyResponse } from '../../core/response/index.ts';
 import type { ViewSettings } from '../../store/view.ts';
-import { dbExtent, dbRange, finiteExtent, niceRange, steppedRange, type Range } from '../chart/range.ts';
+import {
+  DB_MIN_SPAN,
+  dbExtent,
+  dbRange,
+  finiteExtent,
+  niceRange,
+  steppedRange,
+  type Range,
+} from '../chart/range.ts';
 import { DEGREE_STEPS } from '../chart/ticks.ts';
 
 /** One plotted quantity: the values, a factor converting them to the axis unit, and the axis title. */
@@ -37,16 +45,32 @@ function scaled(ext: Range | null, scale: number, fallback: Range): Range {
   return a <= b ? [a, b] : [b, a];
 }
 
-/** The magnitude plot: dB (floor at most DB_FLOOR_BELOW_PEAK under the peak) or linear from zero. */
-export function magnitudeSeries(r: FrequencyResponse, scale: ViewSettings['magnitudeScale']): Series {
+/** How far above the curve's top a mask's upper limit may lift the dB axis so it is drawn, dB. */
+export const MASK_LIMIT_HEADROOM_DB = 20;
+/** A limit this close above the top is drawn on the top edge instead (the axis is not lifted for it), dB. */
+export const MASK_LIMIT_EDGE_DB = 0.5;
+
+/**
+ * The magnitude plot: dB (floor at most DB_FLOOR_BELOW_PEAK under the peak) or linear from zero. In dB the
+ * axis reaches up to `limitTopDb` (the highest upper limit of the mask, when it lies at most
+ * MASK_LIMIT_HEADROOM_DB above the curve), so a pass band's ceiling is drawn and can be dragged.
+ */
+export function magnitudeSeries(
+  r: FrequencyResponse,
+  scale: ViewSettings['magnitudeScale'],
+  limitTopDb = -Infinity,
+): Series {
   if (scale === 'db') {
+    const data = dbExtent(r.magnitudeDb);
+    const lift = limitTopDb > data[1] + MASK_LIMIT_EDGE_DB && limitTopDb <= data[1] + MASK_LIMIT_HEADROOM_DB;
+    const withLimit: Range = lift ? [data[0], limitTopDb] : data;
     return {
       key: 'db',
       values: r.magnitudeDb,
       scale: 1,
       title: 'Magnitude (dB)',
-      data: dbExtent(r.magnitudeDb),
-      wanted: dbRange(r.magnitudeDb),
+      data: withLimit,
+      wanted: lift ? niceRange(withLimit[0], withLimit[1], DB_MIN_SPAN) : dbRange(r.magnitudeDb),
     };
   }
   const ext = finiteExtent(r.magnitude);

@@ -1,10 +1,14 @@
 /**
  * The stability verdict as a banner no one can miss: green stable, amber marginal, red unstable; grey while
  * the exact test has not arrived (it loads right after the first paint, store/exactChecks.ts), since a
- * verdict is given only once it has run.
+ * verdict is given only once it has run. With a fixed-point target set, a second banner as prominent gives
+ * the verdict of the quantized coefficients, and each says which filter it judges.
  */
+import type { Stability } from '../../core/stability/index.ts';
 import { selectStability } from '../../store/derived.ts';
 import { loadExactChecks } from '../../store/exactChecks.ts';
+import { selectHasImplementation } from '../../store/implementationDerived.ts';
+import { quantizedStability } from '../verdicts/quantizedViews.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 import { formatNumber } from '../shared/format.ts';
 import { positionText } from './rootRows.ts';
@@ -46,17 +50,26 @@ function Unjudged() {
   );
 }
 
-export function StabilityBanner() {
-  const s = useWorkbench(selectStability);
-  const hasPoles = useWorkbench((st) => st.design.poles.length > 0);
-  if (!s) return <Unjudged />;
+/** One stability banner (the quantized one is views/verdicts/QuantizedVerdicts.tsx). */
+export function Banner({
+  s,
+  hasPoles,
+  who,
+  testId,
+}: {
+  s: Stability;
+  hasPoles: boolean;
+  who: string | null;
+  testId: string;
+}) {
   const verdict = s.verdict;
   return (
-    <div className={`pw-stability pw-stability-${verdict}`} data-testid="stability">
+    <div className={`pw-stability pw-stability-${verdict}`} data-testid={testId}>
       <span className="pw-stability-icon" aria-hidden="true">
         {ICON[verdict]}
       </span>
       <div>
+        {who && <span className="pw-stability-who">{who}: </span>}
         {/* Only the verdict is live: the radius changes on every pointer move while dragging. */}
         <strong className="pw-stability-title" role="status" aria-live="polite" aria-atomic="true">
           {TITLE[verdict]}
@@ -79,5 +92,18 @@ export function StabilityBanner() {
         )}
       </div>
     </div>
+  );
+}
+
+export function StabilityBanner() {
+  const s = useWorkbench(selectStability);
+  const hasPoles = useWorkbench((st) => st.design.poles.length > 0);
+  const hasTarget = useWorkbench(selectHasImplementation);
+  if (!s) return <Unjudged />;
+  return (
+    <>
+      <Banner s={s} hasPoles={hasPoles} who={hasTarget ? 'Ideal filter' : null} testId="stability" />
+      {hasTarget && <quantizedStability.View />}
+    </>
   );
 }

@@ -1,22 +1,24 @@
 /**
  * When the recording's sample rate differs from the design's: says what that means (the filter acts at
  * the same angles, so at other hertz) and offers to take the recording's rate for the design, one undo
- * step — re-running the design's designer at the new rate in the same step when it has one, so a notch
- * designed at 50 Hz stays at 50 Hz.
+ * step, keeping the design in hertz as the Sample rate field does (store/sampleRate.ts): its designer
+ * re-run at the new rate when the roots are as designed, hand-placed roots moved so their Hz stay.
  */
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import { postNotice } from '../../store/notices.ts';
 import { formatHz } from '../shared/format.ts';
 
-/** Takes the recording's rate for the design (one undo step: the store's adoptSampleRate), saying if its designer could not follow. */
+/** Takes the recording's rate for the design keeping its hertz (one undo step), saying what happened. */
 function adoptSignalRate(hz: number): void {
-  // a promise when the design algorithms are still loading (the step waits for them)
-  void Promise.resolve(workbenchStore.getState().adoptSampleRate(hz)).then((r) => {
-    if (r && !r.ok)
+  // a promise when a designer must run and the design algorithms are still loading (the step waits)
+  void Promise.resolve(workbenchStore.getState().changeSampleRate(hz, 'keep-hz')).then((r) => {
+    if (!r.ok)
       postNotice(
-        'info',
-        `The design is now at ${formatHz(hz)}, but its designer could not re-run there (${r.error.message}); the roots stay as they were.`,
+        'error',
+        `The design stays at its rate: ${r.error.message}${r.error.expected ? `; ${r.error.expected}` : ''}.`,
       );
+    else if (r.value)
+      postNotice('info', `${r.value} Undo restores the previous rate and design.`, { key: 'rate' });
   });
 }
 
@@ -34,7 +36,7 @@ export function RateNote() {
       </span>
       <button type="button" className="pw-small-button" onClick={() => adoptSignalRate(signalRate)}>
         Design at {formatHz(signalRate)}
-        {hasDesigner ? ' (re-design)' : ''}
+        {hasDesigner ? ' (re-design)' : ' (keeping Hz)'}
       </button>
     </div>
   );

@@ -48,14 +48,14 @@ describe('polewright export', () => {
   it('writes CSV and C, to stdout or a file', async () => {
     const csv = await runCli(['export', ...NOTCH, '--format', 'csv']);
     expect(csv.code).toBe(0);
-    expect(csv.stdout).toMatch(/^# design hash: [0-9a-f]{16}/);
+    expect(csv.stdout).toMatch(/^# warnings: 0\n# design hash: [0-9a-f]{16}/);
     const dir = mkdtempSync(join(tmpdir(), 'polewright-export-'));
     const out = join(dir, 'notch.h');
     const c = await runCli(['export', ...NOTCH, '--format', 'c', '--name', 'hum_notch', '--out', out]);
     expect(c.code).toBe(0);
     expect(c.stdout).toBe('');
     expect(c.stderr).toMatch(
-      /wrote .*notch\.h: c, 1 section\(s\), df2t, Q1\.14 coefficients, quantized filter stable/,
+      /wrote .*notch\.h: c, 1 section\(s\), df2t, 16-bit Q1\.14 coefficients; stability: ideal filter stable, quantized filter stable/,
     );
     expect(readFileSync(out, 'utf8')).toMatch(/#define HUM_NOTCH_SECTIONS 1/);
   });
@@ -124,8 +124,80 @@ int main(void) {
       '--format',
       'csv',
     ]);
-    expect(r.code).toBe(0);
+    // A marginal quantized filter is a warning: written into the file, and a distinct exit code.
+    expect(r.code).toBe(3);
     expect(r.stderr).toMatch(/note: quantization made the filter marginal/);
+    expect(r.stdout).toMatch(/^# warnings: [1-9]/);
+  });
+
+  // Scenario 4's neighbour: a 4th-order Butterworth low-pass at 20 Hz on a 48 kHz channel in 16 bits. Its
+  // numerator codes all round to 0 and its poles land exactly on z = 1 (common practice: a cutoff far below fs
+  // needs far more coefficient bits than 16).
+  const LOW = ['lowpass', '--fs', '48000', '--family', 'butterworth', '--order', '4', '--edge', '20'];
+  const designFile = async (dir: string, argv: string[]) => {
+    const file = join(dir, 'design.json');
+    expect((await runCli(['design', ...argv, '--out', file])).code).toBe(0);
+    return file;
+  };
+
+  it('carries its warnings in every format and exits 3 unless --accept-warnings is given', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'pw-export-warn-'));
+    const file = await designFile(dir, LOW);
+    const c = await runCli(['export', file, '--word', '16', '--out', join(dir, 'f.h')]);
+    expect(c.code).toBe(3);
+    expect(c.stderr).toMatch(
+      /warning: \[numerator-all-zero\] section 0: b0, b1 and b2 all quantize to code 0/,
+    );
+    expect(c.stderr).toMatch(/warning: \[poles-on-unit-circle\] section \d: .*z = 1/);
+    expect(c.stderr).toMatch(/warning: \[quantized-unstable\] whole filter/);
+    expect(c.stderr).toMatch(/5 warning\(s\) are written into .*f\.h; exit code 3\..*--accept-warnings/);
+    const header = readFileSync(join(dir, 'f.h'), 'utf8');
+    expect(header).toMatch(/WARNINGS \(5\)/);
+    expect(header).toMatch(/#define PW_FILTER_WARNINGS 5\n/);
+    const json = await runCli(['export', file, '--word', '16', '--format', 'json']);
+    expect(json.code).toBe(3);
+    const doc = JSON.parse(json.stdout);
+    expect(doc.warnings.map((w: { key: string }) => w.key).sort()).toEqual([
+      'numerator-all-zero',
+      'numerator-all-zero',
+      'poles-on-unit-circle',
+      'poles-on-unit-circle',
+      'quantized-unstable',
+    ]);
+    const csv = await runCli(['export', file, '--word', '16', '--format', 'csv', '--accept-warnings']);
+    expect(csv.code).toBe(0);
+    expect(csv.stdout).toMatch(/^# warnings: 5\n# warning: \[poles-on-unit-circle\] section 0/);
+    expect(csv.stderr).toMatch(/accepted with --accept-warnings/);
+    // 32-bit coefficients hold the design: no warnings, exit 0, a zero count in the file.
+    const ok = await runCli(['export', file, '--word', '32']);
+    expect(ok.code).toBe(0);
+    expect(ok.stdout).toMatch(/#define PW_FILTER_WARNINGS 0\n/);
+  });
+
+  it('judges the mask of a design file on the quantized filter, saying which filter each verdict is for', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'pw-export-mask-'));
+    // Scenario 1: hum notches at 50, 150, 250 Hz on a 2 kHz hopper scale.
+    const file = await designFile(dir, [
+      'harmonic-notch',
+      '--fs',
+      '2000',
+      '--f0',
+      '50',
+      '--harmonics',
+      '1,3,5',
+      '--bandwidth',
+      '2',
+    ]);
+    const r = await runCli(['export', file, '--word', '16', '--format', 'json']);
+    expect(r.stderr).toMatch(/mask, ideal filter: PASS/);
+    expect(r.stderr).toMatch(/mask, quantized filter \(16-bit Q1\.14\): FAIL by [\d.]+ dB at 49\.9\d* Hz/);
+    expect(r.code).toBe(3);
+    expect(JSON.parse(r.stdout).warnings[0].key).toBe('mask-fails-quantized');
+    // Clamping to Q0.15 leaves the three sections with the same codes.
+    const q15 = await runCli(['export', file, '--word', '16', '--fraction', '15', '--format', 'csv']);
+    expect(q15.code).toBe(3);
+    expect(q15.stdout).toMatch(/# warning: \[identical-clamped-sections\] sections 0, 1, 2: /);
+    expect(q15.stdout).toMatch(/# warning: \[coefficients-clamped\] section 0: b1, a1 do not fit Q0\.15/);
   });
 
   it('is listed in the usage text', async () => {

@@ -19,27 +19,27 @@ describe('maskFromRequirement', () => {
     });
     expect(shapes).toEqual([
       [
-        ['pass', 0, 120, -1, null],
+        ['pass', 0, 120, -1, 1],
         ['stop', 200, 500, null, -60],
       ],
       [
         ['stop', 0, 120, null, -50],
-        ['pass', 200, 500, -0.5, null],
+        ['pass', 200, 500, -0.5, 0.5],
       ],
       [
         ['stop-1', 0, 100, null, -40],
-        ['pass', 150, 250, -1, null],
+        ['pass', 150, 250, -1, 1],
         ['stop-2', 320, 500, null, -40],
       ],
       [
-        ['pass-1', 0, 100, -1, null],
+        ['pass-1', 0, 100, -1, 1],
         ['stop', 150, 250, null, -40],
-        ['pass-2', 320, 500, -1, null],
+        ['pass-2', 320, 500, -1, 1],
       ],
     ]);
   });
 
-  it('an optional upper pass limit is added to every pass region', () => {
+  it('a stated upper pass limit replaces the +ripple ceiling of every pass region', () => {
     const m = maskFromRequirement({ ...(cases[3] as Required<IirSpec>), fs: FS }, { passUpperDb: 0.1 });
     expect(m.regions.filter((r) => r.kind === 'pass').map((r) => r.upperDb)).toEqual([0.1, 0.1]);
   });

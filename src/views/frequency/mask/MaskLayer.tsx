@@ -7,13 +7,15 @@ import { useId, useMemo } from 'react';
 import { selectMaskResult } from '../../../store/derived.ts';
 import { useWorkbench } from '../../../store/useWorkbench.ts';
 import { toPixel } from '../../chart/pixels.ts';
-import { formatSignedDb } from '../../shared/format.ts';
+import { formatHz, formatSignedDb } from '../../shared/format.ts';
 import type { MagnitudeOverlayProps } from '../overlays.ts';
 import { levelToY, regionShapes } from './maskGeometry.ts';
 import './mask.css';
 
 /** Depth of the hatched strip along a limit line, on its forbidden side, px. */
 const HATCH_PX = 14;
+/** A limit line this far above the plot's top is still drawn, on the top edge, px. */
+const EDGE_PX = 4;
 
 export function MaskLayer({ rect, xMap, yMap, db }: MagnitudeOverlayProps) {
   const mask = useWorkbench((s) => s.design.mask);
@@ -71,8 +73,15 @@ export function MaskLayer({ rect, xMap, yMap, db }: MagnitudeOverlayProps) {
                       />
                     </>
                   )}
-                  {l.y >= rect.top && l.y <= rect.bottom && (
-                    <line className="pw-mask-limit" x1={s.x0} x2={s.x1} y1={l.y} y2={l.y} />
+                  {/* A limit just above the top (within the axis' edge allowance) is drawn on the edge. */}
+                  {l.y >= rect.top - EDGE_PX && l.y <= rect.bottom && (
+                    <line
+                      className="pw-mask-limit"
+                      x1={s.x0}
+                      x2={s.x1}
+                      y1={Math.max(l.y, rect.top)}
+                      y2={Math.max(l.y, rect.top)}
+                    />
                   )}
                 </g>
               );
@@ -87,20 +96,27 @@ export function MaskLayer({ rect, xMap, yMap, db }: MagnitudeOverlayProps) {
         const cy = Math.min(rect.bottom - 4, Math.max(rect.top + 4, y));
         const right = x < (rect.left + rect.right) / 2;
         const text = formatSignedDb(r.worstMarginDb, 3);
+        // Only the worst region's margin is written beside its point, so labels never overlap; the other
+        // failing points carry theirs as a tooltip, and the Design tab lists every region's verdict.
+        const labelled = r.id === result.worstRegionId;
         return (
           <g
             key={r.id}
             className={`pw-mask-worst ${r.pass ? 'pw-mask-ok' : 'pw-mask-fail'}`}
             data-testid={`mask-worst-${r.id}`}
           >
-            <circle cx={x} cy={cy} r={4.5} />
-            <text
-              x={right ? x + 8 : x - 8}
-              y={cy - 6 < rect.top + 12 ? cy + 16 : cy - 6}
-              textAnchor={right ? 'start' : 'end'}
-            >
-              {text}
-            </text>
+            <circle cx={x} cy={cy} r={labelled ? 4.5 : 3.5}>
+              {!labelled && <title>{`${r.id}: ${text} at ${formatHz(r.worstAtHz)}`}</title>}
+            </circle>
+            {labelled && (
+              <text
+                x={right ? x + 8 : x - 8}
+                y={cy - 6 < rect.top + 12 ? cy + 16 : cy - 6}
+                textAnchor={right ? 'start' : 'end'}
+              >
+                {text}
+              </text>
+            )}
           </g>
         );
       })}

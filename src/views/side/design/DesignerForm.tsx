@@ -24,7 +24,6 @@ import { readForm, type FieldErrors } from './designForm.ts';
 import { errorField, errorText } from './designErrors.ts';
 import { FormField, PairField } from './FormField.tsx';
 import { maskFromDesigner } from '../../../core/mask/index.ts';
-import { partsOf } from '../../../core/model/parts.ts';
 import { addPartEdit, rerunPartEdit } from '../../../store/partEdits.ts';
 
 export interface DesignerFormProps {
@@ -42,14 +41,16 @@ export function DesignerForm({ form, setForm, editingPart = null, onStopEditing 
   const status = useWorkbench(selectDesignerStatus);
   const [errors, setErrors] = useState<FieldErrors>({});
   const [general, setGeneral] = useState<string | null>(null);
+  // The last run's words, shown while the design still holds what that run made: its designer or its
+  // parts (not after a rate change, and a note about part 3 goes once the parts change again).
   const [done, setDone] = useState<{
     note: string;
     replacedEdits: boolean;
     what?: string;
-    /** The number of parts it was said for: a note about part 3 goes once the parts change again. */
-    parts: number;
+    /** The design's parts (or its one designer) the note was said for. */
+    owner: unknown;
   } | null>(null);
-  const partCount = useWorkbench((s) => partsOf(s.design).length);
+  const owner = useWorkbench((s) => s.design.parts ?? s.design.designer);
   const [withMask, setWithMask] = useState(true);
 
   const { entry, variant } = kindOf(form.kind);
@@ -104,11 +105,12 @@ export function DesignerForm({ form, setForm, editingPart = null, onStopEditing 
           : how === 'part'
             ? `Part ${editingPart! + 1} changed: `
             : undefined;
+      const after = workbenchStore.getState().design;
       setDone({
         note: r.value.note,
         replacedEdits,
         ...(what && { what }),
-        parts: partsOf(workbenchStore.getState().design).length,
+        owner: after.parts ?? after.designer,
       });
       if (how === 'part') onStopEditing?.();
       return;
@@ -318,7 +320,7 @@ export function DesignerForm({ form, setForm, editingPart = null, onStopEditing 
           {general}
         </p>
       )}
-      {done && done.parts === partCount && (
+      {done && done.owner === owner && (
         <p role="status" className="pw-dz-done" data-testid="designer-done">
           {done.what ?? (done.replacedEdits ? 'Hand edits replaced by: ' : 'Designed: ')}
           {done.note}.{' '}

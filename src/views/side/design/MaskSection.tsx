@@ -17,7 +17,11 @@ const r3 = (v: number) => Number(v.toPrecision(3));
 /** The patch that turns a region into another kind, giving it the limit that kind needs. */
 function kindPatch(region: MaskRegion, kind: MaskRegionKind): MaskRegionPatch {
   if (kind === 'stop') return { kind, lowerDb: undefined, upperDb: region.upperDb ?? -40 };
-  if (kind === 'pass') return { kind, lowerDb: region.lowerDb ?? -1 };
+  // A pass band is judged on both sides: a floor, and a ceiling above it (+1 dB unless one is set).
+  if (kind === 'pass') {
+    const lowerDb = region.lowerDb ?? -1;
+    return { kind, lowerDb, upperDb: region.upperDb ?? Math.max(1, lowerDb + 1) };
+  }
   return { kind };
 }
 

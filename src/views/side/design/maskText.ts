@@ -1,6 +1,6 @@
 /** Words for a mask verdict: pass or fail, by how much and where (the margin words are core/format.ts's). */
 import type { MaskRegionResult, MaskResult } from '../../../core/mask/index.ts';
-import { formatHz, formatMargin } from '../../shared/format.ts';
+import { formatDb, formatHz, formatMargin } from '../../shared/format.ts';
 
 /** "passes by 0.19 dB at 100 Hz" / "fails by 2.01 dB at 120 Hz" (a margin: positive inside the limits). */
 export function marginText(marginDb: number, atHz: number): string {
@@ -11,10 +11,16 @@ export function marginText(marginDb: number, atHz: number): string {
     : m;
 }
 
-/** One region's verdict in a few words. */
+/** One region's verdict in a few words, naming the limit the worst point is measured against. */
 export function regionVerdictText(r: MaskRegionResult): string {
   if (r.problem) return `not judged: ${r.problem}`;
-  return marginText(r.worstMarginDb, r.worstAtHz);
+  const limit = r.limit === 'upper' ? 'upper limit' : 'lower limit';
+  const text = marginText(r.worstMarginDb, r.worstAtHz);
+  if (r.pass) return `${text} (${limit})`;
+  // A margin of −∞ is a response of ±∞ dB (a zero or a pole on the circle): say the level, not "by ∞ dB".
+  if (!Number.isFinite(r.worstMarginDb))
+    return `fails: the response is ${formatDb(r.worstDb, 3)} at ${formatHz(r.worstAtHz)}, beyond its ${limit}`;
+  return `${text}, ${r.limit === 'upper' ? 'above' : 'below'} its ${limit}`;
 }
 
 /** The whole mask's verdict in a few words: how many regions pass, and the tightest one. */

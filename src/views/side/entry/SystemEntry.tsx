@@ -5,7 +5,8 @@
 import { useId, useState, type RefObject } from 'react';
 import type { InputError } from '../../../core/types.ts';
 import { problemPlace } from '../../../core/model/check.ts';
-import { workbenchStore } from '../../../store/useWorkbench.ts';
+import { useWorkbench, workbenchStore } from '../../../store/useWorkbench.ts';
+import { postNotice } from '../../../store/notices.ts';
 import { ExampleChips } from './ExampleChips.tsx';
 import { ParseErrorView } from './ParseErrorView.tsx';
 import { typedAbout } from './entryText.ts';
@@ -21,6 +22,8 @@ interface Props {
 export function SystemEntry({ text, setText, area }: Props) {
   const [error, setError] = useState<{ text: string; error: InputError } | null>(null);
   const [readAs, setReadAs] = useState<string | null>(null);
+  const [keepMask, setKeepMask] = useState(false);
+  const hasMask = useWorkbench((s) => (s.design.mask?.regions.length ?? 0) > 0);
   const id = useId();
 
   const apply = async () => {
@@ -50,7 +53,10 @@ export function SystemEntry({ text, setText, area }: Props) {
     }
     const { zeros, poles, gain, typed, detail } = r.value;
     const store = workbenchStore.getState();
-    const refused = store.loadTyped(zeros, poles, gain, typed, typedAbout(store.design));
+    const hadMask = hasMask && !keepMask;
+    const refused = store.loadTyped(zeros, poles, gain, typed, typedAbout(store.design), {
+      mask: keepMask,
+    });
     if (refused) {
       setError({
         text,
@@ -64,6 +70,12 @@ export function SystemEntry({ text, setText, area }: Props) {
     }
     setError(null);
     setReadAs(detail);
+    if (hadMask)
+      postNotice(
+        'info',
+        "The previous design's requirement mask was removed with it (Undo brings it back; tick “Keep the mask” to keep it).",
+        { key: 'typed-mask' },
+      );
   };
 
   return (
@@ -98,6 +110,12 @@ export function SystemEntry({ text, setText, area }: Props) {
           Apply
         </button>
         <span className="pw-hint">Ctrl/⌘+Enter</span>
+        {hasMask && (
+          <label className="pw-hint pw-keep-mask">
+            <input type="checkbox" checked={keepMask} onChange={(e) => setKeepMask(e.target.checked)} /> Keep
+            the mask
+          </label>
+        )}
         {readAs && !error && (
           <span className="pw-read-as" data-testid="read-as">
             read as: {readAs}

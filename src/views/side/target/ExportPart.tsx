@@ -2,7 +2,7 @@
 import { useState } from 'react';
 import type { FeedbackSign } from '../../../core/fixed/index.ts';
 import { conventionLines } from '../../../core/export/index.ts';
-import { exportText, type ExportFormat } from '../../../store/exportDerived.ts';
+import { exportText, selectExportWarnings, type ExportFormat } from '../../../store/exportDerived.ts';
 import { useWorkbench } from '../../../store/useWorkbench.ts';
 import { Segmented } from '../../chart/Segmented.tsx';
 import { CopyButton } from '../../shared/CopyButton.tsx';
@@ -38,6 +38,7 @@ export function ExportPart() {
   const [format, setFormat] = useState<ExportFormat>('c');
   const prefix = cPrefix(name);
   const text = useSettled((s) => exportText(s, format, prefix));
+  const warnings = useSettled(selectExportWarnings);
   const f = FORMATS[format];
   const fileName = exportFileName(name, f.extension);
   const conventions = impl ? conventionLines(impl) : [];
@@ -66,6 +67,20 @@ export function ExportPart() {
         <p className="pw-hint pw-block">Nothing to export: the settings above do not apply.</p>
       ) : (
         <>
+          {warnings && warnings.length > 0 && (
+            <div className="pw-export-warnings" role="alert" data-testid="export-warnings">
+              <strong>
+                {warnings.length} warning{warnings.length === 1 ? '' : 's'} written into the file
+              </strong>
+              <ul>
+                {warnings.map((w, i) => (
+                  <li key={i}>
+                    <code>{w.key}</code> {w.where}: {w.message}
+                  </li>
+                ))}
+              </ul>
+            </div>
+          )}
           <details className="pw-conventions">
             <summary>Conventions stated in the file</summary>
             <ul>
