@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { createWorkbenchStore } from '../../src/store/store.ts';
-import { selectLinearPhase } from '../../src/store/linearPhase.ts';
+import { selectLinearPhase } from '../../src/store/linearPhaseStatus.ts';
 import { emptyDesign, type Design } from '../../src/core/model/design.ts';
 import { zpkToTf } from '../../src/core/system/transferFunction.ts';
 import type { Root } from '../../src/core/types.ts';
@@ -80,6 +80,7 @@ describe('linear phase kept by the store', () => {
     expect(d.zeros).toHaveLength(4);
     expect(asymmetry(d.zeros)).toBeLessThan(1e-13);
     expect(d.poles).toEqual([{ re: 0, im: 0, multiplicity: 7 }]);
+    expect(d.parts).toBeUndefined(); // the partner given back is not a part placed by hand
   });
 
   it('zeros placed by hand without poles move freely, and nothing is said about them', () => {
