@@ -5,7 +5,7 @@
  * with the simulation. Only C99 with <stdint.h> is assumed: no right shift of a negative value, no signed
  * overflow, no conversion of an out-of-range value to a signed type.
  */
-import type { Implementation } from '../fixed/index.ts';
+import type { Implementation, ImplementationSettings } from '../fixed/index.ts';
 import { conventionLines, structureName } from './conventions.ts';
 import { cInteger, float17 } from './numbers.ts';
 import { noiseLines } from './noise.ts';
@@ -16,9 +16,16 @@ export interface CExportOptions {
   name?: string;
 }
 
-const IDENT = /^[A-Za-z_][A-Za-z0-9_]*$/;
+export const IDENT = /^[A-Za-z_][A-Za-z0-9_]*$/;
 
-function helpers(impl: Implementation, p: string, P: string): string {
+/** What the integer helpers depend on: the data path's settings and the post-shift (IIR and FIR alike). */
+export interface DataPathOf {
+  settings: Pick<ImplementationSettings, 'overflow' | 'accumulatorBits' | 'rounding' | 'dataWordLength'>;
+  postShift: number;
+}
+
+/** The C helpers of the data path: fit, accumulate, shift back to data (the rules of core/fixed/arith.ts). */
+export function helpers(impl: DataPathOf, p: string, P: string): string {
   const s = impl.settings;
   const sat = s.overflow === 'saturate';
   const fitBody = sat

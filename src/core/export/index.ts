@@ -7,3 +7,4 @@ export { conventionLines, structureName } from './conventions.ts';
 export { designHash, fnv1a64, canonicalJson } from './hash.ts';
 export { float17, cInteger } from './numbers.ts';
 export { noiseLines, noiseJson, NOISE_MODEL } from './noise.ts';
+export { exportFirC, firConventionLines, firHash } from './firC.ts';

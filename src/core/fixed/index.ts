@@ -52,3 +52,15 @@ export {
 } from './arrangements.ts';
 export type { Arrangement, Headroom } from './arrangements.ts';
 export { containerFormat, containerBits, codesToValues } from './codes.ts';
+export {
+  buildFirImplementation,
+  validateFirSettings,
+  tapSymmetry,
+  quantizeFirInput,
+  runFirCodes,
+  FixedFir,
+  DEFAULT_FIR_SETTINGS,
+  TAP_SYMMETRY_TOLERANCE,
+  MAX_FIR_OVERFLOW_EVENTS,
+} from './fir.ts';
+export type { FirForm, FirSettings, FirImplementation, TapSymmetry } from './fir.ts';
