@@ -3,7 +3,15 @@
  * settings flags are shared with `simulate --fixed` (implementationFlags.ts).
  */
 import { buildImplementation, qName } from '../../core/fixed/index.ts';
-import { exportC, exportCsv, exportJson } from '../../core/export/index.ts';
+import {
+  exportC,
+  exportCsv,
+  exportFirC,
+  exportFirCsv,
+  exportFirJson,
+  exportJson,
+} from '../../core/export/index.ts';
+import { firImplementationOf, firSummary } from '../firImplementation.ts';
 import { UsageError, parseArgs } from '../args.ts';
 import { DESIGN_FLAGS, readDesign } from '../designInput.ts';
 import { IMPLEMENTATION_FLAGS, baseSettings, choiceFlag, settingsFromArgs } from '../implementationFlags.ts';
@@ -20,8 +28,30 @@ export function runExport(argv: string[], io: CliIo): number {
   const out = args.flags.get('out');
   if (out !== undefined)
     refuseOverwritingInputs(out, '--out', [input !== undefined && !linkFragment(input) ? input : undefined]);
-  const settings = settingsFromArgs(args, baseSettings(d));
   for (const note of d.notes) io.stderr(`note: ${note}\n`);
+  const fir = firImplementationOf(args, d);
+  if (fir) {
+    let text: string;
+    if (format === 'c') {
+      const name = args.flags.get('name');
+      try {
+        text = exportFirC(fir, name === undefined ? {} : { name });
+      } catch (e) {
+        throw new UsageError(`--name: ${(e as Error).message}.`);
+      }
+    } else text = format === 'json' ? exportFirJson(fir) : exportFirCsv(fir);
+    if (out === undefined) io.stdout(text);
+    else {
+      writeFileAtomic(out, text);
+      io.stderr(`wrote ${out}: ${format}, ${firSummary(fir)}\n`);
+    }
+    if (!fir.accumulatorSafe)
+      io.stderr(
+        `warning: the ${fir.settings.accumulatorBits}-bit accumulator can overflow; ${fir.accumulatorNeeded} bits hold any input.\n`,
+      );
+    return 0;
+  }
+  const settings = settingsFromArgs(args, baseSettings(d));
   const built = buildImplementation(d.zpk, d.sampleRate, settings);
   if (!built.ok)
     throw new UsageError(`${built.error.message}; expected ${built.error.expected ?? 'valid settings'}.`);

@@ -8,3 +8,4 @@ export { designHash, fnv1a64, canonicalJson } from './hash.ts';
 export { float17, cInteger } from './numbers.ts';
 export { noiseLines, noiseJson, NOISE_MODEL } from './noise.ts';
 export { exportFirC, firConventionLines, firHash } from './firC.ts';
+export { exportFirJson, exportFirCsv } from './firText.ts';

@@ -331,3 +331,38 @@ export function runFirCodes(
   for (let i = 0; i < input.length; i++) output[i] = f.step(input[i]!, i);
   return { output, overflows, overflowCount };
 }
+
+/** A fixed-point FIR run block by block (state kept between blocks), counting clipped inputs and overflows. */
+export class FirStream {
+  private readonly fir: FixedFir;
+  private n = 0;
+  inputClipped = 0;
+  overflowCount = 0;
+  readonly overflows: OverflowEvent[] = [];
+
+  constructor(readonly impl: FirImplementation) {
+    this.fir = new FixedFir(impl, (e) => {
+      this.overflowCount++;
+      if (this.overflows.length < MAX_FIR_OVERFLOW_EVENTS) this.overflows.push(e);
+    });
+  }
+
+  /** Input values (full scale ±1) as data codes, rounded by the settings and saturated (counted). */
+  quantize(x: ArrayLike<number>): Int32Array {
+    const q = quantizeFirInput(this.impl, x);
+    this.inputClipped += q.clipped;
+    return q.codes;
+  }
+
+  /** Filters a block of input codes; returns the output codes. */
+  pushCodes(codes: ArrayLike<number>): Int32Array {
+    const out = new Int32Array(codes.length);
+    for (let i = 0; i < codes.length; i++) out[i] = this.fir.step(codes[i]!, this.n++);
+    return out;
+  }
+
+  /** Samples run so far. */
+  get samples(): number {
+    return this.n;
+  }
+}

@@ -59,6 +59,7 @@ export {
   quantizeFirInput,
   runFirCodes,
   FixedFir,
+  FirStream,
   DEFAULT_FIR_SETTINGS,
   TAP_SYMMETRY_TOLERANCE,
   MAX_FIR_OVERFLOW_EVENTS,
