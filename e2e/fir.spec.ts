@@ -19,6 +19,7 @@ import {
 import { zpkToTf } from '../src/core/system/transferFunction.ts';
 import { clickRoot, dragRoot, rootAt } from './support/plane.ts';
 import type { Page } from '@playwright/test';
+import { exportPreview, openTarget } from './support/target.ts';
 
 test('an equiripple low-pass of the least order designed in the page has linear phase and meets its mask', async ({
   page,
@@ -180,4 +181,45 @@ test('a zero of an equiripple low-pass dragged with the mouse keeps linear phase
   await page.keyboard.press('Control+Shift+z');
   await expect(note).toBeVisible();
   await saveScreenshot(page, info, 'fir-linear-phase-restored');
+});
+
+test('the Target page runs an FIR as taps: form, accumulator and output checks, the taps exported', async ({
+  page,
+}, info) => {
+  await openWorkbench(page);
+  await designEquiripple(page);
+  const order = (await readDesign(page)).poles[0]!.multiplicity;
+  const L = order + 1;
+  await openTarget(page);
+  const part = page.getByTestId('fir-part');
+  await expect(part).toContainText(`runs as a line of ${L} taps (symmetric taps, linear phase)`);
+  await expect(part.getByRole('radio', { name: /^Symmetric/ })).toBeChecked();
+  await expect(part).toContainText(`${Math.floor(L / 2) + (L % 2)} multiplies per sample`);
+  await expect(part).toContainText('summed exactly in 17 bits (one bit of headroom)');
+  // the default 40-bit accumulator holds any input; the pass band's gain above 1 can overflow the output
+  await expect(page.getByTestId('fir-accumulator')).toContainText('no input can overflow it');
+  await expect(page.getByTestId('fir-gain')).toContainText('the output word can overflow');
+  await expect(page.getByTestId('fir-worst')).toContainText(': 0 accumulator overflows');
+  await expect(page.getByTestId('fir-quantization')).toContainText('Quantized response');
+  const c = await exportPreview(page, 'C header');
+  expect(c).toContain(`_TAPS ${L}`);
+  expect(c).toContain('symmetric form: acc += c[k] (x[n-k] + x[n-');
+
+  // a narrow accumulator: the page says sums can overflow it and the worst input's run shows them
+  const acc = page.getByRole('textbox', { name: 'Accumulator' });
+  await acc.fill('31');
+  await acc.press('Enter');
+  await expect(page.getByTestId('fir-accumulator')).toContainText('sums can overflow it');
+  await expect(page.getByTestId('fir-worst')).toContainText(/: [1-9][0-9]* accumulator overflows/);
+
+  // the direct form, kept with the design and undoable
+  await part.getByRole('radio', { name: /^Direct/ }).check();
+  expect((await readDesign(page)).implementation).toMatchObject({ firForm: 'direct', accumulatorBits: 31 });
+  const csv = await exportPreview(page, 'CSV');
+  expect(csv).toContain(
+    `# direct form: acc += c[k] x[n-k] for k = 0 .. ${L - 1}, in that order; ${L} multiplies`,
+  );
+  await saveScreenshot(page, info, 'fir-target');
+  await page.keyboard.press('Control+z');
+  await expect(part.getByRole('radio', { name: /^Symmetric/ })).toBeChecked();
 });

@@ -1,19 +1,19 @@
 /**
  * FIR designs on the command line: `export` and `simulate --fixed` take a design whose poles all sit at the
  * origin to the FIR implementations (core/fixed/fir.ts) instead of second-order sections. `--structure
- * fir-symmetric` or `fir-direct` picks the form; without --structure an FIR design takes the symmetric form
- * when its taps are symmetric or antisymmetric, the direct form otherwise, and `--structure df1|df2t` still
+ * fir-symmetric` or `fir-direct` picks the form; without --structure an FIR design takes the form its file's
+ * settings name, else the symmetric form when its taps are symmetric or antisymmetric, the direct form otherwise, and `--structure df1|df2t` still
  * runs it as sections. The word, fraction, data-word, accumulator, rounding and overflow flags apply as they
  * do to sections; the sections-only flags are refused.
  */
+import { type ImplementationSettings } from '../core/fixed/index.ts';
 import {
   buildFirImplementation,
-  tapSymmetry,
+  firFormFor,
+  firTapsOf,
   type FirForm,
   type FirImplementation,
-  type ImplementationSettings,
-} from '../core/fixed/index.ts';
-import { zpkToTf } from '../core/system/transferFunction.ts';
+} from '../core/fixed/fir.ts';
 import { UsageError, type ParsedArgs } from './args.ts';
 import type { CliDesign } from './designInput.ts';
 import { baseSettings, settingsFromArgs } from './implementationFlags.ts';
@@ -27,22 +27,9 @@ export const FIR_STRUCTURES: Record<string, FirForm> = {
 /** Flags that shape sections only. */
 const SECTION_ONLY_FLAGS = ['scaling', 'ordering', 'gain', 'pairing', 'feedback'] as const;
 
-/**
- * The FIR's taps, when every pole of the design sits at the origin (typed coefficients as given; else the
- * roots multiplied out, delayed by the poles beyond the zeros); null for any other design.
- */
+/** The FIR's taps (typed coefficients as given, or the roots multiplied out), or null for any other design. */
 export function firTaps(d: CliDesign): number[] | null {
-  if (d.typed) {
-    const { b, a } = d.typed;
-    if (a.length === 0 || a[0] === 0 || a.slice(1).some((v) => v !== 0)) return null;
-    return b.map((v) => v / a[0]!);
-  }
-  const { zpk } = d;
-  if (zpk.poles.length === 0 || zpk.poles.some((p) => p.re !== 0 || p.im !== 0)) return null;
-  const count = (rs: typeof zpk.zeros) => rs.reduce((n, r) => n + (r.im > 0 ? 2 : 1) * r.multiplicity, 0);
-  const extra = count(zpk.poles) - count(zpk.zeros);
-  if (extra < 0) return null; // more zeros than poles: not causal
-  return [...new Array<number>(extra).fill(0), ...zpkToTf(zpk).b];
+  return firTapsOf(d.zpk, d.typed);
 }
 
 /**
@@ -69,7 +56,7 @@ export function firImplementationOf(args: ParsedArgs, d: CliDesign): FirImplemen
   const rest: ParsedArgs = { ...args, flags: new Map(args.flags) };
   rest.flags.delete('structure');
   const s: ImplementationSettings = settingsFromArgs(rest, baseSettings(d));
-  const form: FirForm = asked ?? (tapSymmetry(taps) === 'none' ? 'direct' : 'symmetric');
+  const form: FirForm = firFormFor(taps, asked ?? s.firForm);
   const built = buildFirImplementation(taps, d.sampleRate, {
     form,
     wordLength: s.wordLength,

@@ -14,9 +14,9 @@ import {
   qName,
   roundoffNoise,
   DEFAULT_SIGNAL_AMPLITUDE,
-  FirStream,
   type Implementation,
 } from '../../core/fixed/index.ts';
+import { FirStream } from '../../core/fixed/fir.ts';
 import { firImplementationOf } from '../firImplementation.ts';
 import { UsageError, intFlag, numberFlag, rateFlag, type ParsedArgs } from '../args.ts';
 import { refuseOverwritingInputs, writeAtomically } from '../output.ts';

@@ -8,7 +8,8 @@
 import { fnv1a64, canonicalJson } from './hash.ts';
 import { cInteger, float17 } from './numbers.ts';
 import { helpers, IDENT, type CExportOptions } from './c.ts';
-import { qName, type FirImplementation } from '../fixed/index.ts';
+import { qName } from '../fixed/index.ts';
+import { type FirImplementation } from '../fixed/fir.ts';
 
 const ROUNDING = {
   nearest: 'round to nearest, ties toward +infinity (add bit n-1 of the accumulator after the shift)',

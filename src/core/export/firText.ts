@@ -1,5 +1,6 @@
 /** JSON and CSV exports of an FIR implementation (core/fixed/fir.ts): the taps as floats and as codes. */
-import { qName, type FirImplementation } from '../fixed/index.ts';
+import { qName } from '../fixed/index.ts';
+import { type FirImplementation } from '../fixed/fir.ts';
 import { firConventionLines, firHash } from './firC.ts';
 import { float17 } from './numbers.ts';
 import { write, type Json } from './json.ts';

@@ -16,7 +16,8 @@
  * so the codes are exactly symmetric. The direct form uses the same codes, so both forms compute the same
  * filter, and give identical outputs whenever no sum overflows (the order of additions then does not matter).
  */
-import type { InputError, Result } from '../types.ts';
+import type { InputError, Result, Root, TransferFunction, Zpk } from '../types.ts';
+import { zpkToTf } from '../system/transferFunction.ts';
 import { makeArith, makeBigArith, type Arith } from './arith.ts';
 import type { OverflowEvent } from './kernel.ts';
 import { autoFractionBits, codeRange, quantizeValue, type QFormat } from './qformat.ts';
@@ -245,6 +246,29 @@ function firArith(impl: FirImplementation): Arith<number> | Arith<bigint> {
   return bits <= 52 && s.accumulatorBits <= 52 ? makeArith(path, s.wordLength) : makeBigArith(path);
 }
 
+/**
+ * The taps of an FIR design: typed coefficients as given (when the denominator is a0 alone), else the roots
+ * multiplied out when every pole sits at the origin, delayed by the poles beyond the zeros; null for any
+ * other design (a pole elsewhere, or more zeros than poles: not causal).
+ */
+export function firTapsOf(zpk: Zpk, typed: TransferFunction | null = null): number[] | null {
+  if (typed) {
+    const { b, a } = typed;
+    if (a.length === 0 || a[0] === 0 || a.slice(1).some((v) => v !== 0)) return null;
+    return b.map((v) => v / a[0]!);
+  }
+  if (zpk.poles.length === 0 || zpk.poles.some((p) => p.re !== 0 || p.im !== 0)) return null;
+  const count = (rs: readonly Root[]) => rs.reduce((n, r) => n + (r.im > 0 ? 2 : 1) * r.multiplicity, 0);
+  const extra = count(zpk.poles) - count(zpk.zeros);
+  if (extra < 0) return null;
+  return [...new Array<number>(extra).fill(0), ...zpkToTf(zpk).b];
+}
+
+/** The form an FIR takes: the one asked for, else symmetric when the taps allow it, direct otherwise. */
+export function firFormFor(taps: readonly number[], asked?: FirForm): FirForm {
+  return asked ?? (tapSymmetry(taps) === 'none' ? 'direct' : 'symmetric');
+}
+
 /** A running fixed-point FIR with its delay line (the last L input codes). */
 export class FixedFir {
   private readonly ar: Arith<number> | Arith<bigint>;
@@ -365,4 +389,47 @@ export class FirStream {
   get samples(): number {
     return this.n;
   }
+}
+
+/**
+ * The largest |H_q(e^jω) − H(e^jω)| between the quantized taps (codes / 2^F) and the taps implemented, over
+ * `points` frequencies from 0 to π, and where it is (ω in rad/sample).
+ */
+export function firQuantizationError(
+  impl: FirImplementation,
+  points = 512,
+): { largest: number; omega: number } {
+  const scale = 2 ** -impl.format.fractionBits;
+  let largest = 0;
+  let at = 0;
+  for (let i = 0; i < points; i++) {
+    const w = (Math.PI * i) / (points - 1);
+    let re = 0;
+    let im = 0;
+    for (let k = 0; k < impl.taps.length; k++) {
+      const d = impl.codes[k]! * scale - impl.taps[k]!;
+      re += d * Math.cos(w * k);
+      im -= d * Math.sin(w * k);
+    }
+    const m = Math.hypot(re, im);
+    if (m > largest) {
+      largest = m;
+      at = w;
+    }
+  }
+  return { largest, omega: at };
+}
+
+/**
+ * The input that drives the accumulator furthest: every sample at full scale against the sign of the tap it
+ * meets at samples 2L−1 and 3L−1, where the sum reaches about −Σ|c|·2^(D−1).
+ */
+export function firWorstInput(impl: FirImplementation): Int32Array {
+  const L = impl.codes.length;
+  const { min, max } = codeRange(impl.settings.dataWordLength);
+  const x = new Int32Array(3 * L);
+  // at t = 2L − 1 (and L later) tap k meets x[t − k]: give it the opposite sign of c[k] (the negative full
+  // scale is the larger), so the sum is −Σ|c|·2^(D−1) up to the taps met by the positive full scale
+  for (let n = 0; n < x.length; n++) x[n] = impl.codes[(((2 * L - 1 - n) % L) + L) % L]! >= 0 ? min : max;
+  return x;
 }

@@ -52,16 +52,5 @@ export {
 } from './arrangements.ts';
 export type { Arrangement, Headroom } from './arrangements.ts';
 export { containerFormat, containerBits, codesToValues } from './codes.ts';
-export {
-  buildFirImplementation,
-  validateFirSettings,
-  tapSymmetry,
-  quantizeFirInput,
-  runFirCodes,
-  FixedFir,
-  FirStream,
-  DEFAULT_FIR_SETTINGS,
-  TAP_SYMMETRY_TOLERANCE,
-  MAX_FIR_OVERFLOW_EVENTS,
-} from './fir.ts';
-export type { FirForm, FirSettings, FirImplementation, TapSymmetry } from './fir.ts';
+// The FIR forms (fir.ts) are imported from their own module, not from here: this index is in the page's
+// first view, and every module it names is built into it.

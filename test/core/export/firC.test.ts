@@ -13,7 +13,7 @@ import {
   runFirCodes,
   type FirImplementation,
   type FirSettings,
-} from '../../../src/core/fixed/index.ts';
+} from '../../../src/core/fixed/fir.ts';
 import { exportFirC } from '../../../src/core/export/index.ts';
 import { filterTf } from '../../../src/core/time/filter.ts';
 import { compileFilter, requireToolchain, type CTarget } from '../../helpers/cProgram.ts';

@@ -5,9 +5,11 @@ import {
   quantizeFirInput,
   runFirCodes,
   tapSymmetry,
+  firQuantizationError,
+  firWorstInput,
   type FirImplementation,
   type FirSettings,
-} from '../../../src/core/fixed/index.ts';
+} from '../../../src/core/fixed/fir.ts';
 import { differentiator21, lopsided16, lowpass41, lowpass42 } from '../../helpers/firDesigns.ts';
 import { overflowInputs } from '../../helpers/fixedDesigns.ts';
 
@@ -138,5 +140,23 @@ describe('fixed-point FIR', () => {
         form: 'symmetric',
       }).ok,
     ).toBe(false);
+  });
+
+  it('the worst input the page runs reaches the stated accumulator width, and the response error its bound', () => {
+    for (const form of ['direct', 'symmetric'] as const) {
+      const need = implement(lowpass42, { form, accumulatorBits: 48 }).accumulatorNeeded;
+      const fits = implement(lowpass42, { form, accumulatorBits: need });
+      const x = firWorstInput(fits);
+      expect(runFirCodes(fits, x).overflows.filter((e) => e.place === 'accumulator')).toEqual([]);
+      const tight = implement(lowpass42, { form, accumulatorBits: need - 1 });
+      expect(runFirCodes(tight, firWorstInput(tight)).overflows.some((e) => e.place === 'accumulator')).toBe(
+        true,
+      );
+    }
+    // common practice: rounding each tap to nearest moves it by at most half a step, so |H_q − H| ≤ L·2^−(F+1)
+    const impl = implement(lowpass41, { wordLength: 10 });
+    const q = firQuantizationError(impl);
+    expect(q.largest).toBeGreaterThan(0);
+    expect(q.largest).toBeLessThanOrEqual(41 * 2 ** -(impl.format.fractionBits + 1));
   });
 });
