@@ -7,7 +7,7 @@ import type { Root } from '../core/types.ts';
 import type { LinearPhaseShape } from '../core/design/fir/linearPhaseEdit.ts';
 import type { WorkbenchState } from './store.ts';
 import { memoLast } from './memo.ts';
-import { firWithDelay } from './linearPhase.ts';
+import { firWithDelay } from '../core/design/fir/linearPhaseDesign.ts';
 
 export interface LinearPhaseStatus {
   /** Linear phase, with its constant delay in samples. */

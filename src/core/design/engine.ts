@@ -22,6 +22,7 @@ import { designComb, designHarmonicNotches } from './comb.ts';
 import { designDcBlocker, designNotch, designPeak } from './notch.ts';
 import { designPeakingEq, designShelf } from './equaliser.ts';
 import { linearPhaseShape, moveKeepingLinearPhase, restoreLinearPhase } from './fir/linearPhaseEdit.ts';
+import { moveDesignKeepingLinearPhase, restoreLinearPhaseDesign } from './fir/linearPhaseDesign.ts';
 
 /** Equiripple taps of an operator, refusing what the exchange cannot settle. */
 function operatorTaps(order: number, band: FirBand, kind: 'differentiator' | 'hilbert') {
@@ -86,4 +87,6 @@ export const DESIGN_ENGINE: DesignEngine = {
   linearPhaseShape,
   moveKeepingLinearPhase,
   restoreLinearPhase,
+  moveDesignKeepingLinearPhase,
+  restoreLinearPhaseDesign,
 };
