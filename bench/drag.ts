@@ -44,8 +44,14 @@ export const TAB_LABEL: Record<(typeof TABS)[number], string> = {
 const env = (k: string) => process.env[k]?.trim() || undefined;
 const list = (k: string, all: readonly string[]) => env(k)?.split(',') ?? [...all];
 const STEPS = Number(env('PW_DRAG_STEPS') ?? 120);
-/** Orders to drag at; 'auto' is an auto-order elliptic design (the costliest designer to run again). */
-const ORDERS = list('PW_DRAG_ORDERS', ['2', '8', '32', '64']).map((o) => (o === 'auto' ? 'auto' : Number(o)));
+/**
+ * Orders to drag at; 'auto' is an auto-order elliptic design (the costliest designer to run again);
+ * 'fir128' an order-128 equiripple FIR low-pass, whose dragged zero takes its reciprocal partner along.
+ */
+type Order = number | 'auto' | 'fir128';
+const ORDERS: Order[] = list('PW_DRAG_ORDERS', ['2', '8', '32', '64', 'fir128']).map((o) =>
+  o === 'auto' || o === 'fir128' ? o : Number(o),
+);
 const TAB_IDS = list('PW_DRAG_TABS', TABS) as (typeof TABS)[number][];
 const RECORDING = list('PW_DRAG_RECORDING', ['off', 'on']);
 const SHADING = list('PW_DRAG_SHADING', ['off', 'on']);
@@ -55,32 +61,44 @@ const FIRST_PORT = Number(env('PW_BENCH_PORT') ?? 4412);
  * An order-N Butterworth low-pass at 48 kHz (N/2 pole pairs, N zeros at z = −1) designed by the engine with
  * its requirement (pass band to 4 kHz, stop band from 8 kHz), so the designer's status and the mask are live.
  */
-function designOfOrder(order: number | 'auto'): Design {
+function designOfOrder(order: Order): Design {
   const spec: DesignerSpec =
-    order === 'auto'
-      ? {
+    order === 'fir128'
+      ? ({
           kind: 'iir',
           fs: FS,
-          family: 'elliptic',
+          family: 'equiripple',
           response: 'lowpass',
-          order: 'auto',
+          order: 128,
           passbandHz: [4000],
-          stopbandHz: [4400],
-          rippleDb: 0.5,
-          attenuationDb: 80,
-        }
-      : {
-          kind: 'iir',
-          fs: FS,
-          family: 'butterworth',
-          response: 'lowpass',
-          order,
-          edgesHz: [6000],
-          passbandHz: [4000],
-          stopbandHz: [8000],
+          stopbandHz: [5000],
           rippleDb: 1,
-          attenuationDb: 40,
-        };
+          attenuationDb: 60,
+        } as DesignerSpec)
+      : order === 'auto'
+        ? {
+            kind: 'iir',
+            fs: FS,
+            family: 'elliptic',
+            response: 'lowpass',
+            order: 'auto',
+            passbandHz: [4000],
+            stopbandHz: [4400],
+            rippleDb: 0.5,
+            attenuationDb: 80,
+          }
+        : {
+            kind: 'iir',
+            fs: FS,
+            family: 'butterworth',
+            response: 'lowpass',
+            order,
+            edgesHz: [6000],
+            passbandHz: [4000],
+            stopbandHz: [8000],
+            rippleDb: 1,
+            attenuationDb: 40,
+          };
   const r = runDesigner(spec);
   if (!r.ok) throw new Error(`bench design of order ${order}: ${r.error.message}`);
   const mask = maskFromDesigner(spec);
@@ -202,14 +220,40 @@ interface Result {
   load: number;
 }
 
-/** One drag of pole 0 (see the file comment), with the trace of it. */
+/**
+ * What a drag moves: pole 0, or for an FIR (every pole at the origin) the first zero of a quadruplet inside
+ * the circle (its reciprocal partner moves with it).
+ */
+function dragTarget(): { kind: 'pole' | 'zero'; index: number } {
+  const d = window.__polewright!.design();
+  if (!d.poles.every((p) => p.re === 0 && p.im === 0)) return { kind: 'pole', index: 0 };
+  const index = d.zeros.findIndex((z) => {
+    const r2 = z.re * z.re + z.im * z.im;
+    return (
+      z.im > 0 && r2 < 0.98 && d.zeros.some((w) => Math.hypot(w.re - z.re / r2, w.im - z.im / r2) < 1e-6)
+    );
+  });
+  return { kind: 'zero', index };
+}
+
+/** One drag of pole 0, or of an FIR's quadruplet zero (see the file comment), with the trace of it. */
 export async function dragOnce(
   page: Page,
   hooks: { moves?: (run: () => Promise<void>) => Promise<void> } = {},
 ): Promise<Result & { events: TraceEvent[] }> {
-  await page.evaluate(installDragProbe, POLE);
-  // From the pole where it is, along its own circle 40° up and back (every step a new place).
-  const pole = await page.evaluate(() => window.__polewright!.design().poles[0]!);
+  const target = await page.evaluate(dragTarget);
+  if (target.index < 0) throw new Error('bench: the FIR design has no quadruplet of zeros to drag');
+  await page.evaluate(
+    installDragProbe,
+    target.kind === 'pole'
+      ? POLE
+      : `svg.pw-plane-svg g[data-kind="zero"][data-index="${target.index}"]:not([data-mirror])`,
+  );
+  // From the root where it is, along its own circle 40° up and back (every step a new place).
+  const pole = await page.evaluate((t) => {
+    const d = window.__polewright!.design();
+    return (t.kind === 'pole' ? d.poles : d.zeros)[t.index]!;
+  }, target);
   const r = Math.hypot(pole.re, pole.im);
   const theta = Math.atan2(pole.im, pole.re);
   const arc = Array.from({ length: STEPS + 1 }, (_, i) => {
@@ -243,7 +287,7 @@ export async function dragOnce(
 export async function openPage(
   browser: Browser,
   b: Build,
-  order: number | 'auto',
+  order: Order,
   recording: string | null,
 ): Promise<Page> {
   const css = env('PW_DRAG_CSS');
@@ -333,7 +377,7 @@ export async function benchDrag(): Promise<string> {
     }
     const version = browser.version();
     return [
-      `${STEPS}-step drag of a pole pair (40° along its circle and back) of an order-N Butterworth low-pass (designer and mask live), one mouse move per frame, headless Chromium ${version} (software rendering), 1440×900; recording: a 10-minute 48 kHz 16-bit WAV loaded and shown before/after. Times in ms; load = 1-minute load average during the drag.`,
+      `${STEPS}-step drag of a pole pair (40° along its circle and back) of an order-N Butterworth low-pass (designer and mask live), or for fir128 of a zero quadruplet (its stored zero inside the circle, the reciprocal following) of an order-128 equiripple FIR low-pass, one mouse move per frame, headless Chromium ${version} (software rendering), 1440×900; recording: a 10-minute 48 kHz 16-bit WAV loaded and shown before/after. Times in ms; load = 1-minute load average during the drag.`,
       '',
       '| build | recording | order | tab | shading | main-thread CPU median | p95 | main-thread tasks (wall) median | p95 | probe frame work median | p95 | event→painted median | p95 | drawn | load |',
       '| --- | --- | --: | --- | --- | --: | --: | --: | --: | --: | --: | --: | --: | --- | --: |',

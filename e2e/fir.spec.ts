@@ -17,6 +17,9 @@ import {
   pressDesign,
 } from './support/design.ts';
 import { zpkToTf } from '../src/core/system/transferFunction.ts';
+import { clickRoot, dragRoot, rootAt } from './support/plane.ts';
+import type { Page } from '@playwright/test';
+import { exportPreview, openTarget } from './support/target.ts';
 
 test('an equiripple low-pass of the least order designed in the page has linear phase and meets its mask', async ({
   page,
@@ -62,4 +65,161 @@ test('an equiripple low-pass of the least order designed in the page has linear 
   expect(labels.length).toBeGreaterThan(0);
   for (const v of labels) expect(Math.abs(v - order / 2), `delay axis label ${v}`).toBeLessThan(order);
   await saveScreenshot(page, info, 'fir-equiripple');
+});
+
+/** Designs the least-order equiripple low-pass of the test above (pass to 100 Hz, stop from 150 Hz). */
+async function designEquiripple(page: Page) {
+  await openDesignPage(page);
+  await chooseKind(page, 'Low-pass');
+  const form = designerForm(page);
+  await form.getByLabel('Family').selectOption({ label: 'FIR, equiripple' });
+  await form.getByLabel('Least order that meets the requirement').check();
+  await fillField(page, 'Pass band up to', '100');
+  await fillField(page, 'Stop band from', '150');
+  await fillField(page, 'Pass-band loss at most', '1');
+  await fillField(page, 'Stop band down by at least', '60');
+  await pressDesign(page);
+}
+
+/**
+ * How far the taps are from symmetric or antisymmetric, relative to the largest (common practice: a real
+ * FIR has linear phase exactly when its taps are one or the other).
+ */
+async function tapAsymmetry(page: Page): Promise<number> {
+  const { zpk } = await designZpk(page);
+  const { b } = zpkToTf(zpk);
+  const big = Math.max(...b.map(Math.abs));
+  let sym = 0;
+  let anti = 0;
+  for (let n = 0; n < b.length; n++) {
+    sym = Math.max(sym, Math.abs(b[n]! - b[b.length - 1 - n]!));
+    anti = Math.max(anti, Math.abs(b[n]! + b[b.length - 1 - n]!));
+  }
+  return Math.min(sym, anti) / big;
+}
+
+/** A stored zero of a quadruplet inside the circle (off it, a pair) and its reciprocal partner's index. */
+function quadruplet(zeros: readonly { re: number; im: number }[]): [number, number] {
+  for (let i = 0; i < zeros.length; i++) {
+    const z = zeros[i]!;
+    const r2 = z.re * z.re + z.im * z.im;
+    if (z.im <= 0 || r2 > 0.99) continue;
+    const j = zeros.findIndex((w) => Math.hypot(w.re - z.re / r2, w.im - z.im / r2) < 1e-6);
+    if (j >= 0) return [i, j];
+  }
+  throw new Error('the design has no quadruplet of zeros');
+}
+
+test('a zero of an equiripple low-pass dragged with the mouse keeps linear phase; a broken set is offered back', async ({
+  page,
+}, info) => {
+  await openWorkbench(page);
+  await designEquiripple(page);
+  const d = await readDesign(page);
+  const order = d.poles[0]!.multiplicity;
+  const note = page.getByTestId('linear-phase');
+  await expect(note).toContainText('Linear phase');
+  await expect(page.getByTestId('linear-phase-delay')).toHaveText(String(order / 2));
+  await showDelayPlot(page);
+  await expect(page.getByTestId('constant-delay')).toContainText(`constant ${order / 2} samples`);
+
+  // drag the quadruplet's inner zero with the mouse: its reciprocal follows
+  const [i, j] = quadruplet(d.zeros);
+  const z0 = d.zeros[i]!;
+  const to = { re: z0.re - 0.12, im: z0.im + 0.1 };
+  await dragRoot(page, { kind: 'zero', index: i }, to, { steps: 15 });
+  const z = await rootAt(page, { kind: 'zero', index: i });
+  expect(Math.hypot(z.re - to.re, z.im - to.im), 'the dragged zero is under the pointer').toBeLessThan(0.02);
+  const w = await rootAt(page, { kind: 'zero', index: j });
+  const r2 = z.re * z.re + z.im * z.im;
+  expect(Math.hypot(w.re - z.re / r2, w.im - z.im / r2), 'its partner sits at 1/z*').toBeLessThan(1e-12);
+  // the taps multiplied out of ~76 zeros round by ~1e-11 of the largest (the designed ones too)
+  expect(await tapAsymmetry(page)).toBeLessThan(1e-9);
+  await expect(note).toContainText('Linear phase');
+  await expect(page.getByTestId('linear-phase-delay')).toHaveText(String(order / 2));
+  // the group delay read off the page is order/2 across the pass band, to the read-out's 1e-3 samples
+  for (const hz of [5, 25, 50, 75, 95]) {
+    await hoverFrequency(page, hz);
+    const r = await readFrequency(page);
+    expect(Math.abs(r.delaySamples - order / 2), `group delay at ${hz} Hz after the drag`).toBeLessThan(1e-3);
+  }
+
+  // a keyboard radius step (Page Up) moves the pair the same way
+  await clickRoot(page, { kind: 'zero', index: i });
+  await page.keyboard.press('PageUp');
+  const k = await rootAt(page, { kind: 'zero', index: i });
+  expect(Math.hypot(k.re, k.im)).toBeGreaterThan(Math.sqrt(r2) + 1e-4);
+  const kw = await rootAt(page, { kind: 'zero', index: j });
+  const k2 = k.re * k.re + k.im * k.im;
+  expect(Math.hypot(kw.re - k.re / k2, kw.im - k.im / k2)).toBeLessThan(1e-12);
+
+  // deleting one member of the quadruplet breaks linear phase: the page says so and offers it back
+  await clickRoot(page, { kind: 'zero', index: j });
+  await page.keyboard.press('Delete');
+  const broken = page.getByTestId('linear-phase-broken');
+  await expect(broken).toContainText('Linear phase lost: one zero has no reciprocal partner');
+  await expect(page.getByTestId('constant-delay')).toHaveCount(0);
+  expect(await tapAsymmetry(page)).toBeGreaterThan(1e-3);
+  await broken.scrollIntoViewIfNeeded();
+  await saveScreenshot(page, info, 'fir-linear-phase-lost');
+  await broken.getByRole('button', { name: 'Restore linear phase' }).click();
+  await expect(note).toContainText('Linear phase');
+  await expect(page.getByTestId('linear-phase-delay')).toHaveText(String(order / 2));
+  expect(await tapAsymmetry(page)).toBeLessThan(1e-9);
+  const restored = await readDesign(page);
+  expect(restored.zeros).toHaveLength(d.zeros.length);
+  // the partner given back is the design's own zero again, not a part placed by hand
+  expect(restored.parts).toBeUndefined();
+  expect(restored.designer).toMatchObject({ family: 'equiripple' });
+  for (const hz of [25, 75]) {
+    await hoverFrequency(page, hz);
+    expect(Math.abs((await readFrequency(page)).delaySamples - order / 2)).toBeLessThan(1e-3);
+  }
+  // the restore is one undo step
+  await page.keyboard.press('Control+z');
+  await expect(broken).toBeVisible();
+  await page.keyboard.press('Control+Shift+z');
+  await expect(note).toBeVisible();
+  await saveScreenshot(page, info, 'fir-linear-phase-restored');
+});
+
+test('the Target page runs an FIR as taps: form, accumulator and output checks, the taps exported', async ({
+  page,
+}, info) => {
+  await openWorkbench(page);
+  await designEquiripple(page);
+  const order = (await readDesign(page)).poles[0]!.multiplicity;
+  const L = order + 1;
+  await openTarget(page);
+  const part = page.getByTestId('fir-part');
+  await expect(part).toContainText(`runs as a line of ${L} taps (symmetric taps, linear phase)`);
+  await expect(part.getByRole('radio', { name: /^Symmetric/ })).toBeChecked();
+  await expect(part).toContainText(`${Math.floor(L / 2) + (L % 2)} multiplies per sample`);
+  await expect(part).toContainText('summed exactly in 17 bits (one bit of headroom)');
+  // the default 40-bit accumulator holds any input; the pass band's gain above 1 can overflow the output
+  await expect(page.getByTestId('fir-accumulator')).toContainText('no input can overflow it');
+  await expect(page.getByTestId('fir-gain')).toContainText('the output word can overflow');
+  await expect(page.getByTestId('fir-worst')).toContainText(': 0 accumulator overflows');
+  await expect(page.getByTestId('fir-quantization')).toContainText('Quantized response');
+  const c = await exportPreview(page, 'C header');
+  expect(c).toContain(`_TAPS ${L}`);
+  expect(c).toContain('symmetric form: acc += c[k] (x[n-k] + x[n-');
+
+  // a narrow accumulator: the page says sums can overflow it and the worst input's run shows them
+  const acc = page.getByRole('textbox', { name: 'Accumulator' });
+  await acc.fill('31');
+  await acc.press('Enter');
+  await expect(page.getByTestId('fir-accumulator')).toContainText('sums can overflow it');
+  await expect(page.getByTestId('fir-worst')).toContainText(/: [1-9][0-9]* accumulator overflows/);
+
+  // the direct form, kept with the design and undoable
+  await part.getByRole('radio', { name: /^Direct/ }).check();
+  expect((await readDesign(page)).implementation).toMatchObject({ firForm: 'direct', accumulatorBits: 31 });
+  const csv = await exportPreview(page, 'CSV');
+  expect(csv).toContain(
+    `# direct form: acc += c[k] x[n-k] for k = 0 .. ${L - 1}, in that order; ${L} multiplies`,
+  );
+  await saveScreenshot(page, info, 'fir-target');
+  await page.keyboard.press('Control+z');
+  await expect(part.getByRole('radio', { name: /^Symmetric/ })).toBeChecked();
 });

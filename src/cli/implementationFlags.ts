@@ -31,7 +31,7 @@ export const IMPLEMENTATION_FLAGS = [
 
 /** Their usage text, for the help. */
 export const IMPLEMENTATION_USAGE =
-  '[--structure df1|df2t] [--word 8..32] [--fraction auto|N] [--data-word 8..32] [--accumulator N]\n' +
+  '[--structure df1|df2t|fir-direct|fir-symmetric] [--word 8..32] [--fraction auto|N] [--data-word 8..32] [--accumulator N]\n' +
   '                      [--rounding nearest|truncate] [--overflow saturate|wrap] [--scaling linf|l2|l1|none]\n' +
   '                      [--ordering ascending|descending] [--gain first|spread] [--pairing nearest|keep-odd]\n' +
   '                      [--feedback denominator|negated]';

@@ -43,7 +43,7 @@ usage:
                       [--amplitude A] [--input-units full-scale|codes] [--samples N] [--json]
                       [--output <file.wav|file.csv>] [--channel N] [--input-rate <Hz>]
                       ${IMPLEMENTATION_USAGE}
-  polewright export   <design> [--format c|json|csv] [--name <C prefix>] [--out <file>] [--accept-warnings]
+  polewright export   <design> [--format c|json|csv] [--name <C prefix>] [--out <file>] [--allow-warnings]
                       ${IMPLEMENTATION_USAGE}
   polewright spectrum <file.wav|file.csv> [<design>] [--window hann|hamming|blackman|flattop|rectangular]
                       [--segment auto|N] [--overlap N] [--scaling density|spectrum] [--channel N] [--input-rate <Hz>]
@@ -61,7 +61,7 @@ plus --fs <Hz> (sample rate; default 1, or the file's).
  * Runs the command line; returns the process exit code: 0 ok, 2 for a usage or input error (UsageError),
  * 1 when the work could not be done for another reason (CliFailure: a file that cannot be written) and for
  * anything unexpected, which is a bug and says "internal error"; 3 when `export` wrote an output carrying
- * warnings without --accept-warnings.
+ * warnings without --allow-warnings.
  */
 export async function main(argv: string[], io: CliIo): Promise<number> {
   const [command, ...rest] = argv;

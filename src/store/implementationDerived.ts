@@ -92,9 +92,15 @@ export const selectImplementationSettings = (s: WorkbenchState): ImplementationS
   implementationOf(s.design);
 /** Whether the design carries implementation settings (then the quantized filter is drawn). */
 export const selectHasImplementation = (s: WorkbenchState): boolean => s.design.implementation !== undefined;
+/**
+ * Whether the design runs as FIR taps on the target (every pole at the origin; the Target page's FIR part):
+ * the quantized sections are then not what the target runs, so they are not drawn.
+ */
+export const selectRunsAsTaps = (s: WorkbenchState): boolean =>
+  s.design.poles.length > 0 && s.design.poles.every((p) => p.re === 0 && p.im === 0);
 /** Whether the quantized roots and response are drawn now: settings present and "show quantized" on. */
 export const selectShowQuantized = (s: WorkbenchState): boolean =>
-  s.design.implementation !== undefined && s.view.showQuantized !== false;
+  s.design.implementation !== undefined && s.view.showQuantized !== false && !selectRunsAsTaps(s);
 
 /** The design taken to fixed point with the settings in force, or why the settings do not apply. */
 export const selectImplementation = (s: WorkbenchState): Result<Implementation> =>

@@ -18,6 +18,7 @@ import { describeProblem, designProblem, type DesignProblem } from '../core/mode
 import { postNotice } from './notices.ts';
 import { closeGesture, emptyHistory, recordEdit, type History } from './history.ts';
 import * as edits from './rootEdits.ts';
+import { linearPhaseMove, restoreLinearPhaseOf } from './linearPhase.ts';
 import { defaultView, type ViewSettings, type ViewState } from './view.ts';
 import { framed } from './planeFit.ts';
 import { designerActions, type DesignerActions } from './designer.ts';
@@ -29,6 +30,10 @@ import { implementationActions, type ImplementationActions } from './implementat
 import { defaultSignalView, signalActions, type SignalActions, type SignalState } from './signal.ts';
 
 export interface DesignActions {
+  /**
+   * Moves a root (a drag's step, a keyboard step). A zero of a linear-phase FIR takes its reciprocal partner
+   * with it, so the filter stays linear phase (store/linearPhase.ts).
+   */
   moveRoot(ref: RootRef, re: number, im: number): void;
   /** Moves several roots at once (a notch's zeros and poles set by number): one undo step. */
   moveRoots(moves: readonly { ref: RootRef; re: number; im: number }[]): void;
@@ -37,6 +42,11 @@ export interface DesignActions {
   setMultiplicity(ref: RootRef, multiplicity: number): void;
   splitRoot(ref: RootRef): void;
   joinPair(ref: RootRef): void;
+  /**
+   * Gives every zero of an FIR that lost its reciprocal partner one again (linear phase back; the selected
+   * zero stays where it is); one undo step.
+   */
+  restoreLinearPhase(): void;
   setGainRule(rule: GainRule): void;
   setSampleRate(hz: number): void;
   /**
@@ -140,7 +150,12 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
       signal: defaultSignalView,
       exactChecks: exactChecksStatus(),
 
-      moveRoot: (ref, re, im) => edit((d) => edits.moveRoot(d, ref, re, im)),
+      moveRoot: (ref, re, im) =>
+        edit(
+          (d) =>
+            (ref.kind === 'zero' ? linearPhaseMove(d, ref.index, re, im) : null) ??
+            edits.moveRoot(d, ref, re, im),
+        ),
       moveRoots: (moves) => edit((d) => moves.reduce((x, m) => edits.moveRoot(x, m.ref, m.re, m.im), d)),
       addRoot: (kind, root) => {
         edit((d) => edits.addRoot(d, kind, root));
@@ -154,6 +169,10 @@ export function createWorkbenchStore(initial: Design = demoDesign()): WorkbenchS
       setMultiplicity: (ref, m) => edit((d) => edits.setMultiplicity(d, ref, m)),
       splitRoot: (ref) => edit((d) => edits.splitRoot(d, ref)),
       joinPair: (ref) => edit((d) => edits.joinPair(d, ref)),
+      restoreLinearPhase: () => {
+        const sel = get().selection;
+        edit((d) => restoreLinearPhaseOf(d, sel?.kind === 'zero' ? sel.index : null));
+      },
       setGainRule: (rule) => edit((d) => ({ ...d, gainRule: rule })),
       setSampleRate: (hz) => {
         if (!(hz > 0 && hz <= MAX_SAMPLE_RATE)) return;

@@ -85,6 +85,7 @@ export function worstCaseDesign(c: string): Design {
       gainDistribution: 'spread',
       pairing: 'keep-odd',
       feedbackSign: 'negated',
+      firForm: 'symmetric',
     },
   };
 }

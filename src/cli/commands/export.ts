@@ -4,12 +4,24 @@
  *
  * Warnings (core/export/warnings.ts) are written into the output itself and listed on stderr; while any are
  * present the command exits with EXPORT_WARNINGS_EXIT (the output is still written, so it can be read),
- * unless --accept-warnings says the user knows and takes the file as it is.
+ * unless --allow-warnings says the user knows and takes the file as it is.
  */
 import { buildImplementation, qName, type Implementation } from '../../core/fixed/index.ts';
-import { exportC, exportCsv, exportJson, exportWarnings, warningLine } from '../../core/export/index.ts';
+import {
+  exportC,
+  exportCsv,
+  exportFirC,
+  exportFirCsv,
+  exportFirJson,
+  exportJson,
+  exportWarnings,
+  firExportWarnings,
+  warningLine,
+  type ExportWarning,
+} from '../../core/export/index.ts';
 import { evaluateMask, type MaskResult, type RequirementMask } from '../../core/mask/index.ts';
 import { shortNumber } from '../../core/shortNumber.ts';
+import { firImplementationOf, firSummary } from '../firImplementation.ts';
 import { UsageError, parseArgs } from '../args.ts';
 import { DESIGN_FLAGS, readDesign } from '../designInput.ts';
 import { IMPLEMENTATION_FLAGS, baseSettings, choiceFlag, settingsFromArgs } from '../implementationFlags.ts';
@@ -22,7 +34,7 @@ export const EXPORT_WARNINGS_EXIT = 3;
 /** Warnings listed one by one on stderr; the output itself lists every one. */
 const STDERR_WARNINGS = 20;
 /** The switch that takes an export with warnings as it is (exit 0). */
-export const ACCEPT_WARNINGS = 'accept-warnings';
+export const ACCEPT_WARNINGS = 'allow-warnings';
 
 /** "PASS" or "FAIL by 1.1 dB at 50 Hz" for a mask verdict. */
 function verdictWords(v: MaskResult): string {
@@ -56,8 +68,33 @@ export function runExport(argv: string[], io: CliIo): number {
   const out = args.flags.get('out');
   if (out !== undefined)
     refuseOverwritingInputs(out, '--out', [input !== undefined && !linkFragment(input) ? input : undefined]);
-  const settings = settingsFromArgs(args, baseSettings(d));
   for (const note of d.notes) io.stderr(`note: ${note}\n`);
+  const fir = firImplementationOf(args, d);
+  if (fir) {
+    const mask = d.shared?.design.mask;
+    const withMask = mask ? { mask } : {};
+    let text: string;
+    if (format === 'c') {
+      const name = args.flags.get('name');
+      try {
+        text = exportFirC(fir, name === undefined ? withMask : { name, ...withMask });
+      } catch (e) {
+        throw new UsageError(`--name: ${(e as Error).message}.`);
+      }
+    } else text = format === 'json' ? exportFirJson(fir, withMask) : exportFirCsv(fir, withMask);
+    if (out === undefined) io.stdout(text);
+    else {
+      writeFileAtomic(out, text);
+      io.stderr(`wrote ${out}: ${format}, ${firSummary(fir)}\n`);
+    }
+    return warningsExit(
+      firExportWarnings(fir, mask),
+      out ?? 'standard output',
+      args.switches.has(ACCEPT_WARNINGS),
+      io,
+    );
+  }
+  const settings = settingsFromArgs(args, baseSettings(d));
   const built = buildImplementation(d.zpk, d.sampleRate, settings);
   if (!built.ok)
     throw new UsageError(`${built.error.message}; expected ${built.error.expected ?? 'valid settings'}.`);
@@ -86,12 +123,18 @@ export function runExport(argv: string[], io: CliIo): number {
         `quantized filter ${impl.stability.verdict}\n`,
     );
   for (const line of maskLines(impl, mask)) io.stderr(`${line}\n`);
-  const warnings = exportWarnings(impl, mask);
+  return warningsExit(exportWarnings(impl, mask), where, args.switches.has(ACCEPT_WARNINGS), io);
+}
+
+/**
+ * Lists an export's warnings on stderr (the first STDERR_WARNINGS; the output lists every one) and returns
+ * the exit code: 0 without warnings or when they were accepted, EXPORT_WARNINGS_EXIT otherwise.
+ */
+function warningsExit(warnings: ExportWarning[], where: string, accepted: boolean, io: CliIo): number {
   if (warnings.length === 0) return 0;
   for (const w of warnings.slice(0, STDERR_WARNINGS)) io.stderr(`warning: ${warningLine(w)}\n`);
   if (warnings.length > STDERR_WARNINGS)
     io.stderr(`… and ${warnings.length - STDERR_WARNINGS} more warning(s), all listed in the output\n`);
-  const accepted = args.switches.has(ACCEPT_WARNINGS);
   io.stderr(
     `${warnings.length} warning(s) are written into ${where}` +
       (accepted

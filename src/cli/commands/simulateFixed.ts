@@ -16,6 +16,8 @@ import {
   DEFAULT_SIGNAL_AMPLITUDE,
   type Implementation,
 } from '../../core/fixed/index.ts';
+import { FirStream } from '../../core/fixed/fir.ts';
+import { firImplementationOf } from '../firImplementation.ts';
 import { UsageError, intFlag, numberFlag, rateFlag, type ParsedArgs } from '../args.ts';
 import { refuseOverwritingInputs, writeAtomically } from '../output.ts';
 import { linkFragment } from '../../share/link/index.ts';
@@ -43,14 +45,12 @@ export function rejectFixedFlags(args: ParsedArgs): void {
   if (given.length > 0) throw new UsageError(`--${given[0]} applies to a fixed-point run; add --fixed.`);
 }
 
-function implementationOf(args: ParsedArgs, io: CliIo): { impl: Implementation; sampleRate: number } {
-  const d = readDesign(args);
-  for (const note of d.notes) io.stderr(`note: ${note}\n`);
+function implementationOf(args: ParsedArgs, d: ReturnType<typeof readDesign>, io: CliIo): Implementation {
   const built = buildImplementation(d.zpk, d.sampleRate, settingsFromArgs(args, baseSettings(d)));
   if (!built.ok)
     throw new UsageError(`${built.error.message}; expected ${built.error.expected ?? 'valid settings'}.`);
   for (const note of built.value.notes) io.stderr(`note: ${note}\n`);
-  return { impl: built.value, sampleRate: d.sampleRate };
+  return built.value;
 }
 
 /** Where the codes go: a file sink, or arrays kept for printing. */
@@ -160,8 +160,15 @@ function inputPlan(args: ParsedArgs, sampleRate: number, output: string | undefi
   };
 }
 
+/** What runBlocks drives: the cascade's run or the FIR's. */
+interface CodeRun {
+  impl: { settings: { dataWordLength: number } };
+  quantize(x: ArrayLike<number>): Int32Array;
+  pushCodes(codes: Int32Array): Int32Array;
+}
+
 /** Feeds the source through the run into the writer; returns the frames run. */
-async function runBlocks(run: FixedRun, plan: InputPlan, writer: CodeWriter): Promise<number> {
+async function runBlocks(run: CodeRun, plan: InputPlan, writer: CodeWriter): Promise<number> {
   const dataBits = run.impl.settings.dataWordLength;
   let frames = 0;
   for await (const block of plan.source.blocks()) {
@@ -183,13 +190,15 @@ export async function runSimulateFixed(args: ParsedArgs, io: CliIo): Promise<num
     throw new UsageError(
       '--output-format does not apply with --fixed: a WAV output holds the data-word codes in the smallest integer format that fits them.',
     );
-  const { impl, sampleRate } = implementationOf(args, io);
+  const d = readDesign(args);
+  for (const note of d.notes) io.stderr(`note: ${note}\n`);
+  const sampleRate = d.sampleRate;
+  const fir = firImplementationOf(args, d);
   const output = args.flags.get('output');
   const plan = inputPlan(args, sampleRate, output);
   const rate = () => plan.source.summary().sampleRate ?? plan.fallbackRate;
   const memory = output === undefined ? new MemoryWriter() : null;
-  const run = new FixedRun(impl);
-  const runInto = async (writer: CodeWriter) => {
+  const runInto = async (run: CodeRun, writer: CodeWriter) => {
     const n = await runBlocks(run, plan, writer);
     await writer.close(rate(), plan.source.summary().startTime);
     return n;
@@ -200,12 +209,61 @@ export async function runSimulateFixed(args: ParsedArgs, io: CliIo): Promise<num
       design !== undefined && !linkFragment(design) ? design : undefined,
     ]);
   }
-  // A file output is written beside its name and renamed over it only when the whole run succeeded.
-  const frames = memory
-    ? await runInto(memory)
-    : await writeAtomically(output!, (path) =>
-        runInto(new FileWriter(path, impl.settings.dataWordLength, rate)),
+  const runAll = (run: CodeRun, dataBits: number) =>
+    memory
+      ? runInto(run, memory)
+      : writeAtomically(output!, (path) => runInto(run, new FileWriter(path, dataBits, rate)));
+  if (fir) {
+    const run = new FirStream(fir);
+    const frames = await runAll(run, fir.settings.dataWordLength);
+    for (const note of plan.source.summary().notes) io.stderr(`note: ${note}\n`);
+    if (run.inputClipped > 0)
+      io.stderr(
+        `warning: ${run.inputClipped} input sample(s) were beyond the data word and were saturated.\n`,
       );
+    const first = run.overflows[0];
+    if (first)
+      io.stderr(
+        `warning: ${run.overflowCount} overflow event(s); the first at sample ${first.sample} ` +
+          `(${first.place === 'output' ? 'fitting the output to the data word' : 'in the accumulator'}).\n`,
+      );
+    if (args.switches.has('json')) {
+      const codes = memory ? { inputCodes: memory.input, output: memory.output } : { output };
+      io.stdout(
+        toJson({
+          sampleRate: rate(),
+          input: plan.label,
+          samples: frames,
+          structure: `fir-${fir.settings.form}`,
+          settings: fir.settings,
+          taps: fir.codes.length,
+          symmetry: fir.symmetry,
+          multipliesPerSample: fir.multiplies,
+          preAddBits: fir.preAddBits,
+          coefficientFormat: qName(fir.format),
+          dataFormat: qName(fir.dataFormat),
+          outputScale: 2 ** -(fir.settings.dataWordLength - 1),
+          accumulatorBitsNeeded: fir.accumulatorNeeded,
+          worstCaseGain: fir.worstGain,
+          inputClipped: run.inputClipped,
+          overflows: { count: run.overflowCount, listed: run.overflows },
+          ...codes,
+        }),
+      );
+      return 0;
+    }
+    if (memory) io.stdout(memory.output.join('\n') + '\n');
+    else
+      io.stderr(
+        `wrote ${output}: ${frames} sample(s) of ${fir.settings.dataWordLength}-bit codes (${qName(fir.dataFormat)}), ` +
+          `${run.overflowCount} overflow event(s)\n`,
+      );
+    return 0;
+  }
+  const impl = implementationOf(args, d, io);
+  const run = new FixedRun(impl);
+  // A file output is written beside its name and renamed over it only when the whole run succeeded.
+  const frames = await runAll(run, impl.settings.dataWordLength);
   const summary = plan.source.summary();
   for (const note of summary.notes) io.stderr(`note: ${note}\n`);
   const report = run.finish();

@@ -21,6 +21,8 @@ import { fmt } from './entries/common.ts';
 import { designComb, designHarmonicNotches } from './comb.ts';
 import { designDcBlocker, designNotch, designPeak } from './notch.ts';
 import { designPeakingEq, designShelf } from './equaliser.ts';
+import { linearPhaseShape, moveKeepingLinearPhase, restoreLinearPhase } from './fir/linearPhaseEdit.ts';
+import { moveDesignKeepingLinearPhase, restoreLinearPhaseDesign } from './fir/linearPhaseDesign.ts';
 
 /** Equiripple taps of an operator, refusing what the exchange cannot settle. */
 function operatorTaps(order: number, band: FirBand, kind: 'differentiator' | 'hilbert') {
@@ -82,4 +84,9 @@ export const DESIGN_ENGINE: DesignEngine = {
   designComb,
   designPeakingEq,
   designShelf,
+  linearPhaseShape,
+  moveKeepingLinearPhase,
+  restoreLinearPhase,
+  moveDesignKeepingLinearPhase,
+  restoreLinearPhaseDesign,
 };

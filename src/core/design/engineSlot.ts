@@ -13,6 +13,8 @@ import type { IirSpec } from './entries/classicalParameters.ts';
 import type { designComb, designHarmonicNotches } from './comb.ts';
 import type { designDcBlocker, designNotch, designPeak } from './notch.ts';
 import type { designPeakingEq, designShelf } from './equaliser.ts';
+import type { linearPhaseShape, moveKeepingLinearPhase, restoreLinearPhase } from './fir/linearPhaseEdit.ts';
+import type { moveDesignKeepingLinearPhase, restoreLinearPhaseDesign } from './fir/linearPhaseDesign.ts';
 
 export interface DesignEngine {
   /** The door: checks a description against its registry entry, designs, refuses roots that merge. */
@@ -29,6 +31,12 @@ export interface DesignEngine {
   designComb: typeof designComb;
   designPeakingEq: typeof designPeakingEq;
   designShelf: typeof designShelf;
+  /** Hand edits that keep an FIR linear phase (fir/linearPhaseEdit.ts). */
+  linearPhaseShape: typeof linearPhaseShape;
+  moveKeepingLinearPhase: typeof moveKeepingLinearPhase;
+  restoreLinearPhase: typeof restoreLinearPhase;
+  moveDesignKeepingLinearPhase: typeof moveDesignKeepingLinearPhase;
+  restoreLinearPhaseDesign: typeof restoreLinearPhaseDesign;
 }
 
 /** Thrown by a design that needs the engine before it is installed. */

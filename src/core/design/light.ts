@@ -8,4 +8,4 @@ export { runDesigner } from './door.ts';
 export type { DesignerSpec, DesignResult } from './spec.ts';
 export { designerShape, type DesignerShape, type ParameterShape } from './shapes.ts';
 export { orderMax } from './parameters.ts';
-export { DesignEnginePending, designEngineReady, installDesignEngine } from './engineSlot.ts';
+export { DesignEnginePending, designEngine, designEngineReady, installDesignEngine } from './engineSlot.ts';

@@ -5,12 +5,12 @@
  * with the simulation. Only C99 with <stdint.h> is assumed: no right shift of a negative value, no signed
  * overflow, no conversion of an out-of-range value to a signed type.
  */
-import type { Implementation } from '../fixed/index.ts';
+import type { Implementation, ImplementationSettings } from '../fixed/index.ts';
 import { conventionLines, structureName } from './conventions.ts';
 import { cInteger, float17 } from './numbers.ts';
 import { noiseLines } from './noise.ts';
 import type { RequirementMask } from '../mask/index.ts';
-import { exportWarnings, warningLine } from './warnings.ts';
+import { exportWarnings, warningLine, type ExportWarning } from './warnings.ts';
 
 /** Options of the C export. */
 export interface CExportOptions {
@@ -20,9 +20,16 @@ export interface CExportOptions {
   mask?: RequirementMask;
 }
 
-const IDENT = /^[A-Za-z_][A-Za-z0-9_]*$/;
+export const IDENT = /^[A-Za-z_][A-Za-z0-9_]*$/;
 
-function helpers(impl: Implementation, p: string, P: string): string {
+/** What the integer helpers depend on: the data path's settings and the post-shift (IIR and FIR alike). */
+export interface DataPathOf {
+  settings: Pick<ImplementationSettings, 'overflow' | 'accumulatorBits' | 'rounding' | 'dataWordLength'>;
+  postShift: number;
+}
+
+/** The C helpers of the data path: fit, accumulate, shift back to data (the rules of core/fixed/arith.ts). */
+export function helpers(impl: DataPathOf, p: string, P: string): string {
   const s = impl.settings;
   const sat = s.overflow === 'saturate';
   const fitBody = sat
@@ -125,6 +132,20 @@ function floatBody(impl: Implementation): string {
       s[1] = c[2] * v ${fb} c[4] * yk;`;
 }
 
+/** The comment lines that list an export's warnings (or say there are none), and name the count constant. */
+export function cWarningBlock(warnings: readonly ExportWarning[], p: string): string {
+  const P = p.toUpperCase();
+  return warnings.length
+    ? ` *
+ * WARNINGS (${warnings.length}): this implementation is not safe to use as it stands.
+${warnings.map((w) => ` *   ${warningLine(w).replace(/\*\//g, '* /')}`).join('\n')}
+ * ${P}_WARNINGS holds their number; a build can refuse this file with
+ *   _Static_assert(${P}_WARNINGS == 0, "${p}.h carries warnings");
+`
+    : ` * No warnings (${P}_WARNINGS is 0).
+`;
+}
+
 /** The C99 header text for the implementation. Throws a RangeError for a name that is not a C identifier. */
 export function exportC(impl: Implementation, options: CExportOptions = {}): string {
   const p = options.name ?? 'pw_filter';
@@ -144,15 +165,7 @@ export function exportC(impl: Implementation, options: CExportOptions = {}): str
   const fixedRows = impl.quantized.codes.map((c) => `  { ${[...c.b, ...c.a].map(cInteger).join(', ')} }`);
   const comment = [...conventionLines(impl), ...noiseLines(impl)].map((l) => ` * ${l}`).join('\n');
   const warnings = exportWarnings(impl, options.mask);
-  const warningBlock = warnings.length
-    ? ` *
- * WARNINGS (${warnings.length}): this implementation is not safe to use as it stands.
-${warnings.map((w) => ` *   ${warningLine(w).replace(/\*\//g, '* /')}`).join('\n')}
- * ${P}_WARNINGS holds their number; a build can refuse this file with
- *   _Static_assert(${P}_WARNINGS == 0, "${p}.h carries warnings");
-`
-    : ` * No warnings (${P}_WARNINGS is 0).
-`;
+  const warningBlock = cWarningBlock(warnings, p);
   return `/*
  * ${p}.h - second-order sections exported by Polewright.
 ${warningBlock} *

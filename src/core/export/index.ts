@@ -9,3 +9,6 @@ export { float17, cInteger } from './numbers.ts';
 export { noiseLines, noiseJson, NOISE_MODEL } from './noise.ts';
 export { exportWarnings, warningLine } from './warnings.ts';
 export type { ExportWarning, ExportWarningKey } from './warnings.ts';
+export { exportFirC, firConventionLines, firHash } from './firC.ts';
+export { exportFirJson, exportFirCsv } from './firText.ts';
+export { firExportWarnings } from './firWarnings.ts';

@@ -8,12 +8,12 @@ import type { RequirementMask } from '../mask/index.ts';
 import { exportWarnings } from './warnings.ts';
 
 /** A value of the JSON writer: floats are written with 17 significant digits, integers as they are. */
-type Json = null | boolean | string | { float: number } | number | Json[] | { [k: string]: Json };
+export type Json = null | boolean | string | { float: number } | number | Json[] | { [k: string]: Json };
 
 const isFloat = (v: Json): v is { float: number } =>
   typeof v === 'object' && v !== null && !Array.isArray(v) && Object.keys(v).length === 1 && 'float' in v;
 
-function write(v: Json, indent: string): string {
+export function write(v: Json, indent: string): string {
   if (v === null || typeof v === 'boolean' || typeof v === 'string') return JSON.stringify(v);
   if (typeof v === 'number') return String(v);
   if (isFloat(v)) return Number.isFinite(v.float) ? float17(v.float).replace(/^(-?)\./, '$10.') : 'null';

@@ -7,7 +7,7 @@
  * and 1 − a1 + a2) are exact in double precision and "on the unit circle" means exactly on it, not nearly.
  */
 import { codeRange, qName, quantizeValue, storedValues, type Implementation } from '../fixed/index.ts';
-import { evaluateMask, type RequirementMask } from '../mask/index.ts';
+import { evaluateMask, type MaskResult, type RequirementMask } from '../mask/index.ts';
 import { shortNumber } from '../shortNumber.ts';
 
 /** The kinds of warning, as they appear in every export format (stable keys for scripts). */
@@ -18,7 +18,8 @@ export type ExportWarningKey =
   | 'coefficients-clamped'
   | 'numerator-all-zero'
   | 'identical-clamped-sections'
-  | 'mask-fails-quantized';
+  | 'mask-fails-quantized'
+  | 'accumulator-can-overflow';
 
 /** One warning: its key, where it applies ("section 2", "whole filter") and what is wrong, in words. */
 export interface ExportWarning {
@@ -122,21 +123,25 @@ export function exportWarnings(impl: Implementation, mask?: RequirementMask): Ex
         message: `clamping left these sections with identical codes: the design's different roots are lost`,
       });
   if (mask && mask.regions.length > 0) {
-    const v = evaluateMask(mask, impl.quantizedZpk, impl.sampleRate);
-    if (!v.pass) {
-      const worst = v.regions.find((r) => r.id === v.worstRegionId);
-      const at = Number.isFinite(v.worstAtHz) ? ` at ${fmt(v.worstAtHz)} Hz` : '';
-      const by = Number.isFinite(v.worstMarginDb)
-        ? `by ${fmt(-v.worstMarginDb)} dB${at}`
-        : (worst?.problem ?? `at ${fmt(v.worstAtHz)} Hz (response ${fmt(worst?.worstDb ?? NaN)} dB)`);
-      out.push({
-        key: 'mask-fails-quantized',
-        where: `mask region ${JSON.stringify(v.worstRegionId)}`,
-        message: `the quantized filter (${bits}-bit ${q}) fails the requirement mask in ${v.regions.filter((r) => !r.pass).length} of ${v.regions.length} regions, worst ${by}`,
-      });
-    }
+    const w = maskFailureWarning(evaluateMask(mask, impl.quantizedZpk, impl.sampleRate), `${bits}-bit ${q}`);
+    if (w) out.push(w);
   }
   return out;
+}
+
+/** The 'mask-fails-quantized' warning of a mask verdict on the quantized filter (`filter`: "16-bit Q1.14"), or null when it passes. */
+export function maskFailureWarning(v: MaskResult, filter: string): ExportWarning | null {
+  if (v.pass) return null;
+  const worst = v.regions.find((r) => r.id === v.worstRegionId);
+  const at = Number.isFinite(v.worstAtHz) ? ` at ${fmt(v.worstAtHz)} Hz` : '';
+  const by = Number.isFinite(v.worstMarginDb)
+    ? `by ${fmt(-v.worstMarginDb)} dB${at}`
+    : (worst?.problem ?? `at ${fmt(v.worstAtHz)} Hz (response ${fmt(worst?.worstDb ?? NaN)} dB)`);
+  return {
+    key: 'mask-fails-quantized',
+    where: `mask region ${JSON.stringify(v.worstRegionId)}`,
+    message: `the quantized filter (${filter}) fails the requirement mask in ${v.regions.filter((r) => !r.pass).length} of ${v.regions.length} regions, worst ${by}`,
+  };
 }
 
 /** One warning as a line of text: "[key] where: message". */

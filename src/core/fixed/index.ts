@@ -52,3 +52,5 @@ export {
 } from './arrangements.ts';
 export type { Arrangement, Headroom } from './arrangements.ts';
 export { containerFormat, containerBits, codesToValues } from './codes.ts';
+// The FIR forms (fir.ts) are imported from their own module, not from here: this index is in the page's
+// first view, and every module it names is built into it.

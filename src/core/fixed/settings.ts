@@ -30,6 +30,11 @@ export interface ImplementationSettings {
   gainDistribution: GainDistribution;
   pairing: SectionPairing;
   feedbackSign: FeedbackSign;
+  /**
+   * For an FIR design (every pole at the origin), which FIR form runs its taps (core/fixed/fir.ts); absent:
+   * the symmetric form when the taps allow it, the direct form otherwise. Sections ignore it.
+   */
+  firForm?: 'direct' | 'symmetric';
 }
 
 /** A 16-bit target: 16-bit coefficients and data, 32-bit accumulator, rounding, saturation, L∞ scaling. */
@@ -70,6 +75,8 @@ export function validateSettings(s: ImplementationSettings): Result<Implementati
       `fraction bits ${s.fractionBits} do not fit a ${s.wordLength}-bit word`,
       `'auto' or a whole number from 0 to ${s.wordLength - 1}`,
     );
+  if (s.firForm !== undefined && s.firForm !== 'direct' && s.firForm !== 'symmetric')
+    return fail(`unknown FIR form "${String(s.firForm)}"`, "'direct' or 'symmetric'");
   const product = s.dataWordLength + s.wordLength - 1;
   if (!isInt(s.accumulatorBits, product, MAX_ACCUMULATOR_BITS))
     return fail(

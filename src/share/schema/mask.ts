@@ -65,6 +65,7 @@ export const implementationSettings = z
     gainDistribution: z.enum(['first', 'spread']),
     pairing: z.enum(['nearest', 'keep-odd']),
     feedbackSign: z.enum(['denominator', 'negated']),
+    firForm: z.enum(['direct', 'symmetric']).exactOptional(),
   })
   .superRefine((s, ctx) => {
     const r = validateSettings(s);

@@ -123,6 +123,7 @@ function implementation(v: unknown): ImplementationSettings {
     pairing: oneOf(o.pairing, ['nearest', 'keep-odd'] as const),
     feedbackSign: oneOf(o.feedbackSign, ['denominator', 'negated'] as const),
   };
+  optional(o, 'firForm', (f) => oneOf(f, ['direct', 'symmetric'] as const), s as unknown as Obj);
   // The word, fraction and accumulator bounds (a fraction within the word, a product within the
   // accumulator) are the engine's, which the schema runs too.
   return validateSettings(s).ok ? s : unsure();

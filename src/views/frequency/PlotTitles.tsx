@@ -6,6 +6,7 @@ import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import type { ViewSettings } from '../../store/view.ts';
 import { Segmented } from '../chart/Segmented.tsx';
 import type { FrequencyLayout, PlotKey } from './layout.ts';
+import { ConstantDelay } from '../linearPhase/linearPhaseSlot.tsx';
 
 const setView = (patch: Partial<ViewSettings>) => workbenchStore.getState().setView(patch);
 
@@ -89,6 +90,7 @@ export function PlotTitles({ layout, second, onSecond }: PlotTitlesProps) {
             <span className="pw-plot-name">{NAMES[key]}</span>
           )}
           <UnitChoice plot={key} />
+          {(key === 'delay' || (layout.compact && i > 0 && second === 'delay')) && <ConstantDelay />}
         </div>
       ))}
     </>

@@ -2,6 +2,7 @@
 import './side.css';
 import { useState } from 'react';
 import { StabilityBanner } from './StabilityBanner.tsx';
+import { LinearPhaseNote } from '../linearPhase/linearPhaseSlot.tsx';
 import { SideTabBar } from './SideTabBar.tsx';
 import { SIDE_PAGES } from './sideTabs.ts';
 
@@ -11,6 +12,7 @@ export function SideColumn() {
   return (
     <div className="pw-panel pw-side">
       <StabilityBanner />
+      <LinearPhaseNote />
       {SIDE_PAGES.length > 1 && <SideTabBar pages={SIDE_PAGES} current={page.id} onSelect={setCurrent} />}
       <div
         className="pw-side-scroll"

@@ -140,7 +140,7 @@ int main(void) {
     return file;
   };
 
-  it('carries its warnings in every format and exits 3 unless --accept-warnings is given', async () => {
+  it('carries its warnings in every format and exits 3 unless --allow-warnings is given', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'pw-export-warn-'));
     const file = await designFile(dir, LOW);
     const c = await runCli(['export', file, '--word', '16', '--out', join(dir, 'f.h')]);
@@ -150,7 +150,7 @@ int main(void) {
     );
     expect(c.stderr).toMatch(/warning: \[poles-on-unit-circle\] section \d: .*z = 1/);
     expect(c.stderr).toMatch(/warning: \[quantized-unstable\] whole filter/);
-    expect(c.stderr).toMatch(/5 warning\(s\) are written into .*f\.h; exit code 3\..*--accept-warnings/);
+    expect(c.stderr).toMatch(/5 warning\(s\) are written into .*f\.h; exit code 3\..*--allow-warnings/);
     const header = readFileSync(join(dir, 'f.h'), 'utf8');
     expect(header).toMatch(/WARNINGS \(5\)/);
     expect(header).toMatch(/#define PW_FILTER_WARNINGS 5\n/);
@@ -164,10 +164,10 @@ int main(void) {
       'poles-on-unit-circle',
       'quantized-unstable',
     ]);
-    const csv = await runCli(['export', file, '--word', '16', '--format', 'csv', '--accept-warnings']);
+    const csv = await runCli(['export', file, '--word', '16', '--format', 'csv', '--allow-warnings']);
     expect(csv.code).toBe(0);
     expect(csv.stdout).toMatch(/^# warnings: 5\n# warning: \[poles-on-unit-circle\] section 0/);
-    expect(csv.stderr).toMatch(/accepted with --accept-warnings/);
+    expect(csv.stderr).toMatch(/accepted with --allow-warnings/);
     // 32-bit coefficients hold the design: no warnings, exit 0, a zero count in the file.
     const ok = await runCli(['export', file, '--word', '32']);
     expect(ok.code).toBe(0);

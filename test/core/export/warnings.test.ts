@@ -10,7 +10,22 @@ import {
   DEFAULT_IMPLEMENTATION,
   type ImplementationSettings,
 } from '../../../src/core/fixed/index.ts';
-import { exportC, exportCsv, exportJson, exportWarnings } from '../../../src/core/export/index.ts';
+import {
+  exportC,
+  exportCsv,
+  exportFirC,
+  exportFirCsv,
+  exportFirJson,
+  exportJson,
+  exportWarnings,
+  firExportWarnings,
+} from '../../../src/core/export/index.ts';
+import {
+  buildFirImplementation,
+  DEFAULT_FIR_SETTINGS,
+  firTapsOf,
+  type FirSettings,
+} from '../../../src/core/fixed/fir.ts';
 import { maskFromDesigner } from '../../../src/core/mask/index.ts';
 import { tfToZpk } from '../../../src/core/system/fromCoefficients.ts';
 import type { Zpk } from '../../../src/core/types.ts';
@@ -227,5 +242,49 @@ describe('exportWarnings on FIR and composed designs', () => {
     expect(exportWarnings(impl(zpk, FS, { wordLength: 24 }), mask)).toEqual([]);
     const ws = exportWarnings(impl(zpk, FS, { wordLength: 8 }), mask);
     expect(keys(ws)).toContain('mask-fails-quantized');
+  });
+});
+
+describe('firExportWarnings: an FIR exported as its taps', () => {
+  const spec = {
+    kind: 'iir',
+    family: 'equiripple',
+    response: 'lowpass',
+    order: 'auto',
+    passbandHz: [1000],
+    stopbandHz: [1400],
+    rippleDb: 0.5,
+    attenuationDb: 60,
+    fs: 8000,
+  } as unknown as DesignerSpec;
+  const taps = firTapsOf(designed(spec))!;
+  const mask = maskFromDesigner(spec)!;
+  const fir = (patch: Partial<FirSettings>) => {
+    const r = buildFirImplementation(taps, 8000, { ...DEFAULT_FIR_SETTINGS, ...patch });
+    if (!r.ok) throw new Error(r.error.message);
+    return r.value;
+  };
+
+  it('judges the quantized taps against the mask: 24-bit taps pass, 8-bit taps fail, in every format', () => {
+    expect(taps.length).toBeGreaterThan(20);
+    // 24-bit taps stay within the 60 dB stop band and the ±0.5 dB pass band; 8 bits cannot hold 60 dB
+    // (common practice: about 6 dB of stop band per bit of coefficient word).
+    expect(firExportWarnings(fir({ wordLength: 24, accumulatorBits: 56 }), mask)).toEqual([]);
+    const eight = fir({ wordLength: 8 });
+    expect(keys(firExportWarnings(eight, mask))).toEqual(['mask-fails-quantized']);
+    expect(exportFirC(eight, { mask })).toMatch(/#define PW_FILTER_WARNINGS 1\n/);
+    expect(JSON.parse(exportFirJson(eight, { mask })).warnings[0].key).toBe('mask-fails-quantized');
+    expect(exportFirCsv(eight, { mask })).toMatch(/^# warning: \[mask-fails-quantized\]/m);
+    // without the mask nothing is judged
+    expect(firExportWarnings(eight)).toEqual([]);
+  });
+
+  it('an accumulator narrower than the bits any input needs is a warning', () => {
+    const wide = fir({});
+    expect(wide.accumulatorSafe).toBe(true);
+    const narrow = fir({ accumulatorBits: wide.accumulatorNeeded - 1 });
+    expect(narrow.accumulatorSafe).toBe(false);
+    expect(keys(firExportWarnings(narrow))).toEqual(['accumulator-can-overflow']);
+    expect(exportFirC(narrow)).toMatch(/accumulator-can-overflow/);
   });
 });

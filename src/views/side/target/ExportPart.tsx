@@ -1,7 +1,8 @@
 /** Exports: C header, JSON or CSV of the sections, with their conventions, a preview, Copy and Download. */
 import { useState } from 'react';
 import type { FeedbackSign } from '../../../core/fixed/index.ts';
-import { conventionLines } from '../../../core/export/index.ts';
+import { conventionLines, firConventionLines } from '../../../core/export/index.ts';
+import { selectFirImplementation } from '../../../store/firDerived.ts';
 import { exportText, selectExportWarnings, type ExportFormat } from '../../../store/exportDerived.ts';
 import { useWorkbench } from '../../../store/useWorkbench.ts';
 import { Segmented } from '../../chart/Segmented.tsx';
@@ -31,6 +32,13 @@ const FORMATS: Record<ExportFormat, { label: string; extension: string; mime: st
   },
 };
 
+/** What each format holds for an FIR design. */
+const FIR_WHAT: Record<ExportFormat, string> = {
+  c: 'the taps as doubles and as codes, and C99 processing functions of the chosen form',
+  json: 'the taps as floats and as integer codes with their Q format, form and accumulator',
+  csv: 'one row per tap, value and code; conventions as # lines',
+};
+
 export function ExportPart() {
   const settings = useSettings();
   const impl = useImplementation();
@@ -41,7 +49,8 @@ export function ExportPart() {
   const warnings = useSettled(selectExportWarnings);
   const f = FORMATS[format];
   const fileName = exportFileName(name, f.extension);
-  const conventions = impl ? conventionLines(impl) : [];
+  const fir = useSettled(selectFirImplementation);
+  const conventions = fir ? (fir.ok ? firConventionLines(fir.value) : []) : impl ? conventionLines(impl) : [];
   return (
     <section className="pw-side-section" aria-labelledby="pw-export-h">
       <h2 id="pw-export-h">Export</h2>
@@ -51,18 +60,20 @@ export function ExportPart() {
         options={(Object.keys(FORMATS) as ExportFormat[]).map((k) => ({ value: k, label: FORMATS[k].label }))}
         onChange={setFormat}
       />
-      <p className="pw-hint pw-block">{f.what}.</p>
-      <div className="pw-target-grid">
-        <label htmlFor="pw-export-sign">Feedback sign</label>
-        <select
-          id="pw-export-sign"
-          value={settings.feedbackSign}
-          onChange={(e) => patchSettings({ feedbackSign: e.target.value as FeedbackSign })}
-        >
-          <option value="denominator">a1, a2 as in A(z), subtracted</option>
-          <option value="negated">−a1, −a2, added</option>
-        </select>
-      </div>
+      <p className="pw-hint pw-block">{fir ? FIR_WHAT[format] : f.what}.</p>
+      {!fir && (
+        <div className="pw-target-grid">
+          <label htmlFor="pw-export-sign">Feedback sign</label>
+          <select
+            id="pw-export-sign"
+            value={settings.feedbackSign}
+            onChange={(e) => patchSettings({ feedbackSign: e.target.value as FeedbackSign })}
+          >
+            <option value="denominator">a1, a2 as in A(z), subtracted</option>
+            <option value="negated">−a1, −a2, added</option>
+          </select>
+        </div>
+      )}
       {text === null ? (
         <p className="pw-hint pw-block">Nothing to export: the settings above do not apply.</p>
       ) : (

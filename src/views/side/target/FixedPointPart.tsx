@@ -9,7 +9,8 @@ import { Segmented } from '../../chart/Segmented.tsx';
 import { formatNumber } from '../../shared/format.ts';
 import { NumberField } from '../../shared/NumberField.tsx';
 import { bitsRule } from './settingCheck.ts';
-import { patchSettings, useImplementation, useSettings } from './useTarget.ts';
+import { patchSettings, useImplementation, useSettings, useSettled } from './useTarget.ts';
+import { selectFirImplementation } from '../../../store/firDerived.ts';
 
 /** A whole-number field for one setting, checked against the engine's rules before it is applied. */
 function BitsField(p: {
@@ -35,7 +36,8 @@ const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
 export function FixedPointPart() {
   const s = useSettings();
   const impl = useImplementation();
-  const q = impl?.quantized.format;
+  const fir = useSettled(selectFirImplementation);
+  const q = fir ? (fir.ok ? fir.value.format : undefined) : impl?.quantized.format;
   const step = (d: number) => {
     const w = s.wordLength + d;
     if (w >= MIN_WORD_LENGTH && w <= MAX_WORD_LENGTH) patchSettings({ wordLength: w });
@@ -94,7 +96,7 @@ export function FixedPointPart() {
             {plural(q.wordLength - 1 - q.fractionBits, 'integer bit')},{' '}
             {plural(q.fractionBits, 'fraction bit')}: steps of {formatNumber(2 ** -q.fractionBits, 3)}, range
             ±{formatNumber(2 ** (q.wordLength - 1 - q.fractionBits), 3)}
-            {impl && impl.quantized.saturated > 0
+            {!fir && impl && impl.quantized.saturated > 0
               ? ` — ${impl.quantized.saturated} coefficient(s) clamped`
               : ''}
           </span>
