@@ -139,6 +139,16 @@ function directCost(n: number): number {
   return n * factorize(n).reduce((s, f) => s + passCost(f), 0);
 }
 
+/**
+ * Forgets the plans and scratch buffers of lengths from `fromLength` on. A one-off transform of millions of
+ * points (the tone search over an hour-long recording) otherwise keeps hundreds of MB in the caches.
+ */
+export function dropLargePlans(fromLength = 1 << 18): void {
+  for (const n of [...plans.keys()]) if (n >= fromLength) plans.delete(n);
+  for (const n of [...interleaved.keys()]) if (n >= fromLength) interleaved.delete(n);
+  for (const n of [...untangleTables.keys()]) if (n >= fromLength) untangleTables.delete(n);
+}
+
 function remember(n: number, make: () => Plan): Plan {
   let plan = plans.get(n);
   if (plan === undefined) {
@@ -308,6 +318,16 @@ function complexTransform(re: Float64Array, im: Float64Array, inverse: boolean, 
     re[k] = X[2 * k]! * scale;
     im[k] = sign * X[2 * k + 1]! * scale;
   }
+}
+
+/**
+ * Forward DFT of interleaved data (n = data.length / 2 complex values), unscaled, without the copies `fft`
+ * makes; the result is returned in a buffer of the transform's plan (valid until its next use), `data` may
+ * be overwritten. For one-off transforms of millions of points, where every copy is tens of MB.
+ */
+export function fftInterleaved(data: Float64Array): Float64Array {
+  const n = data.length >> 1;
+  return n <= 1 ? data : transform(n, data);
 }
 
 /** Forward DFT of (re, im) in place, any length, unscaled. */
