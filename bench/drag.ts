@@ -189,7 +189,7 @@ export function stopServer(server: ChildProcess): void {
 }
 
 /** Reads a trace returned as a stream by Tracing.end. */
-async function traceDrag(page: Page, drag: () => Promise<void>): Promise<TraceEvent[]> {
+export async function traceDrag(page: Page, drag: () => Promise<void>): Promise<TraceEvent[]> {
   const cdp = await page.context().newCDPSession(page);
   const done = new Promise<string>((resolve) =>
     cdp.once('Tracing.tracingComplete', (e) => resolve(e.stream!)),

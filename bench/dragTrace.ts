@@ -86,3 +86,38 @@ export function workPerMove(events: readonly TraceEvent[]): { cpu: number[]; wal
   }
   return { cpu, wall };
 }
+
+/** One top-level task of a thread: its duration and thread CPU time, ms, and when it began (µs, trace clock). */
+export interface TraceTask {
+  ts: number;
+  wall: number;
+  cpu: number;
+}
+
+/**
+ * The top-level tasks of the main thread of the renderer that left the mark `markName` (one performance.mark
+ * before the action), from the mark on; tasks carrying a DevTools protocol message (the benchmark's own
+ * calls) are left out.
+ */
+export function tasksAfterMark(events: readonly TraceEvent[], markName: string): TraceTask[] {
+  const mark = events.find((e) => e.name === markName && (e.ph === 'R' || e.ph === 'I' || e.ph === 'n'));
+  if (!mark) return [];
+  const { pid, tid } = mark;
+  const tasks = events
+    .filter(
+      (e) => e.pid === pid && e.tid === tid && e.ph === 'X' && TASK_NAMES.has(e.name) && e.dur !== undefined,
+    )
+    .sort((a, b) => a.ts - b.ts);
+  const devtools = events
+    .filter((e) => e.pid === pid && e.tid === tid && e.ph === 'X' && isDevToolsMessage(e))
+    .map((e) => e.ts);
+  const outer: TraceEvent[] = [];
+  for (const t of tasks) {
+    const last = outer[outer.length - 1];
+    if (last && t.ts < last.ts + last.dur!) continue;
+    outer.push(t);
+  }
+  return outer
+    .filter((t) => t.ts + t.dur! >= mark.ts && !devtools.some((ts) => ts >= t.ts && ts <= t.ts + t.dur!))
+    .map((t) => ({ ts: t.ts, wall: t.dur! / 1000, cpu: (t.tdur ?? t.dur!) / 1000 }));
+}

@@ -24,9 +24,15 @@ import { cell, median } from './timing.ts';
 const ROUNDS = Number(process.env.PW_KERNEL_ROUNDS ?? 7);
 const FS = 48000;
 const ORDERS = [2, 8, 32, 64];
-const SOS_LENGTHS = [1e6, 1e7];
-/** Segment lengths: the page's powers of two, audio rates and round numbers, a prime. */
-const SEGMENTS = [256, 1024, 4096, 8192, 65536, 1000, 6000, 44100, 48000, 10007];
+/** PW_KERNEL_SOS=0 leaves the cascade out (a Welch-only run). */
+const SOS_LENGTHS = process.env.PW_KERNEL_SOS === '0' ? [] : [1e6, 1e7];
+/**
+ * Segment lengths: the page's powers of two, audio rates and round numbers, primes (PW_KERNEL_SEGMENTS, a
+ * comma-separated list, runs only those).
+ */
+const SEGMENTS = process.env.PW_KERNEL_SEGMENTS
+  ? process.env.PW_KERNEL_SEGMENTS.split(',').map(Number)
+  : [256, 1024, 4096, 8192, 65536, 1000, 6000, 44100, 48000, 10007, 4099, 30011];
 const WELCH_SECONDS = 60;
 
 interface Scipy {
@@ -101,7 +107,7 @@ async function alternate(
 
 /** Runs the benchmark and returns two markdown tables. */
 export async function benchKernels(): Promise<string> {
-  const n = Math.max(SOS_LENGTHS.at(-1)!, WELCH_SECONDS * FS);
+  const n = Math.max(SOS_LENGTHS.at(-1) ?? 0, WELCH_SECONDS * FS);
   const next = mulberry32(3);
   const x = new Float64Array(n);
   for (let i = 0; i < n; i++) x[i] = 0.3 * Math.sin((2 * Math.PI * 50 * i) / FS) + (next() - 0.5);
@@ -120,7 +126,7 @@ export async function benchKernels(): Promise<string> {
   const load0 = loadavg()[0]!;
   try {
     const sosRows: string[] = [];
-    const out = new Float64Array(SOS_LENGTHS.at(-1)!);
+    const out = new Float64Array(SOS_LENGTHS.at(-1) ?? 0);
     for (const len of SOS_LENGTHS) {
       for (const order of ORDERS) {
         const sections = cascades[String(order)]!.map(

@@ -26,13 +26,13 @@ const MINUTES = Number(process.env.PW_MEMORY_MINUTES ?? 60);
 const PORT = Number(process.env.PW_BENCH_PORT ?? 4412);
 
 /** Writes the WAV a minute at a time (the whole signal never exists in memory here). */
-function writeLongWav(dir: string): string {
-  const path = join(dir, `hopper-${MINUTES}min.wav`);
-  const n = FS * 60 * MINUTES;
+export function writeLongWav(dir: string, minutes = MINUTES): string {
+  const path = join(dir, `hopper-${minutes}min.wav`);
+  const n = FS * 60 * minutes;
   const fd = openSync(path, 'w');
   writeSync(fd, wavHeaderBytes({ format: 'i16', channelCount: 1, sampleRate: FS, frameCount: n }));
   const block = FS * 60;
-  for (let m = 0; m < MINUTES; m++) {
+  for (let m = 0; m < minutes; m++) {
     const x = makeHum(block, FS, { fundamentalHz: 50, harmonicAmplitudes: [0.2, 0.05, 0.03], driftHz: 0.1 });
     const noise = makePinkNoise(block, 100 + m, 0.05);
     for (let i = 0; i < block; i++) x[i] = x[i]! + noise[i]!;
@@ -85,9 +85,9 @@ function pssMb(root: number, tree = true): number {
  * before the recording worker marks neither (it computed both on the main thread before drawing), so the
  * selectors also take the unmarked elements: the same benchmark can measure that build side by side.
  */
-const OUTPUT_CURRENT =
+export const OUTPUT_CURRENT =
   '[data-testid="signal-output-trace"][data-state="current"], [data-testid="signal-output-trace"]:not([data-state])';
-const SPECTRUM_MEASURED =
+export const SPECTRUM_MEASURED =
   '[data-testid="spectrum-after"][data-measured="true"], [data-testid="spectrum-after"]:not([data-measured])';
 
 async function settle(page: Page, ms = 1500): Promise<void> {
@@ -104,7 +104,11 @@ export async function benchMemory(): Promise<string> {
   const server = await serve(build);
   const browser = await chromium.launch({
     executablePath: CHROMIUM_PATH,
-    args: [...CHROMIUM_ARGS, `--explicitly-allowed-ports=${PORT}`],
+    args: [
+      ...CHROMIUM_ARGS,
+      `--explicitly-allowed-ports=${PORT}`,
+      ...(process.env.PW_MEMORY_GC ? ['--js-flags=--expose-gc'] : []),
+    ],
   });
   // Playwright starts Chromium as a child of this process (Debian's /usr/bin/chromium is a script that runs
   // /usr/lib/chromium/chromium): every descendant running Chromium counts.
@@ -118,21 +122,65 @@ export async function benchMemory(): Promise<string> {
     });
   if (chromiumPids().length === 0) throw new Error('bench: Chromium process not found');
   const browserPss = () => chromiumPids().reduce((sum, p) => sum + pssMb(p, false), 0);
+  /** PSS by Chromium process type (browser, renderer, gpu-process, utility, zygote), MB. */
+  const byType = () => {
+    const out = new Map<string, number>();
+    for (const p of chromiumPids()) {
+      let type = 'browser';
+      try {
+        type = /--type=([\w-]+)/.exec(readFileSync(`/proc/${p}/cmdline`, 'utf8'))?.[1] ?? 'browser';
+      } catch {
+        continue;
+      }
+      out.set(type, (out.get(type) ?? 0) + pssMb(p, false));
+    }
+    return [...out].map(([t, mb]) => `${t} ${mb.toFixed(0)}`).join(', ');
+  };
   let peak = 0;
   const sampler = setInterval(() => (peak = Math.max(peak, browserPss())), 100);
+  // PW_MEMORY_DETAIL: the renderer's PSS every second beside the page's progress lines (which runs are on).
+  let detailPage: Page | null = null;
+  const t00 = Date.now();
+  const detail = process.env.PW_MEMORY_DETAIL
+    ? setInterval(() => {
+        const mb = browserPss().toFixed(0);
+        void detailPage
+          ?.evaluate(() =>
+            [...document.querySelectorAll('.pw-signal-note, [role=status]')]
+              .map((e) => (e.textContent ?? '').slice(0, 60))
+              .join(' | '),
+          )
+          .then((notes) =>
+            console.error(`  t=${((Date.now() - t00) / 1000).toFixed(0)} s ${mb} MB: ${notes}`),
+          )
+          .catch(() => undefined);
+      }, 1000)
+    : null;
   const rows: string[] = [];
   let gaps: number[] = [];
   let longTasks: number[] = [];
   try {
     await waitForServer(`http://127.0.0.1:${PORT}/`, 30_000);
     const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
+    detailPage = page;
+    // PW_MEMORY_DETAIL: collect garbage in the page and its workers (diagnostics: what is garbage, what is kept).
+    const gcAll = async () => {
+      for (const w of page.workers()) await w.evaluate('gc()').catch(() => undefined);
+      await page.evaluate('gc()').catch(() => undefined);
+      await new Promise((r) => setTimeout(r, 500));
+    };
     await page.goto(`http://127.0.0.1:${PORT}/`);
     await settle(page);
     const empty = browserPss();
     peak = empty;
-    const row = (stage: string, ms: number | null) => {
+    const row = async (stage: string, ms: number | null) => {
       const now = browserPss();
       peak = Math.max(peak, now);
+      if (process.env.PW_MEMORY_DETAIL) {
+        console.error(`${stage}: ${byType()}`);
+        if (process.env.PW_MEMORY_GC) await gcAll();
+        console.error(`  after gc: ${(browserPss() - empty).toFixed(0)} MB; ${byType()}`);
+      }
       rows.push(
         `| ${stage} | ${ms === null ? '–' : (ms / 1000).toFixed(1)} | ${(now - empty).toFixed(0)} | ${(peak - empty).toFixed(0)} |`,
       );
@@ -143,13 +191,13 @@ export async function benchMemory(): Promise<string> {
     await page.getByTestId('recording-file-input').first().setInputFiles(wav);
     const panel = page.locator('section[aria-label="recording"]');
     await panel.getByTestId('signal-info').waitFor({ timeout: 600_000 });
-    row(
+    await row(
       `read the ${MINUTES}-minute WAV (${(FS * 60 * MINUTES).toLocaleString('en')} samples)`,
       Date.now() - t0,
     );
     t0 = Date.now();
     await panel.locator(OUTPUT_CURRENT).first().waitFor({ timeout: 600_000 });
-    row('filtered through the design (demo notches)', Date.now() - t0);
+    await row('filtered through the design (demo notches)', Date.now() - t0);
     // Frame gaps while the page switches to the spectra and they are computed (in the worker).
     // A script string: tsx names the inner function with a helper the page does not have.
     await page.evaluate(`(() => {
@@ -175,7 +223,7 @@ export async function benchMemory(): Promise<string> {
       // A build that computes the spectra on the main thread answers the click only when they are done.
       .click({ timeout: 600_000 });
     await page.locator(SPECTRUM_MEASURED).first().waitFor({ timeout: 600_000 });
-    row('spectra before and after (Welch, 65 536-sample segments)', Date.now() - t0);
+    await row('spectra before and after (Welch, 65 536-sample segments)', Date.now() - t0);
     [gaps, longTasks] = await page.evaluate(() => {
       const w = window as unknown as { __gaps: number[]; __gapsStop: boolean; __longTasks: number[] };
       w.__gapsStop = true;
@@ -202,11 +250,12 @@ export async function benchMemory(): Promise<string> {
     await page.mouse.move(at.x - 20, at.y - 10, { steps: 30 });
     await page.mouse.up();
     await panel.locator(OUTPUT_CURRENT).first().waitFor({ timeout: 600_000 });
-    row('a 30-step root drag, then the whole recording filtered again', Date.now() - t0);
+    await row('a 30-step root drag, then the whole recording filtered again', Date.now() - t0);
     await settle(page, 3000);
-    row('settled', null);
+    await row('settled', null);
   } finally {
     clearInterval(sampler);
+    if (detail) clearInterval(detail);
     await browser.close();
     stopServer(server);
     rmSync(tmp, { recursive: true, force: true });

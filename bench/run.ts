@@ -43,6 +43,10 @@ if (want('memory')) {
   const { benchMemory } = await import('./memory.ts');
   parts.push('## Browser memory with a long recording', '', await benchMemory(), '');
 }
+if (want('switch')) {
+  const { benchSpectrumSwitch } = await import('./spectrumSwitch.ts');
+  parts.push('## Switching to the spectra (Chromium trace)', '', await benchSpectrumSwitch(), '');
+}
 if (want('signal')) {
   const { benchSignal } = await import('./signal.ts');
   parts.push('## Real signals: 10 minutes at 48 kHz', '', await benchSignal(), '');

@@ -226,6 +226,14 @@ test.describe('recordings', () => {
     // switch froze it for 12.6 s on the main thread.
     await page.evaluate(() => ((window as unknown as { __longTasks: number[] }).__longTasks.length = 0));
     await showRegion(page, 'Spectrum');
+    // The view is there at once and says how far the recording's spectrum has got, then draws it.
+    const progress = page.getByTestId('spectrum-input-progress');
+    await expect(progress).toBeVisible();
+    await expect(
+      progress.getByRole('progressbar', { name: "Computing the recording's spectrum" }),
+    ).toBeVisible();
+    await expect(page.getByTestId('spectrum-before')).toHaveCount(1, { timeout: 120_000 });
+    await expect(progress).toHaveCount(0);
     await expect(page.locator('[data-testid="spectrum-after"][data-measured="true"]')).toHaveCount(1, {
       timeout: 120_000,
     });

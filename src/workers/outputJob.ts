@@ -56,42 +56,54 @@ export function spectrumAccumulator(n: number, sampleRate: number, s: SpectrumRe
   );
 }
 
-export async function outputJob(req: OutputRequest, ctx: JobContext): Promise<{ value: OutputResult }> {
+export async function outputJob(
+  req: OutputRequest,
+  ctx: JobContext,
+): Promise<{ value: OutputResult; transfer: Transferable[] }> {
   const { samples: x, info } = recordingOf(ctx, req.id);
   const n = x.length;
   const filter = createSectionFilter(req.sections);
   const width = 2 * req.sections.length;
-  const states = new Float64Array(Math.ceil(n / OUTPUT_STATE_INTERVAL) * width);
-  const pyramid = new PyramidBuilder(n);
+  // A run for the spectrum or the tones of the output already kept builds no second pyramid beside it.
+  const kept = ctx.get<StoredOutput>(OUTPUT_KEY);
+  const again = kept !== undefined && kept.id === req.id && kept.version === req.version;
+  const states = again ? null : new Float64Array(Math.ceil(n / OUTPUT_STATE_INTERVAL) * width);
+  const pyramid = again ? null : new PyramidBuilder(n);
   const welch = req.spectrum ? spectrumAccumulator(n, info.sampleRate, req.spectrum) : null;
   const fit = req.tones
     ? new ToneFitAccumulator(info.sampleRate, req.tones.frequenciesHz, n, req.tones.weighting)
     : null;
   const y = new Float64Array(OUTPUT_STATE_INTERVAL);
   for (let k = 0, start = 0; start < n; k++, start += OUTPUT_STATE_INTERVAL) {
-    states.set(filter.state, k * width);
+    states?.set(filter.state, k * width);
     const end = Math.min(n, start + OUTPUT_STATE_INTERVAL);
     const piece = runSectionFilter(filter, x.subarray(start, end), y.subarray(0, end - start));
-    pyramid.push(piece);
+    pyramid?.push(piece);
     welch?.push(piece);
     fit?.push(piece);
     if ((k + 1) % INTERVALS_PER_SLICE === 0) await ctx.checkpoint(end / n);
   }
-  const stored: StoredOutput = {
-    id: req.id,
-    version: req.version,
-    sections: req.sections,
-    pyramid: pyramid.finish(),
-    states,
-  };
-  ctx.set(OUTPUT_KEY, stored);
+  if (pyramid && states) {
+    const stored: StoredOutput = {
+      id: req.id,
+      version: req.version,
+      sections: req.sections,
+      pyramid: pyramid.finish(),
+      states,
+    };
+    ctx.set(OUTPUT_KEY, stored);
+  }
   let tones: ToneEstimate[] | null = null;
   try {
     tones = fit ? fit.result().tones : null;
   } catch (e) {
     if (!(e instanceof RangeError)) throw e;
   }
-  return { value: { version: req.version, spectrum: welch ? welch.result() : null, tones } };
+  const spectrum = welch ? welch.result() : null;
+  return {
+    value: { version: req.version, spectrum, tones },
+    transfer: spectrum ? [spectrum.power.buffer, spectrum.frequencies.buffer] : [],
+  };
 }
 
 /** The stored output's samples [a, b), run again from the nearest kept state at or before a. */

@@ -11,12 +11,13 @@ const SLICE = 1 << 18;
 export async function inputSpectrumJob(
   req: SpectrumRequest & { id: number },
   ctx: JobContext,
-): Promise<{ value: WelchResult }> {
+): Promise<{ value: WelchResult; transfer: Transferable[] }> {
   const { samples: x, info } = recordingOf(ctx, req.id);
   const acc = spectrumAccumulator(x.length, info.sampleRate, req);
   for (let i = 0; i < x.length; i += SLICE) {
     acc.push(x.subarray(i, i + SLICE));
     await ctx.checkpoint(Math.min(1, (i + SLICE) / x.length));
   }
-  return { value: acc.result() };
+  const result = acc.result();
+  return { value: result, transfer: [result.power.buffer, result.frequencies.buffer] };
 }

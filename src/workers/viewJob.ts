@@ -172,6 +172,13 @@ export async function viewJob(
   return { value: result, transfer: buffersOf(result) };
 }
 
+/**
+ * The preview's filtered samples, reused from one pointer move to the next: a fresh array per move (up to
+ * PREVIEW_BUDGET samples, 32 MB at one section) left hundreds of MB of garbage in the worker during a drag,
+ * which V8 collected late.
+ */
+let previewScratch = new Float64Array(0);
+
 function previewOf(
   p: { version: number; sections: Section[] },
   x: Float32Array | Float64Array,
@@ -185,7 +192,12 @@ function previewOf(
   const warmup = Math.min(i0, settle, Math.floor(reach / 2));
   const start = i0 - warmup;
   const liveEnd = Math.min(i1, start + reach);
-  const y = runSectionFilter(createSectionFilter(p.sections), x.subarray(start, liveEnd));
+  if (previewScratch.length < liveEnd - start) previewScratch = new Float64Array(liveEnd - start);
+  const y = runSectionFilter(
+    createSectionFilter(p.sections),
+    x.subarray(start, liveEnd),
+    previewScratch.subarray(0, liveEnd - start),
+  );
   const per = (i1 - i0) / columns;
   // Only whole columns are live: a column needs all its samples for its extremes.
   const filled = line

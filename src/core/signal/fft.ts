@@ -113,8 +113,40 @@ export function smoothLength(n: number): number {
   return best;
 }
 
+/**
+ * The convolution length for Bluestein of length n: of the lengths ≥ 2n − 1 with no prime factor above 7
+ * (and below twice the next power of two), the one whose transform the cost model says is cheapest, for
+ * which more, shorter passes can beat a slightly shorter length (10 007: 20 160 = 4³·3²·5·7, not 20 250).
+ */
+export function convolutionLength(n: number): number {
+  const need = 2 * n - 1;
+  const limit = 2 * nextPowerOfTwo(need);
+  let best = nextPowerOfTwo(need);
+  let bestCost = directCost(best);
+  for (let p7 = 1; p7 < limit; p7 *= 7)
+    for (let p5 = p7; p5 < limit; p5 *= 5)
+      for (let p3 = p5; p3 < limit; p3 *= 3) {
+        let m = p3;
+        while (m < need) m *= 2;
+        if (m >= limit) continue;
+        const cost = directCost(m);
+        if (cost < bestCost) [best, bestCost] = [m, cost];
+      }
+  return best;
+}
+
 function directCost(n: number): number {
   return n * factorize(n).reduce((s, f) => s + passCost(f), 0);
+}
+
+/**
+ * Forgets the plans and scratch buffers of lengths from `fromLength` on. A one-off transform of millions of
+ * points (the tone search over an hour-long recording) otherwise keeps hundreds of MB in the caches.
+ */
+export function dropLargePlans(fromLength = 1 << 18): void {
+  for (const n of [...plans.keys()]) if (n >= fromLength) plans.delete(n);
+  for (const n of [...interleaved.keys()]) if (n >= fromLength) interleaved.delete(n);
+  for (const n of [...untangleTables.keys()]) if (n >= fromLength) untangleTables.delete(n);
 }
 
 function remember(n: number, make: () => Plan): Plan {
@@ -158,7 +190,7 @@ function planFor(n: number): Plan {
   return remember(n, () => {
     const largest = factorize(n).at(-1) ?? 1;
     if (largest > 5) {
-      const m = smoothLength(2 * n - 1);
+      const m = convolutionLength(n);
       if (2 * directCost(m) + 8 * m < directCost(n)) return bluesteinPlan(n, m);
     }
     return directPlan(n);
@@ -208,7 +240,7 @@ function runDirect(plan: DirectPlan, data: Float64Array): Float64Array {
  * Bluestein: X_k = w_k·Σ_j (x_j w_j)·conj(w_{k−j}) with w_j = e^{-iπj²/n}, the sum a circular convolution in
  * length m done as forward transforms (the inverse as the conjugate of a forward one).
  */
-function runBluestein(plan: BluesteinPlan, data: Float64Array): Float64Array {
+function runBluestein(plan: BluesteinPlan, data: Float64Array, powerOnly = false): Float64Array {
   const { n, m, chirp, kernel, inner, work, out } = plan;
   work.fill(0, 2 * n);
   for (let k = 0; k < n; k++) {
@@ -230,6 +262,8 @@ function runBluestein(plan: BluesteinPlan, data: Float64Array): Float64Array {
     work[2 * k + 1] = -(ar * ki + ai * kr);
   }
   const C = runDirect(inner, work);
+  // |X_k| = |C_k| (the chirp has modulus 1): for powers the first n values of C serve as they are.
+  if (powerOnly) return C;
   for (let k = 0; k < n; k++) {
     const cr = C[2 * k]!;
     const ci = -C[2 * k + 1]!;
@@ -245,6 +279,15 @@ function runBluestein(plan: BluesteinPlan, data: Float64Array): Float64Array {
 function transform(n: number, data: Float64Array): Float64Array {
   const plan = planFor(n);
   return plan.kind === 'direct' ? runDirect(plan, data) : runBluestein(plan, data);
+}
+
+/**
+ * Values whose squared moduli are those of the forward DFT of data (n complex values), first n of the
+ * buffer returned: the DFT itself, or for Bluestein the DFT before its last chirp factor of modulus 1.
+ */
+function transformForPower(n: number, data: Float64Array): Float64Array {
+  const plan = planFor(n);
+  return plan.kind === 'direct' ? runDirect(plan, data) : runBluestein(plan, data, true);
 }
 
 const interleaved = new Map<number, Float64Array>();
@@ -275,6 +318,16 @@ function complexTransform(re: Float64Array, im: Float64Array, inverse: boolean, 
     re[k] = X[2 * k]! * scale;
     im[k] = sign * X[2 * k + 1]! * scale;
   }
+}
+
+/**
+ * Forward DFT of interleaved data (n = data.length / 2 complex values), unscaled, without the copies `fft`
+ * makes; the result is returned in a buffer of the transform's plan (valid until its next use), `data` may
+ * be overwritten. For one-off transforms of millions of points, where every copy is tens of MB.
+ */
+export function fftInterleaved(data: Float64Array): Float64Array {
+  const n = data.length >> 1;
+  return n <= 1 ? data : transform(n, data);
 }
 
 /** Forward DFT of (re, im) in place, any length, unscaled. */
@@ -385,7 +438,7 @@ export class RealPowerTransform {
           c[2 * j] = this.input[j]!;
           c[2 * j + 1] = 0;
         }
-        const X = n === 1 ? c : transform(n, c);
+        const X = n === 1 ? c : transformForPower(n, c);
         for (let k = 0; k <= n >> 1; k++) sum[k] = sum[k]! + X[2 * k]! ** 2 + X[2 * k + 1]! ** 2;
         return;
       }
@@ -396,7 +449,7 @@ export class RealPowerTransform {
       }
       for (let j = 0; j < n; j++) c[2 * j + 1] = this.input[j]!;
       this.waiting = false;
-      const Z = transform(n, c);
+      const Z = transformForPower(n, c);
       sum[0] = sum[0]! + Z[0]! ** 2 + Z[1]! ** 2;
       for (let k = 1; k <= n >> 1; k++) {
         const m = n - k;
@@ -415,7 +468,7 @@ export class RealPowerTransform {
     const n = this.n;
     for (let j = 0; j < n; j++) c[2 * j + 1] = 0;
     this.waiting = false;
-    const X = transform(n, c);
+    const X = transformForPower(n, c);
     for (let k = 0; k <= n >> 1; k++) sum[k] = sum[k]! + X[2 * k]! ** 2 + X[2 * k + 1]! ** 2;
   }
 

@@ -59,6 +59,8 @@ export class ToneFitAccumulator {
   private readonly proj: Float64Array;
   private sumWx = 0;
   private n = 0;
+  /** The weighted samples of one push, reused (a push of a long record's slice allocates nothing). */
+  private scratch = new Float64Array(0);
 
   /**
    * `frequenciesHz` in 0..fs/2 (repeats are fitted once), `length` the span's sample count (the Hann weight
@@ -93,7 +95,8 @@ export class ToneFitAccumulator {
   push(x: ArrayLike<number>): void {
     const take = Math.min(x.length, this.length - this.n);
     if (take <= 0) return;
-    const wx = new Float64Array(take);
+    if (this.scratch.length < take) this.scratch = new Float64Array(take);
+    const wx = this.scratch;
     const n0 = this.n;
     const hann = this.weighting === 'hann';
     const beta = (2 * Math.PI) / this.length;

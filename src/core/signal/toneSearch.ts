@@ -6,7 +6,7 @@
  * whole record's periodogram near f (a tone at f + δ turns each block sum by e^{i2πδL/fs}), and its peak within
  * ±width, refined by a parabola through the three highest points, is the tone's frequency.
  */
-import { fft, nextPowerOfTwo } from './fft.ts';
+import { dropLargePlans, fftInterleaved, nextPowerOfTwo } from './fft.ts';
 import { hzToOmega } from '../units.ts';
 
 /** Samples between exact re-evaluations of the demodulating phasor. */
@@ -92,7 +92,13 @@ export class ToneSearchAccumulator {
 
   /** The frequency found near each expected one (the expected one itself where nothing was searched). */
   result(): number[] {
-    return this.searches.map((s, k) => (s ? this.peak(s) : this.frequenciesHz[k]!));
+    return this.searches.map((s, k) => {
+      if (!s) return this.frequenciesHz[k]!;
+      const f = this.peak(s);
+      // The zero-padded transforms of a long record are millions of points: not worth keeping for the next.
+      dropLargePlans();
+      return f;
+    });
   }
 
   private peak(s: Search): number {
@@ -100,19 +106,21 @@ export class ToneSearchAccumulator {
     const blocks = s.re.length + (s.fill > 0 ? 1 : 0);
     if (blocks < 2) return f0;
     const size = nextPowerOfTwo(4 * blocks);
-    const re = new Float64Array(size);
-    const im = new Float64Array(size);
-    re.set(s.re);
-    im.set(s.im);
+    // Interleaved, transformed without copies (an hour-long record needs millions of points here).
+    const z = new Float64Array(2 * size);
+    for (let j = 0; j < s.re.length; j++) {
+      z[2 * j] = s.re[j]!;
+      z[2 * j + 1] = s.im[j]!;
+    }
     if (s.fill > 0) {
-      re[s.re.length] = s.accRe;
-      im[s.re.length] = s.accIm;
+      z[2 * s.re.length] = s.accRe;
+      z[2 * s.re.length + 1] = s.accIm;
     }
     // X[j] = Σ Z_s e^{−2πijs/P}: a tone at f + δ turns Z_s by e^{i2πδsL/fs}, so it peaks at j/P = δL/fs.
-    fft(re, im);
+    const X = fftInterleaved(z);
     const hzPerBin = this.sampleRate / (s.block * size);
     const reach = Math.min(size / 2 - 1, Math.floor(s.widthHz / hzPerBin));
-    const mag = (j: number) => Math.hypot(re[(j + size) % size]!, im[(j + size) % size]!);
+    const mag = (j: number) => Math.hypot(X[2 * ((j + size) % size)]!, X[2 * ((j + size) % size) + 1]!);
     let best = 0;
     for (let j = -reach; j <= reach; j++) if (mag(j) > mag(best)) best = j;
     let offset = 0;

@@ -3,14 +3,14 @@
  * (dBFS for audio), with the design's |H| dashed on its own axis at the right (0 dB = passes unchanged), and
  * thin marks at the read-out frequencies.
  */
-import { useId, useMemo } from 'react';
+import { memo, useId, useMemo, useRef } from 'react';
 import type { FrequencyResponse } from '../../core/response/index.ts';
 import type { WelchResult } from '../../core/signal/index.ts';
 import { Axis } from '../chart/Axis.tsx';
 import { PlotFrame } from '../chart/PlotFrame.tsx';
 import { linePath } from '../chart/paths.ts';
 import { toPixel, toPixels, type AxisMap } from '../chart/pixels.ts';
-import { dbRange, niceRange } from '../chart/range.ts';
+import { dbRange, niceRange, type Range } from '../chart/range.ts';
 import { linearTicks, logTicks, spacedTicks } from '../chart/ticks.ts';
 
 /** Deepest level shown below the highest, dB. */
@@ -45,7 +45,11 @@ export function spectrumLayout(width: number, height: number) {
   return { left: 52, right: Math.max(53, width - 44), top: 10, bottom: Math.max(11, height - 34) };
 }
 
-export function SpectrumChart({
+/**
+ * Drawn again only when its inputs change (not with every progress line of the view around it): the paths
+ * over every bin are the page's largest piece of work when a spectrum arrives.
+ */
+export const SpectrumChart = memo(function SpectrumChart({
   width,
   height,
   before,
@@ -69,6 +73,8 @@ export function SpectrumChart({
   );
   const levelsBefore = useMemo(() => binLevels(before), [before]);
   const levelsAfter = useMemo(() => (after ? binLevels(after) : null), [after]);
+  // The same range by value keeps the axis map (and the path of the spectrum before) when only "after" changed.
+  const lastRange = useRef<Range | null>(null);
   const range = useMemo(() => {
     let top = -Infinity;
     for (const v of levelsBefore) if (v > top) top = v;
@@ -76,8 +82,11 @@ export function SpectrumChart({
     if (!Number.isFinite(top)) top = 0;
     let low = Infinity;
     for (const v of levelsBefore) if (v < low && v > -Infinity) low = v;
-    return niceRange(Math.max(low, top - SPECTRUM_DEPTH_DB), top, 20, 5);
+    const r = niceRange(Math.max(low, top - SPECTRUM_DEPTH_DB), top, 20, 5);
+    const held = lastRange.current;
+    return held && held[0] === r[0] && held[1] === r[1] ? held : r;
   }, [levelsBefore, levelsAfter]);
+  lastRange.current = range;
   const yMap = useMemo<AxisMap>(
     () => ({ kind: 'linear', d0: range[0], d1: range[1], p0: rect.bottom, p1: rect.top }),
     [range, rect],
@@ -149,4 +158,4 @@ export function SpectrumChart({
       <Axis side="bottom" map={xMap} ticks={xTicks} at={rect.bottom} title="Frequency (Hz)" />
     </svg>
   );
-}
+});

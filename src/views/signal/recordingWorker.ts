@@ -286,8 +286,15 @@ export function followRecording(store: WorkbenchStore): () => void {
           outputRun: { kind: 'idle' },
           outputVersion: r.version,
           ...(r.spectrum && key ? { outputSpectrum: { key, version: r.version, result: r.spectrum } } : {}),
-          ...(tKey ? { outputTones: { key: tKey, version: r.version, tones: r.tones } } : {}),
         });
+        // The level read-out's tones in a task of their own: the spectrum's drawing and the read-out's
+        // together were the longest main-thread task of the switch to the spectra.
+        if (tKey) {
+          const tones = { key: tKey, version: r.version, tones: r.tones };
+          setTimeout(() => {
+            if (!stopped && store.getState().signal.current?.id === cur.id) set({ outputTones: tones });
+          }, 0);
+        }
         requestView();
       });
   };

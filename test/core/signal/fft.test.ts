@@ -5,6 +5,7 @@ import {
   ifft,
   realFft,
   RealPowerTransform,
+  convolutionLength,
   isPowerOfTwo,
   nextPowerOfTwo,
   smoothLength,
@@ -192,6 +193,15 @@ describe('fft', () => {
     expect(factorize(2 * 7 * 7 * 11)).toEqual([2, 7, 7, 11]);
     expect(factorize(10007)).toEqual([10007]);
     expect([1, 7, 11, 49, 97, 101, 20013].map(smoothLength)).toEqual([1, 8, 12, 50, 100, 108, 20250]);
+  });
+
+  it('convolutionLength: long enough for the circular convolution, only factors up to 7', () => {
+    for (const n of [11, 97, 101, 1009, 4099, 10007, 30011, 65537]) {
+      const m = convolutionLength(n);
+      expect(m).toBeGreaterThanOrEqual(2 * n - 1);
+      expect(m).toBeLessThan(2 * nextPowerOfTwo(2 * n - 1));
+      expect(Math.max(...factorize(m))).toBeLessThanOrEqual(7);
+    }
   });
 
   it('power-of-two helpers', () => {
