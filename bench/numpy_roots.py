@@ -3,7 +3,7 @@
 
 Usage: python3 bench/numpy_roots.py POLYS.json, then one request per line on standard input:
 "INDEX INNER" runs numpy.roots INNER times on polynomial INDEX and answers one line with the mean seconds
-per call; "roots INDEX" answers numpy.roots of polynomial INDEX as JSON {"re": [...], "im": [...]};
+per call of wall time and of processor time (this process, all threads), separated by a space; "roots INDEX" answers numpy.roots of polynomial INDEX as JSON {"re": [...], "im": [...]};
 "quit" ends. A long-lived process lets the caller interleave our runs with numpy's.
 """
 import json
@@ -29,9 +29,12 @@ def main():
         p = polys[int(parts[0])]
         inner = int(parts[1])
         t0 = time.perf_counter()
+        c0 = time.process_time()
         for _ in range(inner):
             np.roots(p)
-        print(repr((time.perf_counter() - t0) / inner), flush=True)
+        wall = (time.perf_counter() - t0) / inner
+        cpu = (time.process_time() - c0) / inner
+        print(f"{wall!r} {cpu!r}", flush=True)
 
 
 if __name__ == "__main__":

@@ -21,6 +21,9 @@ import { mulberry32 } from '../src/core/random.ts';
 const DEGREES = [8, 16, 32, 64, 128, 256, 512, 1024];
 /** Wall time aimed at for one measurement (a batch of calls), in milliseconds. */
 const TARGET_MS = 4;
+/** Warm-up before anything is timed, and before each case of degree ≤ 64, in milliseconds of wall time. */
+const WARM_UP_MS = 3000;
+const SETTLE_MS = 300;
 
 function randomPoly(n: number): Float64Array {
   const u = mulberry32(1000 + n);
@@ -86,16 +89,25 @@ function median(xs: number[]): number {
   return s.length % 2 ? s[m]! : (s[m - 1]! + s[m]!) / 2;
 }
 
+/** Mean milliseconds per call over a batch: wall time and processor time (the whole process, all threads). */
+interface Timing {
+  wall: number;
+  cpu: number;
+}
+
 /** Mean milliseconds per findRoots call over a batch of `inner` calls. */
-function timeOurs(p: Float64Array, inner: number): number {
+function timeOurs(p: Float64Array, inner: number): Timing {
+  const c0 = process.cpuUsage();
   const t0 = performance.now();
   for (let k = 0; k < inner; k++) findRoots(p);
-  return (performance.now() - t0) / inner;
+  const wall = (performance.now() - t0) / inner;
+  const used = process.cpuUsage(c0);
+  return { wall, cpu: (used.user + used.system) / 1000 / inner };
 }
 
 interface NumpyServer {
   version: string;
-  time: (i: number, inner: number) => Promise<number>;
+  time: (i: number, inner: number) => Promise<Timing>;
   roots: (i: number) => Promise<{ re: number[]; im: number[] }>;
   stop: () => void;
 }
@@ -115,7 +127,8 @@ async function startNumpy(file: string): Promise<NumpyServer> {
     version,
     time: async (i, inner) => {
       child.stdin.write(`${i} ${inner}\n`);
-      return 1000 * Number(await next());
+      const [wall, cpu] = (await next()).split(' ').map(Number);
+      return { wall: 1000 * wall!, cpu: 1000 * cpu! };
     },
     roots: async (i) => {
       child.stdin.write(`roots ${i}\n`);
@@ -137,8 +150,12 @@ export async function benchRoots(family = '', degrees: readonly number[] = DEGRE
   writeFileSync(file, JSON.stringify(cases.map((c) => Array.from(c.p))));
   const numpy = await startNumpy(file);
   const rows: string[] = [];
-  // Let the JIT compile every path (closed forms aside) before anything is timed.
-  for (let k = 0; k < 20; k++) for (const c of cases) if (c.n <= 64) findRoots(c.p);
+  // Let the JIT compile every path (closed forms aside) before anything is timed: by time, not by count, since
+  // on a loaded machine the optimising compiler's thread waits for a core and a fixed count of calls can end
+  // before the optimised code arrives (then the first rounds time the baseline code, 2-3x slower).
+  const warm = performance.now();
+  for (let k = 0; k < 20 || performance.now() - warm < WARM_UP_MS; k++)
+    for (const c of cases) if (c.n <= 64) findRoots(c.p);
   try {
     for (const [i, { name, n, p }] of cases.entries()) {
       const res = findRoots(p);
@@ -153,23 +170,27 @@ export async function benchRoots(family = '', degrees: readonly number[] = DEGRE
       const numpyBerr = rootsBackwardError(p, theirRoots.re, theirRoots.im);
       const numpySetErr = setBackwardError(p, theirRoots.re, theirRoots.im);
       // A single call of each sizes the batches; at high degree it also counts as the first sample.
-      if (n <= 64) for (let k = 0; k < 50; k++) findRoots(p); // settle the JIT and GC after the big cases
+      // Settle the JIT and GC after the big cases.
+      const settle = performance.now();
+      if (n <= 64) for (let k = 0; k < 50 || performance.now() - settle < SETTLE_MS; k++) findRoots(p);
       const oursOnce = timeOurs(p, 1);
       const numpyOnce = await numpy.time(i, 1);
-      const innerOurs = Math.max(1, Math.round(TARGET_MS / oursOnce));
-      const innerNumpy = Math.max(1, Math.round(TARGET_MS / numpyOnce));
+      const innerOurs = Math.max(1, Math.round(TARGET_MS / oursOnce.wall));
+      const innerNumpy = Math.max(1, Math.round(TARGET_MS / numpyOnce.wall));
       const big = innerOurs === 1 && innerNumpy === 1;
-      const ours: number[] = big ? [oursOnce] : [];
-      const theirs: number[] = big ? [numpyOnce] : [];
+      const ours: Timing[] = big ? [oursOnce] : [];
+      const theirs: Timing[] = big ? [numpyOnce] : [];
       const rounds = n >= 512 ? 5 : 11;
       while (ours.length < rounds) {
         ours.push(timeOurs(p, innerOurs));
         theirs.push(await numpy.time(i, innerNumpy));
       }
-      const mo = median(ours);
-      const mn = median(theirs);
+      const mo = median(ours.map((t) => t.wall));
+      const mn = median(theirs.map((t) => t.wall));
+      const co = median(ours.map((t) => t.cpu));
+      const cn = median(theirs.map((t) => t.cpu));
       rows.push(
-        `| ${name} | ${n} | ${mo.toFixed(3)} | ${berr.toExponential(1)} | ${setErr.toExponential(1)} | ${res.iterations}${res.converged ? '' : ' (not converged)'} | ${mn.toFixed(3)} | ${numpyBerr.toExponential(1)} | ${numpySetErr.toExponential(1)} | ${(mo / mn).toFixed(2)} |`,
+        `| ${name} | ${n} | ${mo.toFixed(3)} | ${berr.toExponential(1)} | ${setErr.toExponential(1)} | ${res.iterations}${res.converged ? '' : ' (not converged)'} | ${mn.toFixed(3)} | ${numpyBerr.toExponential(1)} | ${numpySetErr.toExponential(1)} | ${(mo / mn).toFixed(2)} | ${(co / cn).toFixed(2)} |`,
       );
     }
   } finally {
@@ -180,10 +201,11 @@ export async function benchRoots(family = '', degrees: readonly number[] = DEGRE
     `findRoots vs numpy.roots (${numpy.version}), Node ${process.version}; median ms per call;`,
     'root error = max over roots of |p(z)| / Σ|a_k||z|^k; set error = max_k |a_k − q_k| / max_k |a_k| with',
     'q = a_0·Π(z − r_i) over the reported set (repeated roots merged) multiplied out in double-double;',
-    'sweeps = Aberth + polish sweeps of ours.',
+    'sweeps = Aberth + polish sweeps of ours; ours / numpy in wall time and in processor time (medians of each,',
+    'both processes counted whole, all threads).',
     '',
-    '| family | degree | ours (ms) | root error | set error | sweeps | numpy (ms) | numpy root error | numpy set error | ours / numpy |',
-    '| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: |',
+    '| family | degree | ours (ms) | root error | set error | sweeps | numpy (ms) | numpy root error | numpy set error | ours / numpy | ours / numpy, processor |',
+    '| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: |',
     ...rows,
   ].join('\n');
 }

@@ -91,7 +91,6 @@ export function ddDiv(ah: number, al: number, bh: number, bl: number, out: Float
 
 let bufHi = new Float64Array(64);
 let bufLo = new Float64Array(64);
-const tmpT = new Float64Array(2);
 const tmpQ = new Float64Array(2);
 
 /**
@@ -114,15 +113,35 @@ export function remainderSize(c: ArrayLike<number>, f: DdPoly): number {
     hi[k] = c[k]!;
     lo[k] = 0;
   }
-  const t = tmpT;
   const q = tmpQ;
+  const monic = f.hi[0] === 1 && f.lo[0] === 0;
   for (let k = 0; k + m <= n; k++) {
-    ddDiv(hi[k]!, lo[k]!, f.hi[0]!, f.lo[0]!, q);
+    // q = (hi_k + lo_k) / f_0, then (hi, lo)_{k+j} −= q·f_j: Dekker's product and sum written out.
+    let qh = hi[k]!;
+    let ql = lo[k]!;
+    if (!monic) {
+      ddDiv(qh, ql, f.hi[0]!, f.lo[0]!, q);
+      qh = q[0]!;
+      ql = q[1]!;
+    }
+    const qhh = qh * SPLIT - (qh * SPLIT - qh);
+    const qhl = qh - qhh;
     for (let j = 0; j <= m; j++) {
-      ddMul(q[0]!, q[1]!, f.hi[j]!, f.lo[j]!, t);
-      ddAdd(hi[k + j]!, lo[k + j]!, -t[0]!, -t[1]!, t);
-      hi[k + j] = t[0]!;
-      lo[k + j] = t[1]!;
+      const bh = f.hi[j]!;
+      const bl = f.lo[j]!;
+      const p = qh * bh;
+      const bhh = bh * SPLIT - (bh * SPLIT - bh);
+      const bhl = bh - bhh;
+      const pe = qhl * bhl - (p - qhh * bhh - qhl * bhh - qhh * bhl) + (qh * bl + ql * bh);
+      const th = -(p + pe);
+      const tl = -(pe - (p + pe - p));
+      const ah = hi[k + j]!;
+      const s = ah + th;
+      const z = s - ah;
+      const e = ah - (s - z) + (th - z) + lo[k + j]! + tl;
+      const r = s + e;
+      hi[k + j] = r;
+      lo[k + j] = e - (r - s);
     }
   }
   let worst = 0;

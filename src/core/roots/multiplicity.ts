@@ -71,11 +71,22 @@ export function findMultipleRoots(
   const derivs: Float64Array[] = [c];
   const reversedC = c.slice().reverse();
   const failedSize = new Int32Array(n);
+  // Distance from each root to its nearest neighbour: at a radius below it a root has no cluster (unless it
+  // is taken as real with its mate), and no member list need be built.
+  const nearest = new Float64Array(n).fill(Infinity);
+  const modulus = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    modulus[i] = Math.hypot(re[i]!, im[i]!);
+    for (const j of neighbours[i]!)
+      nearest[i] = Math.min(nearest[i]!, Math.hypot(re[j]! - re[i]!, im[j]! - im[i]!));
+  }
   for (const rho of CLUSTER_RADII) {
     for (let i = 0; i < n; i++) {
       if (group[i]! >= 0 || im[i]! < 0 || neighbours[i]!.length === 0) continue;
-      const mod = Math.hypot(re[i]!, im[i]!);
+      const mod = modulus[i]!;
       const real = im[i]! <= rho * mod;
+      // The nearest neighbour of the centre (x, 0) of a real candidate can be closer than i's by up to im[i].
+      if (!(real && mate[i]! >= 0) && nearest[i]! > rho * mod + (real ? im[i]! : 0)) continue;
       const cx = re[i]!;
       const cy = real ? 0 : im[i]!;
       const members = [i];

@@ -233,20 +233,25 @@ export function polishIllConditioned(c: Float64Array, zr: Float64Array, zi: Floa
 function mates(zr: Float64Array, zi: Float64Array): Int32Array {
   const n = zr.length;
   const mate = new Int32Array(n).fill(-1);
-  const open = new Map<string, number[]>();
+  const upper: number[] = [];
+  const lower: number[] = [];
   for (let i = 0; i < n; i++) {
-    if (zi[i]! >= 0) continue;
-    const key = `${zr[i]}:${-zi[i]!}`;
-    const list = open.get(key) ?? [];
-    list.push(i);
-    open.set(key, list);
+    if (zi[i]! > 0) upper.push(i);
+    else if (zi[i]! < 0) lower.push(i);
   }
-  for (let i = 0; i < n; i++) {
-    if (!(zi[i]! > 0)) continue;
-    const j = open.get(`${zr[i]}:${zi[i]}`)?.pop();
-    if (j !== undefined) {
+  // Both halves sorted by (re, |im|): exact mirrors meet at the same rank, walked as a merge.
+  const byMirror = (a: number, b: number) => zr[a]! - zr[b]! || Math.abs(zi[a]!) - Math.abs(zi[b]!);
+  upper.sort(byMirror);
+  lower.sort(byMirror);
+  let b = 0;
+  for (const i of upper) {
+    while (b < lower.length && byMirror(lower[b]!, i) < 0) b++;
+    if (b === lower.length) break;
+    const j = lower[b]!;
+    if (zr[j] === zr[i] && zi[j] === -zi[i]!) {
       mate[i] = j;
       mate[j] = i;
+      b++;
     }
   }
   return mate;
