@@ -16,6 +16,8 @@ import {
 import type { Result, TransferFunction, Zpk } from '../core/types.ts';
 import type { OverflowEvent } from '../core/fixed/index.ts';
 import { selectZpk } from './derived.ts';
+import { firMaskResult } from '../core/fixed/firMask.ts';
+import type { MaskResult, RequirementMask } from '../core/mask/index.ts';
 import { implementationOf } from './implementation.ts';
 import { memoLast } from './memo.ts';
 import type { WorkbenchState } from './store.ts';
@@ -72,4 +74,17 @@ const checksOf = memoLast((impl: FirImplementation): FirChecks => {
 export function selectFirChecks(s: WorkbenchState): FirChecks | null {
   const r = selectFirImplementation(s);
   return r?.ok ? checksOf(r.value) : null;
+}
+
+const firMaskOf = memoLast((impl: FirImplementation, mask: RequirementMask | undefined) =>
+  firMaskResult(impl, mask),
+);
+/**
+ * The design's mask judged on the quantized taps the target runs, or null (not an FIR, no target settings,
+ * no mask, or settings that do not apply).
+ */
+export function selectFirQuantizedMask(s: WorkbenchState): MaskResult | null {
+  if (!s.design.implementation) return null;
+  const fir = selectFirImplementation(s);
+  return fir?.ok ? firMaskOf(fir.value, s.design.mask) : null;
 }

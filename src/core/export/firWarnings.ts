@@ -5,24 +5,9 @@
  */
 import { qName } from '../fixed/index.ts';
 import type { FirImplementation } from '../fixed/fir.ts';
-import { evaluateMaskOn, functionSource, type RequirementMask } from '../mask/index.ts';
+import type { RequirementMask } from '../mask/index.ts';
+import { firMaskResult } from '../fixed/firMask.ts';
 import { maskFailureWarning, type ExportWarning } from './warnings.ts';
-
-/** |H| in dB of the quantized taps (code / 2^F) at hz, sample rate fs: the direct sum over the taps. */
-function quantizedTapsDb(impl: FirImplementation): (hz: number) => number {
-  const scale = 2 ** -impl.format.fractionBits;
-  const c = impl.codes.map((k) => k * scale);
-  return (hz) => {
-    const w = (2 * Math.PI * hz) / impl.sampleRate;
-    let re = 0;
-    let im = 0;
-    for (let k = 0; k < c.length; k++) {
-      re += c[k]! * Math.cos(w * k);
-      im -= c[k]! * Math.sin(w * k);
-    }
-    return 10 * Math.log10(re * re + im * im);
-  };
-}
 
 /** The warnings of an FIR implementation; empty when none apply. */
 export function firExportWarnings(impl: FirImplementation, mask?: RequirementMask): ExportWarning[] {
@@ -41,10 +26,8 @@ export function firExportWarnings(impl: FirImplementation, mask?: RequirementMas
       where: 'accumulator',
       message: `the ${impl.settings.accumulatorBits}-bit accumulator can overflow for some full-scale input; ${impl.accumulatorNeeded} bits hold any input`,
     });
-  if (mask && mask.regions.length > 0) {
-    const v = evaluateMaskOn(mask, functionSource(quantizedTapsDb(impl)), impl.sampleRate);
-    const w = maskFailureWarning(v, `${bits}-bit ${q}`);
-    if (w) out.push(w);
-  }
+  const v = firMaskResult(impl, mask);
+  const w = v && maskFailureWarning(v, `${bits}-bit ${q}`);
+  if (w) out.push(w);
   return out;
 }
