@@ -9,6 +9,7 @@ import {
   ToneFitAccumulator,
   ToneSearchAccumulator,
   levelReadings,
+  samplesSlice,
   searchWidths,
   settleFound,
   type LevelReport,
@@ -33,16 +34,18 @@ export async function levelsJob(req: LevelsRequest, ctx: JobContext): Promise<{ 
   const fs = info.sampleRate;
   const n = x.length;
   const asked = req.frequenciesHz;
+  // Int16-kept samples are converted into this, slice by slice (float-kept ones are read in place).
+  const scratch = new Float32Array(Math.min(n, SLICE));
   try {
     const search = new ToneSearchAccumulator(fs, asked, searchWidths(asked, LEVEL_SEARCH_FRACTION));
     for (let i = 0; i < n; i += SLICE) {
-      search.push(x.subarray(i, i + SLICE));
+      search.push(samplesSlice(x, i, i + SLICE, scratch));
       await ctx.checkpoint(0.5 * Math.min(1, (i + SLICE) / n));
     }
     const fitted = settleFound(asked, search.result(), fs / n);
     const fit = new ToneFitAccumulator(fs, fitted, n, 'hann');
     for (let i = 0; i < n; i += SLICE) {
-      fit.push(x.subarray(i, i + SLICE));
+      fit.push(samplesSlice(x, i, i + SLICE, scratch));
       await ctx.checkpoint(0.5 + 0.5 * Math.min(1, (i + SLICE) / n));
     }
     const report: LevelReport = {

@@ -7,6 +7,7 @@
 import {
   PyramidBuilder,
   generateSum,
+  samplesSlice,
   type GeneratorSpec,
   type ParsedSignal,
   type ParsedSignalInfo,
@@ -45,8 +46,9 @@ async function keep(
   to: number,
 ): Promise<void> {
   const builder = new PyramidBuilder(samples.length);
+  const scratch = new Float32Array(Math.min(samples.length, PYRAMID_SLICE));
   for (let i = 0; i < samples.length; i += PYRAMID_SLICE) {
-    builder.push(samples.subarray(i, i + PYRAMID_SLICE));
+    builder.push(samplesSlice(samples, i, i + PYRAMID_SLICE, scratch));
     await ctx.checkpoint(from + ((to - from) * Math.min(samples.length, i + PYRAMID_SLICE)) / samples.length);
   }
   const info: RecordingInfo = { id, sampleRate, length: samples.length, pyramid: builder.finish() };

@@ -10,6 +10,7 @@ import {
   WelchAccumulator,
   createSectionFilter,
   runSectionFilter,
+  samplesSlice,
   welchOptionsFor,
   type FitWeighting,
   type ToneEstimate,
@@ -74,10 +75,11 @@ export async function outputJob(
     ? new ToneFitAccumulator(info.sampleRate, req.tones.frequenciesHz, n, req.tones.weighting)
     : null;
   const y = new Float64Array(OUTPUT_STATE_INTERVAL);
+  const scratch = new Float32Array(OUTPUT_STATE_INTERVAL);
   for (let k = 0, start = 0; start < n; k++, start += OUTPUT_STATE_INTERVAL) {
     states?.set(filter.state, k * width);
     const end = Math.min(n, start + OUTPUT_STATE_INTERVAL);
-    const piece = runSectionFilter(filter, x.subarray(start, end), y.subarray(0, end - start));
+    const piece = runSectionFilter(filter, samplesSlice(x, start, end, scratch), y.subarray(0, end - start));
     pyramid?.push(piece);
     welch?.push(piece);
     fit?.push(piece);

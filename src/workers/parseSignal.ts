@@ -1,7 +1,8 @@
 /**
  * Reads a recording (WAV or CSV/TSV) from a Blob in slices, reporting progress after each, and keeps one
- * channel, as float32 when that is exact (growable.ts) and allocated once from the WAV header's frame count,
- * so an hour at 48 kHz takes 0.7 GB, not 2.8 GB of doubling float64 buffers. Runs in the recording worker's
+ * channel in the smallest exact form (growable.ts: 8/16-bit as Int16 codes, 24-bit and float32 as float32),
+ * allocated once from the WAV header's frame count, so a 16-bit hour at 48 kHz takes 0.35 GB, not 2.8 GB of
+ * doubling float64 buffers. Runs in the recording worker's
  * load job (the progress callback is where a cancelled load stops); it has no DOM or worker dependency
  * itself, so tests call it directly.
  */
@@ -14,7 +15,7 @@ import {
   timingNote,
 } from '../core/signal/index.ts';
 import type { ParsedSignal } from '../core/signal/parsedSignal.ts';
-import { GrowableSamples, fitsFloat32, type StoredSamples } from './growable.ts';
+import { GrowableSamples, storageFor, type StoredSamples } from './growable.ts';
 
 /** Bytes read per step: large enough to keep the overhead small, small enough for a lively progress bar. */
 export const PARSE_SLICE_BYTES = 4 << 20;
@@ -104,7 +105,7 @@ async function parseWav(req: ParseRequest, post: ParsePost, step: number): Promi
     if (!r.ok) return post({ type: 'error', error: r.error });
     if (r.value) {
       const info = decoder.info!;
-      out ??= new GrowableSamples(fitsFloat32(info.format), info.frameCount ?? undefined);
+      out ??= new GrowableSamples(storageFor(info.format), info.frameCount ?? undefined);
       out.push(r.value.channels[0]!);
     }
     const p = decoder.progress();
@@ -142,7 +143,7 @@ async function parseCsv(req: ParseRequest, post: ParsePost, step: number): Promi
   const reader = new CsvSignalReader();
   const text = new TextDecoder('utf-8');
   // Text numbers are float64 values; keep them so.
-  const out = new GrowableSamples(false);
+  const out = new GrowableSamples('float64');
   let read = 0;
   for await (const chunk of slices(req.file, step)) {
     read += chunk.length;

@@ -6,7 +6,16 @@
  * slowest pole before it, as far as a fixed budget of work reaches (PREVIEW_BUDGET); the rest of the view
  * keeps the last full output until the design is released and run through the whole recording.
  */
-import { PYRAMID_BASE, columnExtremes, createSectionFilter, runSectionFilter } from '../core/signal/index.ts';
+import {
+  INT16_FULL_SCALE,
+  PYRAMID_BASE,
+  ScaledInt16Samples,
+  columnExtremes,
+  createSectionFilter,
+  runSectionFilter,
+  samplesSlice,
+  type RecordingSamples,
+} from '../core/signal/index.ts';
 import type { Section } from '../core/types.ts';
 import type { JobContext } from './jobs.ts';
 import { outputStretch } from './outputJob.ts';
@@ -145,7 +154,9 @@ export async function viewJob(
     ? null
     : line
       ? { kind: 'line', values: Float32Array.from(x.subarray(i0, i1)) }
-      : { kind: 'band', ...columnExtremes(info.pyramid, i0, i1, columns, x) };
+      : x instanceof ScaledInt16Samples
+        ? { kind: 'band', ...columnExtremes(info.pyramid, i0, i1, columns, x.codes, 1 / INT16_FULL_SCALE) }
+        : { kind: 'band', ...columnExtremes(info.pyramid, i0, i1, columns, x) };
   const stored = ctx.get<StoredOutput>(OUTPUT_KEY);
   let output: ViewResult['output'] = null;
   const outputKept =
@@ -178,10 +189,12 @@ export async function viewJob(
  * which V8 collected late.
  */
 let previewScratch = new Float64Array(0);
+/** The preview's input, converted from Int16 codes (a recording kept so), reused likewise. */
+let previewInput = new Float32Array(0);
 
 function previewOf(
   p: { version: number; sections: Section[] },
-  x: Float32Array | Float64Array,
+  x: RecordingSamples,
   i0: number,
   i1: number,
   columns: number,
@@ -193,9 +206,12 @@ function previewOf(
   const start = i0 - warmup;
   const liveEnd = Math.min(i1, start + reach);
   if (previewScratch.length < liveEnd - start) previewScratch = new Float64Array(liveEnd - start);
+  if (x instanceof ScaledInt16Samples && previewInput.length < liveEnd - start) {
+    previewInput = new Float32Array(liveEnd - start);
+  }
   const y = runSectionFilter(
     createSectionFilter(p.sections),
-    x.subarray(start, liveEnd),
+    samplesSlice(x, start, liveEnd, previewInput),
     previewScratch.subarray(0, liveEnd - start),
   );
   const per = (i1 - i0) / columns;

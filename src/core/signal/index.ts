@@ -19,3 +19,4 @@ export * from './levels.ts';
 export * from './toneFit.ts';
 export * from './toneSearch.ts';
 export * from './pyramid.ts';
+export * from './scaledInt16.ts';

@@ -1,5 +1,6 @@
 /** A recording read from a WAV or CSV file into the one channel that is filtered. */
 import type { SampleFormat } from './sampleFormat.ts';
+import type { RecordingSamples } from './scaledInt16.ts';
 
 /** A file read into one channel of samples. */
 export interface ParsedSignal {
@@ -9,10 +10,11 @@ export interface ParsedSignal {
   /** Samples per second, Hz. */
   sampleRate: number;
   /**
-   * The channel being filtered, as numbers (WAV integers scaled to [-1, 1)); float32 when that holds the
-   * source exactly (8-, 16-, 24-bit and float32 WAV), which halves the memory of a long recording.
+   * The channel being filtered, as numbers (WAV integers scaled to [-1, 1)): 8- and 16-bit WAV as their
+   * Int16 codes (scaledInt16.ts, a quarter of float64), 24-bit and float32 WAV as float32 (exact), the rest
+   * float64.
    */
-  samples: Float32Array | Float64Array;
+  samples: RecordingSamples;
   /** 0-based channel kept and how many the file has (1 for CSV). */
   channel: number;
   channelCount: number;

@@ -93,13 +93,15 @@ export function pyramidOf(x: ArrayLike<number>): MinMaxPyramid {
  * Smallest and largest sample over [a, b): exact when the raw samples are given (the partial blocks at the
  * ends are read from them), otherwise over the whole finest blocks that [a, b) touches (at most
  * PYRAMID_BASE − 1 samples beyond each end). Whole blocks are read at the coarsest level that fits, so the
- * cost is a few reads per level. [+∞, −∞] for an empty range.
+ * cost is a few reads per level. [+∞, −∞] for an empty range. The raw values are raw[i]·rawScale (integer
+ * codes with a power-of-two scale).
  */
 export function rangeExtremes(
   p: MinMaxPyramid,
   a: number,
   b: number,
   raw: ArrayLike<number> | null = null,
+  rawScale = 1,
 ): [number, number] {
   let lo = Infinity;
   let hi = -Infinity;
@@ -120,6 +122,11 @@ export function rangeExtremes(
       const v = raw[i]!;
       if (v < lo) lo = v;
       if (v > hi) hi = v;
+    }
+    // A power-of-two scale (integer codes read as values) is exact and keeps the order.
+    if (lo <= hi) {
+      lo *= rawScale;
+      hi *= rawScale;
     }
     ka = aa / PYRAMID_BASE;
     kb = bb / PYRAMID_BASE;
@@ -159,6 +166,7 @@ export function columnExtremes(
   i1: number,
   columns: number,
   raw: ArrayLike<number> | null = null,
+  rawScale = 1,
 ): ColumnExtremes {
   const min = new Float32Array(columns);
   const max = new Float32Array(columns);
@@ -166,7 +174,7 @@ export function columnExtremes(
   for (let c = 0; c < columns; c++) {
     const a = i0 + Math.floor(c * per);
     const b = Math.max(a + 1, Math.min(i1, i0 + Math.floor((c + 1) * per)));
-    const [lo, hi] = rangeExtremes(p, a, b, raw);
+    const [lo, hi] = rangeExtremes(p, a, b, raw, rawScale);
     min[c] = lo;
     max[c] = hi;
   }

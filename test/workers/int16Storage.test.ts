@@ -1,0 +1,133 @@
+import { describe, expect, it } from 'vitest';
+import {
+  ScaledInt16Samples,
+  makeTones,
+  writeWav,
+  type RecordingSamples,
+} from '../../src/core/signal/index.ts';
+import type { Section } from '../../src/core/types.ts';
+import type { JobContext } from '../../src/workers/jobs.ts';
+import { adoptPendingJob, loadFileJob } from '../../src/workers/loadJobs.ts';
+import { outputJob } from '../../src/workers/outputJob.ts';
+import { inputSpectrumJob } from '../../src/workers/spectrumJob.ts';
+import { levelsJob } from '../../src/workers/levelsJob.ts';
+import { viewJob } from '../../src/workers/viewJob.ts';
+import { exportJob } from '../../src/workers/exportJob.ts';
+import { PENDING_KEY, RECORDING_INFO_KEY, RECORDING_KEY } from '../../src/workers/recordingKeys.ts';
+
+function context(): JobContext & { store: Map<string, unknown> } {
+  const store = new Map<string, unknown>();
+  return {
+    store,
+    get: <T>(k: string) => store.get(k) as T | undefined,
+    set: (k, v) => void store.set(k, v),
+    drop: (k) => void store.delete(k),
+    checkpoint: async () => {},
+  };
+}
+
+const FS = 8000;
+const N = 30_001;
+// A lowpass biquad and a resonator: enough to exercise state carried across slices.
+const SECTIONS: Section[] = [
+  [0.02, 0.04, 0.02, 1, -1.56, 0.64],
+  [1, 0, -1, 1, -1.9, 0.95],
+];
+
+/** The same 16-bit recording stored twice: as read (Int16 codes) and as the Float32Array of its values. */
+async function twoStores(format: 'i16' | 'u8') {
+  const x = makeTones(N, FS, [
+    { frequencyHz: 440, amplitude: 0.4 },
+    { frequencyHz: 1234.5, amplitude: 0.3 },
+  ]);
+  for (let i = 0; i < N; i++) x[i] = x[i]! + 0.1 * Math.sin(i * i * 1e-3);
+  const { bytes } = writeWav({ format, sampleRate: FS, channels: [x] });
+  const a = context();
+  const loaded = await loadFileJob({ id: 7, file: new Blob([bytes as BlobPart]), name: 'r.wav' }, a);
+  expect(loaded.value.kind).toBe('done');
+  const stored = a.get<RecordingSamples>(RECORDING_KEY)!;
+  expect(stored).toBeInstanceOf(ScaledInt16Samples);
+  const b = context();
+  b.set(PENDING_KEY, stored.subarray(0, stored.length));
+  await adoptPendingJob({ id: 7, sampleRate: FS }, b);
+  expect(b.get(RECORDING_KEY)).toBeInstanceOf(Float32Array);
+  return { a, b };
+}
+
+describe('8- and 16-bit recordings kept as Int16 codes', () => {
+  it('read back as code/32768, the values the WAV holds (8-bit as (byte − 128)/128)', async () => {
+    // The codes written by the WAV writer are round(x·32768) (sampleFormat.ts); reading gives code/32768.
+    const x = Float64Array.from({ length: 1000 }, (_, i) => Math.sin(i / 7) * 0.9);
+    const { bytes } = writeWav({ format: 'i16', sampleRate: FS, channels: [x] });
+    const c = context();
+    await loadFileJob({ id: 1, file: new Blob([bytes as BlobPart]), name: 'a.wav' }, c);
+    const s = c.get<ScaledInt16Samples>(RECORDING_KEY)!;
+    expect(s.codes.BYTES_PER_ELEMENT).toBe(2);
+    const got = s.subarray(0);
+    for (let i = 0; i < x.length; i++) expect(got[i]! * 32768).toBe(Math.round(x[i]! * 32768));
+    // Clamped ends, as TypedArray.subarray.
+    expect(s.subarray(990, 5000).length).toBe(10);
+    expect(s.subarray(5, 3).length).toBe(0);
+  });
+
+  for (const format of ['i16', 'u8'] as const) {
+    it(`every recording job gives bit for bit the Float32 store's answer (${format})`, async () => {
+      const { a, b } = await twoStores(format);
+      // The pyramid built while loading.
+      expect(a.get(RECORDING_INFO_KEY)).toEqual(b.get(RECORDING_INFO_KEY));
+      const both = async <T>(run: (c: JobContext) => Promise<{ value: T }>) => {
+        const [p, q] = [await run(a), await run(b)];
+        expect(p.value).toEqual(q.value);
+        return p.value;
+      };
+      const spectrum = { window: 'hann' as const, nperseg: 1024 };
+      await both((c) =>
+        outputJob(
+          {
+            id: 7,
+            version: 1,
+            sections: SECTIONS,
+            spectrum,
+            tones: { frequenciesHz: [440, 1234.5], weighting: 'hann' },
+          },
+          c,
+        ),
+      );
+      await both((c) => inputSpectrumJob({ id: 7, ...spectrum }, c));
+      const levels = await both((c) => levelsJob({ id: 7, frequenciesHz: [440, 1234.5] }, c));
+      expect(levels.ok).toBe(true);
+      // Views: band (from the pyramids, partial blocks from the samples), line, and a drag preview.
+      for (const [i0, i1, columns, line] of [
+        [0, N, 300, false],
+        [1001, 17_777, 333, false],
+        [12_345, 12_700, 300, true],
+        [29_000, N, 7, false],
+      ] as const) {
+        const answer = await both((c) =>
+          viewJob(
+            {
+              id: 7,
+              i0,
+              i1,
+              columns,
+              line,
+              preview: { version: 2, sections: SECTIONS.slice(0, 1) },
+              have: { input: false, outputVersion: null },
+            },
+            c,
+          ),
+        );
+        expect(answer.input).not.toBeNull();
+        expect(answer.output).not.toBeNull();
+        expect(answer.preview).not.toBeNull();
+      }
+      for (const kind of ['wav', 'csv'] as const) {
+        const [p, q] = [a, b].map((c) =>
+          exportJob({ id: 7, kind, sections: SECTIONS, format: 'f32', startTime: 0 }, c),
+        );
+        const [bp, bq] = [(await p!).value.blob, (await q!).value.blob];
+        expect(new Uint8Array(await bp.arrayBuffer())).toEqual(new Uint8Array(await bq.arrayBuffer()));
+      }
+    });
+  }
+});
