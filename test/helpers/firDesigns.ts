@@ -43,3 +43,19 @@ export const lopsided16 = (() => {
   const rand = mulberry32(77);
   return Array.from({ length: 16 }, (_, k) => (rand() - 0.5) * 0.6 * 0.8 ** k);
 })();
+
+/**
+ * Anti-alias low-pass at 8 kHz as a designer description: equiripple, flat to 1 kHz within ±0.5 dB, 60 dB down
+ * from 1.4 kHz, least order. Its implied mask is two-sided; 8-bit taps cannot hold its stop band.
+ */
+export const EQUIRIPPLE_LOWPASS_8K = {
+  kind: 'iir',
+  family: 'equiripple',
+  response: 'lowpass',
+  order: 'auto',
+  passbandHz: [1000],
+  stopbandHz: [1400],
+  rippleDb: 0.5,
+  attenuationDb: 60,
+  fs: 8000,
+} as unknown as DesignerSpec;

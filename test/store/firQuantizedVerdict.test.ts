@@ -3,28 +3,16 @@
  * judges the quantized taps, the same as the export's warning; not the sections the taps' roots would make.
  */
 import { describe, expect, it } from 'vitest';
-import type { DesignerSpec } from '../../src/core/design/index.ts';
+import { EQUIRIPPLE_LOWPASS_8K } from '../helpers/firDesigns.ts';
 import { createWorkbenchStore } from '../../src/store/store.ts';
 import { selectFirQuantizedMask } from '../../src/store/firDerived.ts';
 import { selectExportWarnings } from '../../src/store/exportDerived.ts';
 import { selectRunsAsTaps } from '../../src/store/implementationDerived.ts';
 
-const EQUIRIPPLE = {
-  kind: 'iir',
-  family: 'equiripple',
-  response: 'lowpass',
-  order: 'auto',
-  passbandHz: [1000],
-  stopbandHz: [1400],
-  rippleDb: 0.5,
-  attenuationDb: 60,
-  fs: 8000,
-} as unknown as DesignerSpec;
-
 describe('the quantized verdict of an FIR design', () => {
   it('judges the quantized taps: 24-bit taps pass the mask, 8-bit taps fail it, and the export warns alike', () => {
     const store = createWorkbenchStore();
-    const r = store.getState().runDesigner(EQUIRIPPLE, 'replace');
+    const r = store.getState().runDesigner(EQUIRIPPLE_LOWPASS_8K, 'replace');
     expect(r.ok).toBe(true);
     expect(store.getState().design.mask?.regions.find((g) => g.kind === 'pass')?.toHz).toBe(1000);
     expect(selectRunsAsTaps(store.getState())).toBe(true);

@@ -1,5 +1,6 @@
 /** Export warnings: what makes a quantized implementation unsafe, carried in every format. */
 import { describe, expect, it } from 'vitest';
+import { EQUIRIPPLE_LOWPASS_8K } from '../../helpers/firDesigns.ts';
 import { execFileSync } from 'node:child_process';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -177,17 +178,7 @@ describe('warnings inside the exported files', () => {
 
 describe('exportWarnings on FIR and composed designs', () => {
   it('an equiripple FIR that meets its two-sided mask ideally fails it quantized to 8 bits, and every format says so', () => {
-    const spec = {
-      kind: 'iir',
-      family: 'equiripple',
-      response: 'lowpass',
-      order: 'auto',
-      passbandHz: [1000],
-      stopbandHz: [1400],
-      rippleDb: 0.5,
-      attenuationDb: 60,
-      fs: 8000,
-    } as unknown as DesignerSpec;
+    const spec = EQUIRIPPLE_LOWPASS_8K;
     const zpk = designed(spec);
     expect(zpk.poles.every((p) => p.re === 0 && p.im === 0)).toBe(true); // an FIR: poles at the origin only
     const mask = maskFromDesigner(spec)!;
@@ -246,17 +237,7 @@ describe('exportWarnings on FIR and composed designs', () => {
 });
 
 describe('firExportWarnings: an FIR exported as its taps', () => {
-  const spec = {
-    kind: 'iir',
-    family: 'equiripple',
-    response: 'lowpass',
-    order: 'auto',
-    passbandHz: [1000],
-    stopbandHz: [1400],
-    rippleDb: 0.5,
-    attenuationDb: 60,
-    fs: 8000,
-  } as unknown as DesignerSpec;
+  const spec = EQUIRIPPLE_LOWPASS_8K;
   const taps = firTapsOf(designed(spec))!;
   const mask = maskFromDesigner(spec)!;
   const fir = (patch: Partial<FirSettings>) => {
