@@ -1,12 +1,11 @@
 /** JSON and CSV exports of an FIR implementation (core/fixed/fir.ts): the taps as floats and as codes. */
-import { qName } from '../fixed/index.ts';
 import { type FirImplementation } from '../fixed/fir.ts';
 import { firConventionLines, firHash } from './firC.ts';
 import { float17 } from './numbers.ts';
 import { firExportWarnings } from './firWarnings.ts';
 import { warningLine } from './warnings.ts';
 import type { RequirementMask } from '../mask/index.ts';
-import { write, type Json } from './json.ts';
+import { formatsJson, write, type Json } from './json.ts';
 
 const f = (x: number) => ({ float: x });
 
@@ -35,17 +34,7 @@ export function exportFirJson(impl: FirImplementation, opts: FirTextOptions = {}
     taps: impl.codes.length,
     multipliesPerSample: impl.multiplies,
     preAddBits: impl.preAddBits,
-    coefficientFormat: {
-      q: qName(q),
-      wordLength: q.wordLength,
-      integerBits: q.wordLength - 1 - q.fractionBits,
-      fractionBits: q.fractionBits,
-    },
-    dataFormat: {
-      q: `Q0.${s.dataWordLength - 1}`,
-      wordLength: s.dataWordLength,
-      fractionBits: s.dataWordLength - 1,
-    },
+    ...formatsJson(q, s.dataWordLength),
     accumulatorBits: s.accumulatorBits,
     accumulatorBitsNeeded: impl.accumulatorNeeded,
     postShift: impl.postShift,

@@ -1,5 +1,5 @@
 /** JSON export: the sections as floats and as quantized integer codes with their Q format, for other tools. */
-import { qName, type Implementation } from '../fixed/index.ts';
+import { qName, type Implementation, type QFormat } from '../fixed/index.ts';
 import { conventionLines, structureName } from './conventions.ts';
 import { designHash } from './hash.ts';
 import { float17 } from './numbers.ts';
@@ -29,6 +29,26 @@ export function write(v: Json, indent: string): string {
 
 const f = (x: number) => ({ float: x });
 
+/** The coefficient and data formats as every JSON export states them (sections and FIR taps alike). */
+export function formatsJson(
+  q: QFormat,
+  dataWordLength: number,
+): { coefficientFormat: Json; dataFormat: Json } {
+  return {
+    coefficientFormat: {
+      q: qName(q),
+      wordLength: q.wordLength,
+      integerBits: q.wordLength - 1 - q.fractionBits,
+      fractionBits: q.fractionBits,
+    },
+    dataFormat: {
+      q: `Q0.${dataWordLength - 1}`,
+      wordLength: dataWordLength,
+      fractionBits: dataWordLength - 1,
+    },
+  };
+}
+
 /**
  * The JSON export text (format "polewright-sections", version 1); `warnings` lists what makes the
  * implementation unsafe as it stands (empty when nothing does), judged against `opts.mask` when given.
@@ -53,17 +73,7 @@ export function exportJson(impl: Implementation, opts: { mask?: RequirementMask 
     coefficientOrder:
       s.feedbackSign === 'negated' ? ['b0', 'b1', 'b2', '-a1', '-a2'] : ['b0', 'b1', 'b2', 'a1', 'a2'],
     feedbackSign: s.feedbackSign,
-    coefficientFormat: {
-      q: qName(q),
-      wordLength: q.wordLength,
-      integerBits: q.wordLength - 1 - q.fractionBits,
-      fractionBits: q.fractionBits,
-    },
-    dataFormat: {
-      q: `Q0.${s.dataWordLength - 1}`,
-      wordLength: s.dataWordLength,
-      fractionBits: s.dataWordLength - 1,
-    },
+    ...formatsJson(q, s.dataWordLength),
     accumulatorBits: s.accumulatorBits,
     postShift: impl.postShift,
     rounding: s.rounding,
