@@ -47,7 +47,7 @@ export const SECTION_BLOCK = 2048;
  *   y = b0·x + s0,   s0 ← c1·x − a1·s0 + s1,   s1 ← c2·x − a2·s0,   c1 = b1 − a1·b0,  c2 = b2 − a2·b0,
  * which is z0 ← b1·x + z1 − a1·y, z1 ← b2·x − a2·y with y substituted (the same state, s = z). The state
  * no longer waits for y, so consecutive samples overlap in the processor and a section costs about half the
- * time; the products and sums differ from the textbook order, so outputs agree with it (and with
+ * time; the products and sums differ from the plain order (one section at a time), so outputs agree with it (and with
  * scipy.signal.sosfilt) to rounding, not bit for bit. Any split of a signal into pieces gives the one-shot
  * output bit for bit.
  */

@@ -87,8 +87,8 @@ describe('runSectionFilter fused kernel', () => {
     return y;
   }
 
-  /** The textbook transposed direct form II, z0 ← b1·x + z1 − a1·y, z1 ← b2·x − a2·y. */
-  function textbook(sections: Section[], x: Float64Array): Float64Array {
+  /** The plain transposed direct form II, one section at a time, z0 ← b1·x + z1 − a1·y, z1 ← b2·x − a2·y. */
+  function plainForm(sections: Section[], x: Float64Array): Float64Array {
     const y = x.slice();
     for (const [b0, b1, b2, a0, a1, a2] of sections) {
       let z0 = 0;
@@ -116,20 +116,25 @@ describe('runSectionFilter fused kernel', () => {
       const fused = runSectionFilter(createSectionFilter(sections), x);
       const plain = sectionBySection(sections, x);
       expect(Buffer.from(fused.buffer).equals(Buffer.from(plain.buffer)), `${count} sections`).toBe(true);
-      // The same filter as the textbook form, to rounding (the state is the same; only the order of the
+      // The same filter as the plain form, to rounding (the state is the same; only the order of the
       // products and sums differs).
-      const peak = Math.max(1e-300, ...textbook(sections, x).map(Math.abs));
-      expectClose(fused, textbook(sections, x), { abs: 1e-12 * peak }, `${count} sections vs textbook`);
+      const peak = Math.max(1e-300, ...plainForm(sections, x).map(Math.abs));
+      expectClose(
+        fused,
+        plainForm(sections, x),
+        { abs: 1e-12 * peak },
+        `${count} sections vs the plain form`,
+      );
     }
   });
 
-  it('keeps the textbook state: one signal split between the two forms continues seamlessly', () => {
+  it('keeps the plain form’s state: one signal split between the two forms continues seamlessly', () => {
     // Notch near the circle (the hopper scenario's 50 Hz at 2 kHz): state handed over mid-signal.
     const w = (2 * Math.PI * 50) / 2000;
     const sections: Section[] = [[1, -2 * Math.cos(w), 1, 1, -2 * 0.99 * Math.cos(w), 0.99 ** 2]];
     const next = mulberry32(4);
     const x = Float64Array.from({ length: 3000 }, () => next() - 0.5);
-    const whole = textbook(sections, x);
+    const whole = plainForm(sections, x);
     const f = createSectionFilter(sections);
     const first = runSectionFilter(f, x.subarray(0, 1500));
     const rest = runSectionFilter(f, x.subarray(1500));
