@@ -19,13 +19,14 @@ function Item({ label, id, children }: { label: string; id: string; children: st
 function EnvelopeNote({ envelope, fs }: { envelope: EnvelopeResult; fs: number }) {
   if (!envelope.shown) return <span className="pw-readout-hint">{envelope.note}</span>;
   const tau = envelope.timeConstant;
+  const text = `slowest pole r = ${formatNumber(envelope.radius, 5)}, τ = ${formatNumber(tau, 3)} samples (${formatSeconds(tau / fs)})`;
+  // Where the row is too narrow the text ends in an ellipsis; the tooltip keeps the whole of it.
   return (
-    <span className="pw-envelope-note" data-testid="time-envelope-note">
+    <span className="pw-envelope-note" data-testid="time-envelope-note" title={text}>
       <svg width="18" height="8" aria-hidden="true">
         <path d="M0 4H18" className="pw-time-envelope" />
       </svg>
-      slowest pole r = {formatNumber(envelope.radius, 5)}, τ = {formatNumber(tau, 3)} samples (
-      {formatSeconds(tau / fs)})
+      <span className="pw-envelope-text">{text}</span>
     </span>
   );
 }
