@@ -43,6 +43,9 @@ test('a notch designed at 120 Hz, 10 Hz wide, shows there with that width', asyn
   expect(magnitudeDbHz(zpk, fs, 120)).toBeLessThan(-100); // a zero on the unit circle at f0
   expect(Math.abs(notchWidthHz(zpk, fs, 120) - 10)).toBeLessThan(0.01); // −3 dB width as asked
   await expect(designerStatus(page).getByTestId('designer-title')).toHaveText('Notch');
+  // The demo's name and note described the hum notches it replaced: the header now names the notch.
+  await expect(page.getByRole('textbox', { name: 'Design name' })).toHaveValue('Notch');
+  expect((await readDesign(page)).note).toBe('');
 
   // The frequency view's read-out at the notch and half a width away (the pointer lands within a pixel).
   await hoverFrequency(page, 120);

@@ -4,6 +4,11 @@ import type { Design } from '../core/model/design.ts';
 import { maskFromNotchRequirement } from '../core/mask/index.ts';
 import { hzToOmega } from '../core/units.ts';
 
+/** The demo design's name and note (a designer that replaces the demo's roots replaces them too: store/designer.ts). */
+export const DEMO_NAME = 'Hopper scale: 50 Hz hum notches';
+export const DEMO_NOTE =
+  'Load-cell bridge on a grain-hopper weighing station, sampled at 2 kHz. Mains hum at 50 Hz and its 3rd and 5th harmonics must drop by at least 40 dB while the weight reading below 20 Hz droops by less than 0.1 dB.';
+
 /** Half-width of the demo's hum stop regions, Hz. */
 export const DEMO_HUM_TOLERANCE_HZ = 0.02;
 
@@ -39,7 +44,7 @@ export function demoDesign(): Design {
     poles: hum.map((f) => pairAt(f, r, fs)),
     gainRule: { kind: 'dc' },
     ...(mask.ok ? { mask: mask.value } : {}),
-    name: 'Hopper scale: 50 Hz hum notches',
-    note: 'Load-cell bridge on a grain-hopper weighing station, sampled at 2 kHz. Mains hum at 50 Hz and its 3rd and 5th harmonics must drop by at least 40 dB while the weight reading below 20 Hz droops by less than 0.1 dB.',
+    name: DEMO_NAME,
+    note: DEMO_NOTE,
   };
 }

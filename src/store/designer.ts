@@ -17,6 +17,7 @@ import type { Design } from '../core/model/design.ts';
 import { partsOf, replacePart } from '../core/model/parts.ts';
 
 import { problemPlace, type DesignProblem } from '../core/model/check.ts';
+import { namedAfterReplacing } from './naming.ts';
 
 /** What happens to the mask when a designer runs. */
 export type DesignerMaskPolicy =
@@ -68,15 +69,35 @@ function withDesigned(
   };
 }
 
-/** Runs a designer on a design: the new design and the designer's result, or its InputError. */
+/**
+ * Words for a designer run that replaces the design's roots: the new designer's title ("Elliptic low-pass"),
+ * and the title of the designer it replaces, if any.
+ */
+export interface DesignerNaming {
+  title: string;
+  previousTitle?: string;
+}
+
+/**
+ * Runs a designer on a design: the new design and the designer's result, or its InputError. With `naming`,
+ * a name the workbench gave follows the new designer (store/naming.ts).
+ */
 export function applyDesigner(
   design: Design,
   spec: DesignerSpec,
   policy: DesignerMaskPolicy = 'fill',
+  naming?: DesignerNaming,
 ): Result<{ design: Design; result: DesignResult }> {
   const r = runDesigner(spec);
   if (!r.ok) return r;
-  return { ok: true, value: { design: withDesigned(design, spec, r.value, policy), result: r.value } };
+  const next = withDesigned(design, spec, r.value, policy);
+  return {
+    ok: true,
+    value: {
+      design: naming ? { ...next, ...namedAfterReplacing(design, naming.title, naming.previousTitle) } : next,
+      result: r.value,
+    },
+  };
 }
 
 /**
@@ -161,9 +182,10 @@ export interface DesignerActions {
    * the mask follows `policy` (default 'fill'). One undo step. On bad parameters nothing changes and
    * the InputError says what to change. Needs the design algorithms (store/designEngine.ts): the Design
    * page, which calls it, brings them with its code; before they are installed it throws
-   * DesignEnginePending and changes nothing (whenDesignEngine waits and runs again).
+   * DesignEnginePending and changes nothing (whenDesignEngine waits and runs again). With `naming`, a name
+   * the workbench gave the design follows the new designer (store/naming.ts), in the same undo step.
    */
-  runDesigner(spec: DesignerSpec, policy?: DesignerMaskPolicy): Result<DesignResult>;
+  runDesigner(spec: DesignerSpec, policy?: DesignerMaskPolicy, naming?: DesignerNaming): Result<DesignResult>;
   /** Re-runs the remembered designer with changed parameters (replaces the roots; one undo step). */
   rerunDesigner(patch: DesignerPatch): Result<DesignResult>;
   /** Forgets the designer and keeps the roots, for free editing (one undo step). */
@@ -219,8 +241,8 @@ export function designerActions(
   const designed = (r: Result<{ design: Design; result: DesignResult }>) =>
     r.ok ? { ok: true as const, value: { design: r.value.design, out: r.value.result } } : r;
   return {
-    runDesigner: (spec, policy = 'fill') => {
-      const r = attempt((d) => designed(applyDesigner(d, spec, policy)));
+    runDesigner: (spec, policy = 'fill', naming) => {
+      const r = attempt((d) => designed(applyDesigner(d, spec, policy, naming)));
       if (r.ok) {
         rootsReplaced();
         designArrived();

@@ -1,6 +1,7 @@
 import { describe, it, expect } from 'vitest';
 import { createWorkbenchStore } from '../../src/store/store.ts';
 import { emptyDesign } from '../../src/core/model/design.ts';
+import { demoDesign } from '../../src/store/demo.ts';
 import { mergeDesignerPatch } from '../../src/store/designer.ts';
 import { selectDesignerStatus, selectMaskResult, selectZpk } from '../../src/store/derived.ts';
 import { responseAt } from '../../src/core/response/index.ts';
@@ -179,5 +180,46 @@ describe('requirement mask in the store', () => {
     s().undo();
     expect(s().design.mask).toBeUndefined();
     expect(s().setMask(null).ok).toBe(true);
+  });
+});
+
+describe('the name of a design a designer replaced', () => {
+  const LOWPASS = {
+    kind: 'iir',
+    family: 'butterworth',
+    response: 'lowpass',
+    order: 4,
+    edgesHz: [100],
+    fs: 2000,
+  } as unknown as DesignerSpec;
+  const naming = { title: 'Butterworth low-pass' };
+
+  it("the demo's name and note give way to the designer's title, in the same undo step", () => {
+    const store = createWorkbenchStore(demoDesign());
+    const before = store.getState().design;
+    expect(store.getState().runDesigner(LOWPASS, 'keep', naming).ok).toBe(true);
+    expect(store.getState().design.name).toBe('Butterworth low-pass');
+    expect(store.getState().design.note).toBe('');
+    store.getState().undo();
+    expect(store.getState().design).toBe(before);
+  });
+
+  it('a name the user gave stays, and so does their note', () => {
+    const d = { ...emptyDesign(2000), name: 'Silo level anti-alias', note: 'runs on the level board' };
+    const store = createWorkbenchStore(d);
+    store.getState().runDesigner(LOWPASS, 'keep', naming);
+    expect(store.getState().design.name).toBe('Silo level anti-alias');
+    expect(store.getState().design.note).toBe('runs on the level board');
+  });
+
+  it("a previous designer's title follows the next designer; an empty design's name does too", () => {
+    const store = createWorkbenchStore(emptyDesign(2000));
+    store.getState().runDesigner(LOWPASS, 'keep', naming);
+    expect(store.getState().design.name).toBe('Butterworth low-pass');
+    store.getState().runDesigner(NOTCH, 'keep', { title: 'Notch', previousTitle: 'Butterworth low-pass' });
+    expect(store.getState().design.name).toBe('Notch');
+    // Without naming (the command line, re-runs) the name is never touched.
+    store.getState().runDesigner(LOWPASS);
+    expect(store.getState().design.name).toBe('Notch');
   });
 });

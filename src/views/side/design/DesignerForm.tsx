@@ -25,6 +25,7 @@ import { errorField, errorText } from './designErrors.ts';
 import { FormField, PairField } from './FormField.tsx';
 import { maskFromDesigner } from '../../../core/mask/index.ts';
 import { addPartEdit, rerunPartEdit } from '../../../store/partEdits.ts';
+import { describeDesigner } from './describe.ts';
 
 export interface DesignerFormProps {
   form: DesignFormState;
@@ -95,7 +96,10 @@ export function DesignerForm({ form, setForm, editingPart = null, onStopEditing 
         ? store.designerEdit(addPartEdit(spec, withMask && impliedMask ? 'fill' : 'keep'))
         : how === 'part'
           ? store.designerEdit(rerunPartEdit(editingPart!, () => spec))
-          : store.runDesigner(spec, withMask && impliedMask ? 'replace' : 'keep');
+          : store.runDesigner(spec, withMask && impliedMask ? 'replace' : 'keep', {
+              title: describeDesigner(spec).title,
+              ...(store.design.designer && { previousTitle: describeDesigner(store.design.designer).title }),
+            });
     if (r.ok) {
       setErrors({});
       setGeneral(null);

@@ -2,7 +2,8 @@
  * The system entry's small helpers that the first view needs without the parser (readEntry.ts, which loads
  * after the first paint): where an error sits in the text, and the name a typed system takes.
  */
-import { emptyDesign, type Design } from '../../../core/model/design.ts';
+import type { Design } from '../../../core/model/design.ts';
+import { namedAfterReplacing } from '../../../store/naming.ts';
 
 /** The line holding a 0-based offset, with the column inside it (1-based line number). */
 export function locate(text: string, position: number): { line: number; lineText: string; column: number } {
@@ -17,11 +18,7 @@ export function locate(text: string, position: number): { line: number; lineText
 /** The name a typed system takes over from a scenario's or the empty design's name. */
 export const TYPED_NAME = 'Typed system';
 
-/**
- * Name and note for a design replaced by typed text: a scenario's note described other roots, so it goes
- * and the name with it; a name the user chose (a design without a note) stays.
- */
-export function typedAbout(design: Pick<Design, 'name' | 'note'>): { name?: string; note?: string } {
-  if (design.note) return { name: TYPED_NAME, note: '' };
-  return design.name === emptyDesign().name ? { name: TYPED_NAME } : {};
+/** Name and note for a design replaced by typed text: a name the workbench gave becomes TYPED_NAME (store/naming.ts). */
+export function typedAbout(design: Pick<Design, 'name' | 'note'>): { name: string; note: string } {
+  return namedAfterReplacing(design, TYPED_NAME);
 }

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { locate, readEntry, typedAbout, TYPED_NAME } from '../../../../src/views/side/entry/readEntry.ts';
+import { DEMO_NAME, DEMO_NOTE } from '../../../../src/store/demo.ts';
 import { ENTRY_EXAMPLES } from '../../../../src/views/side/entry/examples.ts';
 import { expectClose } from '../../../helpers/expectClose.ts';
 
@@ -48,9 +49,17 @@ describe('locate', () => {
 });
 
 describe('typedAbout', () => {
-  it('drops a scenario note and its name, keeps a name the user chose', () => {
-    expect(typedAbout({ name: 'Hopper scale', note: 'Load cell…' })).toEqual({ name: TYPED_NAME, note: '' });
-    expect(typedAbout({ name: 'My loop filter', note: '' })).toEqual({});
-    expect(typedAbout({ name: 'Empty design', note: '' })).toEqual({ name: TYPED_NAME });
+  it("drops the demo's name and note, keeps a name and note the user chose", () => {
+    expect(typedAbout({ name: DEMO_NAME, note: DEMO_NOTE })).toEqual({ name: TYPED_NAME, note: '' });
+    expect(typedAbout({ name: 'My loop filter', note: '' })).toEqual({ name: 'My loop filter', note: '' });
+    expect(typedAbout({ name: 'My loop filter', note: 'gyro rate loop' })).toEqual({
+      name: 'My loop filter',
+      note: 'gyro rate loop',
+    });
+    expect(typedAbout({ name: 'Empty design', note: '' })).toEqual({ name: TYPED_NAME, note: '' });
+    expect(typedAbout({ name: TYPED_NAME, note: 'from the old board' })).toEqual({
+      name: TYPED_NAME,
+      note: 'from the old board',
+    });
   });
 });
