@@ -24,8 +24,13 @@ export function exactChecksStatus(): ExactChecksStatus {
   return exactChecks() ? READY : (failure ?? CHECKING);
 }
 
-/** Calls listener with every change of the status; returns the function that stops it. */
+/**
+ * Calls listener with every change of the status; returns the function that stops it. Ready is the last
+ * status there is: once it has been told, every listener is let go (a store made after that is not kept
+ * alive by this module).
+ */
 export function watchExactChecks(listener: (status: ExactChecksStatus) => void): () => void {
+  if (exactChecks()) return () => {};
   listeners.add(listener);
   return () => listeners.delete(listener);
 }
@@ -48,6 +53,7 @@ export function loadExactChecks(): Promise<void> {
         loading = null;
         installExactChecks(m.EXACT_CHECKS);
         tell();
+        listeners.clear();
       },
       (e: unknown) => {
         loading = null;

@@ -13,28 +13,10 @@ import { selectDesignerResult, selectDesignerStatus } from '../../src/store/deri
 import type { DesignerSpec } from '../../src/core/design/light.ts';
 
 /** The engine module's import, held until the test lets it arrive (or fail). */
-const gate = vi.hoisted(() => {
-  let open: (ok: boolean) => void = () => {};
-  let wait = Promise.resolve(true);
-  return {
-    hold() {
-      wait = new Promise<boolean>((r) => (open = r));
-    },
-    arrive: () => open(true),
-    fail: () => open(false),
-    wait: () => wait,
-    imports: 0,
-  };
-});
+const gate = await vi.hoisted(async () => (await import('../helpers/importGate.ts')).importGate());
 vi.mock('../../src/store/designEngineImport.ts', async (importOriginal) => {
   const real = await importOriginal<typeof import('../../src/store/designEngineImport.ts')>();
-  return {
-    importDesignEngine: async () => {
-      gate.imports++;
-      if (!(await gate.wait())) throw new Error('Failed to fetch dynamically imported module');
-      return real.importDesignEngine();
-    },
-  };
+  return { importDesignEngine: gate.gated(real.importDesignEngine) };
 });
 const { loadDesignEngine } = await import('../../src/store/designEngine.ts');
 

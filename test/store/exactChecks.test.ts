@@ -12,28 +12,10 @@ import { selectExpandedCheck, selectStability, selectTypedDiagnostics } from '..
 import type { WorkbenchStore } from '../../src/store/store.ts';
 
 /** The exact checks' import, held until the test lets it arrive (or fail). */
-const gate = vi.hoisted(() => {
-  let open: (ok: boolean) => void = () => {};
-  let wait = Promise.resolve(true);
-  return {
-    hold() {
-      wait = new Promise<boolean>((r) => (open = r));
-    },
-    arrive: () => open(true),
-    fail: () => open(false),
-    wait: () => wait,
-    imports: 0,
-  };
-});
+const gate = await vi.hoisted(async () => (await import('../helpers/importGate.ts')).importGate());
 vi.mock('../../src/store/exactChecksImport.ts', async (importOriginal) => {
   const real = await importOriginal<typeof import('../../src/store/exactChecksImport.ts')>();
-  return {
-    importExactChecks: async () => {
-      gate.imports++;
-      if (!(await gate.wait())) throw new Error('Failed to fetch dynamically imported module');
-      return real.importExactChecks();
-    },
-  };
+  return { importExactChecks: gate.gated(real.importExactChecks) };
 });
 const { loadExactChecks } = await import('../../src/store/exactChecks.ts');
 
