@@ -119,7 +119,7 @@ function PartRow(props: {
     <li className="pw-recipe-part">
       <span className="pw-recipe-kind">{kind.label}</span>
       {kind.fields.map((f) => (
-        <label key={f.key} className="pw-recipe-field">
+        <label key={f.key} className={f.list ? 'pw-recipe-field pw-recipe-field-list' : 'pw-recipe-field'}>
           {f.label}
           <input
             id={`${id}-${f.key}`}
