@@ -23,6 +23,8 @@ export interface TapZeros {
    * fewer (they went to infinity); trailing zero taps give zeros at the origin, listed in `zeros`.
    */
   leadingZeroTaps: number;
+  /** Trailing taps that quantized to 0: each puts one of `zeros` at the origin. */
+  trailingZeroTaps: number;
   /** Every tap quantized to 0: H is 0 everywhere and has no zeros to draw. */
   allZero: boolean;
   /** Whether the root finder met its stopping test for every zero. */
@@ -35,6 +37,7 @@ export function tapZeros(taps: readonly number[]): TapZeros {
   return {
     zeros: r.grouped.filter((z) => z.im >= 0),
     leadingZeroTaps: r.atInfinity,
+    trailingZeroTaps: r.zeroPolynomial ? 0 : taps.length - 1 - taps.findLastIndex((t) => t !== 0),
     allZero: r.zeroPolynomial,
     converged: r.converged,
   };

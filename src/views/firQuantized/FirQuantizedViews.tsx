@@ -5,7 +5,11 @@
  */
 import { qName } from '../../core/fixed/index.ts';
 import type { FirImplementation } from '../../core/fixed/fir.ts';
-import { selectFirQuantized, selectFirQuantizedMagnitude } from '../../store/firQuantizedDerived.ts';
+import {
+  selectFirQuantized,
+  selectFirQuantizedMagnitude,
+  type FirQuantized,
+} from '../../store/firQuantizedDerived.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 import type { MagnitudeOverlayProps } from '../frequency/overlays.ts';
 import { QuantizedLine, QuantizedTraceKey, useQuantizedPath } from '../frequency/QuantizedTrace.tsx';
@@ -15,26 +19,37 @@ import { QuantizedPlaneKey, quantizedMarks } from '../plane/QuantizedRoots.tsx';
 /** "16-bit Q1.15 taps". */
 const tapsFormat = (impl: FirImplementation) => `${impl.settings.wordLength}-bit ${qName(impl.format)} taps`;
 
-/** What the key adds when the drawn zeros are not simply the L − 1 of the taps. */
-function zerosCaveat(q: NonNullable<ReturnType<typeof selectFirQuantized>>): string {
-  const { leadingZeroTaps: m, allZero, converged } = q.zeros;
-  if (allZero) return ': every tap rounds to 0, so the filter is 0 and has no zeros to draw';
+/** What a second line of the key says when the drawn zeros are not simply the L − 1 of the taps. */
+function zerosCaveat(q: FirQuantized): string | null {
+  const { leadingZeroTaps: m, trailingZeroTaps: t, allZero, converged } = q.zeros;
+  if (allZero) return 'every tap rounds to 0: no zeros to draw';
   const parts: string[] = [];
-  if (m > 0) parts.push(`the first ${m === 1 ? 'tap rounds' : `${m} taps round`} to 0, so ${m} fewer zeros`);
-  if (!converged) parts.push('the root finder did not settle every zero: drawn where it stopped');
-  return parts.length > 0 ? ` (${parts.join('; ')})` : '';
+  const taps = (n: number) => (n === 1 ? '1 tap is' : `${n} taps are`);
+  if (m > 0 && m === t) parts.push(`${taps(m)} 0 at each end: ${m} zeros fewer, ${t} at the origin`);
+  else {
+    if (m > 0) parts.push(`the first ${taps(m)} 0: ${m} zeros fewer`);
+    if (t > 0) parts.push(`the last ${taps(t)} 0: ${t} zeros at the origin`);
+  }
+  if (!converged) parts.push('not every zero settled: drawn where the search stopped');
+  return parts.length > 0 ? parts.join('; ') : null;
 }
 
 /** The quantized taps' zeros: diamonds like the quantized roots of sections, with a key. */
 export function QuantizedTapZeros({ scale }: PlaneOverlayProps) {
   const q = useWorkbench(selectFirQuantized);
   if (!q) return null;
+  const caveat = zerosCaveat(q);
   return (
     <g data-testid="quantized-tap-zeros" aria-hidden="true">
       {quantizedMarks('zero', null, q.zeros.zeros, scale)}
       <QuantizedPlaneKey testId="quantized-tap-zeros-key">
-        {`◇ quantized: zeros of the ${tapsFormat(q.impl)}${zerosCaveat(q)}`}
+        {`◇ quantized: zeros of the ${tapsFormat(q.impl)}`}
       </QuantizedPlaneKey>
+      {caveat ? (
+        <QuantizedPlaneKey line={2} testId="quantized-tap-zeros-caveat">
+          {caveat}
+        </QuantizedPlaneKey>
+      ) : null}
     </g>
   );
 }

@@ -56,12 +56,20 @@ export function quantizedMarks(
   );
 }
 
-/** The one-line key of the quantized marks, in the plane's top left corner. */
-export function QuantizedPlaneKey({ children, testId }: { children: ReactNode; testId?: string }) {
+/** A line of the quantized marks' key, in the plane's top left corner (line 2 below the first). */
+export function QuantizedPlaneKey({
+  children,
+  testId,
+  line = 1,
+}: {
+  children: ReactNode;
+  testId?: string;
+  line?: number;
+}) {
   return (
     <text
       x={8}
-      y={32}
+      y={32 + 14 * (line - 1)}
       fill={COLOUR}
       fontSize={11}
       stroke="#fff"
