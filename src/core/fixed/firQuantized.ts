@@ -7,6 +7,7 @@
 import { findRoots } from '../roots/index.ts';
 import type { Root } from '../types.ts';
 import type { FirImplementation } from './fir.ts';
+import { tapsMagnitudeSquaredAt } from './tapsResponse.ts';
 
 /** The values the target multiplies by: code · 2^−F, in tap order c[0] … c[L−1]. */
 export function quantizedTapValues(impl: FirImplementation): number[] {
@@ -53,26 +54,13 @@ export interface TapsMagnitude {
   magnitudeDb: Float64Array;
 }
 
-/**
- * |Σ c[k] e^(−jωk)| at each ω of `omega` (rad/sample), by Horner's rule in e^(−jω) from the last tap, the
- * evaluation scipy.signal.freqz makes of an FIR.
- */
+/** |Σ c[k] e^(−jωk)| at each ω of `omega` (rad/sample), by Horner's rule (tapsResponse.ts). */
 export function tapsMagnitude(taps: readonly number[], omega: Float64Array): TapsMagnitude {
   const n = omega.length;
   const magnitude = new Float64Array(n);
   const magnitudeDb = new Float64Array(n);
-  const L = taps.length;
   for (let i = 0; i < n; i++) {
-    const xr = Math.cos(omega[i]!);
-    const xi = -Math.sin(omega[i]!);
-    let re = 0;
-    let im = 0;
-    for (let k = L - 1; k >= 0; k--) {
-      const t = re * xr - im * xi + taps[k]!;
-      im = re * xi + im * xr;
-      re = t;
-    }
-    const m = Math.hypot(re, im);
+    const m = Math.sqrt(tapsMagnitudeSquaredAt(taps, omega[i]!));
     magnitude[i] = m;
     magnitudeDb[i] = 20 * Math.log10(m);
   }
