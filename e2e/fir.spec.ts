@@ -331,6 +331,7 @@ test('a target for an FIR draws the quantized taps: their zeros on the plane, th
   await expect(trace).toHaveCount(0);
   await expect(page.getByTestId('quantized-paused')).toContainText('drawn again when you let go');
   await expect(page.getByTestId('quantized-trace-paused')).toContainText('drawn again when you let go');
+  await saveScreenshot(page, info, 'fir-quantized-taps-during-drag');
   await page.mouse.up();
   await expect(zerosLayer).toBeVisible();
   await expect(page.getByTestId('quantized-paused')).toHaveCount(0);
