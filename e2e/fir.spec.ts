@@ -19,7 +19,14 @@ import {
 import { zpkToTf } from '../src/core/system/transferFunction.ts';
 import { clickRoot, dragRoot, rootAt } from './support/plane.ts';
 import type { Page } from '@playwright/test';
-import { exportPreview, openTarget } from './support/target.ts';
+import { zToScreen } from './support/plane.ts';
+import {
+  exportPreview,
+  openTarget,
+  pathPoints,
+  quantizedMarks,
+  setCoefficientBits,
+} from './support/target.ts';
 
 test('an equiripple low-pass of the least order designed in the page has linear phase and meets its mask', async ({
   page,
@@ -222,4 +229,114 @@ test('the Target page runs an FIR as taps: form, accumulator and output checks, 
   await saveScreenshot(page, info, 'fir-target');
   await page.keyboard.press('Control+z');
   await expect(part.getByRole('radio', { name: /^Symmetric/ })).toBeChecked();
+});
+
+/** |P(z)| / Σ|c_k||z|^(n−k) for P(z) = Σ c_k z^(n−k) (leading zero taps dropped): 0 at an exact root. */
+function relativeResidual(codes: readonly number[], z: { re: number; im: number }): number {
+  const c = codes.slice(codes.findIndex((k) => k !== 0));
+  let re = 0;
+  let im = 0;
+  let scale = 0;
+  const r = Math.hypot(z.re, z.im);
+  for (const k of c) {
+    [re, im] = [re * z.re - im * z.im + k, re * z.im + im * z.re];
+    scale = scale * r + Math.abs(k);
+  }
+  // at z = 0 with trailing taps 0 (a zero at the origin) the value and its scale are both exactly 0
+  return scale === 0 ? (Math.hypot(re, im) === 0 ? 0 : Infinity) : Math.hypot(re, im) / scale;
+}
+
+test('a target for an FIR draws the quantized taps: their zeros on the plane, their response on the magnitude plot', async ({
+  page,
+}, info) => {
+  await openWorkbench(page);
+  await designEquiripple(page);
+  const d = await readDesign(page);
+  const L = d.poles[0]!.multiplicity + 1;
+  await openTarget(page);
+  // no target settings yet: nothing quantized is drawn, and the old hint is gone
+  await expect(page.getByTestId('quantized-tap-zeros')).toHaveCount(0);
+  await expect(page.getByTestId('quantized-tap-trace')).toHaveCount(0);
+  await expect(page.getByTestId('fir-not-drawn')).toHaveCount(0);
+  // 8-bit taps: about 6 dB per bit (common practice) cannot hold a 60 dB stop band
+  await setCoefficientBits(page, 8);
+  const zerosLayer = page.getByTestId('quantized-tap-zeros');
+  await expect(zerosLayer).toBeVisible();
+  await expect(page.getByTestId('quantized-tap-zeros-key')).toContainText('zeros of the 8-bit Q');
+  // the sections' layers stay away: an FIR runs as taps
+  await expect(page.getByTestId('quantized-roots')).toHaveCount(0);
+  await expect(page.getByTestId('quantized-trace')).toHaveCount(0);
+
+  // the marks are the roots of the exported codes: one per zero (conjugates and repeats counted), L − 1 less
+  // the leading taps that round to 0, each a root of Σ c_k z^(L−1−k) to rounding (relative residual)
+  const doc = JSON.parse(await exportPreview(page, 'JSON')) as { fixed: number[]; taps: number };
+  expect(doc.taps).toBe(L);
+  const marks = await quantizedMarks(page, 'quantized-tap-zeros');
+  expect(marks.every((m) => m.kind === 'zero')).toBe(true);
+  const lead = doc.fixed.findIndex((k) => k !== 0);
+  expect(marks.reduce((n, m) => n + m.multiplicity, 0)).toBe(L - 1 - lead);
+  for (const m of marks) expect(relativeResidual(doc.fixed, m), `zero ${m.re} ${m.im}i`).toBeLessThan(1e-9);
+  // 8 bits round the small end taps to 0: the key says what that does to the zeros
+  expect(lead).toBeGreaterThan(0);
+  await expect(page.getByTestId('quantized-tap-zeros-caveat')).toHaveText(
+    `${lead} taps are 0 at each end: ${lead} zeros fewer, ${lead} at the origin`,
+  );
+  // quantization moved them: some mark is not on any ideal zero
+  const moved = marks.map((m) =>
+    Math.min(...d.zeros.map((z) => Math.hypot(z.re - m.re, z.im - Math.abs(m.im)))),
+  );
+  expect(Math.max(...moved)).toBeGreaterThan(1e-3);
+
+  // the quantized response beside the ideal one: the same in the pass band (to 100 Hz), a higher floor in
+  // the stop band (from 150 Hz), where 8-bit taps lose the 60 dB
+  const trace = page.getByTestId('quantized-tap-trace');
+  await expect(trace).toBeVisible();
+  await expect(trace).toContainText('dashed: quantized, 8-bit Q');
+  const quantized = pathPoints((await trace.locator('path').getAttribute('d')) ?? '');
+  const ideal = pathPoints(
+    (await page.getByTestId('plot-magnitude').locator(':scope > path').getAttribute('d')) ?? '',
+  );
+  expect(quantized.length).toBeGreaterThan(100);
+  const xs = ideal.map((p) => p.x);
+  const [x0, x1] = [Math.min(...xs), Math.max(...xs)];
+  const xAt = (hz: number) => x0 + ((x1 - x0) * hz) / (d.sampleRate / 2); // the default linear axis
+  const top = (pts: typeof ideal, lo: number, hi: number) =>
+    Math.min(...pts.filter((p) => p.x >= xAt(lo) && p.x <= xAt(hi)).map((p) => p.y));
+  expect(Math.abs(top(quantized, 0, 90) - top(ideal, 0, 90)), 'pass band').toBeLessThan(2);
+  expect(
+    top(ideal, 160, d.sampleRate / 2) - top(quantized, 160, d.sampleRate / 2),
+    'stop band',
+  ).toBeGreaterThan(10);
+  // the largest difference still stated on the Target page
+  await expect(page.getByTestId('fir-quantization')).toContainText('Quantized response');
+  await saveScreenshot(page, info, 'fir-quantized-taps');
+
+  // the switch hides both and brings them back
+  const toggle = page.getByRole('checkbox', { name: /Draw the quantized filter/ });
+  await toggle.uncheck();
+  await expect(zerosLayer).toHaveCount(0);
+  await expect(trace).toHaveCount(0);
+  await toggle.check();
+  await expect(zerosLayer).toBeVisible();
+
+  // during a drag the quantized zeros and line step aside and say so; on release they follow the new taps
+  const [i] = quadruplet(d.zeros);
+  const z0 = d.zeros[i]!;
+  const from = await zToScreen(page, z0);
+  const to = await zToScreen(page, { re: z0.re - 0.1, im: z0.im + 0.08 });
+  await page.mouse.move(from.x, from.y);
+  await page.mouse.down();
+  await page.mouse.move(to.x, to.y, { steps: 8 });
+  await expect(zerosLayer).toHaveCount(0);
+  await expect(trace).toHaveCount(0);
+  await expect(page.getByTestId('quantized-paused')).toContainText('drawn again when you let go');
+  await expect(page.getByTestId('quantized-trace-paused')).toContainText('drawn again when you let go');
+  await saveScreenshot(page, info, 'fir-quantized-taps-during-drag');
+  await page.mouse.up();
+  await expect(zerosLayer).toBeVisible();
+  await expect(page.getByTestId('quantized-paused')).toHaveCount(0);
+  const after = JSON.parse(await exportPreview(page, 'JSON')) as { fixed: number[] };
+  expect(after.fixed).not.toEqual(doc.fixed);
+  const marksAfter = await quantizedMarks(page, 'quantized-tap-zeros');
+  for (const m of marksAfter) expect(relativeResidual(after.fixed, m)).toBeLessThan(1e-9);
 });

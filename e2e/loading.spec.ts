@@ -8,6 +8,8 @@ import { encodeLink } from '../src/share/link/index.ts';
 import { demoDesign } from '../src/store/demo.ts';
 import { openWorkbench, readDesign, saveScreenshot, stabilityBanner } from './support/app.ts';
 import { dropFile } from './support/files.ts';
+import { quantizedMarks } from './support/target.ts';
+import { DEFAULT_IMPLEMENTATION } from '../src/core/fixed/index.ts';
 
 /** Records whether a "Loading the …" placeholder is ever put into the page from now on. */
 async function watchForPlaceholders(page: Page): Promise<() => Promise<boolean>> {
@@ -243,4 +245,46 @@ test('a link opens once its codec arrives, and a dropped file waits for the desi
   releaseReader();
   await expect(page.getByTestId('notice').filter({ hasText: 'from loom.json' })).toBeVisible();
   expect((await readDesign(page)).name).toBe(FIRST_RELEASE_DESIGN.name);
+});
+
+test("an FIR's quantized taps wait for their code: the keys say they are loading, then the zeros and curve are drawn", async ({
+  page,
+}) => {
+  // A 4-sample moving average at 1 kHz (zeros at −1 and ±j, three poles at the origin) with 16-bit taps set.
+  const design = {
+    ...demoDesign(),
+    name: 'Smoothing with a target',
+    sampleRate: 1000,
+    zeros: [
+      { re: -1, im: 0, multiplicity: 1 },
+      { re: 0, im: 1, multiplicity: 1 },
+    ],
+    poles: [{ re: 0, im: 0, multiplicity: 3 }],
+    gainRule: { kind: 'fixed' as const, value: 0.25 },
+    implementation: DEFAULT_IMPLEMENTATION,
+  };
+  delete (design as { mask?: unknown }).mask;
+  delete (design as { designer?: unknown }).designer;
+  const release = await holdChunk(page, 'FirQuantizedViews');
+  await page.goto(`/#${encodeLink({ design, view: {} })}`);
+  await page.waitForFunction(() => window.__polewright !== undefined);
+  await expect(page.getByTestId('quantized-tap-zeros-waiting')).toHaveText('◇ quantized taps: loading…');
+  await expect(page.getByTestId('quantized-tap-trace-waiting')).toHaveText('dashed quantized line: loading…');
+  await page.waitForTimeout(300);
+  await expect(page.getByTestId('quantized-tap-zeros')).toHaveCount(0);
+  await expect(page.getByTestId('quantized-tap-trace')).toHaveCount(0);
+  release();
+  await expect(page.getByTestId('quantized-tap-zeros')).toBeVisible();
+  await expect(page.getByTestId('quantized-tap-trace')).toBeVisible();
+  await expect(page.getByTestId('quantized-tap-zeros-waiting')).toHaveCount(0);
+  // 0.25 is exact in 16 bits: the quantized zeros are the design's, −1 and ±j
+  const marks = await quantizedMarks(page, 'quantized-tap-zeros');
+  expect(marks.map((m) => [m.re, m.im].map((v) => Math.round(v * 1e9) / 1e9 + 0))).toEqual(
+    expect.arrayContaining([
+      [-1, 0],
+      [0, 1],
+      [0, -1],
+    ]),
+  );
+  expect(marks).toHaveLength(3);
 });

@@ -160,8 +160,12 @@ test.describe('taking the hum notches to fixed point', () => {
     await page.mouse.move(target.x, target.y, { steps: 8 });
     await expect(page.getByTestId('quantized-roots')).toHaveCount(0);
     await expect(page.getByText('Paused while a root is dragged')).toBeVisible();
+    // the plane and the magnitude plot say so too, rather than drawing the quantized filter of before
+    await expect(page.getByTestId('quantized-paused')).toContainText('drawn again when you let go');
+    await expect(page.getByTestId('quantized-trace-paused')).toContainText('drawn again when you let go');
     await page.mouse.up();
     await expect(page.getByTestId('quantized-roots')).toHaveCount(1);
+    await expect(page.getByTestId('quantized-paused')).toHaveCount(0);
     const moved = await rootAt(page, { kind: 'pole', index: 0 });
     expect(Math.hypot(moved.re - to.re, moved.im - to.im)).toBeLessThan(0.02);
     // Some quantized pole sits within a few coefficient steps (2^-10) of where the pole was dropped.

@@ -18,21 +18,38 @@ export async function setCoefficientBits(page: Page, bits: number): Promise<void
 /** A quantized root drawn on the plane (each conjugate is its own mark). */
 export interface QuantizedMark {
   kind: 'zero' | 'pole';
+  /** The cascade section it belongs to (NaN for an FIR's quantized taps). */
   section: number;
   re: number;
   im: number;
+  multiplicity: number;
 }
 
-/** Every quantized root mark on the plane, read from the drawing's data attributes. */
-export async function quantizedMarks(page: Page): Promise<QuantizedMark[]> {
-  return page.locator('[data-testid="quantized-roots"] [data-quantized]').evaluateAll((els) =>
+/**
+ * Every quantized root mark on the plane, read from the drawing's data attributes: of the sections
+ * ('quantized-roots'), or of an FIR's quantized taps ('quantized-tap-zeros').
+ */
+export async function quantizedMarks(
+  page: Page,
+  layer: 'quantized-roots' | 'quantized-tap-zeros' = 'quantized-roots',
+): Promise<QuantizedMark[]> {
+  return page.locator(`[data-testid="${layer}"] [data-quantized]`).evaluateAll((els) =>
     els.map((e) => ({
       kind: e.getAttribute('data-quantized') as 'zero' | 'pole',
-      section: Number(e.getAttribute('data-section')),
+      section: Number(e.getAttribute('data-section') ?? NaN),
       re: Number(e.getAttribute('data-re')),
       im: Number(e.getAttribute('data-im')),
+      multiplicity: Number(e.getAttribute('data-multiplicity') ?? 1),
     })),
   );
+}
+
+/** The points of an SVG path drawn with M and L commands only (the charts' line paths). */
+export function pathPoints(d: string): { x: number; y: number }[] {
+  return [...d.matchAll(/[ML]\s*(-?[\d.]+)[ ,](-?[\d.]+)/g)].map((m) => ({
+    x: Number(m[1]),
+    y: Number(m[2]),
+  }));
 }
 
 /** Chooses an export format (C header, JSON, CSV) and returns the preview's text. */

@@ -94,13 +94,17 @@ export const selectImplementationSettings = (s: WorkbenchState): ImplementationS
 export const selectHasImplementation = (s: WorkbenchState): boolean => s.design.implementation !== undefined;
 /**
  * Whether the design runs as FIR taps on the target (every pole at the origin; the Target page's FIR part):
- * the quantized sections are then not what the target runs, so they are not drawn.
+ * the quantized sections are then not what the target runs, so the plane and the magnitude plot draw the
+ * quantized taps instead (store/firQuantizedDerived.ts).
  */
 export const selectRunsAsTaps = (s: WorkbenchState): boolean =>
   s.design.poles.length > 0 && s.design.poles.every((p) => p.re === 0 && p.im === 0);
-/** Whether the quantized roots and response are drawn now: settings present and "show quantized" on. */
+/**
+ * Whether the quantized filter is drawn on the plane and the magnitude plot: settings present and "show
+ * quantized" on (the sections' roots and response, or for an FIR the quantized taps' zeros and response).
+ */
 export const selectShowQuantized = (s: WorkbenchState): boolean =>
-  s.design.implementation !== undefined && s.view.showQuantized !== false && !selectRunsAsTaps(s);
+  s.design.implementation !== undefined && s.view.showQuantized !== false;
 
 /** The design taken to fixed point with the settings in force, or why the settings do not apply. */
 export const selectImplementation = (s: WorkbenchState): Result<Implementation> =>

@@ -17,6 +17,7 @@ import { loadZoomKit } from './chart/useAxisZoom.ts';
 import { referenceReading } from './compare/LazyReferenceReading.tsx';
 import { maskHandles } from './frequency/FrequencyChart.tsx';
 import { typedWarning } from './side/SystemPage.tsx';
+import { prefetchFirQuantized } from './firQuantized/firQuantizedSlot.tsx';
 
 function prefetchAll(): void {
   // First the exact checks: the stability banner waits for them (store/exactChecks.ts).
@@ -40,6 +41,7 @@ function prefetchAll(): void {
   void referenceReading.prefetch().catch(() => undefined); // retried when a reference is pinned
   void maskHandles.prefetch().catch(() => undefined); // retried when the magnitude plot is drawn
   void typedWarning.prefetch().catch(() => undefined); // retried when the System page is drawn
+  void prefetchFirQuantized().catch(() => undefined); // an FIR's quantized taps; retried when drawn
 }
 
 /** Schedules the prefetch after the next paint; returns a function that cancels it if it has not started. */

@@ -62,7 +62,7 @@ describe('the first view', () => {
       expect(modules, m).toContain(m);
   });
 
-  it('leaves out the exact checks, the root finder and the designer registry, which load after it', () => {
+  it('leaves out the exact checks, the root finder, the designer registry and the FIR taps arithmetic, which load after it', () => {
     const later = [...modules].filter(
       (m) =>
         m.startsWith('core/roots/') ||
@@ -79,6 +79,12 @@ describe('the first view', () => {
           'core/design/registry.ts',
           'core/design/engine.ts',
           'core/design/index.ts',
+          // an FIR's taps and their zeros (the Target page, the quantized taps on the plane and plots)
+          'core/fixed/fir.ts',
+          'core/fixed/firQuantized.ts',
+          'store/firDerived.ts',
+          'store/firQuantizedDerived.ts',
+          'views/firQuantized/FirQuantizedViews.tsx',
         ].includes(m),
     );
     expect(later).toEqual([]);

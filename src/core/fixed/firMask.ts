@@ -4,21 +4,13 @@
  */
 import { evaluateMaskOn, functionSource, type MaskResult, type RequirementMask } from '../mask/index.ts';
 import type { FirImplementation } from './fir.ts';
+import { tapsMagnitudeSquaredAt } from './tapsResponse.ts';
 
-/** |H| in dB of the quantized taps at a frequency in Hz: the direct sum over the taps. */
+/** |H| in dB of the quantized taps at a frequency in Hz, by Horner's rule over the taps (tapsResponse.ts). */
 export function quantizedTapsDb(impl: FirImplementation): (hz: number) => number {
   const scale = 2 ** -impl.format.fractionBits;
   const c = impl.codes.map((k) => k * scale);
-  return (hz) => {
-    const w = (2 * Math.PI * hz) / impl.sampleRate;
-    let re = 0;
-    let im = 0;
-    for (let k = 0; k < c.length; k++) {
-      re += c[k]! * Math.cos(w * k);
-      im -= c[k]! * Math.sin(w * k);
-    }
-    return 10 * Math.log10(re * re + im * im);
-  };
+  return (hz) => 10 * Math.log10(tapsMagnitudeSquaredAt(c, (2 * Math.PI * hz) / impl.sampleRate));
 }
 
 /** The mask judged on the quantized taps, or null without a mask (or one with no regions). */

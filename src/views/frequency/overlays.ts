@@ -10,6 +10,7 @@ import type { AxisMap } from '../chart/pixels.ts';
 import type { PlotKey, PlotRect } from './layout.ts';
 import { MaskLayer } from './mask/MaskLayer.tsx';
 import { QuantizedTrace } from './QuantizedTrace.tsx';
+import { FirQuantizedTrace } from '../firQuantized/firQuantizedSlot.tsx';
 import { ReferenceTrace } from './ReferenceTrace.tsx';
 
 export interface MagnitudeOverlayProps {
@@ -56,6 +57,7 @@ export interface PlotOverlay {
 export const MAGNITUDE_OVERLAYS: MagnitudeOverlay[] = [
   { id: 'mask', Layer: MaskLayer },
   { id: 'quantized', Layer: QuantizedTrace },
+  { id: 'quantizedTaps', Layer: FirQuantizedTrace },
 ];
 
 /** A magnitude-only layer as a layer of every plot that draws nothing outside the magnitude plot. */

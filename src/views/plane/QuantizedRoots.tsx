@@ -2,10 +2,16 @@
  * The quantized filter's roots on the z-plane, over the ideal ones: small raspberry diamonds (zeros) and
  * small filled triangles (poles), so a root that moved with quantization shows beside its ideal mark and
  * one that did not move still shows inside it. Drawn only while the design has target settings and the
- * overlay is on, and not during a root drag.
+ * overlay is on, and not during a root drag (the key says so meanwhile). An FIR runs as taps on the target:
+ * its quantized zeros are drawn by views/firQuantized/ instead, in the same marks.
  */
+import type { ReactNode } from 'react';
 import type { Root } from '../../core/types.ts';
-import { selectImplementation, selectShowQuantized } from '../../store/implementationDerived.ts';
+import {
+  selectImplementation,
+  selectRunsAsTaps,
+  selectShowQuantized,
+} from '../../store/implementationDerived.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
 import type { PlaneOverlayProps } from './overlays.ts';
 
@@ -13,9 +19,13 @@ import type { PlaneOverlayProps } from './overlays.ts';
 const Q_MARK = 3.5;
 const COLOUR = 'var(--pw-quantized)';
 
-function marks(
+/**
+ * One mark per quantized root and per conjugate: a diamond (zero) or a triangle (pole), with the root's
+ * place in data attributes; `section` is the cascade section it belongs to (none for FIR taps).
+ */
+export function quantizedMarks(
   kind: 'zero' | 'pole',
-  section: number,
+  section: number | null,
   roots: readonly Root[],
   scale: PlaneOverlayProps['scale'],
 ) {
@@ -23,12 +33,13 @@ function marks(
   return roots.flatMap((r, i) =>
     (r.im === 0 ? [0] : [r.im, -r.im]).map((im, m) => (
       <g
-        key={`${kind}${section}-${i}-${m}`}
+        key={`${kind}${section ?? ''}-${i}-${m}`}
         transform={`translate(${scale.x(r.re)},${scale.y(im)})`}
         data-quantized={kind}
-        data-section={section}
+        data-section={section ?? undefined}
         data-re={r.re}
         data-im={im}
+        data-multiplicity={r.multiplicity > 1 ? r.multiplicity : undefined}
       >
         {kind === 'zero' ? (
           <path
@@ -45,24 +56,59 @@ function marks(
   );
 }
 
+/** A line of the quantized marks' key, in the plane's top left corner (line 2 below the first). */
+export function QuantizedPlaneKey({
+  children,
+  testId,
+  line = 1,
+}: {
+  children: ReactNode;
+  testId?: string;
+  line?: number;
+}) {
+  return (
+    <text
+      x={8}
+      y={32 + 14 * (line - 1)}
+      fill={COLOUR}
+      fontSize={11}
+      stroke="#fff"
+      strokeWidth={3}
+      paintOrder="stroke"
+      data-testid={testId}
+    >
+      {children}
+    </text>
+  );
+}
+
+/** The key alone while a drag holds the quantized marks back (`marks`: the shapes it names). */
+export function QuantizedPlanePaused({ marks }: { marks: string }) {
+  return (
+    <g aria-hidden="true">
+      <QuantizedPlaneKey testId="quantized-paused">{`${marks} quantized: drawn again when you let go`}</QuantizedPlaneKey>
+    </g>
+  );
+}
+
 export function QuantizedRoots({ scale }: PlaneOverlayProps) {
+  const on = useWorkbench((s) => selectShowQuantized(s) && !selectRunsAsTaps(s));
   // Hidden during a root drag: rebuilding the implementation every frame costs too much (see useTarget.ts).
-  const shown = useWorkbench((s) => selectShowQuantized(s) && !s.dragging);
-  const result = useWorkbench((s) => (shown ? selectImplementation(s) : null));
-  if (!shown || !result?.ok) return null;
+  const dragging = useWorkbench((s) => s.dragging);
+  const result = useWorkbench((s) => (on && !s.dragging ? selectImplementation(s) : null));
+  if (on && dragging) return <QuantizedPlanePaused marks="◇ ▲" />;
+  if (!on || !result?.ok) return null;
   const impl = result.value;
   const q = impl.quantized.format;
   return (
     <g data-testid="quantized-roots" aria-hidden="true">
       {impl.sectionRoots.map((sec, i) => (
         <g key={i}>
-          {marks('zero', i, sec.zeros, scale)}
-          {marks('pole', i, sec.poles, scale)}
+          {quantizedMarks('zero', i, sec.zeros, scale)}
+          {quantizedMarks('pole', i, sec.poles, scale)}
         </g>
       ))}
-      <text x={8} y={32} fill={COLOUR} fontSize={11} stroke="#fff" strokeWidth={3} paintOrder="stroke">
-        {`◇ ▲ quantized: ${q.wordLength}-bit coefficients`}
-      </text>
+      <QuantizedPlaneKey>{`◇ ▲ quantized: ${q.wordLength}-bit coefficients`}</QuantizedPlaneKey>
     </g>
   );
 }

@@ -1,8 +1,9 @@
 /**
  * A piece of a view whose code loads after the first paint because the first paint does not need it (it is
- * invisible, or only shows after a user action): nothing is drawn until the code is there. prefetch()
- * (prefetch.ts) fetches it once the first view is on screen, so in practice it is there before anyone
- * reaches for it; a failed fetch is tried again the next time the piece is drawn.
+ * invisible, or only shows after a user action): nothing is drawn until the code is there, or what `Waiting`
+ * draws meanwhile (told whether the last fetch failed). prefetch() (prefetch.ts) fetches it once the first
+ * view is on screen, so in practice it is there before anyone reaches for it; a failed fetch is tried again
+ * the next time the piece is drawn.
  */
 import { useEffect, useState, type ComponentType } from 'react';
 
@@ -12,7 +13,10 @@ export interface LazyPart<P> {
   prefetch: () => Promise<unknown>;
 }
 
-export function lazyPart<P extends object>(load: () => Promise<ComponentType<P>>): LazyPart<P> {
+export function lazyPart<P extends object>(
+  load: () => Promise<ComponentType<P>>,
+  Waiting?: ComponentType<P & { failed: boolean }>,
+): LazyPart<P> {
   let loaded: ComponentType<P> | null = null;
   let pending: Promise<ComponentType<P>> | null = null;
   const prefetch = () =>
@@ -25,18 +29,19 @@ export function lazyPart<P extends object>(load: () => Promise<ComponentType<P>>
     ));
   function Part(props: P) {
     const [component, setComponent] = useState<ComponentType<P> | null>(() => loaded);
+    const [failed, setFailed] = useState(false);
     useEffect(() => {
       if (component) return;
       let live = true;
       prefetch().then(
         (c) => live && setComponent(() => c),
-        () => undefined,
+        () => live && setFailed(true),
       );
       return () => {
         live = false;
       };
     }, [component]);
-    if (!component) return null;
+    if (!component) return Waiting ? <Waiting {...props} failed={failed} /> : null;
     const Loaded = component;
     return <Loaded {...props} />;
   }

@@ -1,16 +1,11 @@
 /** Whether the design carries target settings, and whether the quantized filter is drawn on the plots. */
-import {
-  selectHasImplementation,
-  selectRunsAsTaps,
-  selectShowQuantized,
-} from '../../../store/implementationDerived.ts';
+import { selectHasImplementation, selectShowQuantized } from '../../../store/implementationDerived.ts';
 import { useWorkbench, workbenchStore } from '../../../store/useWorkbench.ts';
 
 export function TargetSwitch() {
   const has = useWorkbench(selectHasImplementation);
   const shown = useWorkbench(selectShowQuantized);
   const dragging = useWorkbench((s) => s.dragging);
-  const taps = useWorkbench(selectRunsAsTaps);
   const toggle = (on: boolean) => {
     const st = workbenchStore.getState();
     // Turning the overlay on with no settings yet stores the defaults the page shows (one undo step).
@@ -24,19 +19,11 @@ export function TargetSwitch() {
           ? 'The design carries these target settings; they travel with its file and link.'
           : 'Nothing set for the target yet: the page shows a 16-bit default. Change any setting to keep it with the design.'}
       </p>
-      {taps ? (
-        <p className="pw-hint pw-block" data-testid="fir-not-drawn">
-          The quantized taps are not drawn on the plane and the magnitude plot; the FIR part below gives the
-          largest difference they make to the response.
-        </p>
-      ) : null}
       <div className="pw-target-row">
-        {!taps && (
-          <label className="pw-check">
-            <input type="checkbox" checked={shown} onChange={(e) => toggle(e.target.checked)} />
-            Draw the quantized filter on the plane and the magnitude plot
-          </label>
-        )}
+        <label className="pw-check">
+          <input type="checkbox" checked={shown} onChange={(e) => toggle(e.target.checked)} />
+          Draw the quantized filter on the plane and the magnitude plot
+        </label>
         {has && (
           <button
             type="button"
