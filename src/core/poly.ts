@@ -3,6 +3,7 @@
  * the numpy convention. A b/a array in powers of z^-1 is the same array read as a polynomial in z.
  */
 import type { Root } from './types.ts';
+import { multiplyOutDd } from './multiplyOut.ts';
 
 export type Poly = ArrayLike<number>;
 
@@ -70,14 +71,26 @@ export function polyDerivative(p: Poly): Float64Array {
 }
 
 /**
- * Monic polynomial with the given roots, each repeated by its multiplicity; a root with im > 0 contributes
- * its conjugate too, as the exactly real quadratic x^2 - 2·re·x + (re^2 + im^2).
+ * Monic polynomial with the given roots, each repeated by its multiplicity; a root with im ≠ 0 contributes
+ * its conjugate too, as the exactly real quadratic x^2 - 2·re·x + (re^2 + im^2). Multiplied out in
+ * double-double and rounded once at the end (core/multiplyOut.ts): each coefficient is within a rounding or
+ * so of the exact product, where one factor at a time in doubles lost up to 1e-6 of the largest coefficient
+ * at order 128.
  */
 export function polyFromRoots(roots: readonly Root[]): Float64Array {
-  let p: Float64Array = new Float64Array([1]);
+  let m = 0;
+  let length = 1;
   for (const r of roots) {
-    const factor = r.im === 0 ? [1, -r.re] : [1, -2 * r.re, r.re * r.re + r.im * r.im];
-    for (let m = 0; m < r.multiplicity; m++) p = polyMul(p, factor);
+    m += r.multiplicity;
+    length += (r.im === 0 ? 1 : 2) * r.multiplicity;
   }
-  return p;
+  const fr = new Float64Array(m);
+  const fi = new Float64Array(m);
+  let k = 0;
+  for (const r of roots)
+    for (let j = 0; j < r.multiplicity; j++) {
+      fr[k] = r.re;
+      fi[k++] = Math.abs(r.im);
+    }
+  return multiplyOutDd(fr, fi, length).hi;
 }

@@ -139,4 +139,34 @@ describe('polyFromRoots', () => {
       }
     }
   });
+
+  it('multiplies 256 roots of unity times rho out to z^256 − rho^256 within a few roundings', () => {
+    // Π(z − rho·w_k) over the n-th roots of unity w_k is z^n − rho^n (algebra). One factor at a time in
+    // doubles the middle coefficients came out near 1e-4 here; they are roundings of 0 now.
+    const n = 256;
+    const rho = 0.999;
+    const roots = [
+      { re: rho, im: 0, multiplicity: 1 },
+      { re: -rho, im: 0, multiplicity: 1 },
+      ...Array.from({ length: n / 2 - 1 }, (_, k) => {
+        const t = (2 * Math.PI * (k + 1)) / n;
+        return { re: rho * Math.cos(t), im: rho * Math.sin(t), multiplicity: 1 };
+      }),
+    ];
+    const p = polyFromRoots(roots);
+    expect(p).toHaveLength(n + 1);
+    expect(p[0]).toBe(1);
+    let middle = 0;
+    for (let k = 1; k < n; k++) middle = Math.max(middle, Math.abs(p[k]!));
+    expect(middle).toBeLessThan(1e-13);
+    expectClose(p[n]!, -(rho ** n), { rel: 1e-13 }, 'constant term −rho^n');
+  });
+
+  it('multiplies (z + 1)^16 out to the binomial coefficients exactly', () => {
+    // Binomial expansion (common practice): integers below 2^53, so every coefficient is exact.
+    const p = polyFromRoots([{ re: -1, im: 0, multiplicity: 16 }]);
+    const binomial = [1];
+    for (let k = 1; k <= 16; k++) binomial.push((binomial[k - 1]! * (17 - k)) / k);
+    expect(Array.from(p)).toEqual(binomial);
+  });
 });

@@ -35,6 +35,22 @@ export const lowpass42 = tapsOf({
   order: 41,
 });
 
+/**
+ * Vibration channel at 48 kHz: equiripple low-pass of order 128 (129 taps), pass to 4 kHz within 1 dB, 60 dB
+ * down from 5 kHz (the drag benchmark's FIR).
+ */
+export const lowpass129 = tapsOf({
+  kind: 'iir',
+  fs: 48000,
+  response: 'lowpass',
+  passbandHz: [4000],
+  stopbandHz: [5000],
+  rippleDb: 1,
+  attenuationDb: 60,
+  family: 'equiripple',
+  order: 128,
+});
+
 /** Rate of a pressure reading: an equiripple differentiator of order 20 up to 200 Hz (antisymmetric taps). */
 export const differentiator21 = tapsOf({ kind: 'differentiator', fs: 1000, order: 20, upToHz: 200 });
 

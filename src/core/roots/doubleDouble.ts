@@ -4,8 +4,9 @@
  * where a root set must be compared with the coefficients beyond double precision.
  */
 
-/** Veltkamp's splitting constant 2^27 + 1. */
-const SPLIT = 134217729;
+import { ddAdd, ddMul, SPLIT, twoProd } from '../doubleDoubleArith.ts';
+
+export { ddAdd, ddMul, twoProd };
 
 /** A polynomial in double-double: hi + lo per coefficient, descending. */
 export interface DdPoly {
@@ -13,36 +14,7 @@ export interface DdPoly {
   lo: Float64Array;
 }
 
-export function twoProd(a: number, b: number, out: Float64Array): void {
-  const p = a * b;
-  const ah = a * SPLIT - (a * SPLIT - a);
-  const al = a - ah;
-  const bh = b * SPLIT - (b * SPLIT - b);
-  const bl = b - bh;
-  out[0] = p;
-  out[1] = al * bl - (p - ah * bh - al * bh - ah * bl);
-}
-
-/** (ah + al) + (bh + bl) into out, renormalised. */
-export function ddAdd(ah: number, al: number, bh: number, bl: number, out: Float64Array): void {
-  const s = ah + bh;
-  const z = s - ah;
-  const e = ah - (s - z) + (bh - z) + al + bl;
-  out[0] = s + e;
-  out[1] = e - (out[0] - s);
-}
-
 const tmp = new Float64Array(2);
-const tmp2 = new Float64Array(2);
-
-/** (ah + al)(bh + bl) into out. */
-export function ddMul(ah: number, al: number, bh: number, bl: number, out: Float64Array): void {
-  twoProd(ah, bh, tmp2);
-  const e = tmp2[1]! + (ah * bl + al * bh);
-  const s = tmp2[0]! + e;
-  out[0] = s;
-  out[1] = e - (s - tmp2[0]!);
-}
 
 export function multiply(a: DdPoly, b: DdPoly): DdPoly {
   const n = a.hi.length + b.hi.length - 1;
