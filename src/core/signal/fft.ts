@@ -494,13 +494,17 @@ export class RealPowerTransform {
     const h = n >> 1;
     const Z = transform(h, this.input);
     const t = untangleTable(n);
-    for (let k = 0; k <= h; k++) {
-      const k1 = k === h ? 0 : k;
-      const k2 = k === 0 ? 0 : h - k;
-      const z1r = Z[2 * k1]!;
-      const z1i = Z[2 * k1 + 1]!;
-      const z2r = Z[2 * k2]!;
-      const z2i = Z[2 * k2 + 1]!;
+    // Bins k and h − k read the same two values Z[k] and Z[h−k] (swapped), so they are untangled together:
+    // E = (Z[k] + conj Z[h−k]) / 2 is the even samples' DFT, O = (Z[k] − conj Z[h−k]) / 2i the odd ones',
+    // X_k = E + e^{-2πik/n}·O, and for h − k the same sums with the signs of E's and O's other part flipped
+    // (exactly: a negation), so each bin gets the value the one-bin formula gives.
+    addUntangled(Z, t, sum, 0, 0, 0);
+    const half = h >> 1;
+    for (let k = 1; k < h - k; k++) {
+      const z1r = Z[2 * k]!;
+      const z1i = Z[2 * k + 1]!;
+      const z2r = Z[2 * (h - k)]!;
+      const z2i = Z[2 * (h - k) + 1]!;
       const er = (z1r + z2r) / 2;
       const ei = (z1i - z2i) / 2;
       const or = (z1i + z2i) / 2;
@@ -510,6 +514,37 @@ export class RealPowerTransform {
       const xr = er + or * c - oi * sn;
       const xi = ei + or * sn + oi * c;
       sum[k] = sum[k]! + xr * xr + xi * xi;
+      const c2 = t[2 * (h - k)]!;
+      const sn2 = t[2 * (h - k) + 1]!;
+      const yr = er + or * c2 + oi * sn2;
+      const yi = -ei + or * sn2 - oi * c2;
+      sum[h - k] = sum[h - k]! + yr * yr + yi * yi;
     }
+    if (h % 2 === 0 && half > 0) addUntangled(Z, t, sum, half, half, half);
+    addUntangled(Z, t, sum, h, 0, 0);
   }
+}
+
+/** Adds |X_k|² for one bin k of a packed real transform Z (k1 = k mod h, k2 = (h − k) mod h). */
+function addUntangled(
+  Z: Float64Array,
+  t: Float64Array,
+  sum: Float64Array,
+  k: number,
+  k1: number,
+  k2: number,
+) {
+  const z1r = Z[2 * k1]!;
+  const z1i = Z[2 * k1 + 1]!;
+  const z2r = Z[2 * k2]!;
+  const z2i = Z[2 * k2 + 1]!;
+  const er = (z1r + z2r) / 2;
+  const ei = (z1i - z2i) / 2;
+  const or = (z1i + z2i) / 2;
+  const oi = -(z1r - z2r) / 2;
+  const c = t[2 * k]!;
+  const sn = t[2 * k + 1]!;
+  const xr = er + or * c - oi * sn;
+  const xi = ei + or * sn + oi * c;
+  sum[k] = sum[k]! + xr * xr + xi * xi;
 }
