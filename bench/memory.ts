@@ -1,6 +1,6 @@
 /**
  * Browser memory with a long recording (not a test): writes a 1-hour 48 kHz 16-bit WAV (invented hum and
- * pink noise, 346 MB), serves the built page, and reads the proportional set size (PSS: shared pages split
+ * pink noise, 346 MB; PW_MEMORY_FORMAT=i24 or f32 writes 24-bit integer or 32-bit float samples instead), serves the built page, and reads the proportional set size (PSS: shared pages split
  * between the processes sharing them) summed over every Chromium process, from /proc, while the page reads
  * the file, filters it, computes its spectra and follows a root drag. Reports the figures above the empty
  * page (the same page before the file), and the peak sampled every 100 ms; and the gaps between animation
@@ -23,20 +23,25 @@ import { cell, median } from './timing.ts';
 const ROOT = fileURLToPath(new URL('..', import.meta.url));
 const FS = 48000;
 const MINUTES = Number(process.env.PW_MEMORY_MINUTES ?? 60);
+/** The WAV's sample format: 'i16' (default), 'i24' or 'f32'. */
+const FORMAT = (process.env.PW_MEMORY_FORMAT ?? 'i16') as 'i16' | 'i24' | 'f32';
+if (!['i16', 'i24', 'f32'].includes(FORMAT))
+  throw new Error(`bench: PW_MEMORY_FORMAT ${FORMAT}; one of i16, i24, f32`);
+const FORMAT_NAME = { i16: '16-bit', i24: '24-bit', f32: '32-bit float' }[FORMAT];
 const PORT = Number(process.env.PW_BENCH_PORT ?? 4412);
 
 /** Writes the WAV a minute at a time (the whole signal never exists in memory here). */
-export function writeLongWav(dir: string, minutes = MINUTES): string {
-  const path = join(dir, `hopper-${minutes}min.wav`);
+export function writeLongWav(dir: string, minutes = MINUTES, format = FORMAT): string {
+  const path = join(dir, `hopper-${minutes}min-${format}.wav`);
   const n = FS * 60 * minutes;
   const fd = openSync(path, 'w');
-  writeSync(fd, wavHeaderBytes({ format: 'i16', channelCount: 1, sampleRate: FS, frameCount: n }));
+  writeSync(fd, wavHeaderBytes({ format, channelCount: 1, sampleRate: FS, frameCount: n }));
   const block = FS * 60;
   for (let m = 0; m < minutes; m++) {
     const x = makeHum(block, FS, { fundamentalHz: 50, harmonicAmplitudes: [0.2, 0.05, 0.03], driftHz: 0.1 });
     const noise = makePinkNoise(block, 100 + m, 0.05);
     for (let i = 0; i < block; i++) x[i] = x[i]! + noise[i]!;
-    writeSync(fd, encodeWavBlock([x], 'i16').bytes);
+    writeSync(fd, encodeWavBlock([x], format).bytes);
   }
   closeSync(fd);
   return path;
@@ -261,7 +266,7 @@ export async function benchMemory(): Promise<string> {
     rmSync(tmp, { recursive: true, force: true });
   }
   return [
-    `Browser memory (PSS of every Chromium process, from /proc) with a ${MINUTES}-minute 48 kHz 16-bit WAV, headless Chromium, 1440×900; MB above the empty page.`,
+    `Browser memory (PSS of every Chromium process, from /proc) with a ${MINUTES}-minute 48 kHz ${FORMAT_NAME} WAV, headless Chromium, 1440×900; MB above the empty page.`,
     '',
     '| stage | time (s) | now (MB) | peak so far (MB) |',
     '| --- | --: | --: | --: |',

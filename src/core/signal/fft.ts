@@ -10,20 +10,25 @@
  */
 import { butterflyPass } from './fftPasses.ts';
 
-/** One pass of the transform: a radix and where its twiddle factors start in the plan's table. */
-interface Pass {
-  radix: number;
-  /** Sub-transforms already combined before this pass (the product of the earlier radices). */
-  l1: number;
-  /** Length of each remaining sub-transform divided by the radix: n / (l1·radix). */
-  ido: number;
-  twOffset: number;
-}
+/**
+ * The passes of a plan, four small integers each in an Int32Array: the radix; l1, the sub-transforms already
+ * combined before the pass (the product of the earlier radices); ido, the length of each remaining
+ * sub-transform divided by the radix, n / (l1·radix); and where the pass's twiddle factors start in the
+ * plan's table. Integers in an Int32Array always reach the butterflies as small integers. In objects they
+ * need not: V8 keeps one representation per field for every object of a shape, so one count that arrived
+ * as a double (a division's result, or a length read out of an array of doubles) made the field a double
+ * for every plan in the process, and every butterfly then did its index arithmetic in floating point
+ * (measured: each pass 2× slower at every length from the first Bluestein plan on, so whichever length
+ * came first decided the speed of the whole run; another copy of this module in the process, such as the
+ * kernel bench's before tree, shares the shapes too).
+ */
+const PASS_FIELDS = 4;
 
 interface DirectPlan {
   kind: 'direct';
   n: number;
-  passes: Pass[];
+  /** PASS_FIELDS integers per pass: radix, l1, ido, twiddle offset. */
+  passes: Int32Array;
   /** Interleaved twiddles of every pass: e^{-2πi·j·i/(ido·radix)} for j = 1..radix−1, i < ido. */
   twiddles: Float64Array;
   /** Two interleaved work buffers of n complex values (the passes alternate between them). */
@@ -87,13 +92,13 @@ export function factorize(n: number): number[] {
   for (const f of FAST_RADICES) {
     while (r % f === 0) {
       out.push(f);
-      r /= f;
+      r = (r / f) | 0;
     }
   }
   for (let p = 7; p * p <= r; p += 2) {
     while (r % p === 0) {
       out.push(p);
-      r /= p;
+      r = (r / p) | 0;
     }
   }
   if (r > 1) out.push(r);
@@ -130,7 +135,12 @@ export function convolutionLength(n: number): number {
         while (m < need) m *= 2;
         if (m >= limit) continue;
         const cost = directCost(m);
-        if (cost < bestCost) [best, bestCost] = [m, cost];
+        if (cost < bestCost) {
+          // Two assignments, not a destructured [m, cost]: that array holds doubles, so m would come out as
+          // a boxed double, and every count computed from it (see directPlan) with it.
+          best = m;
+          bestCost = cost;
+        }
       }
   return best;
 }
@@ -161,17 +171,20 @@ function remember(n: number, make: () => Plan): Plan {
 
 function directPlan(n: number): DirectPlan {
   const radices = factorize(n);
-  const passes: Pass[] = [];
+  const passes = new Int32Array(PASS_FIELDS * radices.length);
   let l1 = 1;
   let size = 0;
-  for (const radix of radices) {
+  for (const [p, radix] of radices.entries()) {
     const ido = n / (l1 * radix);
-    passes.push({ radix, l1, ido, twOffset: size });
+    passes.set([radix, l1, ido, size], PASS_FIELDS * p);
     size += 2 * (radix - 1) * ido;
     l1 *= radix;
   }
   const twiddles = new Float64Array(size);
-  for (const { radix, ido, twOffset } of passes) {
+  for (let p = 0; p < passes.length; p += PASS_FIELDS) {
+    const radix = passes[p]!;
+    const ido = passes[p + 2]!;
+    const twOffset = passes[p + 3]!;
     const len = ido * radix;
     for (let j = 1; j < radix; j++) {
       for (let i = 0; i < ido; i++) {
@@ -227,8 +240,9 @@ function bluesteinPlan(n: number, m: number): BluesteinPlan {
 function runDirect(plan: DirectPlan, data: Float64Array): Float64Array {
   let src = data;
   let dst = plan.a;
-  for (const p of plan.passes) {
-    butterflyPass(p.radix, p.ido, p.l1, src, dst, plan.twiddles, p.twOffset);
+  const passes = plan.passes;
+  for (let p = 0; p < passes.length; p += PASS_FIELDS) {
+    butterflyPass(passes[p]!, passes[p + 2]!, passes[p + 1]!, src, dst, plan.twiddles, passes[p + 3]!);
     src = dst;
     dst = dst === plan.a ? plan.b : plan.a;
   }
@@ -241,7 +255,10 @@ function runDirect(plan: DirectPlan, data: Float64Array): Float64Array {
  * length m done as forward transforms (the inverse as the conjugate of a forward one).
  */
 function runBluestein(plan: BluesteinPlan, data: Float64Array, powerOnly = false): Float64Array {
-  const { n, m, chirp, kernel, inner, work, out } = plan;
+  const { chirp, kernel, inner, work, out } = plan;
+  // | 0: small integers in the loops below whatever representation the plan's fields have (see PASS_FIELDS).
+  const n = plan.n | 0;
+  const m = plan.m | 0;
   work.fill(0, 2 * n);
   for (let k = 0; k < n; k++) {
     const xr = data[2 * k]!;
@@ -422,7 +439,7 @@ export class RealPowerTransform {
   constructor(n: number) {
     if (!(Number.isInteger(n) && n >= 1))
       throw new Error(`RealPowerTransform: length ${n}; a whole number ≥ 1`);
-    this.n = n;
+    this.n = n | 0;
     // Even lengths: the samples read as n/2 interleaved complex values are the packed transform's input.
     this.input = new Float64Array(n);
     this.complex = n % 2 === 1 || n < 4 ? new Float64Array(2 * n) : null;
@@ -477,13 +494,17 @@ export class RealPowerTransform {
     const h = n >> 1;
     const Z = transform(h, this.input);
     const t = untangleTable(n);
-    for (let k = 0; k <= h; k++) {
-      const k1 = k === h ? 0 : k;
-      const k2 = k === 0 ? 0 : h - k;
-      const z1r = Z[2 * k1]!;
-      const z1i = Z[2 * k1 + 1]!;
-      const z2r = Z[2 * k2]!;
-      const z2i = Z[2 * k2 + 1]!;
+    // Bins k and h − k read the same two values Z[k] and Z[h−k] (swapped), so they are untangled together:
+    // E = (Z[k] + conj Z[h−k]) / 2 is the even samples' DFT, O = (Z[k] − conj Z[h−k]) / 2i the odd ones',
+    // X_k = E + e^{-2πik/n}·O, and for h − k the same sums with the signs of E's and O's other part flipped
+    // (exactly: a negation), so each bin gets the value the one-bin formula gives.
+    addUntangled(Z, t, sum, 0, 0, 0);
+    const half = h >> 1;
+    for (let k = 1; k < h - k; k++) {
+      const z1r = Z[2 * k]!;
+      const z1i = Z[2 * k + 1]!;
+      const z2r = Z[2 * (h - k)]!;
+      const z2i = Z[2 * (h - k) + 1]!;
       const er = (z1r + z2r) / 2;
       const ei = (z1i - z2i) / 2;
       const or = (z1i + z2i) / 2;
@@ -493,6 +514,37 @@ export class RealPowerTransform {
       const xr = er + or * c - oi * sn;
       const xi = ei + or * sn + oi * c;
       sum[k] = sum[k]! + xr * xr + xi * xi;
+      const c2 = t[2 * (h - k)]!;
+      const sn2 = t[2 * (h - k) + 1]!;
+      const yr = er + or * c2 + oi * sn2;
+      const yi = -ei + or * sn2 - oi * c2;
+      sum[h - k] = sum[h - k]! + yr * yr + yi * yi;
     }
+    if (h % 2 === 0 && half > 0) addUntangled(Z, t, sum, half, half, half);
+    addUntangled(Z, t, sum, h, 0, 0);
   }
+}
+
+/** Adds |X_k|² for one bin k of a packed real transform Z (k1 = k mod h, k2 = (h − k) mod h). */
+function addUntangled(
+  Z: Float64Array,
+  t: Float64Array,
+  sum: Float64Array,
+  k: number,
+  k1: number,
+  k2: number,
+) {
+  const z1r = Z[2 * k1]!;
+  const z1i = Z[2 * k1 + 1]!;
+  const z2r = Z[2 * k2]!;
+  const z2i = Z[2 * k2 + 1]!;
+  const er = (z1r + z2r) / 2;
+  const ei = (z1i - z2i) / 2;
+  const or = (z1i + z2i) / 2;
+  const oi = -(z1r - z2r) / 2;
+  const c = t[2 * k]!;
+  const sn = t[2 * k + 1]!;
+  const xr = er + or * c - oi * sn;
+  const xi = ei + or * sn + oi * c;
+  sum[k] = sum[k]! + xr * xr + xi * xi;
 }

@@ -43,6 +43,22 @@ function pass2(
 ): void {
   const sIn = 2 * ido;
   const sOut = 2 * ido * l1;
+  if (ido === 1) {
+    // The last pass: every twiddle is 1.
+    for (let k = 0; k < l1; k++) {
+      const a = 4 * k;
+      const o = 2 * k;
+      const ar = cc[a]!;
+      const ai = cc[a + 1]!;
+      const br = cc[a + 2]!;
+      const bi = cc[a + 3]!;
+      ch[o] = ar + br;
+      ch[o + 1] = ai + bi;
+      ch[o + sOut] = ar - br;
+      ch[o + sOut + 1] = ai - bi;
+    }
+    return;
+  }
   for (let k = 0; k < l1; k++) {
     const inK = 2 * ido * 2 * k;
     const outK = 2 * ido * k;
@@ -64,6 +80,14 @@ function pass2(
     }
   }
 }
+
+/**
+ * Radix-4 passes with fewer sub-transform points than sub-transforms (ido < l1) run the twiddle loop outside
+ * and reuse each twiddle for all l1, up to transforms of 4·SWAP_MAX = 32 768 points (two 512 KB buffers);
+ * above that the reordered loop sweeps the buffers ido times and measured slower (65 536: 1.02–1.09× the
+ * plain order, 20 480 and 32 768: 0.89×).
+ */
+const SWAP_MAX = 8192;
 
 function pass4(
   ido: number,
@@ -105,6 +129,52 @@ function pass4(
       ch[o + 2 * sOut + 1] = s02i - s13i;
       ch[o + 3 * sOut] = d02r - d13i;
       ch[o + 3 * sOut + 1] = d02i + d13r;
+    }
+    return;
+  }
+  if (ido < l1 && ido * l1 <= SWAP_MAX) {
+    // Late passes (short sub-transforms, many of them): each twiddle is loaded once and serves all l1.
+    for (let i = 0; i < ido; i++) {
+      const w1r = tw[t0 + 2 * i]!;
+      const w1i = tw[t0 + 2 * i + 1]!;
+      const w2r = tw[t1 + 2 * i]!;
+      const w2i = tw[t1 + 2 * i + 1]!;
+      const w3r = tw[t2 + 2 * i]!;
+      const w3i = tw[t2 + 2 * i + 1]!;
+      for (let k = 0; k < l1; k++) {
+        const a = 8 * ido * k + 2 * i;
+        const o = 2 * ido * k + 2 * i;
+        const a0r = cc[a]!;
+        const a0i = cc[a + 1]!;
+        const a1r = cc[a + sIn]!;
+        const a1i = cc[a + sIn + 1]!;
+        const a2r = cc[a + 2 * sIn]!;
+        const a2i = cc[a + 2 * sIn + 1]!;
+        const a3r = cc[a + 3 * sIn]!;
+        const a3i = cc[a + 3 * sIn + 1]!;
+        const s02r = a0r + a2r;
+        const s02i = a0i + a2i;
+        const d02r = a0r - a2r;
+        const d02i = a0i - a2i;
+        const s13r = a1r + a3r;
+        const s13i = a1i + a3i;
+        const d13r = a1r - a3r;
+        const d13i = a1i - a3i;
+        ch[o] = s02r + s13r;
+        ch[o + 1] = s02i + s13i;
+        const x1r = d02r + d13i;
+        const x1i = d02i - d13r;
+        const x2r = s02r - s13r;
+        const x2i = s02i - s13i;
+        const x3r = d02r - d13i;
+        const x3i = d02i + d13r;
+        ch[o + sOut] = x1r * w1r - x1i * w1i;
+        ch[o + sOut + 1] = x1r * w1i + x1i * w1r;
+        ch[o + 2 * sOut] = x2r * w2r - x2i * w2i;
+        ch[o + 2 * sOut + 1] = x2r * w2i + x2i * w2r;
+        ch[o + 3 * sOut] = x3r * w3r - x3i * w3i;
+        ch[o + 3 * sOut + 1] = x3r * w3i + x3i * w3r;
+      }
     }
     return;
   }
@@ -170,6 +240,7 @@ function pass3(
   const sIn = 2 * ido;
   const sOut = 2 * ido * l1;
   const t1 = t0 + 2 * ido;
+  const last = ido === 1;
   for (let k = 0; k < l1; k++) {
     const inK = 6 * ido * k;
     const outK = 2 * ido * k;
@@ -195,6 +266,14 @@ function pass3(
       const x1i = mi + qi;
       const x2r = mr - qr;
       const x2i = mi - qi;
+      if (last) {
+        // The last pass (ido = 1): every twiddle is 1.
+        ch[o + sOut] = x1r;
+        ch[o + sOut + 1] = x1i;
+        ch[o + 2 * sOut] = x2r;
+        ch[o + 2 * sOut + 1] = x2i;
+        continue;
+      }
       const w1r = tw[t0 + 2 * i]!;
       const w1i = tw[t0 + 2 * i + 1]!;
       const w2r = tw[t1 + 2 * i]!;
@@ -223,6 +302,7 @@ function pass5(
 ): void {
   const sIn = 2 * ido;
   const sOut = 2 * ido * l1;
+  const last = ido === 1;
   for (let k = 0; k < l1; k++) {
     const inK = 10 * ido * k;
     const outK = 2 * ido * k;
@@ -258,6 +338,18 @@ function pass5(
       const q1i = -(S51 * d14r + S52 * d23r);
       const q2r = S52 * d14i - S51 * d23i;
       const q2i = -(S52 * d14r - S51 * d23r);
+      if (last) {
+        // The last pass (ido = 1): every twiddle is 1.
+        ch[o + sOut] = m1r + q1r;
+        ch[o + sOut + 1] = m1i + q1i;
+        ch[o + 2 * sOut] = m2r + q2r;
+        ch[o + 2 * sOut + 1] = m2i + q2i;
+        ch[o + 3 * sOut] = m2r - q2r;
+        ch[o + 3 * sOut + 1] = m2i - q2i;
+        ch[o + 4 * sOut] = m1r - q1r;
+        ch[o + 4 * sOut + 1] = m1i - q1i;
+        continue;
+      }
       out5(ch, o + sOut, m1r + q1r, m1i + q1i, tw, t0 + 2 * i);
       out5(ch, o + 2 * sOut, m2r + q2r, m2i + q2i, tw, t0 + 2 * ido + 2 * i);
       out5(ch, o + 3 * sOut, m2r - q2r, m2i - q2i, tw, t0 + 4 * ido + 2 * i);

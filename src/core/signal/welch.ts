@@ -117,8 +117,21 @@ export class WelchAccumulator {
     const { nperseg, detrend } = this.o;
     let mean = 0;
     if (detrend === 'constant') {
-      for (let k = 0; k < nperseg; k++) mean += x[start + k]!;
-      mean /= nperseg;
+      // Four running sums: one sum waits for each addition to finish before the next (about four times
+      // slower on long segments); the order of the additions changes the mean only by rounding.
+      let s0 = 0;
+      let s1 = 0;
+      let s2 = 0;
+      let s3 = 0;
+      let k = 0;
+      for (; k + 4 <= nperseg; k += 4) {
+        s0 += x[start + k]!;
+        s1 += x[start + k + 1]!;
+        s2 += x[start + k + 2]!;
+        s3 += x[start + k + 3]!;
+      }
+      for (; k < nperseg; k++) s0 += x[start + k]!;
+      mean = (s0 + s1 + (s2 + s3)) / nperseg;
     }
     // The transform's input beyond nperseg (zero padding up to nfft) is never written, so stays zero.
     const work = this.transform.input;
