@@ -4,9 +4,9 @@
  */
 import { evaluateMaskOn, functionSource, type MaskResult, type RequirementMask } from '../mask/index.ts';
 import type { FirImplementation } from './fir.ts';
-import { tapsMagnitudeSquaredAt } from './tapsResponse.ts';
+import { tapsMagnitudeSquaredAt } from '../response/coefficients.ts';
 
-/** |H| in dB of the quantized taps at a frequency in Hz, by Horner's rule over the taps (tapsResponse.ts). */
+/** |H| in dB of the quantized taps at a frequency in Hz, by Horner's rule over the taps (core/response/coefficients.ts). */
 export function quantizedTapsDb(impl: FirImplementation): (hz: number) => number {
   const scale = 2 ** -impl.format.fractionBits;
   const c = impl.codes.map((k) => k * scale);

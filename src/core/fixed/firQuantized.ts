@@ -7,7 +7,7 @@
 import { findRoots } from '../roots/index.ts';
 import type { Root } from '../types.ts';
 import type { FirImplementation } from './fir.ts';
-import { tapsMagnitudeSquaredAt } from './tapsResponse.ts';
+import { tapsMagnitudeSquaredAt } from '../response/coefficients.ts';
 
 /** The values the target multiplies by: code · 2^−F, in tap order c[0] … c[L−1]. */
 export function quantizedTapValues(impl: FirImplementation): number[] {
@@ -54,7 +54,7 @@ export interface TapsMagnitude {
   magnitudeDb: Float64Array;
 }
 
-/** |Σ c[k] e^(−jωk)| at each ω of `omega` (rad/sample), by Horner's rule (tapsResponse.ts). */
+/** |Σ c[k] e^(−jωk)| at each ω of `omega` (rad/sample), by Horner's rule (core/response/coefficients.ts). */
 export function tapsMagnitude(taps: readonly number[], omega: Float64Array): TapsMagnitude {
   const n = omega.length;
   const magnitude = new Float64Array(n);

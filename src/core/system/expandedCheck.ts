@@ -10,6 +10,7 @@ import { stabilityOfZpk, type Verdict } from '../stability/index.ts';
 import { boundedStabilityOfCoefficients } from '../stability/coefficients.ts';
 import { magnitudeDbZpk } from '../response/magnitude.ts';
 import { frequencyGrid } from '../response/grid.ts';
+import { coefficientsAt } from '../response/coefficients.ts';
 
 /** The expanded b, a miss the design's magnitude by more than this (dB) somewhere: warn. */
 export const EXPANDED_RESPONSE_TOLERANCE_DB = 0.1;
@@ -37,19 +38,13 @@ export interface ExpandedCheck {
   message: string;
 }
 
+const value = new Float64Array(2);
+
 /** |B(e^{iω})/A(e^{iω})| in dB from coefficient arrays (powers of z^-1), by Horner's rule in e^{-iω}. */
 function coefficientDb(b: number[], a: number[], omega: number): number {
-  const c = Math.cos(omega);
-  const s = -Math.sin(omega);
   const at = (p: number[]) => {
-    let re = 0;
-    let im = 0;
-    for (let k = p.length - 1; k >= 0; k--) {
-      const t = re * c - im * s + p[k]!;
-      im = re * s + im * c;
-      re = t;
-    }
-    return Math.hypot(re, im);
+    coefficientsAt(p, omega, value);
+    return Math.hypot(value[0]!, value[1]!);
   };
   return 20 * Math.log10(at(b) / at(a));
 }
