@@ -321,12 +321,13 @@ function restoreSymmetry(
     ev.logDerivative(x, y, g);
     return g[2]!;
   };
+  const nearAxis = (i: number) => Math.abs(zi[i]!) <= SNAP_CHECK * Math.hypot(zr[i]!, zi[i]!);
   const upper: number[] = [];
   const lower: number[] = [];
   for (const i of polished) {
     if (zi[i] === 0) continue;
     // Only a root this close to the axis can be a real root whose polish left it slightly off.
-    if (Math.abs(zi[i]!) <= SNAP_CHECK * Math.hypot(zr[i]!, zi[i]!)) {
+    if (nearAxis(i)) {
       if (residualAt(zr[i]!, 0) <= residualAt(zr[i]!, zi[i]!)) {
         zi[i] = 0;
         continue;
@@ -366,10 +367,22 @@ function restoreSymmetry(
     const rest: number[] = [];
     for (const i of up) {
       const [j, dist] = nearestLow.get(i)!;
-      if (nearestUp.get(j) === i) {
+      if (nearestUp.get(j) !== i) rest.push(i);
+      else if (
+        nearAxis(i) &&
+        nearAxis(j) &&
+        dist > Math.min(zi[i]!, -zi[j]!) &&
+        dist > nearestOther(zr, zi, i, j)
+      ) {
+        // Two roots at the axis whose mirrors are farther apart than i is from any other root: not one
+        // complex root polished twice but members of different clusters (say of a cluster at 1 and one at
+        // −1, each slightly off the axis); pairing them would move one across the plane. i goes onto the
+        // axis, as an unpaired root does.
+        zi[i] = 0;
+      } else {
         taken[j] = 1;
         pairs.push([i, j, dist]);
-      } else rest.push(i);
+      }
     }
     up = rest;
   }
@@ -386,4 +399,12 @@ function restoreSymmetry(
     zi[j] = -m;
   }
   for (const k of lower) if (!taken[k]) zi[k] = 0;
+}
+
+/** Distance from root i to the nearest root other than i and j. */
+function nearestOther(zr: Float64Array, zi: Float64Array, i: number, j: number): number {
+  let near = Infinity;
+  for (let k = 0; k < zr.length; k++)
+    if (k !== i && k !== j) near = Math.min(near, Math.hypot(zr[k]! - zr[i]!, zi[k]! - zi[i]!));
+  return near;
 }
