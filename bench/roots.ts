@@ -14,95 +14,35 @@ import { createInterface } from 'node:readline';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { findRoots, rootsBackwardError } from '../src/core/roots/index.ts';
 import { setBackwardError } from '../src/core/roots/setBackwardError.ts';
-import { polyFromRoots } from '../src/core/poly.ts';
 import type { Root } from '../src/core/types.ts';
-import { mulberry32 } from '../src/core/random.ts';
+import { familiesNamed } from './rootFamilies.ts';
+import { median, threadCpuSpan } from './timing.ts';
 
 const DEGREES = [8, 16, 32, 64, 128, 256, 512, 1024];
-/** Wall time aimed at for one measurement (a batch of calls), in milliseconds. */
+/** Processor time aimed at for one measurement (a batch of calls), in milliseconds. */
 const TARGET_MS = 4;
 /** Warm-up before anything is timed, and before each case of degree ≤ 64, in milliseconds of wall time. */
 const WARM_UP_MS = 3000;
 const SETTLE_MS = 300;
 
-function randomPoly(n: number): Float64Array {
-  const u = mulberry32(1000 + n);
-  return Float64Array.from(
-    { length: n + 1 },
-    () => Math.sqrt(-2 * Math.log(1 - u())) * Math.cos(2 * Math.PI * u()),
-  );
-}
-
-/** Windowed-sinc (Hamming) low-pass with n + 1 taps, cutoff 0.3 of Nyquist, unit gain at DC. */
-function firLowPass(n: number): Float64Array {
-  const cutoff = 0.3;
-  const h = Float64Array.from({ length: n + 1 }, (_, k) => {
-    const t = k - n / 2;
-    const sinc = t === 0 ? cutoff : Math.sin(Math.PI * cutoff * t) / (Math.PI * t);
-    return sinc * (0.54 - 0.46 * Math.cos((2 * Math.PI * k) / n));
-  });
-  const sum = h.reduce((s, v) => s + v, 0);
-  return h.map((v) => v / sum);
-}
-
-/** Denominator of an order-n digital Butterworth low-pass, cutoff 0.2 of Nyquist, by the bilinear transform. */
-function butterworth(n: number): Float64Array {
-  const wc = Math.tan((Math.PI * 0.2) / 2);
-  const poles: Root[] = [];
-  for (let k = 0; k < n; k++) {
-    const th = (Math.PI * (2 * k + n + 1)) / (2 * n);
-    const sr = wc * Math.cos(th);
-    const si = wc * Math.sin(th);
-    if (si < -1e-12) continue;
-    // z = (1 + s) / (1 - s)
-    const dr = 1 - sr;
-    const dd = dr * dr + si * si;
-    const zr = ((1 + sr) * dr - si * si) / dd;
-    const zi = (si * dr + (1 + sr) * si) / dd;
-    poles.push({ re: zr, im: Math.abs(zi) < 1e-12 ? 0 : zi, multiplicity: 1 });
-  }
-  return polyFromRoots(poles);
-}
-
-/** n/4 seeded conjugate pairs, each a double root, moduli 0.3…1.2. */
-function repeatedRoots(n: number): Float64Array {
-  const u = mulberry32(5000 + n);
-  const roots: Root[] = [];
-  for (let k = 0; k < n / 4; k++) {
-    const r = 0.3 + 0.9 * u();
-    const a = 0.1 + (Math.PI - 0.2) * u();
-    roots.push({ re: r * Math.cos(a), im: r * Math.sin(a), multiplicity: 2 });
-  }
-  return polyFromRoots(roots);
-}
-
-const FAMILIES: [string, (n: number) => Float64Array][] = [
-  ['random', randomPoly],
-  ['FIR low-pass', firLowPass],
-  ['Butterworth', butterworth],
-  ['repeated', repeatedRoots],
-];
-
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  const m = s.length >> 1;
-  return s.length % 2 ? s[m]! : (s[m - 1]! + s[m]!) / 2;
-}
-
-/** Mean milliseconds per call over a batch: wall time and processor time (the whole process, all threads). */
+/**
+ * Mean milliseconds per call over a batch: wall time and the processor time of the thread that made the
+ * calls (threadCpuSpan here, time.thread_time in numpy's process). Thread time is the figure compared: it
+ * leaves out the time the process waits for a core on a loaded machine (wall time does not) and V8's
+ * garbage-collector and compiler helper threads (process.cpuUsage does not), while numpy.roots runs wholly
+ * on its calling thread (OpenBLAS limited to one thread).
+ */
 interface Timing {
   wall: number;
-  cpu: number;
+  thread: number;
 }
 
 /** Mean milliseconds per findRoots call over a batch of `inner` calls. */
 function timeOurs(p: Float64Array, inner: number): Timing {
-  const c0 = process.cpuUsage();
-  const t0 = performance.now();
-  for (let k = 0; k < inner; k++) findRoots(p);
-  const wall = (performance.now() - t0) / inner;
-  const used = process.cpuUsage(c0);
-  return { wall, cpu: (used.user + used.system) / 1000 / inner };
+  const { wallMs, threadMs } = threadCpuSpan(() => {
+    for (let k = 0; k < inner; k++) findRoots(p);
+  });
+  return { wall: wallMs / inner, thread: threadMs / inner };
 }
 
 interface NumpyServer {
@@ -115,20 +55,26 @@ interface NumpyServer {
 /** A python3 process answering timing and root requests for numpy.roots (see bench/numpy_roots.py). */
 async function startNumpy(file: string): Promise<NumpyServer> {
   const script = join(fileURLToPath(new URL('.', import.meta.url)), 'numpy_roots.py');
-  const child = spawn('python3', [script, file], { stdio: ['pipe', 'pipe', 'inherit'] });
+  const child = spawn('python3', [script, file], {
+    stdio: ['pipe', 'pipe', 'inherit'],
+    env: { ...process.env, OPENBLAS_NUM_THREADS: '1', OMP_NUM_THREADS: '1' },
+  });
   const lines = createInterface({ input: child.stdout })[Symbol.asyncIterator]();
   const next = async (): Promise<string> => {
     const r = await lines.next();
     if (r.done) throw new Error('bench: numpy_roots.py ended early (is python3 with numpy installed?)');
     return r.value;
   };
-  const version = (await next()).replace('ready ', '');
+  const [, threads, ...name] = (await next()).split(' ');
+  const version = name.join(' ');
+  if (threads !== '1')
+    console.error(`bench: numpy's process runs ${threads} threads; its thread time may miss work`);
   return {
     version,
     time: async (i, inner) => {
       child.stdin.write(`${i} ${inner}\n`);
-      const [wall, cpu] = (await next()).split(' ').map(Number);
-      return { wall: 1000 * wall!, cpu: 1000 * cpu! };
+      const [wall, thread] = (await next()).split(' ').map(Number);
+      return { wall: 1000 * wall!, thread: 1000 * thread! };
     },
     roots: async (i) => {
       child.stdin.write(`roots ${i}\n`);
@@ -142,8 +88,8 @@ async function startNumpy(file: string): Promise<NumpyServer> {
 
 /** Runs the benchmark and returns a markdown table of median times, backward errors and time ratios. */
 export async function benchRoots(family = '', degrees: readonly number[] = DEGREES): Promise<string> {
-  const cases = FAMILIES.filter(([name]) => name.toLowerCase().startsWith(family.toLowerCase())).flatMap(
-    ([name, make]) => degrees.map((n) => ({ name, n, p: make(n) })),
+  const cases = familiesNamed(family).flatMap(([name, make]) =>
+    degrees.map((n) => ({ name, n, p: make(n) })),
   );
   const dir = mkdtempSync(join(tmpdir(), 'polewright-roots-'));
   const file = join(dir, 'polys.json');
@@ -175,22 +121,24 @@ export async function benchRoots(family = '', degrees: readonly number[] = DEGRE
       if (n <= 64) for (let k = 0; k < 50 || performance.now() - settle < SETTLE_MS; k++) findRoots(p);
       const oursOnce = timeOurs(p, 1);
       const numpyOnce = await numpy.time(i, 1);
-      const innerOurs = Math.max(1, Math.round(TARGET_MS / oursOnce.wall));
-      const innerNumpy = Math.max(1, Math.round(TARGET_MS / numpyOnce.wall));
+      // Batches sized by processor time: a single call's wall time can include a wait for a core.
+      const innerOurs = Math.max(1, Math.round(TARGET_MS / oursOnce.thread));
+      const innerNumpy = Math.max(1, Math.round(TARGET_MS / numpyOnce.thread));
       const big = innerOurs === 1 && innerNumpy === 1;
       const ours: Timing[] = big ? [oursOnce] : [];
       const theirs: Timing[] = big ? [numpyOnce] : [];
-      const rounds = n >= 512 ? 5 : 11;
+      const rounds = n >= 512 ? 5 : n >= 128 ? 11 : 21;
       while (ours.length < rounds) {
         ours.push(timeOurs(p, innerOurs));
         theirs.push(await numpy.time(i, innerNumpy));
       }
-      const mo = median(ours.map((t) => t.wall));
-      const mn = median(theirs.map((t) => t.wall));
-      const co = median(ours.map((t) => t.cpu));
-      const cn = median(theirs.map((t) => t.cpu));
+      const to = median(ours.map((t) => t.thread));
+      const tn = median(theirs.map((t) => t.thread));
+      const wo = median(ours.map((t) => t.wall));
+      const wn = median(theirs.map((t) => t.wall));
+      const ms = (x: number) => (x < 10 ? x.toFixed(3) : x.toFixed(1));
       rows.push(
-        `| ${name} | ${n} | ${mo.toFixed(3)} | ${berr.toExponential(1)} | ${setErr.toExponential(1)} | ${res.iterations}${res.converged ? '' : ' (not converged)'} | ${mn.toFixed(3)} | ${numpyBerr.toExponential(1)} | ${numpySetErr.toExponential(1)} | ${(mo / mn).toFixed(2)} | ${(co / cn).toFixed(2)} |`,
+        `| ${name} | ${n} | ${ms(to)} | ${berr.toExponential(1)} | ${setErr.toExponential(1)} | ${res.iterations}${res.converged ? '' : ' (not converged)'} | ${ms(tn)} | ${numpyBerr.toExponential(1)} | ${numpySetErr.toExponential(1)} | ${(to / tn).toFixed(2)} | ${ms(wo)} | ${ms(wn)} | ${(wo / wn).toFixed(2)} |`,
       );
     }
   } finally {
@@ -198,14 +146,14 @@ export async function benchRoots(family = '', degrees: readonly number[] = DEGRE
     rmSync(dir, { recursive: true, force: true });
   }
   return [
-    `findRoots vs numpy.roots (${numpy.version}), Node ${process.version}; median ms per call;`,
-    'root error = max over roots of |p(z)| / Σ|a_k||z|^k; set error = max_k |a_k − q_k| / max_k |a_k| with',
-    'q = a_0·Π(z − r_i) over the reported set (repeated roots merged) multiplied out in double-double;',
-    'sweeps = Aberth + polish sweeps of ours; ours / numpy in wall time and in processor time (medians of each,',
-    'both processes counted whole, all threads).',
+    `findRoots vs numpy.roots (${numpy.version}, OpenBLAS limited to one thread), Node ${process.version};`,
+    "ours, numpy: median ms per call of the calling thread's processor time (batches of about 4 ms, interleaved);",
+    'wall: the same batches in wall time; root error = max over roots of |p(z)| / Σ|a_k||z|^k; set error =',
+    'max_k |a_k − q_k| / max_k |a_k| with q = a_0·Π(z − r_i) over the reported set (repeated roots merged)',
+    'multiplied out in double-double; sweeps = Aberth + polish sweeps of ours.',
     '',
-    '| family | degree | ours (ms) | root error | set error | sweeps | numpy (ms) | numpy root error | numpy set error | ours / numpy | ours / numpy, processor |',
-    '| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: |',
+    '| family | degree | ours (ms) | root error | set error | sweeps | numpy (ms) | numpy root error | numpy set error | ours / numpy | ours wall | numpy wall | wall ratio |',
+    '| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: |',
     ...rows,
   ].join('\n');
 }

@@ -71,21 +71,147 @@ export function compensatedEval(
   out[3] = di;
 }
 
-/** The derivative's coefficients as double-double (hi, lo): k·c_k exactly. */
-export function derivativeDd(c: Float64Array): { hi: Float64Array; lo: Float64Array } {
+/**
+ * p(z) and p'(z), both compensated, for real descending coefficients c at z = x + i·y, with the bound
+ * Σ|c_k||z|^k; out = [Re p, Im p, Re p', Im p', bound]. Instead of complex Horner, p is divided by the real
+ * quadratic D(w) = w² − t·w + m whose roots are z and z̄ (t = 2x, m = x² + y²): with p = Q·D + r₁w + r₀,
+ * p(z) = r₁z + r₀ and p'(z) = Q(z)·D'(z) + r₁ = Q(z)·2iy + r₁, and Q(z) comes from a second division run in
+ * the same loop (the real-coefficient evaluation of e.g. Goertzel's and Clenshaw's recurrences). Each level
+ * costs two real products per coefficient where complex Horner costs four, so p and p' together cost about
+ * what complex compensated Horner pays for p alone. As in compensatedEval, the rounding error of every
+ * product and sum is recovered exactly (Dekker's TwoProduct, Knuth's TwoSum; m is kept as a double-double)
+ * and run through the same recurrence, so both values come out as if computed in twice the working
+ * precision; the recurrence may amplify rounding errors by up to n + 1 where Horner's would not (its
+ * characteristic roots z and z̄ meet on the real axis), which moves the result's error from about
+ * (nε)²·bound to about n·(nε)²·bound, still far below ε·bound.
+ */
+export function compensatedEvalWithDerivative(
+  c: Float64Array,
+  x: number,
+  y: number,
+  out: Float64Array,
+): void {
   const n = c.length - 1;
-  const hi = new Float64Array(Math.max(1, n));
-  const lo = new Float64Array(Math.max(1, n));
-  for (let i = 0; i < n; i++) {
-    const a = c[i]!;
-    const b = n - i;
-    const p = a * b;
-    const ah = a * SPLIT - (a * SPLIT - a);
-    const al = a - ah;
+  const t = 2 * x;
+  const th = t * SPLIT - (t * SPLIT - t);
+  const tl = t - th;
+  // m = x² + y² as mh + ml.
+  const xx = x * x;
+  const xh = x * SPLIT - (x * SPLIT - x);
+  const xl = x - xh;
+  const exx = xl * xl - (xx - xh * xh - xl * xh - xh * xl);
+  const yy = y * y;
+  const yh = y * SPLIT - (y * SPLIT - y);
+  const yl = y - yh;
+  const eyy = yl * yl - (yy - yh * yh - yl * yh - yh * yl);
+  const ms = xx + yy;
+  const mz = ms - xx;
+  const mErr = xx - (ms - mz) + (yy - mz) + exx + eyy;
+  const mh = ms + mErr;
+  const ml = mErr - (mh - ms);
+  const mhh = mh * SPLIT - (mh * SPLIT - mh);
+  const mhl = mh - mhh;
+  const mod = Math.sqrt(ms);
+  // b: the first division (b_k = c_k + t·b_{k−1} − m·b_{k−2}), a the second (of the quotient); suffix 1 is
+  // step k − 1, suffix 2 step k − 2, h/l a value's Veltkamp halves. A rounding error made at step k of the
+  // first division acts as a change of c_k, so its effect on p(z) and p'(z) is that error times z^(n−k) and
+  // (n−k)·z^(n−k−1): the errors are summed by complex Horner (ep, its derivative ed), not through the
+  // recurrence, which would amplify them; those of the second division act on Q(z) the same way (eq).
+  let b1 = 0;
+  let b1h = 0;
+  let b1l = 0;
+  let b2 = 0;
+  let b2h = 0;
+  let b2l = 0;
+  let a1 = 0;
+  let a1h = 0;
+  let a1l = 0;
+  let a2 = 0;
+  let a2h = 0;
+  let a2l = 0;
+  let epr = 0;
+  let epi = 0;
+  let edr = 0;
+  let edi = 0;
+  let eqr = 0;
+  let eqi = 0;
+  let bound = 0;
+  for (let k = 0; k <= n; k++) {
+    const ck = c[k]!;
+    bound = bound * mod + Math.abs(ck);
+    // b_k = (c_k + t·b1) − m·b2, every rounding error kept.
+    const p1 = t * b1;
+    const q1 = tl * b1l - (p1 - th * b1h - tl * b1h - th * b1l);
+    const p2 = mh * b2;
+    const q2 = mhl * b2l - (p2 - mhh * b2h - mhl * b2h - mhh * b2l);
+    const s = ck + p1;
+    const sz = s - ck;
+    const g1 = ck - (s - sz) + (p1 - sz);
+    const b = s - p2;
+    const bz = b - s;
+    const g2 = s - (b - bz) - (p2 + bz);
+    const e = q1 - q2 + g1 + g2 - ml * b2;
+    const tdr = edr * x - edi * y + epr;
+    edi = edr * y + edi * x + epi;
+    edr = tdr;
+    const tpr = epr * x - epi * y + e;
+    epi = epr * y + epi * x;
+    epr = tpr;
     const bh = b * SPLIT - (b * SPLIT - b);
     const bl = b - bh;
-    hi[i] = p;
-    lo[i] = al * bl - (p - ah * bh - al * bh - ah * bl);
+    if (k <= n - 2) {
+      // a_k = (b_k + t·a1) − m·a2.
+      const r1 = t * a1;
+      const u1 = tl * a1l - (r1 - th * a1h - tl * a1h - th * a1l);
+      const r2 = mh * a2;
+      const u2 = mhl * a2l - (r2 - mhh * a2h - mhl * a2h - mhh * a2l);
+      const v = b + r1;
+      const vz = v - b;
+      const h1 = b - (v - vz) + (r1 - vz);
+      const a = v - r2;
+      const az = a - v;
+      const h2 = v - (a - az) - (r2 + az);
+      const f = u1 - u2 + h1 + h2 - ml * a2;
+      const tqr = eqr * x - eqi * y + f;
+      eqi = eqr * y + eqi * x;
+      eqr = tqr;
+      a2 = a1;
+      a2h = a1h;
+      a2l = a1l;
+      a1 = a;
+      a1h = a * SPLIT - (a * SPLIT - a);
+      a1l = a - a1h;
+    }
+    b2 = b1;
+    b2h = b1h;
+    b2l = b1l;
+    b1 = b;
+    b1h = bh;
+    b1l = bl;
   }
-  return { hi, lo };
+  // p(z) = b_n − b_{n−1}·z̄: Re = b_n − x·b_{n−1}, Im = y·b_{n−1} (b1, b2 now hold b_n, b_{n−1}).
+  const px = x * b2;
+  const pxe = xl * b2l - (px - xh * b2h - xl * b2h - xh * b2l);
+  const re = b1 - px;
+  const rz = re - b1;
+  const reErr = b1 - (re - rz) - (px + rz);
+  out[0] = re + (reErr - pxe + epr);
+  out[1] = y * b2 + epi;
+  // p'(z) = Q(z)·2iy + r₁ with r₁ = b_{n−1} and Q(z) = a_{n−2} − a_{n−3}·z̄ = (A − x·B) + i·y·B:
+  // Re p' = r₁ − 2y²·B − 2y·eq_i + ed_r, Im p' = 2y·(A − x·B + eq_r) + ed_i, differences with their errors.
+  const qx = x * a2;
+  const qxe = xl * a2l - (qx - xh * a2h - xl * a2h - xh * a2l);
+  const d = a1 - qx;
+  const dz = d - a1;
+  const dErr = a1 - (d - dz) - (qx + dz);
+  out[3] = 2 * y * (d + (dErr - qxe + eqr)) + edi;
+  const yyh = yy * SPLIT - (yy * SPLIT - yy);
+  const yyl = yy - yyh;
+  const w = yy * a2;
+  const we = yyl * a2l - (w - yyh * a2h - yyl * a2h - yyh * a2l) + eyy * a2;
+  const g = b2 - 2 * w;
+  const gz = g - b2;
+  const gErr = b2 - (g - gz) - (2 * w + gz);
+  out[2] = g + (gErr - 2 * we - 2 * y * eqi + edr);
+  out[4] = bound;
 }

@@ -64,6 +64,9 @@ export function ddDiv(ah: number, al: number, bh: number, bl: number, out: Float
 let bufHi = new Float64Array(64);
 let bufLo = new Float64Array(64);
 const tmpQ = new Float64Array(2);
+/** The divisor's Veltkamp halves in remainderSize. */
+let divH = new Float64Array(8);
+let divL = new Float64Array(8);
 
 /**
  * The remainder of c (double, descending) divided by f (double-double, descending, f[0] ≠ 0), as the
@@ -87,6 +90,16 @@ export function remainderSize(c: ArrayLike<number>, f: DdPoly): number {
   }
   const q = tmpQ;
   const monic = f.hi[0] === 1 && f.lo[0] === 0;
+  // The divisor's Veltkamp halves, once (the products below are the same as splitting each time).
+  if (divH.length <= m) {
+    divH = new Float64Array(2 * (m + 1));
+    divL = new Float64Array(2 * (m + 1));
+  }
+  for (let j = 0; j <= m; j++) {
+    const bh = f.hi[j]!;
+    divH[j] = bh * SPLIT - (bh * SPLIT - bh);
+    divL[j] = bh - divH[j]!;
+  }
   for (let k = 0; k + m <= n; k++) {
     // q = (hi_k + lo_k) / f_0, then (hi, lo)_{k+j} −= q·f_j: Dekker's product and sum written out.
     let qh = hi[k]!;
@@ -102,8 +115,8 @@ export function remainderSize(c: ArrayLike<number>, f: DdPoly): number {
       const bh = f.hi[j]!;
       const bl = f.lo[j]!;
       const p = qh * bh;
-      const bhh = bh * SPLIT - (bh * SPLIT - bh);
-      const bhl = bh - bhh;
+      const bhh = divH[j]!;
+      const bhl = divL[j]!;
       const pe = qhl * bhl - (p - qhh * bhh - qhl * bhh - qhh * bhl) + (qh * bl + ql * bh);
       const th = -(p + pe);
       const tl = -(pe - (p + pe - p));

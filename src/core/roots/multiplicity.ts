@@ -68,7 +68,9 @@ export function findMultipleRoots(
   const group = new Int32Array(n).fill(-1);
   const roots: Root[] = [];
   const neighbours = closePairs(re, im, 2 * CLUSTER_RADII[0]!);
+  // p, p', p'', … and their coefficients' absolute values, made as the multiplicities tried need them.
   const derivs: Float64Array[] = [c];
+  const absDerivs: Float64Array[] = [];
   const reversedC = c.slice().reverse();
   const failedSize = new Int32Array(n);
   // Distance from each root to its nearest neighbour: at a radius below it a root has no cluster (unless it
@@ -98,7 +100,7 @@ export function findMultipleRoots(
       const m = members.length;
       if (m < 2 || m === failedSize[i] || !isolated(re, im, members, neighbours[i]!, cx, cy)) continue;
       if (real && members.some((k) => mate[k]! >= 0 && !members.includes(mate[k]!))) continue;
-      const centre = verifiedCentre(c, reversedC, derivs, re, im, members, real, rho * mod);
+      const centre = verifiedCentre(c, reversedC, derivs, absDerivs, re, im, members, real, rho * mod);
       if (!centre) {
         failedSize[i] = m;
         continue;
@@ -224,6 +226,7 @@ function verifiedCentre(
   c: Float64Array,
   reversedC: Float64Array,
   derivs: Float64Array[],
+  absDerivs: Float64Array[],
   re: Float64Array,
   im: Float64Array,
   members: number[],
@@ -254,7 +257,7 @@ function verifiedCentre(
   if (atMean === 0) return [x0, y0];
   while (derivs.length <= m) derivs.push(derivative(derivs[derivs.length - 1]!));
   const f = derivs[m - 1]!;
-  const absF = f.map(Math.abs);
+  const absF = (absDerivs[m - 1] ??= f.map(Math.abs));
   const g = new Float64Array(3);
   let x = x0;
   let y = y0;
