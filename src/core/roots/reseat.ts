@@ -57,6 +57,12 @@ const GATE = 1e-12;
  */
 const LANDING = 4;
 
+/** For approximations on one point, Newton's step from it must be below this many units of its modulus. */
+const NEAR_ULPS = 16;
+
+/** Relative distance at which p' is compared for two approximations on one point. */
+const PROBE = 2 ** -26;
+
 /** p' changing by less than this fraction of itself across a close pair marks the root there as simple. */
 const SIMPLE = 2 ** -6;
 
@@ -73,7 +79,7 @@ const STOP_ULPS = 4;
  * p'/p at z from the compensated Horner scheme (roots/compensated.ts) with the derivative's coefficients in
  * double-double, scaled so that |p|² cannot underflow; the reversed polynomial at 1/z for |z| > 1.
  */
-class AccurateLogDerivative {
+export class AccurateLogDerivative {
   private readonly rev: Float64Array;
   private readonly d: { hi: Float64Array; lo: Float64Array };
   private readonly dRev: { hi: Float64Array; lo: Float64Array };
@@ -96,6 +102,16 @@ class AccurateLogDerivative {
     compensatedEval(d.hi, ux, uy, this.w, d.lo);
     out[0] = this.w[0]!;
     out[1] = this.w[1]!;
+  }
+  /** |p(z)| from the compensated Horner scheme (of the reversed polynomial at 1/z, times |z|^n, for |z| > 1). */
+  modulus(x: number, y: number): number {
+    const n = this.c.length - 1;
+    const mod2 = x * x + y * y;
+    const inside = mod2 <= 1;
+    compensatedEval(inside ? this.c : this.rev, inside ? x : x / mod2, inside ? y : -y / mod2, this.v);
+    const m = Math.hypot(this.v[0]!, this.v[1]!);
+    // Compared only between nearby points, so log-scale is enough and nothing overflows.
+    return inside ? Math.log2(m) : Math.log2(m) + (n / 2) * Math.log2(mod2);
   }
   /** Writes [Re, Im] of p'(z)/p(z) into out (non-finite where p(z) is 0). */
   at(x: number, y: number, out: Float64Array): void {
@@ -129,7 +145,7 @@ class AccurateLogDerivative {
 }
 
 /**
- * Pairs (i, j), i < j, of approximations within CLOSE of each other, both above the real axis or both on it
+ * Pairs (i, j), i < j, of approximations within CLOSE of each other (on one point included), both above the real axis or both on it
  * (a pair straddling the axis is a conjugate pair, handled by roots/conjugate.ts).
  */
 function closePairs(zr: Float64Array, zi: Float64Array): [number, number][] {
@@ -144,7 +160,7 @@ function closePairs(zr: Float64Array, zi: Float64Array): [number, number][] {
       const j = order[b]!;
       if (zi[j]! < 0 || (zi[i] === 0) !== (zi[j] === 0)) continue;
       const d = Math.hypot(zr[j]! - zr[i]!, zi[j]! - zi[i]!);
-      if (d > 0 && d <= tol) out.push([Math.min(i, j), Math.max(i, j)]);
+      if (d <= tol) out.push([Math.min(i, j), Math.max(i, j)]);
     }
   }
   return out;
@@ -173,14 +189,17 @@ export function reseatSharedRoots(c: Float64Array, zr: Float64Array, zi: Float64
     ev.at(mx, my, g);
     const newton = 1 / Math.hypot(g[0]!, g[1]!);
     const d = Math.hypot(zr[j]! - zr[i]!, zi[j]! - zi[i]!);
-    if (!(newton <= LANDING * d)) continue;
+    const size = Math.hypot(mx, my);
+    if (!(newton <= LANDING * Math.max(d, NEAR_ULPS * Number.EPSILON * size))) continue;
     // A multiple root (or a cluster) also draws Newton's step into the pair's span, but there p' vanishes
     // nearby and changes by its own size across the pair; at a simple root it hardly changes.
     const outside = mx * mx + my * my > 1;
     ev.derivative(zr[i]!, zi[i]!, outside, g);
     const ar = g[0]!;
     const ai = g[1]!;
-    ev.derivative(zr[j]!, zi[j]!, outside, g);
+    // Two approximations on one point: p' is compared at a point PROBE·|z| away instead.
+    if (d === 0) ev.derivative(zr[j]! + PROBE * size, zi[j]!, outside, g);
+    else ev.derivative(zr[j]!, zi[j]!, outside, g);
     if (Math.hypot(g[0]! - ar, g[1]! - ai) <= SIMPLE * Math.hypot(ar, ai)) shared.push(j);
   }
   if (shared.length === 0) return 0;
