@@ -12,6 +12,7 @@ import { polishIllConditioned } from './polish.ts';
 import { symmetrizeConjugates } from './conjugate.ts';
 import { findMultipleRoots, listGrouped } from './multiplicity.ts';
 import { reseatSharedRoots } from './reseat.ts';
+import { refindMisfits } from './misfits.ts';
 
 export { rootsBackwardError } from './backwardError.ts';
 
@@ -81,6 +82,7 @@ export function findRoots(p: Poly, options: RootsOptions = {}): RootsResult {
   symmetrizeConjugates(c, zr, zi);
   if (n > 2) iterations += polishIllConditioned(c, zr, zi);
   if (n > 2) iterations += reseatSharedRoots(c, zr, zi);
+  if (n > 2) iterations += refindMisfits(c, zr, zi);
   const mate = symmetrizeConjugates(c, zr, zi);
   const multiple = findMultipleRoots(c, zr, zi, mate);
   const grouped = listGrouped(zr, zi, multiple);
