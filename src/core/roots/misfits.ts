@@ -11,7 +11,14 @@
  * (roots/setBackwardError.ts) falls.
  */
 import { AccurateLogDerivative } from './reseat.ts';
+import { MultiPrecisionEvaluator } from './multiPrecision.ts';
 import { setBackwardError } from './setBackwardError.ts';
+
+/** What the search needs of an evaluation: p'/p (false where it cannot tell) and log2|p| for comparisons. */
+interface Evaluator {
+  at(x: number, y: number, out: Float64Array): boolean;
+  modulus(x: number, y: number): number;
+}
 
 /** Below this degree every measured set multiplies out at the rounding level; the O(n²) check is skipped. */
 export const MISFIT_MIN_DEGREE = 128;
@@ -43,15 +50,42 @@ export function refindMisfits(c: Float64Array, zr: Float64Array, zi: Float64Arra
   if (n < MISFIT_MIN_DEGREE) return 0;
   const before = setBackwardError(c, zr, zi);
   if (!(before > GATE)) return 0;
-  const ev = new AccurateLogDerivative(c);
+  const dd = new AccurateLogDerivative(c);
+  const compensated: Evaluator = {
+    at: (x, y, out) => {
+      dd.at(x, y, out);
+      return true;
+    },
+    modulus: (x, y) => dd.modulus(x, y),
+  };
+  const first = search(c, zr, zi, compensated, before);
+  if (!(first.error > GATE)) return first.sweeps;
+  // Double-double did not reach it (coefficients so small that its error-free products underflow, or a
+  // condition beyond its reach): the same search with multi-precision evaluation, slower by about 20x.
+  return first.sweeps + search(c, zr, zi, new MultiPrecisionEvaluator(c), first.error).sweeps;
+}
+
+/**
+ * One search with the evaluator ev from the set zr/zi, whose set backward error is `before`: kept if the
+ * error falls. Returns the sweeps taken and the set backward error of the set left in zr/zi.
+ */
+function search(
+  c: Float64Array,
+  zr: Float64Array,
+  zi: Float64Array,
+  ev: Evaluator,
+  before: number,
+): { sweeps: number; error: number } {
+  const n = zr.length;
   const g = new Float64Array(2);
   const misfits: number[] = [];
   for (let i = 0; i < n; i++) {
-    ev.at(zr[i]!, zi[i]!, g);
+    // A point where p'/p cannot be resolved is taken as a misfit too.
+    const resolved = ev.at(zr[i]!, zi[i]!, g);
     const newton = 1 / Math.hypot(g[0]!, g[1]!);
-    if (newton > MISFIT * Math.hypot(zr[i]!, zi[i]!)) misfits.push(i);
+    if (!resolved || !(newton <= MISFIT * Math.hypot(zr[i]!, zi[i]!))) misfits.push(i);
   }
-  if (misfits.length === 0) return 0;
+  if (misfits.length === 0) return { sweeps: 0, error: before };
   const startR = Float64Array.from(zr);
   const startI = Float64Array.from(zi);
   misfits.forEach((i, k) => {
@@ -68,7 +102,7 @@ export function refindMisfits(c: Float64Array, zr: Float64Array, zi: Float64Arra
     for (const i of active) {
       const x = zr[i]!;
       const y = zi[i]!;
-      ev.at(x, y, g);
+      if (!ev.at(x, y, g)) continue;
       let ar = g[0]!;
       let ai = g[1]!;
       for (let j = 0; j < n; j++) {
@@ -94,8 +128,9 @@ export function refindMisfits(c: Float64Array, zr: Float64Array, zi: Float64Arra
   if (!(after < before)) {
     zr.set(startR);
     zi.set(startI);
+    return { sweeps, error: before };
   }
-  return sweeps;
+  return { sweeps, error: after };
 }
 
 /**
@@ -103,12 +138,7 @@ export function refindMisfits(c: Float64Array, zr: Float64Array, zi: Float64Arra
  * it has no larger residual becomes real; the others pair by mutual nearness with a mirror, both taking the
  * member with the smaller residual; any left over goes onto the axis.
  */
-function restoreSymmetry(
-  ev: AccurateLogDerivative,
-  zr: Float64Array,
-  zi: Float64Array,
-  moved: number[],
-): void {
+function restoreSymmetry(ev: Evaluator, zr: Float64Array, zi: Float64Array, moved: number[]): void {
   const upper: number[] = [];
   const lower: number[] = [];
   for (const i of moved) {
