@@ -248,11 +248,11 @@ def multiply_out_pairs(pairs):
     return p
 
 
-def repeated_roots(n):
+def repeated_roots(n, seed=None):
     """n/4 seeded conjugate pairs, each a double root, moduli 0.3 to 1.2: the repeated-roots polynomial of
-    `npm run bench -- roots` (same seed and construction; its doubles may differ from the bench's by the ulps
-    in which Python's and V8's cos and sin differ)."""
-    u = mulberry32(5000 + n)
+    `npm run bench -- roots` with the default seed (same seed and construction; its doubles may differ from the
+    bench's by the ulps in which Python's and V8's cos and sin differ)."""
+    u = mulberry32(5000 + n if seed is None else seed)
     pairs = []
     for _ in range(n // 4):
         r = 0.3 + 0.9 * u()
@@ -261,11 +261,18 @@ def repeated_roots(n):
     return multiply_out_pairs(pairs)
 
 
-def degree_1024():
-    """Degree 1024, where approximations that share one root used to leave a root out of the set."""
+def degree_768_1024():
+    """Degrees 768 and 1024, where approximations that shared one root, real approximations standing where a
+    conjugate pair belonged, and a subnormal constant coefficient (Butterworth at 0.5 of Nyquist) used to leave
+    roots out of the set."""
+    butter = [(1024, 0.2), (768, 0.3), (1024, 0.5), (768, 0.5)]
     return [
-        {"name": "Butterworth denominator, order 1024, cutoff 0.2 of Nyquist", **poly_input(butterworth_denominator(1024), "a")},
+        {"name": f"Butterworth denominator, order {n}, cutoff {f:g} of Nyquist", **poly_input(butterworth_denominator(n, f), "a")}
+        for n, f in butter
+    ] + [
         {"name": "256 seeded double conjugate pairs, degree 1024", **poly_input(repeated_roots(1024), "a")},
+        {"name": "256 seeded double conjugate pairs, degree 1024, seed 3", **poly_input(repeated_roots(1024, 3), "a")},
+        {"name": "256 seeded double conjugate pairs, degree 1024, seed 5", **poly_input(repeated_roots(1024, 5), "a")},
     ]
 
 
@@ -326,7 +333,7 @@ def fixtures():
         "roots_truth_high_degree": Fixture(
             high_degree(), tol=COEFFICIENTS, fields={**NUMPY}, derive=derive_high_degree
         ),
-        "roots_truth_degree_1024": Fixture(
-            degree_1024(), tol=COEFFICIENTS, fields={**NUMPY}, derive=derive_degree_1024
+        "roots_truth_degree_768_1024": Fixture(
+            degree_768_1024(), tol=COEFFICIENTS, fields={**NUMPY}, derive=derive_degree_1024
         ),
     }

@@ -118,8 +118,8 @@ describe('clustered denominators of high degree', () => {
   );
 });
 
-describe('degree 1024', () => {
-  const cases = loadFixture<(Named & { numpyBackwardError: number })[]>('roots_truth_degree_1024');
+describe('degrees 768 and 1024', () => {
+  const cases = loadFixture<(Named & { numpyBackwardError: number })[]>('roots_truth_degree_768_1024');
   it.each(cases.map((c) => [c.name, c] as const))(
     '%s: the reported set multiplies out to the coefficients as well as numpy.roots',
     (_name, c) => {
