@@ -31,8 +31,13 @@ interface Dyadic {
   top: number;
 }
 
+/** Shift counts as BigInts, made once (converting a count at every step costs as much as the shift). */
+const COUNTS = Array.from({ length: 2048 }, (_, k) => BigInt(k));
+
 function shift(v: bigint, s: number): bigint {
-  return s > 0 ? v >> BigInt(s) : s < 0 ? v << BigInt(-s) : v;
+  if (s > 0) return v >> (s < 2048 ? COUNTS[s]! : BigInt(s));
+  if (s < 0) return v << (-s < 2048 ? COUNTS[-s]! : BigInt(-s));
+  return v;
 }
 
 /** log2 of the larger of |a| and |b| (to rounding; −Infinity when both are 0). */

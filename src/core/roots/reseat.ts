@@ -113,6 +113,25 @@ export class AccurateLogDerivative {
     // Compared only between nearby points, so log-scale is enough and nothing overflows.
     return inside ? Math.log2(m) : Math.log2(m) + (n / 2) * Math.log2(mod2);
   }
+  /**
+   * An upper bound, relative to |z|, on Newton's step p/p' at the point of the last {@link at} (in the
+   * reversed polynomial at 1/z for |z| > 1, where the relative step is the same to first order): the
+   * compensated |p| plus 16 times the scheme's error bound γ²·Σ|c_k||z|^k (γ = 8(4n + 2)ε, a margin over
+   * Graillat, Langlois and Louvet's bound) plus n·2^-1000 for error terms that leave the normal double range,
+   * over the double-double |p'|.
+   */
+  lastStepBound(): number {
+    const n = this.c.length - 1;
+    const coeffs = this.lastInside ? this.c : this.rev;
+    const mod = Math.hypot(this.lastX, this.lastY);
+    let b = 0;
+    for (let k = 0; k <= n; k++) b = b * mod + Math.abs(coeffs[k]!);
+    const floor = (2 * (4 * n + 2) * Number.EPSILON) ** 2 * b + n * 2 ** -1000;
+    return (Math.hypot(this.v[0]!, this.v[1]!) + floor) / (Math.hypot(this.w[0]!, this.w[1]!) * mod);
+  }
+  private lastInside = true;
+  private lastX = 0;
+  private lastY = 0;
   /** Writes [Re, Im] of p'(z)/p(z) into out (non-finite where p(z) is 0). */
   at(x: number, y: number, out: Float64Array): void {
     const n = this.c.length - 1;
@@ -120,6 +139,9 @@ export class AccurateLogDerivative {
     const inside = mod2 <= 1;
     const ux = inside ? x : x / mod2;
     const uy = inside ? y : -y / mod2;
+    this.lastInside = inside;
+    this.lastX = ux;
+    this.lastY = uy;
     compensatedEval(inside ? this.c : this.rev, ux, uy, this.v);
     const d = inside ? this.d : this.dRev;
     compensatedEval(d.hi, ux, uy, this.w, d.lo);
