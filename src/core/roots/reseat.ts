@@ -167,25 +167,28 @@ export class AccurateLogDerivative {
 }
 
 /**
- * Pairs (i, j), i < j, of approximations within CLOSE of each other (on one point included), both above the real axis or both on it
- * (a pair straddling the axis is a conjugate pair, handled by roots/conjugate.ts).
+ * Pairs (i, j), i < j, of approximations within CLOSE of each other (on one point included), both above
+ * the real axis or both on it (a pair straddling the axis is a conjugate pair, handled by roots/conjugate.ts).
  */
 function closePairs(zr: Float64Array, zi: Float64Array): [number, number][] {
+  // A plain scan of all pairs: no allocation or sort, which at low degree would cost a noticeable share of a
+  // whole root search, and n²/2 comparisons are far below the search's own n² work per sweep.
   const n = zr.length;
-  const order = Array.from({ length: n }, (_, i) => i).sort((a, b) => zr[a]! - zr[b]!);
-  const out: [number, number][] = [];
-  for (let a = 0; a < n; a++) {
-    const i = order[a]!;
-    if (zi[i]! < 0) continue;
-    const tol = CLOSE * Math.hypot(zr[i]!, zi[i]!);
-    for (let b = a + 1; b < n && zr[order[b]!]! - zr[i]! <= tol; b++) {
-      const j = order[b]!;
-      if (zi[j]! < 0 || (zi[i] === 0) !== (zi[j] === 0)) continue;
-      const d = Math.hypot(zr[j]! - zr[i]!, zi[j]! - zi[i]!);
-      if (d <= tol) out.push([Math.min(i, j), Math.max(i, j)]);
+  let out: [number, number][] | undefined;
+  for (let i = 0; i < n; i++) {
+    const xi = zr[i]!;
+    const yi = zi[i]!;
+    if (yi < 0) continue;
+    const tol = CLOSE * Math.hypot(xi, yi);
+    for (let j = i + 1; j < n; j++) {
+      const yj = zi[j]!;
+      if (yj < 0 || (yi === 0) !== (yj === 0)) continue;
+      const dx = Math.abs(zr[j]! - xi);
+      const dy = Math.abs(yj - yi);
+      if (dx <= tol && dy <= tol && Math.hypot(dx, dy) <= tol) (out ??= []).push([i, j]);
     }
   }
-  return out;
+  return out ?? [];
 }
 
 /** The index of the exact mirror of upper root i (its conjugate in the set), or -1. */
