@@ -35,6 +35,9 @@ const START_OFFSET = 2 ** -12;
 /** Sweeps at most (the successful searches measured took at most 20). */
 const MAX_SWEEPS = 60;
 
+/** The search stops when this many sweeps in a row have not brought more misfits to rest. */
+const STALL_SWEEPS = 10;
+
 /** A misfit stops once its step is below this many units in the last place of its modulus. */
 const STOP_ULPS = 4;
 
@@ -104,7 +107,9 @@ function search(
   });
   let sweeps = 0;
   let active = misfits;
-  while (active.length > 0 && sweeps < MAX_SWEEPS) {
+  let fewest = active.length;
+  let stalled = 0;
+  while (active.length > 0 && sweeps < MAX_SWEEPS && stalled < STALL_SWEEPS) {
     sweeps++;
     const next: number[] = [];
     for (const i of active) {
@@ -130,6 +135,10 @@ function search(
       if (Math.hypot(sr, si) > STOP_ULPS * Number.EPSILON * Math.hypot(zr[i]!, zi[i]!)) next.push(i);
     }
     active = next;
+    if (active.length < fewest) {
+      fewest = active.length;
+      stalled = 0;
+    } else stalled++;
   }
   restoreSymmetry(ev, zr, zi, misfits);
   const after = setBackwardError(c, zr, zi);

@@ -22,7 +22,7 @@ const UP = 1 + 2 ** -50;
 const RESOLVED = 2 ** -24;
 
 /** Precisions tried, in bits (mantissas stay below 1024 bits, so they convert to finite doubles). */
-const PRECISIONS = [128, 256, 512, 896];
+const PRECISIONS = [192, 384, 896];
 
 /** A coefficient as mantissa·2^f, with top the bit length of |mantissa| plus f (−Infinity for 0). */
 interface Dyadic {
