@@ -70,9 +70,9 @@ def exact_roots(c):
     raise RuntimeError(f"mpmath.polyroots did not converge for {c}")
 
 
-def set_backward_error(c, roots):
-    """max_k |c_k - q_k| / max_k |c_k| with q = c_0 prod (z - r) multiplied out at DPS digits."""
-    mpmath.mp.dps = DPS
+def set_backward_error(c, roots, dps=DPS):
+    """max_k |c_k - q_k| / max_k |c_k| with q = c_0 prod (z - r) multiplied out at dps digits."""
+    mpmath.mp.dps = dps
     q = [mpmath.mpc(1)]
     for r in roots:
         r = mpmath.mpc(complex(r))
@@ -214,12 +214,90 @@ def high_degree():
     return [{"name": f"Butterworth denominator, order {n}, cutoff 0.2 of Nyquist", **poly_input(butterworth_denominator(n), "a")} for n in (128, 256, 512)]
 
 
+def mulberry32(seed):
+    """The project's seeded generator (src/core/random.ts) in Python: the same numbers on [0, 1) for a seed."""
+    state = seed & 0xFFFFFFFF
+
+    def imul(a, b):
+        return (a * b) & 0xFFFFFFFF
+
+    def next_value():
+        nonlocal state
+        state = (state + 0x6D2B79F5) & 0xFFFFFFFF
+        t = state
+        t = imul(t ^ (t >> 15), t | 1)
+        t ^= (t + imul(t ^ (t >> 7), t | 61)) & 0xFFFFFFFF
+        return ((t ^ (t >> 14)) & 0xFFFFFFFF) / 4294967296
+
+    return next_value
+
+
+def multiply_out_pairs(pairs):
+    """prod over (re, im, multiplicity) of z^2 - 2 re z + (re^2 + im^2), as real quadratics in plain doubles."""
+    p = [1.0]
+    for re, im, mult in pairs:
+        factor = [1.0, -2 * re, re * re + im * im]
+        for _ in range(mult):
+            q = [0.0] * (len(p) + 2)
+            for i, a in enumerate(p):
+                if a == 0:
+                    continue
+                for j, b in enumerate(factor):
+                    q[i + j] += a * b
+            p = q
+    return p
+
+
+def repeated_roots(n, seed=None):
+    """n/4 seeded conjugate pairs, each a double root, moduli 0.3 to 1.2: the repeated-roots polynomial of
+    `npm run bench -- roots` with the default seed (same seed and construction; its doubles may differ from the
+    bench's by the ulps in which Python's and V8's cos and sin differ)."""
+    u = mulberry32(5000 + n if seed is None else seed)
+    pairs = []
+    for _ in range(n // 4):
+        r = 0.3 + 0.9 * u()
+        a = 0.1 + (math.pi - 0.2) * u()
+        pairs.append((r * math.cos(a), r * math.sin(a), 2))
+    return multiply_out_pairs(pairs)
+
+
+def degree_768_1024():
+    """Degrees 768 and 1024, where approximations that shared one root, real approximations standing where a
+    conjugate pair belonged, and a subnormal constant coefficient (Butterworth at 0.5 of Nyquist) used to leave
+    roots out of the set."""
+    butter = [(1024, 0.2), (768, 0.3), (1024, 0.5), (768, 0.5)]
+    return [
+        {"name": f"Butterworth denominator, order {n}, cutoff {f:g} of Nyquist", **poly_input(butterworth_denominator(n, f), "a")}
+        for n, f in butter
+    ] + [
+        {"name": "256 seeded double conjugate pairs, degree 1024", **poly_input(repeated_roots(1024), "a")},
+        {"name": "256 seeded double conjugate pairs, degree 1024, seed 3", **poly_input(repeated_roots(1024, 3), "a")},
+        {"name": "256 seeded double conjugate pairs, degree 1024, seed 5", **poly_input(repeated_roots(1024, 5), "a")},
+    ]
+
+
 def derive_high_degree(stored):
     """numpy.roots' set backward error only (mpmath's polyroots at degree 512 would take hours)."""
     out = []
     for case in stored:
         c = [float(x) for x in case["coefficients"]]
         out.append({"numpyBackwardError": set_backward_error(c, np.roots(c))})
+    return out
+
+
+# At degree 1024 the partial products of numpy's roots, taken in numpy's order, grow far beyond the final
+# coefficients (to about 1e120 for the repeated-roots polynomial, whose largest coefficient is 2e43), so 60 digits
+# leave nothing of the difference; 400 digits do (150 and 300 digits give the same double).
+DPS_DEGREE_1024 = 400
+
+
+def derive_degree_1024(stored):
+    """numpy.roots' set backward error, multiplied out by mpmath at DPS_DEGREE_1024 digits."""
+    out = []
+    for case in stored:
+        c = [float(x) for x in case["coefficients"]]
+        out.append({"numpyBackwardError": set_backward_error(c, np.roots(c), DPS_DEGREE_1024)})
+    mpmath.mp.dps = DPS
     return out
 
 
@@ -254,5 +332,8 @@ def fixtures():
         "roots_truth_special": Fixture(special(), tol=COEFFICIENTS, fields={"roots.*": TRUTH, **NUMPY}, derive=derive_special),
         "roots_truth_high_degree": Fixture(
             high_degree(), tol=COEFFICIENTS, fields={**NUMPY}, derive=derive_high_degree
+        ),
+        "roots_truth_degree_768_1024": Fixture(
+            degree_768_1024(), tol=COEFFICIENTS, fields={**NUMPY}, derive=derive_degree_1024
         ),
     }

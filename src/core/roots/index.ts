@@ -11,6 +11,8 @@ import { startingPoints } from './start.ts';
 import { polishIllConditioned } from './polish.ts';
 import { symmetrizeConjugates } from './conjugate.ts';
 import { findMultipleRoots, listGrouped } from './multiplicity.ts';
+import { reseatSharedRoots } from './reseat.ts';
+import { refindMisfits } from './misfits.ts';
 
 export { rootsBackwardError } from './backwardError.ts';
 
@@ -79,6 +81,8 @@ export function findRoots(p: Poly, options: RootsOptions = {}): RootsResult {
   const zi = im.subarray(0, n);
   symmetrizeConjugates(c, zr, zi);
   if (n > 2) iterations += polishIllConditioned(c, zr, zi);
+  if (n > 2) iterations += reseatSharedRoots(c, zr, zi);
+  if (n > 2) iterations += refindMisfits(c, zr, zi);
   const mate = symmetrizeConjugates(c, zr, zi);
   const multiple = findMultipleRoots(c, zr, zi, mate);
   const grouped = listGrouped(zr, zi, multiple);

@@ -13,6 +13,7 @@
 import { compensatedEvalWithDerivative } from './compensated.ts';
 import { logDerivative, relativeResidual } from './horner.ts';
 import { freezeLevel } from './aberth.ts';
+import { powerOfTwoScale } from './scaleSafe.ts';
 
 /** Polish a root when its condition number times ε (its forward-error estimate, relative) exceeds this. */
 export const POLISH_FORWARD_ERROR = 1e-14;
@@ -51,13 +52,16 @@ class CompensatedEvaluator {
     // derivative's double-double coefficients where the plain p' could not be trusted (inside clusters):
     // 1.4 µs against 0.7 µs at degree 64, equally accurate against exact values (roots/exactEval.ts).
     compensatedEvalWithDerivative(inside ? this.c : this.rev, ux, uy, this.v);
-    const pr = this.v[0]!;
-    const pi = this.v[1]!;
     const b = this.v[4]!;
+    // p and p' are scaled by one power of two (exact) so that |p|² neither underflows nor overflows: at degree
+    // 1024, |p| near a root close to the origin is about 1e-182 and |p|² is 0 in double.
+    const sc = powerOfTwoScale(this.v[0]!, this.v[1]!);
+    const pr = this.v[0]! * sc;
+    const pi = this.v[1]! * sc;
     const pd = pr * pr + pi * pi;
-    out[2] = b === 0 ? 0 : Math.sqrt(pd) / b;
-    const hr = (this.v[2]! * pr + this.v[3]! * pi) / pd;
-    const hi = (this.v[3]! * pr - this.v[2]! * pi) / pd;
+    out[2] = b === 0 ? 0 : Math.sqrt(pd) / sc / b;
+    const hr = (this.v[2]! * sc * pr + this.v[3]! * sc * pi) / pd;
+    const hi = (this.v[3]! * sc * pr - this.v[2]! * sc * pi) / pd;
     if (inside) {
       out[0] = hr;
       out[1] = hi;

@@ -5,6 +5,7 @@
 import { describe, it, expect } from 'vitest';
 import { findRoots } from '../../../src/core/roots/index.ts';
 import { setBackwardError } from '../../../src/core/roots/setBackwardError.ts';
+import { reseatSharedRoots } from '../../../src/core/roots/reseat.ts';
 import { inclusionDisks } from '../../../src/core/roots/inclusion.ts';
 import { stabilityOfCoefficients } from '../../../src/core/stability/coefficients.ts';
 import type { Verdict } from '../../../src/core/stability/index.ts';
@@ -115,4 +116,45 @@ describe('clustered denominators of high degree', () => {
       expect(ours).toBeLessThanOrEqual(1e-12);
     },
   );
+});
+
+describe('degrees 768 and 1024', () => {
+  const cases = loadFixture<(Named & { numpyBackwardError: number })[]>('roots_truth_degree_768_1024');
+  it.each(cases.map((c) => [c.name, c] as const))(
+    '%s: the reported set multiplies out to the coefficients as well as numpy.roots',
+    (_name, c) => {
+      const set = reportedSet(c.coefficients);
+      const ours = setBackwardError(c.coefficients, set.re, set.im);
+      // numpy.roots' set backward error on the same doubles, multiplied out by mpmath at 400 digits
+      expect(ours).toBeLessThanOrEqual(Math.max(10 * c.numpyBackwardError, BACKWARD_FLOOR));
+      if (c.numpyBackwardError <= 1e-12) expect(ours).toBeLessThanOrEqual(1e-12);
+    },
+  );
+});
+
+describe('approximations sharing one root', () => {
+  it('moves one of two approximations on a simple root to the root left without one', () => {
+    // (z − 0.5)(z − 0.625)(z − 0.75) multiplied out by hand: every coefficient exact in binary; two
+    // approximations three units apart on 0.625 and none on 0.75
+    const c = Float64Array.from([1, -1.875, 1.15625, -0.234375]);
+    const zr = Float64Array.from([0.5, 0.625, 0.625 + 3 * 2 ** -53]);
+    const zi = new Float64Array(3);
+    const before = setBackwardError(c, zr, zi);
+    reseatSharedRoots(c, zr, zi);
+    const after = setBackwardError(c, zr, zi);
+    expect(before).toBeGreaterThan(1e-3);
+    expect(after).toBeLessThan(1e-15);
+    // the moved member found the third root
+    expect(Math.max(...zr)).toBe(0.75);
+  });
+
+  it('leaves the approximations of an exact triple root together', () => {
+    // (z + 1)^3: the multiplicity step merges these; they are not a shared simple root
+    const c = Float64Array.from([1, 3, 3, 1]);
+    const zr = Float64Array.from([-1.0000000000065146, -0.9999999999823634, -0.9999999999994407]);
+    const zi = new Float64Array(3);
+    const copy = Float64Array.from(zr);
+    expect(reseatSharedRoots(c, zr, zi)).toBe(0);
+    expect(zr).toEqual(copy);
+  });
 });
