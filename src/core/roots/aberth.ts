@@ -98,3 +98,33 @@ export function aberthIterate(
   }
   return { converged: remaining === 0, iterations };
 }
+
+/**
+ * Aberth's correction for approximation i at x + jy from g = p'/p there: 1 / (g − Σ_{j≠i} 1/(z − z_j)) over
+ * every other approximation in zr/zi, into out as [re, im] (not finite where g or a distance degenerates).
+ * The refinements after the iteration (exactRefine.ts, reseat.ts, misfits.ts) step with it.
+ */
+export function aberthCorrection(
+  gr: number,
+  gi: number,
+  x: number,
+  y: number,
+  i: number,
+  zr: ArrayLike<number>,
+  zi: ArrayLike<number>,
+  out: Float64Array,
+): void {
+  let ar = gr;
+  let ai = gi;
+  for (let j = 0; j < zr.length; j++) {
+    if (j === i) continue;
+    const ur = x - zr[j]!;
+    const ui = y - zi[j]!;
+    const inv = 1 / (ur * ur + ui * ui);
+    ar -= ur * inv;
+    ai += ui * inv;
+  }
+  const ad = ar * ar + ai * ai;
+  out[0] = ar / ad;
+  out[1] = -ai / ad;
+}

@@ -5,7 +5,11 @@
  * steps shrink, up to the full 53 bits. Used by the exact stability test, where certified inclusion disks
  * need approximations accurate to the last bit.
  */
+import { aberthCorrection } from './aberth.ts';
 import { exactValues, type ExactPoly } from './exactEval.ts';
+
+/** Aberth's correction of the approximation being moved (aberthCorrection). */
+const correction = new Float64Array(2);
 
 /** Mantissa bits of the points in the first sweeps. */
 const START_BITS = 24;
@@ -49,19 +53,18 @@ export function refineExactly(
         im[i] = y;
         continue; // an exact root
       }
-      let ar = (v.dr * v.pr + v.di * v.pi) / den;
-      let ai = (v.di * v.pr - v.dr * v.pi) / den;
-      for (let j = 0; j < n; j++) {
-        if (j === i) continue;
-        const ur = x - re[j]!;
-        const ui = y - im[j]!;
-        const inv = 1 / (ur * ur + ui * ui);
-        ar -= ur * inv;
-        ai += ui * inv;
-      }
-      const ad = ar * ar + ai * ai;
-      const sr = ar / ad;
-      const si = -ai / ad;
+      aberthCorrection(
+        (v.dr * v.pr + v.di * v.pi) / den,
+        (v.di * v.pr - v.dr * v.pi) / den,
+        x,
+        y,
+        i,
+        re,
+        im,
+        correction,
+      );
+      const sr = correction[0]!;
+      const si = correction[1]!;
       if (!Number.isFinite(sr) || !Number.isFinite(si)) continue;
       re[i] = x - sr;
       im[i] = y - si;

@@ -10,9 +10,13 @@
  * 0.64) and seeded double-pair polynomials of degree 1024. The result is kept only if the set backward error
  * (roots/setBackwardError.ts) falls.
  */
+import { aberthCorrection } from './aberth.ts';
 import { AccurateLogDerivative } from './reseat.ts';
 import { MultiPrecisionEvaluator } from './multiPrecision.ts';
 import { setBackwardError } from './setBackwardError.ts';
+
+/** Aberth's correction of the approximation being moved (aberthCorrection). */
+const correction = new Float64Array(2);
 
 /** What the search needs of an evaluation: p'/p (false where it cannot tell) and log2|p| for comparisons. */
 interface Evaluator {
@@ -116,19 +120,9 @@ function search(
       const x = zr[i]!;
       const y = zi[i]!;
       if (!ev.at(x, y, g)) continue;
-      let ar = g[0]!;
-      let ai = g[1]!;
-      for (let j = 0; j < n; j++) {
-        if (j === i) continue;
-        const ur = x - zr[j]!;
-        const ui = y - zi[j]!;
-        const inv = 1 / (ur * ur + ui * ui);
-        ar -= ur * inv;
-        ai += ui * inv;
-      }
-      const ad = ar * ar + ai * ai;
-      const sr = ar / ad;
-      const si = -ai / ad;
+      aberthCorrection(g[0]!, g[1]!, x, y, i, zr, zi, correction);
+      const sr = correction[0]!;
+      const si = correction[1]!;
       if (!Number.isFinite(sr) || !Number.isFinite(si)) continue;
       zr[i] = x - sr;
       zi[i] = y - si;

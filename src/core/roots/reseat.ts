@@ -15,28 +15,25 @@
  * those roots divided out (implicit deflation) and so finds the missing root wherever it is. The move is
  * kept only if the set backward error (roots/setBackwardError.ts) falls.
  */
+import { aberthCorrection } from './aberth.ts';
 import { compensatedEval } from './compensated.ts';
 import { powerOfTwoScale } from './scaleSafe.ts';
 import { setBackwardError } from './setBackwardError.ts';
+import { twoProd } from '../doubleDoubleArith.ts';
 
-/** Veltkamp's splitting constant 2^27 + 1. */
-const SPLIT = 134217729;
+/** Aberth's correction of the approximation being moved (aberthCorrection). */
+const correction = new Float64Array(2);
 
 /** The derivative's coefficients as double-double (hi, lo): k·c_k exactly (Dekker's product). */
 function derivativeDd(c: Float64Array): { hi: Float64Array; lo: Float64Array } {
   const n = c.length - 1;
   const hi = new Float64Array(Math.max(1, n));
   const lo = new Float64Array(Math.max(1, n));
+  const pair = new Float64Array(2);
   for (let i = 0; i < n; i++) {
-    const a = c[i]!;
-    const b = n - i;
-    const p = a * b;
-    const ah = a * SPLIT - (a * SPLIT - a);
-    const al = a - ah;
-    const bh = b * SPLIT - (b * SPLIT - b);
-    const bl = b - bh;
-    hi[i] = p;
-    lo[i] = al * bl - (p - ah * bh - al * bh - ah * bl);
+    twoProd(c[i]!, n - i, pair);
+    hi[i] = pair[0]!;
+    lo[i] = pair[1]!;
   }
   return { hi, lo };
 }
@@ -245,19 +242,9 @@ export function reseatSharedRoots(c: Float64Array, zr: Float64Array, zi: Float64
       const x: number = zr[j]!;
       const y: number = zi[j]!;
       ev.at(x, y, g);
-      let ar = g[0]!;
-      let ai = g[1]!;
-      for (let m = 0; m < zr.length; m++) {
-        if (m === j) continue;
-        const ur = x - zr[m]!;
-        const ui = y - zi[m]!;
-        const inv = 1 / (ur * ur + ui * ui);
-        ar -= ur * inv;
-        ai += ui * inv;
-      }
-      const ad = ar * ar + ai * ai;
-      const sr = ar / ad;
-      const si = real ? 0 : -ai / ad;
+      aberthCorrection(g[0]!, g[1]!, x, y, j, zr, zi, correction);
+      const sr = correction[0]!;
+      const si = real ? 0 : correction[1]!;
       if (!Number.isFinite(sr) || !Number.isFinite(si)) break;
       zr[j] = x - sr;
       zi[j] = y - si;
