@@ -106,21 +106,16 @@ export class ToneSearchAccumulator {
     const blocks = s.re.length + (s.fill > 0 ? 1 : 0);
     if (blocks < 2) return f0;
     const size = nextPowerOfTwo(4 * blocks);
-    // Interleaved, transformed without copies (an hour-long record needs millions of points here).
-    const z = new Float64Array(2 * size);
-    for (let j = 0; j < s.re.length; j++) {
-      z[2 * j] = s.re[j]!;
-      z[2 * j + 1] = s.im[j]!;
-    }
-    if (s.fill > 0) {
-      z[2 * s.re.length] = s.accRe;
-      z[2 * s.re.length + 1] = s.accIm;
-    }
-    // X[j] = Σ Z_s e^{−2πijs/P}: a tone at f + δ turns Z_s by e^{i2πδsL/fs}, so it peaks at j/P = δL/fs.
-    const X = fftInterleaved(z);
     const hzPerBin = this.sampleRate / (s.block * size);
     const reach = Math.min(size / 2 - 1, Math.floor(s.widthHz / hzPerBin));
-    const mag = (j: number) => Math.hypot(X[2 * ((j + size) % size)]!, X[2 * ((j + size) % size) + 1]!);
+    const mags = paddedMagnitudes(
+      blocks,
+      (k) => (k < s.re.length ? s.re[k]! : s.accRe),
+      (k) => (k < s.re.length ? s.im[k]! : s.accIm),
+      size,
+      reach,
+    );
+    const mag = (j: number) => mags[j + reach]!;
     let best = 0;
     for (let j = -reach; j <= reach; j++) if (mag(j) > mag(best)) best = j;
     let offset = 0;
@@ -132,4 +127,48 @@ export class ToneSearchAccumulator {
     const delta = (best + offset) * hzPerBin;
     return Math.min(this.sampleRate / 2, Math.max(0, f0 + delta));
   }
+}
+
+/**
+ * |X[j]| for −reach ≤ j ≤ reach (at index j + reach), X the `size`-point DFT of the `count` block sums Z_s
+ * zero-padded (X[j] = Σ Z_s e^{−2πijs/size}: a tone at f + δ turns Z_s by e^{i2πδsL/fs}, so it peaks at
+ * j/size = δL/fs). The sums fill at most a quarter of the padded length, so X is computed as four transforms
+ * of a quarter of the length, X[4m + r] = Σ_s (Z_s e^{−2πirs/size}) e^{−2πims/(size/4)}, one after the other
+ * in one buffer: an hour-long record needs transforms of millions of points here, and the padded one at full
+ * length (with its plan's work buffers) took about 4× the memory (256 MB for 4 M points).
+ */
+export function paddedMagnitudes(
+  count: number,
+  re: (k: number) => number,
+  im: (k: number) => number,
+  size: number,
+  reach: number,
+): Float64Array {
+  if (!(size >= 4 && size % 4 === 0 && 4 * count <= size && reach < size / 2))
+    throw new Error(`paddedMagnitudes: ${count} sums, size ${size}, reach ${reach}`);
+  const quarter = size / 4;
+  const mags = new Float64Array(2 * reach + 1);
+  const z = new Float64Array(2 * quarter);
+  for (let r = 0; r < 4; r++) {
+    z.fill(0);
+    for (let k = 0; k < count; k++) {
+      // e^{−2πi·r·k/size}, from the exact residue of r·k (r·k < 4·quarter = size).
+      const t = (-2 * Math.PI * ((r * k) % size)) / size;
+      const c = r === 0 ? 1 : Math.cos(t);
+      const sn = r === 0 ? 0 : Math.sin(t);
+      const a = re(k);
+      const b = im(k);
+      z[2 * k] = a * c - b * sn;
+      z[2 * k + 1] = a * sn + b * c;
+    }
+    const X = quarter > 1 ? fftInterleaved(z) : z;
+    // Bins j = 4m + r within ±reach; bins above size/2 are the negative ones, j − size.
+    for (let m = 0; m < quarter; m++) {
+      let j = 4 * m + r;
+      if (j > size / 2) j -= size;
+      if (j < -reach || j > reach) continue;
+      mags[j + reach] = Math.hypot(X[2 * m]!, X[2 * m + 1]!);
+    }
+  }
+  return mags;
 }

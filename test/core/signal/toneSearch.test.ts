@@ -1,0 +1,59 @@
+import { describe, expect, it } from 'vitest';
+import { paddedMagnitudes } from '../../../src/core/signal/toneSearch.ts';
+
+/** |X[j]| of the zero-padded DFT straight from its definition, X[j] = Σ_s Z_s e^{−2πijs/size} (summed in order). */
+function definition(re: number[], im: number[], size: number, j: number): number {
+  let xr = 0;
+  let xi = 0;
+  for (let s = 0; s < re.length; s++) {
+    const t = (-2 * Math.PI * ((((j * s) % size) + size) % size)) / size;
+    xr += re[s]! * Math.cos(t) - im[s]! * Math.sin(t);
+    xi += re[s]! * Math.sin(t) + im[s]! * Math.cos(t);
+  }
+  return Math.hypot(xr, xi);
+}
+
+describe('the tone search: zero-padded DFT of the block sums as four quarter-length transforms', () => {
+  for (const [count, size, reach] of [
+    [3, 16, 2],
+    [250, 1024, 127],
+    [1000, 4096, 512],
+    [1025, 8192, 4095],
+  ] as const) {
+    it(`${count} sums padded to ${size}, bins ±${reach}: |X[j]| equals the DFT's definition`, () => {
+      // A drifting tone plus a second one and a deterministic wobble: nothing symmetric to hide an error.
+      const re: number[] = [];
+      const im: number[] = [];
+      for (let s = 0; s < count; s++) {
+        const ph = 0.37 * s + 1e-4 * s * s;
+        re.push(Math.cos(ph) + 0.3 * Math.cos(-1.1 * s) + 0.01 * Math.sin(s * s));
+        im.push(Math.sin(ph) + 0.3 * Math.sin(-1.1 * s));
+      }
+      const got = paddedMagnitudes(
+        count,
+        (k) => re[k]!,
+        (k) => im[k]!,
+        size,
+        reach,
+      );
+      expect(got.length).toBe(2 * reach + 1);
+      const scale = re.length * 1.5;
+      const step = Math.max(1, Math.floor(reach / 200));
+      for (let j = -reach; j <= reach; j += j === -reach || j >= reach - step ? 1 : step) {
+        expect(Math.abs(got[j + reach]! - definition(re, im, size, j))).toBeLessThan(1e-11 * scale);
+      }
+    });
+  }
+
+  it('refuses sums that fill more than a quarter of the padded length', () => {
+    expect(() =>
+      paddedMagnitudes(
+        5,
+        () => 1,
+        () => 0,
+        16,
+        2,
+      ),
+    ).toThrow(/5 sums, size 16/);
+  });
+});
