@@ -129,13 +129,18 @@ export class ToneSearchAccumulator {
   }
 }
 
+/** Longest transform the tone search makes (larger padded lengths are folded into several of these). */
+export const TONE_SEARCH_PART = 1 << 18;
+/** Steps between exact re-evaluations of the folding's rotating phasor. */
+const FOLD_RESYNC = 256;
+
 /**
  * |X[j]| for −reach ≤ j ≤ reach (at index j + reach), X the `size`-point DFT of the `count` block sums Z_s
  * zero-padded (X[j] = Σ Z_s e^{−2πijs/size}: a tone at f + δ turns Z_s by e^{i2πδsL/fs}, so it peaks at
- * j/size = δL/fs). The sums fill at most a quarter of the padded length, so X is computed as four transforms
- * of a quarter of the length, X[4m + r] = Σ_s (Z_s e^{−2πirs/size}) e^{−2πims/(size/4)}, one after the other
- * in one buffer: an hour-long record needs transforms of millions of points here, and the padded one at full
- * length (with its plan's work buffers) took about 4× the memory (256 MB for 4 M points).
+ * j/size = δL/fs). Computed as R = size/P transforms of P ≤ `part` points, one after the other in one
+ * buffer: X[Rm + r] = Σ_{t<P} y_t e^{−2πimt/P} with y_t = Σ_q Z_{t+qP} e^{−2πir(t+qP)/size} (the sums folded
+ * modulo P). An hour-long record needs a padded length of millions of points here; one transform at that
+ * length, with its plan's work buffers, took 256 MB for 4 M points, and these take 16 MB.
  */
 export function paddedMagnitudes(
   count: number,
@@ -143,28 +148,41 @@ export function paddedMagnitudes(
   im: (k: number) => number,
   size: number,
   reach: number,
+  part = TONE_SEARCH_PART,
 ): Float64Array {
-  if (!(size >= 4 && size % 4 === 0 && 4 * count <= size && reach < size / 2))
+  if (!(Number.isInteger(size) && size >= 1 && count <= size && reach < size / 2 && part >= 1))
     throw new Error(`paddedMagnitudes: ${count} sums, size ${size}, reach ${reach}`);
-  const quarter = size / 4;
+  let p = size;
+  while (p > part && p % 2 === 0) p /= 2;
+  const parts = size / p;
   const mags = new Float64Array(2 * reach + 1);
-  const z = new Float64Array(2 * quarter);
-  for (let r = 0; r < 4; r++) {
+  const z = new Float64Array(2 * p);
+  for (let r = 0; r < parts; r++) {
     z.fill(0);
-    for (let k = 0; k < count; k++) {
-      // e^{−2πi·r·k/size}, from the exact residue of r·k (r·k < 4·quarter = size).
-      const t = (-2 * Math.PI * ((r * k) % size)) / size;
-      const c = r === 0 ? 1 : Math.cos(t);
-      const sn = r === 0 ? 0 : Math.sin(t);
+    // (c, sn) = e^{−2πi·r·k/size}, turned by e^{−2πir/size} per step and re-evaluated exactly every
+    // FOLD_RESYNC steps from the exact residue of r·k.
+    const cr = Math.cos((-2 * Math.PI * r) / size);
+    const sr = Math.sin((-2 * Math.PI * r) / size);
+    let c = 1;
+    let sn = 0;
+    for (let k = 0, t = 0; k < count; k++, t = t + 1 === p ? 0 : t + 1) {
+      if (k % FOLD_RESYNC === 0) {
+        const angle = (-2 * Math.PI * ((r * k) % size)) / size;
+        c = Math.cos(angle);
+        sn = Math.sin(angle);
+      }
       const a = re(k);
       const b = im(k);
-      z[2 * k] = a * c - b * sn;
-      z[2 * k + 1] = a * sn + b * c;
+      z[2 * t] = z[2 * t]! + a * c - b * sn;
+      z[2 * t + 1] = z[2 * t + 1]! + a * sn + b * c;
+      const next = c * cr - sn * sr;
+      sn = sn * cr + c * sr;
+      c = next;
     }
-    const X = quarter > 1 ? fftInterleaved(z) : z;
-    // Bins j = 4m + r within ±reach; bins above size/2 are the negative ones, j − size.
-    for (let m = 0; m < quarter; m++) {
-      let j = 4 * m + r;
+    const X = p > 1 ? fftInterleaved(z) : z;
+    // Bins j = R·m + r within ±reach; bins above size/2 are the negative ones, j − size.
+    for (let m = 0; m < p; m++) {
+      let j = parts * m + r;
       if (j > size / 2) j -= size;
       if (j < -reach || j > reach) continue;
       mags[j + reach] = Math.hypot(X[2 * m]!, X[2 * m + 1]!);

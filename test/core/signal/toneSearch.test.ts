@@ -13,14 +13,17 @@ function definition(re: number[], im: number[], size: number, j: number): number
   return Math.hypot(xr, xi);
 }
 
-describe('the tone search: zero-padded DFT of the block sums as four quarter-length transforms', () => {
-  for (const [count, size, reach] of [
-    [3, 16, 2],
-    [250, 1024, 127],
-    [1000, 4096, 512],
-    [1025, 8192, 4095],
+describe('the tone search: zero-padded DFT of the block sums, folded into short transforms', () => {
+  for (const [count, size, reach, part] of [
+    [3, 16, 2, 4],
+    [250, 1024, 127, 1 << 18],
+    [250, 1024, 127, 64],
+    [1000, 4096, 512, 256],
+    [1025, 8192, 4095, 1024],
+    [4000, 4096, 2047, 16],
+    [999, 1000, 499, 8],
   ] as const) {
-    it(`${count} sums padded to ${size}, bins ±${reach}: |X[j]| equals the DFT's definition`, () => {
+    it(`${count} sums padded to ${size}, bins ±${reach}, transforms of ≤ ${part}: |X[j]| equals the DFT's definition`, () => {
       // A drifting tone plus a second one and a deterministic wobble: nothing symmetric to hide an error.
       const re: number[] = [];
       const im: number[] = [];
@@ -35,6 +38,7 @@ describe('the tone search: zero-padded DFT of the block sums as four quarter-len
         (k) => im[k]!,
         size,
         reach,
+        part,
       );
       expect(got.length).toBe(2 * reach + 1);
       const scale = re.length * 1.5;
@@ -45,15 +49,15 @@ describe('the tone search: zero-padded DFT of the block sums as four quarter-len
     });
   }
 
-  it('refuses sums that fill more than a quarter of the padded length', () => {
+  it('refuses more sums than the padded length', () => {
     expect(() =>
       paddedMagnitudes(
-        5,
+        17,
         () => 1,
         () => 0,
         16,
         2,
       ),
-    ).toThrow(/5 sums, size 16/);
+    ).toThrow(/17 sums, size 16/);
   });
 });
