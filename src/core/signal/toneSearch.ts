@@ -18,8 +18,10 @@ interface Search {
   omega: number;
   widthHz: number;
   block: number;
-  re: number[];
-  im: number[];
+  /** The finished block sums (the first `count`), grown by doubling unless the length was given. */
+  re: Float64Array;
+  im: Float64Array;
+  count: number;
   /** Running sum of the current block. */
   accRe: number;
   accIm: number;
@@ -39,16 +41,21 @@ export class ToneSearchAccumulator {
     readonly sampleRate: number,
     readonly frequenciesHz: readonly number[],
     widthsHz: readonly number[],
+    /** The record's length when known: the block sums are then allocated once, at their size. */
+    expectedLength?: number,
   ) {
     this.searches = frequenciesHz.map((f, k) => {
       const width = widthsHz[k] ?? 0;
       if (!(width > 0 && f > 0 && f < sampleRate / 2)) return null;
+      const block = Math.max(1, Math.floor((BAND_FRACTION * sampleRate) / width));
+      const capacity = expectedLength ? Math.max(1, Math.floor(expectedLength / block)) : 1024;
       return {
         omega: hzToOmega(f, sampleRate),
         widthHz: width,
-        block: Math.max(1, Math.floor((BAND_FRACTION * sampleRate) / width)),
-        re: [],
-        im: [],
+        block,
+        re: new Float64Array(capacity),
+        im: new Float64Array(capacity),
+        count: 0,
         accRe: 0,
         accIm: 0,
         fill: 0,
@@ -75,8 +82,9 @@ export class ToneSearchAccumulator {
         accRe += v * c;
         accIm -= v * sn;
         if (++fill === s.block) {
-          s.re.push(accRe);
-          s.im.push(accIm);
+          if (s.count === s.re.length) grow(s);
+          s.re[s.count] = accRe;
+          s.im[s.count++] = accIm;
           accRe = 0;
           accIm = 0;
           fill = 0;
@@ -103,15 +111,15 @@ export class ToneSearchAccumulator {
 
   private peak(s: Search): number {
     const f0 = this.frequenciesHz[this.searches.indexOf(s)]!;
-    const blocks = s.re.length + (s.fill > 0 ? 1 : 0);
+    const blocks = s.count + (s.fill > 0 ? 1 : 0);
     if (blocks < 2) return f0;
     const size = nextPowerOfTwo(4 * blocks);
     const hzPerBin = this.sampleRate / (s.block * size);
     const reach = Math.min(size / 2 - 1, Math.floor(s.widthHz / hzPerBin));
     const mags = paddedMagnitudes(
       blocks,
-      (k) => (k < s.re.length ? s.re[k]! : s.accRe),
-      (k) => (k < s.re.length ? s.im[k]! : s.accIm),
+      (k) => (k < s.count ? s.re[k]! : s.accRe),
+      (k) => (k < s.count ? s.im[k]! : s.accIm),
       size,
       reach,
     );
@@ -127,6 +135,16 @@ export class ToneSearchAccumulator {
     const delta = (best + offset) * hzPerBin;
     return Math.min(this.sampleRate / 2, Math.max(0, f0 + delta));
   }
+}
+
+/** Doubles the room for block sums. */
+function grow(s: Search): void {
+  const re = new Float64Array(2 * s.re.length);
+  const im = new Float64Array(2 * s.im.length);
+  re.set(s.re);
+  im.set(s.im);
+  s.re = re;
+  s.im = im;
 }
 
 /** Longest transform the tone search makes (larger padded lengths are folded into several of these). */

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { paddedMagnitudes } from '../../../src/core/signal/toneSearch.ts';
+import { ToneSearchAccumulator, paddedMagnitudes } from '../../../src/core/signal/toneSearch.ts';
 
 /** |X[j]| of the zero-padded DFT straight from its definition, X[j] = Σ_s Z_s e^{−2πijs/size} (summed in order). */
 function definition(re: number[], im: number[], size: number, j: number): number {
@@ -59,5 +59,24 @@ describe('the tone search: zero-padded DFT of the block sums, folded into short 
         2,
       ),
     ).toThrow(/17 sums, size 16/);
+  });
+});
+
+describe('ToneSearchAccumulator block sums', () => {
+  it('grown as fed or allocated from the known length: the same frequency, and the tone found', () => {
+    // 6 kHz asked (±30 Hz searched, blocks of 200 samples): 2000 blocks, beyond the first allocation of 1024.
+    const fs = 48000;
+    const n = 400_000;
+    const x = new Float64Array(n);
+    for (let i = 0; i < n; i++)
+      x[i] = 0.5 * Math.cos((2 * Math.PI * 6012.3 * i) / fs) + 0.01 * Math.sin(i * i);
+    const grown = new ToneSearchAccumulator(fs, [6000], [30]);
+    for (let i = 0; i < n; i += 77_777) grown.push(x.subarray(i, i + 77_777));
+    const sized = new ToneSearchAccumulator(fs, [6000], [30], n);
+    sized.push(x);
+    const [f] = grown.result();
+    expect(sized.result()).toEqual([f]);
+    // The padded bins are fs/(200·8192) = 0.029 Hz apart; the parabola lands well within one.
+    expect(Math.abs(f! - 6012.3)).toBeLessThan(0.03);
   });
 });
