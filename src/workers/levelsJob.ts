@@ -37,7 +37,7 @@ export async function levelsJob(req: LevelsRequest, ctx: JobContext): Promise<{ 
   // Int16-kept samples are converted into this, slice by slice (float-kept ones are read in place).
   const scratch = new Float32Array(Math.min(n, SLICE));
   try {
-    const search = new ToneSearchAccumulator(fs, asked, searchWidths(asked, LEVEL_SEARCH_FRACTION));
+    const search = new ToneSearchAccumulator(fs, asked, searchWidths(asked, LEVEL_SEARCH_FRACTION), n);
     for (let i = 0; i < n; i += SLICE) {
       search.push(samplesSlice(x, i, i + SLICE, scratch));
       await ctx.checkpoint(0.5 * Math.min(1, (i + SLICE) / n));

@@ -1,6 +1,6 @@
 /**
  * Reads a recording (WAV or CSV/TSV) from a Blob in slices, reporting progress after each, and keeps one
- * channel in the smallest exact form (growable.ts: 8/16-bit as Int16 codes, 24-bit and float32 as float32),
+ * channel in the smallest exact form (growable.ts: 8/16-bit as Int16 codes, 24-bit as 3-byte codes, float32 as float32),
  * allocated once from the WAV header's frame count, so a 16-bit hour at 48 kHz takes 0.35 GB, not 2.8 GB of
  * doubling float64 buffers. Runs in the recording worker's
  * load job (the progress callback is where a cancelled load stops); it has no DOM or worker dependency
@@ -8,6 +8,7 @@
  */
 import type { InputError } from '../core/types.ts';
 import {
+  sampleBuffers,
   ACCEPTED_WAV,
   CsvSignalReader,
   WavDecoder,
@@ -136,7 +137,7 @@ async function parseWav(req: ParseRequest, post: ParsePost, step: number): Promi
     startTime: 0,
     notes,
   };
-  post({ type: 'done', signal }, [samples.buffer]);
+  post({ type: 'done', signal }, sampleBuffers(samples) as Transferable[]);
 }
 
 async function parseCsv(req: ParseRequest, post: ParsePost, step: number): Promise<void> {
@@ -165,7 +166,10 @@ async function parseCsv(req: ParseRequest, post: ParsePost, step: number): Promi
   if (note) notes.push(note);
   const rate = timing ? sampleRateOfStep(timing.meanStep) : req.sampleRate;
   if (rate === undefined) {
-    return post({ type: 'needs-sample-rate', samples, notes, name: req.name }, [samples.buffer]);
+    return post(
+      { type: 'needs-sample-rate', samples, notes, name: req.name },
+      sampleBuffers(samples) as Transferable[],
+    );
   }
   const signal: ParsedSignal = {
     name: req.name,
@@ -178,5 +182,5 @@ async function parseCsv(req: ParseRequest, post: ParsePost, step: number): Promi
     startTime: reader.hasTimeColumn ? reader.startTime : 0,
     notes,
   };
-  post({ type: 'done', signal }, [samples.buffer]);
+  post({ type: 'done', signal }, sampleBuffers(samples) as Transferable[]);
 }

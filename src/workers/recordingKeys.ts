@@ -11,8 +11,8 @@ import type { JobContext } from './jobs.ts';
 import type { StoredSamples } from './growable.ts';
 
 /**
- * The recording's samples (full scale 1: a float32 or float64 array, or Int16 codes read as float32 slices
- * through the same `subarray`): the key every recording job reads.
+ * The recording's samples (full scale 1: a float32 or float64 array, or Int16 or 24-bit codes read as
+ * float32 slices through the same `subarray`): the key every recording job reads.
  */
 export const RECORDING_KEY = 'recording';
 /** RecordingInfo of the samples under RECORDING_KEY. */

@@ -9,8 +9,11 @@
 import {
   INT16_FULL_SCALE,
   PYRAMID_BASE,
+  INT24_FULL_SCALE,
   ScaledInt16Samples,
+  ScaledInt24Samples,
   columnExtremes,
+  isScaledInt,
   createSectionFilter,
   runSectionFilter,
   samplesSlice,
@@ -156,7 +159,12 @@ export async function viewJob(
       ? { kind: 'line', values: Float32Array.from(x.subarray(i0, i1)) }
       : x instanceof ScaledInt16Samples
         ? { kind: 'band', ...columnExtremes(info.pyramid, i0, i1, columns, x.codes, 1 / INT16_FULL_SCALE) }
-        : { kind: 'band', ...columnExtremes(info.pyramid, i0, i1, columns, x) };
+        : x instanceof ScaledInt24Samples
+          ? {
+              kind: 'band',
+              ...columnExtremes(info.pyramid, i0, i1, columns, (i) => x.code(i), 1 / INT24_FULL_SCALE),
+            }
+          : { kind: 'band', ...columnExtremes(info.pyramid, i0, i1, columns, x) };
   const stored = ctx.get<StoredOutput>(OUTPUT_KEY);
   let output: ViewResult['output'] = null;
   const outputKept =
@@ -189,7 +197,7 @@ export async function viewJob(
  * which V8 collected late.
  */
 let previewScratch = new Float64Array(0);
-/** The preview's input, converted from Int16 codes (a recording kept so), reused likewise. */
+/** The preview's input, converted from integer codes (a recording kept so), reused likewise. */
 let previewInput = new Float32Array(0);
 
 function previewOf(
@@ -206,7 +214,7 @@ function previewOf(
   const start = i0 - warmup;
   const liveEnd = Math.min(i1, start + reach);
   if (previewScratch.length < liveEnd - start) previewScratch = new Float64Array(liveEnd - start);
-  if (x instanceof ScaledInt16Samples && previewInput.length < liveEnd - start) {
+  if (isScaledInt(x) && previewInput.length < liveEnd - start) {
     previewInput = new Float32Array(liveEnd - start);
   }
   const y = runSectionFilter(

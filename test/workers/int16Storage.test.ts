@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import {
   ScaledInt16Samples,
+  ScaledInt24Samples,
   makeTones,
   writeWav,
   type RecordingSamples,
@@ -34,8 +35,11 @@ const SECTIONS: Section[] = [
   [1, 0, -1, 1, -1.9, 0.95],
 ];
 
-/** The same 16-bit recording stored twice: as read (Int16 codes) and as the Float32Array of its values. */
-async function twoStores(format: 'i16' | 'u8') {
+/**
+ * The same integer recording stored twice: as read (Int16 codes, or 3-byte codes for 24-bit) and as the
+ * Float32Array of its values (how 24-bit recordings were kept before).
+ */
+async function twoStores(format: 'i16' | 'u8' | 'i24') {
   const x = makeTones(N, FS, [
     { frequencyHz: 440, amplitude: 0.4 },
     { frequencyHz: 1234.5, amplitude: 0.3 },
@@ -46,13 +50,35 @@ async function twoStores(format: 'i16' | 'u8') {
   const loaded = await loadFileJob({ id: 7, file: new Blob([bytes as BlobPart]), name: 'r.wav' }, a);
   expect(loaded.value.kind).toBe('done');
   const stored = a.get<RecordingSamples>(RECORDING_KEY)!;
-  expect(stored).toBeInstanceOf(ScaledInt16Samples);
+  expect(stored).toBeInstanceOf(format === 'i24' ? ScaledInt24Samples : ScaledInt16Samples);
   const b = context();
   b.set(PENDING_KEY, stored.subarray(0, stored.length));
   await adoptPendingJob({ id: 7, sampleRate: FS }, b);
   expect(b.get(RECORDING_KEY)).toBeInstanceOf(Float32Array);
   return { a, b };
 }
+
+describe('24-bit recordings kept as 3-byte codes', () => {
+  it('read back as code/8388608 for every code, the extremes and the byte boundaries included', async () => {
+    // Codes chosen by hand: full-scale ends, ±1, and values whose low byte is 0, 255, or carries into the high part.
+    const codes = [-8388608, 8388607, -1, 1, 0, -256, 255, 256, -257, 0x7fff00, -0x7fff01, 123456, -654321];
+    const x = Float64Array.from(codes, (c) => c / 8388608);
+    const { bytes } = writeWav({ format: 'i24', sampleRate: FS, channels: [x] });
+    const c = context();
+    await loadFileJob({ id: 1, file: new Blob([bytes as BlobPart]), name: 'a.wav' }, c);
+    const s = c.get<ScaledInt24Samples>(RECORDING_KEY)!;
+    expect(s).toBeInstanceOf(ScaledInt24Samples);
+    expect(s.high.BYTES_PER_ELEMENT + s.low.BYTES_PER_ELEMENT).toBe(3);
+    const got = s.subarray(0);
+    expect(got).toBeInstanceOf(Float32Array);
+    for (let i = 0; i < codes.length; i++) {
+      expect(s.code(i)).toBe(codes[i]);
+      expect(got[i]! * 8388608).toBe(codes[i]);
+    }
+    expect(s.subarray(10, 5000).length).toBe(codes.length - 10);
+    expect(s.subarray(5, 3).length).toBe(0);
+  });
+});
 
 describe('8- and 16-bit recordings kept as Int16 codes', () => {
   it('read back as code/32768, the values the WAV holds (8-bit as (byte − 128)/128)', async () => {
@@ -70,7 +96,7 @@ describe('8- and 16-bit recordings kept as Int16 codes', () => {
     expect(s.subarray(5, 3).length).toBe(0);
   });
 
-  for (const format of ['i16', 'u8'] as const) {
+  for (const format of ['i16', 'u8', 'i24'] as const) {
     it(`every recording job gives bit for bit the Float32 store's answer (${format})`, async () => {
       const { a, b } = await twoStores(format);
       // The pyramid built while loading.

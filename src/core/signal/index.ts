@@ -20,3 +20,4 @@ export * from './toneFit.ts';
 export * from './toneSearch.ts';
 export * from './pyramid.ts';
 export * from './scaledInt16.ts';
+export * from './scaledInt24.ts';

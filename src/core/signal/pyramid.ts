@@ -23,6 +23,9 @@ export interface MinMaxPyramid {
   levels: PyramidLevel[];
 }
 
+/** The raw samples beside a pyramid: an array, or a function giving sample i. */
+export type RawSamples = ArrayLike<number> | ((i: number) => number);
+
 /** Builds a pyramid from samples pushed in order, in pieces of any size, for a signal of known length. */
 export class PyramidBuilder {
   private readonly base: PyramidLevel;
@@ -100,7 +103,7 @@ export function rangeExtremes(
   p: MinMaxPyramid,
   a: number,
   b: number,
-  raw: ArrayLike<number> | null = null,
+  raw: RawSamples | null = null,
   rawScale = 1,
 ): [number, number] {
   let lo = Infinity;
@@ -111,15 +114,16 @@ export function rangeExtremes(
   let ka: number;
   let kb: number;
   if (raw) {
+    const read = typeof raw === 'function' ? raw : (i: number) => raw[i]!;
     const aa = Math.min(b, Math.ceil(a / PYRAMID_BASE) * PYRAMID_BASE);
     const bb = Math.max(aa, Math.floor(b / PYRAMID_BASE) * PYRAMID_BASE);
     for (let i = a; i < aa; i++) {
-      const v = raw[i]!;
+      const v = read(i);
       if (v < lo) lo = v;
       if (v > hi) hi = v;
     }
     for (let i = bb; i < b; i++) {
-      const v = raw[i]!;
+      const v = read(i);
       if (v < lo) lo = v;
       if (v > hi) hi = v;
     }
@@ -165,7 +169,7 @@ export function columnExtremes(
   i0: number,
   i1: number,
   columns: number,
-  raw: ArrayLike<number> | null = null,
+  raw: RawSamples | null = null,
   rawScale = 1,
 ): ColumnExtremes {
   const min = new Float32Array(columns);

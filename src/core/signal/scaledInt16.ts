@@ -5,6 +5,8 @@
  * recording would give it; an hour at 48 kHz takes 0.35 GB instead of 0.7 GB.
  */
 
+import { ScaledInt24Samples } from './scaledInt24.ts';
+
 /** Full scale of the codes: the value is code / INT16_FULL_SCALE. */
 export const INT16_FULL_SCALE = 32768;
 
@@ -20,6 +22,11 @@ export class ScaledInt16Samples {
 
   get buffer(): ArrayBufferLike {
     return this.codes.buffer;
+  }
+
+  /** The buffers holding the codes (to transfer them). */
+  get buffers(): ArrayBufferLike[] {
+    return [this.codes.buffer];
   }
 
   /**
@@ -38,7 +45,20 @@ export class ScaledInt16Samples {
 }
 
 /** Any of the forms a recording is kept in (values at full scale 1). */
-export type RecordingSamples = Float32Array | Float64Array | ScaledInt16Samples;
+export type RecordingSamples = Float32Array | Float64Array | ScaledInt16Samples | ScaledInt24Samples;
+
+/** Samples kept as integer codes (read as float32 slices), not as a float array. */
+export type ScaledIntSamples = ScaledInt16Samples | ScaledInt24Samples;
+
+/** Whether the recording is kept as integer codes. */
+export function isScaledInt(x: RecordingSamples): x is ScaledIntSamples {
+  return x instanceof ScaledInt16Samples || x instanceof ScaledInt24Samples;
+}
+
+/** The buffers holding a recording's samples (to transfer them). */
+export function sampleBuffers(x: RecordingSamples): ArrayBufferLike[] {
+  return isScaledInt(x) ? x.buffers : [x.buffer];
+}
 
 /**
  * The values [a, b) of a recording as a typed array: a view for float storage, converted for integer
@@ -50,7 +70,7 @@ export function samplesSlice(
   b: number,
   scratch?: Float32Array,
 ): Float32Array | Float64Array {
-  if (!(x instanceof ScaledInt16Samples)) return x.subarray(a, b);
+  if (!isScaledInt(x)) return x.subarray(a, b);
   const n = Math.max(0, Math.min(b, x.length) - Math.max(0, a));
   return x.subarray(a, b, scratch && scratch.length >= n ? scratch : undefined);
 }
