@@ -100,6 +100,7 @@ export function findMultipleRoots(
   let allowance = NaN;
   // Verified pairs whose merge cannot pass the set test (HOPELESS_RATIO): they still count as candidates.
   const doomedIds = new Set<number>();
+  const leadOf = (r: Root, id: number) => (r.im < 0 && id > 0 && roots[id - 1]!.im === -r.im ? id - 1 : id);
   for (const rho of CLUSTER_RADII) {
     for (let i = 0; i < n; i++) {
       if (group[i]! >= 0 || im[i]! < 0 || neighbours[i]!.length === 0) continue;
@@ -153,6 +154,10 @@ export function findMultipleRoots(
         group[k] = id;
         if (!real) group[mate[k]!] = id + 1;
       }
+      // With a doomed pair among more than SEPARATE_CHECKS candidates, keepReproducing can keep nothing
+      // (the all-at-once set contains the doomed merge, and one-by-one checks are not tried): stop here.
+      if (doomedIds.size > 0 && new Set(roots.map(leadOf)).size > SEPARATE_CHECKS)
+        return { group: new Int32Array(n).fill(-1), clusters: [] };
     }
   }
   return keepReproducing(c, re, im, group, roots, separate, doomedIds);
