@@ -1,6 +1,6 @@
 /**
  * Browser memory with a long recording (not a test): writes a 1-hour 48 kHz 16-bit WAV (invented hum and
- * pink noise, 346 MB; PW_MEMORY_FORMAT=i24 or f32 writes 24-bit integer or 32-bit float samples instead), serves the built page, and reads the proportional set size (PSS: shared pages split
+ * pink noise, 346 MB; PW_MEMORY_FORMAT=i24, i32 or f32 writes 24-bit integer, 32-bit integer or 32-bit float samples instead), serves the built page, and reads the proportional set size (PSS: shared pages split
  * between the processes sharing them) summed over every Chromium process, from /proc, while the page reads
  * the file, filters it, computes its spectra and follows a root drag. Reports the figures above the empty
  * page (the same page before the file), and the peak sampled every 100 ms; and the gaps between animation
@@ -23,11 +23,11 @@ import { cell, median } from './timing.ts';
 const ROOT = fileURLToPath(new URL('..', import.meta.url));
 const FS = 48000;
 const MINUTES = Number(process.env.PW_MEMORY_MINUTES ?? 60);
-/** The WAV's sample format: 'i16' (default), 'i24' or 'f32'. */
-const FORMAT = (process.env.PW_MEMORY_FORMAT ?? 'i16') as 'i16' | 'i24' | 'f32';
-if (!['i16', 'i24', 'f32'].includes(FORMAT))
-  throw new Error(`bench: PW_MEMORY_FORMAT ${FORMAT}; one of i16, i24, f32`);
-const FORMAT_NAME = { i16: '16-bit', i24: '24-bit', f32: '32-bit float' }[FORMAT];
+/** The WAV's sample format: 'i16' (default), 'i24', 'i32' or 'f32'. */
+const FORMAT = (process.env.PW_MEMORY_FORMAT ?? 'i16') as 'i16' | 'i24' | 'i32' | 'f32';
+if (!['i16', 'i24', 'i32', 'f32'].includes(FORMAT))
+  throw new Error(`bench: PW_MEMORY_FORMAT ${FORMAT}; one of i16, i24, i32, f32`);
+const FORMAT_NAME = { i16: '16-bit', i24: '24-bit', i32: '32-bit integer', f32: '32-bit float' }[FORMAT];
 const PORT = Number(process.env.PW_BENCH_PORT ?? 4412);
 
 /** Writes the WAV a minute at a time (the whole signal never exists in memory here). */

@@ -10,6 +10,7 @@ import {
   ToneSearchAccumulator,
   levelReadings,
   samplesSlice,
+  sliceScratch,
   searchWidths,
   settleFound,
   type LevelReport,
@@ -35,7 +36,7 @@ export async function levelsJob(req: LevelsRequest, ctx: JobContext): Promise<{ 
   const n = x.length;
   const asked = req.frequenciesHz;
   // Int16-kept samples are converted into this, slice by slice (float-kept ones are read in place).
-  const scratch = new Float32Array(Math.min(n, SLICE));
+  const scratch = sliceScratch(x, Math.min(n, SLICE));
   try {
     const search = new ToneSearchAccumulator(fs, asked, searchWidths(asked, LEVEL_SEARCH_FRACTION), n);
     for (let i = 0; i < n; i += SLICE) {

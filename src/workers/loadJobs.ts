@@ -8,6 +8,7 @@ import {
   PyramidBuilder,
   generateSum,
   samplesSlice,
+  sliceScratch,
   type GeneratorSpec,
   type ParsedSignal,
   type ParsedSignalInfo,
@@ -46,7 +47,7 @@ async function keep(
   to: number,
 ): Promise<void> {
   const builder = new PyramidBuilder(samples.length);
-  const scratch = new Float32Array(Math.min(samples.length, PYRAMID_SLICE));
+  const scratch = sliceScratch(samples, Math.min(samples.length, PYRAMID_SLICE));
   for (let i = 0; i < samples.length; i += PYRAMID_SLICE) {
     builder.push(samplesSlice(samples, i, i + PYRAMID_SLICE, scratch));
     await ctx.checkpoint(from + ((to - from) * Math.min(samples.length, i + PYRAMID_SLICE)) / samples.length);

@@ -11,6 +11,7 @@ import {
   createSectionFilter,
   runSectionFilter,
   samplesSlice,
+  sliceScratch,
   welchOptionsFor,
   type FitWeighting,
   type ToneEstimate,
@@ -75,7 +76,7 @@ export async function outputJob(
     ? new ToneFitAccumulator(info.sampleRate, req.tones.frequenciesHz, n, req.tones.weighting)
     : null;
   const y = new Float64Array(OUTPUT_STATE_INTERVAL);
-  const scratch = new Float32Array(OUTPUT_STATE_INTERVAL);
+  const scratch = sliceScratch(x, OUTPUT_STATE_INTERVAL);
   for (let k = 0, start = 0; start < n; k++, start += OUTPUT_STATE_INTERVAL) {
     states?.set(filter.state, k * width);
     const end = Math.min(n, start + OUTPUT_STATE_INTERVAL);

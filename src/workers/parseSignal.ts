@@ -1,6 +1,6 @@
 /**
  * Reads a recording (WAV or CSV/TSV) from a Blob in slices, reporting progress after each, and keeps one
- * channel in the smallest exact form (growable.ts: 8/16-bit as Int16 codes, 24-bit as 3-byte codes, float32 as float32),
+ * channel in the smallest exact form (growable.ts: 8/16-bit as Int16 codes, 24-bit as 3-byte codes, 32-bit integers as Int32 codes, float32 as float32),
  * allocated once from the WAV header's frame count, so a 16-bit hour at 48 kHz takes 0.35 GB, not 2.8 GB of
  * doubling float64 buffers. Runs in the recording worker's
  * load job (the progress callback is where a cancelled load stops); it has no DOM or worker dependency

@@ -12,7 +12,8 @@ import type { StoredSamples } from './growable.ts';
 
 /**
  * The recording's samples (full scale 1: a float32 or float64 array, or Int16 or 24-bit codes read as
- * float32 slices through the same `subarray`): the key every recording job reads.
+ * float32 slices, or Int32 codes read as float64 slices, through the same `subarray`): the key every
+ * recording job reads.
  */
 export const RECORDING_KEY = 'recording';
 /** RecordingInfo of the samples under RECORDING_KEY. */

@@ -1,5 +1,5 @@
 /** The recording's own Welch spectrum (before the filter), in slices with progress, once per setting. */
-import { samplesSlice, type WelchResult } from '../core/signal/index.ts';
+import { samplesSlice, sliceScratch, type WelchResult } from '../core/signal/index.ts';
 import type { JobContext } from './jobs.ts';
 import { spectrumAccumulator, type SpectrumRequest } from './outputJob.ts';
 import { recordingOf } from './recordingKeys.ts';
@@ -14,7 +14,7 @@ export async function inputSpectrumJob(
 ): Promise<{ value: WelchResult; transfer: Transferable[] }> {
   const { samples: x, info } = recordingOf(ctx, req.id);
   const acc = spectrumAccumulator(x.length, info.sampleRate, req);
-  const scratch = new Float32Array(Math.min(x.length, SLICE));
+  const scratch = sliceScratch(x, Math.min(x.length, SLICE));
   for (let i = 0; i < x.length; i += SLICE) {
     acc.push(samplesSlice(x, i, i + SLICE, scratch));
     await ctx.checkpoint(Math.min(1, (i + SLICE) / x.length));

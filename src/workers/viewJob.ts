@@ -10,13 +10,16 @@ import {
   INT16_FULL_SCALE,
   PYRAMID_BASE,
   INT24_FULL_SCALE,
+  INT32_FULL_SCALE,
   ScaledInt16Samples,
   ScaledInt24Samples,
+  ScaledInt32Samples,
   columnExtremes,
   isScaledInt,
   createSectionFilter,
   runSectionFilter,
   samplesSlice,
+  sliceScratch,
   type RecordingSamples,
 } from '../core/signal/index.ts';
 import type { Section } from '../core/types.ts';
@@ -164,7 +167,12 @@ export async function viewJob(
               kind: 'band',
               ...columnExtremes(info.pyramid, i0, i1, columns, (i) => x.code(i), 1 / INT24_FULL_SCALE),
             }
-          : { kind: 'band', ...columnExtremes(info.pyramid, i0, i1, columns, x) };
+          : x instanceof ScaledInt32Samples
+            ? {
+                kind: 'band',
+                ...columnExtremes(info.pyramid, i0, i1, columns, x.codes, 1 / INT32_FULL_SCALE),
+              }
+            : { kind: 'band', ...columnExtremes(info.pyramid, i0, i1, columns, x) };
   const stored = ctx.get<StoredOutput>(OUTPUT_KEY);
   let output: ViewResult['output'] = null;
   const outputKept =
@@ -197,8 +205,11 @@ export async function viewJob(
  * which V8 collected late.
  */
 let previewScratch = new Float64Array(0);
-/** The preview's input, converted from integer codes (a recording kept so), reused likewise. */
-let previewInput = new Float32Array(0);
+/**
+ * The preview's input, converted from integer codes (a recording kept so), reused likewise (float64 for
+ * 32-bit codes, float32 for the others: see sliceScratch).
+ */
+let previewInput: Float32Array | Float64Array = new Float32Array(0);
 
 function previewOf(
   p: { version: number; sections: Section[] },
@@ -214,8 +225,12 @@ function previewOf(
   const start = i0 - warmup;
   const liveEnd = Math.min(i1, start + reach);
   if (previewScratch.length < liveEnd - start) previewScratch = new Float64Array(liveEnd - start);
-  if (isScaledInt(x) && previewInput.length < liveEnd - start) {
-    previewInput = new Float32Array(liveEnd - start);
+  if (
+    isScaledInt(x) &&
+    (previewInput.length < liveEnd - start ||
+      previewInput instanceof Float64Array !== x instanceof ScaledInt32Samples)
+  ) {
+    previewInput = sliceScratch(x, liveEnd - start);
   }
   const y = runSectionFilter(
     createSectionFilter(p.sections),

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import {
   ScaledInt16Samples,
   ScaledInt24Samples,
+  ScaledInt32Samples,
   makeTones,
   writeWav,
   type RecordingSamples,
@@ -36,10 +37,11 @@ const SECTIONS: Section[] = [
 ];
 
 /**
- * The same integer recording stored twice: as read (Int16 codes, or 3-byte codes for 24-bit) and as the
- * Float32Array of its values (how 24-bit recordings were kept before).
+ * The same integer recording stored twice: as read (Int16 codes, 3-byte codes for 24-bit, Int32 codes for
+ * 32-bit) and as the float array of its values (how 24-bit recordings were kept before: Float32Array; for
+ * 32-bit, whose codes float32 cannot hold, Float64Array, as they were kept before).
  */
-async function twoStores(format: 'i16' | 'u8' | 'i24') {
+async function twoStores(format: 'i16' | 'u8' | 'i24' | 'i32') {
   const x = makeTones(N, FS, [
     { frequencyHz: 440, amplitude: 0.4 },
     { frequencyHz: 1234.5, amplitude: 0.3 },
@@ -50,11 +52,20 @@ async function twoStores(format: 'i16' | 'u8' | 'i24') {
   const loaded = await loadFileJob({ id: 7, file: new Blob([bytes as BlobPart]), name: 'r.wav' }, a);
   expect(loaded.value.kind).toBe('done');
   const stored = a.get<RecordingSamples>(RECORDING_KEY)!;
-  expect(stored).toBeInstanceOf(format === 'i24' ? ScaledInt24Samples : ScaledInt16Samples);
+  expect(stored).toBeInstanceOf(
+    format === 'i24' ? ScaledInt24Samples : format === 'i32' ? ScaledInt32Samples : ScaledInt16Samples,
+  );
+  const values = stored.subarray(0, stored.length);
+  if (format === 'i32') {
+    // The recording really uses 32-bit resolution: most of its values are not float32 numbers.
+    let beyondFloat32 = 0;
+    for (const v of values) if (Math.fround(v) !== v) beyondFloat32++;
+    expect(beyondFloat32).toBeGreaterThan(N / 2);
+  }
   const b = context();
-  b.set(PENDING_KEY, stored.subarray(0, stored.length));
+  b.set(PENDING_KEY, values);
   await adoptPendingJob({ id: 7, sampleRate: FS }, b);
-  expect(b.get(RECORDING_KEY)).toBeInstanceOf(Float32Array);
+  expect(b.get(RECORDING_KEY)).toBeInstanceOf(format === 'i32' ? Float64Array : Float32Array);
   return { a, b };
 }
 
@@ -80,6 +91,30 @@ describe('24-bit recordings kept as 3-byte codes', () => {
   });
 });
 
+describe('32-bit integer recordings kept as Int32 codes', () => {
+  it('read back as float64 code/2147483648 for every code, the full-scale ends and the low bits included', async () => {
+    // Codes chosen by hand: full-scale ends, ±1, and codes whose low 8 bits a float32 would lose.
+    const codes = [
+      -2147483648, 2147483647, -1, 1, 0, 0x7fffff01, -0x7fffff01, 16777217, -123456789, 987654321,
+    ];
+    const x = Float64Array.from(codes, (c) => c / 2147483648);
+    const { bytes } = writeWav({ format: 'i32', sampleRate: FS, channels: [x] });
+    const c = context();
+    await loadFileJob({ id: 1, file: new Blob([bytes as BlobPart]), name: 'a.wav' }, c);
+    const s = c.get<ScaledInt32Samples>(RECORDING_KEY)!;
+    expect(s).toBeInstanceOf(ScaledInt32Samples);
+    expect(s.codes.BYTES_PER_ELEMENT).toBe(4);
+    const got = s.subarray(0);
+    expect(got).toBeInstanceOf(Float64Array);
+    for (let i = 0; i < codes.length; i++) {
+      expect(s.codes[i]).toBe(codes[i]);
+      expect(got[i]! * 2147483648).toBe(codes[i]);
+    }
+    expect(s.subarray(8, 5000).length).toBe(codes.length - 8);
+    expect(s.subarray(5, 3).length).toBe(0);
+  });
+});
+
 describe('8- and 16-bit recordings kept as Int16 codes', () => {
   it('read back as code/32768, the values the WAV holds (8-bit as (byte − 128)/128)', async () => {
     // The codes written by the WAV writer are round(x·32768) (sampleFormat.ts); reading gives code/32768.
@@ -96,8 +131,8 @@ describe('8- and 16-bit recordings kept as Int16 codes', () => {
     expect(s.subarray(5, 3).length).toBe(0);
   });
 
-  for (const format of ['i16', 'u8', 'i24'] as const) {
-    it(`every recording job gives bit for bit the Float32 store's answer (${format})`, async () => {
+  for (const format of ['i16', 'u8', 'i24', 'i32'] as const) {
+    it(`every recording job gives bit for bit the float store's answer (${format})`, async () => {
       const { a, b } = await twoStores(format);
       // The pyramid built while loading.
       expect(a.get(RECORDING_INFO_KEY)).toEqual(b.get(RECORDING_INFO_KEY));

@@ -21,3 +21,4 @@ export * from './toneSearch.ts';
 export * from './pyramid.ts';
 export * from './scaledInt16.ts';
 export * from './scaledInt24.ts';
+export * from './scaledInt32.ts';

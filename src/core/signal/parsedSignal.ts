@@ -11,8 +11,8 @@ export interface ParsedSignal {
   sampleRate: number;
   /**
    * The channel being filtered, as numbers (WAV integers scaled to [-1, 1)): 8- and 16-bit WAV as their
-   * Int16 codes (scaledInt16.ts, a quarter of float64), 24-bit WAV as 3-byte codes (scaledInt24.ts), float32
-   * WAV as float32 (exact), the rest float64.
+   * Int16 codes (scaledInt16.ts, a quarter of float64), 24-bit WAV as 3-byte codes (scaledInt24.ts), 32-bit
+   * integer WAV as Int32 codes (scaledInt32.ts), float32 WAV as float32 (exact), the rest float64.
    */
   samples: RecordingSamples;
   /** 0-based channel kept and how many the file has (1 for CSV). */

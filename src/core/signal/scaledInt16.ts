@@ -6,6 +6,7 @@
  */
 
 import { ScaledInt24Samples } from './scaledInt24.ts';
+import { ScaledInt32Samples } from './scaledInt32.ts';
 
 /** Full scale of the codes: the value is code / INT16_FULL_SCALE. */
 export const INT16_FULL_SCALE = 32768;
@@ -45,14 +46,17 @@ export class ScaledInt16Samples {
 }
 
 /** Any of the forms a recording is kept in (values at full scale 1). */
-export type RecordingSamples = Float32Array | Float64Array | ScaledInt16Samples | ScaledInt24Samples;
+export type RecordingSamples =
+  Float32Array | Float64Array | ScaledInt16Samples | ScaledInt24Samples | ScaledInt32Samples;
 
-/** Samples kept as integer codes (read as float32 slices), not as a float array. */
-export type ScaledIntSamples = ScaledInt16Samples | ScaledInt24Samples;
+/** Samples kept as integer codes (read as float32 slices, or float64 for 32-bit codes), not as a float array. */
+export type ScaledIntSamples = ScaledInt16Samples | ScaledInt24Samples | ScaledInt32Samples;
 
 /** Whether the recording is kept as integer codes. */
 export function isScaledInt(x: RecordingSamples): x is ScaledIntSamples {
-  return x instanceof ScaledInt16Samples || x instanceof ScaledInt24Samples;
+  return (
+    x instanceof ScaledInt16Samples || x instanceof ScaledInt24Samples || x instanceof ScaledInt32Samples
+  );
 }
 
 /** The buffers holding a recording's samples (to transfer them). */
@@ -61,16 +65,28 @@ export function sampleBuffers(x: RecordingSamples): ArrayBufferLike[] {
 }
 
 /**
+ * A scratch array of n values for samplesSlice on this recording: float64 for 32-bit codes (float32 cannot
+ * hold them), float32 otherwise.
+ */
+export function sliceScratch(x: RecordingSamples, n: number): Float32Array | Float64Array {
+  return x instanceof ScaledInt32Samples ? new Float64Array(n) : new Float32Array(n);
+}
+
+/**
  * The values [a, b) of a recording as a typed array: a view for float storage, converted for integer
- * storage (into `scratch` when given and long enough, so repeated reads make no garbage).
+ * storage (into `scratch` when given, long enough and of the slice's type — see sliceScratch — so repeated
+ * reads make no garbage).
  */
 export function samplesSlice(
   x: RecordingSamples,
   a: number,
   b: number,
-  scratch?: Float32Array,
+  scratch?: Float32Array | Float64Array,
 ): Float32Array | Float64Array {
   if (!isScaledInt(x)) return x.subarray(a, b);
   const n = Math.max(0, Math.min(b, x.length) - Math.max(0, a));
-  return x.subarray(a, b, scratch && scratch.length >= n ? scratch : undefined);
+  const room = scratch && scratch.length >= n ? scratch : undefined;
+  if (x instanceof ScaledInt32Samples)
+    return x.subarray(a, b, room instanceof Float64Array ? room : undefined);
+  return x.subarray(a, b, room instanceof Float32Array ? room : undefined);
 }
