@@ -26,9 +26,12 @@ export function firLowPass(n: number): Float64Array {
   return h.map((v) => v / sum);
 }
 
-/** Denominator of an order-n digital Butterworth low-pass, cutoff 0.2 of Nyquist, by the bilinear transform. */
-export function butterworth(n: number): Float64Array {
-  const wc = Math.tan((Math.PI * 0.2) / 2);
+/**
+ * Denominator of an order-n digital Butterworth low-pass by the bilinear transform, multiplied out (cutoff as a
+ * fraction of Nyquist; the table's family uses 0.2).
+ */
+export function butterworth(n: number, cutoff = 0.2): Float64Array {
+  const wc = Math.tan((Math.PI * cutoff) / 2);
   const poles: Root[] = [];
   for (let k = 0; k < n; k++) {
     const th = (Math.PI * (2 * k + n + 1)) / (2 * n);

@@ -9,6 +9,7 @@ import { polyFromRoots } from '../src/core/poly.ts';
 import type { Root } from '../src/core/types.ts';
 import { stabilityOfCoefficients } from '../src/core/stability/coefficients.ts';
 import { mulberry32 } from '../src/core/random.ts';
+import { butterworth } from './rootFamilies.ts';
 
 /** n/2 seeded conjugate pairs with radii in [0.5, 0.99]: a stable denominator, multiplied out. */
 function stableRandom(n: number): Float64Array {
@@ -29,24 +30,6 @@ function gaussian(n: number): Float64Array {
     { length: n + 1 },
     () => Math.sqrt(-2 * Math.log(1 - u())) * Math.cos(2 * Math.PI * u()),
   );
-}
-
-/** Digital Butterworth low-pass denominator, multiplied out (cut-off as a fraction of Nyquist). */
-function butterworth(n: number, cutoff: number): Float64Array {
-  const wc = Math.tan((Math.PI * cutoff) / 2);
-  const poles: Root[] = [];
-  for (let k = 0; k < n; k++) {
-    const th = (Math.PI * (2 * k + n + 1)) / (2 * n);
-    const sr = wc * Math.cos(th);
-    const si = wc * Math.sin(th);
-    if (si < -1e-12) continue;
-    const dr = 1 - sr;
-    const dd = dr * dr + si * si;
-    const zr = ((1 + sr) * dr - si * si) / dd;
-    const zi = (si * dr + (1 + sr) * si) / dd;
-    poles.push({ re: zr, im: Math.abs(zi) < 1e-12 ? 0 : zi, multiplicity: 1 });
-  }
-  return polyFromRoots(poles);
 }
 
 /** z^n − 1: n roots exactly on the unit circle (marginal). */
