@@ -13,7 +13,7 @@
 import { compensatedEvalWithDerivative } from './compensated.ts';
 import { logDerivative, relativeResidual } from './horner.ts';
 import { freezeLevel } from './aberth.ts';
-import { powerOfTwoScale } from './scaleSafe.ts';
+import { logDerivativeFromValues } from './scaleSafe.ts';
 
 /** Polish a root when its condition number times ε (its forward-error estimate, relative) exceeds this. */
 export const POLISH_FORWARD_ERROR = 1e-14;
@@ -55,23 +55,18 @@ class CompensatedEvaluator {
     const b = this.v[4]!;
     // p and p' are scaled by one power of two (exact) so that |p|² neither underflows nor overflows: at degree
     // 1024, |p| near a root close to the origin is about 1e-182 and |p|² is 0 in double.
-    const sc = powerOfTwoScale(this.v[0]!, this.v[1]!);
-    const pr = this.v[0]! * sc;
-    const pi = this.v[1]! * sc;
-    const pd = pr * pr + pi * pi;
-    out[2] = b === 0 ? 0 : Math.sqrt(pd) / sc / b;
-    const hr = (this.v[2]! * sc * pr + this.v[3]! * sc * pi) / pd;
-    const hi = (this.v[3]! * sc * pr - this.v[2]! * sc * pi) / pd;
-    if (inside) {
-      out[0] = hr;
-      out[1] = hi;
-      return;
-    }
-    // p'/p = w (n − w h)
-    const tr = n - (ux * hr - uy * hi);
-    const ti = -(ux * hi + uy * hr);
-    out[0] = ux * tr - uy * ti;
-    out[1] = ux * ti + uy * tr;
+    const size = logDerivativeFromValues(
+      this.v[0]!,
+      this.v[1]!,
+      this.v[2]!,
+      this.v[3]!,
+      inside,
+      ux,
+      uy,
+      n,
+      out,
+    );
+    out[2] = b === 0 ? 0 : size / b;
   }
 }
 

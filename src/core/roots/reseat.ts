@@ -17,7 +17,7 @@
  */
 import { aberthCorrection } from './aberth.ts';
 import { compensatedEval } from './compensated.ts';
-import { powerOfTwoScale } from './scaleSafe.ts';
+import { logDerivativeFromValues } from './scaleSafe.ts';
 import { setBackwardError } from './setBackwardError.ts';
 import { twoProd } from '../doubleDoubleArith.ts';
 
@@ -142,24 +142,7 @@ export class AccurateLogDerivative {
     compensatedEval(inside ? this.c : this.rev, ux, uy, this.v);
     const d = inside ? this.d : this.dRev;
     compensatedEval(d.hi, ux, uy, this.w, d.lo);
-    const s = powerOfTwoScale(this.v[0]!, this.v[1]!);
-    const pr = this.v[0]! * s;
-    const pi = this.v[1]! * s;
-    const dr = this.w[0]! * s;
-    const di = this.w[1]! * s;
-    const den = pr * pr + pi * pi;
-    const hr = (dr * pr + di * pi) / den;
-    const hi = (di * pr - dr * pi) / den;
-    if (inside) {
-      out[0] = hr;
-      out[1] = hi;
-      return;
-    }
-    // p'/p = w (n − w q'/q) with w = 1/z
-    const tr = n - (ux * hr - uy * hi);
-    const ti = -(ux * hi + uy * hr);
-    out[0] = ux * tr - uy * ti;
-    out[1] = ux * ti + uy * tr;
+    logDerivativeFromValues(this.v[0]!, this.v[1]!, this.w[0]!, this.w[1]!, inside, ux, uy, n, out);
   }
 }
 

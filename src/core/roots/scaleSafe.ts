@@ -18,3 +18,38 @@ export function powerOfTwoScale(a: number, b: number): number {
   const k = Math.floor(Math.log2(m));
   return 2 ** -Math.max(-LIMIT, Math.min(LIMIT, k));
 }
+
+/**
+ * p'/p at z into out[0], out[1], from p = pr + j·pi and p' = dr + j·di, both scaled by one power of two first
+ * so |p|² neither underflows nor overflows. Where |z| ≤ 1 (`inside`) they are the polynomial's own values at
+ * z; otherwise they are the reversed polynomial q(w) = w^n p(1/w) and its derivative at w = ux + j·uy = 1/z,
+ * and p'/p = w (n − w q'/q). Returns |p| (or |q|), from the same scaled parts.
+ */
+export function logDerivativeFromValues(
+  pr: number,
+  pi: number,
+  dr: number,
+  di: number,
+  inside: boolean,
+  ux: number,
+  uy: number,
+  n: number,
+  out: Float64Array,
+): number {
+  const s = powerOfTwoScale(pr, pi);
+  const sr = pr * s;
+  const si = pi * s;
+  const den = sr * sr + si * si;
+  const hr = (dr * s * sr + di * s * si) / den;
+  const hi = (di * s * sr - dr * s * si) / den;
+  if (inside) {
+    out[0] = hr;
+    out[1] = hi;
+  } else {
+    const tr = n - (ux * hr - uy * hi);
+    const ti = -(ux * hi + uy * hr);
+    out[0] = ux * tr - uy * ti;
+    out[1] = ux * ti + uy * tr;
+  }
+  return Math.sqrt(den) / s;
+}
