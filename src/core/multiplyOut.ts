@@ -25,7 +25,15 @@ export function multiplyOutDd(
   const angle = new Float64Array(m);
   for (let k = 0; k < m; k++)
     angle[k] = fi[k] === 0 ? (fr[k]! < 0 ? Math.PI : 0) : Math.atan2(fi[k]!, fr[k]!);
-  const order = Array.from({ length: m }, (_, k) => k).sort((a, b) => angle[a]! - angle[b]!);
+  // Ranked by insertion: no comparator closure or boxed index array (this runs for every set test, mostly of
+  // a few factors), and at most m²/2 moves where the product itself takes m² double-double steps.
+  const order = new Int32Array(m);
+  for (let k = 0; k < m; k++) {
+    const a = angle[k]!;
+    let j = k;
+    for (; j > 0 && angle[order[j - 1]!]! > a; j--) order[j] = order[j - 1]!;
+    order[j] = k;
+  }
   return interleavedProduct(order, fr, fi, length);
 }
 
@@ -36,7 +44,7 @@ export function multiplyOutDd(
  * out so the inner loop allocates and calls nothing.
  */
 function interleavedProduct(
-  order: number[],
+  order: Int32Array,
   fr: Float64Array,
   fi: Float64Array,
   length: number,

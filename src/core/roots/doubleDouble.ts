@@ -45,8 +45,9 @@ export function factor(re: number, im: number): DdPoly {
 export function product(factors: DdPoly[]): DdPoly {
   if (factors.length === 0) return { hi: Float64Array.of(1), lo: Float64Array.of(0) };
   if (factors.length === 1) return factors[0]!;
-  const even = factors.filter((_, i) => i % 2 === 0);
-  const odd = factors.filter((_, i) => i % 2 === 1);
+  const even: DdPoly[] = [];
+  const odd: DdPoly[] = [];
+  for (let i = 0; i < factors.length; i++) (i % 2 === 0 ? even : odd).push(factors[i]!);
   return multiply(product(even), product(odd));
 }
 

@@ -95,12 +95,13 @@ export function findMultipleRoots(
     for (const j of neighbours[i]!)
       nearest[i] = Math.min(nearest[i]!, Math.hypot(re[j]! - re[i]!, im[j]! - im[i]!));
   }
-  // The separate set's backward error and the set test's allowance, computed once a pair needs them.
-  let separate = NaN;
-  let allowance = NaN;
-  // Verified pairs whose merge cannot pass the set test (HOPELESS_RATIO): they still count as candidates.
-  const doomedIds = new Set<number>();
-  const leadOf = (r: Root, id: number) => (r.im < 0 && id > 0 && roots[id - 1]!.im === -r.im ? id - 1 : id);
+  const test = new SetTest(c, re, im, mate);
+  // Verified pairs whose merge cannot pass the set test (HOPELESS_RATIO), by root id: they still count as
+  // candidates. Candidates: clusters found (a cluster and its mirror count once).
+  const doomedIds: boolean[] = [];
+  let candidates = 0;
+  let anyDoomed = false;
+  const verdict = { doomed: false };
   for (const rho of CLUSTER_RADII) {
     for (let i = 0; i < n; i++) {
       if (group[i]! >= 0 || im[i]! < 0 || neighbours[i]!.length === 0) continue;
@@ -118,17 +119,8 @@ export function findMultipleRoots(
       }
       const m = members.length;
       if (m < 2 || m === failedSize[i] || !isolated(re, im, members, neighbours[i]!, cx, cy)) continue;
-      if (real && members.some((k) => mate[k]! >= 0 && !members.includes(mate[k]!))) continue;
-      const pair = members;
-      const doomed = () => {
-        if (m !== 2) return false;
-        if (Number.isNaN(separate)) {
-          separate = setBackwardError(c, re, im);
-          allowance = MERGE_RATIO * separate + MERGE_FLOOR * Number.EPSILON;
-        }
-        return pairMergeShift(c, re, im, pair[0]!, pair[1]!, real) - separate > HOPELESS_RATIO * allowance;
-      };
-      const verdict = { doomed: false };
+      if (real && !matesInside(members, mate)) continue;
+      verdict.doomed = false;
       const centre = verifiedCentre(
         c,
         reversedC,
@@ -139,7 +131,7 @@ export function findMultipleRoots(
         members,
         real,
         rho * mod,
-        doomed,
+        m === 2 ? test : undefined,
         verdict,
       );
       if (!centre) {
@@ -147,7 +139,9 @@ export function findMultipleRoots(
         continue;
       }
       const id = roots.length;
-      if (verdict.doomed) doomedIds.add(id);
+      candidates++;
+      doomedIds[id] = verdict.doomed;
+      anyDoomed ||= verdict.doomed;
       roots.push({ re: centre[0], im: centre[1], multiplicity: m });
       if (!real) roots.push({ re: centre[0], im: -centre[1], multiplicity: m });
       for (const k of members) {
@@ -156,11 +150,57 @@ export function findMultipleRoots(
       }
       // With a doomed pair among more than SEPARATE_CHECKS candidates, keepReproducing can keep nothing
       // (the all-at-once set contains the doomed merge, and one-by-one checks are not tried): stop here.
-      if (doomedIds.size > 0 && new Set(roots.map(leadOf)).size > SEPARATE_CHECKS)
+      if (anyDoomed && candidates > SEPARATE_CHECKS)
         return { group: new Int32Array(n).fill(-1), clusters: [] };
     }
   }
-  return keepReproducing(c, re, im, group, roots, separate, doomedIds);
+  return keepReproducing(test, group, roots, doomedIds);
+}
+
+/** Whether every member's conjugate (if any) is a member too. */
+function matesInside(members: number[], mate: Int32Array): boolean {
+  for (const k of members) if (mate[k]! >= 0 && !members.includes(mate[k]!)) return false;
+  return true;
+}
+
+/**
+ * The set test of one search: the separate set's backward error and the allowance a merged set must meet,
+ * formed once the first candidate needs them.
+ */
+class SetTest {
+  private separateError = NaN;
+  private allowanceValue = NaN;
+
+  constructor(
+    readonly c: Float64Array,
+    readonly re: Float64Array,
+    readonly im: Float64Array,
+    readonly mate: Int32Array,
+  ) {}
+
+  get separate(): number {
+    this.form();
+    return this.separateError;
+  }
+
+  /** MERGE_RATIO × the separate set's error + MERGE_FLOOR·ε. */
+  get allowance(): number {
+    this.form();
+    return this.allowanceValue;
+  }
+
+  private form(): void {
+    if (!Number.isNaN(this.separateError)) return;
+    this.separateError = setBackwardError(this.c, this.re, this.im, this.mate);
+    this.allowanceValue = MERGE_RATIO * this.separateError + MERGE_FLOOR * Number.EPSILON;
+  }
+
+  /** Whether merging the pair a, b (HOPELESS_RATIO) cannot pass the set test. */
+  doomed(a: number, b: number, real: boolean): boolean {
+    return (
+      pairMergeShift(this.c, this.re, this.im, a, b, real) - this.separate > HOPELESS_RATIO * this.allowance
+    );
+  }
 }
 
 /**
@@ -246,50 +286,66 @@ function pairMergeShift(
  * (the zeros of k·(z + 1)^20 rounded to doubles spread over a ring of radius 0.3) it passes merges that
  * leave the rest of the set unable to reproduce p.
  */
-function keepReproducing(
-  c: Float64Array,
-  re: Float64Array,
-  im: Float64Array,
-  group: Int32Array,
-  roots: Root[],
-  separate: number,
-  doomed: Set<number>,
-): MultipleRoots {
+function keepReproducing(test: SetTest, group: Int32Array, roots: Root[], doomed: boolean[]): MultipleRoots {
   if (roots.length === 0) return { group, clusters: roots };
-  const lead = roots.map((r, id) => (r.im < 0 && id > 0 && roots[id - 1]!.im === -r.im ? id - 1 : id));
-  const ids = [...new Set(lead)];
-  const withMerged = (accepted: Set<number>) => {
-    for (const id of doomed) if (accepted.has(id)) return Infinity;
-    const r = Float64Array.from(re);
-    const i = Float64Array.from(im);
-    for (let k = 0; k < re.length; k++) {
-      const id = group[k]!;
-      if (id >= 0 && accepted.has(lead[id]!)) {
-        r[k] = roots[id]!.re;
-        i[k] = roots[id]!.im;
+  // lead[id]: the cluster's own id, or its mirror's id for the lower member of a conjugate cluster.
+  const lead = new Int32Array(roots.length);
+  const ids: number[] = [];
+  for (let id = 0; id < roots.length; id++) {
+    const r = roots[id]!;
+    lead[id] = r.im < 0 && id > 0 && roots[id - 1]!.im === -r.im ? id - 1 : id;
+    if (lead[id] === id) ids.push(id);
+  }
+  const limit = test.allowance;
+  const accepted = new Uint8Array(roots.length);
+  for (const id of ids) accepted[id] = 1;
+  if (!(mergedError(test, group, roots, lead, accepted, doomed) <= limit)) {
+    // One by one only for a few candidates: each check multiplies the whole set out.
+    accepted.fill(0);
+    if (ids.length <= SEPARATE_CHECKS) {
+      const alone = new Uint8Array(roots.length);
+      for (const id of ids) {
+        alone.fill(0);
+        alone[id] = 1;
+        if (mergedError(test, group, roots, lead, alone, doomed) <= limit) accepted[id] = 1;
       }
     }
-    return setBackwardError(c, r, i);
-  };
-  const sep = Number.isNaN(separate) ? setBackwardError(c, re, im) : separate;
-  const limit = MERGE_RATIO * sep + MERGE_FLOOR * Number.EPSILON;
-  let accepted = new Set(ids);
-  if (!(withMerged(accepted) <= limit)) {
-    // One by one only for a few candidates: each check multiplies the whole set out.
-    accepted = new Set(
-      ids.length <= SEPARATE_CHECKS ? ids.filter((id) => withMerged(new Set([id])) <= limit) : [],
-    );
-    if (accepted.size > 1 && !(withMerged(accepted) <= limit)) accepted = new Set();
+    let count = 0;
+    for (const id of ids) count += accepted[id]!;
+    if (count > 1 && !(mergedError(test, group, roots, lead, accepted, doomed) <= limit)) accepted.fill(0);
   }
-  const renumber = new Map<number, number>();
+  const renumber = new Int32Array(roots.length).fill(-1);
   const kept: Root[] = [];
   for (let id = 0; id < roots.length; id++) {
-    if (!accepted.has(lead[id]!)) continue;
-    renumber.set(id, kept.length);
+    if (!accepted[lead[id]!]) continue;
+    renumber[id] = kept.length;
     kept.push(roots[id]!);
   }
-  const out = Int32Array.from(group, (id) => (id >= 0 && renumber.has(id) ? renumber.get(id)! : -1));
+  const out = new Int32Array(group.length);
+  for (let k = 0; k < group.length; k++) out[k] = group[k]! >= 0 ? renumber[group[k]!]! : -1;
   return { group: out, clusters: kept };
+}
+
+/** The set error with the accepted clusters (by lead id) merged; Infinity if a doomed one is among them. */
+function mergedError(
+  test: SetTest,
+  group: Int32Array,
+  roots: Root[],
+  lead: Int32Array,
+  accepted: Uint8Array,
+  doomed: boolean[],
+): number {
+  for (let id = 0; id < roots.length; id++) if (accepted[id] && doomed[id]) return Infinity;
+  const r = Float64Array.from(test.re);
+  const i = Float64Array.from(test.im);
+  for (let k = 0; k < r.length; k++) {
+    const id = group[k]!;
+    if (id >= 0 && accepted[lead[id]!]) {
+      r[k] = roots[id]!.re;
+      i[k] = roots[id]!.im;
+    }
+  }
+  return setBackwardError(test.c, r, i, test.mate);
 }
 
 /** The roots listed once per group: clusters with their multiplicity, simple roots with multiplicity 1. */
@@ -358,7 +414,7 @@ function verifiedCentre(
   members: number[],
   real: boolean,
   radius: number,
-  doomed: () => boolean,
+  pairTest: SetTest | undefined,
   verdict: { doomed: boolean },
 ): [number, number] | undefined {
   const m = members.length;
@@ -374,18 +430,18 @@ function verifiedCentre(
   const separate: DdPoly[] = [];
   for (const k of members) if (im[k]! >= 0) separate.push(factor(re[k]!, im[k]!));
   const outside = Math.hypot(x0, y0) > 1;
-  const size = (f: DdPoly) => (outside ? remainderSize(reversedC, reversedDd(f)) : remainderSize(c, f));
-  const limit = PREFILTER_RATIO * size(product(separate)) + PREFILTER_FLOOR * Number.EPSILON;
-  const merged = (x: number, y: number) => size(product(new Array<DdPoly>(m).fill(factor(x, y))));
+  const limit =
+    PREFILTER_RATIO * clusterRemainder(c, reversedC, outside, product(separate)) +
+    PREFILTER_FLOOR * Number.EPSILON;
   // The polished members' mean is accurate to about ε for a rounding-split multiple root (the split is
   // symmetric to first order); an exact multiple root's approximations converge only linearly, and there
   // Newton on p^(m−1), where the root is simple, finds the centre. The one leaving the smaller remainder
   // stands.
-  const atMean = merged(x0, y0);
+  const atMean = mergedRemainder(c, reversedC, outside, m, x0, y0);
   if (atMean === 0) return [x0, y0];
   // A doomed pair (HOPELESS_RATIO) is only counted, never merged: whether it passes is all that matters.
   // Asked only here, where the cheap part has passed: the estimate needs the whole set's backward error.
-  if (atMean <= limit && doomed()) {
+  if (atMean <= limit && pairTest?.doomed(members[0]!, members[1]!, real)) {
     verdict.doomed = true;
     return [x0, y0];
   }
@@ -407,10 +463,28 @@ function verifiedCentre(
     if (Math.hypot(dx, dy) <= 2 * Number.EPSILON * Math.hypot(x, y)) break;
   }
   if (real) y = 0;
-  const atNewton = Math.hypot(x - x0, y - y0) <= radius ? merged(x, y) : Infinity;
+  const atNewton =
+    Math.hypot(x - x0, y - y0) <= radius ? mergedRemainder(c, reversedC, outside, m, x, y) : Infinity;
   const [best, size0]: [[number, number], number] =
     atNewton < atMean ? [[x, y], atNewton] : [[x0, y0], atMean];
   return size0 <= limit ? best : undefined;
+}
+
+/** Remainder size of c divided by (z − (x + iy))^m (with the mirror's factor when y ≠ 0). */
+function mergedRemainder(
+  c: Float64Array,
+  reversedC: Float64Array,
+  outside: boolean,
+  m: number,
+  x: number,
+  y: number,
+): number {
+  return clusterRemainder(c, reversedC, outside, product(new Array<DdPoly>(m).fill(factor(x, y))));
+}
+
+/** Remainder size of c divided by f, on the reversed coefficients for a cluster outside the unit circle. */
+function clusterRemainder(c: Float64Array, reversedC: Float64Array, outside: boolean, f: DdPoly): number {
+  return outside ? remainderSize(reversedC, reversedDd(f)) : remainderSize(c, f);
 }
 
 function reversedDd(f: DdPoly): DdPoly {

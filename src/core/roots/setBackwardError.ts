@@ -16,31 +16,32 @@ const tmp = new Float64Array(2);
  * findRoots reads them: leading zeros dropped, trailing zeros are roots at 0 that must be in the set) and a
  * root set listed in full (every conjugate, repeated roots repeated). Conjugates are paired by exact
  * mirror; a complex root without its exact mirror means the set is not of a real polynomial, and the error
- * is Infinity.
+ * is Infinity. mate (optional): the index of each root's conjugate, as symmetrizeConjugates gives it, which
+ * spares the sort that pairs them; a mate that is not the exact mirror also gives Infinity.
  */
-export function setBackwardError(c: ArrayLike<number>, re: ArrayLike<number>, im: ArrayLike<number>): number {
+export function setBackwardError(
+  c: ArrayLike<number>,
+  re: ArrayLike<number>,
+  im: ArrayLike<number>,
+  mate?: Int32Array,
+): number {
   let first = 0;
   while (first < c.length && c[first] === 0) first++;
   const length = c.length - first;
   const n = re.length;
   if (length - 1 !== n) return Infinity;
-  // Each upper root meets its exact mirror: both halves sorted by (re, |im|) must agree member by member.
+  // Each upper root meets its exact mirror: with `mate` given, member by member; else both halves sorted by
+  // (re, |im|) must agree.
   const upper: number[] = [];
-  const lower: number[] = [];
+  let lowers = 0;
   let reals = 0;
   for (let i = 0; i < n; i++) {
     if (im[i] === 0) reals++;
-    else (im[i]! > 0 ? upper : lower).push(i);
+    else if (im[i]! > 0) upper.push(i);
+    else lowers++;
   }
-  if (upper.length !== lower.length) return Infinity;
-  const byMirror = (a: number, b: number) => re[a]! - re[b]! || Math.abs(im[a]!) - Math.abs(im[b]!);
-  const sortedUpper = [...upper].sort(byMirror);
-  lower.sort(byMirror);
-  for (let k = 0; k < upper.length; k++) {
-    const i = sortedUpper[k]!;
-    const j = lower[k]!;
-    if (re[i] !== re[j] || im[i] !== -im[j]!) return Infinity;
-  }
+  if (upper.length !== lowers || !(mate ? matesMirror(re, im, upper, mate) : sortedMirror(re, im, upper)))
+    return Infinity;
   // Factors: each real root once, each conjugate pair once (its upper member), multiplied out in order of angle.
   const m = reals + upper.length;
   const fr = new Float64Array(m);
@@ -66,4 +67,33 @@ export function setBackwardError(c: ArrayLike<number>, re: ArrayLike<number>, im
     scale = Math.max(scale, Math.abs(c[first + k]!));
   }
   return worst / scale;
+}
+
+/** Whether mate[i] is the exact mirror of every upper root i. */
+function matesMirror(
+  re: ArrayLike<number>,
+  im: ArrayLike<number>,
+  upper: number[],
+  mate: Int32Array,
+): boolean {
+  for (const i of upper) {
+    const j = mate[i]!;
+    if (!(j >= 0) || re[j] !== re[i] || im[j] !== -im[i]!) return false;
+  }
+  return true;
+}
+
+/** Whether the upper roots and the lower ones, each sorted by (re, |im|), are exact mirrors member by member. */
+function sortedMirror(re: ArrayLike<number>, im: ArrayLike<number>, upper: number[]): boolean {
+  const lower: number[] = [];
+  for (let i = 0; i < re.length; i++) if (im[i]! < 0) lower.push(i);
+  const byMirror = (a: number, b: number) => re[a]! - re[b]! || Math.abs(im[a]!) - Math.abs(im[b]!);
+  const sortedUpper = [...upper].sort(byMirror);
+  lower.sort(byMirror);
+  for (let k = 0; k < upper.length; k++) {
+    const i = sortedUpper[k]!;
+    const j = lower[k]!;
+    if (re[i] !== re[j] || im[i] !== -im[j]!) return false;
+  }
+  return true;
 }
