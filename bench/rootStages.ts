@@ -55,8 +55,7 @@ export function benchRootStages(
     return { zr, zi };
   };
   const polish = (c: Float64Array, zr: Float64Array, zi: Float64Array) => {
-    symmetrizeConjugates(c, zr, zi);
-    return polishIllConditioned(c, zr, zi);
+    return polishIllConditioned(c, zr, zi, symmetrizeConjugates(c, zr, zi));
   };
   const group = (c: Float64Array, zr: Float64Array, zi: Float64Array) => {
     const mate = symmetrizeConjugates(c, zr, zi);

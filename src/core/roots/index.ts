@@ -79,15 +79,25 @@ export function findRoots(p: Poly, options: RootsOptions = {}): RootsResult {
   }
   const zr = re.subarray(0, n);
   const zi = im.subarray(0, n);
-  symmetrizeConjugates(c, zr, zi);
-  if (n > 2) iterations += polishIllConditioned(c, zr, zi);
+  const firstMate = symmetrizeConjugates(c, zr, zi);
+  const symmetricR = zr.slice();
+  const symmetricI = zi.slice();
+  if (n > 2) iterations += polishIllConditioned(c, zr, zi, firstMate);
   if (n > 2) iterations += reseatSharedRoots(c, zr, zi);
   if (n > 2) iterations += refindMisfits(c, zr, zi);
-  const mate = symmetrizeConjugates(c, zr, zi);
+  // Pairing an exactly symmetric set again changes nothing: only a set the stages above moved is paired again.
+  const mate =
+    sameValues(zr, symmetricR) && sameValues(zi, symmetricI) ? firstMate : symmetrizeConjugates(c, zr, zi);
   const multiple = findMultipleRoots(c, zr, zi, mate);
   const grouped = listGrouped(zr, zi, multiple);
   if (origin > 0) grouped.push({ re: 0, im: 0, multiplicity: origin });
   return { re, im, grouped, atInfinity: lead, zeroPolynomial: false, converged, iterations };
+}
+
+/** Whether a and b hold the same numbers (bit for bit, but for the sign of zero). */
+function sameValues(a: Float64Array, b: Float64Array): boolean {
+  for (let k = 0; k < a.length; k++) if (a[k] !== b[k]) return false;
+  return true;
 }
 
 function emptyResult(atInfinity: number, zeroPolynomial: boolean): RootsResult {

@@ -451,6 +451,9 @@ function verifiedCentre(
   const g = new Float64Array(3);
   let x = x0;
   let y = y0;
+  // Newton converges quadratically on a simple root; once a step is no smaller than the one before, the
+  // iterates wander in the rounding noise of p^(m−1) and more steps change nothing but the noise.
+  let lastStep = Infinity;
   for (let s = 0; s < REFINE_STEPS; s++) {
     logDerivative(f, absF, x, y, g);
     if (g[2] === 0) break;
@@ -460,7 +463,9 @@ function verifiedCentre(
     if (!Number.isFinite(dx) || !Number.isFinite(dy)) break;
     x -= dx;
     y -= dy;
-    if (Math.hypot(dx, dy) <= 2 * Number.EPSILON * Math.hypot(x, y)) break;
+    const step = Math.hypot(dx, dy);
+    if (step <= 2 * Number.EPSILON * Math.hypot(x, y) || step >= lastStep) break;
+    lastStep = step;
   }
   if (real) y = 0;
   const atNewton =

@@ -38,6 +38,7 @@ const SETTLED = 1e-6;
 class CompensatedEvaluator {
   private readonly rev: Float64Array;
   private readonly v = new Float64Array(5);
+  private readonly g = new Float64Array(3);
   constructor(private readonly c: Float64Array) {
     this.rev = c.slice().reverse();
   }
@@ -68,18 +69,27 @@ class CompensatedEvaluator {
     );
     out[2] = b === 0 ? 0 : size / b;
   }
+  /** The compensated relative residual alone. */
+  residual(x: number, y: number): number {
+    this.logDerivative(x, y, this.g);
+    return this.g[2]!;
+  }
 }
 
 /**
  * Polishes the badly conditioned approximations in zr/zi (all roots of descending c, conjugates listed,
- * exactly symmetric on entry) in place and leaves every complex root with its exact mirror; returns the
- * sweeps used. A complex root is polished once and its mate mirrors it, until the pair comes so close to
+ * exactly symmetric on entry, mate[i] the index of i's exact mirror or -1, as symmetrizeConjugates returns it)
+ * in place and leaves every complex root with its exact mirror; returns the sweeps used. A complex root is polished once and its mate mirrors it, until the pair comes so close to
  * the real axis that it may really be two real roots: then both members go on independently. Real
  * approximations are polished independently from the start (see unsettleRealRoots).
  */
-export function polishIllConditioned(c: Float64Array, zr: Float64Array, zi: Float64Array): number {
+export function polishIllConditioned(
+  c: Float64Array,
+  zr: Float64Array,
+  zi: Float64Array,
+  mate: Int32Array,
+): number {
   const n = zr.length;
-  const mate = mates(zr, zi);
   const absC = c.map(Math.abs);
   const h = new Float64Array(3);
   const active: number[] = [];
@@ -95,26 +105,29 @@ export function polishIllConditioned(c: Float64Array, zr: Float64Array, zi: Floa
   const g = new Float64Array(3);
   const startR = Float64Array.from(zr);
   const startI = Float64Array.from(zi);
-  const touched = active.flatMap((i) => (mate[i]! >= 0 ? [i, mate[i]!] : [i]));
-  const plainBefore = touched.map((i) => relativeResidual(c, zr[i]!, zi[i]!));
+  const touched: number[] = [];
+  for (const i of active) {
+    touched.push(i);
+    if (mate[i]! >= 0) touched.push(mate[i]!);
+  }
+  const plainBefore = new Float64Array(touched.length);
+  for (let k = 0; k < touched.length; k++)
+    plainBefore[k] = relativeResidual(c, zr[touched[k]!]!, zi[touched[k]!]!);
   // free[i]: i moves on its own (real approximations, released pairs); otherwise i is the upper member of
   // a pair whose mate mirrors it.
   const free = new Uint8Array(n);
-  for (const i of active) if (zi[i] === 0) free[i] = 1;
-  unsettleRealRoots(
-    zr,
-    zi,
-    active.filter((i) => free[i]),
-  );
+  const reals: number[] = [];
+  for (const i of active)
+    if (zi[i] === 0) {
+      free[i] = 1;
+      reals.push(i);
+    }
+  unsettleRealRoots(zr, zi, reals);
   // A mirrored member is not repelled by the free roots (its Aberth correction is taken from its mate's), so
   // a free root can settle on the very point a mirror is put on, and one root of the cluster is then left
   // without an approximation. That is rare and cheap to see afterwards (two approximations on one point);
   // then every pair is released and the sweeps go on, each root repelled by all others.
   let mirroring = true;
-  const releaseAll = () => {
-    mirroring = false;
-    for (const i of touched) free[i] = 1;
-  };
   const best = new Float64Array(n).fill(Infinity);
   const stale = new Int32Array(n);
   // Residual level (relative) below which compensated evaluation is noise: γ_{4n+2}², with margin.
@@ -181,8 +194,9 @@ export function polishIllConditioned(c: Float64Array, zr: Float64Array, zi: Floa
     }
     if (!mirroring || sweeps >= POLISH_SWEEPS) break;
     const twins = coincident(zr, zi, touched);
-    if (twins.length === 0 || !touched.some((i) => free[i])) break;
-    releaseAll();
+    if (twins.length === 0 || !anyFree(touched, free)) break;
+    mirroring = false;
+    for (const i of touched) free[i] = 1;
     unsettleRealRoots(zr, zi, twins, true);
     for (const i of touched) stale[i] = 0;
     list = touched;
@@ -192,9 +206,11 @@ export function polishIllConditioned(c: Float64Array, zr: Float64Array, zi: Floa
   // scales): if any polished root's plain residual ends far above both its start and the rounding level,
   // the whole polish is undone.
   const floor = POLISH_GUARD * freezeLevel(n);
-  const worse = touched.some(
-    (i, k) => !(relativeResidual(c, zr[i]!, zi[i]!) <= Math.max(floor, POLISH_GUARD * plainBefore[k]!)),
-  );
+  let worse = false;
+  for (let k = 0; k < touched.length && !worse; k++) {
+    const i = touched[k]!;
+    worse = !(relativeResidual(c, zr[i]!, zi[i]!) <= Math.max(floor, POLISH_GUARD * plainBefore[k]!));
+  }
   if (worse) {
     zr.set(startR);
     zi.set(startI);
@@ -202,32 +218,10 @@ export function polishIllConditioned(c: Float64Array, zr: Float64Array, zi: Floa
   return sweeps;
 }
 
-/** mate[i]: the index of i's exact conjugate, or -1 for a real root (the set is exactly symmetric). */
-function mates(zr: Float64Array, zi: Float64Array): Int32Array {
-  const n = zr.length;
-  const mate = new Int32Array(n).fill(-1);
-  const upper: number[] = [];
-  const lower: number[] = [];
-  for (let i = 0; i < n; i++) {
-    if (zi[i]! > 0) upper.push(i);
-    else if (zi[i]! < 0) lower.push(i);
-  }
-  // Both halves sorted by (re, |im|): exact mirrors meet at the same rank, walked as a merge.
-  const byMirror = (a: number, b: number) => zr[a]! - zr[b]! || Math.abs(zi[a]!) - Math.abs(zi[b]!);
-  upper.sort(byMirror);
-  lower.sort(byMirror);
-  let b = 0;
-  for (const i of upper) {
-    while (b < lower.length && byMirror(lower[b]!, i) < 0) b++;
-    if (b === lower.length) break;
-    const j = lower[b]!;
-    if (zr[j] === zr[i] && zi[j] === -zi[i]!) {
-      mate[i] = j;
-      mate[j] = i;
-      b++;
-    }
-  }
-  return mate;
+/** Whether any of `among` moves on its own. */
+function anyFree(among: number[], free: Uint8Array): boolean {
+  for (const i of among) if (free[i]) return true;
+  return false;
 }
 
 /**
@@ -289,19 +283,13 @@ function restoreSymmetry(
   zi: Float64Array,
   polished: number[],
 ): void {
-  const g = new Float64Array(3);
-  const residualAt = (x: number, y: number) => {
-    ev.logDerivative(x, y, g);
-    return g[2]!;
-  };
-  const nearAxis = (i: number) => Math.abs(zi[i]!) <= SNAP_CHECK * Math.hypot(zr[i]!, zi[i]!);
   const upper: number[] = [];
   const lower: number[] = [];
   for (const i of polished) {
     if (zi[i] === 0) continue;
     // Only a root this close to the axis can be a real root whose polish left it slightly off.
-    if (nearAxis(i)) {
-      if (residualAt(zr[i]!, 0) <= residualAt(zr[i]!, zi[i]!)) {
+    if (nearAxis(zr, zi, i)) {
+      if (ev.residual(zr[i]!, 0) <= ev.residual(zr[i]!, zi[i]!)) {
         zi[i] = 0;
         continue;
       }
@@ -357,8 +345,8 @@ function restoreSymmetry(
       const [j, dist] = nearestLow.get(i)!;
       if (nearestUp.get(j) !== i) rest.push(i);
       else if (
-        nearAxis(i) &&
-        nearAxis(j) &&
+        nearAxis(zr, zi, i) &&
+        nearAxis(zr, zi, j) &&
         dist > Math.min(zi[i]!, -zi[j]!) &&
         dist > nearestOther(zr, zi, i, j)
       ) {
@@ -378,7 +366,7 @@ function restoreSymmetry(
   for (const [i, j, dist] of pairs) {
     // Mates that agree to the last bits need no comparison; otherwise the better residual wins.
     const agree = dist <= 4 * Number.EPSILON * Math.hypot(zr[i]!, zi[i]!);
-    const keepI = agree || residualAt(zr[i]!, zi[i]!) <= residualAt(zr[j]!, zi[j]!);
+    const keepI = agree || ev.residual(zr[i]!, zi[i]!) <= ev.residual(zr[j]!, zi[j]!);
     const r = keepI ? zr[i]! : zr[j]!;
     const m = keepI ? zi[i]! : -zi[j]!;
     zr[i] = r;
@@ -387,6 +375,11 @@ function restoreSymmetry(
     zi[j] = -m;
   }
   for (const k of lower) if (!taken[k]) zi[k] = 0;
+}
+
+/** Whether root i lies so close to the real axis that it may be a real root polished slightly off it. */
+function nearAxis(zr: Float64Array, zi: Float64Array, i: number): boolean {
+  return Math.abs(zi[i]!) <= SNAP_CHECK * Math.hypot(zr[i]!, zi[i]!);
 }
 
 /** Distance from root i to the nearest root other than i and j. */
