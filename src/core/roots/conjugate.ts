@@ -7,6 +7,7 @@
  */
 import { relativeResidual } from './horner.ts';
 import { freezeLevel } from './aberth.ts';
+import { modulus } from './scaleSafe.ts';
 
 /**
  * Relative distance below which two mates count as the same root: moving a root by this much changes its
@@ -38,7 +39,7 @@ export function symmetrizeConjugates(c: Float64Array, re: Float64Array, im: Floa
     const k = nearestMirror(re[i]!, -im[i]!, lowRe, lower, im, used);
     if (k < 0) break;
     const j = lower[k]!;
-    if (Math.hypot(re[j]! - re[i]!, im[j]! + im[i]!) > Math.min(im[i]!, -im[j]!)) continue;
+    if (modulus(re[j]! - re[i]!, im[j]! + im[i]!) > Math.min(im[i]!, -im[j]!)) continue;
     used[k] = 1;
     pairUp(c, re, im, mate, i, j);
   }
@@ -66,7 +67,7 @@ export function symmetrizeConjugates(c: Float64Array, re: Float64Array, im: Floa
     let bestDist = Infinity;
     for (let b = a + 1; b < rest.length; b++) {
       const j = rest[b]!;
-      const d = Math.hypot(re[j]! - re[i]!, im[j]! - im[i]!);
+      const d = modulus(re[j]! - re[i]!, im[j]! - im[i]!);
       if (mate[j] === -1 && d < bestDist) [best, bestDist] = [j, d];
     }
     if (best < 0) oddOneOut(c, re, im, mate, i, rounding);
@@ -120,9 +121,9 @@ function pairUp(
   j: number,
 ): void {
   // Mates that agree to PAIR_AGREEMENT need no residual comparison: either choice is as good.
-  const gap = Math.hypot(re[i]! - re[j]!, im[i]! + im[j]!);
+  const gap = modulus(re[i]! - re[j]!, im[i]! + im[j]!);
   const keepI =
-    gap <= PAIR_AGREEMENT * Math.hypot(re[i]!, im[i]!) ||
+    gap <= PAIR_AGREEMENT * modulus(re[i]!, im[i]!) ||
     relativeResidual(c, re[i]!, im[i]!) <= relativeResidual(c, re[j]!, im[j]!);
   const r = keepI ? re[i]! : re[j]!;
   const m = keepI ? im[i]! : -im[j]!;
@@ -154,12 +155,12 @@ function nearestMirror(
   let bestDist = Infinity;
   for (let k = lo; k < lower.length && lowRe[k]! - x < bestDist; k++) {
     if (used[k]) continue;
-    const d = Math.hypot(lowRe[k]! - x, im[lower[k]!]! - y);
+    const d = modulus(lowRe[k]! - x, im[lower[k]!]! - y);
     if (d < bestDist) [best, bestDist] = [k, d];
   }
   for (let k = lo - 1; k >= 0 && x - lowRe[k]! < bestDist; k--) {
     if (used[k]) continue;
-    const d = Math.hypot(lowRe[k]! - x, im[lower[k]!]! - y);
+    const d = modulus(lowRe[k]! - x, im[lower[k]!]! - y);
     if (d < bestDist) [best, bestDist] = [k, d];
   }
   return best;

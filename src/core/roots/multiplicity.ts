@@ -13,6 +13,7 @@ import type { Root } from '../types.ts';
 import { logDerivative } from './horner.ts';
 import { factor, product, remainderSize, type DdPoly } from './doubleDouble.ts';
 import { setBackwardError } from './setBackwardError.ts';
+import { modulus } from './scaleSafe.ts';
 
 /**
  * Cluster radii tried, relative to the root modulus, largest first. An m-fold root spreads over about
@@ -89,11 +90,11 @@ export function findMultipleRoots(
   // Distance from each root to its nearest neighbour: at a radius below it a root has no cluster (unless it
   // is taken as real with its mate), and no member list need be built.
   const nearest = new Float64Array(n).fill(Infinity);
-  const modulus = new Float64Array(n);
+  const absRoot = new Float64Array(n);
   for (let i = 0; i < n; i++) {
-    modulus[i] = Math.hypot(re[i]!, im[i]!);
+    absRoot[i] = modulus(re[i]!, im[i]!);
     for (const j of neighbours[i]!)
-      nearest[i] = Math.min(nearest[i]!, Math.hypot(re[j]! - re[i]!, im[j]! - im[i]!));
+      nearest[i] = Math.min(nearest[i]!, modulus(re[j]! - re[i]!, im[j]! - im[i]!));
   }
   const test = new SetTest(c, re, im, mate);
   // Verified pairs whose merge cannot pass the set test (HOPELESS_RATIO), by root id: they still count as
@@ -105,7 +106,7 @@ export function findMultipleRoots(
   for (const rho of CLUSTER_RADII) {
     for (let i = 0; i < n; i++) {
       if (group[i]! >= 0 || im[i]! < 0 || neighbours[i]!.length === 0) continue;
-      const mod = modulus[i]!;
+      const mod = absRoot[i]!;
       const real = im[i]! <= rho * mod;
       // The nearest neighbour of the centre (x, 0) of a real candidate can be closer than i's by up to im[i].
       if (!(real && mate[i]! >= 0) && nearest[i]! > rho * mod + (real ? im[i]! : 0)) continue;
@@ -115,7 +116,7 @@ export function findMultipleRoots(
       if (real && mate[i]! >= 0) members.push(mate[i]!);
       for (const j of neighbours[i]!) {
         if (group[j]! >= 0 || j === mate[i]) continue;
-        if (Math.hypot(re[j]! - cx, im[j]! - cy) <= rho * mod) members.push(j);
+        if (modulus(re[j]! - cx, im[j]! - cy) <= rho * mod) members.push(j);
       }
       const m = members.length;
       if (m < 2 || m === failedSize[i] || !isolated(re, im, members, neighbours[i]!, cx, cy)) continue;
@@ -249,7 +250,7 @@ function pairMergeShift(
   }
   const k = own.length - 1;
   const q = new Float64Array(n - k + 1);
-  if (Math.hypot(re[a]!, im[a]!) <= 1) {
+  if (modulus(re[a]!, im[a]!) <= 1) {
     for (let j = 0; j <= n - k; j++) {
       let s = c[j]!;
       for (let l = 1; l <= Math.min(j, k); l++) s -= own[l]! * q[j - l]!;
@@ -373,10 +374,10 @@ function isolated(
   cy: number,
 ): boolean {
   let radius = 0;
-  for (const k of members) radius = Math.max(radius, Math.hypot(re[k]! - cx, im[k]! - cy));
+  for (const k of members) radius = Math.max(radius, modulus(re[k]! - cx, im[k]! - cy));
   for (const j of neighbours) {
     if (members.includes(j)) continue;
-    if (Math.hypot(re[j]! - cx, im[j]! - cy) < CLUSTER_ISOLATION * radius) return false;
+    if (modulus(re[j]! - cx, im[j]! - cy) < CLUSTER_ISOLATION * radius) return false;
   }
   return true;
 }
@@ -388,13 +389,13 @@ function closePairs(re: Float64Array, im: Float64Array, r: number): number[][] {
   const out: number[][] = Array.from({ length: n }, () => []);
   for (let a = 0; a < n; a++) {
     const i = order[a]!;
-    const mi = Math.hypot(re[i]!, im[i]!);
+    const mi = modulus(re[i]!, im[i]!);
     const reach = (r * mi) / (1 - r);
     for (let b = a + 1; b < n; b++) {
       const j = order[b]!;
       if (re[j]! - re[i]! > reach) break;
-      const d = Math.hypot(re[j]! - re[i]!, im[j]! - im[i]!);
-      if (d <= r * Math.max(mi, Math.hypot(re[j]!, im[j]!))) {
+      const d = modulus(re[j]! - re[i]!, im[j]! - im[i]!);
+      if (d <= r * Math.max(mi, modulus(re[j]!, im[j]!))) {
         out[i]!.push(j);
         out[j]!.push(i);
       }
@@ -429,7 +430,7 @@ function verifiedCentre(
   y0 = real ? 0 : y0 / m;
   const separate: DdPoly[] = [];
   for (const k of members) if (im[k]! >= 0) separate.push(factor(re[k]!, im[k]!));
-  const outside = Math.hypot(x0, y0) > 1;
+  const outside = modulus(x0, y0) > 1;
   const limit =
     PREFILTER_RATIO * clusterRemainder(c, reversedC, outside, product(separate)) +
     PREFILTER_FLOOR * Number.EPSILON;
@@ -463,13 +464,13 @@ function verifiedCentre(
     if (!Number.isFinite(dx) || !Number.isFinite(dy)) break;
     x -= dx;
     y -= dy;
-    const step = Math.hypot(dx, dy);
-    if (step <= 2 * Number.EPSILON * Math.hypot(x, y) || step >= lastStep) break;
+    const step = modulus(dx, dy);
+    if (step <= 2 * Number.EPSILON * modulus(x, y) || step >= lastStep) break;
     lastStep = step;
   }
   if (real) y = 0;
   const atNewton =
-    Math.hypot(x - x0, y - y0) <= radius ? mergedRemainder(c, reversedC, outside, m, x, y) : Infinity;
+    modulus(x - x0, y - y0) <= radius ? mergedRemainder(c, reversedC, outside, m, x, y) : Infinity;
   const [best, size0]: [[number, number], number] =
     atNewton < atMean ? [[x, y], atNewton] : [[x0, y0], atMean];
   return size0 <= limit ? best : undefined;

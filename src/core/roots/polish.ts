@@ -13,7 +13,7 @@
 import { compensatedEvalWithDerivative } from './compensated.ts';
 import { logDerivative, relativeResidual } from './horner.ts';
 import { freezeLevel } from './aberth.ts';
-import { logDerivativeFromValues } from './scaleSafe.ts';
+import { logDerivativeFromValues, modulus } from './scaleSafe.ts';
 
 /** Polish a root when its condition number times ε (its forward-error estimate, relative) exceeds this. */
 export const POLISH_FORWARD_ERROR = 1e-14;
@@ -97,7 +97,7 @@ export function polishIllConditioned(
     if (zi[i]! < 0) continue;
     // κ = Σ|c_k||z|^k / (|z||p'(z)|) = 1 / (|z| |p'/p| residual), NaN (so polished) where p is exactly 0.
     logDerivative(c, absC, zr[i]!, zi[i]!, h);
-    const kappa = 1 / (Math.hypot(zr[i]!, zi[i]!) * Math.hypot(h[0]!, h[1]!) * h[2]!);
+    const kappa = 1 / (modulus(zr[i]!, zi[i]!) * modulus(h[0]!, h[1]!) * h[2]!);
     if (!(kappa * Number.EPSILON <= POLISH_FORWARD_ERROR)) active.push(i);
   }
   if (active.length === 0) return 0;
@@ -172,7 +172,7 @@ export function polishIllConditioned(
         const stepR = ar / ad;
         const stepI = -ai / ad;
         if (!Number.isFinite(stepR) || !Number.isFinite(stepI)) continue;
-        const step = Math.hypot(stepR, stepI);
+        const step = modulus(stepR, stepI);
         zr[i] = x - stepR;
         zi[i] = y - stepI;
         lastStep[i] = step;
@@ -188,7 +188,7 @@ export function polishIllConditioned(
             zi[m] = -zi[i]!;
           }
         }
-        if (step > 2 * Number.EPSILON * Math.hypot(x, y)) next.push(i);
+        if (step > 2 * Number.EPSILON * modulus(x, y)) next.push(i);
       }
       list = next;
     }
@@ -236,7 +236,7 @@ function unsettleRealRoots(zr: Float64Array, zi: Float64Array, active: number[],
     if (zi[i] !== 0 && !anywhere) continue;
     let near = Infinity;
     for (let j = 0; j < zr.length; j++) {
-      const d = Math.hypot(zr[i]! - zr[j]!, zi[i]! - zi[j]!);
+      const d = modulus(zr[i]! - zr[j]!, zi[i]! - zi[j]!);
       if (j !== i && d > 0) near = Math.min(near, d);
     }
     if (!Number.isFinite(near)) near = Math.max(1, Math.abs(zr[i]!)) * 1e-3;
@@ -254,7 +254,7 @@ function coincident(zr: Float64Array, zi: Float64Array, among: number[]): number
   const out: number[] = [];
   for (let a = 0; a < order.length; a++) {
     const i = order[a]!;
-    const tol = 4 * Number.EPSILON * Math.hypot(zr[i]!, zi[i]!);
+    const tol = 4 * Number.EPSILON * modulus(zr[i]!, zi[i]!);
     for (let b = a + 1; b < order.length && zr[order[b]!]! - zr[i]! <= tol; b++) {
       const j = order[b]!;
       if (Math.abs(zi[j]! - zi[i]!) <= tol) {
@@ -325,7 +325,7 @@ function restoreSymmetry(
       let j = -1;
       let dist = Infinity;
       for (const k of low) {
-        const dd = Math.hypot(zr[k]! - zr[i]!, zi[k]! + zi[i]!);
+        const dd = modulus(zr[k]! - zr[i]!, zi[k]! + zi[i]!);
         if (dd < dist) [j, dist] = [k, dd];
       }
       nearestLow.set(i, [j, dist]);
@@ -335,7 +335,7 @@ function restoreSymmetry(
       let j = -1;
       let dist = Infinity;
       for (const i of up) {
-        const dd = Math.hypot(zr[k]! - zr[i]!, zi[k]! + zi[i]!);
+        const dd = modulus(zr[k]! - zr[i]!, zi[k]! + zi[i]!);
         if (dd < dist) [j, dist] = [i, dd];
       }
       nearestUp.set(k, j);
@@ -365,7 +365,7 @@ function restoreSymmetry(
   for (const i of up) zi[i] = 0; // more roots above the axis than below: the surplus goes onto it
   for (const [i, j, dist] of pairs) {
     // Mates that agree to the last bits need no comparison; otherwise the better residual wins.
-    const agree = dist <= 4 * Number.EPSILON * Math.hypot(zr[i]!, zi[i]!);
+    const agree = dist <= 4 * Number.EPSILON * modulus(zr[i]!, zi[i]!);
     const keepI = agree || ev.residual(zr[i]!, zi[i]!) <= ev.residual(zr[j]!, zi[j]!);
     const r = keepI ? zr[i]! : zr[j]!;
     const m = keepI ? zi[i]! : -zi[j]!;
@@ -379,13 +379,13 @@ function restoreSymmetry(
 
 /** Whether root i lies so close to the real axis that it may be a real root polished slightly off it. */
 function nearAxis(zr: Float64Array, zi: Float64Array, i: number): boolean {
-  return Math.abs(zi[i]!) <= SNAP_CHECK * Math.hypot(zr[i]!, zi[i]!);
+  return Math.abs(zi[i]!) <= SNAP_CHECK * modulus(zr[i]!, zi[i]!);
 }
 
 /** Distance from root i to the nearest root other than i and j. */
 function nearestOther(zr: Float64Array, zi: Float64Array, i: number, j: number): number {
   let near = Infinity;
   for (let k = 0; k < zr.length; k++)
-    if (k !== i && k !== j) near = Math.min(near, Math.hypot(zr[k]! - zr[i]!, zi[k]! - zi[i]!));
+    if (k !== i && k !== j) near = Math.min(near, modulus(zr[k]! - zr[i]!, zi[k]! - zi[i]!));
   return near;
 }

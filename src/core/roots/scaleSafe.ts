@@ -7,16 +7,39 @@
 /** Largest exponent used, so that the scale and its reciprocal are both finite. */
 const LIMIT = 1000;
 
+/** The exponent field of a double, read through its bits (little-endian hosts; see HIGH). */
+const bits = new Float64Array(1);
+const words = new Uint32Array(bits.buffer);
+/** Index of the word holding the sign and exponent. */
+const HIGH = new Uint8Array(Float64Array.of(1).buffer)[7] === 0x3f ? 1 : 0;
+
 /**
  * A power of two s with s·max(|a|, |b|) in [1, 2) (clamped to 2^±1000; 1 for zero or non-finite input).
  * Multiplying by s is exact, so a quotient formed from scaled parts has the same bits as the unscaled one
- * wherever the unscaled one neither underflowed nor overflowed.
+ * wherever the unscaled one neither underflowed nor overflowed. The exponent is read from the bits (a
+ * logarithm and a power cost more than the evaluation they scale at low degree); subnormals take the
+ * logarithm.
  */
 export function powerOfTwoScale(a: number, b: number): number {
   const m = Math.max(Math.abs(a), Math.abs(b));
   if (!(m > 0 && m < Infinity)) return 1;
-  const k = Math.floor(Math.log2(m));
-  return 2 ** -Math.max(-LIMIT, Math.min(LIMIT, k));
+  bits[0] = m;
+  const e = (words[HIGH]! >>> 20) & 0x7ff;
+  const k = e === 0 ? Math.floor(Math.log2(m)) : e - 1023;
+  const t = -Math.max(-LIMIT, Math.min(LIMIT, k));
+  // 2^t built from its bits: t in [−1000, 1000] is a normal exponent.
+  words[HIGH] = (t + 1023) << 20;
+  words[1 - HIGH] = 0;
+  return bits[0]!;
+}
+
+/**
+ * |x + jy|: √(x² + y²) where the squares neither overflow nor underflow (about ten times faster than
+ * Math.hypot in V8, within an ulp of it), Math.hypot's scaled form elsewhere.
+ */
+export function modulus(x: number, y: number): number {
+  const s = x * x + y * y;
+  return s < 1e300 && s > 1e-290 ? Math.sqrt(s) : Math.hypot(x, y);
 }
 
 /**
