@@ -59,6 +59,8 @@ test('an equiripple low-pass of the least order designed in the page has linear 
   const big = Math.max(...b.map(Math.abs));
   for (let n = 0; n < b.length; n++) expect(Math.abs(b[n]! - b[b.length - 1 - n]!)).toBeLessThan(1e-10 * big);
   await expectMaskPass(page, true);
+  // every pole at the origin, and the banner says so in words rather than "largest pole radius 0"
+  await expect(page.getByTestId('stability')).toContainText('Stable · every pole at the origin (FIR)');
 
   // the group delay read-out says order/2 samples in the pass band and between the stop band's zeros
   for (const hz of [50, 333, 777]) {

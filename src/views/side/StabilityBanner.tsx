@@ -74,13 +74,19 @@ export function Banner({
         <strong className="pw-stability-title" role="status" aria-live="polite" aria-atomic="true">
           {TITLE[verdict]}
         </strong>
-        {hasPoles ? (
-          <>
-            {' · largest pole radius '}
-            <span className="pw-stability-radius">{formatNumber(s.maxPoleRadius, 6)}</span>
-          </>
-        ) : (
+        {!hasPoles ? (
           ' · no poles (FIR)'
+        ) : s.maxPoleRadius === 0 ? (
+          ' · every pole at the origin (FIR)'
+        ) : (
+          <>
+            {' · '}
+            {/* The phrase wraps as a whole: never the figure alone on the next line. */}
+            <span className="pw-stability-radius-phrase">
+              largest pole radius{' '}
+              <span className="pw-stability-radius">{formatNumber(s.maxPoleRadius, 6)}</span>
+            </span>
+          </>
         )}
         {(verdict !== 'stable' || s.rootsSuggested) && (
           <p className="pw-stability-reason" data-testid="stability-reason">
