@@ -14,6 +14,14 @@ test('the page opens on the demo design with its scenario stated', async ({ page
   await openWorkbench(page);
   await expect(page.getByRole('textbox', { name: 'Design name' })).toHaveValue(/Hopper scale/);
   await expect(page.getByLabel('About this design')).toHaveValue(/grain-hopper weighing station/);
+  // a note longer than its one line at rest ends in an ellipsis, not a letter cut in half
+  await page.setViewportSize({ width: 900, height: 800 });
+  const rest = await page.getByLabel('About this design').evaluate((el) => ({
+    overflows: el.scrollWidth > el.clientWidth,
+    ending: getComputedStyle(el).textOverflow,
+  }));
+  expect(rest).toEqual({ overflows: true, ending: 'ellipsis' });
+  await page.setViewportSize({ width: 1440, height: 900 });
   await expect(page.getByText('Check before you ship')).toBeVisible();
   await expect(stabilityBanner(page)).toContainText('Stable');
   await expect(page.getByRole('textbox', { name: 'Sample rate' })).toHaveValue('2');
