@@ -3,7 +3,7 @@ import { execFileSync } from 'node:child_process';
 import { writeFileSync } from 'node:fs';
 import { openWorkbench, readDesign, saveScreenshot } from './support/app.ts';
 import { downloadBytes } from './support/files.ts';
-import { rootAt, zToScreen } from './support/plane.ts';
+import { clickRoot, rootAt, zToScreen } from './support/plane.ts';
 import {
   downloadExport,
   exportPreview,
@@ -68,6 +68,19 @@ test.describe('taking the hum notches to fixed point', () => {
     expect((await readDesign(page)).implementation?.wordLength).toBe(12);
     await expect(page.getByTestId('q-format')).toHaveText('Q1.10');
     await expect(page.getByTestId('quantized-trace')).toBeVisible();
+
+    // A selected root's frequency label stands above the quantized line's key, never over it: the 50 Hz
+    // notch sits at the left of the plot, where the key is written.
+    await clickRoot(page, { kind: 'zero', index: 0 });
+    const label = await page.getByTestId('root-marker').locator('rect').boundingBox();
+    const key = await page.getByTestId('quantized-trace').locator('text').boundingBox();
+    expect(label && key).toBeTruthy();
+    const apart =
+      label!.x + label!.width <= key!.x ||
+      key!.x + key!.width <= label!.x ||
+      label!.y + label!.height <= key!.y ||
+      key!.y + key!.height <= label!.y;
+    expect(apart, `label ${JSON.stringify(label)} and key ${JSON.stringify(key)}`).toBe(true);
 
     const marks = await quantizedMarks(page);
     const poles = upper(marks, 'pole');

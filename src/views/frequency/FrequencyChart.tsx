@@ -4,6 +4,8 @@
  */
 import { useEffect, useId, useMemo, useRef, useState } from 'react';
 import { selectDisplayResponse } from '../../store/derived.ts';
+import { useCompare } from '../../store/compare.ts';
+import { selectShowQuantized } from '../../store/implementationDerived.ts';
 import { useWorkbench, workbenchStore } from '../../store/useWorkbench.ts';
 import { clampBandHz, shownBandHz } from '../../store/zoom.ts';
 import { useAxisZoom } from '../chart/useAxisZoom.ts';
@@ -82,6 +84,11 @@ export function FrequencyChart({ width, height, reading, onCursor, marker }: Fre
   const overlayClip = `pw-overlay-clip-${useId().replace(/:/g, '')}`;
 
   const response = useWorkbench(selectDisplayResponse);
+  // Keys along the magnitude plot's bottom edge: the quantized line's (or its "drawn again" note) and a
+  // pinned reference's.
+  const quantizedKey = useWorkbench(selectShowQuantized);
+  const referenceKey = useCompare((s) => s.reference !== null);
+  const keysBelow = quantizedKey || referenceKey;
   const layout = useMemo(() => frequencyLayout(width, height, second), [width, height, second]);
   const area = layout.plots[0]!.rect;
   const columns = Math.max(1, Math.round(area.right - area.left));
@@ -216,7 +223,7 @@ export function FrequencyChart({ width, height, reading, onCursor, marker }: Fre
           title={axis === 'log' ? 'Frequency (Hz, log)' : 'Frequency (Hz)'}
         />
         {marker && markerX >= area.left && markerX <= area.right ? (
-          <RootMarker x={markerX} hz={marker.hz} kind={marker.kind} rects={rects} />
+          <RootMarker x={markerX} hz={marker.hz} kind={marker.kind} rects={rects} keysBelow={keysBelow} />
         ) : null}
         {reading ? <Crosshair x={toPixel(xMap, reading.hz)} rects={rects} points={points} /> : null}
         {zoom.band ? (
