@@ -13,7 +13,13 @@ import {
   type TapZerosAnswer,
   type TapZerosEndpoint,
 } from '../../../src/views/firQuantized/tapZerosFinder.ts';
-import { serveJobs, type Endpoint, type JobRequest, type JobResponse } from '../../../src/workers/jobs.ts';
+import {
+  serveJobs,
+  type Endpoint,
+  type JobContext,
+  type JobRequest,
+  type JobResponse,
+} from '../../../src/workers/jobs.ts';
 import { TAP_ZEROS_JOB, tapZerosJob } from '../../../src/workers/tapZerosJob.ts';
 import { loadFixture } from '../../helpers/fixtures.ts';
 
@@ -203,11 +209,16 @@ describe("the worker's job over a message channel", () => {
       c.port2.close();
     }
   });
-  function served(): TapZerosFinder {
+  /** A finder served by the worker's job over a channel; `solved` hears each tap set whose zeros it found. */
+  function served(solved: (taps: readonly number[]) => void = () => undefined): TapZerosFinder {
     const channel = new MessageChannel();
     channels.push(channel);
     serveJobs(channel.port2 as unknown as Endpoint<JobRequest, JobResponse>, {
-      [TAP_ZEROS_JOB]: tapZerosJob as never,
+      [TAP_ZEROS_JOB]: (async (taps: readonly number[], ctx: JobContext) => {
+        const r = await tapZerosJob(taps, ctx);
+        solved(taps);
+        return r;
+      }) as never,
     });
     return new TapZerosFinder(() => channel.port1 as unknown as TapZerosEndpoint);
   }
@@ -227,6 +238,18 @@ describe("the worker's job over a message channel", () => {
     }
   });
 
+  it('taps changed several times in a row: only the last set is solved, and that is the answer', async () => {
+    const solved: number[] = [];
+    const f = served((taps) => solved.push(taps.length));
+    const sets = [LONG, LONG + 1, LONG + 2, LONG + 3].map((n) => tapsOf(n, n));
+    for (const taps of sets) f.want(taps);
+    const last = sets.at(-1)!;
+    const a = await found(f, last);
+    expect(zerosOf(a)).toEqual(tapZeros(last));
+    expect(solved).toEqual([last.length]);
+    for (const taps of sets.slice(0, -1)) expect(f.answer(taps)).toEqual({ status: 'finding' });
+  });
+
   it("the 129-tap equiripple fixture's quantized taps: numpy.roots' zeros, each within twice its error bound", async () => {
     interface Case {
       name: string;
@@ -237,7 +260,13 @@ describe("the worker's job over a message channel", () => {
     const c = loadFixture<Case[]>('fir_quantized').find((k) => k.codes.length === 129)!;
     const taps = c.codes.map((k) => k * 2 ** -c.fractionBits);
     // through the worker's job directly: the finder itself keeps 129 taps on the page
-    const { value } = await tapZerosJob(taps);
+    const ctx: JobContext = {
+      get: () => undefined,
+      set: () => undefined,
+      drop: () => undefined,
+      checkpoint: () => Promise.resolve(),
+    };
+    const { value } = await tapZerosJob(taps, ctx);
     const ours = value.zeros.flatMap((z) =>
       Array.from({ length: z.multiplicity }, () =>
         z.im === 0 ? [{ re: z.re, im: 0 }] : [z, { re: z.re, im: -z.im }],
