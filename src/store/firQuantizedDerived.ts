@@ -10,10 +10,10 @@
  * and the page's short tap sets use them.
  */
 import {
-  gridWithZeroAngles,
   quantizedTapValues,
   tapsMagnitude,
   tapZeros,
+  withZeroAngles,
   type TapsMagnitude,
   type TapZeros,
 } from '../core/fixed/firQuantized.ts';
@@ -93,9 +93,18 @@ export function selectFirQuantized(s: WorkbenchState): FirQuantized | null {
  * |H| of the taps on the grid, with points added at the angles of their zeros near the unit circle when the
  * zeros are known (null: the grid alone, so a notch may read shallower than it is).
  */
-export const tapsMagnitudeOn = memoLast(
-  (taps: readonly number[], zeros: TapZeros | null, grid: Float64Array): TapsMagnitude =>
-    tapsMagnitude(taps, zeros ? gridWithZeroAngles(grid, zeros.zeros) : grid),
+export function tapsMagnitudeOn(
+  taps: readonly number[],
+  zeros: TapZeros | null,
+  grid: Float64Array,
+): TapsMagnitude {
+  const plain = plainMagnitude(taps, grid);
+  return zeros ? refinedMagnitude(plain, taps, zeros) : plain;
+}
+const plainMagnitude = memoLast(tapsMagnitude);
+// the zeros' points added to the plain line already drawn while they were found, not the whole grid again
+const refinedMagnitude = memoLast((plain: TapsMagnitude, taps: readonly number[], zeros: TapZeros) =>
+  withZeroAngles(plain, taps, zeros.zeros),
 );
 
 /**
