@@ -436,14 +436,15 @@ test('a long FIR with a target: its quantized zeros are found in a worker while 
 
 test('a long FIR whose zeros worker cannot load: the zeros are found on the page and the key says so', async ({
   page,
-}) => {
+}, info) => {
   await page.route(/tapZeros\.worker/, (route) => route.abort('connectionfailed'));
   await page.goto(longFirLink());
   const layer = page.getByTestId('quantized-tap-zeros');
   await expect(layer).toBeVisible();
   await expect(page.getByTestId('quantized-tap-zeros-failure')).toHaveText(
-    'found on the page instead: the worker could not be started',
+    'the worker could not be started: zeros found on the page instead, which may pause at each change',
   );
+  await saveScreenshot(page, info, 'fir-long-zeros-worker-failed');
   await openTarget(page);
   const doc = JSON.parse(await exportPreview(page, 'JSON')) as { fixed: number[] };
   const marks = await quantizedMarks(page, 'quantized-tap-zeros');

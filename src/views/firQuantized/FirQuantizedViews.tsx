@@ -62,7 +62,7 @@ export function QuantizedTapZeros({ scale }: PlaneOverlayProps) {
       ) : null}
       {answer.failure ? (
         <QuantizedPlaneKey line={caveat ? 3 : 2} testId="quantized-tap-zeros-failure">
-          {`found on the page instead: ${answer.failure}`}
+          {`${answer.failure}: zeros found on the page instead, which may pause at each change`}
         </QuantizedPlaneKey>
       ) : null}
     </g>
