@@ -68,8 +68,11 @@ export class TapZerosFinder {
 
   /** What to draw for the taps in the state: their zeros (found now on the page if they go there) or "finding". */
   answer(taps: readonly number[], state: TapZerosFinderState = this.store.getState()): TapZerosAnswer {
-    if (this.onPage(taps, state))
-      return { status: 'found', zeros: zerosOfTaps(taps), where: 'page', failure: state.failure };
+    if (this.onPage(taps, state)) {
+      // the failure matters only to taps that would have gone to the worker
+      const failure = zerosOnPage(taps) ? null : state.failure;
+      return { status: 'found', zeros: zerosOfTaps(taps), where: 'page', failure };
+    }
     if (state.found && sameTaps(state.found.taps, taps))
       return { status: 'found', zeros: state.found.zeros, where: 'worker', failure: null };
     return { status: 'finding' };

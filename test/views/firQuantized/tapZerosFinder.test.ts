@@ -170,6 +170,8 @@ describe('a worker that fails', () => {
     f.want(tapsOf(LONG, 5));
     expect(w.runs()).toHaveLength(1);
     expect(f.answer(tapsOf(LONG, 5))).toMatchObject({ status: 'found', where: 'page' });
+    // short taps never needed the worker: their answer carries no failure
+    expect(f.answer(tapsOf(33))).toMatchObject({ status: 'found', where: 'page', failure: null });
   });
 
   it('a worker whose script does not load: the error event ends the wait, a late reply is ignored', async () => {
