@@ -48,11 +48,13 @@ const list = (k: string, all: readonly string[]) => env(k)?.split(',') ?? [...al
 const STEPS = Number(env('PW_DRAG_STEPS') ?? 120);
 /**
  * Orders to drag at; 'auto' is an auto-order elliptic design (the costliest designer to run again);
- * 'fir128' an order-128 equiripple FIR low-pass, whose dragged zero takes its reciprocal partner along.
+ * 'fir128' an order-128 equiripple FIR low-pass, whose dragged zero takes its reciprocal partner along; 'fir512'
+ * (any 'firN' above 128) an order-N least-squares FIR low-pass with the same bands (the equiripple exchange does
+ * not settle there), whose quantized-tap zeros, with a target set, are found in a worker.
  */
-type Order = number | 'auto' | 'fir128';
+type Order = number | 'auto' | `fir${number}`;
 const ORDERS: Order[] = list('PW_DRAG_ORDERS', ['2', '8', '32', '64', 'fir128']).map((o) =>
-  o === 'auto' || o === 'fir128' ? o : Number(o),
+  o === 'auto' || /^fir\d+$/.test(o) ? (o as Order) : Number(o),
 );
 const TAB_IDS = list('PW_DRAG_TABS', TABS) as (typeof TABS)[number][];
 const RECORDING = list('PW_DRAG_RECORDING', ['off', 'on']);
@@ -66,13 +68,13 @@ const FIRST_PORT = Number(env('PW_BENCH_PORT') ?? 4412);
  */
 function designOfOrder(order: Order): Design {
   const spec: DesignerSpec =
-    order === 'fir128'
+    typeof order === 'string' && order.startsWith('fir')
       ? ({
           kind: 'iir',
           fs: FS,
-          family: 'equiripple',
+          family: order === 'fir128' ? 'equiripple' : 'leastsquares',
           response: 'lowpass',
-          order: 128,
+          order: Number(order.slice(3)),
           passbandHz: [4000],
           stopbandHz: [5000],
           rippleDb: 1,
@@ -95,7 +97,7 @@ function designOfOrder(order: Order): Design {
             fs: FS,
             family: 'butterworth',
             response: 'lowpass',
-            order,
+            order: order as number,
             edgesHz: [6000],
             passbandHz: [4000],
             stopbandHz: [8000],
@@ -410,7 +412,7 @@ export async function benchDrag(): Promise<string> {
     }
     const version = browser.version();
     return [
-      `${STEPS}-step drag of a pole pair (40° along its circle and back) of an order-N Butterworth low-pass (designer and mask live), or for fir128 of a zero quadruplet (its stored zero inside the circle, the reciprocal following) of an order-128 equiripple FIR low-pass, one mouse move per frame, headless Chromium ${version} (software rendering), 1440×900; recording: a 10-minute 48 kHz 16-bit WAV loaded and shown before/after. Times in ms; load = 1-minute load average during the drag.`,
+      `${STEPS}-step drag of a pole pair (40° along its circle and back) of an order-N Butterworth low-pass (designer and mask live), or for fir128 (firN) of a zero quadruplet (its stored zero inside the circle, the reciprocal following) of an order-128 equiripple (order-N least-squares) FIR low-pass, one mouse move per frame, headless Chromium ${version} (software rendering), 1440×900; recording: a 10-minute 48 kHz 16-bit WAV loaded and shown before/after. Times in ms; load = 1-minute load average during the drag.`,
       '',
       '| build | recording | order | tab | shading | target | main-thread CPU median | p95 | main-thread tasks (wall) median | p95 | probe frame work median | p95 | event→painted median | p95 | drawn | release CPU | longest release task | load |',
       '| --- | --- | --: | --- | --- | --- | --: | --: | --: | --: | --: | --: | --: | --: | --- | --: | --: | --: |',

@@ -55,4 +55,8 @@ if (want('fixed')) {
   const { benchFixed } = await import('./fixed.ts');
   parts.push('## Fixed point: 10 minutes at 48 kHz', '', await benchFixed(), '');
 }
+if (want('zeros')) {
+  const { benchFirZeros } = await import('./firZeros.ts');
+  parts.push("## A long FIR's quantized-tap zeros", '', await benchFirZeros(), '');
+}
 console.log(parts.join('\n'));

@@ -17,6 +17,10 @@ import {
   pressDesign,
 } from './support/design.ts';
 import { zpkToTf } from '../src/core/system/transferFunction.ts';
+import { runDesigner, type DesignerSpec } from '../src/core/design/index.ts';
+import { DEFAULT_IMPLEMENTATION } from '../src/core/fixed/index.ts';
+import type { Design } from '../src/core/model/design.ts';
+import { encodeLink } from '../src/share/link/index.ts';
 import { clickRoot, dragRoot, rootAt } from './support/plane.ts';
 import type { Page } from '@playwright/test';
 import { zToScreen } from './support/plane.ts';
@@ -341,4 +345,109 @@ test('a target for an FIR draws the quantized taps: their zeros on the plane, th
   expect(after.fixed).not.toEqual(doc.fixed);
   const marksAfter = await quantizedMarks(page, 'quantized-tap-zeros');
   for (const m of marksAfter) expect(relativeResidual(after.fixed, m)).toBeLessThan(1e-9);
+});
+
+/**
+ * An order-512 least-squares low-pass at 48 kHz (an invented vibration logger's anti-alias filter ahead of a
+ * decimation), designed by the engine here and opened by link with 16-bit target settings.
+ */
+function longFirLink(): string {
+  const spec = {
+    kind: 'iir',
+    fs: 48000,
+    family: 'leastsquares',
+    response: 'lowpass',
+    order: 512,
+    passbandHz: [4000],
+    stopbandHz: [5000],
+    rippleDb: 1,
+    attenuationDb: 60,
+  } as DesignerSpec;
+  const r = runDesigner(spec);
+  if (!r.ok) throw new Error(r.error.message);
+  const design: Design = {
+    sampleRate: 48000,
+    zeros: r.value.zpk.zeros,
+    poles: r.value.zpk.poles,
+    gainRule: { kind: 'fixed', value: r.value.zpk.gain },
+    name: 'Vibration logger anti-alias, order 512',
+    note: r.value.note,
+    designer: spec,
+    implementation: DEFAULT_IMPLEMENTATION,
+  };
+  return `/#${encodeLink({ design, view: {} })}`;
+}
+
+/** Holds every request for the tap-zeros worker's script until the returned function is called. */
+async function holdZerosWorker(page: Page): Promise<() => void> {
+  let release: () => void = () => undefined;
+  const held = new Promise<void>((r) => (release = r));
+  await page.route(/tapZeros\.worker/, async (route) => {
+    await held;
+    await route.continue();
+  });
+  return release;
+}
+
+test('a long FIR with a target: its quantized zeros are found in a worker while the page goes on, then drawn', async ({
+  page,
+}, info) => {
+  const release = await holdZerosWorker(page);
+  await page.goto(longFirLink());
+  await page.waitForFunction(() => window.__polewright?.design().poles[0]?.multiplicity === 512);
+  // the worker is held back: the plane says the zeros are being found and draws none (of these taps or
+  // others); the dashed line is drawn on the plot's grid and says its notches follow
+  const finding = page.getByTestId('quantized-tap-zeros-finding-key');
+  await expect(finding).toHaveText(/^◇ quantized: finding the zeros of the 16-bit Q\d+\.\d+ taps…$/);
+  await expect(page.getByTestId('quantized-tap-zeros')).toHaveCount(0);
+  const trace = page.getByTestId('quantized-tap-trace');
+  await expect(trace).toHaveAttribute('data-finding', 'true');
+  await expect(trace).toContainText('notch depths follow once their zeros are found');
+  // meanwhile the page answers: the Target page opens and exports the taps
+  await openTarget(page);
+  const doc = JSON.parse(await exportPreview(page, 'JSON')) as { fixed: number[]; taps: number };
+  expect(doc.taps).toBe(513);
+  await saveScreenshot(page, info, 'fir-long-zeros-finding');
+
+  release();
+  const layer = page.getByTestId('quantized-tap-zeros');
+  await expect(layer).toBeVisible();
+  await expect(page.getByTestId('quantized-tap-zeros-finding')).toHaveCount(0);
+  await expect(page.getByTestId('quantized-tap-zeros-key')).toContainText('zeros of the 16-bit Q');
+  await expect(trace).not.toHaveAttribute('data-finding');
+  await expect(trace).not.toContainText('notch depths follow');
+  // the marks are the roots of the exported codes: 512 less the leading taps that round to 0
+  const check = async (codes: number[]) => {
+    const marks = await quantizedMarks(page, 'quantized-tap-zeros');
+    const lead = codes.findIndex((k) => k !== 0);
+    expect(marks.reduce((n, m) => n + m.multiplicity, 0)).toBe(512 - lead);
+    for (const m of marks) expect(relativeResidual(codes, m), `zero ${m.re} ${m.im}i`).toBeLessThan(1e-9);
+  };
+  await check(doc.fixed);
+  await saveScreenshot(page, info, 'fir-long-zeros-found');
+
+  // a shorter word: the zeros of the new codes replace the old (never the old marks under the new key)
+  await setCoefficientBits(page, 12);
+  await expect(page.getByTestId('quantized-tap-zeros-key')).toContainText('zeros of the 12-bit Q');
+  const after = JSON.parse(await exportPreview(page, 'JSON')) as { fixed: number[] };
+  expect(after.fixed).not.toEqual(doc.fixed);
+  await check(after.fixed);
+});
+
+test('a long FIR whose zeros worker cannot load: the zeros are found on the page and the key says so', async ({
+  page,
+}, info) => {
+  await page.route(/tapZeros\.worker/, (route) => route.abort('connectionfailed'));
+  await page.goto(longFirLink());
+  const layer = page.getByTestId('quantized-tap-zeros');
+  await expect(layer).toBeVisible();
+  await expect(page.getByTestId('quantized-tap-zeros-failure')).toHaveText(
+    'the worker could not be started: zeros found on the page instead, which may pause at each change',
+  );
+  await saveScreenshot(page, info, 'fir-long-zeros-worker-failed');
+  await openTarget(page);
+  const doc = JSON.parse(await exportPreview(page, 'JSON')) as { fixed: number[] };
+  const marks = await quantizedMarks(page, 'quantized-tap-zeros');
+  const lead = doc.fixed.findIndex((k) => k !== 0);
+  expect(marks.reduce((n, m) => n + m.multiplicity, 0)).toBe(512 - lead);
 });

@@ -85,6 +85,10 @@ describe('the first view', () => {
           'store/firDerived.ts',
           'store/firQuantizedDerived.ts',
           'views/firQuantized/FirQuantizedViews.tsx',
+          // the worker that finds a long tap set's zeros, and the page's side of it
+          'views/firQuantized/tapZerosFinder.ts',
+          'workers/tapZerosJob.ts',
+          'workers/tapZeros.worker.ts',
         ].includes(m),
     );
     expect(later).toEqual([]);

@@ -88,3 +88,33 @@ export function gridWithZeroAngles(grid: Float64Array, zeros: readonly Root[]): 
   for (let i = 0; i < all.length; i++) if (i === 0 || all[i] !== all[m - 1]) all[m++] = all[i]!;
   return all.slice(0, m);
 }
+
+/**
+ * `plain` (tapsMagnitude of the taps on `grid`) with the points at the angles of the zeros near the unit
+ * circle added: the same values tapsMagnitude gives on gridWithZeroAngles(grid, zeros), computing only the
+ * added points (the page draws the plain line while a long tap set's zeros are found, then this).
+ */
+export function withZeroAngles(
+  plain: TapsMagnitude,
+  taps: readonly number[],
+  zeros: readonly Root[],
+): TapsMagnitude {
+  const grid = plain.omega;
+  const all = gridWithZeroAngles(grid, zeros);
+  if (all === grid) return plain;
+  const n = all.length;
+  const magnitude = new Float64Array(n);
+  const magnitudeDb = new Float64Array(n);
+  for (let i = 0, j = 0; i < n; i++) {
+    if (j < grid.length && all[i] === grid[j]) {
+      magnitude[i] = plain.magnitude[j]!;
+      magnitudeDb[i] = plain.magnitudeDb[j]!;
+      j++;
+    } else {
+      const m = Math.sqrt(tapsMagnitudeSquaredAt(taps, all[i]!));
+      magnitude[i] = m;
+      magnitudeDb[i] = 20 * Math.log10(m);
+    }
+  }
+  return { omega: all, magnitude, magnitudeDb };
+}
