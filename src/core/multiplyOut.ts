@@ -38,6 +38,23 @@ export function multiplyOutDd(
 }
 
 /**
+ * 0 … m − 1 in bit-reversed order (the order an even/odd halving gives: 0, m/2, m/4, 3m/4, … for a power of
+ * two): taken in this order, items ranked by angle are spread evenly around the circle at every prefix.
+ */
+export function bitReversedOrder(m: number): Int32Array {
+  const out = new Int32Array(m);
+  let bits = 0;
+  while (1 << bits < m) bits++;
+  let at = 0;
+  for (let r = 0; r < 1 << bits; r++) {
+    let k = 0;
+    for (let b = 0; b < bits; b++) if (r & (1 << b)) k |= 1 << (bits - 1 - b);
+    if (k < m) out[at++] = k;
+  }
+  return out;
+}
+
+/**
  * Π factors (z − r) or z² − 2·re·z + (re² + im²) (the constant exact in double-double), taken in
  * bit-reversed order of their angle ranks (the order the even/odd halving would give), accumulated in place
  * in one double-double buffer of the final length. The double-double products and sums are Dekker's, written
@@ -53,13 +70,7 @@ function interleavedProduct(
   const lo = new Float64Array(length);
   hi[0] = 1;
   let deg = 0;
-  const m = order.length;
-  let bits = 0;
-  while (1 << bits < m) bits++;
-  for (let r = 0; r < 1 << bits; r++) {
-    let k = 0;
-    for (let b = 0; b < bits; b++) if (r & (1 << b)) k |= 1 << (bits - 1 - b);
-    if (k >= m) continue;
+  for (const k of bitReversedOrder(order.length)) {
     const f = order[k]!;
     const x = fr[f]!;
     const y = fi[f]!;

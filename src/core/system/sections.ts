@@ -7,10 +7,19 @@
  * One deliberate difference: scipy pads missing zeros with zeros at the origin, which advances the cascade by
  * (poles − zeros) samples. Here a padded zero is a "delay" (a zero at infinity): its section numerator is
  * shifted right instead, so the cascade is exactly H(z) = k·Π(z − zᵢ)/Π(z − pᵢ). Pairing is unchanged.
+ *
+ * A second one: with every pole at the origin (an FIR kept as roots) the sections' denominators are all
+ * alike and their order is free, and the zeros-only cascade in the pairing's order is numerically useless
+ * from order ~128 (an order-512 least-squares low-pass came out 1e84 off its taps: a prefix of the cascade,
+ * holding the zeros of one part of the circle, amplifies what the rest must then cancel). There the sections
+ * run in bit-reversed order of their zeros' angle ranks (core/multiplyOut.ts), so every prefix has zeros
+ * spread around the whole circle and its response stays a scaled likeness of the whole (order 512:
+ * 1e-12 of the largest tap).
  */
 import type { Root, Section, Zpk } from '../types.ts';
 import { rootCount } from './rootList.ts';
 import { NearestPoints } from './nearest.ts';
+import { bitReversedOrder } from '../multiplyOut.ts';
 
 /** How sections are formed when the order is odd: one extra pole/zero pair at the origin, or a first-order section. */
 export type SectionPairing = 'nearest' | 'keep-odd';
@@ -80,12 +89,35 @@ function pairInOrder(z: readonly Item[], p: readonly Item[]): Section[] {
   });
 }
 
-/** Second-order sections of the zpk (scipy zpk2sos pairing, exact delays), gain in the first section. */
+/**
+ * Second-order sections of the zpk (scipy zpk2sos pairing, exact delays), gain in the first section; with every
+ * pole at the origin, in bit-reversed order of their zeros' angles (see the file comment).
+ */
 export function zpkToSections(zpk: Zpk, opts: { pairing?: SectionPairing } = {}): Section[] {
-  const pairing = opts.pairing ?? 'nearest';
+  if (noRoots(zpk)) return [[zpk.gain, 0, 0, 1, 0, 0]];
+  const sections = pairSections(zpk, opts.pairing ?? 'nearest');
+  const ordered = zpk.poles.every((p) => p.re === 0 && p.im === 0) ? interleavedByAngle(sections) : sections;
+  return withGain(ordered, zpk.gain);
+}
+
+/** The sections in the pairing's own order (scipy's), gain in the first: what zpkToSections reorders. */
+export function pairedSections(zpk: Zpk, opts: { pairing?: SectionPairing } = {}): Section[] {
+  if (noRoots(zpk)) return [[zpk.gain, 0, 0, 1, 0, 0]];
+  return withGain(pairSections(zpk, opts.pairing ?? 'nearest'), zpk.gain);
+}
+
+function withGain(sections: Section[], gain: number): Section[] {
+  const first = sections[0]!;
+  for (let i = 0; i < 3; i++) first[i]! *= gain;
+  return sections;
+}
+
+const noRoots = (zpk: Zpk) => rootCount(zpk.zeros) === 0 && rootCount(zpk.poles) === 0;
+
+/** The sections of the pairing, without the gain (at least one root). */
+function pairSections(zpk: Zpk, pairing: SectionPairing): Section[] {
   const nz = rootCount(zpk.zeros);
   const np = rootCount(zpk.poles);
-  if (nz === 0 && np === 0) return [[zpk.gain, 0, 0, 1, 0, 0]];
   const n = Math.max(nz, np);
   const odd = n % 2 === 1 && pairing === 'nearest' ? 1 : 0;
   const z = items(zpk.zeros, [...zeroItems(np - nz > 0 ? np - nz : 0, true), ...zeroItems(odd, false)]);
@@ -101,9 +133,24 @@ export function zpkToSections(zpk: Zpk, opts: { pairing?: SectionPairing } = {})
   } catch {
     sections.splice(0, sections.length, ...pairInOrder(zAll, pAll));
   }
-  const first = sections[0]!;
-  for (let i = 0; i < 3; i++) first[i]! *= zpk.gain;
   return sections;
+}
+
+/** The angle in [0, π] of a section numerator's zeros (the upper one of a pair; the first of two reals). */
+function zeroAngle([b0, b1, b2]: Section): number {
+  if (b0 === 0) return b1 === 0 || -b2 / b1 >= 0 ? 0 : Math.PI; // a delay and at most one zero
+  const d = b1 * b1 - 4 * b0 * b2;
+  if (d < 0) return Math.atan2(Math.sqrt(-d), -b1 / Math.sign(b0));
+  // the larger root by size, taken without cancellation
+  const r = (-b1 - Math.sign(b1 || 1) * Math.sqrt(d)) / (2 * b0);
+  return r < 0 ? Math.PI : 0;
+}
+
+/** Sections whose denominators are alike, taken in bit-reversed order of their zeros' angle ranks. */
+function interleavedByAngle(sections: Section[]): Section[] {
+  const angle = sections.map(zeroAngle);
+  const rank = sections.map((_, i) => i).sort((a, b) => angle[a]! - angle[b]! || a - b);
+  return Array.from(bitReversedOrder(sections.length), (k) => sections[rank[k]!]!);
 }
 
 /** Distance from the unit circle, by which poles are taken (closest first). */

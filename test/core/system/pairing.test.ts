@@ -1,11 +1,15 @@
 /**
  * The sorted pairing of zpkToSections gives exactly the sections of the straightforward scan it replaced
  * (scanPairing.ts, which follows scipy's zpk2sos loop root by root), on random root sets full of ties:
- * repeated roots, roots at the origin, equal distances from the circle, real and complex mixed.
+ * repeated roots, roots at the origin, equal distances from the circle, real and complex mixed. (With every
+ * pole at the origin zpkToSections then reorders the same sections: pairedSections is the pairing alone, and
+ * zpkToSections must hold the same sections.)
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { zpkToSections } from '../../../src/core/system/index.ts';
+import { pairedSections, type SectionPairing } from '../../../src/core/system/sections.ts';
+import type { Section } from '../../../src/core/types.ts';
 import type { Root } from '../../../src/core/types.ts';
 import { scanPairing } from './scanPairing.ts';
 
@@ -22,6 +26,15 @@ const root: fc.Arbitrary<Root> = fc.oneof(
   }),
 );
 
+/** zpkToSections holds the pairing's sections (in its own order): compared at gain 1, as sorted lists. */
+function expectSameSections(zpk: { zeros: Root[]; poles: Root[] }, pairing: SectionPairing = 'nearest') {
+  const unit = { ...zpk, gain: 1 };
+  const key = (s: Section) => JSON.stringify(s);
+  expect(zpkToSections(unit, { pairing }).map(key).sort()).toEqual(
+    pairedSections(unit, { pairing }).map(key).sort(),
+  );
+}
+
 describe('sorted pairing', () => {
   it('matches the scan on 3000 random root sets, bit for bit', () => {
     fc.assert(
@@ -32,7 +45,9 @@ describe('sorted pairing', () => {
         fc.constantFrom('nearest' as const, 'keep-odd' as const),
         (zeros, poles, gain, pairing) => {
           const zpk = { zeros, poles, gain };
-          expect(zpkToSections(zpk, { pairing })).toEqual(scanPairing(zpk, { pairing }));
+          const paired = pairedSections(zpk, { pairing });
+          expect(paired).toEqual(scanPairing(zpk, { pairing }));
+          expectSameSections(zpk, pairing);
         },
       ),
       { seed: 18_003, numRuns: 3000 },
@@ -49,7 +64,8 @@ describe('sorted pairing', () => {
       poles: [{ re: 0, im: 0, multiplicity: 1024 }],
       gain: 1,
     };
-    expect(zpkToSections(fir)).toEqual(scanPairing(fir));
+    expect(pairedSections(fir)).toEqual(scanPairing(fir));
+    expectSameSections(fir);
     const comb = {
       zeros: fir.zeros.map((z) => ({ ...z, re: z.re / 0.99, im: z.im / 0.99 })),
       poles: fir.zeros,
