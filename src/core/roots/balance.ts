@@ -1,6 +1,6 @@
 /**
  * Exact power-of-two scaling of a polynomial's coefficients and of its variable, for coefficients that would
- * otherwise lie outside the normal range of doubles. A high-degree polynomial whose trailing coefficients are
+ * otherwise lie outside the normal range of doubles or near its ends. A high-degree polynomial whose trailing coefficients are
  * subnormal (a Butterworth denominator of degree 768 or 1024 with its cutoff at half of Nyquist: its constant
  * term is below 1e-320) loses every bound the iteration and the polish rely on: Horner's rounding is no longer
  * relative where the values are subnormal, and double-double's error-free products underflow, so the Aberth
@@ -13,11 +13,15 @@
 /** Exponents of the scaled coefficients are kept at most this (room for Horner's sums and derivatives). */
 const HIGHEST = 900;
 
-/** ... and at least this (room below for double-double's error terms of products with small powers). */
+/**
+ * ... and at least this: room below for double-double's error terms (about 2^-106 of a product), which
+ * underflow for coefficients near 2^-1000 even though those are normal (z^300 − 2^-1000 ran into the sweep
+ * limit before this scaling).
+ */
 const LOWEST = -900;
 
-/** Smallest positive normal double, 2^-1022. */
-const MIN_NORMAL = 2 ** -1022;
+const TOP = 2 ** HIGHEST;
+const BOTTOM = 2 ** LOWEST;
 
 /** The scaling chosen for a polynomial: coefficient k is multiplied by 2^(shift + zoom·k). */
 export interface Balance {
@@ -29,19 +33,21 @@ export interface Balance {
 
 /**
  * The scaling for the n + 1 descending coefficients p[first..first + n] (p[first] and p[first + n] nonzero):
- * zoom 0 and the shift that brings the leading coefficient to about 1 when every coefficient so scaled is a
- * finite normal double (the usual case, then nothing else changes), otherwise the integer zoom that narrows
- * the range of exponents most and a shift that places it inside [LOWEST, HIGHEST], if one does; else zoom 0.
+ * zoom 0 and the shift that brings the leading coefficient to about 1 when every nonzero coefficient so
+ * scaled lies in [2^LOWEST, 2^HIGHEST] (the usual case, then nothing else changes), otherwise the integer
+ * zoom that narrows the range of exponents most and a shift that places it inside [LOWEST, HIGHEST], if one
+ * does; else zoom 0.
  */
 export function chooseBalance(p: ArrayLike<number>, first: number, n: number): Balance {
   const shift = -Math.round(Math.log2(Math.abs(p[first]!)));
   const plain = 2 ** shift;
-  let normal = true;
-  for (let k = 0; k <= n && normal; k++) {
+  let inRange = true;
+  for (let k = 0; k <= n && inRange; k++) {
     const v = Math.abs(p[first + k]! * plain);
-    if (v !== 0 && !(v >= MIN_NORMAL && v < Infinity)) normal = false;
+    if (v !== 0 && !(v >= BOTTOM && v <= TOP)) inRange = false;
   }
-  if (normal) return { shift, zoom: 0 };
+  if (inRange) return { shift, zoom: 0 };
+
   const exps: number[] = [];
   const at: number[] = [];
   for (let k = 0; k <= n; k++) {

@@ -46,12 +46,14 @@ describe('chooseBalance', () => {
 
 describe('findRoots with a subnormal constant coefficient', () => {
   // z^n − 2^e: the roots are 2^(e/n)·exp(2πjk/n), k = 0 … n − 1 (de Moivre). Before the variable was scaled,
-  // degree 16 with e = −1074 came back with moduli 4 % off and not converged, degree 1024 took 7 s.
+  // degree 16 with e = −1074 came back with moduli 4 % off and not converged, degree 1024 took 7 s; with
+  // e = −1000 (a normal constant, but double-double's error terms underflow) degree 300 did not converge.
   it.each([
     [16, -1074],
     [16, -1060],
     [64, -1074],
     [300, -1060],
+    [300, -1000],
   ])('finds the %i roots of z^n − 2^%i to the last bits', (n, e) => {
     const p = new Float64Array(n + 1);
     p[0] = 1;
