@@ -14,6 +14,7 @@ import { startingPoints } from '../src/core/roots/start.ts';
 import { polishIllConditioned } from '../src/core/roots/polish.ts';
 import { symmetrizeConjugates } from '../src/core/roots/conjugate.ts';
 import { findMultipleRoots, listGrouped } from '../src/core/roots/multiplicity.ts';
+import { applyBalance, chooseBalance } from '../src/core/roots/balance.ts';
 import { familiesNamed } from './rootFamilies.ts';
 import { median, threadCpuSpan } from './timing.ts';
 
@@ -35,10 +36,10 @@ function perCall(fn: () => void): number {
   return median(xs);
 }
 
-/** The scaled coefficients findRoots works on (power-of-two scale, no zero roots in these families). */
+/** The scaled coefficients findRoots works on (roots/balance.ts; no zero roots in these families). */
 function scaled(p: Float64Array): Float64Array {
-  const s = 2 ** -Math.round(Math.log2(Math.abs(p[0]!)));
-  return p.map((v) => v * s);
+  const n = p.length - 1;
+  return applyBalance(p, 0, n, chooseBalance(p, 0, n));
 }
 
 export function benchRootStages(

@@ -32,7 +32,7 @@ const SETTLE_MS = 300;
  * garbage-collector and compiler helper threads (process.cpuUsage does not), while numpy.roots runs wholly
  * on its calling thread (OpenBLAS limited to one thread).
  */
-interface Timing {
+export interface Timing {
   wall: number;
   thread: number;
 }
@@ -45,7 +45,7 @@ function timeOurs(p: Float64Array, inner: number): Timing {
   return { wall: wallMs / inner, thread: threadMs / inner };
 }
 
-interface NumpyServer {
+export interface NumpyServer {
   version: string;
   time: (i: number, inner: number) => Promise<Timing>;
   roots: (i: number) => Promise<{ re: number[]; im: number[] }>;
@@ -53,7 +53,7 @@ interface NumpyServer {
 }
 
 /** A python3 process answering timing and root requests for numpy.roots (see bench/numpy_roots.py). */
-async function startNumpy(file: string): Promise<NumpyServer> {
+export async function startNumpy(file: string): Promise<NumpyServer> {
   const script = join(fileURLToPath(new URL('.', import.meta.url)), 'numpy_roots.py');
   const child = spawn('python3', [script, file], {
     stdio: ['pipe', 'pipe', 'inherit'],

@@ -8,6 +8,8 @@ const want = (name: string) => only.length === 0 || only.includes(name);
 if (want('roots')) {
   const { benchRoots } = await import('./roots.ts');
   parts.push('## Root finding (ours vs numpy.roots)', '', await benchRoots(), '');
+  const { benchRootsHighDegree } = await import('./rootsHighDegree.ts');
+  parts.push('### The truth fixtures of degree 768 and 1024', '', await benchRootsHighDegree(), '');
 }
 if (want('stability')) {
   const { benchStability } = await import('./stability.ts');

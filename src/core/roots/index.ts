@@ -13,6 +13,7 @@ import { symmetrizeConjugates } from './conjugate.ts';
 import { findMultipleRoots, listGrouped } from './multiplicity.ts';
 import { reseatSharedRoots } from './reseat.ts';
 import { refindMisfits } from './misfits.ts';
+import { applyBalance, chooseBalance, timesPowerOfTwo } from './balance.ts';
 
 export { rootsBackwardError } from './backwardError.ts';
 
@@ -60,11 +61,11 @@ export function findRoots(p: Poly, options: RootsOptions = {}): RootsResult {
   while (p[tail] === 0) tail--;
   const origin = p.length - 1 - tail;
   const n = tail - lead;
-  const c = new Float64Array(n + 1);
-  // Scale by a power of two only, which is exact: dividing by the leading coefficient would round every
-  // coefficient and can turn a tight cluster of distinct roots into an exact multiple root.
-  const scale = 2 ** -Math.round(Math.log2(Math.abs(p[lead]!)));
-  for (let k = 0; k <= n; k++) c[k] = p[lead + k]! * scale;
+  // Scale by powers of two only, which is exact: dividing by the leading coefficient would round every
+  // coefficient and can turn a tight cluster of distinct roots into an exact multiple root. Where some
+  // coefficient would be subnormal, the variable is scaled too (roots/balance.ts), and the roots back at the end.
+  const balance = chooseBalance(p, lead, n);
+  const c = applyBalance(p, lead, n, balance);
   const re = new Float64Array(n + origin);
   const im = new Float64Array(n + origin);
   let converged = true;
@@ -90,6 +91,17 @@ export function findRoots(p: Poly, options: RootsOptions = {}): RootsResult {
     sameValues(zr, symmetricR) && sameValues(zi, symmetricI) ? firstMate : symmetrizeConjugates(c, zr, zi);
   const multiple = findMultipleRoots(c, zr, zi, mate);
   const grouped = listGrouped(zr, zi, multiple);
+  if (balance.zoom !== 0) {
+    const back = -balance.zoom;
+    for (let i = 0; i < n; i++) {
+      zr[i] = timesPowerOfTwo(zr[i]!, back);
+      zi[i] = timesPowerOfTwo(zi[i]!, back);
+    }
+    for (const g of grouped) {
+      g.re = timesPowerOfTwo(g.re, back);
+      g.im = timesPowerOfTwo(g.im, back);
+    }
+  }
   if (origin > 0) grouped.push({ re: 0, im: 0, multiplicity: origin });
   return { re, im, grouped, atInfinity: lead, zeroPolynomial: false, converged, iterations };
 }
