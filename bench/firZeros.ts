@@ -19,6 +19,7 @@ import { runDesigner, type DesignerSpec } from '../src/core/design/index.ts';
 import { DEFAULT_IMPLEMENTATION } from '../src/core/fixed/index.ts';
 import type { Design } from '../src/core/model/design.ts';
 import { tfToZpk } from '../src/core/system/fromCoefficients.ts';
+import type { Zpk } from '../src/core/types.ts';
 import { encodeLink } from '../src/share/link/codec.ts';
 import { serve, stopServer, traceDrag, waitForServer, type Build } from './drag.ts';
 import { tasksAfterMark } from './dragTrace.ts';
@@ -46,17 +47,7 @@ function longFir(order: number): Design {
     } as DesignerSpec;
     const r = runDesigner(spec);
     if (!r.ok) throw new Error(r.error.message);
-    const z = r.value.zpk;
-    const name = `Bench FIR order ${order}`;
-    return {
-      sampleRate: FS,
-      zeros: z.zeros,
-      poles: z.poles,
-      gainRule: { kind: 'fixed', value: z.gain },
-      name,
-      note: '',
-      implementation: DEFAULT_IMPLEMENTATION,
-    };
+    return asDesign(order, r.value.zpk);
   }
   // a Hamming-window sinc low-pass, cut-off 4.5 kHz (common practice), typed as its taps
   const fc = 4500 / FS;
@@ -65,14 +56,17 @@ function longFir(order: number): Design {
     const sinc = k === 0 ? 2 * fc : Math.sin(2 * Math.PI * fc * k) / (Math.PI * k);
     return sinc * (0.54 - 0.46 * Math.cos((2 * Math.PI * n) / order));
   });
-  const z = tfToZpk({ b, a: [1] });
-  const name = `Bench FIR order ${order}`;
+  return asDesign(order, tfToZpk({ b, a: [1] }));
+}
+
+/** The roots as a design at 48 kHz with 16-bit target settings. */
+function asDesign(order: number, z: Zpk): Design {
   return {
     sampleRate: FS,
     zeros: z.zeros,
     poles: z.poles,
     gainRule: { kind: 'fixed', value: z.gain },
-    name,
+    name: `Bench FIR order ${order}`,
     note: '',
     implementation: DEFAULT_IMPLEMENTATION,
   };
