@@ -358,27 +358,37 @@ function row(
   return `| ${build} | ${rec} | ${order} | ${tab} | ${shading} | ${target} | ${stats(r.cpu)} | ${stats(r.wall)} | ${probe('work')} | ${probe('latency')} | ${drawn}/${r.samples.length} | ${release} | ${r.load.toFixed(1)} |`;
 }
 
-/** Runs the benchmark and returns a markdown table (times in ms). */
-export async function benchDrag(): Promise<string> {
-  const builds: Build[] = [];
+/**
+ * The builds a page benchmark compares, from port `firstPort` on: PW_DISTS=name=dir,… (built folders), else
+ * this tree's (PW_DIST names a build folder; without it the tree is built now).
+ */
+export function buildsFromEnv(firstPort: number): Build[] {
   const many = env('PW_DISTS');
-  if (many) {
-    many.split(',').forEach((pair, i) => {
+  if (many)
+    return many.split(',').map((pair, i) => {
       const [name, dir] = pair.split('=');
-      builds.push({ name: name!, dir, port: FIRST_PORT + i });
+      return { name: name!, dir, port: firstPort + i };
     });
-  } else {
-    const dir = env('PW_DIST');
-    if (!dir) execFileSync('npx', ['vite', 'build', '--logLevel', 'error'], { cwd: ROOT, stdio: 'inherit' });
-    builds.push({ name: 'this', dir, port: FIRST_PORT });
-  }
-  const tmp = mkdtempSync(join(tmpdir(), 'pw-drag-'));
-  const recording = RECORDING.includes('on') ? writeRecording(tmp) : null;
+  const dir = env('PW_DIST');
+  if (!dir) execFileSync('npx', ['vite', 'build', '--logLevel', 'error'], { cwd: ROOT, stdio: 'inherit' });
+  return [{ name: 'this', dir, port: firstPort }];
+}
+
+/** Serves every build and opens one browser that may reach their ports. */
+export async function serveBuilds(builds: Build[]): Promise<Browser> {
   for (const b of builds) b.server = await serve(b);
-  const browser = await chromium.launch({
+  return chromium.launch({
     executablePath: CHROMIUM_PATH,
     args: [...CHROMIUM_ARGS, `--explicitly-allowed-ports=${builds.map((b) => b.port).join(',')}`],
   });
+}
+
+/** Runs the benchmark and returns a markdown table (times in ms). */
+export async function benchDrag(): Promise<string> {
+  const builds = buildsFromEnv(FIRST_PORT);
+  const tmp = mkdtempSync(join(tmpdir(), 'pw-drag-'));
+  const recording = RECORDING.includes('on') ? writeRecording(tmp) : null;
+  const browser = await serveBuilds(builds);
   const rows: string[] = [];
   try {
     for (const b of builds) await waitForServer(`http://127.0.0.1:${b.port}/`, 30_000);

@@ -10,22 +10,19 @@
  * working tree). PW_ZEROS_ORDERS=512,1024 (512: the designer's least-squares low-pass; 1024: a Hamming-window
  * sinc low-pass typed as taps), PW_ZEROS_STEPS=8 key presses per build and order, PW_BENCH_PORT=4412.
  */
-import { execFileSync } from 'node:child_process';
 import { loadavg } from 'node:os';
 import { fileURLToPath } from 'node:url';
-import { chromium, type Browser, type Page } from '@playwright/test';
-import { CHROMIUM_ARGS, CHROMIUM_PATH } from '../e2e/support/chromium.ts';
+import type { Browser, Page } from '@playwright/test';
 import { runDesigner, type DesignerSpec } from '../src/core/design/index.ts';
 import { DEFAULT_IMPLEMENTATION } from '../src/core/fixed/index.ts';
 import type { Design } from '../src/core/model/design.ts';
 import { tfToZpk } from '../src/core/system/fromCoefficients.ts';
 import type { Zpk } from '../src/core/types.ts';
 import { encodeLink } from '../src/share/link/codec.ts';
-import { serve, stopServer, traceDrag, waitForServer, type Build } from './drag.ts';
+import { buildsFromEnv, serveBuilds, stopServer, traceDrag, waitForServer, type Build } from './drag.ts';
 import { tasksAfterMark } from './dragTrace.ts';
 import { cell, median } from './timing.ts';
 
-const ROOT = fileURLToPath(new URL('..', import.meta.url));
 const env = (k: string) => process.env[k];
 const ORDERS = (env('PW_ZEROS_ORDERS') ?? '512,1024').split(',').map(Number);
 const STEPS = Number(env('PW_ZEROS_STEPS') ?? 8);
@@ -115,24 +112,8 @@ async function measure(browser: Browser, b: Build, order: number): Promise<Step[
 }
 
 export async function benchFirZeros(): Promise<string> {
-  const builds: Build[] = [];
-  const port = Number(env('PW_BENCH_PORT') ?? 4412);
-  const many = env('PW_DISTS');
-  if (many)
-    many.split(',').forEach((pair, i) => {
-      const [name, dir] = pair.split('=');
-      builds.push({ name: name!, dir, port: port + i });
-    });
-  else {
-    const dir = env('PW_DIST');
-    if (!dir) execFileSync('npx', ['vite', 'build', '--logLevel', 'error'], { cwd: ROOT, stdio: 'inherit' });
-    builds.push({ name: 'this', dir, port });
-  }
-  for (const b of builds) b.server = await serve(b);
-  const browser = await chromium.launch({
-    executablePath: CHROMIUM_PATH,
-    args: [...CHROMIUM_ARGS, `--explicitly-allowed-ports=${builds.map((b) => b.port).join(',')}`],
-  });
+  const builds = buildsFromEnv(Number(env('PW_BENCH_PORT') ?? 4412));
+  const browser = await serveBuilds(builds);
   const rows: string[] = [];
   try {
     for (const b of builds) await waitForServer(`http://127.0.0.1:${b.port}/`, 30_000);
