@@ -125,14 +125,22 @@ function pairUp(
   const keepI =
     gap <= PAIR_AGREEMENT * modulus(re[i]!, im[i]!) ||
     relativeResidual(c, re[i]!, im[i]!) <= relativeResidual(c, re[j]!, im[j]!);
+  makeMirrors(re, im, i, j, keepI);
+  mate[i] = j;
+  mate[j] = i;
+}
+
+/**
+ * Makes i (upper) and j (lower) exact mirrors: both take the value of i when keepI (j its conjugate), else
+ * of j (i its conjugate).
+ */
+export function makeMirrors(re: Float64Array, im: Float64Array, i: number, j: number, keepI: boolean): void {
   const r = keepI ? re[i]! : re[j]!;
   const m = keepI ? im[i]! : -im[j]!;
   re[i] = r;
   re[j] = r;
   im[i] = m;
   im[j] = -m;
-  mate[i] = j;
-  mate[j] = i;
 }
 
 /** Position in lower (sorted by real part) of the unused root nearest to x + i·y, or -1. */

@@ -14,6 +14,7 @@ import { aberthCorrection } from './aberth.ts';
 import { AccurateLogDerivative } from './reseat.ts';
 import { MultiPrecisionEvaluator } from './multiPrecision.ts';
 import { setBackwardError } from './setBackwardError.ts';
+import { makeMirrors } from './conjugate.ts';
 
 /** Aberth's correction of the approximation being moved (aberthCorrection). */
 const correction = new Float64Array(2);
@@ -178,13 +179,7 @@ function restoreSymmetry(ev: Evaluator, zr: Float64Array, zi: Float64Array, move
       }
       taken.add(k);
       taken.add(i);
-      const keepUpper = ev.modulus(zr[i]!, zi[i]!) <= ev.modulus(zr[k]!, zi[k]!);
-      const r = keepUpper ? zr[i]! : zr[k]!;
-      const m = keepUpper ? zi[i]! : -zi[k]!;
-      zr[i] = r;
-      zr[k] = r;
-      zi[i] = m;
-      zi[k] = -m;
+      makeMirrors(zr, zi, i, k, ev.modulus(zr[i]!, zi[i]!) <= ev.modulus(zr[k]!, zi[k]!));
     }
     if (rest.length === open.length) break;
     open = rest;

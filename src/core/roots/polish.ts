@@ -14,6 +14,7 @@ import { compensatedEvalWithDerivative } from './compensated.ts';
 import { logDerivative, relativeResidual } from './horner.ts';
 import { freezeLevel } from './aberth.ts';
 import { logDerivativeFromValues, modulus } from './scaleSafe.ts';
+import { makeMirrors } from './conjugate.ts';
 
 /** Polish a root when its condition number times ε (its forward-error estimate, relative) exceeds this. */
 export const POLISH_FORWARD_ERROR = 1e-14;
@@ -366,13 +367,7 @@ function restoreSymmetry(
   for (const [i, j, dist] of pairs) {
     // Mates that agree to the last bits need no comparison; otherwise the better residual wins.
     const agree = dist <= 4 * Number.EPSILON * modulus(zr[i]!, zi[i]!);
-    const keepI = agree || ev.residual(zr[i]!, zi[i]!) <= ev.residual(zr[j]!, zi[j]!);
-    const r = keepI ? zr[i]! : zr[j]!;
-    const m = keepI ? zi[i]! : -zi[j]!;
-    zr[i] = r;
-    zr[j] = r;
-    zi[i] = m;
-    zi[j] = -m;
+    makeMirrors(zr, zi, i, j, agree || ev.residual(zr[i]!, zi[i]!) <= ev.residual(zr[j]!, zi[j]!));
   }
   for (const k of lower) if (!taken[k]) zi[k] = 0;
 }
