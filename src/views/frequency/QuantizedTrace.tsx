@@ -18,6 +18,7 @@ import { linePath } from '../chart/paths.ts';
 import { toPixels } from '../chart/pixels.ts';
 import type { MagnitudeOverlayProps } from './overlays.ts';
 import { omegaGridToHz } from '../../core/units.ts';
+import { QuantizedKeyText } from '../shared/QuantizedKeyText.tsx';
 
 const COLOUR = 'var(--pw-quantized)';
 
@@ -51,18 +52,9 @@ export function QuantizedTraceKey({
   testId?: string;
 }) {
   return (
-    <text
-      x={rect.left + 6}
-      y={rect.bottom - 6}
-      fill={COLOUR}
-      fontSize={11}
-      stroke="#fff"
-      strokeWidth={3}
-      paintOrder="stroke"
-      data-testid={testId}
-    >
+    <QuantizedKeyText x={rect.left + 6} y={rect.bottom - 6} testId={testId}>
       {children}
-    </text>
+    </QuantizedKeyText>
   );
 }
 

@@ -13,6 +13,7 @@ import {
   selectShowQuantized,
 } from '../../store/implementationDerived.ts';
 import { useWorkbench } from '../../store/useWorkbench.ts';
+import { QuantizedKeyText } from '../shared/QuantizedKeyText.tsx';
 import type { PlaneOverlayProps } from './overlays.ts';
 
 /** Half-size of a quantized mark, pixels (the design's own marks are 6). */
@@ -67,18 +68,9 @@ export function QuantizedPlaneKey({
   line?: number;
 }) {
   return (
-    <text
-      x={8}
-      y={32 + 14 * (line - 1)}
-      fill={COLOUR}
-      fontSize={11}
-      stroke="#fff"
-      strokeWidth={3}
-      paintOrder="stroke"
-      data-testid={testId}
-    >
+    <QuantizedKeyText x={8} y={32 + 14 * (line - 1)} testId={testId}>
       {children}
-    </text>
+    </QuantizedKeyText>
   );
 }
 
