@@ -13,8 +13,7 @@ import { join } from 'node:path';
 import { createInterface } from 'node:readline';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { findRoots, rootsBackwardError } from '../src/core/roots/index.ts';
-import { setBackwardError } from '../src/core/roots/setBackwardError.ts';
-import type { Root } from '../src/core/types.ts';
+import { groupedSetBackwardError, setBackwardError } from '../src/core/roots/setBackwardError.ts';
 import { familiesNamed } from './rootFamilies.ts';
 import { median, threadCpuSpan } from './timing.ts';
 
@@ -106,12 +105,7 @@ export async function benchRoots(family = '', degrees: readonly number[] = DEGRE
     for (const [i, { name, n, p }] of cases.entries()) {
       const res = findRoots(p);
       const berr = rootsBackwardError(p, res.re, res.im);
-      const reported = res.grouped.flatMap((g) => new Array<Root>(g.multiplicity).fill(g));
-      const setErr = setBackwardError(
-        p,
-        reported.map((g) => g.re),
-        reported.map((g) => g.im),
-      );
+      const setErr = groupedSetBackwardError(p, res.grouped);
       const theirRoots = await numpy.roots(i);
       const numpyBerr = rootsBackwardError(p, theirRoots.re, theirRoots.im);
       const numpySetErr = setBackwardError(p, theirRoots.re, theirRoots.im);

@@ -17,7 +17,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import type { RootsResult } from '../src/core/roots/index.ts';
-import { setBackwardError } from '../src/core/roots/setBackwardError.ts';
+import { groupedSetBackwardError } from '../src/core/roots/setBackwardError.ts';
 import { familiesNamed } from './rootFamilies.ts';
 import { median, threadCpuSpan } from './timing.ts';
 
@@ -29,17 +29,6 @@ const TARGET_MS = 4;
 const ROUNDS = 21;
 /** Warm-up of both sides over all cases before timing, ms of wall time. */
 const WARM_UP_MS = 3000;
-
-function setError(p: Float64Array, r: RootsResult): number {
-  const re: number[] = [];
-  const im: number[] = [];
-  for (const g of r.grouped)
-    for (let k = 0; k < g.multiplicity; k++) {
-      re.push(g.re);
-      im.push(g.im);
-    }
-  return setBackwardError(p, re, im);
-}
 
 function sameRoots(a: RootsResult, b: RootsResult): boolean {
   if (a.grouped.length !== b.grouped.length) return false;
@@ -104,7 +93,7 @@ export async function compareRoots(rev: string, family = '', degrees = [8, 16, 3
       const ma = median(a);
       const mb = median(b);
       rows.push(
-        `| ${name} | ${n} | ${ma.toFixed(4)} | ${mb.toFixed(4)} | ${(mb / ma).toFixed(3)} | ${median(a.map((x, k) => b[k]! / x)).toFixed(3)} | ${setError(p, there).toExponential(1)} | ${setError(p, here).toExponential(1)} | ${sameRoots(here, there) ? 'yes' : 'no'} |`,
+        `| ${name} | ${n} | ${ma.toFixed(4)} | ${mb.toFixed(4)} | ${(mb / ma).toFixed(3)} | ${median(a.map((x, k) => b[k]! / x)).toFixed(3)} | ${groupedSetBackwardError(p, there.grouped).toExponential(1)} | ${groupedSetBackwardError(p, here.grouped).toExponential(1)} | ${sameRoots(here, there) ? 'yes' : 'no'} |`,
       );
     }
     return [

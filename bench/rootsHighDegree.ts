@@ -13,7 +13,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { findRoots } from '../src/core/roots/index.ts';
-import { setBackwardError } from '../src/core/roots/setBackwardError.ts';
+import { groupedSetBackwardError } from '../src/core/roots/setBackwardError.ts';
 import { startNumpy } from './roots.ts';
 import { median, threadCpuSpan } from './timing.ts';
 
@@ -30,18 +30,6 @@ const FIXTURE = fileURLToPath(
 function processMs(): number {
   const u = process.cpuUsage();
   return (u.user + u.system) / 1000;
-}
-
-function setError(p: number[]): number {
-  const r = findRoots(p);
-  const re: number[] = [];
-  const im: number[] = [];
-  for (const g of r.grouped)
-    for (let m = 0; m < g.multiplicity; m++) {
-      re.push(g.re);
-      im.push(g.im);
-    }
-  return setBackwardError(p, re, im);
 }
 
 export async function benchRootsHighDegree(rounds = 5): Promise<string> {
@@ -65,7 +53,7 @@ export async function benchRootsHighDegree(rounds = 5): Promise<string> {
       }
       const [t, w, n] = [median(thread), median(whole), median(theirs)];
       rows.push(
-        `| ${c.name} | ${t.toFixed(0)} | ${w.toFixed(0)} | ${n.toFixed(0)} | ${(t / n).toFixed(2)} | ${(w / n).toFixed(2)} | ${setError(c.coefficients).toExponential(1)} | ${c.numpyBackwardError.toExponential(1)} |`,
+        `| ${c.name} | ${t.toFixed(0)} | ${w.toFixed(0)} | ${n.toFixed(0)} | ${(t / n).toFixed(2)} | ${(w / n).toFixed(2)} | ${groupedSetBackwardError(c.coefficients, findRoots(c.coefficients).grouped).toExponential(1)} | ${c.numpyBackwardError.toExponential(1)} |`,
       );
     }
   } finally {

@@ -6,7 +6,7 @@
 import type { Root } from '../types.ts';
 import { findRoots, type RootsResult } from './index.ts';
 import { inclusionDisks, type InclusionDisks } from './inclusion.ts';
-import { setBackwardError } from './setBackwardError.ts';
+import { groupedSetBackwardError } from './setBackwardError.ts';
 
 /**
  * A root whose certified error bound exceeds this fraction of max(1, |root|) is flagged uncertain: fewer
@@ -37,7 +37,6 @@ export function diagnoseRoots(
   p: ArrayLike<number>,
   found: RootsResult = findRoots(p),
 ): PolynomialDiagnostics {
-  const full = found.grouped.flatMap((g) => new Array<Root>(g.multiplicity).fill(g));
   const roots: RootDiagnostic[] = [];
   let first = 0;
   while (first < p.length && p[first] === 0) first++;
@@ -59,13 +58,7 @@ export function diagnoseRoots(
   }
   return {
     converged: found.converged,
-    setBackwardError: found.zeroPolynomial
-      ? 0
-      : setBackwardError(
-          p,
-          full.map((r) => r.re),
-          full.map((r) => r.im),
-        ),
+    setBackwardError: found.zeroPolynomial ? 0 : groupedSetBackwardError(p, found.grouped),
     roots,
   };
 }

@@ -8,6 +8,7 @@
  */
 import { ddAdd, ddMul } from './doubleDouble.ts';
 import { multiplyOutDd } from '../multiplyOut.ts';
+import type { Root } from '../types.ts';
 
 const tmp = new Float64Array(2);
 
@@ -67,6 +68,21 @@ export function setBackwardError(
     scale = Math.max(scale, Math.abs(c[first + k]!));
   }
   return worst / scale;
+}
+
+/**
+ * The set backward error of a grouped root list (findRoots' `grouped`: conjugates listed, a repeated root
+ * once with its multiplicity), each root taken as many times as its multiplicity.
+ */
+export function groupedSetBackwardError(c: ArrayLike<number>, grouped: readonly Root[]): number {
+  const re: number[] = [];
+  const im: number[] = [];
+  for (const g of grouped)
+    for (let m = 0; m < g.multiplicity; m++) {
+      re.push(g.re);
+      im.push(g.im);
+    }
+  return setBackwardError(c, re, im);
 }
 
 /** Whether mate[i] is the exact mirror of every upper root i. */
